@@ -48,7 +48,7 @@ final class YamlTreeReader {
             }
             if (p.nextToken() != null) {
                 throw new ScenarioException(file, line(p.currentTokenLocation()), "",
-                        "only one YAML document per file (found a second after '---')");
+                        "only one YAML document per file; a second one starts here");
             }
             return mapping;
         } catch (JsonProcessingException e) {
