@@ -100,7 +100,7 @@ final class Section {
         }
         YamlNode child = required(key);
         if (child instanceof YamlNode.Scalar s && s.type() == YamlNode.ScalarType.BOOLEAN) {
-            return Boolean.parseBoolean(s.text()) || "yes".equalsIgnoreCase(s.text()) || "on".equalsIgnoreCase(s.text());
+            return Boolean.parseBoolean(s.text());
         }
         throw typeError(child, "true or false");
     }

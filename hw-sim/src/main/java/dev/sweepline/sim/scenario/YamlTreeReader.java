@@ -66,7 +66,9 @@ final class YamlTreeReader {
             case START_ARRAY -> readSequence(p, path, line);
             case VALUE_NUMBER_INT, VALUE_NUMBER_FLOAT ->
                     new YamlNode.Scalar(path, line, p.getText(), YamlNode.ScalarType.NUMBER);
-            case VALUE_TRUE, VALUE_FALSE -> new YamlNode.Scalar(path, line, p.getText(), YamlNode.ScalarType.BOOLEAN);
+            // YAML 1.1 spells booleans many ways (yes, On, FALSE...); keep only the value.
+            case VALUE_TRUE -> new YamlNode.Scalar(path, line, "true", YamlNode.ScalarType.BOOLEAN);
+            case VALUE_FALSE -> new YamlNode.Scalar(path, line, "false", YamlNode.ScalarType.BOOLEAN);
             case VALUE_STRING -> new YamlNode.Scalar(path, line, p.getText(), YamlNode.ScalarType.TEXT);
             case VALUE_NULL -> new YamlNode.Scalar(path, line, "", YamlNode.ScalarType.NULL);
             default -> throw new ScenarioException(file, line, path, "unsupported YAML construct (" + token + ")");

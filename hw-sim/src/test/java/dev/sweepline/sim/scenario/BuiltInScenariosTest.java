@@ -10,7 +10,6 @@ import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
-import java.util.Iterator;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
@@ -227,9 +226,7 @@ class BuiltInScenariosTest {
 
     private static Map<String, Double> changes(JsonNode group) {
         Map<String, Double> m = new LinkedHashMap<>();
-        Iterator<Map.Entry<String, JsonNode>> it = group.fields();
-        while (it.hasNext()) {
-            var e = it.next();
+        for (var e : group.properties()) {
             m.put(e.getKey(), e.getValue().asDouble());
         }
         return m;
