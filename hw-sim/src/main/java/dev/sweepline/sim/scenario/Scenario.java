@@ -63,7 +63,10 @@ public final class Scenario {
         return distanceAu;
     }
 
-    /** Default run length, s (the bench may run shorter or longer; the plasma then stays as it ends). */
+    /**
+     * Default run length, s. The bench may run shorter or longer: past the end the events stay as they
+     * ended and the fluctuations go on.
+     */
     public double durationSeconds() {
         return durationSeconds;
     }

@@ -30,9 +30,13 @@ public final class ScenarioTimeline {
     ScenarioTimeline(ParameterTrack[] tracks, Fluctuations fluctuations, long seed) {
         this.tracks = tracks;
         this.fluctuations = fluctuations;
-        this.series = new OrnsteinUhlenbeckSeries[5];
+        double[] rms = {fluctuations.densityRelativeRms(), fluctuations.speedRelativeRms(),
+            fluctuations.temperatureRelativeRms(), fluctuations.flowAngleRmsDeg(), fluctuations.flowAngleRmsDeg()};
+        this.series = new OrnsteinUhlenbeckSeries[rms.length];
         for (int i = 0; i < series.length; i++) {
-            series[i] = new OrnsteinUhlenbeckSeries(seed, i, fluctuations.correlationSeconds());
+            // The stream number is the quantity's index, so adding a fluctuation to one quantity in a
+            // file leaves the others' histories for the same seed unchanged.
+            series[i] = rms[i] > 0 ? new OrnsteinUhlenbeckSeries(seed, i, fluctuations.correlationSeconds()) : null;
         }
     }
 
