@@ -1,0 +1,113 @@
+package dev.sweepline.sim.scenario;
+
+import java.util.Arrays;
+
+/**
+ * A stationary Ornstein-Uhlenbeck process of zero mean and unit variance, fixed by a seed and a
+ * stream number, evaluated on a grid of step tau/64 and linearly interpolated between grid points.
+ *
+ * <p>Grid values follow the exact update x[k+1] = a x[k] + sqrt(1 - a^2) g[k+1] with a = exp(-step/tau)
+ * and x[0] = g[0], so the variance is 1 and the autocorrelation exp(-lag/tau) at every grid lag
+ * (Gillespie 1996, Phys. Rev. E 54, "Exact numerical simulation of the Ornstein-Uhlenbeck process"
+ * [memory]). The Gaussian g[k] is a pure function of (seed, stream, k) (SplitMix64 mixing of a counter,
+ * Steele, Lea and Flood 2014 [memory], then Box-Muller), so any grid point can be recomputed from the
+ * nearest checkpoint: the series keeps one checkpoint per block of {@value #BLOCK} points and one cached
+ * block. Calls in time order cost one interpolation each (a block is filled once); calls in any other
+ * order give the same values, at the cost of refilling a block.
+ *
+ * <p>Linear interpolation lowers the variance between grid points by at most (1 - a) / 2, 0.8 % at
+ * step = tau/64; averaged over a step the rms is 0.9974 of the configured value.
+ */
+final class OrnsteinUhlenbeckSeries {
+    /** Grid points per correlation time. */
+    static final int STEPS_PER_TAU = 64;
+    /** Grid points per block. */
+    static final int BLOCK = 1024;
+    private static final long GOLDEN_GAMMA = 0x9E3779B97F4A7C15L;
+
+    private final long key;
+    private final double stepSeconds;
+    private final double a;
+    private final double b;
+    private double[] checkpoints = new double[16];
+    private int checkpointCount;
+    private final double[] block = new double[BLOCK + 1];
+    private long cachedBlock = -1;
+
+    /** The process of correlation time {@code tauSeconds} for {@code seed} and stream {@code stream}. */
+    OrnsteinUhlenbeckSeries(long seed, int stream, double tauSeconds) {
+        this.key = mix64(mix64(seed) + stream * GOLDEN_GAMMA);
+        this.stepSeconds = tauSeconds / STEPS_PER_TAU;
+        this.a = Math.exp(-1.0 / STEPS_PER_TAU);
+        this.b = Math.sqrt(1.0 - a * a);
+        checkpoints[0] = gaussian(0);
+        checkpointCount = 1;
+    }
+
+    /** The grid step, s. */
+    double stepSeconds() {
+        return stepSeconds;
+    }
+
+    /** x(t); times before 0 read x(0). */
+    double at(double seconds) {
+        double pos = Math.max(seconds, 0.0) / stepSeconds;
+        long k = (long) pos;
+        double frac = pos - k;
+        long blockIndex = k / BLOCK;
+        int i = (int) (k - blockIndex * BLOCK);
+        load(blockIndex);
+        return block[i] + frac * (block[i + 1] - block[i]);
+    }
+
+    /** x at grid point {@code k}. */
+    double atGridPoint(long k) {
+        long blockIndex = k / BLOCK;
+        load(blockIndex);
+        return block[(int) (k - blockIndex * BLOCK)];
+    }
+
+    private void load(long blockIndex) {
+        if (blockIndex == cachedBlock) {
+            return;
+        }
+        while (checkpointCount <= blockIndex) {
+            fill(checkpointCount - 1);
+        }
+        fill(blockIndex);
+    }
+
+    /** Computes block {@code blockIndex} from its checkpoint, appending the next checkpoint if new. */
+    private void fill(long blockIndex) {
+        long k0 = blockIndex * BLOCK;
+        double x = checkpoints[(int) blockIndex];
+        block[0] = x;
+        for (int i = 1; i <= BLOCK; i++) {
+            x = a * x + b * gaussian(k0 + i);
+            block[i] = x;
+        }
+        cachedBlock = blockIndex;
+        if (checkpointCount == blockIndex + 1) {
+            if (checkpointCount == checkpoints.length) {
+                checkpoints = Arrays.copyOf(checkpoints, checkpoints.length * 2);
+            }
+            checkpoints[checkpointCount++] = x;
+        }
+    }
+
+    /** A standard normal value that depends only on (key, k): Box-Muller on two mixed counters. */
+    private double gaussian(long k) {
+        long h1 = mix64(key + (2 * k + 1) * GOLDEN_GAMMA);
+        long h2 = mix64(key + (2 * k + 2) * GOLDEN_GAMMA);
+        double u1 = ((h1 >>> 11) + 1) * 0x1.0p-53; // in (0, 1], so the log is finite
+        double u2 = (h2 >>> 11) * 0x1.0p-53;
+        return Math.sqrt(-2.0 * Math.log(u1)) * Math.cos(2.0 * Math.PI * u2);
+    }
+
+    /** The SplitMix64 output function (Steele, Lea and Flood 2014 [memory]). */
+    static long mix64(long z) {
+        z = (z ^ (z >>> 30)) * 0xBF58476D1CE4E5B9L;
+        z = (z ^ (z >>> 27)) * 0x94D049BB133111EBL;
+        return z ^ (z >>> 31);
+    }
+}

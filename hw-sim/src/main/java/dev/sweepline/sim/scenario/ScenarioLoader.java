@@ -1,0 +1,122 @@
+package dev.sweepline.sim.scenario;
+
+import java.io.IOException;
+import java.io.InputStream;
+import java.io.UncheckedIOException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.NoSuchFileException;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+
+/**
+ * Finds and loads scenarios: files given by path, and the built-ins shipped in the jar under
+ * {@code scenarios/}, listed by {@code scenarios/index.txt} (a jar cannot list a directory).
+ */
+public final class ScenarioLoader {
+    /** Resource folder of the built-ins. */
+    static final String RESOURCE_DIR = "scenarios/";
+    /** The index of built-in names, one a line; '#' starts a comment. */
+    static final String INDEX = RESOURCE_DIR + "index.txt";
+    /** The scenario a run uses when none is named. */
+    static final String DEFAULT_NAME = "quiet-perihelion";
+
+    private ScenarioLoader() {
+    }
+
+    /**
+     * Loads the scenario in {@code file}.
+     *
+     * @throws ScenarioException if it cannot be read or is not a valid scenario
+     */
+    public static Scenario load(Path file) {
+        String display = file.toString();
+        String text;
+        try {
+            text = Files.readString(file, StandardCharsets.UTF_8);
+        } catch (NoSuchFileException e) {
+            throw new ScenarioException(display, 0, "", "no such file", e);
+        } catch (IOException e) {
+            throw new ScenarioException(display, 0, "", "cannot read: " + e, e);
+        }
+        return parse(text, display);
+    }
+
+    /**
+     * Parses scenario text; {@code file} names it in errors.
+     *
+     * @throws ScenarioException if it is not a valid scenario
+     */
+    public static Scenario parse(String text, String file) {
+        return ScenarioReader.read(YamlTreeReader.read(text, file), file);
+    }
+
+    /**
+     * The built-in scenario {@code name}.
+     *
+     * @throws ScenarioException if there is none of that name (the message lists the built-ins)
+     */
+    public static Scenario builtIn(String name) {
+        if (!builtInNames().contains(name)) {
+            throw unknown(name);
+        }
+        String resource = RESOURCE_DIR + name + ".yaml";
+        Scenario s = parse(readResource(resource), resource);
+        if (!s.name().equals(name)) {
+            throw new ScenarioException(resource, 0, "name", "a built-in's name must match its file, got '" + s.name() + "'");
+        }
+        return s;
+    }
+
+    /** The names of the built-in scenarios, in index order. */
+    public static List<String> builtInNames() {
+        List<String> names = new ArrayList<>();
+        for (String line : readResource(INDEX).split("\n")) {
+            int hash = line.indexOf('#');
+            String name = (hash < 0 ? line : line.substring(0, hash)).strip();
+            if (!name.isEmpty()) {
+                names.add(name);
+            }
+        }
+        return List.copyOf(names);
+    }
+
+    /** The name of the default scenario, a built-in. */
+    public static String defaultName() {
+        return DEFAULT_NAME;
+    }
+
+    /**
+     * A built-in by name, or else the file at the path {@code nameOrPath}. A built-in name wins over a
+     * file of the same name in the working directory; write {@code ./name} for the file.
+     *
+     * @throws ScenarioException if it is neither (the message lists the built-ins) or is invalid
+     */
+    public static Scenario resolve(String nameOrPath) {
+        if (builtInNames().contains(nameOrPath)) {
+            return builtIn(nameOrPath);
+        }
+        Path path = Path.of(nameOrPath);
+        if (Files.isRegularFile(path)) {
+            return load(path);
+        }
+        throw unknown(nameOrPath);
+    }
+
+    private static ScenarioException unknown(String name) {
+        return new ScenarioException(name, 0, "", "no built-in scenario of that name and no such file; built-ins: "
+                + String.join(", ", builtInNames()));
+    }
+
+    private static String readResource(String resource) {
+        try (InputStream in = ScenarioLoader.class.getClassLoader().getResourceAsStream(resource)) {
+            if (in == null) {
+                throw new ScenarioException(resource, 0, "", "built-in resource missing from the build");
+            }
+            return new String(in.readAllBytes(), StandardCharsets.UTF_8);
+        } catch (IOException e) {
+            throw new UncheckedIOException(e);
+        }
+    }
+}
