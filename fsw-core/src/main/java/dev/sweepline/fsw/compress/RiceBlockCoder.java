@@ -5,7 +5,9 @@ package dev.sweepline.fsw.compress;
  * sequence), second extension and no compression, the option with the fewest bits, ID included
  * (CCSDS 121.0-B, code selection), and writes its coded data set.
  *
- * <p>Ties go to split-sample with the smallest k, then second extension, then no compression. The
+ * <p>On a tie no compression wins over second extension, and both over split-sample; among split
+ * positions the smallest k wins. That is the order the reference coders behind standards.md's small
+ * vectors and the official test set follow, so our streams match theirs byte for byte there. The
  * split length as a function of k is convex (increasing k by one costs one bit per sample and saves
  * the sum of ceil((d &gt;&gt; k) / 2), which does not grow with k), so a local search from an
  * estimate of k finds the best k in two or three passes over the block. Allocation-free;
@@ -41,20 +43,22 @@ final class RiceBlockCoder {
     void encode(long[] mapped, boolean reference, long refSample, BitWriter writer) {
         int first = reference ? 1 : 0;
         int coded = blockSize - first;
-        long bestBits = idBits + (long) coded * bitsPerSample;
+        long uncompressedBits = idBits + (long) coded * bitsPerSample;
+        long bestBits = Long.MAX_VALUE;
         int option = OPTION_NO_COMPRESSION;
         int bestK = 0;
         if (hasSplit) {
             bestK = bestSplitK(mapped, first, coded);
-            long splitBits = idBits + splitDataBits(mapped, first, coded, bestK);
-            if (splitBits <= bestBits) {
-                bestBits = splitBits;
-                option = OPTION_SPLIT;
-            }
+            bestBits = idBits + splitDataBits(mapped, first, coded, bestK);
+            option = OPTION_SPLIT;
         }
-        long seBits = secondExtensionBits(mapped, bestBits);
-        if (seBits < bestBits || (seBits == bestBits && option == OPTION_NO_COMPRESSION)) {
+        long seBits = secondExtensionBits(mapped, Math.min(bestBits, uncompressedBits));
+        if (seBits <= bestBits) {
+            bestBits = seBits;
             option = OPTION_SECOND_EXTENSION;
+        }
+        if (uncompressedBits <= bestBits) {
+            option = OPTION_NO_COMPRESSION;
         }
         switch (option) {
             case OPTION_SPLIT:
