@@ -18,7 +18,7 @@ import net.jqwik.api.Provide;
  * (n = 1..32, J = 8..64, r, restricted set for n &lt;= 4, preprocessing on and off). Lossless, so
  * equality is exact. Seeds are recorded in the annotations so a failure replays.
  */
-class RiceRoundTripProperties {
+class RiceRoundTripPropertiesTest {
 
     /** Data shapes that drive every code option. */
     enum Shape {
