@@ -1,0 +1,77 @@
+package dev.sweepline.ground.rice;
+
+/**
+ * Reads an MSB-first bit stream from a byte array region. Reads never throw: past the end they
+ * return {@link #TRUNCATED} and leave the position where the read started.
+ */
+final class BitReader {
+    /** Result of a read that ran past the end of the region. */
+    static final long TRUNCATED = -1;
+    /** Result of a fundamental-sequence read with more zeros than its limit. */
+    static final long TOO_LONG = -2;
+
+    private final byte[] data;
+    private final int offset;
+    private final long endBit;
+    private long position;
+
+    BitReader(byte[] data, int offset, int length) {
+        this.data = data;
+        this.offset = offset;
+        this.endBit = (long) length * 8;
+    }
+
+    /** Bit position from the start of the region. */
+    long position() {
+        return position;
+    }
+
+    /** Reads an unsigned {@code count}-bit field, 0..32 bits, or {@link #TRUNCATED}. */
+    long read(int count) {
+        if (endBit - position < count) {
+            return TRUNCATED;
+        }
+        long value = 0;
+        int left = count;
+        while (left > 0) {
+            int bitInByte = (int) (position & 7);
+            int available = 8 - bitInByte;
+            int take = Math.min(available, left);
+            int current = data[offset + (int) (position >>> 3)] & 0xFF;
+            int bits = (current >>> (available - take)) & ((1 << take) - 1);
+            value = (value << take) | bits;
+            position += take;
+            left -= take;
+        }
+        return value;
+    }
+
+    /**
+     * Reads a fundamental sequence codeword (zeros ended by a one) and returns the number of zeros,
+     * or {@link #TRUNCATED} if the region ends first, or {@link #TOO_LONG} once more than
+     * {@code maxZeros} zeros are seen (the position then stays at the codeword's start).
+     */
+    long readFundamentalSequence(long maxZeros) {
+        long start = position;
+        long p = position;
+        while (p < endBit) {
+            int bitInByte = (int) (p & 7);
+            int current = (data[offset + (int) (p >>> 3)] << bitInByte) & 0xFF;
+            if (current == 0) {
+                p += 8 - bitInByte;
+            } else {
+                long ones = p + Integer.numberOfLeadingZeros(current) - 24;
+                long zeros = ones - start;
+                if (zeros > maxZeros) {
+                    return TOO_LONG;
+                }
+                position = ones + 1;
+                return zeros;
+            }
+            if (p - start > maxZeros) {
+                return TOO_LONG;
+            }
+        }
+        return TRUNCATED;
+    }
+}

@@ -1,0 +1,254 @@
+package dev.sweepline.ground.rice;
+
+import java.util.Arrays;
+
+/**
+ * Ground decoder for CCSDS 121.0-B (adaptive Rice coder) streams, written from the standard and the
+ * telemetry ICD: reads coded data sets (option ID, reference sample, data), expands zero-block runs,
+ * undoes the unit-delay predictor and mapper, and writes unsigned samples (for n = 32 the int's
+ * bits are the unsigned sample).
+ *
+ * <pre>
+ *   ID (idBits)      meaning                    then
+ *   0 + '0'          zero-block run             [ref] FS(v): v = 0..3 -&gt; v+1 blocks, 4 -&gt; rest of
+ *                                               segment (64 blocks) or interval, v &gt;= 5 -&gt; v blocks
+ *   0 + '1'          second extension           [ref] J/2 x FS(gamma); first pair of a reference block has a = 0
+ *   1                fundamental sequence       [ref] FS(d) per sample
+ *   k + 1            split-sample k             [ref] FS(d &gt;&gt; k) per sample, then the k LSBs per sample
+ *   all ones         no compression             [ref] n bits per sample
+ * </pre>
+ *
+ * <p>Bad input never throws: {@link #decode} returns a {@link DecodeResult} with the reason and the
+ * bit position. Threading: one decode at a time per instance.
+ */
+public final class RiceDecoder {
+    private static final long ROS_CODE = 4;
+    private static final long MAX_ZERO_RUN_FS = RiceSettings.SEGMENT_BLOCKS;
+
+    private final RiceSettings settings;
+    private final int n;
+    private final int blockSize;
+    private final int idBits;
+    private final long maxSample;
+    private final long allOnesId;
+    private final long maxGamma;
+    private final long[] mapped;
+
+    private BitReader reader;
+    private int[] out;
+    private int wanted;
+    private int produced;
+    private long previous;
+    private DecodeStatus failure;
+    private long failurePosition;
+
+    /** A decoder for streams coded with {@code settings}. */
+    public RiceDecoder(RiceSettings settings) {
+        this.settings = settings;
+        this.n = settings.bitsPerSample();
+        this.blockSize = settings.blockSize();
+        this.idBits = settings.idBits();
+        this.maxSample = settings.maxSample();
+        this.allOnesId = (1L << idBits) - 1;
+        this.maxGamma = SecondExtension.maxGamma(n);
+        this.mapped = new long[blockSize];
+    }
+
+    /** The settings this decoder reads. */
+    public RiceSettings settings() {
+        return settings;
+    }
+
+    /**
+     * Decodes {@code sampleCount} samples from {@code in[offset .. offset+length)} into
+     * {@code out[0 .. sampleCount)}. Fill bits after the last coded data set are ignored.
+     */
+    public DecodeResult decode(byte[] in, int offset, int length, int sampleCount, int[] out) {
+        if (in == null || out == null || offset < 0 || length < 0 || offset > in.length - length
+                || sampleCount < 0 || sampleCount > out.length) {
+            return new DecodeResult(DecodeStatus.BAD_ARGUMENTS, 0, 0);
+        }
+        this.reader = new BitReader(in, offset, length);
+        this.out = out;
+        this.wanted = sampleCount;
+        this.produced = 0;
+        this.previous = 0;
+        this.failure = null;
+        int blocks = (int) (((long) sampleCount + blockSize - 1) / blockSize);
+        int block = 0;
+        while (block < blocks && failure == null) {
+            block += decodeCds(block, blocks - block);
+        }
+        DecodeResult result = failure == null
+                ? new DecodeResult(DecodeStatus.OK, produced, reader.position())
+                : new DecodeResult(failure, produced, failurePosition);
+        this.reader = null;
+        this.out = null;
+        return result;
+    }
+
+    /** Decodes one coded data set starting at {@code block}; returns the blocks it covered. */
+    private int decodeCds(int block, int blocksLeft) {
+        int intervalBlocks = settings.referenceIntervalBlocks();
+        int inInterval = block % intervalBlocks;
+        boolean reference = settings.preprocessed() && inInterval == 0;
+        long idPosition = reader.position();
+        long id = reader.read(idBits);
+        if (id < 0) {
+            return fail(DecodeStatus.TRUNCATED, idPosition);
+        }
+        if (id == 0) {
+            long extension = reader.read(1);
+            if (extension < 0) {
+                return fail(DecodeStatus.TRUNCATED, idPosition);
+            }
+            long refSample = reference ? readReference() : 0;
+            if (failure != null) {
+                return 0;
+            }
+            if (extension == 0) {
+                int remaining = Math.min(RiceSettings.SEGMENT_BLOCKS - inInterval % RiceSettings.SEGMENT_BLOCKS,
+                        intervalBlocks - inInterval);
+                return zeroRun(reference, refSample, remaining, blocksLeft);
+            }
+            return secondExtension(reference, refSample) ? 1 : 0;
+        }
+        if (id == allOnesId) {
+            long refSample = reference ? readReference() : 0;
+            return failure == null && noCompression(reference, refSample) ? 1 : 0;
+        }
+        int k = (int) id - 1;
+        if (k >= n) {
+            return fail(DecodeStatus.INVALID_OPTION_ID, idPosition);
+        }
+        long refSample = reference ? readReference() : 0;
+        return failure == null && split(reference, refSample, k) ? 1 : 0;
+    }
+
+    private long readReference() {
+        long position = reader.position();
+        long value = reader.read(n);
+        if (value < 0) {
+            fail(DecodeStatus.TRUNCATED, position);
+        }
+        return value;
+    }
+
+    private int zeroRun(boolean reference, long refSample, int remaining, int blocksLeft) {
+        long position = reader.position();
+        long code = reader.readFundamentalSequence(MAX_ZERO_RUN_FS);
+        if (code == BitReader.TRUNCATED) {
+            return fail(DecodeStatus.TRUNCATED, position);
+        }
+        if (code == BitReader.TOO_LONG) {
+            return fail(DecodeStatus.FS_TOO_LONG, position);
+        }
+        long runBlocks;
+        if (code == ROS_CODE) {
+            runBlocks = remaining;
+        } else {
+            runBlocks = code < ROS_CODE ? code + 1 : code;
+            if (runBlocks > remaining) {
+                return fail(DecodeStatus.ZERO_RUN_BEYOND_SEGMENT, position);
+            }
+        }
+        // a run may reach past the last data block only into padding the encoder added; clip it
+        int blocks = (int) Math.min(runBlocks, blocksLeft);
+        Arrays.fill(mapped, 0);
+        for (int b = 0; b < blocks; b++) {
+            emitBlock(reference && b == 0, refSample, position);
+        }
+        return blocks;
+    }
+
+    private boolean secondExtension(boolean reference, long refSample) {
+        for (int i = 0; i < blockSize; i += 2) {
+            long position = reader.position();
+            long gamma = reader.readFundamentalSequence(maxGamma);
+            if (gamma < 0) {
+                fail(gamma == BitReader.TRUNCATED ? DecodeStatus.TRUNCATED : DecodeStatus.FS_TOO_LONG, position);
+                return false;
+            }
+            long sum = SecondExtension.pairSum(gamma);
+            long second = gamma - SecondExtension.triangle(sum);
+            long first = sum - second;
+            if (reference && i == 0 && first != 0) {
+                fail(DecodeStatus.VALUE_OUT_OF_RANGE, position); // the reference slot is coded as 0
+                return false;
+            }
+            mapped[i] = first;
+            mapped[i + 1] = second;
+        }
+        return emitBlock(reference, refSample, reader.position());
+    }
+
+    private boolean noCompression(boolean reference, long refSample) {
+        for (int i = reference ? 1 : 0; i < blockSize; i++) {
+            long position = reader.position();
+            long value = reader.read(n);
+            if (value < 0) {
+                fail(DecodeStatus.TRUNCATED, position);
+                return false;
+            }
+            mapped[i] = value;
+        }
+        return emitBlock(reference, refSample, reader.position());
+    }
+
+    private boolean split(boolean reference, long refSample, int k) {
+        int first = reference ? 1 : 0;
+        long maxHigh = maxSample >>> k;
+        for (int i = first; i < blockSize; i++) {
+            long position = reader.position();
+            long high = reader.readFundamentalSequence(maxHigh);
+            if (high < 0) {
+                fail(high == BitReader.TRUNCATED ? DecodeStatus.TRUNCATED : DecodeStatus.FS_TOO_LONG, position);
+                return false;
+            }
+            mapped[i] = high << k;
+        }
+        if (k > 0) {
+            for (int i = first; i < blockSize; i++) {
+                long position = reader.position();
+                long low = reader.read(k);
+                if (low < 0) {
+                    fail(DecodeStatus.TRUNCATED, position);
+                    return false;
+                }
+                mapped[i] |= low;
+            }
+        }
+        return emitBlock(reference, refSample, reader.position());
+    }
+
+    /** Turns the block's mapped values into samples; writes those the caller asked for. */
+    private boolean emitBlock(boolean reference, long refSample, long position) {
+        for (int i = 0; i < blockSize; i++) {
+            long x;
+            if (reference && i == 0) {
+                x = refSample;
+            } else if (settings.preprocessed()) {
+                x = UnitDelayReconstructor.sample(mapped[i], previous, maxSample);
+            } else {
+                x = mapped[i] <= maxSample ? mapped[i] : UnitDelayReconstructor.INVALID;
+            }
+            if (x < 0) {
+                fail(DecodeStatus.VALUE_OUT_OF_RANGE, position);
+                return false;
+            }
+            previous = x;
+            if (produced < wanted) {
+                out[produced++] = (int) x;
+            }
+        }
+        return true;
+    }
+
+    private int fail(DecodeStatus status, long position) {
+        if (failure == null) {
+            failure = status;
+            failurePosition = position;
+        }
+        return 0;
+    }
+}

@@ -1,0 +1,35 @@
+/**
+ * CCSDS 121.0-B lossless decompression (adaptive Rice coder), the ground decoder.
+ *
+ * <h2>What it does</h2>
+ * {@link dev.sweepline.ground.rice.RiceDecoder} reads a stream coded with a given
+ * {@link dev.sweepline.ground.rice.RiceSettings} (n, J, r, preprocessing, restricted set) and writes
+ * the samples. It was written from standards.md and CCSDS 121.0-B, independently of the flight
+ * encoder, and depends on no project module: golden vectors and cross-decoding keep the two honest.
+ *
+ * <h2>Decisions</h2>
+ * <ul>
+ *   <li>The caller gives the sample count; the decoder decodes whole blocks and writes only the samples asked for.</li>
+ *   <li>ROS expands to the end of the 64-block segment or of the reference interval, whichever is first,
+ *       clipped at the last data block; an explicit run longer than that is an error.</li>
+ *   <li>Every option ID of the ID width is accepted except split-sample with k &gt;= n, which no
+ *       encoder has a use for (it is longer than no compression).</li>
+ *   <li>Each fundamental-sequence read has a limit - 64 for a zero run, x_max &gt;&gt; k for a split sample,
+ *       the largest valid pair code for second extension - so a stream of zeros is refused quickly.</li>
+ * </ul>
+ *
+ * <h2>Requirements and how each is verified</h2>
+ * <ol>
+ *   <li>G1 Decodes the official CCSDS 121.0-B test set bit-exactly (72 streams, n = 1..32, basic and
+ *       restricted): {@code OfficialVectorsDecodeTest}.</li>
+ *   <li>G2 Decodes the small vectors of standards.md: {@code RiceDecoderSmallVectorsTest}.</li>
+ *   <li>G3 Decodes the reference coder aec's streams: hw-sim {@code AecCrossCheckTest}, {@code ZeroRunRoundTripTest}.</li>
+ *   <li>G4 Bad input is a {@link dev.sweepline.ground.rice.DecodeResult} with a
+ *       {@link dev.sweepline.ground.rice.DecodeStatus} and a bit position, never an exception:
+ *       truncation at every byte of every official stream, crafted faults, 2000 random garbage
+ *       streams: {@code RiceDecoderBadInputTest}.</li>
+ * </ol>
+ *
+ * <p>Threading: one decode at a time per decoder instance.
+ */
+package dev.sweepline.ground.rice;
