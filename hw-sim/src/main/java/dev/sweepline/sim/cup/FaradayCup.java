@@ -19,7 +19,8 @@ import java.util.List;
  * the acceptance are those of a narrow beam. A population that does not flow into the cup
  * ({@code vz <= 0}) gives no current. Every species responds with its own charge (alphas 2e).
  *
- * <p>Threading: not thread-safe (scratch arrays and the collector's cache). Allocation-free.
+ * <p>Threading: not thread-safe (scratch arrays and the collector's cache). Allocates nothing itself
+ * (the erf evaluations of {@link ConvectedMaxwellian} do, 64 B per population).
  */
 public final class FaradayCup {
     private final CupGeometry geometry;

@@ -30,6 +30,8 @@ public final class SplitCollector {
     private double cachedSy = Double.NaN;
 
     /**
+     * A collector of radius {@code collectorRadiusM} under an aperture image of radius {@code imageRadiusM}.
+     *
      * @param imageRadiusM     aperture image radius (the aperture radius), metres
      * @param collectorRadiusM collector radius, metres
      */

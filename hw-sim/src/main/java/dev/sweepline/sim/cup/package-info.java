@@ -21,7 +21,7 @@
  *       the collector (physics.md P1 at 10 and 20 deg), falls with the acceptance beyond, and is zero
  *       past the cutoff angle; alphas respond with charge 2e.</li>
  *   <li>CUP-4: symmetric flows give symmetric quadrant currents.</li>
- *   <li>CUP-5: allocation-free per call (the collector caches the last shift).</li>
+ *   <li>CUP-5: cheap per call; the split collector allocates nothing and caches the last shift.</li>
  * </ol>
  *
  * <h2>How verified</h2>

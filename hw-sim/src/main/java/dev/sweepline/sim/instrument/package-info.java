@@ -22,7 +22,8 @@
  *   <li>INS-4: the reply echoes the sequence, reports the range actually used and the monitor code;
  *       saturation is flagged; the return value is start + cmd.durationMicros().</li>
  *   <li>INS-5: the recovered current (counts to amperes) agrees with the truth within the noise.</li>
- *   <li>INS-6: a few microseconds per step, no allocation.</li>
+ *   <li>INS-6: a few microseconds per step; no allocation of its own (measured: ~0.8 us and 128 B per
+ *       step for two populations, all of it inside Hipparchus {@code Erf}).</li>
  * </ol>
  *
  * <h2>How verified</h2>

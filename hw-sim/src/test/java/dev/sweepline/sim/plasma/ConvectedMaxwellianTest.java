@@ -31,7 +31,7 @@ class ConvectedMaxwellianTest {
         double[] speeds = {250e3, 400e3, 700e3};
         double[] widths = {20e3, 40.631e3, 100e3};
         double[][] windowsInW = {{-3, -2}, {-1, 0.5}, {-0.1, 0.05}, {0.5, 3}, {2, 3}, {8, 9}, {15, 15.3}, {20, 21},
-            {-4.5, -4}, {-12, -1.5}};
+            {-4.5, -4}, {-12, -1.5}, {-9, -8.5}, {-20, -19}};
         List<Arguments> cases = new ArrayList<>();
         for (double n : densities) {
             for (double u : speeds) {
