@@ -1,0 +1,32 @@
+package dev.sweepline.sim.hv;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertNotEquals;
+
+import dev.sweepline.fsw.link.InstrumentConstants;
+import org.junit.jupiter.api.Test;
+
+class HvCalibrationTest {
+
+    @Test
+    void shouldBeCloseToButNotAtTheNominalScale() {
+        // brief: demo gain +0.15 %, offset -0.8 V against InstrumentConstants' nominal 0.1 V/code
+        HvCalibration demo = HvCalibration.demo();
+        assertEquals(0.1 * 1.0015, demo.voltsPerCode(), 1e-15);
+        assertEquals(-0.8, demo.offsetVolts(), 0.0);
+        assertNotEquals(HvCalibration.nominal().volts(60000), demo.volts(60000));
+        // code 60000 is nominally 6000 V (InstrumentConstants); the demo unit gives 6000*1.0015 - 0.8 = 6008.2 V
+        assertEquals(6008.2, demo.volts(60000), 1e-9);
+    }
+
+    @Test
+    void shouldRoundTripEveryCodeAboveTheOffset() {
+        // codes at and above ceil(0.8 / 0.10015) = 8 map to non-negative volts; the inverse must return the code
+        HvCalibration demo = HvCalibration.demo();
+        for (int code = 8; code <= InstrumentConstants.DAC_MAX_CODE; code++) {
+            assertEquals(code, demo.code(demo.volts(code)));
+        }
+        assertEquals(0, demo.code(-100)); // clamps below
+        assertEquals(InstrumentConstants.DAC_MAX_CODE, demo.code(1e6)); // clamps above
+    }
+}
