@@ -53,6 +53,7 @@ public final class Executive {
     private long retries;
     private long sendRefusals;
     private long safeEntries;
+    private long abandonedSteps;
 
     /** An executive with the default margin and retry count. */
     public Executive(InstrumentLink link, SweepScheduler scheduler) {
@@ -83,6 +84,15 @@ public final class Executive {
     public int doWork(long nowMicros) {
         lastNowMicros = nowMicros;
         int work = 0;
+        if (outstanding && !scheduler.awaitingReply()) {
+            // a mode change (SAFE, or a commanded mode) abandoned the step: never re-send it; an
+            // unsent one is dropped at once, a sent one may still answer until its deadline
+            if (!linkAccepted || nowMicros - deadlineMicros > 0) {
+                outstanding = false;
+                abandonedSteps++;
+                work++;
+            }
+        }
         if (outstanding) {
             if (!linkAccepted) {
                 work += trySend(nowMicros);
@@ -224,6 +234,11 @@ public final class Executive {
     /** Times the link refused a send (busy or down). */
     public long sendRefusals() {
         return sendRefusals;
+    }
+
+    /** Steps dropped because the scheduler abandoned them (mode change while in flight). */
+    public long abandonedSteps() {
+        return abandonedSteps;
     }
 
     /** Times the executive put the scheduler in SAFE for a link time-out. */

@@ -27,7 +27,11 @@
  *     <i>ExecutiveTest.shouldGoSafeAfterBoundedRetries, shouldNotSendInSafeWithMockLink.</i></li>
  * <li><b>E6</b> A send the link refuses is offered again next cycle, within the same deadline.
  *     <i>ExecutiveTest.shouldRetrySendRefusedByLink.</i></li>
- * <li><b>E7</b> The cycle allocates nothing; nextWakeMicros tells the host when to call again (the
+ * <li><b>E7</b> A step the scheduler abandoned (a mode change while it was in flight, e.g. commanded
+ *     SAFE) is never re-sent: unsent, it is dropped at once; sent, its reply may still come until the
+ *     deadline (the scheduler ignores it), then it is dropped (abandonedSteps).
+ *     <i>ExecutiveTest.shouldNotResendStepAbandonedBySafeCommand.</i></li>
+ * <li><b>E8</b> The cycle allocates nothing; nextWakeMicros tells the host when to call again (the
  *     expected reply time, then the first instant past the deadline, Long.MAX_VALUE when idle in SAFE).
  *     <i>ExecutiveTest.shouldAllocateNothingPerCycle, shouldRunClosedLoopWithoutErrors.</i></li>
  * </ol>

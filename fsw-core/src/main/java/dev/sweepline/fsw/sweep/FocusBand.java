@@ -49,11 +49,6 @@ final class FocusBand {
         return last;
     }
 
-    /** Refined peak the band was chosen from, Q8 windows. */
-    int referencePeakQ8() {
-        return referencePeakQ8;
-    }
-
     /** Chooses the band from an analysed spectrum with a valid peak, in a table of {@code windowCount}. */
     void choose(Spectrum s, int windowCount) {
         int centre = (s.peakWindowQ8() + 128) >> 8;

@@ -105,7 +105,7 @@
  * <li>Collapse and jump compare with the peak of the previous accepted focus (or survey) sweep, so slow
  *     trends are tracked, not flagged.</li>
  * <li>The parabola is fitted to the linear current, not its logarithm (no integer log on the step
- *     path); on the 1 AU spectrum it agrees with a floating-point parabola to 0.01 window.</li>
+ *     path); on the 1 AU spectrum it agrees with a floating-point parabola to about 0.01 window.</li>
  * <li>A step the executive abandons (SAFE, or a new nextStep before its reply) is left missing; a
  *     sweep whose last reply never came is closed at the next nextStep.</li>
  * </ul>

@@ -141,6 +141,20 @@ class ExecutiveTest {
     }
 
     @Test
+    void shouldNotResendStepAbandonedBySafeCommand() {
+        link.dead = true;
+        exec.doWork(0);
+        scheduler.requestMode(SweepMode.SAFE, 10); // ground command while the step is in flight
+        exec.doWork(FIRST_STEP_MICROS + MARGIN); // at the deadline: the reply could still come
+        assertTrue(exec.outstanding());
+        exec.doWork(FIRST_STEP_MICROS + MARGIN + 1);
+        assertFalse(exec.outstanding());
+        assertEquals(1, exec.stepsSent()); // no re-send with HV on after SAFE
+        assertEquals(0, exec.retries());
+        assertEquals(1, exec.abandonedSteps());
+    }
+
+    @Test
     void shouldRetrySendRefusedByLink() {
         link.refuseNext = 2;
         exec.doWork(0);
