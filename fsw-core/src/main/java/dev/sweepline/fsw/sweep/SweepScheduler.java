@@ -22,18 +22,10 @@ public final class SweepScheduler {
 
     private final SweepListener listener;
 
-    private final int[] dacLow = new int[WindowTable.CAPACITY];
-    private final int[] dacHigh = new int[WindowTable.CAPACITY];
-    private final int[] centreCode = new int[WindowTable.CAPACITY];
-    private int windowCount;
-    private final int[] pendingLow = new int[WindowTable.CAPACITY];
-    private final int[] pendingHigh = new int[WindowTable.CAPACITY];
-    private int pendingCount;
-    private boolean tablePending;
-
-    private final SweepParameters params = new SweepParameters();
-    private final SweepParameters pendingParams = new SweepParameters();
-    private boolean paramsPending;
+    private final ActiveConfiguration config;
+    private final int[] dacLow;
+    private final int[] dacHigh;
+    private final SweepParameters params;
 
     private final GainPredictor gain = new GainPredictor();
     private final PeakFinder peakFinder;
@@ -70,11 +62,13 @@ public final class SweepScheduler {
             throw new IllegalArgumentException("sweep parameters refused: " + TableStatus.name(status));
         }
         this.listener = listener == null ? SweepListener.NONE : listener;
-        this.params.copyFrom(params);
-        this.peakFinder = new PeakFinder(centreCode, this.params);
-        this.band = new FocusBand(centreCode, this.params);
-        copyTable(table);
-        applyTable();
+        this.config = new ActiveConfiguration(table, params);
+        this.dacLow = config.dacLow;
+        this.dacHigh = config.dacHigh;
+        this.params = config.params;
+        this.peakFinder = new PeakFinder(config.centreCode, this.params);
+        this.band = new FocusBand(config.centreCode, this.params);
+        gain.reset(config.windowCount());
         gain.configure(this.params);
     }
 
@@ -168,7 +162,7 @@ public final class SweepScheduler {
         switch (mode) {
             case SURVEY:
                 first = 0;
-                last = windowCount - 1;
+                last = config.windowCount() - 1;
                 break;
             case FOCUS:
                 first = band.first();
@@ -209,7 +203,7 @@ public final class SweepScheduler {
                 break;
             case FOCUS:
                 focusSweepsSinceSurvey++;
-                int lost = band.lossOfLock(done, windowCount);
+                int lost = band.lossOfLock(done, config.windowCount());
                 if (lost != NONE) {
                     changeMode(SweepMode.SURVEY, lost, nowMicros);
                 } else if (focusSweepsSinceSurvey >= params.resurveyEveryFocusSweeps) {
@@ -225,7 +219,7 @@ public final class SweepScheduler {
     }
 
     private void chooseBand(Spectrum s, long nowMicros) {
-        band.choose(s, windowCount);
+        band.choose(s, config.windowCount());
         hash.add(band.first());
         hash.add(band.last());
         listener.onBandChosen(band.first(), band.last(), s.peakWindowQ8(), nowMicros);
@@ -258,7 +252,7 @@ public final class SweepScheduler {
                 changeMode(SweepMode.SURVEY, reason, nowMicros);
                 break;
             case FOCUS:
-                if (band.valid() && !tablePending) {
+                if (band.valid() && !config.tablePending()) {
                     focusSweepsSinceSurvey = 0;
                     changeMode(SweepMode.FOCUS, reason, nowMicros);
                 } else if (mode != SweepMode.SURVEY) {
@@ -277,16 +271,7 @@ public final class SweepScheduler {
      * @return a {@link TableStatus} code; on refusal the old table stays
      */
     public int loadTable(WindowTable table) {
-        if (table == null) {
-            return TableStatus.MISSING_DATA;
-        }
-        for (int w = 0; w < table.count(); w++) {
-            pendingLow[w] = table.dacLow(w);
-            pendingHigh[w] = table.dacHigh(w);
-        }
-        pendingCount = table.count();
-        tablePending = true;
-        return TableStatus.OK;
+        return config.loadTable(table);
     }
 
     /**
@@ -296,15 +281,7 @@ public final class SweepScheduler {
      * @return a {@link TableStatus} code; on refusal the old table (and any table already waiting) stays
      */
     public int loadTable(int[] lows, int[] highs, int count) {
-        int status = WindowTable.validate(lows, highs, count);
-        if (status != TableStatus.OK) {
-            return status;
-        }
-        System.arraycopy(lows, 0, pendingLow, 0, count);
-        System.arraycopy(highs, 0, pendingHigh, 0, count);
-        pendingCount = count;
-        tablePending = true;
-        return TableStatus.OK;
+        return config.loadTable(lows, highs, count);
     }
 
     /**
@@ -313,50 +290,21 @@ public final class SweepScheduler {
      * @return a {@link TableStatus} code; on refusal the old parameters stay
      */
     public int loadParameters(SweepParameters p) {
-        if (p == null) {
-            return TableStatus.MISSING_DATA;
-        }
-        int status = p.validate();
-        if (status != TableStatus.OK) {
-            return status;
-        }
-        pendingParams.copyFrom(p);
-        paramsPending = true;
-        return TableStatus.OK;
+        return config.loadParameters(p);
     }
 
     private void applyPending(long nowMicros) {
-        if (paramsPending) {
-            paramsPending = false;
-            params.copyFrom(pendingParams);
+        int changed = config.applyPending();
+        if ((changed & ActiveConfiguration.PARAMETERS_CHANGED) != 0) {
             gain.configure(params);
         }
-        if (tablePending) {
-            tablePending = false;
-            System.arraycopy(pendingLow, 0, dacLow, 0, pendingCount);
-            System.arraycopy(pendingHigh, 0, dacHigh, 0, pendingCount);
-            windowCount = pendingCount;
-            applyTable();
+        if ((changed & ActiveConfiguration.TABLE_CHANGED) != 0) {
+            gain.reset(config.windowCount());
+            band.invalidate();
             if (mode == SweepMode.FOCUS) {
                 changeMode(SweepMode.SURVEY, ModeChangeReason.TABLE_LOADED, nowMicros);
             }
         }
-    }
-
-    private void copyTable(WindowTable table) {
-        for (int w = 0; w < table.count(); w++) {
-            dacLow[w] = table.dacLow(w);
-            dacHigh[w] = table.dacHigh(w);
-        }
-        windowCount = table.count();
-    }
-
-    private void applyTable() {
-        for (int w = 0; w < windowCount; w++) {
-            centreCode[w] = (dacLow[w] + dacHigh[w]) >>> 1;
-        }
-        gain.reset(windowCount);
-        band.invalidate();
     }
 
     private void changeMode(SweepMode to, int reason, long nowMicros) {
@@ -416,7 +364,7 @@ public final class SweepScheduler {
 
     /** Windows in the active table. */
     public int windowCount() {
-        return windowCount;
+        return config.windowCount();
     }
 
     /** Active low code of window {@code w} (the table in use, not one waiting). */
