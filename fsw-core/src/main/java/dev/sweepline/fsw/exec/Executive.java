@@ -61,6 +61,8 @@ public final class Executive {
     }
 
     /**
+     * An executive between {@code link} and {@code scheduler}.
+     *
      * @param timeoutMarginMicros time allowed beyond the step's duration for its reply (>= 0)
      * @param maxRetries          re-sends of one step before SAFE (>= 0)
      * @throws IllegalArgumentException on a negative margin or retry count (programmer misuse)
