@@ -1,0 +1,40 @@
+/**
+ * The executive: design note.
+ *
+ * <h2>What it does</h2>
+ * {@link dev.sweepline.fsw.exec.Executive} keeps one step in flight between the sweep scheduler and the
+ * {@link dev.sweepline.fsw.link.InstrumentLink}. Each {@code doWork(nowMicros)}: with a step in flight,
+ * re-offer it to the link if the link refused it, poll for its reply (at most
+ * {@code MAX_POLLS_PER_CYCLE}), and check its deadline; with none, take the next step from the
+ * scheduler, number it and send it. Time is the argument; nothing blocks; nothing is allocated after
+ * construction.
+ *
+ * <h2>Requirements and how each is verified</h2>
+ * <ol>
+ * <li><b>E1</b> Sequence numbers are assigned here, 16 bits, wrapping; every transmission gets a fresh
+ *     one. <i>ExecutiveTest.shouldWrapSequenceAtSixteenBits.</i></li>
+ * <li><b>E2</b> A reply is ingested when its sequence is that of any transmission of the step in flight
+ *     (the re-sent command is the same step, so a late first answer is good data).
+ *     <i>ExecutiveTest.shouldSendOneStepAndIngestItsReply, shouldAcceptLateReplyToFirstTransmission.</i></li>
+ * <li><b>E3</b> Other sequence numbers are counted (sequenceErrors) and dropped; the step keeps waiting.
+ *     Replies that come while nothing is in flight (SAFE) are drained and counted the same way.
+ *     <i>ExecutiveTest.shouldDropAndCountWrongSequence, shouldDrainStaleRepliesInSafeWithMockLink.</i></li>
+ * <li><b>E4</b> Deadline = send time + step duration (settle + integration) + margin; at the deadline the
+ *     reply is still in time, one microsecond later it has timed out (style.md: tested at T and T+1).
+ *     <i>ExecutiveTest.shouldTimeOutOnlyAfterDeadline.</i></li>
+ * <li><b>E5</b> A timed-out step is re-sent at most maxRetries times (timeouts and retries counted);
+ *     then the scheduler goes to SAFE with LINK_TIMEOUT, and only a command leaves it.
+ *     <i>ExecutiveTest.shouldGoSafeAfterBoundedRetries, shouldNotSendInSafeWithMockLink.</i></li>
+ * <li><b>E6</b> A send the link refuses is offered again next cycle, within the same deadline.
+ *     <i>ExecutiveTest.shouldRetrySendRefusedByLink.</i></li>
+ * <li><b>E7</b> A step the scheduler abandoned (a mode change while it was in flight, e.g. commanded
+ *     SAFE) is never re-sent: unsent, it is dropped at once; sent, its reply may still come until the
+ *     deadline (the scheduler ignores it), then it is dropped (abandonedSteps).
+ *     <i>ExecutiveTest.shouldNotResendStepAbandonedBySafeCommand.</i></li>
+ * <li><b>E8</b> The cycle allocates nothing; nextWakeMicros tells the host when to call again (the
+ *     expected reply time, then the first instant past the deadline, Long.MAX_VALUE when idle in SAFE).
+ *     <i>ExecutiveTest.shouldAllocateNothingPerCycle, shouldRunClosedLoopWithoutErrors.</i></li>
+ * </ol>
+ * Threading: one thread; the host adapter owns pacing.
+ */
+package dev.sweepline.fsw.exec;

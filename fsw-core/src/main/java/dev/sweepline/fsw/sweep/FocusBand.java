@@ -1,0 +1,113 @@
+package dev.sweepline.fsw.sweep;
+
+import dev.sweepline.fsw.table.SweepParameters;
+import dev.sweepline.fsw.table.WindowTable;
+
+/**
+ * The focus band and the reference peak it was chosen from (sweep design note, R6 and R10).
+ * Band = refined peak window +/- max(minHalfWidth, FWHM * halfWidthPerFwhm), at most maxBandWindows
+ * wide, clipped (not shifted) to the table. Loss of lock compares each focus spectrum with the
+ * reference peak: no peak, current collapse, peak on an unclipped edge, peak jump (including a jump
+ * to about the alpha ratio).
+ */
+final class FocusBand {
+    private final int[] centreCode;
+    private final SweepParameters params;
+
+    private boolean valid;
+    private int first;
+    private int last;
+    private int referencePeakQ8;
+    private int referencePeakUnits;
+
+    /**
+     * @param centreCode the active table's centre codes (owned and kept current by the scheduler)
+     * @param params     the active parameters (owned and kept current by the scheduler)
+     */
+    FocusBand(int[] centreCode, SweepParameters params) {
+        this.centreCode = centreCode;
+        this.params = params;
+    }
+
+    /** Forgets the band (new table, or no lock). */
+    void invalidate() {
+        valid = false;
+    }
+
+    /** True when a band has been chosen since the last invalidation. */
+    boolean valid() {
+        return valid;
+    }
+
+    /** First window of the band. */
+    int first() {
+        return first;
+    }
+
+    /** Last window of the band. */
+    int last() {
+        return last;
+    }
+
+    /** Chooses the band from an analysed spectrum with a valid peak, in a table of {@code windowCount}. */
+    void choose(Spectrum s, int windowCount) {
+        int centre = (s.peakWindowQ8() + 128) >> 8;
+        long fromFwhm = ((long) s.fwhmWindowsQ8() * params.halfWidthPerFwhmQ8 + (1 << 15)) >> 16;
+        int half = (int) Math.max(params.minHalfWidthWindows, Math.min(fromFwhm, WindowTable.CAPACITY));
+        half = Math.min(half, (params.maxBandWindows - 1) / 2);
+        first = Math.max(0, centre - half);
+        last = Math.min(windowCount - 1, centre + half);
+        referencePeakQ8 = s.peakWindowQ8();
+        referencePeakUnits = s.peakCurrentUnits();
+        valid = true;
+    }
+
+    /**
+     * Loss-of-lock check of a focus spectrum against the reference peak.
+     *
+     * @return {@link ModeChangeReason#NONE} when the lock holds, else the reason to survey
+     */
+    int lossOfLock(Spectrum s, int windowCount) {
+        if (!s.peakValid()) {
+            return ModeChangeReason.NO_PEAK;
+        }
+        if ((long) s.peakCurrentUnits() * 256 < (long) referencePeakUnits * params.collapseFractionQ8) {
+            return ModeChangeReason.CURRENT_COLLAPSE;
+        }
+        int p = s.window(s.peakIndex());
+        boolean lowEdge = first > 0 && p - first < params.edgeWindows;
+        boolean highEdge = last < windowCount - 1 && last - p < params.edgeWindows;
+        if (lowEdge || highEdge) {
+            return ModeChangeReason.PEAK_ON_EDGE;
+        }
+        if (Math.abs(s.peakWindowQ8() - referencePeakQ8) > (params.jumpWindows << 8)
+            || atAlphaRatio(s.peakWindowQ8(), referencePeakQ8, windowCount)) {
+            return ModeChangeReason.PEAK_JUMP;
+        }
+        return ModeChangeReason.NONE;
+    }
+
+    /** True when the code at {@code peakQ8} is about alphaRatio times the code at {@code referenceQ8}. */
+    boolean atAlphaRatio(int peakQ8, int referenceQ8, int windowCount) {
+        long reference = codeAtQ8(referenceQ8, windowCount);
+        if (reference <= 0) {
+            return false;
+        }
+        long ratioQ16 = (codeAtQ8(peakQ8, windowCount) << 16) / reference;
+        long tolerance = ((long) params.alphaRatioQ16 * params.alphaToleranceQ16) >> 16;
+        return Math.abs(ratioQ16 - params.alphaRatioQ16) <= tolerance;
+    }
+
+    /** Centre code at a fractional window index (Q8), linear between window centres, clamped to the table. */
+    long codeAtQ8(int windowQ8, int windowCount) {
+        int w = windowQ8 >> 8;
+        if (w < 0) {
+            return centreCode[0];
+        }
+        if (w >= windowCount - 1) {
+            return centreCode[windowCount - 1];
+        }
+        int frac = windowQ8 & 0xFF;
+        return centreCode[w] + (((long) (centreCode[w + 1] - centreCode[w]) * frac) >> 8);
+    }
+}

@@ -1,0 +1,218 @@
+package dev.sweepline.fsw.sweep;
+
+import dev.sweepline.fsw.link.InstrumentConstants;
+import dev.sweepline.fsw.link.SampleReply;
+import dev.sweepline.fsw.table.WindowTable;
+
+/**
+ * One completed sweep, preallocated for {@link WindowTable#CAPACITY} windows and refilled for every
+ * sweep. Entries are in ascending window order even when the sweep stepped downward: entry {@code i}
+ * is window {@code firstWindow() + i}.
+ *
+ * <p>{@link #currentUnits(int)} is the sum of the four quadrants above the pedestal in range-0 LSB
+ * units, {@code (counts - pedestal) << (5 * range)}, so windows read in different gain ranges compare.
+ * The peak fields are filled by the scheduler's analysis when the sweep completes. Threading: owned
+ * by the scheduler's thread; read it only during {@link SweepListener#onSweepComplete} or from the
+ * same thread.
+ */
+public final class Spectrum {
+    /** Status bit (above the {@link SampleReply} bits): no reply was ingested for this window. */
+    public static final int STATUS_MISSING = 1 << 8;
+    /** Status bit: the reply's gain range was not a valid range; the commanded one was used. */
+    public static final int STATUS_BAD_RANGE = 1 << 9;
+
+    private static final int Q = InstrumentConstants.QUADRANTS;
+
+    private final int[] gainRange = new int[WindowTable.CAPACITY];
+    private final int[] quadrant = new int[WindowTable.CAPACITY * Q];
+    private final int[] status = new int[WindowTable.CAPACITY];
+    private final int[] currentUnits = new int[WindowTable.CAPACITY];
+    private final int[] maxQuadrantUnits = new int[WindowTable.CAPACITY];
+
+    private long sweepNumber;
+    private SweepMode mode = SweepMode.SURVEY;
+    private long startMicros;
+    private long endMicros;
+    private int count;
+    private int firstWindow;
+    private boolean ascending;
+
+    private boolean peakValid;
+    private int peakIndex = -1;
+    private int argmaxIndex = -1;
+    private int peakWindowQ8;
+    private int fwhmWindowsQ8;
+
+    /** Sweep number, counting completed sweeps from 1. */
+    public long sweepNumber() {
+        return sweepNumber;
+    }
+
+    /** Mode the sweep was made in. */
+    public SweepMode mode() {
+        return mode;
+    }
+
+    /** Time of the sweep's first step, microseconds. */
+    public long startMicros() {
+        return startMicros;
+    }
+
+    /** Time the last reply was ingested, microseconds. */
+    public long endMicros() {
+        return endMicros;
+    }
+
+    /** Number of windows in the sweep. */
+    public int count() {
+        return count;
+    }
+
+    /** Window index of entry 0. */
+    public int firstWindow() {
+        return firstWindow;
+    }
+
+    /** True when the sweep stepped upward in window index. */
+    public boolean ascending() {
+        return ascending;
+    }
+
+    /** Window index of entry {@code i}. */
+    public int window(int i) {
+        return firstWindow + i;
+    }
+
+    /** Gain range entry {@code i} was read in. */
+    public int gainRange(int i) {
+        return gainRange[i];
+    }
+
+    /** Raw ADC counts of quadrant {@code q} (0..3) of entry {@code i}. */
+    public int quadrant(int i, int q) {
+        return quadrant[i * Q + q];
+    }
+
+    /** Status bits of entry {@code i}: {@link SampleReply} {@code STATUS_*} and this class's. */
+    public int status(int i) {
+        return status[i];
+    }
+
+    /** Total current of entry {@code i}, range-0 LSB units (may be slightly negative from noise). */
+    public int currentUnits(int i) {
+        return currentUnits[i];
+    }
+
+    /** Largest single-quadrant current of entry {@code i}, range-0 LSB units. */
+    public int maxQuadrantUnits(int i) {
+        return maxQuadrantUnits[i];
+    }
+
+    /** True when the analysis found a significant proton peak. */
+    public boolean peakValid() {
+        return peakValid;
+    }
+
+    /** Entry index of the proton peak (integer), or -1. */
+    public int peakIndex() {
+        return peakIndex;
+    }
+
+    /** Entry index of the largest current (may be a non-proton maximum), or -1. */
+    public int argmaxIndex() {
+        return argmaxIndex;
+    }
+
+    /** Refined proton peak in table window-index units, Q8 (valid when {@link #peakValid()}). */
+    public int peakWindowQ8() {
+        return peakWindowQ8;
+    }
+
+    /** Full width at half maximum of the proton peak, windows, Q8 (valid when {@link #peakValid()}). */
+    public int fwhmWindowsQ8() {
+        return fwhmWindowsQ8;
+    }
+
+    /** Current of the proton peak entry, range-0 units (0 when no peak). */
+    public int peakCurrentUnits() {
+        return peakIndex >= 0 ? currentUnits[peakIndex] : 0;
+    }
+
+    /** Starts a new sweep over windows first..first+count-1; every entry starts as missing. */
+    void begin(long sweepNumber, SweepMode mode, int firstWindow, int count, boolean ascending, long startMicros) {
+        this.sweepNumber = sweepNumber;
+        this.mode = mode;
+        this.firstWindow = firstWindow;
+        this.count = count;
+        this.ascending = ascending;
+        this.startMicros = startMicros;
+        this.endMicros = startMicros;
+        for (int i = 0; i < count; i++) {
+            gainRange[i] = 0;
+            status[i] = STATUS_MISSING;
+            currentUnits[i] = 0;
+            maxQuadrantUnits[i] = 0;
+            for (int q = 0; q < Q; q++) {
+                quadrant[i * Q + q] = InstrumentConstants.ADC_PEDESTAL_COUNTS;
+            }
+        }
+        clearPeak();
+    }
+
+    /**
+     * Stores a reply as entry {@code i}, read in {@code range} (already checked by the caller);
+     * {@code extraStatus} is or-ed into the reply's status.
+     */
+    void store(int i, SampleReply reply, int range, int extraStatus) {
+        int shift = InstrumentConstants.RANGE_RATIO_SHIFT * range;
+        int total = 0;
+        int max = Integer.MIN_VALUE;
+        for (int q = 0; q < Q; q++) {
+            int counts = reply.quadrant[q];
+            quadrant[i * Q + q] = counts;
+            // multiply, not shift: noise can leave counts slightly below the pedestal
+            int units = (counts - InstrumentConstants.ADC_PEDESTAL_COUNTS) * (1 << shift);
+            total += units;
+            if (units > max) {
+                max = units;
+            }
+        }
+        gainRange[i] = range;
+        status[i] = reply.status | extraStatus;
+        currentUnits[i] = total;
+        maxQuadrantUnits[i] = max;
+    }
+
+    /** Sets entry {@code i} directly (for analysis tests and replay): total current only. */
+    void setEntry(int i, int totalUnits, int range, int entryStatus) {
+        currentUnits[i] = totalUnits;
+        maxQuadrantUnits[i] = totalUnits / Q;
+        gainRange[i] = range;
+        status[i] = entryStatus;
+    }
+
+    void end(long endMicros) {
+        this.endMicros = endMicros;
+    }
+
+    void clearPeak() {
+        peakValid = false;
+        peakIndex = -1;
+        argmaxIndex = -1;
+        peakWindowQ8 = 0;
+        fwhmWindowsQ8 = 0;
+    }
+
+    void setPeak(int argmaxIndex, int peakIndex, int peakWindowQ8, int fwhmWindowsQ8) {
+        this.argmaxIndex = argmaxIndex;
+        this.peakIndex = peakIndex;
+        this.peakWindowQ8 = peakWindowQ8;
+        this.fwhmWindowsQ8 = fwhmWindowsQ8;
+        this.peakValid = true;
+    }
+
+    void setArgmaxOnly(int argmaxIndex) {
+        clearPeak();
+        this.argmaxIndex = argmaxIndex;
+    }
+}

@@ -1,0 +1,404 @@
+package dev.sweepline.fsw.sweep;
+
+import dev.sweepline.fsw.link.InstrumentConstants;
+import dev.sweepline.fsw.link.SampleReply;
+import dev.sweepline.fsw.link.StepCommand;
+import dev.sweepline.fsw.table.SweepParameters;
+import dev.sweepline.fsw.table.TableStatus;
+import dev.sweepline.fsw.table.WindowTable;
+
+/**
+ * The adaptive sweep scheduler: chooses every step (window, levels, gain range, settle time),
+ * ingests every reply, analyses each completed sweep and switches between survey, focus and safe
+ * (see the package design note for the requirements and how each is verified).
+ *
+ * <p>Driven from outside: {@link #nextStep} and {@link #ingest} are given the time; nothing reads
+ * a clock. Everything is allocated in the constructor; the step path (nextStep, ingest and the sweep
+ * analysis) allocates nothing and uses integer arithmetic only. Threading: one thread, the executive's.
+ */
+public final class SweepScheduler {
+    private static final int NO_WINDOW = -1;
+    private static final int NONE = ModeChangeReason.NONE;
+
+    private final SweepListener listener;
+
+    private final ActiveConfiguration config;
+    private final int[] dacLow;
+    private final int[] dacHigh;
+    private final SweepParameters params;
+
+    private final GainPredictor gain = new GainPredictor();
+    private final PeakFinder peakFinder;
+    private final FocusBand band;
+    private final DecisionHash hash = new DecisionHash();
+    private final StepCommand lastStep = new StepCommand();
+
+    private Spectrum building = new Spectrum();
+    private Spectrum completed = new Spectrum();
+
+    private SweepMode mode = SweepMode.SURVEY;
+    private boolean startPending = true;
+    private boolean sweepActive;
+    private int sweepFirst;
+    private int sweepSteps;
+    private boolean sweepAscending;
+    private int stepsIssued;
+    private int awaitingWindow = NO_WINDOW;
+    private int awaitingRange;
+    private long sweepNumber;
+    private int focusSweepsSinceSurvey;
+    private int hvLowCode;
+    private int hvHighCode;
+    private long ignoredReplies;
+
+    /**
+     * Builds a scheduler that starts in SURVEY (reported as a START mode change at the first step).
+     *
+     * @throws IllegalArgumentException if {@code params} does not validate (programmer misuse)
+     */
+    public SweepScheduler(WindowTable table, SweepParameters params, SweepListener listener) {
+        int status = params.validate();
+        if (status != TableStatus.OK) {
+            throw new IllegalArgumentException("sweep parameters refused: " + TableStatus.name(status));
+        }
+        this.listener = listener == null ? SweepListener.NONE : listener;
+        this.config = new ActiveConfiguration(table, params);
+        this.dacLow = config.dacLow;
+        this.dacHigh = config.dacHigh;
+        this.params = config.params;
+        this.peakFinder = new PeakFinder(config.centreCode, this.params);
+        this.band = new FocusBand(config.centreCode, this.params);
+        gain.reset(config.windowCount());
+        gain.configure(this.params);
+    }
+
+    // ---------------------------------------------------------------- step path
+
+    /**
+     * Chooses the next step and writes it into {@code out} (every field but {@code sequence}, which
+     * the executive assigns). A step whose reply never came is recorded as missing.
+     *
+     * @return false in SAFE: there is nothing to step
+     */
+    public boolean nextStep(StepCommand out, long nowMicros) {
+        if (startPending) {
+            startPending = false;
+            recordModeChange(SweepMode.SAFE, SweepMode.SURVEY, ModeChangeReason.START, nowMicros);
+        }
+        if (mode == SweepMode.SAFE) {
+            return false;
+        }
+        if (sweepActive && stepsIssued == sweepSteps) {
+            awaitingWindow = NO_WINDOW; // the last reply never came; its entry stays missing
+            completeSweep(nowMicros);
+        }
+        if (!sweepActive) {
+            beginSweep(nowMicros);
+        }
+        int window = sweepAscending ? sweepFirst + stepsIssued : sweepFirst + sweepSteps - 1 - stepsIssued;
+        int range = gain.choose(window);
+        int low = dacLow[window];
+        int high = dacHigh[window];
+        int railChange = Math.max(Math.abs(low - hvLowCode), Math.abs(high - hvHighCode));
+        long settle = params.fixedSettleMicros + (((long) railChange * params.settleMicrosPerCodeQ8) >> 8);
+        out.window = window;
+        out.dacLow = low;
+        out.dacHigh = high;
+        out.gainRange = range;
+        out.settleMicros = (int) Math.min(Integer.MAX_VALUE, settle);
+        out.integrationPeriods = params.integrationPeriods;
+        out.hvEnabled = true;
+        lastStep.copyFrom(out);
+        hvLowCode = low;
+        hvHighCode = high;
+        stepsIssued++;
+        awaitingWindow = window;
+        awaitingRange = range;
+        hashStep(out);
+        listener.onStep(out, nowMicros);
+        return true;
+    }
+
+    /**
+     * Ingests the reply to the last step. A reply when no step awaits one (after a mode change, or
+     * a duplicate) is ignored and counted.
+     */
+    public void ingest(SampleReply reply, long nowMicros) {
+        if (awaitingWindow == NO_WINDOW) {
+            ignoredReplies++;
+            return;
+        }
+        int window = awaitingWindow;
+        awaitingWindow = NO_WINDOW;
+        int range = reply.gainRange;
+        int extra = 0;
+        if (range < 0 || range >= InstrumentConstants.GAIN_RANGES) {
+            range = awaitingRange;
+            extra = Spectrum.STATUS_BAD_RANGE;
+        }
+        int i = window - sweepFirst;
+        building.store(i, reply, range, extra);
+        boolean saturated = (reply.status & SampleReply.STATUS_SATURATED) != 0 || anyAtTop(reply);
+        gain.record(window, building.maxQuadrantUnits(i), saturated, range);
+        listener.onSample(lastStep, reply, nowMicros);
+        if (stepsIssued == sweepSteps) {
+            completeSweep(nowMicros);
+        }
+    }
+
+    private static boolean anyAtTop(SampleReply reply) {
+        for (int q = 0; q < InstrumentConstants.QUADRANTS; q++) {
+            if (reply.quadrant[q] >= InstrumentConstants.ADC_MAX_COUNTS) {
+                return true;
+            }
+        }
+        return false;
+    }
+
+    private void beginSweep(long nowMicros) {
+        applyPending(nowMicros);
+        int first;
+        int last;
+        switch (mode) {
+            case SURVEY:
+                first = 0;
+                last = config.windowCount() - 1;
+                break;
+            case FOCUS:
+                first = band.first();
+                last = band.last();
+                break;
+            case SAFE:
+            default:
+                throw new IllegalStateException("no sweep in mode " + mode);
+        }
+        // start from the end nearer the present HV level: consecutive surveys alternate direction
+        int toFirst = Math.max(Math.abs(dacLow[first] - hvLowCode), Math.abs(dacHigh[first] - hvHighCode));
+        int toLast = Math.max(Math.abs(dacLow[last] - hvLowCode), Math.abs(dacHigh[last] - hvHighCode));
+        sweepAscending = toFirst <= toLast;
+        sweepFirst = first;
+        sweepSteps = last - first + 1;
+        stepsIssued = 0;
+        awaitingWindow = NO_WINDOW;
+        building.begin(sweepNumber + 1, mode, first, sweepSteps, sweepAscending, nowMicros);
+        sweepActive = true;
+    }
+
+    private void completeSweep(long nowMicros) {
+        sweepActive = false;
+        building.end(nowMicros);
+        peakFinder.analyse(building);
+        Spectrum done = building;
+        building = completed;
+        completed = done;
+        sweepNumber++;
+        listener.onSweepComplete(done, nowMicros);
+        switch (mode) {
+            case SURVEY:
+                if (done.peakValid()) {
+                    chooseBand(done, nowMicros);
+                    focusSweepsSinceSurvey = 0;
+                    changeMode(SweepMode.FOCUS, ModeChangeReason.LOCK_ACQUIRED, nowMicros);
+                }
+                break;
+            case FOCUS:
+                focusSweepsSinceSurvey++;
+                int lost = band.lossOfLock(done, config.windowCount());
+                if (lost != NONE) {
+                    changeMode(SweepMode.SURVEY, lost, nowMicros);
+                } else if (focusSweepsSinceSurvey >= params.resurveyEveryFocusSweeps) {
+                    changeMode(SweepMode.SURVEY, ModeChangeReason.RESURVEY, nowMicros);
+                } else {
+                    chooseBand(done, nowMicros);
+                }
+                break;
+            case SAFE:
+            default:
+                throw new IllegalStateException("sweep completed in mode " + mode);
+        }
+    }
+
+    private void chooseBand(Spectrum s, long nowMicros) {
+        band.choose(s, config.windowCount());
+        hash.add(band.first());
+        hash.add(band.last());
+        listener.onBandChosen(band.first(), band.last(), s.peakWindowQ8(), nowMicros);
+    }
+
+    // ---------------------------------------------------------------- commands
+
+    /** Commands a mode (ground command): same as {@link #requestMode(SweepMode, int, long)} with COMMANDED. */
+    public void requestMode(SweepMode requested, long nowMicros) {
+        requestMode(requested, ModeChangeReason.COMMANDED, nowMicros);
+    }
+
+    /**
+     * Changes mode now, abandoning the sweep in progress. FOCUS without a valid band (or with a new
+     * table waiting) gives SURVEY with {@link ModeChangeReason#NO_BAND}. SAFE turns the HV off.
+     */
+    public void requestMode(SweepMode requested, int reason, long nowMicros) {
+        if (requested == mode) {
+            return;
+        }
+        sweepActive = false;
+        awaitingWindow = NO_WINDOW;
+        switch (requested) {
+            case SAFE:
+                hvLowCode = 0;
+                hvHighCode = 0;
+                changeMode(SweepMode.SAFE, reason, nowMicros);
+                break;
+            case SURVEY:
+                changeMode(SweepMode.SURVEY, reason, nowMicros);
+                break;
+            case FOCUS:
+                if (band.valid() && !config.tablePending()) {
+                    focusSweepsSinceSurvey = 0;
+                    changeMode(SweepMode.FOCUS, reason, nowMicros);
+                } else if (mode != SweepMode.SURVEY) {
+                    changeMode(SweepMode.SURVEY, ModeChangeReason.NO_BAND, nowMicros);
+                }
+                break;
+            default:
+                throw new IllegalStateException("unknown mode " + requested);
+        }
+    }
+
+    /**
+     * Loads a window table, applied at the next sweep boundary (a focus band then becomes invalid and
+     * the scheduler surveys).
+     *
+     * @return a {@link TableStatus} code; on refusal the old table stays
+     */
+    public int loadTable(WindowTable table) {
+        return config.loadTable(table);
+    }
+
+    /**
+     * Loads a window table from raw arrays (a telecommand), allocation-free: validated, then copied
+     * and applied at the next sweep boundary.
+     *
+     * @return a {@link TableStatus} code; on refusal the old table (and any table already waiting) stays
+     */
+    public int loadTable(int[] lows, int[] highs, int count) {
+        return config.loadTable(lows, highs, count);
+    }
+
+    /**
+     * Loads parameters (copied), applied at the next sweep boundary.
+     *
+     * @return a {@link TableStatus} code; on refusal the old parameters stay
+     */
+    public int loadParameters(SweepParameters p) {
+        return config.loadParameters(p);
+    }
+
+    private void applyPending(long nowMicros) {
+        int changed = config.applyPending();
+        if ((changed & ActiveConfiguration.PARAMETERS_CHANGED) != 0) {
+            gain.configure(params);
+        }
+        if ((changed & ActiveConfiguration.TABLE_CHANGED) != 0) {
+            gain.reset(config.windowCount());
+            band.invalidate();
+            if (mode == SweepMode.FOCUS) {
+                changeMode(SweepMode.SURVEY, ModeChangeReason.TABLE_LOADED, nowMicros);
+            }
+        }
+    }
+
+    private void changeMode(SweepMode to, int reason, long nowMicros) {
+        SweepMode from = mode;
+        mode = to;
+        recordModeChange(from, to, reason, nowMicros);
+    }
+
+    private void recordModeChange(SweepMode from, SweepMode to, int reason, long nowMicros) {
+        hash.add(-1 - from.ordinal()); // negative tags keep mode changes apart from step fields
+        hash.add(to.ordinal());
+        hash.add(reason);
+        listener.onModeChange(from, to, reason, nowMicros);
+    }
+
+    private void hashStep(StepCommand s) {
+        hash.add(s.window);
+        hash.add(s.dacLow);
+        hash.add(s.dacHigh);
+        hash.add(s.gainRange);
+        hash.add(s.settleMicros);
+        hash.add(s.integrationPeriods);
+        hash.add(s.hvEnabled ? 1 : 0);
+    }
+
+    // ---------------------------------------------------------------- state
+
+    /** Present mode. */
+    public SweepMode mode() {
+        return mode;
+    }
+
+    /** Running FNV-1a hash over every step's fields, every band and every mode change. */
+    public long decisionHash() {
+        return hash.value();
+    }
+
+    /** The last completed sweep (a preallocated buffer, refilled at every sweep end). */
+    public Spectrum lastSpectrum() {
+        return completed;
+    }
+
+    /** First window of the focus band (meaningful once a band was chosen). */
+    public int bandFirst() {
+        return band.first();
+    }
+
+    /** Last window of the focus band. */
+    public int bandLast() {
+        return band.last();
+    }
+
+    /** True when a focus band has been chosen since the last table change. */
+    public boolean bandValid() {
+        return band.valid();
+    }
+
+    /** Windows in the active table. */
+    public int windowCount() {
+        return config.windowCount();
+    }
+
+    /** Active low code of window {@code w} (the table in use, not one waiting). */
+    public int dacLow(int w) {
+        return dacLow[w];
+    }
+
+    /** Active high code of window {@code w}. */
+    public int dacHigh(int w) {
+        return dacHigh[w];
+    }
+
+    /** Completed sweeps. */
+    public long sweepCount() {
+        return sweepNumber;
+    }
+
+    /** Focus sweeps since the last survey. */
+    public int focusSweepsSinceSurvey() {
+        return focusSweepsSinceSurvey;
+    }
+
+    /** Replies ingested when no step awaited one. */
+    public long ignoredReplies() {
+        return ignoredReplies;
+    }
+
+    /** The active value of a parameter set (a copy into {@code into}, allocation-free). */
+    public void activeParameters(SweepParameters into) {
+        into.copyFrom(params);
+    }
+
+    /** True when a step has been issued and its reply not yet ingested. */
+    public boolean awaitingReply() {
+        return awaitingWindow != NO_WINDOW;
+    }
+}

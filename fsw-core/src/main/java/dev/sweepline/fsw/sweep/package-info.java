@@ -1,0 +1,116 @@
+/**
+ * The adaptive sweep scheduler: design note.
+ *
+ * <h2>What it does</h2>
+ * {@link dev.sweepline.fsw.sweep.SweepScheduler} chooses every step of the energy-per-charge sweep
+ * (window, modulator levels, gain range, settle time, dwell), ingests every sample, analyses each
+ * completed sweep and moves between three modes:
+ * <pre>
+ *            START                    LOCK_ACQUIRED
+ *   (SAFE) ---------&gt; SURVEY ---------------------------&gt; FOCUS
+ *                      ^  ^   PEAK_ON_EDGE, CURRENT_COLLAPSE,  |
+ *                      |  +-- PEAK_JUMP, NO_PEAK, RESURVEY, ---+
+ *                      |      TABLE_LOADED
+ *        COMMANDED     |                    COMMANDED / LINK_TIMEOUT
+ *   SAFE --------------+   any mode ------------------------------&gt; SAFE
+ * </pre>
+ * Per step: {@code nextStep} picks the next window of the sweep plan, predicts its gain range,
+ * computes the settle time from the HV rail change and hands out the step; {@code ingest} stores
+ * the reply in range-0 units. When the last reply of a sweep arrives, the sweep is analysed:
+ * <ol>
+ * <li>integer argmax of the total current;</li>
+ * <li>alpha discrimination: a significant local maximum (prominence over noise and over a fraction of
+ *     its height) whose window centre code lies at code(argmax) / 1.9863 (+/- tolerance), computed
+ *     from the active table's codes in Q16, is the proton peak; a monotonic flank there (U/w ~ 3 near
+ *     the Sun) is not a local maximum and is ignored;</li>
+ * <li>significance: the peak must exceed significanceSigmas * 2 * noiseCountsPerQuadrant counts in the
+ *     range it was read (factor 2: rms sum of four quadrants);</li>
+ * <li>3-point parabola refinement in Q8, clamped to +/- half a window; FWHM from the linearly
+ *     interpolated half-maximum crossings in Q8 (one missing side mirrors the other);</li>
+ * <li>mode decision: after a survey with a valid peak, FOCUS on band = peak +/- max(minHalfWidth,
+ *     FWHM * halfWidthPerFwhm), at most maxBandWindows, clipped (not shifted) to the table; after a
+ *     focus sweep, loss of lock (in this order: no peak, peak current below collapseFraction of the
+ *     reference, peak window within edgeWindows of an unclipped band edge, refined peak moved more
+ *     than jumpWindows or to about the alpha ratio of the reference) gives SURVEY with the reason;
+ *     else, after K focus sweeps, SURVEY (RESURVEY); else the band is re-centred on this sweep's peak,
+ *     which becomes the reference.</li>
+ * </ol>
+ *
+ * <h2>Requirements and how each is verified</h2>
+ * <ol>
+ * <li><b>R1 Modes.</b> SURVEY, FOCUS, SAFE as a switch over an enum whose default fails loudly; the
+ *     scheduler starts in SURVEY and reports START at its first step.
+ *     <i>AcquisitionTest.shouldStartInSurveyAndReportStart.</i></li>
+ * <li><b>R2 Steps stay legal.</b> Every step lies in the active table with that window's codes; a survey
+ *     covers every window once; focus steps lie in the band; no window repeats within a sweep; mode
+ *     changes form a chain of legal transitions. <i>SchedulerModelTest (rule-based random actions,
+ *     five recorded seeds, 20k steps each).</i></li>
+ * <li><b>R3 Comparable units.</b> Spectrum current = sum over quadrants of (counts - pedestal) &lt;&lt;
+ *     (5 * range); entries in ascending window order whatever the step direction; a step with no reply
+ *     is marked {@code STATUS_MISSING}. <i>StepOrderingTest.shouldStoreSpectrumAscendingWhenSteppedDown,
+ *     CommandTest.shouldRecordMissingReplyAndCarryOn.</i></li>
+ * <li><b>R4 Noise floor.</b> No lock on noise; the threshold scales with the range read.
+ *     <i>PeakFinderTest.shouldRefuseNoiseOnlySpectrum, shouldScaleNoiseThresholdWithRange;
+ *     AcquisitionTest.shouldStaySurveyWithoutSignificantPeak.</i></li>
+ * <li><b>R5 Peak position.</b> Integer argmax refined to Q8 within 0.03 window on sampled Gaussians and
+ *     within 0.05 window of a floating-point reference on the physics.md window-current spectrum.
+ *     <i>PeakFinderTest.shouldRefinePeakToSubWindow, AcquisitionTest.shouldCentreBandOnRefinedProtonPeak.</i></li>
+ * <li><b>R6 Band width.</b> FWHM within 0.1 window on Gaussians and within 5 % of the thermal width
+ *     (physics.md) on the synthetic spectrum; band = 2 * max(min, round(1.5 FWHM)) + 1, capped, clipped.
+ *     <i>PeakFinderTest.shouldMeasureFwhm, shouldMirrorFwhmWhenOneSideIsCut; AcquisitionTest
+ *     (size, cap near the Sun, minimum, clip at the table end).</i></li>
+ * <li><b>R7 Never the alpha peak.</b> Lock on protons at He/H 1, 4, 8.5, 15 % at 1 AU (fast wind) and
+ *     near the Sun (U/w = 3); a lower peak at the alpha ratio is the proton peak; a monotonic flank or a
+ *     small bump there is not; in focus a peak at ~1.99x the reference is a jump.
+ *     <i>AlphaDiscriminationTest.</i></li>
+ * <li><b>R8 Acquisition.</b> A survey with a valid peak gives FOCUS (LOCK_ACQUIRED). Cold start reads
+ *     every window in the top range (never measured), so a weak 1 AU peak locks after the second survey,
+ *     a strong near-Sun peak after the first. <i>AcquisitionTest.shouldAcquireLockOnceGainsAreRanged,
+ *     shouldAcquireLockAfterOneSurveyWhenSignalIsStrong.</i></li>
+ * <li><b>R9 Gain ranging.</b> Predicted per-quadrant current = max over the window and its two neighbours
+ *     at their last reading; up above 80 %, down below 2 % of the full scale of the range this window was
+ *     last read in (hysteresis); never-read or saturated windows use the top range; one range per step.
+ *     <i>GainPredictorTest (thresholds at +/- 2 units, hysteresis, neighbours, reset, no saturation after
+ *     the first survey near the Sun).</i></li>
+ * <li><b>R10 Loss of lock.</b> Each reason (NO_PEAK, CURRENT_COLLAPSE, PEAK_ON_EDGE, PEAK_JUMP) is raised
+ *     by the condition it names and not by steady plasma or slow drift; after a x1.82 E/q shock the band
+ *     holds the new peak within two complete sweeps after the sweep the front fell in.
+ *     <i>LockLossTest.</i></li>
+ * <li><b>R11 Re-survey.</b> Exactly K focus sweeps between surveys on steady plasma.
+ *     <i>LockLossTest.shouldResurveyEveryKFocusSweeps.</i></li>
+ * <li><b>R12 Step order.</b> Each sweep starts at the end nearer the present HV level and steps through
+ *     neighbours; so consecutive surveys alternate direction (up from HV off, then down, ...), and a
+ *     focus sweep starts at the band end nearer the HV. <i>StepOrderingTest.</i></li>
+ * <li><b>R13 Settle.</b> settleMicros = fixedSettleMicros + (max rail change in codes *
+ *     settleMicrosPerCodeQ8 &gt;&gt; 8), rail change from the last commanded levels (0 after SAFE).
+ *     <i>StepOrderingTest.shouldAccountSettleForRailChange, CommandTest.shouldLeaveSafeOnlyByCommandAndSettleFromHvOff,
+ *     SchedulerModelTest.</i></li>
+ * <li><b>R14 Loads.</b> A table or parameter set is validated; a refusal returns the reason code and the
+ *     old one stays; an accepted one is copied (no allocation) and applied at the next sweep boundary; a
+ *     new table invalidates the band (FOCUS gives SURVEY, TABLE_LOADED) and the gain memory.
+ *     <i>CommandTest, WindowTableTest, SweepParametersTest.</i></li>
+ * <li><b>R15 SAFE.</b> nextStep returns false; replies are ignored; only requestMode leaves SAFE (FOCUS
+ *     without a band gives SURVEY, NO_BAND). <i>CommandTest.</i></li>
+ * <li><b>R16 Determinism.</b> No clock: time is the argument. decisionHash is FNV-1a 64 over every step's
+ *     fields (window, codes, range, settle, periods, HV flag), every band and every mode change;
+ *     same inputs give the same hash. <i>CommandTest.shouldGiveSameHashForSameInputs.</i></li>
+ * <li><b>R17 Resources.</b> Everything allocated in the constructor (arrays of WindowTable.CAPACITY);
+ *     the step path allocates nothing, uses no floating point, collections, boxing, threads or clocks;
+ *     one step costs at most 1 us. <i>AllocationTest and ExecutiveTest.shouldAllocateNothingPerCycle
+ *     (0 bytes in at least 8 of 10 windows of 10k steps, none over 1 kB: the test-side AllocationMeter
+ *     says why windows), NoFloatingPointTest
+ *     (bytecode scan), ArchitectureTest, SchedulerStepBenchmark (JMH, -prof gc).</i></li>
+ * </ol>
+ *
+ * <h2>Choices worth knowing</h2>
+ * <ul>
+ * <li>Collapse and jump compare with the peak of the previous accepted focus (or survey) sweep, so slow
+ *     trends are tracked, not flagged.</li>
+ * <li>The parabola is fitted to the linear current, not its logarithm (no integer log on the step
+ *     path); on the 1 AU spectrum it agrees with a floating-point parabola to about 0.01 window.</li>
+ * <li>A step the executive abandons (SAFE, or a new nextStep before its reply) is left missing; a
+ *     sweep whose last reply never came is closed at the next nextStep.</li>
+ * </ul>
+ * Threading: one thread, the executive's. The classes hold no static mutable state.
+ */
+package dev.sweepline.fsw.sweep;

@@ -1,0 +1,151 @@
+package dev.sweepline.fsw.table;
+
+import dev.sweepline.fsw.link.InstrumentConstants;
+
+/**
+ * The sweep scheduler's tunables, one parameter table (commands.md). Plain int fields whose names
+ * carry the unit or the fixed-point scale ({@code Q8} = value * 256, {@code Q16} = value * 65536).
+ * Mutable for building and editing; the scheduler copies a validated set into its own storage, so
+ * a caller may reuse one instance. Check with {@link #validate()} before loading.
+ */
+public final class SweepParameters {
+    /** Upper limit of {@link #integrationPeriods}: one second of 1 kHz modulation (design limit). */
+    public static final int MAX_INTEGRATION_PERIODS = 1000;
+    /** Upper limit of {@link #fixedSettleMicros}: 100 ms (design limit). */
+    public static final int MAX_FIXED_SETTLE_MICROS = 100_000;
+    /** Upper limit of {@link #settleMicrosPerCodeQ8}: 16 us per code (design limit). */
+    public static final int MAX_SETTLE_MICROS_PER_CODE_Q8 = 16 * 256;
+    /** V_alpha / V_p at equal speed = m_alpha / (2 m_p) = 1.986300 (physics.md, alpha particles), Q16. */
+    public static final int ALPHA_RATIO_1_986300_Q16 = 130_174;
+
+    /** Modulation periods integrated per window (dwell); 8 periods = 8 ms at 1 kHz. */
+    public int integrationPeriods;
+    /** Settle time after every level change, microseconds (HV first-order settling, tau 150 us, plus margin). */
+    public int fixedSettleMicros;
+    /**
+     * Extra settle per DAC code of the larger rail change, microseconds, Q8. Default 1 us/code:
+     * the simulated HV slews 100 V/ms = 1000 codes/ms.
+     */
+    public int settleMicrosPerCodeQ8;
+    /** Smallest focus half-width, windows either side of the peak window. */
+    public int minHalfWidthWindows;
+    /** Focus half-width per window of measured FWHM, Q8 (384 = 1.5 FWHM either side, about 3.5 sigma). */
+    public int halfWidthPerFwhmQ8;
+    /** Most windows in a focus band. */
+    public int maxBandWindows;
+    /** Focus sweeps between forced surveys (K). */
+    public int resurveyEveryFocusSweeps;
+    /** Loss of lock: the peak current fell below this fraction of the reference peak, Q8. */
+    public int collapseFractionQ8;
+    /** Loss of lock: the refined peak moved by more than this many windows. */
+    public int jumpWindows;
+    /** Loss of lock: the peak window lies within this many windows of an unclipped band edge. */
+    public int edgeWindows;
+    /** Gain ranging: switch to a less sensitive range above this fraction of full scale, Q16 (80 %). */
+    public int gainUpFractionQ16;
+    /** Gain ranging: switch to a more sensitive range below this fraction of full scale, Q16 (2 %). */
+    public int gainDownFractionQ16;
+    /** Alpha-to-proton E/q ratio at equal speed, Q16 (physics.md: 1.986300). */
+    public int alphaRatioQ16;
+    /** Relative tolerance on the alpha ratio, Q16 (6 %, about 1.5 default windows of 3.8 %). */
+    public int alphaToleranceQ16;
+    /** Noise of one quadrant, ADC counts rms, in whichever range it is read (preamp + ADC design value). */
+    public int noiseCountsPerQuadrant;
+    /** A peak or a prominence is significant above this many noise sigmas. */
+    public int significanceSigmas;
+    /** A local maximum is a separate peak when its prominence exceeds this fraction of its height, Q8. */
+    public int prominenceFractionQ8;
+
+    /** The default set (values and reasons in the field docs and the sweep package design note). */
+    public static SweepParameters defaults() {
+        SweepParameters p = new SweepParameters();
+        p.integrationPeriods = 8;
+        p.fixedSettleMicros = 1000;
+        p.settleMicrosPerCodeQ8 = 256;
+        p.minHalfWidthWindows = 4;
+        p.halfWidthPerFwhmQ8 = 384;
+        p.maxBandWindows = 64;
+        p.resurveyEveryFocusSweeps = 16;
+        p.collapseFractionQ8 = 64;
+        p.jumpWindows = 6;
+        p.edgeWindows = 2;
+        p.gainUpFractionQ16 = 52_429;
+        p.gainDownFractionQ16 = 1_311;
+        p.alphaRatioQ16 = ALPHA_RATIO_1_986300_Q16;
+        p.alphaToleranceQ16 = 3_932;
+        p.noiseCountsPerQuadrant = 4;
+        p.significanceSigmas = 5;
+        p.prominenceFractionQ8 = 26;
+        return p;
+    }
+
+    /** A new instance with the same values. */
+    public SweepParameters copy() {
+        SweepParameters p = new SweepParameters();
+        p.copyFrom(this);
+        return p;
+    }
+
+    /** Copies every field of {@code other} into this set (allocation-free). */
+    public void copyFrom(SweepParameters other) {
+        integrationPeriods = other.integrationPeriods;
+        fixedSettleMicros = other.fixedSettleMicros;
+        settleMicrosPerCodeQ8 = other.settleMicrosPerCodeQ8;
+        minHalfWidthWindows = other.minHalfWidthWindows;
+        halfWidthPerFwhmQ8 = other.halfWidthPerFwhmQ8;
+        maxBandWindows = other.maxBandWindows;
+        resurveyEveryFocusSweeps = other.resurveyEveryFocusSweeps;
+        collapseFractionQ8 = other.collapseFractionQ8;
+        jumpWindows = other.jumpWindows;
+        edgeWindows = other.edgeWindows;
+        gainUpFractionQ16 = other.gainUpFractionQ16;
+        gainDownFractionQ16 = other.gainDownFractionQ16;
+        alphaRatioQ16 = other.alphaRatioQ16;
+        alphaToleranceQ16 = other.alphaToleranceQ16;
+        noiseCountsPerQuadrant = other.noiseCountsPerQuadrant;
+        significanceSigmas = other.significanceSigmas;
+        prominenceFractionQ8 = other.prominenceFractionQ8;
+    }
+
+    /**
+     * Checks the set.
+     *
+     * @return {@link TableStatus#OK}, or the reason code of the first group that is out of range
+     */
+    public int validate() {
+        if (integrationPeriods < 1 || integrationPeriods > MAX_INTEGRATION_PERIODS) {
+            return TableStatus.BAD_INTEGRATION;
+        }
+        if (fixedSettleMicros < 0 || fixedSettleMicros > MAX_FIXED_SETTLE_MICROS
+            || settleMicrosPerCodeQ8 < 0 || settleMicrosPerCodeQ8 > MAX_SETTLE_MICROS_PER_CODE_Q8) {
+            return TableStatus.BAD_SETTLE;
+        }
+        // a centred peak must not already sit on the edge, and the band must hold at least 2*min+1 windows
+        if (minHalfWidthWindows < 1 || minHalfWidthWindows <= edgeWindows
+            || halfWidthPerFwhmQ8 < 0 || halfWidthPerFwhmQ8 > 16 * 256
+            || maxBandWindows < 2 * minHalfWidthWindows + 1 || maxBandWindows > WindowTable.CAPACITY) {
+            return TableStatus.BAD_BAND;
+        }
+        if (resurveyEveryFocusSweeps < 1) {
+            return TableStatus.BAD_RESURVEY;
+        }
+        if (collapseFractionQ8 < 0 || collapseFractionQ8 > 256 || jumpWindows < 1
+            || edgeWindows < 0 || jumpWindows > WindowTable.CAPACITY) {
+            return TableStatus.BAD_LOCK_LOSS;
+        }
+        // hysteresis: a step down must land below the next range's up threshold
+        if (gainUpFractionQ16 <= 0 || gainUpFractionQ16 >= 65_536 || gainDownFractionQ16 <= 0
+            || (long) gainDownFractionQ16 * InstrumentConstants.RANGE_RATIO >= gainUpFractionQ16) {
+            return TableStatus.BAD_GAIN_THRESHOLDS;
+        }
+        if (alphaRatioQ16 <= 65_536 || alphaRatioQ16 > 4 * 65_536
+            || alphaToleranceQ16 <= 0 || alphaToleranceQ16 >= 65_536 / 4) {
+            return TableStatus.BAD_ALPHA;
+        }
+        if (noiseCountsPerQuadrant < 0 || noiseCountsPerQuadrant > 4096 || significanceSigmas < 1
+            || significanceSigmas > 100 || prominenceFractionQ8 < 0 || prominenceFractionQ8 > 256) {
+            return TableStatus.BAD_NOISE;
+        }
+        return TableStatus.OK;
+    }
+}

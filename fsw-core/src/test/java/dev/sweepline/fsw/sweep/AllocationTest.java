@@ -1,0 +1,36 @@
+package dev.sweepline.fsw.sweep;
+
+import dev.sweepline.fsw.link.SampleReply;
+import dev.sweepline.fsw.link.StepCommand;
+import dev.sweepline.fsw.table.SweepParameters;
+import org.junit.jupiter.api.Test;
+
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+/**
+ * Zero allocation on the step path (architecture.md, determinism: the per-step path allocates
+ * nothing): nextStep + ingest + sweep analysis over 10 windows of 10k steps after a 100k warm-up,
+ * with the rule of {@link AllocationMeter}. Not timed.
+ */
+class AllocationTest {
+    private long nowMicros;
+
+    @Test
+    void shouldAllocateNothingPerStep() {
+        SyntheticInstrument plasma = Fixtures.oneAu(81);
+        CannedReplies canned = new CannedReplies(Fixtures.TABLE, plasma);
+        SweepScheduler scheduler = new SweepScheduler(Fixtures.TABLE, SweepParameters.defaults(), SweepListener.NONE);
+        StepCommand step = new StepCommand();
+        SampleReply reply = new SampleReply();
+        AllocationMeter.assertAllocationFree(steps -> {
+            for (int k = 0; k < steps; k++) {
+                scheduler.nextStep(step, nowMicros);
+                nowMicros += step.durationMicros();
+                canned.answer(step, reply);
+                scheduler.ingest(reply, nowMicros);
+            }
+        });
+        // the measured loop went through surveys and focus sweeps, not one state
+        assertTrue(scheduler.sweepCount() > 2000, "sweeps " + scheduler.sweepCount());
+    }
+}
