@@ -1,11 +1,28 @@
 package dev.sweepline.sim.cli;
 
-/** Command-line entry point (filled in by its module's work). */
-public final class BenchMain {
-    private BenchMain() {
+import picocli.CommandLine;
+import picocli.CommandLine.Command;
+
+/** {@code sweepline-bench.jar}: the closed-loop bench and its tools. */
+@Command(name = "sweepline-bench", mixinStandardHelpOptions = true, version = "sweepline-bench 0.1",
+        description = "Closed-loop bench for the Faraday-cup flight software: runs, scenarios.",
+        subcommands = {RunCommand.class, ScenariosCommand.class, CommandLine.HelpCommand.class})
+public final class BenchMain implements Runnable {
+    @CommandLine.Spec
+    private CommandLine.Model.CommandSpec spec;
+
+    /** Runs the command line and exits with its status. */
+    public static void main(String[] args) {
+        System.exit(commandLine().execute(args));
     }
 
-    public static void main(String[] args) {
-        System.out.println("BenchMain: not yet wired");
+    /** The command line, for tests that run it in process. */
+    public static CommandLine commandLine() {
+        return new CommandLine(new BenchMain());
+    }
+
+    @Override
+    public void run() {
+        spec.commandLine().usage(System.out);
     }
 }

@@ -1,0 +1,33 @@
+package dev.sweepline.fsw.exec;
+
+import dev.sweepline.fsw.table.SweepParameters;
+import dev.sweepline.fsw.table.WindowTable;
+import dev.sweepline.fsw.telemetry.TelemetryWriter;
+
+/**
+ * Start-up configuration of the flight software: everything its buffers are sized from. Mutable
+ * while it is being set up, read once by {@link FlightSoftware}'s constructor.
+ */
+public final class FlightConfig {
+    /** The window table in force at start. */
+    public WindowTable table = WindowTable.defaultTable();
+    /** The sweep parameters in force at start. */
+    public SweepParameters parameters = SweepParameters.defaults();
+    /** Transfer frame length, octets. */
+    public int frameLength = TelemetryWriter.DEFAULT_FRAME_LENGTH;
+    /** Longest wait of a partly filled frame. */
+    public long flushIntervalMicros = TelemetryWriter.DEFAULT_FLUSH_INTERVAL_MICROS;
+    /** Housekeeping period (telemetry ICD §3.3). */
+    public long housekeepingPeriodMicros = 16_000_000L;
+    /** CCSDS 121 coding of spectra (telemetry ICD §4, compression 0x01); false sends raw samples. */
+    public boolean compressSpectra = true;
+    /**
+     * TAI seconds since 1958-01-01 at tick zero: 2030-03-01T00:00:00 TAI for the demo runs (an
+     * invented epoch: 72 years incl. 18 leap days to 2030-01-01, plus 59 days).
+     */
+    public long coarseTimeAtTickZero = ((72L * 365 + 18) + 59) * 86_400;
+    /** Reply time-out margin beyond the step duration (hardware ICD §4). */
+    public int timeoutMarginMicros = 20_000;
+    /** Re-sends of a step before a link time-out (hardware ICD §4). */
+    public int maxRetries = 2;
+}

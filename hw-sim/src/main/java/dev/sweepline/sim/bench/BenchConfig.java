@@ -1,0 +1,40 @@
+package dev.sweepline.sim.bench;
+
+import dev.sweepline.fsw.table.SweepParameters;
+import dev.sweepline.fsw.table.WindowTable;
+import dev.sweepline.fsw.telemetry.TelemetryWriter;
+import dev.sweepline.sim.instrument.InstrumentModel;
+import dev.sweepline.sim.scenario.Scenario;
+
+/**
+ * Everything one closed-loop run depends on; the same config gives the same bytes.
+ *
+ * @param scenario        the plasma to fly through
+ * @param seed            seeds the scenario's fluctuations and the instrument's noise
+ * @param durationSeconds simulated time to run
+ * @param table           the flight software's window table
+ * @param parameters      the flight software's sweep parameters
+ * @param instrument      the simulated instrument
+ * @param frameLength     telemetry transfer frame length, octets
+ * @param allocationBitsPerSecond the downlink allocation the telemetry is checked against; NaN for none
+ */
+public record BenchConfig(Scenario scenario, long seed, double durationSeconds, WindowTable table,
+        SweepParameters parameters, InstrumentModel instrument, int frameLength, double allocationBitsPerSecond) {
+
+    /** The demo instrument with the default table, parameters and frame length, no allocation. */
+    public static BenchConfig defaults(Scenario scenario, long seed, double durationSeconds) {
+        return new BenchConfig(scenario, seed, durationSeconds, WindowTable.defaultTable(),
+                SweepParameters.defaults(), InstrumentModel.demo(), TelemetryWriter.DEFAULT_FRAME_LENGTH, Double.NaN);
+    }
+
+    /** This config with another downlink allocation. */
+    public BenchConfig withAllocation(double bitsPerSecond) {
+        return new BenchConfig(scenario, seed, durationSeconds, table, parameters, instrument, frameLength,
+                bitsPerSecond);
+    }
+
+    /** Simulated duration in microseconds. */
+    public long durationMicros() {
+        return Math.round(durationSeconds * 1e6);
+    }
+}

@@ -1,0 +1,142 @@
+package dev.sweepline.sim.bench;
+
+import dev.sweepline.fsw.link.SampleReply;
+import dev.sweepline.fsw.link.StepCommand;
+import dev.sweepline.fsw.sweep.ModeChangeReason;
+import dev.sweepline.fsw.sweep.Spectrum;
+import dev.sweepline.fsw.sweep.SweepListener;
+import dev.sweepline.fsw.sweep.SweepMode;
+import dev.sweepline.sim.cup.FaradayCup;
+import dev.sweepline.sim.instrument.StepTruth;
+import dev.sweepline.sim.link.InProcessLink;
+import dev.sweepline.sim.plasma.IonPopulation;
+import dev.sweepline.sim.plasma.IonSpecies;
+import dev.sweepline.sim.plasma.PlasmaState;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Map;
+import java.util.TreeMap;
+import java.util.function.LongFunction;
+
+/**
+ * Watches the closed loop from outside the flight software: every executed step (with its truth)
+ * and every sweep decision, with the scenario's true peaks placed beside each sweep.
+ */
+public final class BenchRecorder implements SweepListener, InProcessLink.StepObserver {
+    private final WindowVolts windows;
+    private final FaradayCup cup;
+    private final LongFunction<PlasmaState> truthAt;
+    private final List<SweepRecord> sweeps = new ArrayList<>();
+    private final Map<String, Integer> modeChanges = new TreeMap<>();
+    private long steps;
+    private long integrationMicros;
+    private long saturatedSamples;
+    private long unsettledSamples;
+    private double chosenCentre = Double.NaN;
+
+    /**
+     * @param windows the table's windows as the HV supply makes them
+     * @param cup     the simulated cup, to place the true peaks where the instrument would see them
+     * @param truthAt the scenario's plasma at a simulated time (microseconds)
+     */
+    public BenchRecorder(WindowVolts windows, FaradayCup cup, LongFunction<PlasmaState> truthAt) {
+        this.windows = windows;
+        this.cup = cup;
+        this.truthAt = truthAt;
+    }
+
+    @Override
+    public void onExecuted(StepCommand step, SampleReply reply, StepTruth truth, long startMicros) {
+        steps++;
+        integrationMicros += truth.endMicros - truth.integrationStartMicros;
+        if ((reply.status & SampleReply.STATUS_SATURATED) != 0) {
+            saturatedSamples++;
+        }
+        if ((reply.status & SampleReply.STATUS_HV_UNSETTLED) != 0) {
+            unsettledSamples++;
+        }
+    }
+
+    @Override
+    public void onSweepComplete(Spectrum spectrum, long nowMicros) {
+        if (spectrum.count() == 0) {
+            return;
+        }
+        int saturated = 0;
+        for (int i = 0; i < spectrum.count(); i++) {
+            if ((spectrum.status(i) & SampleReply.STATUS_SATURATED) != 0) {
+                saturated++;
+            }
+        }
+        long mid = spectrum.startMicros() + (spectrum.endMicros() - spectrum.startMicros()) / 2;
+        PlasmaState truth = truthAt.apply(mid);
+        sweeps.add(new SweepRecord((int) spectrum.sweepNumber(), spectrum.mode(), spectrum.startMicros(),
+                spectrum.endMicros(), spectrum.window(0), spectrum.window(spectrum.count() - 1),
+                spectrum.peakWindowQ8() / 256.0, spectrum.mode() == SweepMode.FOCUS ? chosenCentre : Double.NaN,
+                trueWindow(truth, IonSpecies.PROTON), trueWindow(truth, IonSpecies.ALPHA), saturated));
+    }
+
+    @Override
+    public void onBandChosen(int firstWindow, int lastWindow, int peakWindowQ8, long nowMicros) {
+        chosenCentre = peakWindowQ8 / 256.0;
+    }
+
+    @Override
+    public void onModeChange(SweepMode from, SweepMode to, int reason, long nowMicros) {
+        modeChanges.merge(ModeChangeReason.name(reason), 1, Integer::sum);
+    }
+
+    /**
+     * The window where the noise-free current of one species peaks: the peak the instrument would
+     * see from that species alone (for a hot wind it lies well above the bulk-speed E/q, because the
+     * window current grows with v and with the window width). -1 when the species is absent.
+     */
+    private int trueWindow(PlasmaState plasma, IonSpecies species) {
+        for (IonPopulation p : plasma.populations()) {
+            if (p.species().equals(species)) {
+                PlasmaState alone = new PlasmaState(List.of(p), plasma.bx(), plasma.by(), plasma.bz());
+                int best = -1;
+                double bestAmps = 0;
+                for (int w = 0; w < windows.count(); w++) {
+                    double amps = cup.totalCurrent(alone, windows.lowVolts(w), windows.highVolts(w));
+                    if (amps > bestAmps) {
+                        bestAmps = amps;
+                        best = w;
+                    }
+                }
+                return best;
+            }
+        }
+        return -1;
+    }
+
+    /** Sweeps recorded so far, in order. */
+    public List<SweepRecord> sweeps() {
+        return sweeps;
+    }
+
+    /** Mode changes counted by reason name. */
+    public Map<String, Integer> modeChanges() {
+        return modeChanges;
+    }
+
+    /** Steps executed by the instrument. */
+    public long steps() {
+        return steps;
+    }
+
+    /** Time spent integrating, microseconds. */
+    public long integrationMicros() {
+        return integrationMicros;
+    }
+
+    /** Samples flagged saturated. */
+    public long saturatedSamples() {
+        return saturatedSamples;
+    }
+
+    /** Samples flagged as taken before the HV had settled. */
+    public long unsettledSamples() {
+        return unsettledSamples;
+    }
+}

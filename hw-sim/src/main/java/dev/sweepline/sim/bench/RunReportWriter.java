@@ -1,0 +1,144 @@
+package dev.sweepline.sim.bench;
+
+import com.fasterxml.jackson.databind.ObjectMapper;
+import com.fasterxml.jackson.databind.SerializationFeature;
+import dev.sweepline.fsw.sweep.SweepMode;
+import java.io.IOException;
+import java.io.PrintStream;
+import java.io.Writer;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+
+/**
+ * Writes what a run leaves for its user: {@code summary.json}, the sweep-by-sweep decision log with
+ * the truth beside it ({@code decisions.csv}), and the summary table on the console.
+ */
+public final class RunReportWriter {
+    private static final ObjectMapper JSON = new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT);
+
+    private RunReportWriter() {
+    }
+
+    /** The summary as an ordered map (JSON numbers; NaN becomes null, as JSON has no NaN). */
+    public static Map<String, Object> summaryMap(RunSummary s) {
+        Map<String, Object> m = new LinkedHashMap<>();
+        m.put("scenario", s.scenario());
+        m.put("seed", s.seed());
+        m.put("simulatedSeconds", s.simulatedSeconds());
+        m.put("wallSeconds", round(s.wallSeconds(), 3));
+        m.put("realTimeFactor", finite(round(s.realTimeFactor(), 1)));
+        m.put("steps", s.steps());
+        m.put("sweeps", modeMap(s.sweepsByMode()));
+        Map<String, Object> perSecond = new LinkedHashMap<>();
+        s.spectraPerSecond().forEach((mode, v) -> perSecond.put(mode.name().toLowerCase(Locale.ROOT), round(v, 4)));
+        m.put("spectraPerSecond", perSecond);
+        m.put("lockFraction", finite(s.lockFraction()));
+        m.put("alphaLocks", s.alphaLocks());
+        m.put("reacquireSweepsMax", s.reacquireSweepsMax());
+        m.put("reacquireSecondsMax", finite(s.reacquireSecondsMax()));
+        List<Map<String, Object>> jumps = new ArrayList<>();
+        for (Reacquisition r : s.reacquisitions()) {
+            Map<String, Object> j = new LinkedHashMap<>();
+            j.put("label", r.label());
+            j.put("frontSeconds", r.frontMicros() / 1e6);
+            j.put("reacquired", r.reacquired());
+            j.put("sweeps", r.sweeps());
+            j.put("seconds", finite(r.seconds()));
+            jumps.add(j);
+        }
+        m.put("jumps", jumps);
+        m.put("integratingFraction", round(s.integratingFraction(), 4));
+        m.put("saturatedSamples", s.saturatedSamples());
+        m.put("unsettledSamples", s.unsettledSamples());
+        m.put("modeChanges", s.modeChanges());
+        TelemetryFigures t = s.telemetry();
+        Map<String, Object> bps = new LinkedHashMap<>();
+        bps.put("total", round(t.frameBitsPerSecond(), 1));
+        Map<String, Object> byApid = new LinkedHashMap<>();
+        t.packetBitsPerSecond().forEach((k, v) -> byApid.put(k, round(v, 1)));
+        bps.put("byApid", byApid);
+        Map<String, Object> byMode = new LinkedHashMap<>();
+        t.spectrumBitsPerSecond().forEach((k, v) -> byMode.put(k.name().toLowerCase(Locale.ROOT), round(v, 1)));
+        bps.put("spectraByMode", byMode);
+        m.put("bitsPerSecond", bps);
+        m.put("allocationBitsPerSecond", finite(t.allocationBitsPerSecond()));
+        m.put("allocationMargin", finite(round(t.margin(), 4)));
+        m.put("frames", t.frames());
+        m.put("decisionHash", s.decisionHash());
+        return m;
+    }
+
+    /** Writes {@code summary.json} and {@code decisions.csv} into {@code dir}, creating it. */
+    public static void write(Path dir, ClosedLoopBench.Result result) throws IOException {
+        Files.createDirectories(dir);
+        JSON.writeValue(dir.resolve("summary.json").toFile(), summaryMap(result.summary()));
+        try (Writer w = Files.newBufferedWriter(dir.resolve("decisions.csv"))) {
+            w.write("sweep,mode,startSeconds,endSeconds,firstWindow,lastWindow,peakWindow,bandCentre,"
+                    + "trueProtonWindow,trueAlphaWindow,locked,alphaLock,saturatedSamples\n");
+            for (SweepRecord r : result.recorder().sweeps()) {
+                w.write(String.format(Locale.ROOT, "%d,%s,%.6f,%.6f,%d,%d,%.3f,%s,%d,%d,%b,%b,%d%n", r.sweep(),
+                        r.mode().name().toLowerCase(Locale.ROOT), r.startMicros() / 1e6, r.endMicros() / 1e6,
+                        r.firstWindow(), r.lastWindow(), r.peakWindow(),
+                        Double.isNaN(r.bandCentre()) ? "" : String.format(Locale.ROOT, "%.3f", r.bandCentre()),
+                        r.trueProtonWindow(),
+                        r.trueAlphaWindow(), r.locked(), r.alphaLock(), r.saturatedSamples()));
+            }
+        }
+    }
+
+    /** Prints the summary as a two-column table. */
+    public static void printTable(RunSummary s, PrintStream out) {
+        String line = "-".repeat(52);
+        out.println(line);
+        row(out, "scenario", s.scenario() + " (seed " + s.seed() + ")");
+        row(out, "simulated", String.format(Locale.ROOT, "%.1f s in %.2f s wall (x%.0f real time)",
+                s.simulatedSeconds(), s.wallSeconds(), s.realTimeFactor()));
+        row(out, "steps", Long.toString(s.steps()));
+        for (SweepMode m : SweepMode.values()) {
+            row(out, "sweeps " + m.name().toLowerCase(Locale.ROOT), String.format(Locale.ROOT, "%d (%.3f /s)",
+                    s.sweepsByMode().get(m), s.spectraPerSecond().get(m)));
+        }
+        row(out, "lock fraction", Double.isNaN(s.lockFraction()) ? "no focus sweeps"
+                : String.format(Locale.ROOT, "%.4f", s.lockFraction()));
+        row(out, "alpha locks", Integer.toString(s.alphaLocks()));
+        row(out, "reacquire (max)", s.reacquisitions().isEmpty() ? "no jumps in scenario"
+                : String.format(Locale.ROOT, "%d sweeps, %.3f s", s.reacquireSweepsMax(), s.reacquireSecondsMax()));
+        row(out, "integrating", String.format(Locale.ROOT, "%.1f %% of the time", 100 * s.integratingFraction()));
+        row(out, "saturated samples", Long.toString(s.saturatedSamples()));
+        TelemetryFigures t = s.telemetry();
+        row(out, "telemetry", String.format(Locale.ROOT, "%.0f bit/s in %d frames", t.frameBitsPerSecond(), t.frames()));
+        if (!Double.isNaN(t.allocationBitsPerSecond())) {
+            row(out, "allocation", String.format(Locale.ROOT, "%.0f bit/s, margin %+.1f %%%s",
+                    t.allocationBitsPerSecond(), 100 * t.margin(), t.margin() < 0 ? "  OVER BUDGET" : ""));
+        }
+        row(out, "decision hash", s.decisionHash());
+        out.println(line);
+    }
+
+    private static void row(PrintStream out, String key, String value) {
+        out.printf(Locale.ROOT, "%-20s %s%n", key, value);
+    }
+
+    private static Map<String, Integer> modeMap(Map<SweepMode, Integer> byMode) {
+        Map<String, Integer> m = new LinkedHashMap<>();
+        byMode.forEach((mode, v) -> m.put(mode.name().toLowerCase(Locale.ROOT), v));
+        return m;
+    }
+
+    private static Object finite(double v) {
+        return Double.isFinite(v) ? v : null;
+    }
+
+    private static double round(double v, int digits) {
+        if (!Double.isFinite(v)) {
+            return v;
+        }
+        double scale = Math.pow(10, digits);
+        return Math.round(v * scale) / scale;
+    }
+}

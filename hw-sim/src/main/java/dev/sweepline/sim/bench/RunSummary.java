@@ -1,0 +1,93 @@
+package dev.sweepline.sim.bench;
+
+import dev.sweepline.fsw.sweep.SweepMode;
+import java.util.ArrayList;
+import java.util.EnumMap;
+import java.util.List;
+import java.util.Map;
+
+/**
+ * The figures of one closed-loop run, computed from the recorder after the run.
+ *
+ * @param scenario            scenario name
+ * @param seed                run seed
+ * @param simulatedSeconds    simulated duration
+ * @param wallSeconds         wall time the loop took
+ * @param steps               instrument steps executed
+ * @param sweepsByMode        completed sweeps per mode
+ * @param spectraPerSecond    completed sweeps per simulated second, per mode
+ * @param lockFraction        focus sweeps whose band held the true proton peak, over all focus sweeps (NaN if none)
+ * @param alphaLocks          focus sweeps centred on the true alpha peak
+ * @param reacquisitions      one per scenario jump
+ * @param integratingFraction integration time over simulated time
+ * @param saturatedSamples    samples flagged saturated
+ * @param unsettledSamples    samples flagged HV-unsettled
+ * @param modeChanges         mode changes by reason
+ * @param telemetry           bits per second generated, against the allocation
+ * @param decisionHash        the flight software's running hash of its decisions (hex)
+ */
+public record RunSummary(String scenario, long seed, double simulatedSeconds, double wallSeconds, long steps,
+        Map<SweepMode, Integer> sweepsByMode, Map<SweepMode, Double> spectraPerSecond, double lockFraction,
+        int alphaLocks, List<Reacquisition> reacquisitions, double integratingFraction, long saturatedSamples,
+        long unsettledSamples, Map<String, Integer> modeChanges, TelemetryFigures telemetry, String decisionHash) {
+
+    /** Largest sweep count to reacquire over all jumps (0 when the scenario has none; -1 if one never was). */
+    public int reacquireSweepsMax() {
+        int max = 0;
+        for (Reacquisition r : reacquisitions) {
+            if (!r.reacquired()) {
+                return -1;
+            }
+            max = Math.max(max, r.sweeps());
+        }
+        return max;
+    }
+
+    /** Longest time to reacquire over all jumps, seconds (0 without jumps; NaN if one never was). */
+    public double reacquireSecondsMax() {
+        double max = 0;
+        for (Reacquisition r : reacquisitions) {
+            if (!r.reacquired()) {
+                return Double.NaN;
+            }
+            max = Math.max(max, r.seconds());
+        }
+        return max;
+    }
+
+    /** Simulated seconds per wall second. */
+    public double realTimeFactor() {
+        return wallSeconds > 0 ? simulatedSeconds / wallSeconds : Double.POSITIVE_INFINITY;
+    }
+
+    /** The figures of a finished run. */
+    static RunSummary of(BenchConfig config, BenchRecorder recorder, TelemetryFigures telemetry, double wallSeconds,
+            String decisionHash) {
+        Map<SweepMode, Integer> byMode = new EnumMap<>(SweepMode.class);
+        Map<SweepMode, Double> perSecond = new EnumMap<>(SweepMode.class);
+        for (SweepMode m : SweepMode.values()) {
+            byMode.put(m, 0);
+        }
+        int focus = 0;
+        int locked = 0;
+        int alpha = 0;
+        for (SweepRecord r : recorder.sweeps()) {
+            byMode.merge(r.mode(), 1, Integer::sum);
+            if (r.mode() == SweepMode.FOCUS) {
+                focus++;
+                locked += r.locked() ? 1 : 0;
+                alpha += r.alphaLock() ? 1 : 0;
+            }
+        }
+        double seconds = config.durationSeconds();
+        for (SweepMode m : SweepMode.values()) {
+            perSecond.put(m, byMode.get(m) / seconds);
+        }
+        List<Reacquisition> reacq = new ArrayList<>();
+        config.scenario().jumps().forEach(j -> reacq.add(Reacquisition.after(j, recorder.sweeps())));
+        return new RunSummary(config.scenario().name(), config.seed(), seconds, wallSeconds, recorder.steps(),
+                byMode, perSecond, focus == 0 ? Double.NaN : (double) locked / focus, alpha, reacq,
+                recorder.integrationMicros() / (seconds * 1e6), recorder.saturatedSamples(),
+                recorder.unsettledSamples(), recorder.modeChanges(), telemetry, decisionHash);
+    }
+}

@@ -1,0 +1,72 @@
+package dev.sweepline.sim.bench;
+
+import dev.sweepline.fsw.table.WindowTable;
+import dev.sweepline.sim.hv.HvCalibration;
+
+/**
+ * The energy-per-charge windows of a table as the real HV supply makes them (the table's DAC codes
+ * through the supply's calibration): the bench uses them to place the true peaks on the window axis.
+ */
+public final class WindowVolts {
+    private final double[] lowVolts;
+    private final double[] highVolts;
+
+    /** The windows of {@code table} through {@code calibration}. */
+    public WindowVolts(WindowTable table, HvCalibration calibration) {
+        int n = table.count();
+        lowVolts = new double[n];
+        highVolts = new double[n];
+        for (int w = 0; w < n; w++) {
+            lowVolts[w] = calibration.volts(table.dacLow(w));
+            highVolts[w] = calibration.volts(table.dacHigh(w));
+        }
+    }
+
+    /** Number of windows. */
+    public int count() {
+        return lowVolts.length;
+    }
+
+    /**
+     * The window holding {@code volts}: its index, -1 below the first window, {@link #count()} above
+     * the last; in a gap between windows, the nearer one.
+     */
+    public int windowOf(double volts) {
+        if (volts < lowVolts[0]) {
+            return -1;
+        }
+        int last = lowVolts.length - 1;
+        if (volts >= highVolts[last]) {
+            return lowVolts.length;
+        }
+        int lo = 0;
+        int hi = last;
+        while (lo < hi) { // first window whose high edge lies above volts
+            int mid = (lo + hi) >>> 1;
+            if (highVolts[mid] <= volts) {
+                lo = mid + 1;
+            } else {
+                hi = mid;
+            }
+        }
+        if (volts >= lowVolts[lo] || lo == 0) {
+            return lo;
+        }
+        return (lowVolts[lo] - volts) < (volts - highVolts[lo - 1]) ? lo : lo - 1;
+    }
+
+    /** Low edge of window {@code w}, volts. */
+    public double lowVolts(int w) {
+        return lowVolts[w];
+    }
+
+    /** High edge of window {@code w}, volts. */
+    public double highVolts(int w) {
+        return highVolts[w];
+    }
+
+    /** Geometric centre of window {@code w}, volts. */
+    public double centreVolts(int w) {
+        return Math.sqrt(lowVolts[w] * highVolts[w]);
+    }
+}
