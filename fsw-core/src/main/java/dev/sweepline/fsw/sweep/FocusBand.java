@@ -8,7 +8,7 @@ import dev.sweepline.fsw.table.WindowTable;
  * Band = refined peak window +/- max(minHalfWidth, FWHM * halfWidthPerFwhm), at most maxBandWindows
  * wide, clipped (not shifted) to the table. Loss of lock compares each focus spectrum with the
  * reference peak: no peak, current collapse, peak on an unclipped edge, peak jump (including a jump
- * to about the alpha ratio).
+ * to about the alpha ratio). A peak on an edge first turns the band into an edge search (R18).
  */
 final class FocusBand {
     private final int[] centreCode;
@@ -19,6 +19,7 @@ final class FocusBand {
     private int last;
     private int referencePeakQ8;
     private int referencePeakUnits;
+    private boolean searching;
 
     /**
      * @param centreCode the active table's centre codes (owned and kept current by the scheduler)
@@ -60,6 +61,31 @@ final class FocusBand {
         referencePeakQ8 = s.peakWindowQ8();
         referencePeakUnits = s.peakCurrentUnits();
         valid = true;
+        searching = false;
+    }
+
+    /** True while the band is an edge search (the peak ran out of the last band). */
+    boolean searching() {
+        return searching;
+    }
+
+    /**
+     * Turns the band into an edge search after the peak of {@code s} ran onto one of its edges: the new
+     * band keeps the half-width on the inner side of that peak and reaches {@code edgeSearchWindows}
+     * beyond the edge, so a peak that moved out (a shock, a fast stream) is caught by the next focus
+     * sweep instead of a full survey. The reference peak is kept for the collapse check.
+     */
+    void searchBeyondEdge(Spectrum s, int windowCount) {
+        int p = s.window(s.peakIndex());
+        int half = Math.max(params.minHalfWidthWindows, (last - first) / 2);
+        if (last - p < p - first) { // upper edge
+            first = Math.max(0, p - half);
+            last = Math.min(windowCount - 1, last + params.edgeSearchWindows);
+        } else {
+            last = Math.min(windowCount - 1, p + half);
+            first = Math.max(0, first - params.edgeSearchWindows);
+        }
+        searching = true;
     }
 
     /**
@@ -71,14 +97,21 @@ final class FocusBand {
         if (!s.peakValid()) {
             return ModeChangeReason.NO_PEAK;
         }
-        if ((long) s.peakCurrentUnits() * 256 < (long) referencePeakUnits * params.collapseFractionQ8) {
-            return ModeChangeReason.CURRENT_COLLAPSE;
-        }
         int p = s.window(s.peakIndex());
         boolean lowEdge = first > 0 && p - first < params.edgeWindows;
         boolean highEdge = last < windowCount - 1 && last - p < params.edgeWindows;
         if (lowEdge || highEdge) {
+            // before the collapse test: a peak that ran out of the band leaves only its flank inside
             return ModeChangeReason.PEAK_ON_EDGE;
+        }
+        if ((long) s.peakCurrentUnits() * 256 < (long) referencePeakUnits * params.collapseFractionQ8) {
+            return ModeChangeReason.CURRENT_COLLAPSE;
+        }
+        if (searching) {
+            // the peak is expected to have moved, possibly by about the alpha ratio (a strong shock);
+            // the search band starts at the old peak, so were the protons still there the peak
+            // finder's own alpha test would have kept them
+            return ModeChangeReason.NONE;
         }
         if (Math.abs(s.peakWindowQ8() - referencePeakQ8) > (params.jumpWindows << 8)
             || atAlphaRatio(s.peakWindowQ8(), referencePeakQ8, windowCount)) {

@@ -204,7 +204,12 @@ public final class SweepScheduler {
             case FOCUS:
                 focusSweepsSinceSurvey++;
                 int lost = band.lossOfLock(done, config.windowCount());
-                if (lost != NONE) {
+                if (lost == ModeChangeReason.PEAK_ON_EDGE && !band.searching() && params.edgeSearchWindows > 0) {
+                    band.searchBeyondEdge(done, config.windowCount());
+                    hash.add(band.first());
+                    hash.add(band.last());
+                    listener.onBandChosen(band.first(), band.last(), done.peakWindowQ8(), nowMicros);
+                } else if (lost != NONE) {
                     changeMode(SweepMode.SURVEY, lost, nowMicros);
                 } else if (focusSweepsSinceSurvey >= params.resurveyEveryFocusSweeps) {
                     changeMode(SweepMode.SURVEY, ModeChangeReason.RESURVEY, nowMicros);

@@ -100,6 +100,12 @@
  *     (0 bytes in at least 8 of 10 windows of 10k steps, none over 1 kB: the test-side AllocationMeter
  *     says why windows), NoFloatingPointTest
  *     (bytecode scan), ArchitectureTest, SchedulerStepBenchmark (JMH, -prof gc).</i></li>
+ * <li><b>R18 Edge search.</b> A focus peak on an unclipped band edge does not drop to survey at once:
+ *     the next focus band keeps the inner half-width and reaches edgeSearchWindows beyond that edge
+ *     (no jump or alpha-ratio check against the old peak on that sweep: the search band starts at the old
+ *     peak, so the peak finder's in-spectrum alpha test still applies); a second edge, a collapse or
+ *     no peak gives SURVEY. This holds a shock's new peak within 2 sweeps even when the front lands at
+ *     the end of a survey. <i>EdgeSearchTest; hw-sim SweepPropertiesTest (1000 shocked winds).</i></li>
  * </ol>
  *
  * <h2>Choices worth knowing</h2>

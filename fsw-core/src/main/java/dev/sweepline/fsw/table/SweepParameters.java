@@ -41,6 +41,12 @@ public final class SweepParameters {
     public int jumpWindows;
     /** Loss of lock: the peak window lies within this many windows of an unclipped band edge. */
     public int edgeWindows;
+    /**
+     * Edge search: when the peak runs onto a band edge, the next focus band reaches this many windows
+     * beyond that edge (0: fall back to survey at once). 24 default windows is x2.45 in E/q, enough for
+     * a speed jump of +55 %; a shock's +35 % is x1.82 (physics.md, Rankine-Hugoniot row).
+     */
+    public int edgeSearchWindows;
     /** Gain ranging: switch to a less sensitive range above this fraction of full scale, Q16 (80 %). */
     public int gainUpFractionQ16;
     /** Gain ranging: switch to a more sensitive range below this fraction of full scale, Q16 (2 %). */
@@ -69,6 +75,7 @@ public final class SweepParameters {
         p.collapseFractionQ8 = 64;
         p.jumpWindows = 6;
         p.edgeWindows = 2;
+        p.edgeSearchWindows = 24;
         p.gainUpFractionQ16 = 52_429;
         p.gainDownFractionQ16 = 1_311;
         p.alphaRatioQ16 = ALPHA_RATIO_1_986300_Q16;
@@ -98,6 +105,7 @@ public final class SweepParameters {
         collapseFractionQ8 = other.collapseFractionQ8;
         jumpWindows = other.jumpWindows;
         edgeWindows = other.edgeWindows;
+        edgeSearchWindows = other.edgeSearchWindows;
         gainUpFractionQ16 = other.gainUpFractionQ16;
         gainDownFractionQ16 = other.gainDownFractionQ16;
         alphaRatioQ16 = other.alphaRatioQ16;
@@ -130,7 +138,8 @@ public final class SweepParameters {
             return TableStatus.BAD_RESURVEY;
         }
         if (collapseFractionQ8 < 0 || collapseFractionQ8 > 256 || jumpWindows < 1
-            || edgeWindows < 0 || jumpWindows > WindowTable.CAPACITY) {
+            || edgeWindows < 0 || jumpWindows > WindowTable.CAPACITY
+            || edgeSearchWindows < 0 || edgeSearchWindows > WindowTable.CAPACITY) {
             return TableStatus.BAD_LOCK_LOSS;
         }
         // hysteresis: a step down must land below the next range's up threshold

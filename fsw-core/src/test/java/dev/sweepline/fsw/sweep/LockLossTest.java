@@ -87,7 +87,9 @@ class LockLossTest {
     void shouldDetectPeakOnEdge() {
         SyntheticInstrument plasma = Fixtures.oneAu(36);
         RecordingListener l = new RecordingListener();
-        ClosedLoop loop = locked(plasma, SweepParameters.defaults(), l);
+        SweepParameters p = SweepParameters.defaults();
+        p.edgeSearchWindows = 0; // no edge search: the edge drops to survey at once (R10)
+        ClosedLoop loop = locked(plasma, p, l);
         int half = (loop.scheduler.bandLast() - loop.scheduler.bandFirst()) / 2;
         // move the peak half-width + 3 windows up (E/q x 1.0381^n, speed x its square root): outside the band
         plasma.speedKmPerS *= Math.sqrt(Math.pow(120, (half + 3) / 128.0));
@@ -95,6 +97,46 @@ class LockLossTest {
         assertEquals(ModeChangeReason.PEAK_ON_EDGE, l.lastChange().reason());
         Spectrum s = loop.scheduler.lastSpectrum();
         assertEquals(s.count() - 1, s.peakIndex());
+    }
+
+    @Test
+    void shouldSearchBeyondTheEdgeAndHoldTheMovedPeak() {
+        SyntheticInstrument plasma = Fixtures.oneAu(36);
+        RecordingListener l = new RecordingListener();
+        ClosedLoop loop = locked(plasma, SweepParameters.defaults(), l);
+        int changes = l.changes.size();
+        int oldLast = loop.scheduler.bandLast();
+        int half = (oldLast - loop.scheduler.bandFirst()) / 2;
+        // the peak moves half-width + 3 windows up, out of the band (as in shouldDetectPeakOnEdge)
+        plasma.speedKmPerS *= Math.sqrt(Math.pow(120, (half + 3) / 128.0));
+        loop.runSweeps(1);
+        // R18: still FOCUS, the band now reaches edgeSearchWindows (24) beyond the old upper edge
+        assertEquals(SweepMode.FOCUS, loop.scheduler.mode());
+        assertEquals(changes, l.changes.size());
+        assertEquals(oldLast + SweepParameters.defaults().edgeSearchWindows, loop.scheduler.bandLast());
+        loop.runSweeps(1);
+        // the search sweep found the peak inside: a normal band is chosen around it, lock held
+        int truth = Fixtures.argmax(Fixtures.trueCurrents(plasma));
+        assertEquals(SweepMode.FOCUS, loop.scheduler.mode());
+        assertTrue(loop.scheduler.bandFirst() < truth && truth < loop.scheduler.bandLast(), "truth " + truth);
+    }
+
+    @Test
+    void shouldSurveyWhenTheEdgeSearchFindsTheEdgeAgain() {
+        SyntheticInstrument plasma = Fixtures.oneAu(36);
+        RecordingListener l = new RecordingListener();
+        ClosedLoop loop = locked(plasma, SweepParameters.defaults(), l);
+        int half = (loop.scheduler.bandLast() - loop.scheduler.bandFirst()) / 2;
+        plasma.speedKmPerS *= Math.sqrt(Math.pow(120, (half + 3) / 128.0));
+        loop.runSweeps(1); // edge: search band
+        // 24 more windows: the peak sits 3 windows beyond the search band's top (old top + 24)
+        plasma.speedKmPerS *= Math.sqrt(Math.pow(120, 24 / 128.0));
+        loop.runSweeps(1);
+        assertEquals(SweepMode.SURVEY, loop.scheduler.mode());
+        int reason = l.lastChange().reason();
+        // the search band sees the flank on its edge, or too little of it: either way, survey (R18)
+        assertTrue(reason == ModeChangeReason.PEAK_ON_EDGE || reason == ModeChangeReason.CURRENT_COLLAPSE,
+                ModeChangeReason.name(reason));
     }
 
     @Test
