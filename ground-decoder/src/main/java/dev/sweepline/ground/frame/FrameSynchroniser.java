@@ -38,6 +38,8 @@ public final class FrameSynchroniser {
     private long garbageFrom = -1;
     private int garbageOctets;
     private boolean finished;
+    /** True when {@link #start} is just past a good frame (octets before it are still in the buffer). */
+    private boolean afterGoodFrame;
 
     /**
      * @param frameOctets fixed frame length L in octets (128..2048), or {@link #AUTO_LENGTH}
@@ -100,8 +102,12 @@ public final class FrameSynchroniser {
                 break;
             }
             if (!AsmSearch.isAsm(buf, start, end)) {
-                int i = AsmSearch.find(buf, start + 1, end);
+                // right after a good frame, also look a few octets back: a stream that slipped by 1-3
+                // octets (a short frame whose missing tail matched the next ASM's head) keeps the next frame
+                int from = afterGoodFrame ? Math.max(0, start - (FrameConstants.ASM_OCTETS - 1)) : start + 1;
+                int i = AsmSearch.find(buf, from, end);
                 if (i < 0) {
+                    afterGoodFrame = false;
                     int keep = eof ? 0 : FrameConstants.ASM_OCTETS - 1;
                     addGarbage(start, avail - keep);
                     start = end - keep;
@@ -110,6 +116,7 @@ public final class FrameSynchroniser {
                 addGarbage(start, i - start);
                 start = i;
             }
+            afterGoodFrame = false;
             flushGarbage();
             int f = start + FrameConstants.ASM_OCTETS;
             if (end - f < frameLen) {
@@ -142,6 +149,7 @@ public final class FrameSynchroniser {
                 listener.onBadFrame(bad, streamOffset(f), frameLen);
             } else {
                 listener.onFrame(buf, f, frameLen, streamOffset(f));
+                afterGoodFrame = true;
             }
             start = f + frameLen;
         }
@@ -220,12 +228,15 @@ public final class FrameSynchroniser {
     }
 
     private void compactNow() {
-        if (start == 0) {
+        // after a good frame keep its last 3 octets: the slip search may look back at them
+        int keep = afterGoodFrame ? Math.min(start, FrameConstants.ASM_OCTETS - 1) : 0;
+        int from = start - keep;
+        if (from == 0) {
             return;
         }
-        System.arraycopy(buf, start, buf, 0, end - start);
-        base += start;
-        end -= start;
-        start = 0;
+        System.arraycopy(buf, from, buf, 0, end - from);
+        base += from;
+        end -= from;
+        start = keep;
     }
 }

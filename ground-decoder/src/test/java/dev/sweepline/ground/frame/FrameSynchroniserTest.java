@@ -120,6 +120,21 @@ class FrameSynchroniserTest {
         assertTrue(ev.stream().noneMatch(e -> e.startsWith("GOOD")), ev.toString());
     }
 
+    @Test
+    void shouldKeepTheNextFrameWhenAFrameOneOctetShortStillChecks() {
+        // find an idle-frame variant whose FECF ends in 0x1A, the ASM's first octet (ICD §1)
+        byte[] x = Hex.bytes(GoldenFrames.IDLE_FRAME);
+        for (int v = 0; (x[L - 1] & 0xFF) != 0x1A; v++) {
+            reCrc(x, 10, (byte) v);
+        }
+        byte[] y = Hex.bytes(GoldenFrames.HOUSEKEEPING_WITH_IDLE_TAIL);
+        // the stream lost X's last octet; the next ASM's 0x1A stands in for it, so X still checks
+        byte[] s = cat(Hex.ASM, java.util.Arrays.copyOf(x, L - 1), Hex.ASM, y);
+        // X at 4 (MC 8), then Y one octet early: 4 + 127 + 4 = 135 (MC 5)
+        assertEquals(List.of("GOOD@4 mc=8", "GOOD@135 mc=5"), run(s, 1));
+        assertEquals(List.of("GOOD@4 mc=8", "GOOD@135 mc=5"), run(s, s.length));
+    }
+
     /** Sets octet i, then rewrites the FECF so that only the header check can reject the frame. */
     private static byte[] reCrc(byte[] f, int i, byte v) {
         f[i] = v;
