@@ -23,7 +23,8 @@
  * <p>Choices: the FECF is checked before the header (a header is only trusted under a good CRC); a frame
  * whose CRC fails is searched for an ASM inside it, so that a truncated frame does not swallow the next
  * one; the ASM must match exactly (no bit-error tolerance), so a frame with a damaged ASM is skipped as
- * garbage. The synchroniser reports every frame of the right SCID, including idle frames; per-VC
+ * garbage; right after a good frame a missing ASM is also looked for up to 3 octets back, so a stream
+ * that slipped by an octet or three keeps the next frame. The synchroniser reports every frame of the right SCID, including idle frames; per-VC
  * continuity is the packet layer's business.
  */
 package dev.sweepline.ground.frame;
