@@ -1,0 +1,51 @@
+package dev.sweepline.ground.cli;
+
+import dev.sweepline.ground.decode.DecodeStats;
+import dev.sweepline.ground.decode.TelemetryDecoder;
+import java.io.IOException;
+import java.io.PrintWriter;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.concurrent.Callable;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.Spec;
+import picocli.CommandLine.Model.CommandSpec;
+
+/** {@code inspect FILE}: a per-frame / per-packet listing on standard output. */
+@Command(name = "inspect", mixinStandardHelpOptions = true,
+        description = "Lists every frame, reject, packet and decoded record of a file of ASM + TM frames.")
+final class InspectCommand implements Callable<Integer> {
+    @Parameters(index = "0", paramLabel = "FILE", description = "File of ASM + TM frames.")
+    Path input;
+
+    @Mixin
+    StreamOptions options = new StreamOptions();
+
+    @Spec
+    CommandSpec spec;
+
+    @Override
+    public Integer call() {
+        PrintWriter out = spec.commandLine().getOut();
+        if (!Files.isReadable(input) || Files.isDirectory(input)) {
+            spec.commandLine().getErr().println("cannot read " + input);
+            return ExitCodes.UNREADABLE_INPUT;
+        }
+        TelemetryDecoder d = new TelemetryDecoder(options.config(), Ccsds121Lookup.find(), new InspectListing(out));
+        try {
+            StreamReader.feed(input, d);
+        } catch (IOException e) {
+            spec.commandLine().getErr().println("cannot read " + input + ": " + e.getMessage());
+            return ExitCodes.UNREADABLE_INPUT;
+        }
+        DecodeStats s = d.stats();
+        out.printf("frame length %d%s; %d good frames (%d idle), bad %s, %d garbage octets; "
+                        + "%d survey + %d focus spectra, %d housekeeping, %d events%n",
+                d.frameOctets(), d.frameLengthDetected() ? " (detected)" : "", s.framesGood(), s.framesIdle(),
+                s.framesBad(), s.garbageOctets(), s.spectraSurvey(), s.spectraFocus(), s.housekeeping(), s.events());
+        out.flush();
+        return ExitCodes.OK;
+    }
+}

@@ -1,0 +1,27 @@
+package dev.sweepline.ground.cli;
+
+import dev.sweepline.ground.decode.DecoderConfig;
+import dev.sweepline.ground.frame.FrameConstants;
+import dev.sweepline.ground.frame.FrameSynchroniser;
+import picocli.CommandLine.Option;
+
+/** Options shared by the commands: frame length and spacecraft id. */
+final class StreamOptions {
+    @Option(names = "--frame-length", defaultValue = "auto", paramLabel = "OCTETS|auto",
+            description = "Frame length L in octets (128..2048, ICD §1), or auto to detect it "
+                    + "(falling back to 1024). Default: ${DEFAULT-VALUE}.")
+    String frameLength;
+
+    @Option(names = "--scid", defaultValue = "0x2C5", paramLabel = "ID",
+            description = "Spacecraft id the frames must carry (ICD §1). Default: ${DEFAULT-VALUE}.")
+    String scid;
+
+    DecoderConfig config() {
+        int l = "auto".equalsIgnoreCase(frameLength) ? FrameSynchroniser.AUTO_LENGTH : Integer.decode(frameLength);
+        if (l != FrameSynchroniser.AUTO_LENGTH
+                && (l < FrameConstants.MIN_FRAME_OCTETS || l > FrameConstants.MAX_FRAME_OCTETS)) {
+            throw new IllegalArgumentException("--frame-length must be 128..2048 or auto: " + frameLength);
+        }
+        return new DecoderConfig(l, Integer.decode(scid));
+    }
+}

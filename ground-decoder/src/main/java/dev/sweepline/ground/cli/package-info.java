@@ -1,0 +1,17 @@
+/**
+ * Command line of the ground decoder ({@code sweepline-ground.jar}): {@code decode FILE --out DIR} writes
+ * {@code spectra.csv} (one row per window per spectrum) and {@code summary.json} (counts, gaps, bits per
+ * APID, time span); {@code inspect FILE} lists frames and packets.
+ *
+ * <h2>Design note</h2>
+ * <p>Requirements and how each is verified ({@code DecodeCommandTest}, {@code InspectCommandTest}):
+ * <ol>
+ *   <li>C1 a good stream gives one CSV row per window with the currents of ICD §4.</li>
+ *   <li>C2 bad frames are counted by reason in summary.json and do not change the exit status (0).</li>
+ *   <li>C3 an unreadable input gives exit status 2 and no exception.</li>
+ * </ol>
+ * <p>The CCSDS 121 decoder for compression 0x01 is found with {@link java.util.ServiceLoader} as a
+ * {@link dev.sweepline.ground.spectrum.QuadrantDecompressor}; without one those spectra are counted
+ * under {@code spectrumErrors.DECOMPRESSOR_UNAVAILABLE}.
+ */
+package dev.sweepline.ground.cli;

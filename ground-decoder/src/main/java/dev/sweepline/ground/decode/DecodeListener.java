@@ -1,0 +1,60 @@
+package dev.sweepline.ground.decode;
+
+import dev.sweepline.ground.frame.FrameReason;
+import dev.sweepline.ground.packet.PacketAnomaly;
+import dev.sweepline.ground.spectrum.DecodedSpectrum;
+import dev.sweepline.ground.spectrum.SpectrumError;
+
+/**
+ * Everything the {@link TelemetryDecoder} finds, in stream order, on the feeding thread. Every method
+ * does nothing by default; buffers are only valid during the call.
+ */
+public interface DecodeListener {
+    /** A good frame (idle frames included). */
+    default void onFrame(byte[] buf, int off, int frameOctets, long streamOffset) {
+    }
+
+    /** A rejected frame or skipped octets. */
+    default void onBadFrame(FrameReason reason, long streamOffset, int octets) {
+    }
+
+    /** A complete non-idle packet. */
+    default void onPacket(int vcid, byte[] buf, int off, int octets) {
+    }
+
+    /** Octets dropped by the packet layer. */
+    default void onPacketAnomaly(int vcid, PacketAnomaly anomaly, int octetsDropped) {
+    }
+
+    /** Frames of a VC lost (VC count jump). */
+    default void onFrameGap(int vcid, int expectedVcCount, int actualVcCount, int missing) {
+    }
+
+    /** Frames of the master channel lost (MC count jump). */
+    default void onMasterChannelGap(int expectedMcCount, int actualMcCount, int missing) {
+    }
+
+    /** Packets of an APID lost (sequence count jump). */
+    default void onSequenceGap(int apid, int expectedCount, int actualCount, int missing) {
+    }
+
+    /** A decoded spectrum. */
+    default void onSpectrum(DecodedSpectrum spectrum) {
+    }
+
+    /** A spectrum packet that could not be decoded. */
+    default void onSpectrumError(int apid, int sequenceCount, SpectrumError error, String detail) {
+    }
+
+    /** A housekeeping packet. */
+    default void onHousekeeping(HousekeepingReport report) {
+    }
+
+    /** An event packet. */
+    default void onEvent(EventReport report) {
+    }
+
+    /** A housekeeping or event packet of the wrong shape. */
+    default void onRecordError(int apid, int sequenceCount, int octets) {
+    }
+}

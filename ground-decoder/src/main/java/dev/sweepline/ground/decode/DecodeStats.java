@@ -1,0 +1,217 @@
+package dev.sweepline.ground.decode;
+
+import dev.sweepline.ground.frame.FrameReason;
+import dev.sweepline.ground.packet.CucTime;
+import dev.sweepline.ground.packet.PacketAnomaly;
+import dev.sweepline.ground.spectrum.SpectrumError;
+import java.util.ArrayList;
+import java.util.Collections;
+import java.util.EnumMap;
+import java.util.List;
+import java.util.Map;
+
+/**
+ * Counts kept by the {@link TelemetryDecoder} over a stream. Gap lists keep the first
+ * {@value #MAX_LISTED_GAPS} gaps; the totals count all. Read after the decoder has finished, or from its
+ * feeding thread.
+ */
+public final class DecodeStats {
+    /** Gaps listed at most per list, so that a hopeless stream cannot fill memory. */
+    public static final int MAX_LISTED_GAPS = 1000;
+    private static final int APIDS = 2048;
+
+    long framesGood;
+    long framesIdle;
+    final long[] framesByVc = new long[8];
+    final EnumMap<FrameReason, Long> framesBad = new EnumMap<>(FrameReason.class);
+    long garbageOctets;
+    final EnumMap<PacketAnomaly, Long> packetAnomalies = new EnumMap<>(PacketAnomaly.class);
+    long anomalyOctets;
+    final long[] packetsByApid = new long[APIDS];
+    final long[] octetsByApid = new long[APIDS];
+    final List<FrameGap> frameGaps = new ArrayList<>();
+    long vcFramesMissing;
+    long frameGapCount;
+    long mcFramesMissing;
+    final List<SequenceGap> sequenceGaps = new ArrayList<>();
+    long packetsMissing;
+    long sequenceGapCount;
+    long spectraSurvey;
+    long spectraFocus;
+    final EnumMap<SpectrumError, Long> spectrumErrors = new EnumMap<>(SpectrumError.class);
+    long housekeeping;
+    long events;
+    long recordErrors;
+    CucTime firstTime;
+    CucTime lastTime;
+
+    DecodeStats() {
+    }
+
+    void badFrame(FrameReason r, int octets) {
+        framesBad.merge(r, 1L, Long::sum);
+        if (r == FrameReason.GARBAGE_BEFORE_SYNC) {
+            garbageOctets += octets;
+        }
+    }
+
+    void frameGap(FrameGap g) {
+        frameGapCount++;
+        vcFramesMissing += g.missing();
+        if (frameGaps.size() < MAX_LISTED_GAPS) {
+            frameGaps.add(g);
+        }
+    }
+
+    void sequenceGap(SequenceGap g) {
+        sequenceGapCount++;
+        packetsMissing += g.missing();
+        if (sequenceGaps.size() < MAX_LISTED_GAPS) {
+            sequenceGaps.add(g);
+        }
+    }
+
+    void time(CucTime t) {
+        if (firstTime == null || compare(t, firstTime) < 0) {
+            firstTime = t;
+        }
+        if (lastTime == null || compare(t, lastTime) > 0) {
+            lastTime = t;
+        }
+    }
+
+    private static int compare(CucTime a, CucTime b) {
+        int c = Long.compare(a.coarseSeconds(), b.coarseSeconds());
+        return c != 0 ? c : Integer.compare(a.fine(), b.fine());
+    }
+
+    /** Good frames, idle frames included. */
+    public long framesGood() {
+        return framesGood;
+    }
+
+    /** Good idle frames (FHP 0x7FE). */
+    public long framesIdle() {
+        return framesIdle;
+    }
+
+    /** Good frames of VC {@code vcid}. */
+    public long framesOfVc(int vcid) {
+        return framesByVc[vcid];
+    }
+
+    /** Rejects by reason (GARBAGE_BEFORE_SYNC counts runs of skipped octets). */
+    public Map<FrameReason, Long> framesBad() {
+        return Collections.unmodifiableMap(framesBad);
+    }
+
+    /** Rejected frames of one reason. */
+    public long framesBad(FrameReason r) {
+        return framesBad.getOrDefault(r, 0L);
+    }
+
+    /** Octets skipped while searching for sync. */
+    public long garbageOctets() {
+        return garbageOctets;
+    }
+
+    /** Packet-layer anomalies by kind. */
+    public Map<PacketAnomaly, Long> packetAnomalies() {
+        return Collections.unmodifiableMap(packetAnomalies);
+    }
+
+    /** Anomalies of one kind. */
+    public long packetAnomalies(PacketAnomaly a) {
+        return packetAnomalies.getOrDefault(a, 0L);
+    }
+
+    /** Octets the packet layer dropped. */
+    public long anomalyOctets() {
+        return anomalyOctets;
+    }
+
+    /** Packets of {@code apid} (idle included under 0x7FF). */
+    public long packets(int apid) {
+        return packetsByApid[apid];
+    }
+
+    /** Packet octets of {@code apid}. */
+    public long packetOctets(int apid) {
+        return octetsByApid[apid];
+    }
+
+    /** The first {@value #MAX_LISTED_GAPS} VC frame gaps. */
+    public List<FrameGap> frameGaps() {
+        return Collections.unmodifiableList(frameGaps);
+    }
+
+    /** VC frame gaps in all. */
+    public long frameGapCount() {
+        return frameGapCount;
+    }
+
+    /** Frames missing in all VC gaps. */
+    public long vcFramesMissing() {
+        return vcFramesMissing;
+    }
+
+    /** Frames missing by the master channel count (bad frames of any VC included). */
+    public long mcFramesMissing() {
+        return mcFramesMissing;
+    }
+
+    /** The first {@value #MAX_LISTED_GAPS} sequence gaps. */
+    public List<SequenceGap> sequenceGaps() {
+        return Collections.unmodifiableList(sequenceGaps);
+    }
+
+    /** Sequence gaps in all. */
+    public long sequenceGapCount() {
+        return sequenceGapCount;
+    }
+
+    /** Packets missing in all sequence gaps. */
+    public long packetsMissing() {
+        return packetsMissing;
+    }
+
+    /** Survey spectra decoded. */
+    public long spectraSurvey() {
+        return spectraSurvey;
+    }
+
+    /** Focus spectra decoded. */
+    public long spectraFocus() {
+        return spectraFocus;
+    }
+
+    /** Spectrum packets rejected, by error. */
+    public Map<SpectrumError, Long> spectrumErrors() {
+        return Collections.unmodifiableMap(spectrumErrors);
+    }
+
+    /** Housekeeping packets decoded. */
+    public long housekeeping() {
+        return housekeeping;
+    }
+
+    /** Event packets decoded. */
+    public long events() {
+        return events;
+    }
+
+    /** Housekeeping or event packets of the wrong shape. */
+    public long recordErrors() {
+        return recordErrors;
+    }
+
+    /** Earliest time of a decoded packet, or null. */
+    public CucTime firstTime() {
+        return firstTime;
+    }
+
+    /** Latest time of a decoded packet, or null. */
+    public CucTime lastTime() {
+        return lastTime;
+    }
+}

@@ -1,0 +1,27 @@
+package dev.sweepline.ground.decode;
+
+import dev.sweepline.ground.frame.FrameConstants;
+import dev.sweepline.ground.frame.FrameSynchroniser;
+
+/**
+ * How to decode a stream.
+ *
+ * @param frameOctets frame length L (128..2048) or {@link FrameSynchroniser#AUTO_LENGTH}
+ * @param scid        spacecraft id the frames must carry
+ */
+public record DecoderConfig(int frameOctets, int scid) {
+    /** ICD defaults: L = 1024, SCID 0x2C5 (ICD §1). */
+    public static DecoderConfig icdDefaults() {
+        return new DecoderConfig(FrameConstants.DEFAULT_FRAME_OCTETS, FrameConstants.CINDER_SCID);
+    }
+
+    /** Frame length detected from the stream, SCID 0x2C5. */
+    public static DecoderConfig autoLength() {
+        return new DecoderConfig(FrameSynchroniser.AUTO_LENGTH, FrameConstants.CINDER_SCID);
+    }
+
+    /** The same with another frame length. */
+    public DecoderConfig withFrameOctets(int l) {
+        return new DecoderConfig(l, scid);
+    }
+}

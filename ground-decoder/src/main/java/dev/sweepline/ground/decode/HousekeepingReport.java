@@ -1,0 +1,29 @@
+package dev.sweepline.ground.decode;
+
+import dev.sweepline.ground.packet.CucTime;
+
+/**
+ * A housekeeping packet (APID 0x110), ICD §5. Counters wrap at their field width.
+ *
+ * @param time             CUC time of the sample
+ * @param sequenceCount    packet sequence count
+ * @param mode             0 safe, 1 survey, 2 focus
+ * @param hvEnabled        high voltage on
+ * @param stepsSent        steps sent since start (32 bits)
+ * @param repliesAccepted  replies accepted (32 bits)
+ * @param sequenceErrors   sequence errors (16 bits)
+ * @param replyTimeouts    reply time-outs (16 bits)
+ * @param retries          retries (16 bits)
+ * @param surveySweeps     survey sweeps since start (16 bits)
+ * @param focusSweeps      focus sweeps since start (16 bits)
+ * @param lockLosses       focus → survey transitions other than scheduled re-surveys (16 bits)
+ * @param telemetryOctets  packet octets generated since start, all APIDs (32 bits)
+ */
+public record HousekeepingReport(CucTime time, int sequenceCount, int mode, boolean hvEnabled, long stepsSent,
+        long repliesAccepted, int sequenceErrors, int replyTimeouts, int retries, int surveySweeps,
+        int focusSweeps, int lockLosses, long telemetryOctets) {
+    /** APID (ICD §3.3). */
+    public static final int APID = 0x110;
+    /** User data length, octets (ICD §5: offsets 0..25). */
+    public static final int USER_DATA_OCTETS = 26;
+}

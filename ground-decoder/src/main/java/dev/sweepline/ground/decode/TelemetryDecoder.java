@@ -1,0 +1,166 @@
+package dev.sweepline.ground.decode;
+
+import dev.sweepline.ground.frame.FrameConstants;
+import dev.sweepline.ground.frame.FrameListener;
+import dev.sweepline.ground.frame.FrameReason;
+import dev.sweepline.ground.frame.FrameSynchroniser;
+import dev.sweepline.ground.frame.TmFrameHeader;
+import dev.sweepline.ground.packet.PacketAnomaly;
+import dev.sweepline.ground.packet.PacketListener;
+import dev.sweepline.ground.packet.SequenceCountTracker;
+import dev.sweepline.ground.packet.SpacePacketHeader;
+import dev.sweepline.ground.packet.VirtualChannelDemux;
+import dev.sweepline.ground.spectrum.DecodedSpectrum;
+import dev.sweepline.ground.spectrum.QuadrantDecompressor;
+import dev.sweepline.ground.spectrum.SpectrumPacketDecoder;
+import dev.sweepline.ground.spectrum.SpectrumResult;
+
+/**
+ * The whole ground chain of the telemetry ICD: bytes → frames → packets → spectra, housekeeping and
+ * events, with counts in {@link DecodeStats}. Feed octets in any chunking with {@link #accept}, then call
+ * {@link #finish}. Bad input is counted and reported to the listener, never thrown. Not thread-safe.
+ */
+public final class TelemetryDecoder {
+    private final DecodeListener listener;
+    private final DecodeStats stats = new DecodeStats();
+    private final FrameSynchroniser sync;
+    private final VirtualChannelDemux demux;
+    private final SequenceCountTracker sequences = new SequenceCountTracker();
+    private final SpectrumPacketDecoder spectra;
+
+    /**
+     * @param config   frame length and SCID
+     * @param ccsds121 decoder for compression 0x01 ({@link QuadrantDecompressor#UNAVAILABLE} if none)
+     * @param listener receives everything found
+     */
+    public TelemetryDecoder(DecoderConfig config, QuadrantDecompressor ccsds121, DecodeListener listener) {
+        this.listener = listener;
+        this.spectra = new SpectrumPacketDecoder(ccsds121);
+        this.demux = new VirtualChannelDemux(new Packets());
+        this.sync = new FrameSynchroniser(config.frameOctets(), config.scid(), new Frames());
+    }
+
+    /** Feeds octets; everything complete in them is reported before this returns. */
+    public void accept(byte[] buf, int off, int len) {
+        sync.accept(buf, off, len);
+    }
+
+    /** Ends the stream: partial frames and packets are reported. */
+    public void finish() {
+        sync.finish();
+        demux.finish();
+    }
+
+    /** The counts so far. */
+    public DecodeStats stats() {
+        return stats;
+    }
+
+    /** Frame length in use (0 while detecting). */
+    public int frameOctets() {
+        return sync.frameOctets();
+    }
+
+    /** True when the frame length came from detection. */
+    public boolean frameLengthDetected() {
+        return sync.lengthDetected();
+    }
+
+    private final class Frames implements FrameListener {
+        @Override
+        public void onFrame(byte[] buf, int off, int frameOctets, long streamOffset) {
+            stats.framesGood++;
+            stats.framesByVc[TmFrameHeader.vcid(buf, off)]++;
+            if (TmFrameHeader.firstHeaderPointer(buf, off) == FrameConstants.FHP_IDLE_ONLY) {
+                stats.framesIdle++;
+            }
+            listener.onFrame(buf, off, frameOctets, streamOffset);
+            demux.onFrame(buf, off, frameOctets);
+        }
+
+        @Override
+        public void onBadFrame(FrameReason reason, long streamOffset, int octets) {
+            stats.badFrame(reason, octets);
+            listener.onBadFrame(reason, streamOffset, octets);
+        }
+    }
+
+    private final class Packets implements PacketListener {
+        @Override
+        public void onPacket(int vcid, byte[] buf, int off, int octets) {
+            int apid = SpacePacketHeader.apid(buf, off);
+            stats.packetsByApid[apid]++;
+            stats.octetsByApid[apid] += octets;
+            if (apid == SpacePacketHeader.IDLE_APID) {
+                return;
+            }
+            int seq = SpacePacketHeader.sequenceCount(buf, off);
+            int expected = sequences.expected(apid);
+            int missing = sequences.observe(apid, seq);
+            if (missing > 0) {
+                stats.sequenceGap(new SequenceGap(apid, expected, seq, missing));
+                listener.onSequenceGap(apid, expected, seq, missing);
+            }
+            listener.onPacket(vcid, buf, off, octets);
+            dispatch(apid, seq, buf, off, octets);
+        }
+
+        @Override
+        public void onPacketAnomaly(int vcid, PacketAnomaly anomaly, int octetsDropped) {
+            stats.packetAnomalies.merge(anomaly, 1L, Long::sum);
+            stats.anomalyOctets += octetsDropped;
+            listener.onPacketAnomaly(vcid, anomaly, octetsDropped);
+        }
+
+        @Override
+        public void onFrameGap(int vcid, int expectedVcCount, int actualVcCount, int missing) {
+            stats.frameGap(new FrameGap(vcid, expectedVcCount, actualVcCount, missing));
+            listener.onFrameGap(vcid, expectedVcCount, actualVcCount, missing);
+        }
+
+        @Override
+        public void onMasterChannelGap(int expectedMcCount, int actualMcCount, int missing) {
+            stats.mcFramesMissing += missing;
+            listener.onMasterChannelGap(expectedMcCount, actualMcCount, missing);
+        }
+    }
+
+    private void dispatch(int apid, int seq, byte[] buf, int off, int octets) {
+        if (SpectrumPacketDecoder.isSpectrumApid(apid)) {
+            SpectrumResult r = spectra.decode(buf, off, octets);
+            if (r.isOk()) {
+                DecodedSpectrum s = r.spectrum();
+                if (s.mode() == DecodedSpectrum.MODE_SURVEY) {
+                    stats.spectraSurvey++;
+                } else {
+                    stats.spectraFocus++;
+                }
+                stats.time(s.time());
+                listener.onSpectrum(s);
+            } else {
+                stats.spectrumErrors.merge(r.error(), 1L, Long::sum);
+                listener.onSpectrumError(apid, seq, r.error(), r.detail());
+            }
+        } else if (apid == HousekeepingReport.APID) {
+            HousekeepingReport h = RecordPacketDecoder.housekeeping(buf, off, octets);
+            if (h == null) {
+                stats.recordErrors++;
+                listener.onRecordError(apid, seq, octets);
+            } else {
+                stats.housekeeping++;
+                stats.time(h.time());
+                listener.onHousekeeping(h);
+            }
+        } else if (apid == EventReport.APID) {
+            EventReport e = RecordPacketDecoder.event(buf, off, octets);
+            if (e == null) {
+                stats.recordErrors++;
+                listener.onRecordError(apid, seq, octets);
+            } else {
+                stats.events++;
+                stats.time(e.time());
+                listener.onEvent(e);
+            }
+        }
+    }
+}

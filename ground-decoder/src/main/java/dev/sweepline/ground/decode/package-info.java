@@ -1,0 +1,25 @@
+/**
+ * The ground chain of the telemetry ICD put together: {@link dev.sweepline.ground.decode.TelemetryDecoder}
+ * (bytes → frames → packets → spectra, housekeeping, events), its counts
+ * {@link dev.sweepline.ground.decode.DecodeStats}, and the housekeeping (ICD §5) and event (ICD §6) records.
+ *
+ * <h2>Design note</h2>
+ * <p>Driven from outside: the caller feeds octets in any chunking and calls {@code finish()}; everything
+ * is reported to one {@link dev.sweepline.ground.decode.DecodeListener} on the feeding thread, in stream
+ * order. Idle packets are counted under APID 0x7FF (bits per APID include them) and then dropped;
+ * sequence-count gaps are checked per APID except idle (the ICD does not say whether idle packets of
+ * VC 0 and VC 1 share one count). APID 0x130 (command report, issue 6) is counted but not decoded.
+ *
+ * <p>Requirements and how each is verified:
+ * <ol>
+ *   <li>D1 the golden frames decode field by field ({@code GoldenFrameDecodeTest}; the hex strings of
+ *       {@code GoldenFrames} were made with python3 from the ICD and are shared with fsw-core).</li>
+ *   <li>D2 no exception escapes on any input, every intact frame decodes and every packet carried only
+ *       by intact frames comes out: {@code DecoderFuzzTest}, recorded seed, 100,143 damaged frames among
+ *       200,468 (about 1.6 s).</li>
+ *   <li>D3 throughput: {@code FrameDecodeBenchmark} (src/jmh), 1024-octet frames carrying raw survey
+ *       spectra of 128 windows, whole chain: 32.3 ± 4.6 ms per 8.42 MB, about 260 MB/s of frames on the
+ *       shared 2-core machine (target 200 MB/s).</li>
+ * </ol>
+ */
+package dev.sweepline.ground.decode;

@@ -1,0 +1,52 @@
+package dev.sweepline.ground.spectrum;
+
+/**
+ * Edges of the built-in window table (table id 0), ICD §4: low(w) = 50 V × 120^(w/128),
+ * high(w) = low(w+1), 128 contiguous log-spaced windows from 50 V to 6000 V, held as DAC codes
+ * round(V / 0.1 V). The edges reported are the voltages the table holds: code × 0.1 V.
+ */
+public final class DefaultWindowTable {
+    /** Table id of the built-in table (ICD §4). */
+    public static final int TABLE_ID = 0;
+    /** Windows in the table (ICD §4). */
+    public static final int WINDOWS = 128;
+    /** Low edge of window 0, volts (ICD §4). */
+    public static final double BOTTOM_VOLTS = 50.0;
+    /** Ratio of the top edge to the bottom edge: 6000 V / 50 V (ICD §4). */
+    public static final double SPAN_RATIO = 120.0;
+    /** DAC codes per volt: one code is 0.1 V (ICD §4). Divided by, so that code / 10 rounds exactly. */
+    public static final double DAC_CODES_PER_VOLT = 10.0;
+
+    private static final double[] EDGE_VOLTS = buildEdges();
+
+    private DefaultWindowTable() {
+    }
+
+    /** The formula edge before DAC rounding, volts, for edge index 0..128. */
+    public static double nominalEdgeVolts(int edge) {
+        return BOTTOM_VOLTS * Math.pow(SPAN_RATIO, edge / (double) WINDOWS);
+    }
+
+    /** DAC code of edge 0..128: round(V / 0.1 V). */
+    public static int dacCode(int edge) {
+        return (int) Math.round(nominalEdgeVolts(edge) * DAC_CODES_PER_VOLT);
+    }
+
+    /** Low edge of window {@code w}, volts; NaN outside 0..127. */
+    public static double lowVolts(int w) {
+        return w >= 0 && w < WINDOWS ? EDGE_VOLTS[w] : Double.NaN;
+    }
+
+    /** High edge of window {@code w} (= low edge of w+1), volts; NaN outside 0..127. */
+    public static double highVolts(int w) {
+        return w >= 0 && w < WINDOWS ? EDGE_VOLTS[w + 1] : Double.NaN;
+    }
+
+    private static double[] buildEdges() {
+        double[] e = new double[WINDOWS + 1];
+        for (int i = 0; i <= WINDOWS; i++) {
+            e[i] = dacCode(i) / DAC_CODES_PER_VOLT;
+        }
+        return e;
+    }
+}

@@ -1,0 +1,55 @@
+package dev.sweepline.ground.spectrum;
+
+/**
+ * Decoder of one quadrant's sample stream of a spectrum packet (ICD §4). The ICD's compression
+ * {@code 0x01} is CCSDS 121.0-B adaptive Rice coding with these parameters, which an implementation
+ * must apply (they are not transmitted):
+ * <ul>
+ *   <li>n = {@value #BITS_PER_SAMPLE} bits per sample, block size J = {@value #BLOCK_SAMPLES};</li>
+ *   <li>preprocessor on: unit-delay predictor, mapper with x_min = 0, x_max = 65535;</li>
+ *   <li>basic option set (not the restricted set);</li>
+ *   <li>one reference sample interval for the whole stream: the first sample is the reference, sent raw;</li>
+ *   <li>the {@code sampleCount} samples are padded to a whole number of blocks by repeating the last
+ *       sample; the padding is coded, and the decoder decodes and discards it;</li>
+ *   <li>the stream is zero-filled to an octet; each quadrant's stream is independent.</li>
+ * </ul>
+ * Implementations are used from one thread at a time per instance.
+ */
+public interface QuadrantDecompressor {
+    /** Bits per sample n (ICD §4). */
+    int BITS_PER_SAMPLE = 16;
+    /** Block size J, samples (ICD §4). */
+    int BLOCK_SAMPLES = 16;
+    /** Smallest sample value x_min of the mapper (ICD §4). */
+    int X_MIN = 0;
+    /** Largest sample value x_max of the mapper (ICD §4). */
+    int X_MAX = 65535;
+
+    /** Error: no decoder for this compression is plugged in. */
+    int ERROR_UNAVAILABLE = -1;
+    /** Error: the stream ended before {@code sampleCount} samples were decoded. */
+    int ERROR_SHORT_INPUT = -2;
+    /** Error: the stream is malformed (bad option id, bad zero-block run, a value out of range, ...). */
+    int ERROR_CORRUPT = -3;
+
+    /**
+     * Decodes {@code sampleCount} samples from {@code in[off .. off+len)}.
+     *
+     * @param in          packet buffer
+     * @param off         first octet of this quadrant's stream
+     * @param len         stream length Lq in octets
+     * @param sampleCount samples to deliver (the window count c, 1..256)
+     * @param out         receives the samples (0..65535) from index 0; at least
+     *                    {@link #paddedCount(int) paddedCount(sampleCount)} long, so whole blocks fit
+     * @return {@code sampleCount} on success, or a negative error code ({@code ERROR_...})
+     */
+    int decode(byte[] in, int off, int len, int sampleCount, int[] out);
+
+    /** Samples rounded up to whole blocks of J. */
+    static int paddedCount(int sampleCount) {
+        return (sampleCount + BLOCK_SAMPLES - 1) / BLOCK_SAMPLES * BLOCK_SAMPLES;
+    }
+
+    /** Placeholder until a CCSDS 121 decoder is plugged in: always {@link #ERROR_UNAVAILABLE}. */
+    QuadrantDecompressor UNAVAILABLE = (in, off, len, sampleCount, out) -> ERROR_UNAVAILABLE;
+}

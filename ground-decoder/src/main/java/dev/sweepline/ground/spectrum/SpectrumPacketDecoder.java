@@ -1,0 +1,161 @@
+package dev.sweepline.ground.spectrum;
+
+import dev.sweepline.ground.packet.CucTime;
+import dev.sweepline.ground.packet.SpacePacketHeader;
+
+/**
+ * Decodes a spectrum packet (APIDs 0x100, 0x101) per ICD §4. User data after the 6-octet CUC time:
+ *
+ * <pre>
+ * off  octets  field
+ *  0   1       mode (1 survey, 2 focus)
+ *  1   1       flags: bit 7 stepped downward, bit 6 table changed
+ *  2   2       sweep number
+ *  4   2       table id
+ *  6   2       first window f
+ *  8   2       window count c (1..256)
+ * 10   2       peak, window units Q8 (0xFFFF none)
+ * 12   2       integration periods per window
+ * 14   ⌈c/4⌉   gain-range tags, 2 bits per window, MSB first
+ *  …   ⌈c/8⌉   saturation flags, 1 bit per window, MSB first
+ *  …   1       compression 0x00 raw / 0x01 CCSDS 121
+ *  …   4×(2+Lq) per quadrant: Lq then Lq octets of c samples
+ * </pre>
+ *
+ * Not thread-safe (one scratch buffer per instance).
+ */
+public final class SpectrumPacketDecoder {
+    /** APID of survey spectra (ICD §3.3). */
+    public static final int APID_SURVEY = 0x100;
+    /** APID of focus spectra (ICD §3.3). */
+    public static final int APID_FOCUS = 0x101;
+    /** Compression octet: raw 16-bit samples (ICD §4). */
+    public static final int COMPRESSION_RAW = 0x00;
+    /** Compression octet: CCSDS 121.0-B (ICD §4). */
+    public static final int COMPRESSION_CCSDS121 = 0x01;
+    /** Largest window count (ICD §4). */
+    public static final int MAX_WINDOWS = 256;
+    /** Fixed part of the user data before the gain tags, octets (ICD §4). */
+    static final int FIXED_OCTETS = 14;
+
+    private final QuadrantDecompressor ccsds121;
+    private final int[] scratch = new int[QuadrantDecompressor.paddedCount(MAX_WINDOWS)];
+
+    /** @param ccsds121 decoder for compression 0x01 ({@link QuadrantDecompressor#UNAVAILABLE} if none) */
+    public SpectrumPacketDecoder(QuadrantDecompressor ccsds121) {
+        this.ccsds121 = ccsds121;
+    }
+
+    /** True for the two spectrum APIDs. */
+    public static boolean isSpectrumApid(int apid) {
+        return apid == APID_SURVEY || apid == APID_FOCUS;
+    }
+
+    private static int u16(byte[] b, int i) {
+        return ((b[i] & 0xFF) << 8) | (b[i + 1] & 0xFF);
+    }
+
+    /** Decodes the whole packet (primary header first) of {@code len} octets at {@code off}. */
+    public SpectrumResult decode(byte[] pkt, int off, int len) {
+        final int end = off + len;
+        if (len < SpacePacketHeader.OCTETS + CucTime.OCTETS + FIXED_OCTETS) {
+            return SpectrumResult.fail(SpectrumError.LENGTH_BEYOND_DATA, "packet of " + len + " octets");
+        }
+        int apid = SpacePacketHeader.apid(pkt, off);
+        if (!isSpectrumApid(apid)) {
+            return SpectrumResult.fail(SpectrumError.NOT_A_SPECTRUM, "APID " + Integer.toHexString(apid));
+        }
+        if (!SpacePacketHeader.secondaryHeaderFlag(pkt, off)) {
+            return SpectrumResult.fail(SpectrumError.NO_SECONDARY_HEADER, "");
+        }
+        CucTime time = CucTime.read(pkt, off + SpacePacketHeader.OCTETS);
+        int u = off + SpacePacketHeader.OCTETS + CucTime.OCTETS;
+        int mode = pkt[u] & 0xFF;
+        if (mode != (apid == APID_SURVEY ? DecodedSpectrum.MODE_SURVEY : DecodedSpectrum.MODE_FOCUS)) {
+            return SpectrumResult.fail(SpectrumError.BAD_MODE, "mode " + mode + " on APID " + Integer.toHexString(apid));
+        }
+        int flags = pkt[u + 1] & 0xFF;
+        int sweep = u16(pkt, u + 2);
+        int tableId = u16(pkt, u + 4);
+        int first = u16(pkt, u + 6);
+        int c = u16(pkt, u + 8);
+        int peak = u16(pkt, u + 10);
+        int periods = u16(pkt, u + 12);
+        if (c < 1 || c > MAX_WINDOWS) {
+            return SpectrumResult.fail(SpectrumError.BAD_WINDOW_COUNT, "c = " + c);
+        }
+        int p = u + FIXED_OCTETS;
+        int gainOctets = (c + 3) / 4;
+        int satOctets = (c + 7) / 8;
+        if (end - p < gainOctets + satOctets + 1) {
+            return SpectrumResult.fail(SpectrumError.LENGTH_BEYOND_DATA, "tags of " + c + " windows");
+        }
+        int[] gain = new int[c];
+        boolean[] sat = new boolean[c];
+        for (int i = 0; i < c; i++) {
+            gain[i] = (pkt[p + i / 4] >>> (6 - 2 * (i % 4))) & 3;
+            if (gain[i] > QuadrantCurrent.MAX_RANGE) {
+                return SpectrumResult.fail(SpectrumError.BAD_GAIN_RANGE, "window " + (first + i));
+            }
+            sat[i] = ((pkt[p + gainOctets + i / 8] >>> (7 - i % 8)) & 1) != 0;
+        }
+        p += gainOctets + satOctets;
+        int compression = pkt[p++] & 0xFF;
+        QuadrantDecompressor qd;
+        if (compression == COMPRESSION_RAW) {
+            qd = RawQuadrantDecoder.INSTANCE;
+        } else if (compression == COMPRESSION_CCSDS121) {
+            qd = ccsds121;
+        } else {
+            return SpectrumResult.fail(SpectrumError.UNKNOWN_COMPRESSION, "0x" + Integer.toHexString(compression));
+        }
+        int[][] adc = new int[DecodedSpectrum.QUADRANTS][];
+        for (int q = 0; q < DecodedSpectrum.QUADRANTS; q++) {
+            if (end - p < 2) {
+                return SpectrumResult.fail(SpectrumError.LENGTH_BEYOND_DATA, "Lq of quadrant " + (q + 1));
+            }
+            int lq = u16(pkt, p);
+            p += 2;
+            if (end - p < lq) {
+                return SpectrumResult.fail(SpectrumError.LENGTH_BEYOND_DATA,
+                        "quadrant " + (q + 1) + " Lq " + lq + " > " + (end - p) + " left");
+            }
+            int got = qd.decode(pkt, p, lq, c, scratch);
+            if (got != c) {
+                SpectrumError e = got == QuadrantDecompressor.ERROR_UNAVAILABLE
+                        ? SpectrumError.DECOMPRESSOR_UNAVAILABLE : SpectrumError.DECOMPRESSION_FAILED;
+                return SpectrumResult.fail(e, "quadrant " + (q + 1) + " returned " + got);
+            }
+            adc[q] = java.util.Arrays.copyOf(scratch, c);
+            p += lq;
+        }
+        if (p != end) {
+            return SpectrumResult.fail(SpectrumError.TRAILING_OCTETS, (end - p) + " octets");
+        }
+        return SpectrumResult.ok(build(time, apid, SpacePacketHeader.sequenceCount(pkt, off), mode, flags, sweep,
+                tableId, first, c, peak, periods, compression, gain, sat, adc));
+    }
+
+    private static DecodedSpectrum build(CucTime time, int apid, int seq, int mode, int flags, int sweep,
+            int tableId, int first, int c, int peak, int periods, int compression, int[] gain, boolean[] sat,
+            int[][] adc) {
+        double[][] amps = new double[DecodedSpectrum.QUADRANTS][c];
+        double[] total = new double[c];
+        double[] low = new double[c];
+        double[] high = new double[c];
+        boolean defaultTable = tableId == DefaultWindowTable.TABLE_ID;
+        for (int i = 0; i < c; i++) {
+            double sum = 0;
+            for (int q = 0; q < DecodedSpectrum.QUADRANTS; q++) {
+                double a = QuadrantCurrent.amps(adc[q][i], gain[i]);
+                amps[q][i] = a;
+                sum += a;
+            }
+            total[i] = sum;
+            low[i] = defaultTable ? DefaultWindowTable.lowVolts(first + i) : Double.NaN;
+            high[i] = defaultTable ? DefaultWindowTable.highVolts(first + i) : Double.NaN;
+        }
+        return new DecodedSpectrum(time, apid, seq, mode, (flags & 0x80) != 0, (flags & 0x40) != 0, sweep,
+                tableId, first, c, peak, periods, compression, gain, sat, adc, amps, total, low, high);
+    }
+}

@@ -1,0 +1,37 @@
+package dev.sweepline.ground.cli;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import dev.sweepline.ground.decode.GoldenFrames;
+import dev.sweepline.ground.decode.Hex;
+import java.io.IOException;
+import java.io.PrintWriter;
+import java.io.StringWriter;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+import picocli.CommandLine;
+
+class InspectCommandTest {
+    @TempDir
+    Path dir;
+
+    @Test
+    void shouldListEveryFrameAndPacket() throws IOException {
+        byte[] s = Hex.stream(GoldenFrames.STREAM);
+        s[4 + 60] ^= 0x04; // damage the first frame
+        Path in = Files.write(dir.resolve("g.tm"), s);
+        StringWriter text = new StringWriter();
+        int rc = new CommandLine(new GroundMain()).setOut(new PrintWriter(text)).execute("inspect", in.toString());
+        String out = text.toString();
+        assertEquals(0, rc);
+        // 5 good frame lines, one BAD_CRC line (six golden frames, the first damaged)
+        assertEquals(5, out.lines().filter(l -> l.startsWith("frame  @")).count());
+        assertTrue(out.contains("BAD    @4          BAD_CRC (128 octets)"), out);
+        // the spectrum of GoldenFrames: sweep 0x0123 = 291, windows 40..55, peak 47.5
+        assertTrue(out.contains("spectrum survey sweep=291 windows 40..55 peak=47.500"), out);
+        assertTrue(out.contains("packet vc=1 apid=0x110 seq=   45"), out);
+    }
+}
