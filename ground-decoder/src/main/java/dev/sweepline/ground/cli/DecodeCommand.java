@@ -3,6 +3,7 @@ package dev.sweepline.ground.cli;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.SerializationFeature;
 import dev.sweepline.ground.decode.TelemetryDecoder;
+import dev.sweepline.ground.spectrum.Ccsds121QuadrantDecoder;
 import java.io.IOException;
 import java.io.Writer;
 import java.nio.charset.StandardCharsets;
@@ -48,7 +49,7 @@ final class DecodeCommand implements Callable<Integer> {
         }
         try (Writer w = Files.newBufferedWriter(out.resolve("spectra.csv"), StandardCharsets.UTF_8);
                 SpectraCsvWriter csv = new SpectraCsvWriter(w)) {
-            decoder = new TelemetryDecoder(options.config(), Ccsds121Lookup.find(), csv);
+            decoder = new TelemetryDecoder(options.config(), new Ccsds121QuadrantDecoder(), csv);
             try {
                 octets = StreamReader.feed(input, decoder);
             } catch (IOException e) {

@@ -2,6 +2,7 @@ package dev.sweepline.ground.cli;
 
 import dev.sweepline.ground.decode.DecodeStats;
 import dev.sweepline.ground.decode.TelemetryDecoder;
+import dev.sweepline.ground.spectrum.Ccsds121QuadrantDecoder;
 import java.io.IOException;
 import java.io.PrintWriter;
 import java.nio.file.Files;
@@ -33,7 +34,7 @@ final class InspectCommand implements Callable<Integer> {
             spec.commandLine().getErr().println("cannot read " + input);
             return ExitCodes.UNREADABLE_INPUT;
         }
-        TelemetryDecoder d = new TelemetryDecoder(options.config(), Ccsds121Lookup.find(), new InspectListing(out));
+        TelemetryDecoder d = new TelemetryDecoder(options.config(), new Ccsds121QuadrantDecoder(), new InspectListing(out));
         try {
             StreamReader.feed(input, d);
         } catch (IOException e) {

@@ -10,8 +10,7 @@
  *   <li>C2 bad frames are counted by reason in summary.json and do not change the exit status (0).</li>
  *   <li>C3 an unreadable input gives exit status 2 and no exception.</li>
  * </ol>
- * <p>The CCSDS 121 decoder for compression 0x01 is found with {@link java.util.ServiceLoader} as a
- * {@link dev.sweepline.ground.spectrum.QuadrantDecompressor}; without one those spectra are counted
- * under {@code spectrumErrors.DECOMPRESSOR_UNAVAILABLE}.
+ * <p>Compression 0x01 is decoded by {@link dev.sweepline.ground.spectrum.Ccsds121QuadrantDecoder}
+ * (the module's own CCSDS 121.0-B decoder with the ICD's parameters).
  */
 package dev.sweepline.ground.cli;

@@ -6,9 +6,8 @@
  * <p>{@link dev.sweepline.ground.spectrum.SpectrumPacketDecoder} walks the packet once, checking every
  * length against the packet's end, and hands each quadrant's stream to a {@link
  * dev.sweepline.ground.spectrum.QuadrantDecompressor}: {@link dev.sweepline.ground.spectrum.RawQuadrantDecoder}
- * for compression 0x00, and for 0x01 the CCSDS 121 decoder plugged in from outside (the lead wires
- * {@code dev.sweepline.ground.rice.RiceDecoder} in; until then {@code QuadrantDecompressor.UNAVAILABLE}
- * reports {@code DECOMPRESSOR_UNAVAILABLE}).
+ * for compression 0x00, and {@link dev.sweepline.ground.spectrum.Ccsds121QuadrantDecoder} (the
+ * module's CCSDS 121.0-B decoder, {@code dev.sweepline.ground.rice}) for 0x01.
  *
  * <p>Requirements and how each is verified:
  * <ol>

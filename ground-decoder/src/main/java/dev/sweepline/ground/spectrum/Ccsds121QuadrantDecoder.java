@@ -1,0 +1,28 @@
+package dev.sweepline.ground.spectrum;
+
+import dev.sweepline.ground.rice.DecodeResult;
+import dev.sweepline.ground.rice.DecodeStatus;
+import dev.sweepline.ground.rice.RiceDecoder;
+import dev.sweepline.ground.rice.RiceSettings;
+
+/**
+ * Compression 0x01 of the telemetry ICD §4: the CCSDS 121.0-B decoder with the ICD's parameters
+ * (n = 16, J = 16, preprocessor on, basic option set, one reference interval of 16 blocks, so the
+ * first sample of each quadrant stream is its reference). Not thread-safe: one per decoder.
+ */
+public final class Ccsds121QuadrantDecoder implements QuadrantDecompressor {
+    /** Reference sample interval of the ICD, blocks: 16 blocks of 16 cover the 256-window maximum. */
+    public static final int REFERENCE_INTERVAL_BLOCKS = 16;
+
+    private final RiceDecoder decoder = new RiceDecoder(
+            RiceSettings.basic(BITS_PER_SAMPLE, BLOCK_SAMPLES, REFERENCE_INTERVAL_BLOCKS));
+
+    @Override
+    public int decode(byte[] in, int off, int len, int sampleCount, int[] out) {
+        DecodeResult r = decoder.decode(in, off, len, sampleCount, out);
+        if (r.ok()) {
+            return r.samplesDecoded();
+        }
+        return r.status() == DecodeStatus.TRUNCATED ? ERROR_SHORT_INPUT : ERROR_CORRUPT;
+    }
+}
