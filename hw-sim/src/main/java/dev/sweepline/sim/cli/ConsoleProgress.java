@@ -27,7 +27,8 @@ final class ConsoleProgress implements ClosedLoopBench.Progress, AutoCloseable {
             }
             bar = new ProgressBarBuilder().setTaskName(task).setInitialMax(totalMicros / 1_000_000)
                     .setUnit(" s", 1).setStyle(ProgressBarStyle.ASCII).setUpdateIntervalMillis(500)
-                    .showSpeed().build();
+                    .startsFrom(doneMicros / 1_000_000,
+                            java.time.Duration.ofNanos(System.nanoTime() - startNanos)).build();
         }
         bar.stepTo(doneMicros / 1_000_000);
     }
