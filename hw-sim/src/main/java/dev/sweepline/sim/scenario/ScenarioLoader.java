@@ -1,5 +1,7 @@
 package dev.sweepline.sim.scenario;
 
+import dev.sweepline.sim.yaml.FileFormatException;
+import dev.sweepline.sim.yaml.YamlTreeReader;
 import java.io.IOException;
 import java.io.InputStream;
 import java.io.UncheckedIOException;
@@ -49,7 +51,11 @@ public final class ScenarioLoader {
      * @throws ScenarioException if it is not a valid scenario
      */
     public static Scenario parse(String text, String file) {
-        return ScenarioReader.read(YamlTreeReader.read(text, file), file);
+        try {
+            return ScenarioReader.read(YamlTreeReader.read(text, file), file);
+        } catch (FileFormatException e) {
+            throw ScenarioException.of(e);
+        }
     }
 
     /**

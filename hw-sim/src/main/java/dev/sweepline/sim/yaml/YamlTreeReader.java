@@ -1,4 +1,4 @@
-package dev.sweepline.sim.scenario;
+package dev.sweepline.sim.yaml;
 
 import com.fasterxml.jackson.core.JsonLocation;
 import com.fasterxml.jackson.core.JsonParser;
@@ -16,7 +16,7 @@ import java.util.Map;
  * YAML parser. Rejects what the scenario format never needs and what hides mistakes: duplicate keys,
  * more than one document, a root that is not a mapping.
  */
-final class YamlTreeReader {
+public final class YamlTreeReader {
     private static final YAMLFactory FACTORY = new YAMLFactory();
 
     private final String file;
@@ -30,9 +30,9 @@ final class YamlTreeReader {
     /**
      * Parses {@code text}; {@code file} names it in errors.
      *
-     * @throws ScenarioException on a syntax error or a document of the wrong shape
+     * @throws FileFormatException on a syntax error or a document of the wrong shape
      */
-    static YamlNode.Mapping read(String text, String file) {
+    public static YamlNode.Mapping read(String text, String file) {
         return new YamlTreeReader(file).readDocument(text);
     }
 
@@ -40,22 +40,22 @@ final class YamlTreeReader {
         try (JsonParser p = FACTORY.createParser(text)) {
             JsonToken first = p.nextToken();
             if (first == null) {
-                throw new ScenarioException(file, 1, "", "the file is empty");
+                throw new FileFormatException(file, 1, "", "the file is empty");
             }
             YamlNode root = readValue(p, first, "", line(p.currentTokenLocation()));
             if (!(root instanceof YamlNode.Mapping mapping)) {
-                throw new ScenarioException(file, root.line(), "", "the file must be a mapping of keys, got " + root.kind());
+                throw new FileFormatException(file, root.line(), "", "the file must be a mapping of keys, got " + root.kind());
             }
             if (p.nextToken() != null) {
-                throw new ScenarioException(file, line(p.currentTokenLocation()), "",
+                throw new FileFormatException(file, line(p.currentTokenLocation()), "",
                         "only one YAML document per file; a second one starts here");
             }
             return mapping;
         } catch (JsonProcessingException e) {
-            throw new ScenarioException(file, line(e.getLocation()), currentPath,
+            throw new FileFormatException(file, line(e.getLocation()), currentPath,
                     "not valid YAML: " + firstLine(e.getOriginalMessage()), e);
         } catch (IOException e) {
-            throw new ScenarioException(file, 0, "", "cannot read: " + e.getMessage(), e);
+            throw new FileFormatException(file, 0, "", "cannot read: " + e.getMessage(), e);
         }
     }
 
@@ -71,7 +71,7 @@ final class YamlTreeReader {
             case VALUE_FALSE -> new YamlNode.Scalar(path, line, "false", YamlNode.ScalarType.BOOLEAN);
             case VALUE_STRING -> new YamlNode.Scalar(path, line, p.getText(), YamlNode.ScalarType.TEXT);
             case VALUE_NULL -> new YamlNode.Scalar(path, line, "", YamlNode.ScalarType.NULL);
-            default -> throw new ScenarioException(file, line, path, "unsupported YAML construct (" + token + ")");
+            default -> throw new FileFormatException(file, line, path, "unsupported YAML construct (" + token + ")");
         };
     }
 
@@ -83,13 +83,13 @@ final class YamlTreeReader {
             int keyLine = line(p.currentTokenLocation());
             String childPath = path.isEmpty() ? key : path + "." + key;
             if (entries.containsKey(key)) {
-                throw new ScenarioException(file, keyLine, childPath,
+                throw new FileFormatException(file, keyLine, childPath,
                         "duplicate key (first given on line " + entries.get(key).line() + ")");
             }
             entries.put(key, readValue(p, p.nextToken(), childPath, keyLine));
         }
         if (t != JsonToken.END_OBJECT) {
-            throw new ScenarioException(file, line(p.currentTokenLocation()), path, "unexpected " + t);
+            throw new FileFormatException(file, line(p.currentTokenLocation()), path, "unexpected " + t);
         }
         return new YamlNode.Mapping(path, line, entries);
     }
@@ -99,7 +99,7 @@ final class YamlTreeReader {
         JsonToken t;
         while ((t = p.nextToken()) != JsonToken.END_ARRAY) {
             if (t == null) {
-                throw new ScenarioException(file, line, path, "unexpected end of file in a list");
+                throw new FileFormatException(file, line, path, "unexpected end of file in a list");
             }
             items.add(readValue(p, t, path + "[" + items.size() + "]", line(p.currentTokenLocation())));
         }

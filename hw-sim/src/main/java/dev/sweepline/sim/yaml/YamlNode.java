@@ -1,4 +1,4 @@
-package dev.sweepline.sim.scenario;
+package dev.sweepline.sim.yaml;
 
 import java.util.LinkedHashMap;
 import java.util.List;
@@ -9,7 +9,7 @@ import java.util.Map;
  * its key (for a mapping entry) or of its first token (for a list item or the root). Jackson's own
  * tree drops token locations, so the loader builds this one from the streaming parser.
  */
-sealed interface YamlNode permits YamlNode.Mapping, YamlNode.Sequence, YamlNode.Scalar {
+public sealed interface YamlNode permits YamlNode.Mapping, YamlNode.Sequence, YamlNode.Scalar {
 
     /** Dotted path, e.g. {@code events[2].set.protonDensity}; empty for the root. */
     String path();
