@@ -58,4 +58,13 @@ public record PlasmaConditions(double protonDensityPerCc, double protonSpeedKmPe
             case FIELD_THETA_Y -> fieldThetaYDeg;
         };
     }
+
+    /** These conditions with one parameter replaced (campaign draws, distance scaling). */
+    public PlasmaConditions with(PlasmaParameter p, double value) {
+        double[] v = new double[PlasmaParameter.values().length];
+        for (PlasmaParameter q : PlasmaParameter.values()) {
+            v[q.ordinal()] = q == p ? value : get(q);
+        }
+        return of(v);
+    }
 }

@@ -48,6 +48,22 @@ public final class Scenario {
         }
     }
 
+    /**
+     * This scenario from another starting plasma, under another name and duration: the events,
+     * fluctuations and drift direction stay (campaign draws, orbit-plan scaling). Events given as
+     * factors apply to the new start; events with absolute values keep them.
+     */
+    public Scenario withStart(String newName, PlasmaConditions newStart, double newDistanceAu, double newDurationSeconds) {
+        List<ScenarioEvent> kept = new ArrayList<>();
+        for (ScenarioEvent e : events) {
+            if (e.endSeconds() <= newDurationSeconds) {
+                kept.add(e);
+            }
+        }
+        return new Scenario(newName, description, newDistanceAu, newDurationSeconds, newStart, alphaDriftDirection,
+                fluctuations, kept);
+    }
+
     /** Short name, e.g. {@code quiet-perihelion}. */
     public String name() {
         return name;

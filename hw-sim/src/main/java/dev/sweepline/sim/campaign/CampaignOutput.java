@@ -1,0 +1,166 @@
+package dev.sweepline.sim.campaign;
+
+import com.fasterxml.jackson.databind.ObjectMapper;
+import com.fasterxml.jackson.databind.SerializationFeature;
+import dev.sweepline.fsw.table.SweepParameters;
+import java.io.IOException;
+import java.io.Writer;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+
+/**
+ * Writes a campaign's results: {@code runs.csv} (every run; a shard writes only this), and for the
+ * whole campaign {@code sets.csv}, {@code summary.json} (sets, Pareto front, recommendation) and
+ * {@code recommended.yaml} (the recommended sweep parameters as a readable table). Nothing written
+ * depends on the thread count, the shard split or the wall clock.
+ */
+public final class CampaignOutput {
+    /** File of the run rows. */
+    public static final String RUNS = "runs.csv";
+    private static final ObjectMapper JSON = new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT);
+
+    private CampaignOutput() {
+    }
+
+    /** Writes the run rows. */
+    public static void writeRuns(Path dir, List<RunRow> rows) throws IOException {
+        Files.createDirectories(dir);
+        try (Writer w = Files.newBufferedWriter(dir.resolve(RUNS))) {
+            w.write(RunRow.HEADER + "\n");
+            for (RunRow r : rows) {
+                w.write(r.toCsv() + "\n");
+            }
+        }
+    }
+
+    /** Reads the run rows of one or more shard folders, in job order. */
+    public static List<RunRow> readRuns(CampaignSpec spec, List<Path> dirs) throws IOException {
+        List<RunRow> rows = new ArrayList<>();
+        for (Path dir : dirs) {
+            List<String> lines = Files.readAllLines(dir.resolve(RUNS));
+            if (lines.isEmpty() || !lines.get(0).equals(RunRow.HEADER)) {
+                throw new IOException(dir.resolve(RUNS) + ": not a campaign run file (header differs)");
+            }
+            for (int i = 1; i < lines.size(); i++) {
+                try {
+                    rows.add(RunRow.parse(lines.get(i)));
+                } catch (IllegalArgumentException e) {
+                    throw new IOException(dir.resolve(RUNS) + ":" + (i + 1) + ": " + e.getMessage(), e);
+                }
+            }
+        }
+        rows.sort((a, b) -> Long.compare((long) a.set() * spec.runsPerSet() + a.run(),
+                (long) b.set() * spec.runsPerSet() + b.run()));
+        for (int i = 1; i < rows.size(); i++) {
+            if (rows.get(i).set() == rows.get(i - 1).set() && rows.get(i).run() == rows.get(i - 1).run()) {
+                throw new IOException("run " + rows.get(i).run() + " of set " + rows.get(i).set() + " appears twice");
+            }
+        }
+        long expected = (long) spec.setCount() * spec.runsPerSet();
+        if (rows.size() != expected) {
+            throw new IOException("merged " + rows.size() + " runs, the campaign has " + expected + ": a shard is missing");
+        }
+        return rows;
+    }
+
+    /** Writes the campaign-wide results from all of its runs; returns the recommended set or null. */
+    public static SetResult writeResults(Path dir, CampaignSpec spec, List<RunRow> rows) throws IOException {
+        Files.createDirectories(dir);
+        List<SetResult> sets = SetResult.aggregate(spec, rows);
+        List<SetResult> front = ParetoFront.of(sets);
+        SetResult best = ParetoFront.recommend(front, spec.allocationBitsPerSecond());
+        writeSets(dir.resolve("sets.csv"), spec, sets, front);
+        Map<String, Object> summary = new LinkedHashMap<>();
+        summary.put("campaign", spec.name());
+        summary.put("seed", spec.seed());
+        summary.put("sets", spec.setCount());
+        summary.put("runsPerSet", spec.runsPerSet());
+        summary.put("durationSeconds", spec.durationSeconds());
+        summary.put("scenario", spec.base().name());
+        summary.put("allocationBitsPerSecond", finite(spec.allocationBitsPerSecond()));
+        summary.put("axes", spec.axisKeys());
+        List<Map<String, Object>> setMaps = new ArrayList<>();
+        for (SetResult s : sets) {
+            setMaps.add(setMap(spec, s, front.contains(s)));
+        }
+        summary.put("results", setMaps);
+        List<Integer> frontIds = new ArrayList<>();
+        front.forEach(s -> frontIds.add(s.set()));
+        summary.put("paretoFront", frontIds);
+        summary.put("recommendedSet", best == null ? null : best.set());
+        JSON.writeValue(dir.resolve("summary.json").toFile(), summary);
+        if (best != null) {
+            writeRecommended(dir.resolve("recommended.yaml"), spec, best);
+        }
+        return best;
+    }
+
+    private static Map<String, Object> setMap(CampaignSpec spec, SetResult s, boolean onFront) {
+        Map<String, Object> m = new LinkedHashMap<>();
+        m.put("set", s.set());
+        Map<String, Object> values = new LinkedHashMap<>();
+        for (int a = 0; a < spec.grid().size(); a++) {
+            values.put(spec.grid().get(a).parameter().key(), s.values()[a]);
+        }
+        m.put("parameters", values);
+        m.put("runs", s.runs());
+        m.put("lockFractionMean", finite(s.lockFractionMean()));
+        m.put("lockFractionMin", finite(s.lockFractionMin()));
+        m.put("alphaLocks", s.alphaLocks());
+        m.put("reacquireSweepsMax", s.reacquireSweepsMax());
+        m.put("reacquireSecondsMax", finite(s.reacquireSecondsMax()));
+        m.put("spectraPerSecond", s.spectraPerSecond());
+        m.put("bitsPerSecondMean", s.bitsPerSecondMean());
+        m.put("bitsPerSecondMax", s.bitsPerSecondMax());
+        m.put("integratingFraction", s.integratingFraction());
+        m.put("paretoFront", onFront);
+        return m;
+    }
+
+    private static void writeSets(Path file, CampaignSpec spec, List<SetResult> sets, List<SetResult> front)
+            throws IOException {
+        try (Writer w = Files.newBufferedWriter(file)) {
+            w.write("set," + String.join(",", spec.axisKeys()) + ",runs,lockFractionMean,lockFractionMin,alphaLocks,"
+                    + "reacquireSweepsMax,reacquireSecondsMax,spectraPerSecond,bitsPerSecondMean,bitsPerSecondMax,"
+                    + "integratingFraction,paretoFront\n");
+            for (SetResult s : sets) {
+                StringBuilder b = new StringBuilder().append(s.set());
+                for (double v : s.values()) {
+                    b.append(',').append(v);
+                }
+                b.append(String.format(Locale.ROOT, ",%d,%s,%s,%d,%d,%s,%s,%s,%s,%s,%b%n", s.runs(), s.lockFractionMean(),
+                        s.lockFractionMin(), s.alphaLocks(), s.reacquireSweepsMax(), s.reacquireSecondsMax(),
+                        s.spectraPerSecond(), s.bitsPerSecondMean(), s.bitsPerSecondMax(), s.integratingFraction(),
+                        front.contains(s)));
+                w.write(b.toString());
+            }
+        }
+    }
+
+    /** The recommended parameters as a readable table: every field of the flight software's set. */
+    private static void writeRecommended(Path file, CampaignSpec spec, SetResult best) throws IOException {
+        SweepParameters p = spec.parameters(best.set());
+        try (Writer w = Files.newBufferedWriter(file)) {
+            w.write("# Recommended sweep parameters of campaign " + spec.name() + " (set " + best.set() + ")\n");
+            w.write(String.format(Locale.ROOT, "# over %d runs: lock fraction mean %.4f (worst %.4f), %.3f spectra/s, "
+                    + "%.0f bit/s mean (%.0f worst)%n", best.runs(), best.lockFractionMean(), best.lockFractionMin(),
+                    best.spectraPerSecond(), best.bitsPerSecondMean(), best.bitsPerSecondMax()));
+            for (java.lang.reflect.Field f : SweepParameters.class.getFields()) {
+                if (!java.lang.reflect.Modifier.isStatic(f.getModifiers())) {
+                    w.write(f.getName() + ": " + f.getInt(p) + "\n");
+                }
+            }
+        } catch (IllegalAccessException e) {
+            throw new IllegalStateException(e);
+        }
+    }
+
+    private static Object finite(double v) {
+        return Double.isFinite(v) ? v : null;
+    }
+}

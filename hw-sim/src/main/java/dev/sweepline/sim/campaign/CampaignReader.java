@@ -1,0 +1,218 @@
+package dev.sweepline.sim.campaign;
+
+import dev.sweepline.sim.scenario.PlasmaParameter;
+import dev.sweepline.sim.scenario.Scenario;
+import dev.sweepline.sim.scenario.ScenarioLoader;
+import dev.sweepline.sim.yaml.FileFormatException;
+import dev.sweepline.sim.yaml.Section;
+import dev.sweepline.sim.yaml.YamlNode;
+import dev.sweepline.sim.yaml.YamlTreeReader;
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.NoSuchFileException;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+
+/**
+ * Reads a campaign file ({@code format: sweepline-campaign/1}); every problem names the file, the
+ * line and the field. The format is described in {@code hw-sim/src/main/resources/campaigns/FORMAT.md}.
+ */
+public final class CampaignReader {
+    private static final String FORMAT = "sweepline-campaign/1";
+    private static final List<String> TOP = List.of("format", "name", "description", "seed", "runsPerSet",
+            "durationS", "scenario", "allocationBitsPerS", "draws", "grid");
+    private static final List<String> KINDS = List.of("fixed", "uniform", "logUniform", "normal");
+    /** Largest campaign this reader accepts, runs: a guard against a typo exploding the grid. */
+    static final int MAX_RUNS = 1_000_000;
+
+    private CampaignReader() {
+    }
+
+    /** Reads the campaign file at {@code path}; a relative scenario path in it is taken from the file's folder. */
+    public static CampaignSpec load(Path path) {
+        String text;
+        try {
+            text = Files.readString(path);
+        } catch (NoSuchFileException e) {
+            throw new FileFormatException(path.toString(), 0, "", "no such file", e);
+        } catch (IOException e) {
+            throw new FileFormatException(path.toString(), 0, "", "cannot read: " + e, e);
+        }
+        Path folder = path.toAbsolutePath().getParent();
+        return parse(text, path.toString(), folder);
+    }
+
+    /** Parses campaign text; {@code folder} resolves a scenario given as a relative path. */
+    public static CampaignSpec parse(String text, String file, Path folder) {
+        Section top = Section.of(file, YamlTreeReader.read(text, file), TOP);
+        if (!FORMAT.equals(top.text("format"))) {
+            throw new FileFormatException(file, top.required("format").line(), "format", "expected " + FORMAT);
+        }
+        long seed = (long) positive(top, "seed", true);
+        int runs = (int) positive(top, "runsPerSet", false);
+        double duration = positive(top, "durationS", false);
+        Scenario base = scenario(top, file, folder);
+        double allocation = top.has("allocationBitsPerS") ? positive(top, "allocationBitsPerS", false) : Double.NaN;
+        Map<PlasmaParameter, Distribution> draws = top.has("draws") ? draws(file, top.required("draws"))
+                : Map.of();
+        List<CampaignSpec.GridAxis> grid = grid(file, top.required("grid"));
+        CampaignSpec spec = new CampaignSpec(top.text("name"), top.text("description", ""), seed, runs, duration,
+                base, draws, grid, allocation);
+        if ((long) spec.setCount() * runs > MAX_RUNS) {
+            throw new FileFormatException(file, top.required("grid").line(), "grid",
+                    spec.setCount() + " sets x " + runs + " runs is more than " + MAX_RUNS + " runs");
+        }
+        // every set must be a parameter table the flight software accepts
+        for (int s = 0; s < spec.setCount(); s++) {
+            int status = spec.parameters(s).validate();
+            if (status != 0) {
+                throw new FileFormatException(file, top.required("grid").line(), "grid",
+                        "set " + s + " " + java.util.Arrays.toString(spec.setValues(s)) + " is refused by the flight software: "
+                                + dev.sweepline.fsw.table.TableStatus.name(status));
+            }
+        }
+        return spec;
+    }
+
+    private static double positive(Section s, String key, boolean zeroAllowed) {
+        double v = s.number(key);
+        if (v < 0 || (!zeroAllowed && v == 0)) {
+            throw s.invalid(s.required(key), zeroAllowed ? "must not be negative" : "must be positive", v);
+        }
+        return v;
+    }
+
+    private static Scenario scenario(Section top, String file, Path folder) {
+        String name = top.text("scenario");
+        try {
+            Path relative = folder == null ? null : folder.resolve(name);
+            if (relative != null && Files.isRegularFile(relative)) {
+                return ScenarioLoader.load(relative);
+            }
+            return ScenarioLoader.resolve(name);
+        } catch (FileFormatException e) {
+            throw new FileFormatException(file, top.required("scenario").line(), "scenario", e.getMessage(), e);
+        }
+    }
+
+    private static Map<PlasmaParameter, Distribution> draws(String file, YamlNode node) {
+        List<String> keys = new ArrayList<>();
+        for (PlasmaParameter p : PlasmaParameter.values()) {
+            keys.add(p.eventKey());
+        }
+        Section s = Section.of(file, node, keys);
+        Map<PlasmaParameter, Distribution> draws = new LinkedHashMap<>();
+        for (PlasmaParameter p : PlasmaParameter.values()) {
+            if (s.has(p.eventKey())) {
+                YamlNode n = s.required(p.eventKey());
+                Distribution d = distribution(file, n);
+                checkRange(file, n, p, d);
+                draws.put(p, d);
+            }
+        }
+        return draws;
+    }
+
+    /**
+     * Draws must stay where a scenario may go: a bounded distribution inside the parameter's range;
+     * a normal one only for the unbounded drift and for angles (clipped at +-60 deg when drawn).
+     */
+    private static void checkRange(String file, YamlNode node, PlasmaParameter p, Distribution d) {
+        double[] range = Ensemble.range(p);
+        double low;
+        double high;
+        if (d instanceof Distribution.Fixed f) {
+            low = f.value();
+            high = f.value();
+        } else if (d instanceof Distribution.Uniform u) {
+            low = u.low();
+            high = u.high();
+        } else if (d instanceof Distribution.LogUniform u) {
+            low = u.low();
+            high = u.high();
+        } else {
+            if (!Ensemble.clipped(p)) {
+                throw new FileFormatException(file, node.line(), node.path(),
+                        "a normal distribution can leave the allowed range; use uniform or logUniform");
+            }
+            return;
+        }
+        boolean openLow = range[0] == 0 && p != PlasmaParameter.ALPHA_ABUNDANCE;
+        if (low < range[0] || (openLow && low <= 0) || high > range[1]) {
+            throw new FileFormatException(file, node.line(), node.path(), "draws must lie in "
+                    + (openLow ? "(" : "[") + FileFormatException.number(range[0]) + ", "
+                    + FileFormatException.number(range[1]) + "]");
+        }
+    }
+
+    private static Distribution distribution(String file, YamlNode node) {
+        Section d = Section.of(file, node, KINDS);
+        if (!(node instanceof YamlNode.Mapping m) || m.entries().size() != 1) {
+            throw new FileFormatException(file, node.line(), node.path(), "give exactly one of " + KINDS);
+        }
+        String kind = m.entries().keySet().iterator().next();
+        YamlNode value = d.required(kind);
+        if (kind.equals("fixed")) {
+            return new Distribution.Fixed(d.number(value));
+        }
+        double[] ab = pair(d, value);
+        switch (kind) {
+            case "uniform":
+                ordered(d, value, ab);
+                return new Distribution.Uniform(ab[0], ab[1]);
+            case "logUniform":
+                ordered(d, value, ab);
+                if (ab[0] <= 0) {
+                    throw d.invalid(value, "a log-uniform range must be positive", ab[0]);
+                }
+                return new Distribution.LogUniform(ab[0], ab[1]);
+            case "normal":
+                if (ab[1] < 0) {
+                    throw d.invalid(value, "the standard deviation must not be negative", ab[1]);
+                }
+                return new Distribution.Normal(ab[0], ab[1]);
+            default:
+                throw new IllegalStateException("unknown kind " + kind);
+        }
+    }
+
+    private static double[] pair(Section d, YamlNode value) {
+        if (!(value instanceof YamlNode.Sequence seq) || seq.items().size() != 2) {
+            throw d.typeError(value, "a list of two numbers");
+        }
+        return new double[] {d.number(seq.items().get(0)), d.number(seq.items().get(1))};
+    }
+
+    private static void ordered(Section d, YamlNode value, double[] ab) {
+        if (!(ab[1] > ab[0])) {
+            throw d.invalid(value, "the upper bound must exceed the lower bound " + FileFormatException.number(ab[0]), ab[1]);
+        }
+    }
+
+    private static List<CampaignSpec.GridAxis> grid(String file, YamlNode node) {
+        List<String> keys = new ArrayList<>();
+        for (TunableParameter t : TunableParameter.values()) {
+            keys.add(t.key());
+        }
+        Section s = Section.of(file, node, keys);
+        List<CampaignSpec.GridAxis> axes = new ArrayList<>();
+        for (TunableParameter t : TunableParameter.values()) {
+            if (!s.has(t.key())) {
+                continue;
+            }
+            YamlNode list = s.required(t.key());
+            if (!(list instanceof YamlNode.Sequence seq) || seq.items().isEmpty()) {
+                throw s.typeError(list, "a non-empty list of values");
+            }
+            List<Double> values = new ArrayList<>();
+            for (YamlNode item : seq.items()) {
+                values.add(s.number(item));
+            }
+            axes.add(new CampaignSpec.GridAxis(t, List.copyOf(values)));
+        }
+        return axes;
+    }
+}

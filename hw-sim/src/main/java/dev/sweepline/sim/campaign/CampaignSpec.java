@@ -1,0 +1,88 @@
+package dev.sweepline.sim.campaign;
+
+import dev.sweepline.fsw.table.SweepParameters;
+import dev.sweepline.sim.scenario.PlasmaConditions;
+import dev.sweepline.sim.scenario.PlasmaParameter;
+import dev.sweepline.sim.scenario.Scenario;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Map;
+import java.util.SplittableRandom;
+
+/**
+ * A tuning campaign: a scenario ensemble (the base scenario with its starting plasma drawn from
+ * seeded distributions) crossed with a grid over the sweep parameters. Every grid point ("set") is
+ * run on the same ensemble draws (common random numbers), so differences between sets come from the
+ * sets, not from the luck of the draw.
+ *
+ * @param name             campaign name
+ * @param description      what it is for
+ * @param seed             seeds every draw and every run
+ * @param runsPerSet       ensemble members run for each set
+ * @param durationSeconds  simulated time of each run
+ * @param base             the base scenario (events, fluctuations, distance)
+ * @param draws            distributions of starting-plasma parameters, in file order
+ * @param grid             axes of the parameter grid, in file order
+ * @param allocationBitsPerSecond downlink allocation the sets are judged against; NaN for none
+ */
+public record CampaignSpec(String name, String description, long seed, int runsPerSet, double durationSeconds,
+        Scenario base, Map<PlasmaParameter, Distribution> draws, List<GridAxis> grid,
+        double allocationBitsPerSecond) {
+
+    /** One grid axis: a tunable parameter and the values it takes. */
+    public record GridAxis(TunableParameter parameter, List<Double> values) {
+    }
+
+    /** Number of grid points: the product of the axis lengths. */
+    public int setCount() {
+        int n = 1;
+        for (GridAxis a : grid) {
+            n *= a.values().size();
+        }
+        return n;
+    }
+
+    /** The values of set {@code index} along each axis (the last axis varies fastest). */
+    public double[] setValues(int index) {
+        double[] v = new double[grid.size()];
+        int rest = index;
+        for (int a = grid.size() - 1; a >= 0; a--) {
+            List<Double> values = grid.get(a).values();
+            v[a] = values.get(rest % values.size());
+            rest /= values.size();
+        }
+        return v;
+    }
+
+    /** The flight software's parameters of set {@code index}: the defaults with the set's values applied. */
+    public SweepParameters parameters(int index) {
+        SweepParameters p = SweepParameters.defaults();
+        double[] v = setValues(index);
+        for (int a = 0; a < grid.size(); a++) {
+            grid.get(a).parameter().apply(p, v[a]);
+        }
+        return p;
+    }
+
+    /** Seed of ensemble member {@code run}, the same for every set. */
+    public long runSeed(int run) {
+        return new SplittableRandom(seed).split().nextLong() ^ (0x9E3779B97F4A7C15L * (run + 1));
+    }
+
+    /** Ensemble member {@code run}: the base scenario from a drawn start. */
+    public Scenario member(int run) {
+        SplittableRandom random = new SplittableRandom(runSeed(run));
+        PlasmaConditions start = base.start();
+        for (Map.Entry<PlasmaParameter, Distribution> d : draws.entrySet()) {
+            start = start.with(d.getKey(), Ensemble.clip(d.getKey(), d.getValue().draw(random)));
+        }
+        return base.withStart(base.name() + "-member-" + run, start, base.distanceAu(), durationSeconds);
+    }
+
+    /** The keys of the grid axes, in order. */
+    public List<String> axisKeys() {
+        List<String> keys = new ArrayList<>();
+        grid.forEach(a -> keys.add(a.parameter().key()));
+        return keys;
+    }
+}

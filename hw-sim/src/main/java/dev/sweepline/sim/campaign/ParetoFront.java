@@ -1,0 +1,62 @@
+package dev.sweepline.sim.campaign;
+
+import java.util.ArrayList;
+import java.util.List;
+
+/**
+ * The sets no other set beats on every objective at once: accuracy (miss fraction, lower better),
+ * telemetry rate (bits per second, lower better) and cadence (spectra per second, higher better).
+ */
+public final class ParetoFront {
+    private ParetoFront() {
+    }
+
+    /** The non-dominated sets, in set order. */
+    public static List<SetResult> of(List<SetResult> sets) {
+        List<SetResult> front = new ArrayList<>();
+        for (SetResult a : sets) {
+            boolean dominated = false;
+            for (SetResult b : sets) {
+                if (b != a && dominates(b, a)) {
+                    dominated = true;
+                    break;
+                }
+            }
+            if (!dominated) {
+                front.add(a);
+            }
+        }
+        return front;
+    }
+
+    /** True when {@code b} is no worse than {@code a} on every objective and better on one. */
+    static boolean dominates(SetResult b, SetResult a) {
+        boolean noWorse = b.missFraction() <= a.missFraction() && b.bitsPerSecondMean() <= a.bitsPerSecondMean()
+                && b.spectraPerSecond() >= a.spectraPerSecond();
+        boolean better = b.missFraction() < a.missFraction() || b.bitsPerSecondMean() < a.bitsPerSecondMean()
+                || b.spectraPerSecond() > a.spectraPerSecond();
+        return noWorse && better;
+    }
+
+    /**
+     * The recommended set: on the front, no alpha lock, every jump reacquired, the worst run's lock
+     * fraction at least 0.99 and the worst run within the allocation (when one is given); among those
+     * the highest cadence, then the fewest bits. Null when no set qualifies.
+     */
+    public static SetResult recommend(List<SetResult> front, double allocationBitsPerSecond) {
+        SetResult best = null;
+        for (SetResult s : front) {
+            boolean fits = Double.isNaN(allocationBitsPerSecond) || s.bitsPerSecondMax() <= allocationBitsPerSecond;
+            boolean sound = s.alphaLocks() == 0 && s.reacquireSweepsMax() >= 0
+                    && !Double.isNaN(s.lockFractionMin()) && s.lockFractionMin() >= 0.99;
+            if (!fits || !sound) {
+                continue;
+            }
+            if (best == null || s.spectraPerSecond() > best.spectraPerSecond()
+                    || (s.spectraPerSecond() == best.spectraPerSecond() && s.bitsPerSecondMean() < best.bitsPerSecondMean())) {
+                best = s;
+            }
+        }
+        return best;
+    }
+}

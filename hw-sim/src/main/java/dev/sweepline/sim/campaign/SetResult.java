@@ -1,0 +1,78 @@
+package dev.sweepline.sim.campaign;
+
+import java.util.ArrayList;
+import java.util.List;
+
+/**
+ * The metrics of one parameter set over the ensemble.
+ *
+ * @param set                 grid point index
+ * @param values              the set's values along the grid axes
+ * @param runs                runs aggregated
+ * @param lockFractionMean    mean lock fraction over runs with focus sweeps
+ * @param lockFractionMin     worst run's lock fraction
+ * @param alphaLocks          alpha locks over all runs
+ * @param reacquireSweepsMax  worst reacquisition, sweeps (-1 if a jump was never reacquired)
+ * @param reacquireSecondsMax worst reacquisition, seconds
+ * @param spectraPerSecond    mean cadence, spectra per second
+ * @param bitsPerSecondMean   mean telemetry rate
+ * @param bitsPerSecondMax    highest telemetry rate of a run
+ * @param integratingFraction mean integrating fraction
+ */
+public record SetResult(int set, double[] values, int runs, double lockFractionMean, double lockFractionMin,
+        int alphaLocks, int reacquireSweepsMax, double reacquireSecondsMax, double spectraPerSecond,
+        double bitsPerSecondMean, double bitsPerSecondMax, double integratingFraction) {
+
+    /** Fraction of focus sweeps that missed the proton peak: the accuracy objective (lower is better). */
+    public double missFraction() {
+        return 1 - lockFractionMean;
+    }
+
+    /** Aggregates {@code rows} (any order) into one result per set, in set order. */
+    static List<SetResult> aggregate(CampaignSpec spec, List<RunRow> rows) {
+        List<List<RunRow>> bySet = new ArrayList<>();
+        for (int s = 0; s < spec.setCount(); s++) {
+            bySet.add(new ArrayList<>());
+        }
+        for (RunRow r : rows) {
+            bySet.get(r.set()).add(r);
+        }
+        List<SetResult> results = new ArrayList<>();
+        for (int s = 0; s < spec.setCount(); s++) {
+            List<RunRow> runs = bySet.get(s);
+            runs.sort((a, b) -> Integer.compare(a.run(), b.run())); // sums in one order: bit-identical
+            results.add(of(s, spec.setValues(s), runs));
+        }
+        return results;
+    }
+
+    private static SetResult of(int set, double[] values, List<RunRow> runs) {
+        double lockSum = 0;
+        int lockRuns = 0;
+        double lockMin = Double.NaN;
+        int alpha = 0;
+        int reacqSweeps = 0;
+        double reacqSeconds = 0;
+        double cadence = 0;
+        double bits = 0;
+        double bitsMax = 0;
+        double integrating = 0;
+        for (RunRow r : runs) {
+            if (!Double.isNaN(r.lockFraction())) {
+                lockSum += r.lockFraction();
+                lockRuns++;
+                lockMin = Double.isNaN(lockMin) ? r.lockFraction() : Math.min(lockMin, r.lockFraction());
+            }
+            alpha += r.alphaLocks();
+            reacqSweeps = reacqSweeps < 0 || r.reacquireSweeps() < 0 ? -1 : Math.max(reacqSweeps, r.reacquireSweeps());
+            reacqSeconds = Double.isNaN(r.reacquireSeconds()) ? Double.NaN : Math.max(reacqSeconds, r.reacquireSeconds());
+            cadence += r.spectraPerSecond();
+            bits += r.bitsPerSecond();
+            bitsMax = Math.max(bitsMax, r.bitsPerSecond());
+            integrating += r.integratingFraction();
+        }
+        int n = Math.max(1, runs.size());
+        return new SetResult(set, values, runs.size(), lockRuns == 0 ? Double.NaN : lockSum / lockRuns, lockMin,
+                alpha, reacqSweeps, reacqSeconds, cadence / n, bits / n, bitsMax, integrating / n);
+    }
+}

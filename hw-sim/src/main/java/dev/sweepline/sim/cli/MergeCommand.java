@@ -1,0 +1,44 @@
+package dev.sweepline.sim.cli;
+
+import dev.sweepline.sim.campaign.CampaignOutput;
+import dev.sweepline.sim.campaign.CampaignReader;
+import dev.sweepline.sim.campaign.CampaignSpec;
+import dev.sweepline.sim.campaign.RunRow;
+import dev.sweepline.sim.yaml.FileFormatException;
+import java.io.IOException;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.concurrent.Callable;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+
+/** {@code merge}: joins the shards of a campaign; the result equals the unsharded run. */
+@Command(name = "merge", mixinStandardHelpOptions = true,
+        description = "Merge the shard folders of a campaign into its full results.")
+final class MergeCommand implements Callable<Integer> {
+    @Parameters(index = "0", paramLabel = "CAMPAIGN.yaml", description = "The campaign file the shards ran.")
+    Path campaign;
+
+    @Parameters(index = "1..*", paramLabel = "SHARD_DIR", description = "The shards' output folders.")
+    List<Path> shards;
+
+    @Option(names = "--out", paramLabel = "DIR", required = true, description = "Output folder.")
+    Path out;
+
+    @Override
+    public Integer call() throws IOException {
+        CampaignSpec spec;
+        List<RunRow> rows;
+        try {
+            spec = CampaignReader.load(campaign);
+            rows = CampaignOutput.readRuns(spec, shards);
+        } catch (FileFormatException | IOException e) {
+            System.err.println("merge error: " + e.getMessage());
+            return 2;
+        }
+        CampaignOutput.writeRuns(out, rows);
+        TuneCommand.report(CampaignOutput.writeResults(out, spec, rows), out);
+        return 0;
+    }
+}

@@ -1,0 +1,86 @@
+package dev.sweepline.sim.cli;
+
+import dev.sweepline.sim.campaign.CampaignOutput;
+import dev.sweepline.sim.campaign.CampaignReader;
+import dev.sweepline.sim.campaign.CampaignRunner;
+import dev.sweepline.sim.campaign.CampaignSpec;
+import dev.sweepline.sim.campaign.RunRow;
+import dev.sweepline.sim.campaign.SetResult;
+import dev.sweepline.sim.campaign.Shard;
+import dev.sweepline.sim.yaml.FileFormatException;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.Locale;
+import java.util.concurrent.Callable;
+import me.tongfei.progressbar.ProgressBar;
+import me.tongfei.progressbar.ProgressBarBuilder;
+import me.tongfei.progressbar.ProgressBarStyle;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+
+/** {@code tune}: a tuning campaign, on every core, or one shard of it for a cluster job array. */
+@Command(name = "tune", mixinStandardHelpOptions = true,
+        description = {"Run a tuning campaign: a scenario ensemble crossed with a grid of sweep parameters.",
+            "With --shard i/N only that slice runs (write each shard to its own folder, then 'merge')."})
+final class TuneCommand implements Callable<Integer> {
+    @Parameters(index = "0", paramLabel = "CAMPAIGN.yaml", description = "The campaign file.")
+    Path campaign;
+
+    @Option(names = "--out", paramLabel = "DIR", required = true, description = "Output folder.")
+    Path out;
+
+    @Option(names = "--threads", paramLabel = "N",
+            description = "Worker threads (default: every core, ${DEFAULT-VALUE}).")
+    int threads = Runtime.getRuntime().availableProcessors();
+
+    @Option(names = "--shard", paramLabel = "i/N", description = "Run only shard i of N (1-based).")
+    String shard;
+
+    @Override
+    public Integer call() throws Exception {
+        CampaignSpec spec;
+        Shard slice;
+        try {
+            spec = CampaignReader.load(campaign);
+            slice = shard == null ? Shard.ALL : Shard.parse(shard);
+        } catch (FileFormatException | IllegalArgumentException e) {
+            System.err.println("campaign error: " + e.getMessage());
+            return 2;
+        }
+        long jobs = (long) spec.setCount() * spec.runsPerSet();
+        System.out.printf(Locale.ROOT, "campaign %s: %d sets x %d runs of %.0f s, shard %s, %d threads%n",
+                spec.name(), spec.setCount(), spec.runsPerSet(), spec.durationSeconds(), slice, threads);
+        long start = System.nanoTime();
+        List<RunRow> rows;
+        try (ProgressBar bar = new ProgressBarBuilder().setTaskName("tune").setInitialMax(jobs / slice.count())
+                .setStyle(ProgressBarStyle.ASCII).setUpdateIntervalMillis(500).build()) {
+            rows = CampaignRunner.run(spec, threads, slice, (done, total) -> {
+                bar.maxHint(total);
+                bar.stepTo(done);
+            });
+        }
+        double wall = (System.nanoTime() - start) / 1e9;
+        CampaignOutput.writeRuns(out, rows);
+        System.out.printf(Locale.ROOT, "%d runs in %.1f s: %.2f scenario-runs per second, x%.0f real time%n",
+                rows.size(), wall, rows.size() / wall, rows.size() * spec.durationSeconds() / wall);
+        if (!slice.whole()) {
+            System.out.println("wrote " + out.resolve(CampaignOutput.RUNS) + "; merge the shards with 'merge'");
+            return 0;
+        }
+        report(CampaignOutput.writeResults(out, spec, rows), out);
+        return 0;
+    }
+
+    static void report(SetResult best, Path out) {
+        if (best == null) {
+            System.out.println("no set met the recommendation rules (see summary.json)");
+        } else {
+            System.out.printf(Locale.ROOT, "recommended: set %d, lock %.4f (worst %.4f), %.3f spectra/s, %.0f bit/s%n",
+                    best.set(), best.lockFractionMean(), best.lockFractionMin(), best.spectraPerSecond(),
+                    best.bitsPerSecondMean());
+        }
+        System.out.println("wrote " + out.resolve("sets.csv") + ", " + out.resolve("summary.json")
+                + (best == null ? "" : " and " + out.resolve("recommended.yaml")));
+    }
+}

@@ -1,0 +1,55 @@
+package dev.sweepline.sim.campaign;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import dev.sweepline.sim.yaml.FileFormatException;
+import java.nio.file.Path;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.CsvSource;
+import org.junit.jupiter.api.Test;
+
+class CampaignReaderTest {
+    @Test
+    void shouldLoadTheDemoCampaign() {
+        CampaignSpec spec = CampaignReader.load(Path.of("src/main/resources/campaigns/perihelion-tuning.yaml"));
+        assertEquals("perihelion-tuning", spec.name());
+        assertEquals(3 * 3 * 2, spec.setCount()); // the grid's three axes in the file
+        assertEquals(6, spec.draws().size());
+    }
+
+    /** Each broken line names its file, line and field (the bad-input rule of the project). */
+    @ParameterizedTest
+    @CsvSource(delimiter = '|', value = {
+        "runsPerSet: 0|5|runsPerSet|must be positive",
+        "bogus: 1|5|bogus|unknown key",
+        "draws: {protonDensity: {normal: [100, 10]}}|5|draws.protonDensity|normal distribution",
+        "draws: {protonDensity: {uniform: [-5, 10]}}|5|draws.protonDensity|draws must lie in",
+        "draws: {alphaAbundance: {uniform: [0.1, 0.9]}}|5|draws.alphaAbundance|draws must lie in",
+        "draws: {protonSpeed: {uniform: [400, 300]}}|5|draws.protonSpeed|upper bound",
+        "grid: {resurveyEvery: [0]}|5|grid|refused by the flight software",
+    })
+    void shouldNameFileLineAndField(String line, int lineNo, String field, String problem) {
+        String text = """
+                format: sweepline-campaign/1
+                name: broken
+                seed: 1
+                durationS: 10
+                %s
+                scenario: quiet-perihelion
+                """.formatted(line);
+        if (!line.startsWith("runsPerSet")) {
+            text += "runsPerSet: 2\n";
+        }
+        if (!line.startsWith("grid")) {
+            text += "grid: {integrationPeriods: [8]}\n";
+        }
+        FileFormatException e = assertThrows(FileFormatException.class,
+                () -> CampaignReader.parse(text, "broken.yaml", null));
+        assertEquals("broken.yaml", e.file());
+        assertEquals(lineNo, e.line(), e.getMessage());
+        assertTrue(e.field().startsWith(field), e.getMessage());
+        assertTrue(e.getMessage().contains(problem), e.getMessage());
+    }
+}
