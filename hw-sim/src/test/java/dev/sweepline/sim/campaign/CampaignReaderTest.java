@@ -31,7 +31,7 @@ class CampaignReaderTest {
         "grid: {resurveyEvery: [0]}|5|grid|refused by the flight software",
     })
     void shouldNameFileLineAndField(String line, int lineNo, String field, String problem) {
-        String text = """
+        String head = """
                 format: sweepline-campaign/1
                 name: broken
                 seed: 1
@@ -39,12 +39,8 @@ class CampaignReaderTest {
                 %s
                 scenario: quiet-perihelion
                 """.formatted(line);
-        if (!line.startsWith("runsPerSet")) {
-            text += "runsPerSet: 2\n";
-        }
-        if (!line.startsWith("grid")) {
-            text += "grid: {integrationPeriods: [8]}\n";
-        }
+        String text = head + (line.startsWith("runsPerSet") ? "" : "runsPerSet: 2\n")
+                + (line.startsWith("grid") ? "" : "grid: {integrationPeriods: [8]}\n");
         FileFormatException e = assertThrows(FileFormatException.class,
                 () -> CampaignReader.parse(text, "broken.yaml", null));
         assertEquals("broken.yaml", e.file());
