@@ -195,7 +195,7 @@ public final class SweepScheduler {
         listener.onSweepComplete(done, nowMicros);
         switch (mode) {
             case SURVEY:
-                if (done.peakValid()) {
+                if (done.peakValid() && params.focusEnabled != 0) {
                     chooseBand(done, nowMicros);
                     focusSweepsSinceSurvey = 0;
                     changeMode(SweepMode.FOCUS, ModeChangeReason.LOCK_ACQUIRED, nowMicros);

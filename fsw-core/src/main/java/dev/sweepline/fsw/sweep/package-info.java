@@ -76,7 +76,8 @@
  *     by the condition it names and not by steady plasma or slow drift; after a x1.82 E/q shock the band
  *     holds the new peak within two complete sweeps after the sweep the front fell in.
  *     <i>LockLossTest.</i></li>
- * <li><b>R11 Re-survey.</b> Exactly K focus sweeps between surveys on steady plasma.
+ * <li><b>R11 Re-survey.</b> Exactly K focus sweeps between surveys on steady plasma; with focusEnabled 0
+ *     every sweep is a survey (LockLossTest.shouldStayInSurveyWhenFocusIsDisabled).
  *     <i>LockLossTest.shouldResurveyEveryKFocusSweeps.</i></li>
  * <li><b>R12 Step order.</b> Each sweep starts at the end nearer the present HV level and steps through
  *     neighbours; so consecutive surveys alternate direction (up from HV off, then down, ...), and a

@@ -33,6 +33,8 @@ public final class SweepParameters {
     public int halfWidthPerFwhmQ8;
     /** Most windows in a focus band. */
     public int maxBandWindows;
+    /** 1: a survey with a valid peak leads to focus; 0: survey only (every window, every sweep). */
+    public int focusEnabled;
     /** Focus sweeps between forced surveys (K). */
     public int resurveyEveryFocusSweeps;
     /** Loss of lock: the peak current fell below this fraction of the reference peak, Q8. */
@@ -71,6 +73,7 @@ public final class SweepParameters {
         p.minHalfWidthWindows = 4;
         p.halfWidthPerFwhmQ8 = 384;
         p.maxBandWindows = 64;
+        p.focusEnabled = 1;
         p.resurveyEveryFocusSweeps = 16;
         p.collapseFractionQ8 = 64;
         p.jumpWindows = 6;
@@ -101,6 +104,7 @@ public final class SweepParameters {
         minHalfWidthWindows = other.minHalfWidthWindows;
         halfWidthPerFwhmQ8 = other.halfWidthPerFwhmQ8;
         maxBandWindows = other.maxBandWindows;
+        focusEnabled = other.focusEnabled;
         resurveyEveryFocusSweeps = other.resurveyEveryFocusSweeps;
         collapseFractionQ8 = other.collapseFractionQ8;
         jumpWindows = other.jumpWindows;
@@ -134,7 +138,7 @@ public final class SweepParameters {
             || maxBandWindows < 2 * minHalfWidthWindows + 1 || maxBandWindows > WindowTable.CAPACITY) {
             return TableStatus.BAD_BAND;
         }
-        if (resurveyEveryFocusSweeps < 1) {
+        if (resurveyEveryFocusSweeps < 1 || (focusEnabled != 0 && focusEnabled != 1)) {
             return TableStatus.BAD_RESURVEY;
         }
         if (collapseFractionQ8 < 0 || collapseFractionQ8 > 256 || jumpWindows < 1

@@ -34,6 +34,19 @@ class LockLossTest {
     }
 
     @Test
+    void shouldStayInSurveyWhenFocusIsDisabled() {
+        SweepParameters p = SweepParameters.defaults();
+        p.focusEnabled = 0; // survey-only phases of an orbit plan
+        RecordingListener l = new RecordingListener();
+        ClosedLoop loop = Fixtures.loop(Fixtures.oneAu(30), p, l);
+        loop.runSweeps(6);
+        assertEquals(6, l.sweeps.size());
+        for (long[] sweep : l.sweeps) {
+            assertEquals(SweepMode.SURVEY.ordinal(), sweep[1]);
+        }
+    }
+
+    @Test
     void shouldResurveyEveryKFocusSweeps() {
         SweepParameters p = SweepParameters.defaults();
         p.resurveyEveryFocusSweeps = 4;
