@@ -51,6 +51,15 @@ public final class ClosedLoopBench {
 
     /** Runs {@code config} to its end, handing every telemetry frame (ASM first) to {@code frames}. */
     public static Result run(BenchConfig config, Progress progress, FrameSink frames) {
+        return run(config, progress, frames, fsw -> { });
+    }
+
+    /**
+     * Runs {@code config} to its end; {@code setup} is given the assembled flight software before the
+     * first cycle (e.g. to command a mode, as ground commands would).
+     */
+    public static Result run(BenchConfig config, Progress progress, FrameSink frames,
+            java.util.function.Consumer<FlightSoftware> setup) {
         ScenarioTimeline timeline = config.scenario().timeline(config.seed());
         WindowVolts windows = new WindowVolts(config.table(), config.instrument().calibration());
         AlphaDriftDirection drift = config.scenario().alphaDriftDirection();
@@ -63,6 +72,7 @@ public final class ClosedLoopBench {
         flight.parameters = config.parameters();
         flight.frameLength = config.frameLength();
         FlightSoftware fsw = new FlightSoftware(flight, link, frames, recorder);
+        setup.accept(fsw);
 
         long wallStart = System.nanoTime();
         long end = config.durationMicros();
