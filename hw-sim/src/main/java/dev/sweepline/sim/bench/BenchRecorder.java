@@ -7,6 +7,7 @@ import dev.sweepline.fsw.sweep.Spectrum;
 import dev.sweepline.fsw.sweep.SweepListener;
 import dev.sweepline.fsw.sweep.SweepMode;
 import dev.sweepline.sim.cup.FaradayCup;
+import dev.sweepline.sim.design.ProtonInformation;
 import dev.sweepline.sim.instrument.StepTruth;
 import dev.sweepline.sim.link.InProcessLink;
 import dev.sweepline.sim.plasma.IonPopulation;
@@ -33,6 +34,10 @@ public final class BenchRecorder implements SweepListener, InProcessLink.StepObs
     private long saturatedSamples;
     private long unsettledSamples;
     private double chosenCentre = Double.NaN;
+    private final ProtonInformation information;
+    private final double[][] measuredInformation = new double[3][3];
+    private final double[] gradient = new double[3];
+    private double informationSeconds;
 
     /**
      * @param windows the table's windows as the HV supply makes them
@@ -42,11 +47,12 @@ public final class BenchRecorder implements SweepListener, InProcessLink.StepObs
     public BenchRecorder(WindowVolts windows, FaradayCup cup, LongFunction<PlasmaState> truthAt) {
         this.windows = windows;
         this.cup = cup;
+        this.information = new ProtonInformation(cup.geometry());
         this.truthAt = truthAt;
     }
 
     @Override
-    public void onExecuted(StepCommand step, SampleReply reply, StepTruth truth, long startMicros) {
+    public void onExecuted(StepCommand step, SampleReply reply, StepTruth truth, PlasmaState plasma, long startMicros) {
         steps++;
         integrationMicros += truth.endMicros - truth.integrationStartMicros;
         if ((reply.status & SampleReply.STATUS_SATURATED) != 0) {
@@ -55,6 +61,33 @@ public final class BenchRecorder implements SweepListener, InProcessLink.StepObs
         if ((reply.status & SampleReply.STATUS_HV_UNSETTLED) != 0) {
             unsettledSamples++;
         }
+        addInformation(step, reply, truth, plasma);
+    }
+
+    /** What this step told about the protons' (n, U, w), at the plasma of its mid-integration. */
+    private void addInformation(StepCommand step, SampleReply reply, StepTruth truth, PlasmaState plasma) {
+        if (!step.hvEnabled || (reply.status & SampleReply.STATUS_SATURATED) != 0) {
+            return;
+        }
+        IonPopulation p = ProtonInformation.protons(plasma);
+        if (p == null) {
+            return;
+        }
+        double seconds = (truth.endMicros - truth.integrationStartMicros) / 1e6;
+        information.gradient(plasma, p, truth.lowVolts, truth.highVolts, gradient);
+        ProtonInformation.accumulate(measuredInformation, gradient,
+                ProtonInformation.variance(truth.totalAmps, reply.gainRange, seconds), 1.0);
+        informationSeconds += seconds;
+    }
+
+    /** Fisher information of the protons' relative (n, U, w) from every unsaturated step so far. */
+    public double[][] measuredInformation() {
+        return measuredInformation;
+    }
+
+    /** Integration time behind {@link #measuredInformation()}, seconds. */
+    public double informationSeconds() {
+        return informationSeconds;
     }
 
     @Override

@@ -4,6 +4,7 @@ import dev.sweepline.fsw.exec.FlightConfig;
 import dev.sweepline.fsw.exec.FlightSoftware;
 import dev.sweepline.fsw.telemetry.FrameSink;
 import dev.sweepline.sim.cup.FaradayCup;
+import dev.sweepline.sim.design.DOptimalDesign;
 import dev.sweepline.sim.instrument.SimulatedInstrument;
 import dev.sweepline.sim.link.InProcessLink;
 import dev.sweepline.sim.plasma.PlasmaState;
@@ -37,6 +38,22 @@ public final class ClosedLoopBench {
     }
 
     private ClosedLoopBench() {
+    }
+
+    /**
+     * The run's D-efficiency: what its steps told about the protons against the D-optimal use of the
+     * same integration time on the same windows, for the plasma at mid-run.
+     */
+    static double informationEfficiency(BenchConfig config, BenchRecorder recorder, WindowVolts windows,
+            PlasmaState midRun) {
+        if (recorder.informationSeconds() <= 0) {
+            return Double.NaN;
+        }
+        double stepSeconds = config.parameters().integrationPeriods
+                * dev.sweepline.fsw.link.InstrumentConstants.MODULATION_PERIOD_MICROS / 1e6;
+        DOptimalDesign design = new DOptimalDesign(new FaradayCup(config.instrument().cup()), windows);
+        return DOptimalDesign.efficiency(recorder.measuredInformation(),
+                design.optimalInformation(midRun, recorder.informationSeconds(), stepSeconds));
     }
 
     /** Seed of the instrument's noise, derived from the run seed so the two streams are independent. */
@@ -102,7 +119,8 @@ public final class ClosedLoopBench {
         progress.update(end, end);
         double wallSeconds = (System.nanoTime() - wallStart) / 1e9;
         String hash = String.format("%016x", fsw.scheduler().decisionHash());
-        return new Result(RunSummary.of(config, recorder, TelemetryFigures.of(fsw, config), wallSeconds, hash),
-                recorder);
+        double efficiency = informationEfficiency(config, recorder, windows, plasma.apply(end / 2));
+        return new Result(RunSummary.of(config, recorder, TelemetryFigures.of(fsw, config), efficiency, wallSeconds,
+                hash), recorder);
     }
 }

@@ -53,6 +53,7 @@ public final class RunReportWriter {
         }
         m.put("jumps", jumps);
         m.put("integratingFraction", round(s.integratingFraction(), 4));
+        m.put("informationEfficiency", finite(round(s.informationEfficiency(), 4)));
         m.put("saturatedSamples", s.saturatedSamples());
         m.put("unsettledSamples", s.unsettledSamples());
         m.put("modeChanges", s.modeChanges());
@@ -110,6 +111,7 @@ public final class RunReportWriter {
                 : String.format(Locale.ROOT, "%d sweeps, %.3f s", s.reacquireSweepsMax(), s.reacquireSecondsMax()));
         row(out, "integrating", String.format(Locale.ROOT, "%.1f %% of the time", 100 * s.integratingFraction()));
         row(out, "saturated samples", Long.toString(s.saturatedSamples()));
+        row(out, "D-efficiency", String.format(Locale.ROOT, "%.3f of the D-optimal design", s.informationEfficiency()));
         TelemetryFigures t = s.telemetry();
         row(out, "telemetry", String.format(Locale.ROOT, "%.0f bit/s in %d frames", t.frameBitsPerSecond(), t.frames()));
         if (!Double.isNaN(t.allocationBitsPerSecond())) {

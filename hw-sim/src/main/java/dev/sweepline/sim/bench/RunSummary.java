@@ -24,12 +24,15 @@ import java.util.Map;
  * @param unsettledSamples    samples flagged HV-unsettled
  * @param modeChanges         mode changes by reason
  * @param telemetry           bits per second generated, against the allocation
+ * @param informationEfficiency D-efficiency of the run's measurements of the protons' (n, U, w) against the
+ *                            D-optimal design over the same windows and integration time (NaN if undefined)
  * @param decisionHash        the flight software's running hash of its decisions (hex)
  */
 public record RunSummary(String scenario, long seed, double simulatedSeconds, double wallSeconds, long steps,
         Map<SweepMode, Integer> sweepsByMode, Map<SweepMode, Double> spectraPerSecond, double lockFraction,
         int alphaLocks, List<Reacquisition> reacquisitions, double integratingFraction, long saturatedSamples,
-        long unsettledSamples, Map<String, Integer> modeChanges, TelemetryFigures telemetry, String decisionHash) {
+        long unsettledSamples, Map<String, Integer> modeChanges, TelemetryFigures telemetry, double informationEfficiency,
+        String decisionHash) {
 
     /** Largest sweep count to reacquire over all jumps (0 when the scenario has none; -1 if one never was). */
     public int reacquireSweepsMax() {
@@ -61,8 +64,8 @@ public record RunSummary(String scenario, long seed, double simulatedSeconds, do
     }
 
     /** The figures of a finished run. */
-    static RunSummary of(BenchConfig config, BenchRecorder recorder, TelemetryFigures telemetry, double wallSeconds,
-            String decisionHash) {
+    static RunSummary of(BenchConfig config, BenchRecorder recorder, TelemetryFigures telemetry,
+            double informationEfficiency, double wallSeconds, String decisionHash) {
         Map<SweepMode, Integer> byMode = new EnumMap<>(SweepMode.class);
         Map<SweepMode, Double> perSecond = new EnumMap<>(SweepMode.class);
         for (SweepMode m : SweepMode.values()) {
@@ -88,6 +91,6 @@ public record RunSummary(String scenario, long seed, double simulatedSeconds, do
         return new RunSummary(config.scenario().name(), config.seed(), seconds, wallSeconds, recorder.steps(),
                 byMode, perSecond, focus == 0 ? Double.NaN : (double) locked / focus, alpha, reacq,
                 recorder.integrationMicros() / (seconds * 1e6), recorder.saturatedSamples(),
-                recorder.unsettledSamples(), recorder.modeChanges(), telemetry, decisionHash);
+                recorder.unsettledSamples(), recorder.modeChanges(), telemetry, informationEfficiency, decisionHash);
     }
 }

@@ -118,6 +118,7 @@ public final class CampaignOutput {
         m.put("bitsPerSecondMean", s.bitsPerSecondMean());
         m.put("bitsPerSecondMax", s.bitsPerSecondMax());
         m.put("integratingFraction", s.integratingFraction());
+        m.put("informationEfficiency", finite(s.informationEfficiency()));
         m.put("paretoFront", onFront);
         return m;
     }
@@ -127,16 +128,16 @@ public final class CampaignOutput {
         try (Writer w = Files.newBufferedWriter(file)) {
             w.write("set," + String.join(",", spec.axisKeys()) + ",runs,lockFractionMean,lockFractionMin,alphaLocks,"
                     + "reacquireSweepsMax,reacquireSecondsMax,spectraPerSecond,bitsPerSecondMean,bitsPerSecondMax,"
-                    + "integratingFraction,paretoFront\n");
+                    + "integratingFraction,informationEfficiency,paretoFront\n");
             for (SetResult s : sets) {
                 StringBuilder b = new StringBuilder().append(s.set());
                 for (double v : s.values()) {
                     b.append(',').append(v);
                 }
-                b.append(String.format(Locale.ROOT, ",%d,%s,%s,%d,%d,%s,%s,%s,%s,%s,%b%n", s.runs(), s.lockFractionMean(),
-                        s.lockFractionMin(), s.alphaLocks(), s.reacquireSweepsMax(), s.reacquireSecondsMax(),
-                        s.spectraPerSecond(), s.bitsPerSecondMean(), s.bitsPerSecondMax(), s.integratingFraction(),
-                        front.contains(s)));
+                b.append(String.format(Locale.ROOT, ",%d,%s,%s,%d,%d,%s,%s,%s,%s,%s,%s,%b%n", s.runs(),
+                        s.lockFractionMean(), s.lockFractionMin(), s.alphaLocks(), s.reacquireSweepsMax(),
+                        s.reacquireSecondsMax(), s.spectraPerSecond(), s.bitsPerSecondMean(), s.bitsPerSecondMax(),
+                        s.integratingFraction(), s.informationEfficiency(), front.contains(s)));
                 w.write(b.toString());
             }
         }

@@ -18,35 +18,39 @@ import java.util.Locale;
  * @param spectraPerSecond    completed sweeps per second, survey and focus
  * @param bitsPerSecond       telemetry frames, bits per second
  * @param integratingFraction integration time over all time
+ * @param informationEfficiency D-efficiency against the D-optimal design (NaN if undefined)
  */
 public record RunRow(int set, int run, double lockFraction, int alphaLocks, int reacquireSweeps,
-        double reacquireSeconds, double spectraPerSecond, double bitsPerSecond, double integratingFraction) {
+        double reacquireSeconds, double spectraPerSecond, double bitsPerSecond, double integratingFraction,
+        double informationEfficiency) {
 
     /** CSV header, matching {@link #toCsv()}. */
     public static final String HEADER = "set,run,lockFraction,alphaLocks,reacquireSweeps,reacquireSeconds,"
-            + "spectraPerSecond,bitsPerSecond,integratingFraction";
+            + "spectraPerSecond,bitsPerSecond,integratingFraction,informationEfficiency";
 
     /** The row of a finished run. */
     static RunRow of(int set, int run, RunSummary s) {
         double cadence = s.spectraPerSecond().get(SweepMode.SURVEY) + s.spectraPerSecond().get(SweepMode.FOCUS);
         return new RunRow(set, run, s.lockFraction(), s.alphaLocks(), s.reacquireSweepsMax(),
-                s.reacquireSecondsMax(), cadence, s.telemetry().frameBitsPerSecond(), s.integratingFraction());
+                s.reacquireSecondsMax(), cadence, s.telemetry().frameBitsPerSecond(), s.integratingFraction(),
+                s.informationEfficiency());
     }
 
     /** One CSV line (no newline). */
     public String toCsv() {
-        return String.format(Locale.ROOT, "%d,%d,%s,%d,%d,%s,%s,%s,%s", set, run, lockFraction, alphaLocks,
-                reacquireSweeps, reacquireSeconds, spectraPerSecond, bitsPerSecond, integratingFraction);
+        return String.format(Locale.ROOT, "%d,%d,%s,%d,%d,%s,%s,%s,%s,%s", set, run, lockFraction, alphaLocks,
+                reacquireSweeps, reacquireSeconds, spectraPerSecond, bitsPerSecond, integratingFraction,
+                informationEfficiency);
     }
 
     /** Parses a line written by {@link #toCsv()}. */
     public static RunRow parse(String line) {
         String[] f = line.split(",", -1);
-        if (f.length != 9) {
-            throw new IllegalArgumentException("expected 9 fields, got " + f.length + ": " + line);
+        if (f.length != 10) {
+            throw new IllegalArgumentException("expected 10 fields, got " + f.length + ": " + line);
         }
         return new RunRow(Integer.parseInt(f[0]), Integer.parseInt(f[1]), Double.parseDouble(f[2]),
                 Integer.parseInt(f[3]), Integer.parseInt(f[4]), Double.parseDouble(f[5]), Double.parseDouble(f[6]),
-                Double.parseDouble(f[7]), Double.parseDouble(f[8]));
+                Double.parseDouble(f[7]), Double.parseDouble(f[8]), Double.parseDouble(f[9]));
     }
 }

@@ -18,10 +18,11 @@ import java.util.List;
  * @param bitsPerSecondMean   mean telemetry rate
  * @param bitsPerSecondMax    highest telemetry rate of a run
  * @param integratingFraction mean integrating fraction
+ * @param informationEfficiency mean D-efficiency against the D-optimal design, over runs where it is defined
  */
 public record SetResult(int set, double[] values, int runs, double lockFractionMean, double lockFractionMin,
         int alphaLocks, int reacquireSweepsMax, double reacquireSecondsMax, double spectraPerSecond,
-        double bitsPerSecondMean, double bitsPerSecondMax, double integratingFraction) {
+        double bitsPerSecondMean, double bitsPerSecondMax, double integratingFraction, double informationEfficiency) {
 
     /** Fraction of focus sweeps that missed the proton peak: the accuracy objective (lower is better). */
     public double missFraction() {
@@ -57,7 +58,13 @@ public record SetResult(int set, double[] values, int runs, double lockFractionM
         double bits = 0;
         double bitsMax = 0;
         double integrating = 0;
+        double efficiency = 0;
+        int efficiencyRuns = 0;
         for (RunRow r : runs) {
+            if (!Double.isNaN(r.informationEfficiency())) {
+                efficiency += r.informationEfficiency();
+                efficiencyRuns++;
+            }
             if (!Double.isNaN(r.lockFraction())) {
                 lockSum += r.lockFraction();
                 lockRuns++;
@@ -73,6 +80,7 @@ public record SetResult(int set, double[] values, int runs, double lockFractionM
         }
         int n = Math.max(1, runs.size());
         return new SetResult(set, values, runs.size(), lockRuns == 0 ? Double.NaN : lockSum / lockRuns, lockMin,
-                alpha, reacqSweeps, reacqSeconds, cadence / n, bits / n, bitsMax, integrating / n);
+                alpha, reacqSweeps, reacqSeconds, cadence / n, bits / n, bitsMax, integrating / n,
+                efficiencyRuns == 0 ? Double.NaN : efficiency / efficiencyRuns);
     }
 }

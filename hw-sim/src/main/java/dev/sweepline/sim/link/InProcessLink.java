@@ -23,8 +23,8 @@ public final class InProcessLink implements InstrumentLink {
 
     /** Sees every executed step with its truth: the bench records truth beside each decision. */
     public interface StepObserver {
-        /** Called once per executed step, before the reply becomes visible. */
-        void onExecuted(StepCommand step, SampleReply reply, StepTruth truth, long startMicros);
+        /** Called once per executed step, before the reply becomes visible, with the plasma it saw. */
+        void onExecuted(StepCommand step, SampleReply reply, StepTruth truth, PlasmaState plasma, long startMicros);
     }
 
     private final SimulatedInstrument instrument;
@@ -48,9 +48,10 @@ public final class InProcessLink implements InstrumentLink {
             return false;
         }
         long midMicros = nowMicros + step.settleMicros + (step.durationMicros() - step.settleMicros) / 2;
-        replyReadyMicros = instrument.execute(step, nowMicros, plasma.plasmaAt(midMicros), pending, truth);
+        PlasmaState now = plasma.plasmaAt(midMicros);
+        replyReadyMicros = instrument.execute(step, nowMicros, now, pending, truth);
         replyPending = true;
-        observer.onExecuted(step, pending, truth, nowMicros);
+        observer.onExecuted(step, pending, truth, now, nowMicros);
         return true;
     }
 

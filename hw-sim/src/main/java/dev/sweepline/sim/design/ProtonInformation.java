@@ -1,0 +1,98 @@
+package dev.sweepline.sim.design;
+
+import dev.sweepline.fsw.link.InstrumentConstants;
+import dev.sweepline.sim.cup.CupGeometry;
+import dev.sweepline.sim.physics.PhysicalConstants;
+import dev.sweepline.sim.plasma.ConvectedMaxwellian;
+import dev.sweepline.sim.plasma.IonPopulation;
+import dev.sweepline.sim.plasma.IonSpecies;
+import dev.sweepline.sim.plasma.PlasmaState;
+import dev.sweepline.sim.preamp.Preamplifier;
+
+/**
+ * Fisher information about the protons' (n, U, w) carried by window measurements (physics.md,
+ * Cramér-Rao bound: F_ab = Σ_j (∂I_j/∂θ_a)(∂I_j/∂θ_b)/σ_j²). Parameters are relative (θ/θ_true), so
+ * the matrix is dimensionless and well conditioned; determinant ratios do not depend on that choice.
+ * The noise of a window is that of the sum of the four quadrant channels: shot noise of the whole
+ * window current, and per channel the feedback-resistor noise and the ADC's LSB²/12.
+ */
+public final class ProtonInformation {
+    /** Parameters: relative density, bulk speed and thermal speed. */
+    public static final int PARAMETERS = 3;
+    private static final double CHANNEL_TEMPERATURE_K = 300;
+
+    private final double areaM2;
+
+    /** Information for the cup's effective area. */
+    public ProtonInformation(CupGeometry cup) {
+        this.areaM2 = cup.effectiveAreaM2();
+    }
+
+    /** The protons of {@code plasma}, or null. */
+    public static IonPopulation protons(PlasmaState plasma) {
+        for (IonPopulation p : plasma.populations()) {
+            if (p.species().equals(IonSpecies.PROTON)) {
+                return p;
+            }
+        }
+        return null;
+    }
+
+    /** Relative sensitivities θ_a ∂I/∂θ_a of the window [lowVolts, highVolts], amperes; into {@code out}. */
+    public void gradient(PlasmaState plasma, IonPopulation p, double lowVolts, double highVolts, double[] out) {
+        double q = p.species().chargeCoulomb();
+        double m = p.species().massKg();
+        double v1 = ConvectedMaxwellian.speedForVoltage(lowVolts, m, q);
+        double v2 = ConvectedMaxwellian.speedForVoltage(highVolts, m, q);
+        double n = p.densityPerM3();
+        double u = p.vzMetresPerSecond();
+        double w = plasma.normalThermalSpeed(p);
+        out[0] = n * ConvectedMaxwellian.dCurrentDn(q, n, areaM2, u, w, v1, v2);
+        out[1] = u * ConvectedMaxwellian.dCurrentDu(q, n, areaM2, u, w, v1, v2);
+        out[2] = w * ConvectedMaxwellian.dCurrentDw(q, n, areaM2, u, w, v1, v2);
+    }
+
+    /** Variance of the summed window current, A², for a total current, gain range and integration time. */
+    public static double variance(double totalAmps, int range, double integrationSeconds) {
+        double b = Preamplifier.noiseBandwidthHz(integrationSeconds);
+        double shot = 2 * PhysicalConstants.ELEMENTARY_CHARGE_COULOMB * Math.abs(totalAmps) * b;
+        double johnson = 4 * PhysicalConstants.BOLTZMANN_JOULE_PER_KELVIN * CHANNEL_TEMPERATURE_K * b
+                / Preamplifier.feedbackOhms(range);
+        double lsb = Preamplifier.lsbAmps(range);
+        return shot + InstrumentConstants.QUADRANTS * (johnson + lsb * lsb / 12);
+    }
+
+    /** Adds {@code weight} g gᵀ / variance to the 3x3 matrix {@code f}. */
+    public static void accumulate(double[][] f, double[] g, double variance, double weight) {
+        for (int a = 0; a < PARAMETERS; a++) {
+            for (int b = 0; b < PARAMETERS; b++) {
+                f[a][b] += weight * g[a] * g[b] / variance;
+            }
+        }
+    }
+
+    /** Determinant of a 3x3 matrix. */
+    public static double det(double[][] f) {
+        return f[0][0] * (f[1][1] * f[2][2] - f[1][2] * f[2][1]) - f[0][1] * (f[1][0] * f[2][2] - f[1][2] * f[2][0])
+                + f[0][2] * (f[1][0] * f[2][1] - f[1][1] * f[2][0]);
+    }
+
+    /** Inverse of a 3x3 matrix (adjugate over determinant); null when singular. */
+    public static double[][] inverse(double[][] f) {
+        double d = det(f);
+        if (!(Math.abs(d) > 0) || !Double.isFinite(d)) {
+            return null;
+        }
+        double[][] inv = new double[3][3];
+        for (int i = 0; i < 3; i++) {
+            for (int j = 0; j < 3; j++) {
+                int r1 = (j + 1) % 3;
+                int r2 = (j + 2) % 3;
+                int c1 = (i + 1) % 3;
+                int c2 = (i + 2) % 3;
+                inv[i][j] = (f[r1][c1] * f[r2][c2] - f[r1][c2] * f[r2][c1]) / d;
+            }
+        }
+        return inv;
+    }
+}
