@@ -56,7 +56,7 @@ public class SpectrumPackingBenchmark {
         SweepScheduler scheduler = new SweepScheduler(table, SweepParameters.defaults(), new SweepListener() {
             @Override
             public void onSweepComplete(Spectrum s, long now) {
-                if (spectrum.count() == 0 && s.mode() == SweepMode.SURVEY) {
+                if (spectrum.count() == 0 && s.mode() == SweepMode.SURVEY && s.peakValid()) {
                     SpectrumFill.copy(s, spectrum);
                 }
             }
@@ -64,7 +64,7 @@ public class SpectrumPackingBenchmark {
         StepCommand step = new StepCommand();
         SampleReply reply = new SampleReply();
         long now = 0;
-        for (int i = 0; i < 10 * table.count() && spectrum.count() == 0; i++) {
+        for (int i = 0; i < 100 * table.count() && spectrum.count() == 0; i++) {
             scheduler.nextStep(step, now);
             now += step.durationMicros();
             canned.answer(step, reply);
