@@ -75,9 +75,9 @@ public final class CompressionStudy {
         b.append(String.format(Locale.ROOT, "whole corpus in one call (no packet boundaries): deflate-9 %.3f, "
                 + "zstd-19 %.3f bits/sample%n", wholeCorpus(corpus, "deflate-9"), wholeCorpus(corpus, "zstd-19")));
         ResidualEntropy pooled = entropy(corpus, null);
-        b.append(String.format(Locale.ROOT, "H0 over %d residuals, %d distinct values: finite-sample (Miller-Madow) "
+        b.append(String.format(Locale.ROOT, "H0 over %d residuals, %d distinct values: first-order finite-sample "
                 + "bias of the plug-in H0 about +%.3f bits%n", pooled.residuals(), pooled.occupiedSymbols(),
-                pooled.millerMadowBits()));
+                pooled.finiteSampleBiasBits()));
         double rice = bitsPerSample(corpus, "rice", null);
         double bound = entropy(corpus, null).bitsPerSampleWithReferences();
         b.append(String.format(Locale.ROOT, "targets: rice/deflate-9 size %.3f (<= 1), rice/bound %.3f (<= 1.08), "

@@ -61,11 +61,11 @@ public final class ResidualEntropy {
     }
 
     /**
-     * The Miller-Madow estimate of how far the plug-in entropy {@link #bitsPerResidual()} lies below the true
+     * The first-order estimate of how far the plug-in entropy {@link #bitsPerResidual()} lies below the true
      * one for a finite sample, (K - 1) / (2 N ln 2) bits (Miller 1955): with a wide alphabet the histogram
      * under-samples the tails, so the plug-in bound is optimistic by about this much.
      */
-    public double millerMadowBits() {
+    public double finiteSampleBiasBits() {
         return (occupiedSymbols() - 1) / (2.0 * residuals * Math.log(2));
     }
 
