@@ -1,0 +1,88 @@
+package dev.sweepline.fsw.telemetry;
+
+import dev.sweepline.fsw.link.SampleReply;
+import dev.sweepline.fsw.link.StepCommand;
+import dev.sweepline.fsw.sweep.CannedReplies;
+import dev.sweepline.fsw.sweep.Spectrum;
+import dev.sweepline.fsw.sweep.SpectrumFill;
+import dev.sweepline.fsw.sweep.SweepListener;
+import dev.sweepline.fsw.sweep.SweepMode;
+import dev.sweepline.fsw.sweep.SweepScheduler;
+import dev.sweepline.fsw.sweep.SyntheticInstrument;
+import dev.sweepline.fsw.table.SweepParameters;
+import dev.sweepline.fsw.table.WindowTable;
+import java.util.concurrent.TimeUnit;
+import org.openjdk.jmh.annotations.Benchmark;
+import org.openjdk.jmh.annotations.BenchmarkMode;
+import org.openjdk.jmh.annotations.Level;
+import org.openjdk.jmh.annotations.Mode;
+import org.openjdk.jmh.annotations.OutputTimeUnit;
+import org.openjdk.jmh.annotations.Param;
+import org.openjdk.jmh.annotations.Scope;
+import org.openjdk.jmh.annotations.Setup;
+import org.openjdk.jmh.annotations.State;
+
+/**
+ * Packing one realistic 128-window survey spectrum through {@link TelemetryWriter#writeSpectrum}: user data
+ * (header, gain tags, saturation flags, four quadrant streams CCSDS 121 coded or raw), primary and CUC
+ * headers, counters, and transfer framing into a sink that discards the frames. The spectrum is the first
+ * survey sweep the real scheduler makes of a 1 AU slow wind (physics.md worked case P1 plasma, canned
+ * replies with 2 counts of noise, recorded seed), copied out of the scheduler.
+ * Target (issue 3): 0 B/op under {@code -prof gc}.
+ */
+@State(Scope.Thread)
+@BenchmarkMode(Mode.AverageTime)
+@OutputTimeUnit(TimeUnit.NANOSECONDS)
+public class SpectrumPackingBenchmark {
+    /** Recorded seed of the synthetic instrument's noise. */
+    private static final long SEED = 20261201L;
+    /** Time between packed spectra, microseconds (a survey sweep of 128 windows takes about 1.2 s). */
+    private static final long SWEEP_MICROS = 1_200_000L;
+
+    /** CCSDS 121 coding (compression 0x01) or raw samples (0x00). */
+    @Param({"true", "false"})
+    public boolean compress;
+
+    private final Spectrum spectrum = new Spectrum();
+    private TelemetryWriter writer;
+    private int integrationPeriods;
+    private long nowMicros;
+
+    /** Captures the first survey spectrum of the scheduler and builds the writer. */
+    @Setup(Level.Trial)
+    public void setUp() {
+        WindowTable table = WindowTable.defaultTable();
+        CannedReplies canned = new CannedReplies(table, new SyntheticInstrument(SEED));
+        SweepScheduler scheduler = new SweepScheduler(table, SweepParameters.defaults(), new SweepListener() {
+            @Override
+            public void onSweepComplete(Spectrum s, long now) {
+                if (spectrum.count() == 0 && s.mode() == SweepMode.SURVEY && s.peakValid()) {
+                    SpectrumFill.copy(s, spectrum);
+                }
+            }
+        });
+        StepCommand step = new StepCommand();
+        SampleReply reply = new SampleReply();
+        long now = 0;
+        for (int i = 0; i < 100 * table.count() && spectrum.count() == 0; i++) {
+            scheduler.nextStep(step, now);
+            now += step.durationMicros();
+            canned.answer(step, reply);
+            scheduler.ingest(reply, now);
+        }
+        if (spectrum.count() != table.count() || !spectrum.peakValid()) {
+            throw new IllegalStateException("no full survey spectrum with a peak: " + spectrum.count());
+        }
+        integrationPeriods = SweepParameters.defaults().integrationPeriods;
+        writer = new TelemetryWriter(TelemetryWriter.DEFAULT_FRAME_LENGTH, Long.MAX_VALUE, new CucTime(0, 0),
+                compress, (frame, offset, length) -> { });
+    }
+
+    /** Packs the spectrum once; returns the frames emitted so far so the work stays observable. */
+    @Benchmark
+    public long writeSpectrum() {
+        nowMicros += SWEEP_MICROS;
+        writer.writeSpectrum(spectrum, integrationPeriods, 0, 0, nowMicros);
+        return writer.framesEmitted();
+    }
+}
