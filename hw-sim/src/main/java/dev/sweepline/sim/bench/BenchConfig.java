@@ -17,20 +17,23 @@ import dev.sweepline.sim.scenario.Scenario;
  * @param instrument      the simulated instrument
  * @param frameLength     telemetry transfer frame length, octets
  * @param allocationBitsPerSecond the downlink allocation the telemetry is checked against; NaN for none
+ * @param compressSpectra CCSDS 121 coding of spectrum packets (the ICD's compression 0x01), else raw
  */
 public record BenchConfig(Scenario scenario, long seed, double durationSeconds, WindowTable table,
-        SweepParameters parameters, InstrumentModel instrument, int frameLength, double allocationBitsPerSecond) {
+        SweepParameters parameters, InstrumentModel instrument, int frameLength, double allocationBitsPerSecond,
+        boolean compressSpectra) {
 
     /** The demo instrument with the default table, parameters and frame length, no allocation. */
     public static BenchConfig defaults(Scenario scenario, long seed, double durationSeconds) {
         return new BenchConfig(scenario, seed, durationSeconds, WindowTable.defaultTable(),
-                SweepParameters.defaults(), InstrumentModel.demo(), TelemetryWriter.DEFAULT_FRAME_LENGTH, Double.NaN);
+                SweepParameters.defaults(), InstrumentModel.demo(), TelemetryWriter.DEFAULT_FRAME_LENGTH, Double.NaN,
+                true);
     }
 
     /** This config with another downlink allocation. */
     public BenchConfig withAllocation(double bitsPerSecond) {
         return new BenchConfig(scenario, seed, durationSeconds, table, parameters, instrument, frameLength,
-                bitsPerSecond);
+                bitsPerSecond, compressSpectra);
     }
 
     /** Simulated duration in microseconds. */

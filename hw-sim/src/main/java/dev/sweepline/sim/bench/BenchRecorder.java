@@ -27,6 +27,7 @@ public final class BenchRecorder implements SweepListener, InProcessLink.StepObs
     private final WindowVolts windows;
     private final FaradayCup cup;
     private final LongFunction<PlasmaState> truthAt;
+    private final SweepListener next;
     private final List<SweepRecord> sweeps = new ArrayList<>();
     private final Map<String, Integer> modeChanges = new TreeMap<>();
     private long steps;
@@ -43,8 +44,10 @@ public final class BenchRecorder implements SweepListener, InProcessLink.StepObs
      * @param windows the table's windows as the HV supply makes them
      * @param cup     the simulated cup, to place the true peaks where the instrument would see them
      * @param truthAt the scenario's plasma at a simulated time (microseconds)
+     * @param next    sees every scheduler callback after this recorder
      */
-    public BenchRecorder(WindowVolts windows, FaradayCup cup, LongFunction<PlasmaState> truthAt) {
+    public BenchRecorder(WindowVolts windows, FaradayCup cup, LongFunction<PlasmaState> truthAt, SweepListener next) {
+        this.next = next;
         this.windows = windows;
         this.cup = cup;
         this.information = new ProtonInformation(cup.geometry());
@@ -92,6 +95,11 @@ public final class BenchRecorder implements SweepListener, InProcessLink.StepObs
 
     @Override
     public void onSweepComplete(Spectrum spectrum, long nowMicros) {
+        record(spectrum);
+        next.onSweepComplete(spectrum, nowMicros);
+    }
+
+    private void record(Spectrum spectrum) {
         if (spectrum.count() == 0) {
             return;
         }
@@ -112,11 +120,23 @@ public final class BenchRecorder implements SweepListener, InProcessLink.StepObs
     @Override
     public void onBandChosen(int firstWindow, int lastWindow, int peakWindowQ8, long nowMicros) {
         chosenCentre = peakWindowQ8 / 256.0;
+        next.onBandChosen(firstWindow, lastWindow, peakWindowQ8, nowMicros);
+    }
+
+    @Override
+    public void onStep(StepCommand step, long nowMicros) {
+        next.onStep(step, nowMicros);
+    }
+
+    @Override
+    public void onSample(StepCommand step, SampleReply reply, long nowMicros) {
+        next.onSample(step, reply, nowMicros);
     }
 
     @Override
     public void onModeChange(SweepMode from, SweepMode to, int reason, long nowMicros) {
         modeChanges.merge(ModeChangeReason.name(reason), 1, Integer::sum);
+        next.onModeChange(from, to, reason, nowMicros);
     }
 
     /**

@@ -10,6 +10,8 @@ import dev.sweepline.sim.link.InProcessLink;
 import dev.sweepline.sim.plasma.PlasmaState;
 import dev.sweepline.sim.scenario.AlphaDriftDirection;
 import dev.sweepline.sim.scenario.ScenarioTimeline;
+import dev.sweepline.fsw.sweep.SweepListener;
+import java.util.function.Consumer;
 import java.util.function.LongFunction;
 
 /**
@@ -61,35 +63,58 @@ public final class ClosedLoopBench {
         return runSeed * 0x9E3779B97F4A7C15L + 0x632BE59BD9B4E019L;
     }
 
+    /**
+     * What a caller may attach to a run: where the frames go, a look at the assembled flight software
+     * before the first cycle (to command a mode, as the ground would), and one more observer of the
+     * scheduler's callbacks (after the bench's own recorder).
+     */
+    public record Hooks(FrameSink frames, Consumer<FlightSoftware> setup, SweepListener observer) {
+        /** Frames discarded (still built and counted), nothing else. */
+        public static final Hooks NONE = new Hooks((f, off, len) -> { }, fsw -> { }, SweepListener.NONE);
+
+        /** These hooks with another frame sink. */
+        public Hooks withFrames(FrameSink sink) {
+            return new Hooks(sink, setup, observer);
+        }
+
+        /** These hooks with another set-up step. */
+        public Hooks withSetup(Consumer<FlightSoftware> step) {
+            return new Hooks(frames, step, observer);
+        }
+
+        /** These hooks with another extra observer. */
+        public Hooks withObserver(SweepListener listener) {
+            return new Hooks(frames, setup, listener);
+        }
+    }
+
     /** Runs {@code config} to its end, discarding the telemetry frames (they are still built and counted). */
     public static Result run(BenchConfig config, Progress progress) {
-        return run(config, progress, (f, off, len) -> { });
+        return run(config, progress, Hooks.NONE);
     }
 
     /** Runs {@code config} to its end, handing every telemetry frame (ASM first) to {@code frames}. */
     public static Result run(BenchConfig config, Progress progress, FrameSink frames) {
-        return run(config, progress, frames, fsw -> { });
+        return run(config, progress, Hooks.NONE.withFrames(frames));
     }
 
-    /**
-     * Runs {@code config} to its end; {@code setup} is given the assembled flight software before the
-     * first cycle (e.g. to command a mode, as ground commands would).
-     */
-    public static Result run(BenchConfig config, Progress progress, FrameSink frames,
-            java.util.function.Consumer<FlightSoftware> setup) {
+    /** Runs {@code config} to its end with {@code hooks} attached. */
+    public static Result run(BenchConfig config, Progress progress, Hooks hooks) {
         ScenarioTimeline timeline = config.scenario().timeline(config.seed());
         WindowVolts windows = new WindowVolts(config.table(), config.instrument().calibration());
         AlphaDriftDirection drift = config.scenario().alphaDriftDirection();
         LongFunction<PlasmaState> plasma = micros -> PlasmaStates.of(timeline.at(micros / 1e6), drift);
-        BenchRecorder recorder = new BenchRecorder(windows, new FaradayCup(config.instrument().cup()), plasma);
+        BenchRecorder recorder = new BenchRecorder(windows, new FaradayCup(config.instrument().cup()), plasma,
+                hooks.observer());
         SimulatedInstrument instrument = new SimulatedInstrument(config.instrument(), instrumentSeed(config.seed()));
         InProcessLink link = new InProcessLink(instrument, plasma::apply, recorder);
         FlightConfig flight = new FlightConfig();
         flight.table = config.table();
         flight.parameters = config.parameters();
         flight.frameLength = config.frameLength();
-        FlightSoftware fsw = new FlightSoftware(flight, link, frames, recorder);
-        setup.accept(fsw);
+        flight.compressSpectra = config.compressSpectra();
+        FlightSoftware fsw = new FlightSoftware(flight, link, hooks.frames(), recorder);
+        hooks.setup().accept(fsw);
 
         long wallStart = System.nanoTime();
         long end = config.durationMicros();

@@ -79,12 +79,12 @@ public final class BudgetRunner {
         }
         BenchConfig config = new BenchConfig(DistanceScaling.at(plan.scenario(), distanceAu, seconds), seed, seconds,
                 WindowTable.defaultTable(), parameters, InstrumentModel.demo(), TelemetryWriter.DEFAULT_FRAME_LENGTH,
-                phase.allocationBitsPerSecond());
-        RunSummary s = ClosedLoopBench.run(config, ClosedLoopBench.Progress.NONE, (f, off, len) -> { }, fsw -> {
+                phase.allocationBitsPerSecond(), true);
+        RunSummary s = ClosedLoopBench.run(config, ClosedLoopBench.Progress.NONE, ClosedLoopBench.Hooks.NONE.withSetup(fsw -> {
             if (phase.mode() == Phase.Mode.SAFE) {
                 fsw.scheduler().requestMode(SweepMode.SAFE, 0);
             }
-        }).summary();
+        })).summary();
         double cadence = s.spectraPerSecond().get(SweepMode.SURVEY) + s.spectraPerSecond().get(SweepMode.FOCUS);
         return new BudgetResult.Sample(phase.name(), hours, distanceAu, s.telemetry().frameBitsPerSecond(), cadence);
     }

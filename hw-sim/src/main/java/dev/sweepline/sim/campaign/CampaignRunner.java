@@ -75,7 +75,7 @@ public final class CampaignRunner {
     static RunRow runOne(CampaignSpec spec, int set, int run) {
         BenchConfig config = new BenchConfig(spec.member(run), spec.runSeed(run), spec.durationSeconds(),
                 WindowTable.defaultTable(), spec.parameters(set), InstrumentModel.demo(),
-                TelemetryWriter.DEFAULT_FRAME_LENGTH, spec.allocationBitsPerSecond());
+                TelemetryWriter.DEFAULT_FRAME_LENGTH, spec.allocationBitsPerSecond(), true);
         return RunRow.of(set, run, ClosedLoopBench.run(config, ClosedLoopBench.Progress.NONE).summary());
     }
 }

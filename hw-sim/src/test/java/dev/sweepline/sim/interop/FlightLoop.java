@@ -5,78 +5,48 @@ import dev.sweepline.fsw.exec.FlightSoftware;
 import dev.sweepline.fsw.sweep.Spectrum;
 import dev.sweepline.fsw.sweep.SweepListener;
 import dev.sweepline.fsw.telemetry.FrameSink;
-import dev.sweepline.sim.bench.PlasmaStates;
+import dev.sweepline.sim.bench.BenchConfig;
+import dev.sweepline.sim.bench.ClosedLoopBench;
 import dev.sweepline.sim.instrument.InstrumentModel;
-import dev.sweepline.sim.instrument.SimulatedInstrument;
-import dev.sweepline.sim.link.InProcessLink;
-import dev.sweepline.sim.plasma.PlasmaState;
-import dev.sweepline.sim.scenario.AlphaDriftDirection;
 import dev.sweepline.sim.scenario.Scenario;
-import dev.sweepline.sim.scenario.ScenarioTimeline;
 import java.util.ArrayList;
 import java.util.List;
 
 /**
- * The closed loop of {@code ClosedLoopBench.run} (same instrument, link, plasma and time stepping) with
- * the flight software's sweep observer exposed, which {@code ClosedLoopBench} does not offer: every
- * completed spectrum is copied as the flight software saw it, and the frames go to a caller's sink.
+ * A {@link ClosedLoopBench} run with the flight software's spectra copied as it completed them and
+ * the flight software kept for its counters; the frames go to a caller's sink.
  */
 public final class FlightLoop {
-    /** Time step while nothing is in flight (ClosedLoopBench.IDLE_MICROS). */
-    private static final long IDLE_MICROS = 10_000;
-
     private final List<RecordedSpectrum> spectra = new ArrayList<>();
-    private final FlightSoftware fsw;
-    private final InProcessLink link;
-    private final long endMicros;
+    private final BenchConfig config;
+    private final FrameSink frames;
+    private FlightSoftware fsw;
 
     /**
      * A loop over {@code scenario} for {@code seconds} of simulated time.
      *
      * @param seed   seeds the scenario's fluctuations and the instrument's noise
-     * @param flight the flight software's configuration (frame length, compression)
+     * @param flight the flight software's frame length and compression
      * @param frames receives every frame, ASM first
      */
     public FlightLoop(Scenario scenario, long seed, double seconds, FlightConfig flight, FrameSink frames) {
-        ScenarioTimeline timeline = scenario.timeline(seed);
-        AlphaDriftDirection drift = scenario.alphaDriftDirection();
-        SimulatedInstrument instrument = new SimulatedInstrument(InstrumentModel.demo(), seed * 31 + 7);
-        this.link = new InProcessLink(instrument, micros -> plasma(timeline, drift, micros),
-                (step, reply, truth, start) -> { });
-        this.fsw = new FlightSoftware(flight, link, frames, new SweepListener() {
-            @Override
-            public void onSweepComplete(Spectrum spectrum, long nowMicros) {
-                if (spectrum.count() > 0) { // FlightSoftware packs only non-empty sweeps
-                    spectra.add(RecordedSpectrum.of(spectrum));
-                }
-            }
-        });
-        this.endMicros = Math.round(seconds * 1e6);
-    }
-
-    private static PlasmaState plasma(ScenarioTimeline timeline, AlphaDriftDirection drift, long micros) {
-        return PlasmaStates.of(timeline.at(micros / 1e6), drift);
+        BenchConfig defaults = BenchConfig.defaults(scenario, seed, seconds);
+        this.config = new BenchConfig(scenario, seed, seconds, flight.table, flight.parameters, InstrumentModel.demo(),
+                flight.frameLength, defaults.allocationBitsPerSecond(), flight.compressSpectra);
+        this.frames = frames;
     }
 
     /** Runs to the end and closes the flight software (last housekeeping, frames flushed). */
     public FlightLoop run() {
-        long now = 0;
-        int stalls = 0;
-        while (now < endMicros) {
-            int work = fsw.doWork(now);
-            long next = link.nextReplyMicros();
-            long before = now;
-            if (next != Long.MAX_VALUE) {
-                now = Math.max(now, next);
-            } else if (work == 0) {
-                now += IDLE_MICROS;
-            }
-            stalls = (now == before && work == 0) ? stalls + 1 : 0;
-            if (stalls > 3) {
-                now++;
-            }
-        }
-        fsw.close(endMicros);
+        ClosedLoopBench.run(config, ClosedLoopBench.Progress.NONE, ClosedLoopBench.Hooks.NONE.withFrames(frames)
+                .withSetup(f -> fsw = f).withObserver(new SweepListener() {
+                    @Override
+                    public void onSweepComplete(Spectrum spectrum, long nowMicros) {
+                        if (spectrum.count() > 0) { // FlightSoftware packs only non-empty sweeps
+                            spectra.add(RecordedSpectrum.of(spectrum));
+                        }
+                    }
+                }));
         return this;
     }
 
