@@ -6,7 +6,7 @@ import picocli.CommandLine.Command;
 /** {@code sweepline-bench.jar}: the closed-loop bench and its tools. */
 @Command(name = "sweepline-bench", mixinStandardHelpOptions = true, version = "sweepline-bench 0.1",
         description = "Closed-loop bench for the Faraday-cup flight software: runs, scenarios.",
-        subcommands = {RunCommand.class, ScenariosCommand.class, CommandLine.HelpCommand.class})
+        subcommands = {RunCommand.class, ScenariosCommand.class, ServeCommand.class, CommandLine.HelpCommand.class})
 public final class BenchMain implements Runnable {
     @CommandLine.Spec
     private CommandLine.Model.CommandSpec spec;
