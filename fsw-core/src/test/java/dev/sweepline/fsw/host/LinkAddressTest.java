@@ -24,7 +24,7 @@ class LinkAddressTest {
 
     @Test
     void shouldShowTheHighVoltageCautionInTheHelp() {
-        String help = FswMain.commandLine().getSubcommands().get("run").getUsageMessage();
+        String help = FswMain.commandLine().getSubcommands().get("run").getUsageMessage().replaceAll("\\s+", " ");
         assertTrue(help.contains("HIGH VOLTAGE") && help.contains("interlock") && help.contains("--hv"));
     }
 }
