@@ -1,11 +1,30 @@
 package dev.sweepline.fsw.host;
 
-/** Command-line entry point (filled in by its module's work). */
-public final class FswMain {
-    private FswMain() {
+import picocli.CommandLine;
+import picocli.CommandLine.Command;
+
+/** {@code sweepline-fsw.jar}: the flight software on a PC, talking to real or simulated electronics. */
+@Command(name = "sweepline-fsw", mixinStandardHelpOptions = true, version = "sweepline-fsw 0.1",
+        description = {"The Faraday-cup flight software on a PC, on a serial or TCP link to the electronics.",
+            "",
+            HvText.CAUTION},
+        subcommands = {FswRunCommand.class, CommandLine.HelpCommand.class})
+public final class FswMain implements Runnable {
+    @CommandLine.Spec
+    private CommandLine.Model.CommandSpec spec;
+
+    /** Runs the command line and exits with its status. */
+    public static void main(String[] args) {
+        System.exit(commandLine().execute(args));
     }
 
-    public static void main(String[] args) {
-        System.out.println("FswMain: not yet wired");
+    /** The command line, for tests that run it in process. */
+    public static CommandLine commandLine() {
+        return new CommandLine(new FswMain());
+    }
+
+    @Override
+    public void run() {
+        spec.commandLine().usage(System.out);
     }
 }

@@ -59,7 +59,7 @@ public final class ClosedLoopBench {
     }
 
     /** Seed of the instrument's noise, derived from the run seed so the two streams are independent. */
-    static long instrumentSeed(long runSeed) {
+    public static long instrumentSeed(long runSeed) {
         return runSeed * 0x9E3779B97F4A7C15L + 0x632BE59BD9B4E019L;
     }
 

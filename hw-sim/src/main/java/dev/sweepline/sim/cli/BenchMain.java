@@ -5,9 +5,10 @@ import picocli.CommandLine.Command;
 
 /** {@code sweepline-bench.jar}: the closed-loop bench and its tools. */
 @Command(name = "sweepline-bench", mixinStandardHelpOptions = true, version = "sweepline-bench 0.1",
-        description = "Closed-loop bench for the Faraday-cup flight software: runs, scenarios, tuning campaigns, bandwidth budgets.",
-        subcommands = {RunCommand.class, ScenariosCommand.class, TuneCommand.class, MergeCommand.class, BudgetCommand.class,
-            CommandLine.HelpCommand.class})
+        description = {"Closed-loop bench for the Faraday-cup flight software: runs, scenarios, the simulated",
+            "instrument server, tuning campaigns, bandwidth budgets."},
+        subcommands = {RunCommand.class, ScenariosCommand.class, ServeCommand.class, TuneCommand.class,
+            MergeCommand.class, BudgetCommand.class, CommandLine.HelpCommand.class})
 public final class BenchMain implements Runnable {
     @CommandLine.Spec
     private CommandLine.Model.CommandSpec spec;

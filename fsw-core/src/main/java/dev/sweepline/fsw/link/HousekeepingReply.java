@@ -1,0 +1,22 @@
+package dev.sweepline.fsw.link;
+
+/**
+ * The electronics' housekeeping (hardware ICD §3.3): a mutable flyweight, allocated once.
+ * Threading: owned by one thread.
+ */
+public final class HousekeepingReply {
+    /** Sequence number of the request answered. */
+    public int sequence;
+    /** Frames the electronics received with a good CRC, length and type (wraps 2^32). */
+    public long framesGood;
+    /** Frames the electronics discarded: CRC, COBS, length or unknown type (wraps 2^32). */
+    public long framesBad;
+    /** Sequence number of the last step executed. */
+    public int lastStepSequence;
+    /** HV monitor, low level, DAC code units. */
+    public int hvMonitorLowCode;
+    /** HV monitor, high level, DAC code units. */
+    public int hvMonitorHighCode;
+    /** Electronics temperature, 0.01 degC, signed. */
+    public int temperatureCentiCelsius;
+}

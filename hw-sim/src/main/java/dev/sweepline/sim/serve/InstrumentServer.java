@@ -1,0 +1,212 @@
+package dev.sweepline.sim.serve;
+
+import dev.sweepline.fsw.link.ByteTransport;
+import dev.sweepline.fsw.link.FrameReceiver;
+import dev.sweepline.fsw.link.FrameSender;
+import dev.sweepline.fsw.link.HousekeepingCodec;
+import dev.sweepline.fsw.link.HousekeepingReply;
+import dev.sweepline.fsw.link.LinkCounters;
+import dev.sweepline.fsw.link.MessageType;
+import dev.sweepline.fsw.link.SampleReply;
+import dev.sweepline.fsw.link.SampleReplyCodec;
+import dev.sweepline.fsw.link.StepCommand;
+import dev.sweepline.fsw.link.StepCommandCodec;
+import java.util.concurrent.locks.LockSupport;
+
+/**
+ * The electronics' side of the hardware ICD on a {@link ByteTransport}: reads step frames, executes
+ * each with a {@link StepExecutor} on the instrument's own clock, which advances by each executed
+ * step's duration (so the sample stream is that of the in-process bench), and replies when the step
+ * is over: after {@code duration / speed} of wall time, or at once for speed 0.
+ *
+ * <p>One step in flight (ICD §4): no further frame is read while a reply waits. A step whose
+ * sequence number is that of the last executed step gets the stored reply again without executing.
+ * A step with low level not below the high level is executed with the HV off (ICD §5). Bad frames are
+ * discarded and counted. Housekeeping requests are answered between steps.
+ *
+ * <p>Threading: one thread ({@link #doWork(long)} or {@link #run}); {@link #stop()} from any thread.
+ */
+public final class InstrumentServer {
+    /** Octets read from the transport per call at most. */
+    static final int READ_CHUNK = 256;
+
+    private final StepExecutor executor;
+    private final ByteTransport transport;
+    private final double speed;
+    private final LinkCounters counters = new LinkCounters();
+    private final FrameReceiver receiver = new FrameReceiver(counters);
+    private final FrameSender sender;
+    private final StepCommand step = new StepCommand();
+    private final SampleReply reply = new SampleReply();
+    private final HousekeepingReply hk = new HousekeepingReply();
+    private final byte[] out = new byte[64];
+    private final byte[] in = new byte[READ_CHUNK];
+    private int inPos;
+    private int inLength;
+    private boolean replyPending;
+    private long replyDueNanos;
+    private boolean hkPending;
+    private boolean haveLast;
+    private int lastSequence;
+    private long clockMicros;
+    private long stepsExecuted;
+    private long repeatsAnswered;
+    private long levelRefusals;
+    private long housekeepingAnswered;
+    private boolean ended;
+    private volatile boolean stopped;
+
+    /**
+     * A server of {@code executor} on {@code transport}.
+     *
+     * @param speed simulated seconds per wall second (1 = real time); 0 answers at once
+     */
+    public InstrumentServer(StepExecutor executor, ByteTransport transport, double speed) {
+        if (!(speed >= 0)) {
+            throw new IllegalArgumentException("speed must be >= 0");
+        }
+        this.executor = executor;
+        this.transport = transport;
+        this.speed = speed;
+        this.sender = new FrameSender(transport, counters);
+    }
+
+    /** One cycle at wall time {@code nowNanos}: send what is due, else read and handle frames. Returns work done. */
+    public int doWork(long nowNanos) {
+        int work = 0;
+        if (!sender.flush()) {
+            return work;
+        }
+        if (hkPending) {
+            int n = HousekeepingCodec.encodeReply(hk, out, 0);
+            sender.send(out, 0, n);
+            hkPending = false;
+            housekeepingAnswered++;
+            return work + 1;
+        }
+        if (replyPending) {
+            if (nowNanos - replyDueNanos < 0) {
+                return work;
+            }
+            int n = SampleReplyCodec.encode(reply, out, 0);
+            sender.send(out, 0, n);
+            replyPending = false;
+            work++;
+        }
+        while (!replyPending && !hkPending) {
+            if (inPos == inLength) {
+                int n = ended ? -1 : transport.read(in, 0, in.length);
+                if (n <= 0) {
+                    ended |= n < 0;
+                    break;
+                }
+                counters.octetsRead += n;
+                inPos = 0;
+                inLength = n;
+            }
+            while (inPos < inLength && !replyPending && !hkPending) {
+                int type = receiver.accept(in[inPos++]);
+                if (type != FrameReceiver.NONE) {
+                    handle(type, nowNanos);
+                    work++;
+                }
+            }
+        }
+        return work;
+    }
+
+    private void handle(int type, long nowNanos) {
+        byte[] p = receiver.payload();
+        int len = receiver.payloadLength();
+        switch (type) {
+            case MessageType.STEP_COMMAND:
+                StepCommandCodec.decode(p, 0, len, step); // type and length already checked
+                executeStep(nowNanos);
+                break;
+            case MessageType.HOUSEKEEPING_REQUEST:
+                hk.sequence = HousekeepingCodec.decodeRequest(p, 0, len);
+                hk.framesGood = counters.framesGood;
+                hk.framesBad = counters.framesBad();
+                hk.lastStepSequence = lastSequence;
+                executor.housekeeping(hk);
+                hkPending = true;
+                break;
+            default:
+                counters.unexpected++; // a valid message for the other side: discard
+                break;
+        }
+    }
+
+    private void executeStep(long nowNanos) {
+        long durationMicros = step.durationMicros();
+        if (haveLast && step.sequence == lastSequence) {
+            repeatsAnswered++; // a repeat: the stored reply again, no second execution
+        } else {
+            if (step.dacLow >= step.dacHigh) {
+                step.hvEnabled = false; // ICD §5: levels refused, HV kept off for this step
+                levelRefusals++;
+            }
+            executor.execute(step, clockMicros, reply);
+            clockMicros += durationMicros;
+            stepsExecuted++;
+            haveLast = true;
+            lastSequence = step.sequence;
+        }
+        replyPending = true;
+        replyDueNanos = speed == 0 ? nowNanos : nowNanos + Math.round(durationMicros * 1_000 / speed);
+    }
+
+    /** Serves on the calling thread until {@link #stop()} or the peer leaves, parking briefly when idle. */
+    public void run() {
+        int idle = 0;
+        while (!stopped && !ended()) {
+            if (doWork(System.nanoTime()) > 0) {
+                idle = 0;
+            } else if (++idle < 200) {
+                Thread.onSpinWait();
+            } else {
+                LockSupport.parkNanos(20_000);
+            }
+        }
+    }
+
+    /** Asks {@link #run} to return. */
+    public void stop() {
+        stopped = true;
+    }
+
+    /** True once the peer has closed the stream and everything read has been handled. */
+    public boolean ended() {
+        return (ended && inPos == inLength && !replyPending) || sender.ended();
+    }
+
+    /** The instrument's own clock: the sum of the executed steps' durations, microseconds. */
+    public long clockMicros() {
+        return clockMicros;
+    }
+
+    /** Steps executed. */
+    public long stepsExecuted() {
+        return stepsExecuted;
+    }
+
+    /** Repeated steps answered with the stored reply. */
+    public long repeatsAnswered() {
+        return repeatsAnswered;
+    }
+
+    /** Steps executed with the HV off because their levels were refused. */
+    public long levelRefusals() {
+        return levelRefusals;
+    }
+
+    /** Housekeeping requests answered. */
+    public long housekeepingAnswered() {
+        return housekeepingAnswered;
+    }
+
+    /** Receive and send counters. */
+    public LinkCounters counters() {
+        return counters;
+    }
+}

@@ -1,0 +1,67 @@
+package dev.sweepline.sim.serve;
+
+import dev.sweepline.fsw.link.HousekeepingReply;
+import dev.sweepline.fsw.link.SampleReply;
+import dev.sweepline.fsw.link.StepCommand;
+import dev.sweepline.sim.bench.ClosedLoopBench;
+import dev.sweepline.sim.bench.PlasmaStates;
+import dev.sweepline.sim.instrument.InstrumentModel;
+import dev.sweepline.sim.instrument.SimulatedInstrument;
+import dev.sweepline.sim.instrument.StepTruth;
+import dev.sweepline.sim.scenario.AlphaDriftDirection;
+import dev.sweepline.sim.scenario.Scenario;
+import dev.sweepline.sim.scenario.ScenarioTimeline;
+
+/**
+ * The simulated electronics flying through a scenario, as the in-process bench builds them: the
+ * instrument's noise seeded with {@link ClosedLoopBench#instrumentSeed(long)}, the plasma of the
+ * scenario's timeline for the same seed evaluated at each step's mid-integration time (as
+ * {@code InProcessLink} does). Same seed, same steps at the same times: the same samples.
+ *
+ * <p>Threading: one thread.
+ */
+public final class ScenarioInstrument implements StepExecutor {
+    /** Kelvin at 0 degC (definition of the Celsius scale). */
+    private static final double ZERO_CELSIUS_K = 273.15;
+
+    private final SimulatedInstrument instrument;
+    private final ScenarioTimeline timeline;
+    private final AlphaDriftDirection drift;
+    private final StepTruth truth = new StepTruth();
+    private int lastHvHighCode;
+    private int lastLowCode;
+
+    /** The demo instrument in {@code scenario} with run seed {@code seed}. */
+    public ScenarioInstrument(Scenario scenario, long seed) {
+        this(scenario, seed, InstrumentModel.demo());
+    }
+
+    /** Instrument {@code model} in {@code scenario} with run seed {@code seed}. */
+    public ScenarioInstrument(Scenario scenario, long seed, InstrumentModel model) {
+        this.instrument = new SimulatedInstrument(model, ClosedLoopBench.instrumentSeed(seed));
+        this.timeline = scenario.timeline(seed);
+        this.drift = scenario.alphaDriftDirection();
+    }
+
+    @Override
+    public long execute(StepCommand cmd, long startMicros, SampleReply reply) {
+        long midMicros = startMicros + cmd.settleMicros + (cmd.durationMicros() - cmd.settleMicros) / 2;
+        long end = instrument.execute(cmd, startMicros, PlasmaStates.of(timeline.at(midMicros / 1e6), drift),
+                reply, truth);
+        lastHvHighCode = reply.hvMonitorCode;
+        lastLowCode = cmd.hvEnabled ? cmd.dacLow : 0;
+        return end;
+    }
+
+    /** What really happened in the last step. */
+    public StepTruth lastTruth() {
+        return truth;
+    }
+
+    @Override
+    public void housekeeping(HousekeepingReply hk) {
+        hk.hvMonitorHighCode = lastHvHighCode;
+        hk.hvMonitorLowCode = lastLowCode; // the model has no low-rail monitor: report the commanded level
+        hk.temperatureCentiCelsius = (int) Math.round((instrument.model().preampTemperatureK() - ZERO_CELSIUS_K) * 100);
+    }
+}

@@ -1,0 +1,26 @@
+/**
+ * The simulated instrument as a server on a real link, and the link's fault injection: design note.
+ *
+ * <h2>What it does</h2>
+ * {@link dev.sweepline.sim.serve.InstrumentServer} speaks the hardware ICD on any
+ * {@link dev.sweepline.fsw.link.ByteTransport} (serial, TCP, in-process pipe): it deframes step
+ * commands, executes each with a {@link dev.sweepline.sim.serve.StepExecutor} (normally
+ * {@link dev.sweepline.sim.serve.ScenarioInstrument}) and replies, paced in real time, at a speed-up,
+ * or at once. {@link dev.sweepline.sim.serve.FaultyTransport} damages the traffic (bit flips, lost
+ * and duplicated octets, stalls, seeded) and keeps a {@link dev.sweepline.sim.serve.FaultLedger} of
+ * what the receivers must see. {@link dev.sweepline.sim.serve.LinkBudget} sizes the serial link.
+ *
+ * <h2>Requirements and how each is verified</h2>
+ * <ol>
+ * <li><b>S1</b> Same seed, same samples as the in-process bench: the instrument's clock is the sum of
+ *     the executed steps' durations, the noise seed is {@code ClosedLoopBench.instrumentSeed}, the plasma
+ *     is taken at mid-integration. <i>LinkClockEquivalenceTest, SerialHilTest.</i></li>
+ * <li><b>S2</b> A repeat of the last executed sequence number gets the stored reply without a second
+ *     execution; a step with low &ge; high runs with the HV off. <i>InstrumentServerTest.</i></li>
+ * <li><b>S3</b> Every damaged frame is discarded and counted on both sides; the counts add up exactly
+ *     to the ledger; no wrong sample is accepted. <i>LinkFaultTest.</i></li>
+ * <li><b>S4</b> Link load per mode against the baud rate, warning above 80 %. <i>LinkBudgetTest.</i></li>
+ * </ol>
+ * Threading: each server and injector on one thread.
+ */
+package dev.sweepline.sim.serve;

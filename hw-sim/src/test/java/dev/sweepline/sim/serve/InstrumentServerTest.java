@@ -1,0 +1,122 @@
+package dev.sweepline.sim.serve;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import dev.sweepline.fsw.link.FramedInstrumentLink;
+import dev.sweepline.fsw.link.PipeTransport;
+import dev.sweepline.fsw.link.SampleReply;
+import dev.sweepline.fsw.link.StepCommand;
+import org.junit.jupiter.api.Test;
+
+/** The server's rules (serve design note S2; hardware ICD §4, §5). */
+class InstrumentServerTest {
+    /** Counts executions; the reply carries the execution number in Q1 and the start time in Q2. */
+    private static final class CountingExecutor implements StepExecutor {
+        int executions;
+        boolean lastHvEnabled;
+
+        @Override
+        public long execute(StepCommand cmd, long startMicros, SampleReply reply) {
+            executions++;
+            lastHvEnabled = cmd.hvEnabled;
+            reply.sequence = cmd.sequence;
+            reply.quadrant[0] = executions;
+            reply.quadrant[1] = (int) (startMicros / 1000);
+            reply.status = cmd.hvEnabled ? 0 : SampleReply.STATUS_HV_OFF;
+            return startMicros + cmd.durationMicros();
+        }
+    }
+
+    private final PipeTransport[] ends = PipeTransport.pair(1024);
+    private final CountingExecutor executor = new CountingExecutor();
+    private final FramedInstrumentLink link = new FramedInstrumentLink(ends[0]);
+    private final SampleReply reply = new SampleReply();
+
+    @Test
+    void shouldAnswerARepeatedSequenceWithTheStoredReplyWithoutExecuting() {
+        InstrumentServer server = new InstrumentServer(executor, ends[1], 0);
+        assertTrue(exchange(server, step(7, 100, 200)));
+        assertEquals(1, reply.quadrant[0]);
+        assertTrue(exchange(server, step(7, 100, 200)));
+        assertEquals(1, reply.quadrant[0]); // the stored reply: still execution 1
+        assertEquals(1, server.repeatsAnswered());
+        assertTrue(exchange(server, step(8, 100, 200)));
+        assertEquals(2, reply.quadrant[0]);
+        assertEquals(2, server.stepsExecuted());
+    }
+
+    @Test
+    void shouldAdvanceItsClockByEachExecutedStepsDuration() {
+        InstrumentServer server = new InstrumentServer(executor, ends[1], 0);
+        StepCommand s = step(1, 100, 200); // 1 ms settle + 8 ms = 9 ms
+        exchange(server, s);
+        assertEquals(0, reply.quadrant[1]); // the first step starts at 0
+        exchange(server, step(2, 100, 200));
+        assertEquals(9, reply.quadrant[1]); // the second where the first ended, in ms
+        assertEquals(2 * s.durationMicros(), server.clockMicros());
+    }
+
+    @Test
+    void shouldKeepTheHvOffForAStepWithLevelsOutOfOrder() {
+        InstrumentServer server = new InstrumentServer(executor, ends[1], 0);
+        exchange(server, step(3, 500, 500)); // low not below high (ICD §5)
+        assertFalse(executor.lastHvEnabled);
+        assertEquals(SampleReply.STATUS_HV_OFF, reply.status);
+        assertEquals(1, server.levelRefusals());
+    }
+
+    @Test
+    void shouldPaceTheReplyByTheStepDurationOverTheSpeed() {
+        InstrumentServer server = new InstrumentServer(executor, ends[1], 2.0); // twice real time
+        StepCommand s = step(1, 100, 200);
+        link.send(s, 0);
+        server.doWork(0);
+        long dueNanos = s.durationMicros() * 1_000 / 2; // 4.5 ms of wall time
+        server.doWork(dueNanos - 1);
+        assertFalse(link.poll(reply, 0)); // at T-1: not yet
+        server.doWork(dueNanos);
+        assertTrue(link.poll(reply, 0)); // at T: sent
+    }
+
+    @Test
+    void shouldAnswerHousekeepingWithItsFrameCounts() {
+        InstrumentServer server = new InstrumentServer(executor, ends[1], 0);
+        exchange(server, step(4, 100, 200));
+        byte[] junk = {5, 1, 0}; // a truncated block: one bad chunk
+        ends[0].write(junk, 0, junk.length);
+        assertTrue(link.requestHousekeeping(99));
+        for (int i = 0; i < 4; i++) {
+            server.doWork(0);
+            link.pump();
+        }
+        assertEquals(1, link.housekeepingReplies());
+        assertEquals(99, link.housekeeping().sequence);
+        assertEquals(2, link.housekeeping().framesGood); // the step and the request itself
+        assertEquals(1, link.housekeeping().framesBad);
+        assertEquals(4, link.housekeeping().lastStepSequence);
+    }
+
+    private boolean exchange(InstrumentServer server, StepCommand s) {
+        link.send(s, 0);
+        for (int i = 0; i < 4; i++) {
+            server.doWork(0);
+            if (link.poll(reply, 0)) {
+                return true;
+            }
+        }
+        return false;
+    }
+
+    private static StepCommand step(int sequence, int low, int high) {
+        StepCommand s = new StepCommand();
+        s.sequence = sequence;
+        s.dacLow = low;
+        s.dacHigh = high;
+        s.settleMicros = 1_000;
+        s.integrationPeriods = 8;
+        s.hvEnabled = true;
+        return s;
+    }
+}
