@@ -7,12 +7,12 @@ import dev.sweepline.ground.rice.RiceSettings;
 
 /**
  * Compression 0x01 of the telemetry ICD §4: the CCSDS 121.0-B decoder with the ICD's parameters
- * (n = 16, J = 16, preprocessor on, basic option set, one reference interval of 16 blocks, so the
+ * (n = 16, J = 8, preprocessor on, basic option set, one reference interval of 32 blocks, so the
  * first sample of each quadrant stream is its reference). Not thread-safe: one per decoder.
  */
 public final class Ccsds121QuadrantDecoder implements QuadrantDecompressor {
-    /** Reference sample interval of the ICD, blocks: 16 blocks of 16 cover the 256-window maximum. */
-    public static final int REFERENCE_INTERVAL_BLOCKS = 16;
+    /** Reference sample interval of the ICD, blocks: 32 blocks of 8 cover the 256-window maximum. */
+    public static final int REFERENCE_INTERVAL_BLOCKS = 32;
 
     private final RiceDecoder decoder = new RiceDecoder(
             RiceSettings.basic(BITS_PER_SAMPLE, BLOCK_SAMPLES, REFERENCE_INTERVAL_BLOCKS));

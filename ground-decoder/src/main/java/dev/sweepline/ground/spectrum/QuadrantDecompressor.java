@@ -19,7 +19,7 @@ public interface QuadrantDecompressor {
     /** Bits per sample n (ICD §4). */
     int BITS_PER_SAMPLE = 16;
     /** Block size J, samples (ICD §4). */
-    int BLOCK_SAMPLES = 16;
+    int BLOCK_SAMPLES = 8;
     /** Smallest sample value x_min of the mapper (ICD §4). */
     int X_MIN = 0;
     /** Largest sample value x_max of the mapper (ICD §4). */

@@ -80,7 +80,7 @@ class SpectrumPacketDecoderTest {
         };
         SpectrumResult r = new SpectrumPacketDecoder(fake).decode(p, 0, p.length);
         assertTrue(r.isOk(), r.detail());
-        // four independent streams (ICD §4), each Lq = 32 here; c = 16; buffer whole blocks of J = 16
+        // four independent streams (ICD §4), each Lq = 32 here; c = 16; a buffer for the 256-window maximum
         assertEquals(4, calls.size());
         assertArrayEquals(new int[] {COMPRESSION_AT + 3, 32, 16, 256}, calls.get(0));
         assertArrayEquals(new int[] {COMPRESSION_AT + 1 + 3 * 34 + 2, 32, 16, 256}, calls.get(3));
@@ -92,10 +92,10 @@ class SpectrumPacketDecoderTest {
 
     @Test
     void shouldRoundUpToWholeBlocks() {
-        // J = 16 (ICD §4): 1 -> 16, 16 -> 16, 17 -> 32, 256 -> 256
-        assertEquals(16, QuadrantDecompressor.paddedCount(1));
+        // J = 8 (ICD §4): 1 -> 8, 16 -> 16, 17 -> 24, 256 -> 256
+        assertEquals(8, QuadrantDecompressor.paddedCount(1));
         assertEquals(16, QuadrantDecompressor.paddedCount(16));
-        assertEquals(32, QuadrantDecompressor.paddedCount(17));
+        assertEquals(24, QuadrantDecompressor.paddedCount(17));
         assertEquals(256, QuadrantDecompressor.paddedCount(256));
     }
 }

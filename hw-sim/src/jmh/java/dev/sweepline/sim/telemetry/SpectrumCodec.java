@@ -32,11 +32,11 @@ public interface SpectrumCodec {
     }
 
     /**
-     * fsw-core's CCSDS 121 coder with the ICD parameters (n = 16, J = 16, r = 16 blocks, preprocessor on,
+     * fsw-core's CCSDS 121 coder with the ICD parameters (n = 16, J = 8, r = 32 blocks, preprocessor on,
      * basic option set), one stream per quadrant, each zero-filled to an octet (telemetry ICD §4).
      */
     final class Rice implements SpectrumCodec {
-        private final RiceEncoder encoder = new RiceEncoder(RiceParameters.of(16, 16, 16, true, false), 256);
+        private final RiceEncoder encoder = new RiceEncoder(RiceParameters.of(16, 8, 32, true, false), 256);
         private final byte[] out = new byte[(int) encoder.maxEncodedBytes(256)];
 
         @Override
