@@ -27,6 +27,14 @@ public record PlasmaFit(SpeciesMoments protons, SpeciesMoments alphas, FlowAngle
                 Collections.unmodifiableSet(flags), new double[0], CupGeometry.EFFECTIVE_AREA_M2);
     }
 
+    /** The same fit with one more flag. */
+    public PlasmaFit withFlag(FitFlag flag) {
+        EnumSet<FitFlag> f = flags.isEmpty() ? EnumSet.noneOf(FitFlag.class) : EnumSet.copyOf(flags);
+        f.add(flag);
+        return new PlasmaFit(protons, alphas, angles, reducedChiSquare, windowsUsed, iterations,
+                Collections.unmodifiableSet(f), normalParameters, areaM2);
+    }
+
     /** True unless a failure flag is set. */
     public boolean ok() {
         return flags.stream().noneMatch(FitFlag::failure);
