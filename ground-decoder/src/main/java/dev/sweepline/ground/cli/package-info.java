@@ -1,7 +1,9 @@
 /**
- * Command line of the ground decoder ({@code sweepline-ground.jar}): {@code decode FILE --out DIR} writes
- * {@code spectra.csv} (one row per window per spectrum) and {@code summary.json} (counts, gaps, bits per
- * APID, time span); {@code inspect FILE} lists frames and packets.
+ * Command line of the ground decoder ({@code sweepline-ground.jar}): {@code decode FILE --out DIR
+ * [--allocation BITS_PER_S]} writes {@code spectra.csv} (one row per window per spectrum),
+ * {@code summary.json} (counts, gaps, bits per APID, time span, fits), {@code moments.csv},
+ * {@code moments.json}, three PNG plots and {@code report.html} through
+ * {@link dev.sweepline.ground.product.GroundProcessing}; {@code inspect FILE} lists frames and packets.
  *
  * <h2>Design note</h2>
  * <p>Requirements and how each is verified ({@code DecodeCommandTest}, {@code InspectCommandTest}):
@@ -9,6 +11,7 @@
  *   <li>C1 a good stream gives one CSV row per window with the currents of ICD §4.</li>
  *   <li>C2 bad frames are counted by reason in summary.json and do not change the exit status (0).</li>
  *   <li>C3 an unreadable input gives exit status 2 and no exception.</li>
+ *   <li>C4 decode writes the moments, plots and report ({@code GroundProcessingTest}).</li>
  * </ol>
  * <p>Compression 0x01 is decoded by {@link dev.sweepline.ground.spectrum.Ccsds121QuadrantDecoder}
  * (the module's own CCSDS 121.0-B decoder with the ICD's parameters).

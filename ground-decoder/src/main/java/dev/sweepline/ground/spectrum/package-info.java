@@ -15,13 +15,13 @@
  *       field-by-field checks ({@code SpectrumPacketDecoderTest}).</li>
  *   <li>S2 currents follow ICD §4 "Converting to current" (values computed independently with python3,
  *       {@code QuadrantCurrentTest}).</li>
- *   <li>S3 window edges follow the ICD formula and DAC rounding ({@code DefaultWindowTableTest}).</li>
+ *   <li>S3 window edges follow the ICD formula, DAC rounding and the HV calibration of ICD §8 ({@code DefaultWindowTableTest}).</li>
  *   <li>S4 every malformed packet gives a {@link dev.sweepline.ground.spectrum.SpectrumError}, never an
  *       exception ({@code SpectrumPacketDecoderTest}, the fuzz test).</li>
  * </ol>
  *
- * <p>Choices: the window edges reported are the DAC-rounded voltages the table holds (code × 0.1 V),
- * differing from the bare formula by at most 0.05 V; edges of windows outside the default table, or of
+ * <p>Choices: the window edges reported are the calibrated voltages of the DAC-rounded codes the table
+ * holds (ICD §8: 0.100150 V × code − 0.8 V), what the fit needs for its thresholds; edges of windows outside the default table, or of
  * any other table id, are NaN (the table image is issue 6). A mode that disagrees with the APID, a gain
  * tag of 3, or octets after the fourth quadrant reject the spectrum: under a good CRC they mean the two
  * sides disagree on the layout, which must be seen rather than guessed around.

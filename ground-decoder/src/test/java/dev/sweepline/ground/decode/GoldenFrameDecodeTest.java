@@ -98,10 +98,11 @@ class GoldenFrameDecodeTest {
         assertEquals(4.096e-08, s.currentAmps()[0][8], 4.1e-20);
         // python3 sum of the four quadrants of window index 5
         assertEquals(1.6235542823879043e-11, s.totalAmps()[5], 1.6e-23);
-        // python3 round(50*120**(w/128)/0.1)/10 (ICD §4 default table): windows 40 and 55; exact to 0.1 V codes
-        assertEquals(223.2, s.lowVolts()[0], 1e-9);
-        assertEquals(231.7, s.highVolts()[0], 1e-9);
-        assertEquals(391.2, s.lowVolts()[15], 1e-9);
-        assertEquals(406.1, s.highVolts()[15], 1e-9);
+        // python3 code = round(10*50*120**(w/128)) (ICD §4 default table), volts = 0.100150*code - 0.8
+        // (ICD §8 HV calibration): windows 40 (codes 2232, 2317) and 55 (3912, 4061); 1e-9 V is round-off
+        assertEquals(222.7348, s.lowVolts()[0], 1e-9);
+        assertEquals(231.24755, s.highVolts()[0], 1e-9);
+        assertEquals(390.9868, s.lowVolts()[15], 1e-9);
+        assertEquals(405.90915, s.highVolts()[15], 1e-9);
     }
 }

@@ -1,4 +1,4 @@
-package dev.sweepline.ground.cli;
+package dev.sweepline.ground.product;
 
 import dev.sweepline.ground.decode.DecodeListener;
 import dev.sweepline.ground.spectrum.DecodedSpectrum;
@@ -12,15 +12,15 @@ import org.apache.commons.csv.CSVPrinter;
  * Writes one CSV row per window per decoded spectrum. Columns: see {@link #HEADER}; currents in
  * amperes, edges in volts (empty when the window table is not known).
  */
-final class SpectraCsvWriter implements DecodeListener, AutoCloseable {
+public final class SpectraCsvWriter implements DecodeListener, AutoCloseable {
     /** Column names, in order. */
-    static final String[] HEADER = {"time_tai", "time_utc", "apid", "mode", "sweep", "sequence_count", "window",
+    public static final String[] HEADER = {"time_tai", "time_utc", "apid", "mode", "sweep", "sequence_count", "window",
         "low_volts", "high_volts", "gain_range", "saturated", "q1_amps", "q2_amps", "q3_amps", "q4_amps",
         "total_amps"};
 
     private final CSVPrinter csv;
 
-    SpectraCsvWriter(Writer out) throws IOException {
+    public SpectraCsvWriter(Writer out) throws IOException {
         this.csv = new CSVPrinter(out, CSVFormat.DEFAULT.builder().setHeader(HEADER).get());
     }
 

@@ -1,4 +1,4 @@
-package dev.sweepline.ground.cli;
+package dev.sweepline.ground.product;
 
 import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.node.ArrayNode;
@@ -20,11 +20,12 @@ import java.util.Map;
  * {@code spectra} (by mode), {@code spectrumErrors}, {@code housekeeping}, {@code events},
  * {@code recordErrors}, {@code timeSpan}.
  */
-final class SummaryJson {
+public final class SummaryJson {
     private SummaryJson() {
     }
 
-    static ObjectNode build(ObjectMapper m, String input, long inputOctets, TelemetryDecoder d) {
+    /** The summary of a finished decoder: {@code input} names the file, {@code inputOctets} its size. */
+    public static ObjectNode build(ObjectMapper m, String input, long inputOctets, TelemetryDecoder d) {
         DecodeStats s = d.stats();
         ObjectNode root = m.createObjectNode();
         root.put("input", input);

@@ -1,0 +1,88 @@
+package dev.sweepline.ground.bound;
+
+import dev.sweepline.ground.fit.PlasmaModel;
+import java.util.Arrays;
+import org.hipparchus.linear.Array2DRowRealMatrix;
+import org.hipparchus.linear.RealMatrix;
+import org.hipparchus.linear.SingularValueDecomposition;
+
+/**
+ * Fisher information of a window set under independent Gaussian noise,
+ * F_ab = Σ_j (∂I_j/∂θ_a)(∂I_j/∂θ_b)/σ_j², and its inverse, the Cramér–Rao bound Cov(θ̂) ≥ F⁻¹
+ * (physics.md, after Kay 1993). F is scaled to a unit diagonal before it is inverted, so that the
+ * condition number compares like with like across parameters of different units.
+ */
+public final class FisherMatrix {
+    /** Scaled condition number above which F counts as singular (common practice: ~1/√ε of a double). */
+    public static final double SINGULAR_CONDITION = 1e12;
+
+    private FisherMatrix() {
+    }
+
+    /** F from a Jacobian [window][parameter] and per-window 1σ. */
+    public static double[][] information(double[][] jacobian, double[] sigma) {
+        int np = jacobian.length == 0 ? 0 : jacobian[0].length;
+        double[][] f = new double[np][np];
+        for (int j = 0; j < jacobian.length; j++) {
+            double w = 1 / (sigma[j] * sigma[j]);
+            for (int a = 0; a < np; a++) {
+                for (int b = 0; b < np; b++) {
+                    f[a][b] += jacobian[j][a] * jacobian[j][b] * w;
+                }
+            }
+        }
+        return f;
+    }
+
+    /** The bound of a Fisher matrix; singular when a diagonal is 0 or the scaled condition is too large. */
+    public static CramerRaoBound bound(double[][] f) {
+        int np = f.length;
+        double[] nan = new double[np];
+        Arrays.fill(nan, Double.NaN);
+        double[] scale = new double[np];
+        for (int a = 0; a < np; a++) {
+            if (!(f[a][a] > 0) || !Double.isFinite(f[a][a])) {
+                return new CramerRaoBound(nan, true, Double.POSITIVE_INFINITY);
+            }
+            scale[a] = 1 / Math.sqrt(f[a][a]);
+        }
+        double[][] s = new double[np][np];
+        for (int a = 0; a < np; a++) {
+            for (int b = 0; b < np; b++) {
+                s[a][b] = f[a][b] * scale[a] * scale[b];
+                if (!Double.isFinite(s[a][b])) {
+                    return new CramerRaoBound(nan, true, Double.POSITIVE_INFINITY);
+                }
+            }
+        }
+        SingularValueDecomposition svd = new SingularValueDecomposition(new Array2DRowRealMatrix(s, false));
+        double cond = svd.getConditionNumber();
+        if (!(cond < SINGULAR_CONDITION)) {
+            return new CramerRaoBound(nan, true, cond);
+        }
+        RealMatrix inv = svd.getSolver().getInverse();
+        double[] sigma = new double[np];
+        for (int a = 0; a < np; a++) {
+            sigma[a] = Math.sqrt(inv.getEntry(a, a)) * scale[a];
+        }
+        return new CramerRaoBound(sigma, false, cond);
+    }
+
+    /** The bound of a model at {@code parameters} (physical) with per-window 1σ. */
+    public static CramerRaoBound bound(PlasmaModel model, double[] parameters, double[] sigma) {
+        double[] cur = new double[model.windows()];
+        double[][] jac = new double[model.windows()][model.parameters()];
+        model.evaluate(parameters, cur, jac);
+        return bound(information(jac, sigma));
+    }
+
+    /**
+     * The proton bound of (n, U, w) for any window set: edges in volts, 1σ per window (A), effective
+     * area (m²), n (m⁻³), U along the normal (m/s), w (m/s).
+     */
+    public static CramerRaoBound protons(double[] lowVolts, double[] highVolts, double[] sigma, double areaM2,
+            double densityPerM3, double speedMPerS, double thermalSpeedMPerS) {
+        PlasmaModel m = new PlasmaModel(lowVolts, highVolts, areaM2, false);
+        return bound(m, new double[] {densityPerM3, speedMPerS, thermalSpeedMPerS}, sigma);
+    }
+}

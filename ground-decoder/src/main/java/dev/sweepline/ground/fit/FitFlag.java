@@ -1,0 +1,38 @@
+package dev.sweepline.ground.fit;
+
+/** What went wrong or is worth knowing about one fit. Failures leave the moments unset (NaN). */
+public enum FitFlag {
+    /** Fewer usable windows than the model needs plus one (no degree of freedom): failure. */
+    TOO_FEW_WINDOWS(true),
+    /** The summed current is below 5σ of its noise (e.g. an all-zero spectrum): failure. */
+    NO_SIGNAL(true),
+    /** The optimiser did not converge, or converged to non-physical values: failure. */
+    NO_CONVERGENCE(true),
+    /** No window of the spectrum has known edges (table id not known): failure. */
+    NO_CALIBRATION(true),
+    /** Windows with a saturated quadrant were left out. */
+    SATURATED_DROPPED(false),
+    /** The fitted proton peak E/q lies outside the measured windows. */
+    PEAK_OUTSIDE_WINDOWS(false),
+    /** The windows do not reach the alpha peak, or the joint fit was rejected: protons only. */
+    ALPHAS_NOT_FITTED(false),
+    /** Reduced χ² above {@link SpectrumFitter#POOR_FIT_REDUCED_CHI2}. */
+    POOR_FIT(false),
+    /** The Fisher matrix of the fit's window set is singular: no Cramér–Rao bound. */
+    SINGULAR_BOUND(false),
+    /** No quadrant currents, or too little current to split: flow angles unset. */
+    ANGLES_NOT_FITTED(false),
+    /** A difference ratio reached ±1 or the image left the collector (beyond 20.25°, ICD §8). */
+    ANGLE_OUT_OF_RANGE(false);
+
+    private final boolean failure;
+
+    FitFlag(boolean failure) {
+        this.failure = failure;
+    }
+
+    /** True when this flag means there are no moments. */
+    public boolean failure() {
+        return failure;
+    }
+}

@@ -1,0 +1,58 @@
+package dev.sweepline.ground.fit;
+
+import java.util.Collections;
+import java.util.EnumSet;
+import java.util.Set;
+
+/**
+ * Result of fitting one spectrum. Moments are NaN when a failure flag is set.
+ *
+ * @param protons          proton moments (bulk speed along the flow)
+ * @param alphas           alpha moments, {@link SpeciesMoments#NONE} unless fitted
+ * @param angles           flow angles
+ * @param reducedChiSquare χ² / (windows − parameters); NaN on failure
+ * @param windowsUsed      windows in the fit
+ * @param iterations       optimiser iterations
+ * @param flags            flags (unmodifiable)
+ * @param normalParameters physical parameters of the model along the normal (n_p, U_p cos θ, w_p[, n_α,
+ *                         U_α cos θ, w_α]), for the bound and the plots; empty on failure
+ * @param areaM2           effective area times acceptance used by the model, m²
+ */
+public record PlasmaFit(SpeciesMoments protons, SpeciesMoments alphas, FlowAngles angles, double reducedChiSquare,
+        int windowsUsed, int iterations, Set<FitFlag> flags, double[] normalParameters, double areaM2) {
+
+    /** A failed fit with these flags. */
+    public static PlasmaFit failed(EnumSet<FitFlag> flags, int windows, FlowAngles angles) {
+        return new PlasmaFit(SpeciesMoments.NONE, SpeciesMoments.NONE, angles, Double.NaN, windows, 0,
+                Collections.unmodifiableSet(flags), new double[0], CupGeometry.EFFECTIVE_AREA_M2);
+    }
+
+    /** The same fit with one more flag. */
+    public PlasmaFit withFlag(FitFlag flag) {
+        EnumSet<FitFlag> f = flags.isEmpty() ? EnumSet.noneOf(FitFlag.class) : EnumSet.copyOf(flags);
+        f.add(flag);
+        return new PlasmaFit(protons, alphas, angles, reducedChiSquare, windowsUsed, iterations,
+                Collections.unmodifiableSet(f), normalParameters, areaM2);
+    }
+
+    /** True unless a failure flag is set. */
+    public boolean ok() {
+        return flags.stream().noneMatch(FitFlag::failure);
+    }
+
+    /** True when the joint proton + alpha model was fitted. */
+    public boolean alphasFitted() {
+        return normalParameters.length == PlasmaModel.JOINT_PARAMETERS;
+    }
+
+    /** Flags as a '|'-separated list of names, empty when none. */
+    public String flagText() {
+        StringBuilder b = new StringBuilder();
+        for (FitFlag f : FitFlag.values()) {
+            if (flags.contains(f)) {
+                b.append(b.length() == 0 ? "" : "|").append(f.name());
+            }
+        }
+        return b.toString();
+    }
+}

@@ -1,0 +1,183 @@
+package dev.sweepline.ground.fit;
+
+import java.util.Collections;
+import java.util.EnumSet;
+
+/**
+ * Fits one spectrum: flow angles from the quadrants ({@link FlowAngleEstimator}), then the summed
+ * spectrum by weighted Levenberg–Marquardt ({@link LeastSquaresRun}), first protons alone from
+ * {@link InitialGuess}, then, where the windows reach the alpha peak, protons and alphas jointly. The
+ * summed spectrum sees the normal speed U cos θ (physics.md, oblique flow) and the acceptance
+ * A(θ)/A(0) of ICD §8; the bulk speed is U_n / cos θ. Stateless and thread-safe.
+ */
+public final class SpectrumFitter {
+    /** Fewest windows for the proton model: 3 parameters and one degree of freedom. */
+    public static final int MIN_WINDOWS = PlasmaModel.PROTON_PARAMETERS + 1;
+    /** Fewest windows for the joint model: 6 parameters and two degrees of freedom. */
+    public static final int MIN_WINDOWS_JOINT = PlasmaModel.JOINT_PARAMETERS + 2;
+    /** Summed current needed, in units of its 1σ (common practice: 5σ detection). */
+    public static final double MIN_SNR = 5.0;
+    /** Reduced χ² above which a fit is flagged POOR_FIT (common practice: an order of magnitude above 1). */
+    public static final double POOR_FIT_REDUCED_CHI2 = 10.0;
+    /** Largest n_α/n_p accepted from the joint fit: far above any solar wind (physics.md He/H: CME > 8.5 %). */
+    public static final double MAX_ALPHA_RATIO = 0.5;
+    /** Start of n_α/n_p when the residuals say nothing: He/H of slow wind, 2–4.5 % (physics.md). */
+    public static final double DEFAULT_ALPHA_RATIO = 0.03;
+    /** T_α/T_p at the start of the joint fit: T_α ≈ 4 T_p (physics.md [memory]). */
+    public static final double START_ALPHA_TEMPERATURE_RATIO = 4.0;
+
+    /** Fits {@code in}; never throws for bad data, flags it instead. */
+    public PlasmaFit fit(SpectrumInput in) {
+        EnumSet<FitFlag> flags = EnumSet.noneOf(FitFlag.class);
+        if (in.saturatedDropped() > 0) {
+            flags.add(FitFlag.SATURATED_DROPPED);
+        }
+        int m = in.windows();
+        if (m == 0 && in.uncalibratedDropped() > 0) {
+            flags.add(FitFlag.NO_CALIBRATION);
+            return PlasmaFit.failed(flags, m, FlowAngles.NONE);
+        }
+        if (m < MIN_WINDOWS) {
+            flags.add(FitFlag.TOO_FEW_WINDOWS);
+            return PlasmaFit.failed(flags, m, FlowAngles.NONE);
+        }
+        double signal = 0;
+        double var = 0;
+        for (int j = 0; j < m; j++) {
+            signal += in.totalAmps()[j];
+            var += in.sigmaAmps()[j] * in.sigmaAmps()[j];
+        }
+        if (!(signal > MIN_SNR * Math.sqrt(var))) {
+            flags.add(FitFlag.NO_SIGNAL);
+            return PlasmaFit.failed(flags, m, FlowAngles.NONE);
+        }
+        FlowAngles angles = FlowAngleEstimator.estimate(in);
+        if (!angles.measured()) {
+            flags.add(FitFlag.ANGLES_NOT_FITTED);
+        } else if (Math.abs(angles.ratioX()) >= 1 || Math.abs(angles.ratioY()) >= 1
+                || Math.hypot(angles.tanX(), angles.tanY()) > CupGeometry.FULL_ACCEPTANCE_TAN) {
+            flags.add(FitFlag.ANGLE_OUT_OF_RANGE);
+        }
+        double area = CupGeometry.EFFECTIVE_AREA_M2 * CupGeometry.transmission(angles.tanX(), angles.tanY());
+        PlasmaModel protonModel = new PlasmaModel(in.lowVolts(), in.highVolts(), area, false);
+        double[] guess = InitialGuess.protons(protonModel, in.totalAmps(), area);
+        if (guess == null) {
+            flags.add(FitFlag.NO_SIGNAL);
+            return PlasmaFit.failed(flags, m, angles);
+        }
+        LeastSquaresRun.Outcome best = LeastSquaresRun.fit(protonModel, in.totalAmps(), in.sigmaAmps(), guess);
+        if (best == null || !physical(best.parameters(), in)) {
+            flags.add(FitFlag.NO_CONVERGENCE);
+            return PlasmaFit.failed(flags, m, angles);
+        }
+        LeastSquaresRun.Outcome joint = alphasCovered(protonModel, best.parameters()) && m >= MIN_WINDOWS_JOINT
+                ? jointFit(in, area, protonModel, best) : null;
+        if (joint != null) {
+            best = joint;
+        } else {
+            flags.add(FitFlag.ALPHAS_NOT_FITTED);
+        }
+        return compose(in, angles, area, best, flags);
+    }
+
+    private static boolean physical(double[] p, SpectrumInput in) {
+        return p[0] > 0 && p[2] > 0 && p[1] > LeastSquaresRun.MIN_SPEED && p[1] < LeastSquaresRun.MAX_SPEED;
+    }
+
+    /** The alpha peak (alpha threshold speed = U_p) lies below the top edge. */
+    private static boolean alphasCovered(PlasmaModel m, double[] p) {
+        double top = 0;
+        for (int j = 0; j < m.windows(); j++) {
+            top = Math.max(top, m.alphaThreshold(j, true));
+        }
+        return top > p[1];
+    }
+
+    private static LeastSquaresRun.Outcome jointFit(SpectrumInput in, double area, PlasmaModel protonModel,
+            LeastSquaresRun.Outcome protons) {
+        double[] p = protons.parameters();
+        double residual = 0;
+        for (int j = 0; j < in.windows(); j++) {
+            double va = 0.5 * (protonModel.alphaThreshold(j, false) + protonModel.alphaThreshold(j, true));
+            if (Math.abs(va - p[1]) < 2 * p[2]) {
+                residual += Math.max(0, in.totalAmps()[j] - protonModel.speciesCurrent(Species.PROTON, j, p[0], p[1], p[2]));
+            }
+        }
+        double ratio = residual / (Species.ALPHA.chargeC() * area * p[1] * p[0]);
+        if (!(ratio > 0.005 && ratio < 0.2)) {
+            ratio = DEFAULT_ALPHA_RATIO;
+        }
+        double wAlpha = p[2] * Math.sqrt(START_ALPHA_TEMPERATURE_RATIO * Species.PROTON.massKg() / Species.ALPHA.massKg());
+        double[] start = {p[0], p[1], p[2], ratio * p[0], p[1], wAlpha};
+        PlasmaModel joint = new PlasmaModel(in.lowVolts(), in.highVolts(), area, true);
+        LeastSquaresRun.Outcome o = LeastSquaresRun.fit(joint, in.totalAmps(), in.sigmaAmps(), start);
+        if (o == null || !physical(o.parameters(), in)) {
+            return null;
+        }
+        double[] q = o.parameters();
+        double alphaRatio = q[3] / q[0];
+        double alphaPeakVolts = Species.ALPHA.voltsAtSpeed(q[4]);
+        boolean sane = alphaRatio > 0 && alphaRatio < MAX_ALPHA_RATIO && q[4] > 0.7 * q[1] && q[4] < 1.5 * q[1]
+                && alphaPeakVolts < max(in.highVolts()) && o.chiSquare() <= protons.chiSquare();
+        return sane ? o : null;
+    }
+
+    private static double max(double[] a) {
+        double x = Double.NEGATIVE_INFINITY;
+        for (double v : a) {
+            x = Math.max(x, v);
+        }
+        return x;
+    }
+
+    private static double min(double[] a) {
+        double x = Double.POSITIVE_INFINITY;
+        for (double v : a) {
+            x = Math.min(x, v);
+        }
+        return x;
+    }
+
+    private static PlasmaFit compose(SpectrumInput in, FlowAngles angles, double area, LeastSquaresRun.Outcome o,
+            EnumSet<FitFlag> flags) {
+        double[] p = o.parameters();
+        int np = p.length;
+        int dof = in.windows() - np;
+        double chi2 = dof > 0 ? o.chiSquare() / dof : Double.NaN;
+        if (chi2 > POOR_FIT_REDUCED_CHI2) {
+            flags.add(FitFlag.POOR_FIT);
+        }
+        double peakVolts = Species.PROTON.voltsAtSpeed(p[1]);
+        if (peakVolts < min(in.lowVolts()) || peakVolts > max(in.highVolts())) {
+            flags.add(FitFlag.PEAK_OUTSIDE_WINDOWS);
+        }
+        SpeciesMoments protons = moments(Species.PROTON, p, o.covariance(), 0, angles);
+        SpeciesMoments alphas = np == PlasmaModel.JOINT_PARAMETERS
+                ? moments(Species.ALPHA, p, o.covariance(), 3, angles) : SpeciesMoments.NONE;
+        return new PlasmaFit(protons, alphas, angles, chi2, in.windows(), o.iterations(),
+                Collections.unmodifiableSet(flags), p.clone(), area);
+    }
+
+    private static SpeciesMoments moments(Species s, double[] p, double[][] cov, int k, FlowAngles angles) {
+        double tx = angles.tanX();
+        double ty = angles.tanY();
+        double sec = 1 / CupGeometry.cosOfFlow(tx, ty);
+        double n = p[k];
+        double un = p[k + 1];
+        double w = p[k + 2];
+        double t = s.temperature(w);
+        if (cov == null) {
+            return new SpeciesMoments(n, un * sec, w, t, Double.NaN, Double.NaN, Double.NaN, Double.NaN);
+        }
+        double sn = Math.sqrt(cov[k][k]);
+        double sun = Math.sqrt(cov[k + 1][k + 1]);
+        double sw = Math.sqrt(cov[k + 2][k + 2]);
+        double su2 = sun * sun * sec * sec;
+        if (angles.measured()) {
+            double stx = angles.sigmaThetaXRad() * (1 + tx * tx);
+            double sty = angles.sigmaThetaYRad() * (1 + ty * ty);
+            su2 += Math.pow(un * tx / sec * stx, 2) + Math.pow(un * ty / sec * sty, 2);
+        }
+        return new SpeciesMoments(n, un * sec, w, t, sn, Math.sqrt(su2), sw, 2 * t * sw / w);
+    }
+}

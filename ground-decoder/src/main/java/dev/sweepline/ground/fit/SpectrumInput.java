@@ -1,0 +1,82 @@
+package dev.sweepline.ground.fit;
+
+import dev.sweepline.ground.spectrum.DecodedSpectrum;
+import java.util.Arrays;
+
+/**
+ * The windows of one spectrum that the fit may use: calibrated edges, summed current and its 1σ, and the
+ * four quadrant currents with their 1σ. Saturated windows and windows without known edges are left out
+ * and counted. Arrays are not copied: treat them as read-only.
+ *
+ * @param lowVolts            low edge per window, volts
+ * @param highVolts           high edge per window, volts
+ * @param totalAmps           sum of the quadrant currents per window, A
+ * @param sigmaAmps           1σ of the sum, A
+ * @param quadrantAmps        [q][window] current of quadrant q+1, A; null when unknown
+ * @param quadrantSigmaAmps   [q][window] 1σ of each quadrant sample, A; null when unknown
+ * @param saturatedDropped    windows left out because a quadrant hit the ADC top
+ * @param uncalibratedDropped windows left out because their edges are not known
+ */
+public record SpectrumInput(double[] lowVolts, double[] highVolts, double[] totalAmps, double[] sigmaAmps,
+        double[][] quadrantAmps, double[][] quadrantSigmaAmps, int saturatedDropped, int uncalibratedDropped) {
+
+    /** Windows kept. */
+    public int windows() {
+        return totalAmps.length;
+    }
+
+    /** True when per-quadrant currents are present. */
+    public boolean hasQuadrants() {
+        return quadrantAmps != null;
+    }
+
+    /** A spectrum without quadrants and with the same 1σ in every window (for bounds and tests). */
+    public static SpectrumInput summed(double[] lowVolts, double[] highVolts, double[] totalAmps, double sigmaAmps) {
+        double[] s = new double[totalAmps.length];
+        Arrays.fill(s, sigmaAmps);
+        return new SpectrumInput(lowVolts, highVolts, totalAmps, s, null, null, 0, 0);
+    }
+
+    /** The usable windows of a decoded spectrum, with the noise model of ICD §8 for the weights. */
+    public static SpectrumInput of(DecodedSpectrum s) {
+        int c = s.windowCount();
+        int keep = 0;
+        int saturated = 0;
+        int uncalibrated = 0;
+        for (int i = 0; i < c; i++) {
+            if (s.saturated()[i]) {
+                saturated++;
+            } else if (!Double.isFinite(s.lowVolts()[i]) || !Double.isFinite(s.highVolts()[i])) {
+                uncalibrated++;
+            } else {
+                keep++;
+            }
+        }
+        double[] lo = new double[keep];
+        double[] hi = new double[keep];
+        double[] tot = new double[keep];
+        double[] sig = new double[keep];
+        double[][] qa = new double[DecodedSpectrum.QUADRANTS][keep];
+        double[][] qs = new double[DecodedSpectrum.QUADRANTS][keep];
+        int k = 0;
+        for (int i = 0; i < c; i++) {
+            if (s.saturated()[i] || !Double.isFinite(s.lowVolts()[i]) || !Double.isFinite(s.highVolts()[i])) {
+                continue;
+            }
+            lo[k] = s.lowVolts()[i];
+            hi[k] = s.highVolts()[i];
+            double var = 0;
+            for (int q = 0; q < DecodedSpectrum.QUADRANTS; q++) {
+                double a = s.currentAmps()[q][i];
+                double v = NoiseModel.quadrantVariance(a, s.gainRange()[i], s.integrationPeriods());
+                qa[q][k] = a;
+                qs[q][k] = Math.sqrt(v);
+                tot[k] += a;
+                var += v;
+            }
+            sig[k] = Math.sqrt(var);
+            k++;
+        }
+        return new SpectrumInput(lo, hi, tot, sig, qa, qs, saturated, uncalibrated);
+    }
+}

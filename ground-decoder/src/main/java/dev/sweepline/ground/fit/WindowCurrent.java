@@ -1,0 +1,62 @@
+package dev.sweepline.ground.fit;
+
+import org.hipparchus.special.Erf;
+
+/**
+ * Window current of a convected Maxwellian along the cup normal and its derivatives (physics.md,
+ * "Window current of a convected Maxwellian"): with x_i = (v_i − U)/w and e_i = exp(−x_i²),
+ * <pre>
+ *   I     = q n A [ (U/2)(erf x2 − erf x1) + (w/(2√π))(e1 − e2) ]
+ *   ∂I/∂n = I/n
+ *   ∂I/∂U = q n A [ ½(erf x2 − erf x1) + (v1 e1 − v2 e2)/(w√π) ]
+ *   ∂I/∂w = q n A [ (x1 v1 e1 − x2 v2 e2)/(w√π) + (e1 − e2)/(2√π) ]
+ * </pre>
+ * The erf difference uses {@link Erf#erf(double, double)}, which keeps its precision where both
+ * arguments lie deep in one tail (far windows).
+ */
+public final class WindowCurrent {
+    /** Index of I in the output of {@link #evaluate}. */
+    public static final int VALUE = 0;
+    /** Index of ∂I/∂n. */
+    public static final int D_DENSITY = 1;
+    /** Index of ∂I/∂U. */
+    public static final int D_SPEED = 2;
+    /** Index of ∂I/∂w. */
+    public static final int D_THERMAL = 3;
+
+    private WindowCurrent() {
+    }
+
+    /**
+     * Current of particles with normal speed between {@code v1} and {@code v2} (m/s).
+     *
+     * @param chargeAreaC q × A, C·m²
+     */
+    public static double current(double chargeAreaC, double densityPerM3, double speedMPerS,
+            double thermalSpeedMPerS, double v1, double v2) {
+        double x1 = (v1 - speedMPerS) / thermalSpeedMPerS;
+        double x2 = (v2 - speedMPerS) / thermalSpeedMPerS;
+        double e1 = Math.exp(-x1 * x1);
+        double e2 = Math.exp(-x2 * x2);
+        return chargeAreaC * densityPerM3 * (0.5 * speedMPerS * Erf.erf(x1, x2)
+                + thermalSpeedMPerS / (2 * PlasmaConstants.SQRT_PI) * (e1 - e2));
+    }
+
+    /** Writes I, ∂I/∂n, ∂I/∂U, ∂I/∂w into {@code out[0..3]} (indices {@link #VALUE} ...). */
+    public static void evaluate(double chargeAreaC, double densityPerM3, double speedMPerS,
+            double thermalSpeedMPerS, double v1, double v2, double[] out) {
+        double w = thermalSpeedMPerS;
+        double x1 = (v1 - speedMPerS) / w;
+        double x2 = (v2 - speedMPerS) / w;
+        double e1 = Math.exp(-x1 * x1);
+        double e2 = Math.exp(-x2 * x2);
+        double derf = Erf.erf(x1, x2);
+        double qnA = chargeAreaC * densityPerM3;
+        double bracket = 0.5 * speedMPerS * derf + w / (2 * PlasmaConstants.SQRT_PI) * (e1 - e2);
+        out[VALUE] = qnA * bracket;
+        out[D_DENSITY] = chargeAreaC * bracket;
+        out[D_SPEED] = qnA * (0.5 * derf + (v1 * e1 - v2 * e2) / (w * PlasmaConstants.SQRT_PI));
+        out[D_THERMAL] = qnA * ((x1 * v1 * e1 - x2 * v2 * e2) / (w * PlasmaConstants.SQRT_PI)
+                + (e1 - e2) / (2 * PlasmaConstants.SQRT_PI));
+    }
+}

@@ -1,0 +1,67 @@
+package dev.sweepline.ground.product;
+
+import com.fasterxml.jackson.databind.ObjectMapper;
+import com.fasterxml.jackson.databind.node.ArrayNode;
+import com.fasterxml.jackson.databind.node.ObjectNode;
+import dev.sweepline.ground.fit.FitFlag;
+import java.util.List;
+
+/**
+ * Builds moments.json: {@code fits} (spectra, fitted, fitFraction, alphasFitted, byFlag, fitSeconds,
+ * spectraPerSecond) and {@code moments} (one object per spectrum in product units; a value that is not
+ * available is JSON null, never NaN).
+ */
+public final class MomentsJson {
+    private MomentsJson() {
+    }
+
+    /** The fits section alone. */
+    public static ObjectNode fits(ObjectMapper m, FitSummary s) {
+        ObjectNode f = m.createObjectNode();
+        f.put("spectra", s.spectra());
+        f.put("fitted", s.fitted());
+        f.put("fitFraction", s.fitFraction());
+        f.put("alphasFitted", s.alphasFitted());
+        ObjectNode by = f.putObject("byFlag");
+        for (FitFlag flag : FitFlag.values()) {
+            by.put(flag.name(), s.byFlag().get(flag));
+        }
+        f.put("fitSeconds", s.fitSeconds());
+        f.put("spectraPerSecond", s.spectraPerSecond());
+        return f;
+    }
+
+    /** The whole document. */
+    public static ObjectNode build(ObjectMapper m, FitSummary s, List<MomentRecord> records) {
+        ObjectNode root = m.createObjectNode();
+        root.set("fits", fits(m, s));
+        ArrayNode a = root.putArray("moments");
+        for (MomentRecord r : records) {
+            ObjectNode o = a.addObject();
+            o.put("timeTaiSeconds", r.taiSeconds());
+            o.put("timeTai", r.isoTai());
+            o.put("mode", r.mode());
+            o.put("sweep", r.sweep());
+            num(o, "nPerCc", r.densityPerCc());
+            num(o, "uKmPerS", r.speedKmPerS());
+            num(o, "tK", r.temperatureK());
+            num(o, "thetaXDeg", r.thetaXDeg());
+            num(o, "thetaYDeg", r.thetaYDeg());
+            num(o, "alphaNPerCc", r.fit().alphas().densityPerM3() * 1e-6);
+            num(o, "crlbNPerCc", r.crlbDensityPerCc());
+            num(o, "crlbUKmPerS", r.crlbSpeedKmPerS());
+            num(o, "crlbTK", r.crlbTemperatureK());
+            num(o, "chi2Reduced", r.fit().reducedChiSquare());
+            o.put("flags", r.fit().flagText());
+        }
+        return root;
+    }
+
+    private static void num(ObjectNode o, String key, double v) {
+        if (Double.isFinite(v)) {
+            o.put(key, v);
+        } else {
+            o.putNull(key);
+        }
+    }
+}

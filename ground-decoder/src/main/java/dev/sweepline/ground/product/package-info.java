@@ -1,0 +1,24 @@
+/**
+ * Ground products of a run, and the API other modules call:
+ * {@link dev.sweepline.ground.product.GroundProcessing#process(java.nio.file.Path, java.nio.file.Path,
+ * java.util.OptionalDouble)} returns {@link dev.sweepline.ground.product.GroundProducts} (the
+ * {@link dev.sweepline.ground.product.MomentRecord}s, decode stats, fit counts, bit rates) and writes
+ * spectra.csv, summary.json (with a {@code fits} section), moments.csv, moments.json, three PNGs and
+ * report.html.
+ *
+ * <h2>Design note</h2>
+ * <p>{@link dev.sweepline.ground.product.FitCollector} listens to the decoder and fits each spectrum as it
+ * arrives (one thread), with the bound of {@code dev.sweepline.ground.bound}; so memory grows with the
+ * records, not with the spectra. Values not available are NaN in the records and become an empty CSV cell
+ * or JSON null: no product carries NaN or Infinity. Bits per second are packet octets × 8 over the time
+ * span of the decoded packets, per APID, and frames × (L + 4 ASM) × 8 for the downlink.
+ *
+ * <p>Requirements and how each is verified ({@code GroundProcessingTest}, {@code QuickLookReportTest}):
+ * <ol>
+ *   <li>P1 synthetic near-Sun telemetry fits near its truth with alphas and angles.</li>
+ *   <li>P2 degenerate spectra are flagged and counted; the CSV and JSON have no NaN or Infinity.</li>
+ *   <li>P3 decode on the command line writes every product; --allocation appears in the report.</li>
+ *   <li>P4 the report is well-formed XHTML, self-contained, its images decode, Chromium renders it.</li>
+ * </ol>
+ */
+package dev.sweepline.ground.product;
