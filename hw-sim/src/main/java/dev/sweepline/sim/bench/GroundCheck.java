@@ -1,0 +1,130 @@
+package dev.sweepline.sim.bench;
+
+import dev.sweepline.fsw.exec.FlightConfig;
+import dev.sweepline.fsw.telemetry.FrameSink;
+import dev.sweepline.ground.decode.DecoderConfig;
+import dev.sweepline.ground.decode.TelemetryDecoder;
+import dev.sweepline.ground.product.FitCollector;
+import dev.sweepline.ground.product.MomentRecord;
+import dev.sweepline.ground.spectrum.Ccsds121QuadrantDecoder;
+import dev.sweepline.sim.physics.PhysicalConstants;
+import dev.sweepline.sim.plasma.IonPopulation;
+import dev.sweepline.sim.plasma.PlasmaState;
+import dev.sweepline.sim.design.ProtonInformation;
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.List;
+import java.util.Map;
+import java.util.TreeMap;
+import java.util.function.LongFunction;
+
+/**
+ * The ground's view of a run, against the truth: the run's frames go, as they are made, through the
+ * independent ground decoder and its fitter, and every fitted spectrum is compared with the
+ * scenario's protons at the sweep's mid-time. The truth is what the cup can measure: the density, the
+ * bulk speed, and the temperature along the cup normal (from the thermal speed along the normal).
+ */
+public final class GroundCheck {
+    private final FitCollector fits = new FitCollector();
+    private final TelemetryDecoder decoder = new TelemetryDecoder(DecoderConfig.icdDefaults(),
+            new Ccsds121QuadrantDecoder(), fits);
+    private final long coarseAtTickZero = new FlightConfig().coarseTimeAtTickZero;
+
+    /** Where the run's frames go. */
+    public FrameSink frames() {
+        return decoder::accept;
+    }
+
+    /** Moment errors against the truth, from the recorded sweeps (call after the run). */
+    public GroundFigures compare(List<SweepRecord> sweeps, LongFunction<PlasmaState> truthAt) {
+        decoder.finish();
+        TreeMap<Long, SweepRecord> byStart = new TreeMap<>();
+        for (SweepRecord r : sweeps) {
+            byStart.put(r.startMicros(), r);
+        }
+        List<double[]> rel = new ArrayList<>(); // |fit - truth| / truth for n, U, T
+        List<double[]> z = new ArrayList<>(); // (fit - truth) / bound for n, U, T
+        int fitted = 0;
+        for (MomentRecord m : fits.records()) {
+            if (!m.ok()) {
+                continue;
+            }
+            fitted++;
+            long start = Math.round((m.taiSeconds() - coarseAtTickZero) * 1e6);
+            Map.Entry<Long, SweepRecord> e = byStart.floorEntry(start + 20); // CUC fine: 2^-16 s, truncated
+            if (e == null || start - e.getKey() > 100) {
+                continue;
+            }
+            IonPopulation p = ProtonInformation.protons(truthAt.apply(e.getValue().midMicros()));
+            PlasmaState plasma = truthAt.apply(e.getValue().midMicros());
+            double[] truth = truth(plasma, p);
+            double[] fit = {m.densityPerCc(), m.speedKmPerS(), m.temperatureK()};
+            double[] bound = {m.crlbDensityPerCc(), m.crlbSpeedKmPerS(), m.crlbTemperatureK()};
+            double[] r = new double[3];
+            double[] zz = new double[3];
+            for (int k = 0; k < 3; k++) {
+                r[k] = Math.abs(fit[k] - truth[k]) / truth[k];
+                zz[k] = (fit[k] - truth[k]) / bound[k];
+            }
+            rel.add(r);
+            z.add(zz);
+        }
+        return GroundFigures.of(fits.records().size(), fitted, rel, z);
+    }
+
+    /** n (cm^-3), |U| (km/s), T along the normal (K) of the protons. */
+    static double[] truth(PlasmaState plasma, IonPopulation p) {
+        double u = Math.sqrt(p.vxMetresPerSecond() * p.vxMetresPerSecond()
+                + p.vyMetresPerSecond() * p.vyMetresPerSecond() + p.vzMetresPerSecond() * p.vzMetresPerSecond());
+        double w = plasma.normalThermalSpeed(p);
+        double t = p.species().massKg() * w * w / (2 * PhysicalConstants.BOLTZMANN_JOULE_PER_KELVIN);
+        return new double[] {p.densityPerM3() / 1e6, u / 1e3, t};
+    }
+
+    /**
+     * What the ground recovered.
+     *
+     * @param spectra         spectra the ground decoded
+     * @param fitted          of those, fitted without a failure flag
+     * @param medianRelative  median relative error of n, U, T
+     * @param p95Relative     95th-percentile relative error of n, U, T
+     * @param crlbRatio       rms of (fit - truth) / Cramér-Rao bound of n, U, T: 1 is as good as the measurement allows
+     * @param compared        fits compared with the truth
+     */
+    public record GroundFigures(int spectra, int fitted, double[] medianRelative, double[] p95Relative,
+            double[] crlbRatio, int compared) {
+        /** Names of the three moments, in order. */
+        public static final String[] MOMENTS = {"n", "U", "T"};
+
+        static GroundFigures of(int spectra, int fitted, List<double[]> rel, List<double[]> z) {
+            double[] median = new double[3];
+            double[] p95 = new double[3];
+            double[] ratio = new double[3];
+            for (int k = 0; k < 3; k++) {
+                double[] r = new double[rel.size()];
+                double sum = 0;
+                int finite = 0;
+                for (int i = 0; i < rel.size(); i++) {
+                    r[i] = rel.get(i)[k];
+                    double zz = z.get(i)[k];
+                    if (Double.isFinite(zz)) {
+                        sum += zz * zz;
+                        finite++;
+                    }
+                }
+                Arrays.sort(r);
+                median[k] = quantile(r, 0.5);
+                p95[k] = quantile(r, 0.95);
+                ratio[k] = finite == 0 ? Double.NaN : Math.sqrt(sum / finite);
+            }
+            return new GroundFigures(spectra, fitted, median, p95, ratio, rel.size());
+        }
+
+        private static double quantile(double[] sorted, double q) {
+            if (sorted.length == 0) {
+                return Double.NaN;
+            }
+            return sorted[(int) Math.min(sorted.length - 1, Math.floor(q * sorted.length))];
+        }
+    }
+}
