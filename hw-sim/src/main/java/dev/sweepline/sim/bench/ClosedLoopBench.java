@@ -32,6 +32,23 @@ public final class ClosedLoopBench {
         Progress NONE = (done, total) -> { };
     }
 
+    /**
+     * A hook into a run (command scripts, fault injection): sees the flight configuration and the
+     * instrument before the flight software is built, then is called before every executive cycle.
+     */
+    public interface CycleHook {
+        /** Called once, before the flight software is built from {@code flight}. */
+        default void configure(FlightConfig flight, SimulatedInstrument instrument) {
+        }
+
+        /** Called before each {@code doWork} of the flight software at {@code nowMicros}. */
+        default void beforeCycle(FlightSoftware fsw, long nowMicros) {
+        }
+
+        /** A hook that does nothing. */
+        CycleHook NONE = new CycleHook() { };
+    }
+
     /** What one run leaves behind: its figures and the recorder with the sweep-by-sweep truth. */
     public record Result(RunSummary summary, BenchRecorder recorder) {
     }
@@ -51,6 +68,11 @@ public final class ClosedLoopBench {
 
     /** Runs {@code config} to its end, handing every telemetry frame (ASM first) to {@code frames}. */
     public static Result run(BenchConfig config, Progress progress, FrameSink frames) {
+        return run(config, progress, frames, CycleHook.NONE);
+    }
+
+    /** As {@link #run(BenchConfig, Progress, FrameSink)}, with {@code hook} called before every cycle. */
+    public static Result run(BenchConfig config, Progress progress, FrameSink frames, CycleHook hook) {
         ScenarioTimeline timeline = config.scenario().timeline(config.seed());
         WindowVolts windows = new WindowVolts(config.table(), config.instrument().calibration());
         AlphaDriftDirection drift = config.scenario().alphaDriftDirection();
@@ -62,6 +84,7 @@ public final class ClosedLoopBench {
         flight.table = config.table();
         flight.parameters = config.parameters();
         flight.frameLength = config.frameLength();
+        hook.configure(flight, instrument);
         FlightSoftware fsw = new FlightSoftware(flight, link, frames, recorder);
 
         long wallStart = System.nanoTime();
@@ -70,6 +93,7 @@ public final class ClosedLoopBench {
         long nextProgress = 1_000_000;
         int stalls = 0;
         while (now < end) {
+            hook.beforeCycle(fsw, now);
             int work = fsw.doWork(now);
             long next = link.nextReplyMicros();
             long before = now;
