@@ -55,6 +55,9 @@ public final class FlightSoftware {
     private final CommandProcessor commands;
     private final int restoreStatus;
     private long housekeepingPeriodMicros;
+    /** Id of the table the scheduler sweeps with now (a commit takes effect at the next sweep boundary). */
+    private int sweepTableId;
+    private boolean commitPending;
     private int spectrumDecimation;
     private long nextHousekeepingMicros;
     private long surveySweeps;
@@ -75,6 +78,7 @@ public final class FlightSoftware {
         this.housekeepingPeriodMicros = restoreStatus == TableManager.RESTORE_OK
                 ? inForce.housekeepingSeconds * 1_000_000L : config.housekeepingPeriodMicros;
         this.spectrumDecimation = inForce.spectrumDecimation;
+        this.sweepTableId = tables.activeId();
         this.scheduler = new SweepScheduler(inForce.windowTable(), inForce.sweep, new Forwarder(observer));
         this.executive = new Executive(link, scheduler, config.timeoutMarginMicros, config.maxRetries);
         this.faults = new FaultProtection(inForce.faults, scheduler, telemetry);
@@ -248,6 +252,10 @@ public final class FlightSoftware {
 
         @Override
         public void onStep(StepCommand step, long nowMicros) {
+            if (commitPending && schedulerHasActiveTable()) {
+                commitPending = false;
+                sweepTableId = tables.activeId();
+            }
             observer.onStep(step, nowMicros);
         }
 
@@ -268,7 +276,7 @@ public final class FlightSoftware {
                 }
                 if (ofMode % spectrumDecimation == 0) {
                     scheduler.activeParameters(active);
-                    telemetry.writeSpectrum(spectrum, active.integrationPeriods, tables.activeId(), 0, nowMicros);
+                    telemetry.writeSpectrum(spectrum, active.integrationPeriods, sweepTableId, 0, nowMicros);
                 }
             }
             faults.onSweepComplete(spectrum);
@@ -288,6 +296,24 @@ public final class FlightSoftware {
             writeEvent(EVENT_MODE_CHANGE, modeCode(from), modeCode(to), reason, nowMicros);
             observer.onModeChange(from, to, reason, nowMicros);
         }
+    }
+
+    /**
+     * Whether the scheduler's windows are those of the committed table: the scheduler applies a
+     * commit at a sweep boundary, so spectra are stamped with the old id until then. At most 256
+     * comparisons per step, and only while a commit waits.
+     */
+    private boolean schedulerHasActiveTable() {
+        ParameterTable t = tables.activeTable();
+        if (scheduler.windowCount() != t.windowCount) {
+            return false;
+        }
+        for (int w = 0; w < t.windowCount; w++) {
+            if (scheduler.dacLow(w) != t.dacLow[w] || scheduler.dacHigh(w) != t.dacHigh[w]) {
+                return false;
+            }
+        }
+        return true;
     }
 
     /** The command processor's view of the rest of the flight software. */
@@ -316,6 +342,7 @@ public final class FlightSoftware {
             housekeepingPeriodMicros = table.housekeepingSeconds * 1_000_000L;
             nextHousekeepingMicros = Math.min(nextHousekeepingMicros, nowMicros + housekeepingPeriodMicros);
             spectrumDecimation = table.spectrumDecimation;
+            commitPending = true;
             writeEvent(EVENT_TABLE_COMMITTED, 0, 0, tableId, nowMicros);
             return CommandReason.OK;
         }

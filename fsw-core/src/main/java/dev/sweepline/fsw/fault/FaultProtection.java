@@ -104,11 +104,12 @@ public final class FaultProtection {
 
     /**
      * The work of the last executive cycle, in ticks (microseconds), as the host measured it: the
-     * flight software has no clock, so the host passes the time.
+     * flight software has no clock, so the host passes the time. Not monitored in SAFE: nothing is
+     * stepped there, and a SAFE response must not repeat every N cycles.
      */
     public void onCycleWork(long workTicks) {
         int n = settings.threshold[FaultMonitorId.CYCLE_OVERRUN];
-        if (n == 0 || workTicks <= settings.limit[FaultMonitorId.CYCLE_OVERRUN]) {
+        if (n == 0 || workTicks <= settings.limit[FaultMonitorId.CYCLE_OVERRUN] || scheduler.mode() == SweepMode.SAFE) {
             overrunCycles = 0;
             return;
         }
