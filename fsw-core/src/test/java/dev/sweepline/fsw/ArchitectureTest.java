@@ -19,30 +19,48 @@ import static com.tngtech.archunit.lang.syntax.ArchRuleDefinition.noClasses;
 class ArchitectureTest {
     private static final String CORE = "dev.sweepline.fsw..";
     private static final String HOST = "dev.sweepline.fsw.host..";
+    /** The non-volatile memory adapter: file I/O, host side like {@link #HOST} (commands.md §4.3). */
+    private static final String NVM = "dev.sweepline.fsw.nvm..";
+    private static final String COMMAND = "dev.sweepline.fsw.command..";
 
-    /** Core depends on java.lang, java.util.Arrays and itself: no third-party code, no java.util collections, concurrency or time. */
+    /**
+     * Core depends on java.lang, java.util.Arrays and itself: no third-party code, no java.util collections,
+     * concurrency or time. One narrow exception: the command package's HMAC uses
+     * java.security.MessageDigest (SHA-256) and its two checked exceptions, because javax.crypto.Mac
+     * allocates 48 B per doFinal inside the JDK and the command path must allocate nothing
+     * (HmacSha256, commands.md §1.2).
+     */
     @ArchTest
     static final ArchRule coreUsesJdkLangOnly = classes()
-        .that().resideInAPackage(CORE).and().resideOutsideOfPackage(HOST)
+        .that().resideInAPackage(CORE).and().resideOutsideOfPackage(HOST).and().resideOutsideOfPackage(NVM)
+        .and().resideOutsideOfPackage(COMMAND)
         .should().onlyDependOnClassesThat(resideInAnyPackage("java.lang..", CORE).or(type(java.util.Arrays.class)));
+
+    /** The command package: as core, plus SHA-256 from java.security for the allocation-free HMAC. */
+    @ArchTest
+    static final ArchRule commandUsesJdkLangAndSha256Only = classes()
+        .that().resideInAPackage(COMMAND)
+        .should().onlyDependOnClassesThat(resideInAnyPackage("java.lang..", CORE).or(type(java.util.Arrays.class))
+            .or(type(java.security.MessageDigest.class)).or(type(java.security.NoSuchAlgorithmException.class))
+            .or(type(java.security.DigestException.class)));
 
     /** No threads, thread-locals, reflection or references in core: the executive is driven from outside. */
     @ArchTest
     static final ArchRule coreStartsNoThreads = noClasses()
-        .that().resideInAPackage(CORE).and().resideOutsideOfPackage(HOST)
+        .that().resideInAPackage(CORE).and().resideOutsideOfPackage(HOST).and().resideOutsideOfPackage(NVM)
         .should().dependOnClassesThat(type(Thread.class).or(type(ThreadLocal.class)).or(type(Runnable.class))
             .or(resideInAnyPackage("java.lang.reflect..", "java.lang.ref..")));
 
     /** Time is data (style.md 2): core never reads a clock. */
     @ArchTest
     static final ArchRule coreReadsNoClock = noClasses()
-        .that().resideInAPackage(CORE).and().resideOutsideOfPackage(HOST)
+        .that().resideInAPackage(CORE).and().resideOutsideOfPackage(HOST).and().resideOutsideOfPackage(NVM)
         .should().callMethod(System.class, "currentTimeMillis")
         .orShould().callMethod(System.class, "nanoTime");
 
     /** The host adapter depends on core, never the other way. */
     @ArchTest
     static final ArchRule coreDoesNotDependOnHost = noClasses()
-        .that().resideInAPackage(CORE).and().resideOutsideOfPackage(HOST)
-        .should().dependOnClassesThat().resideInAPackage(HOST);
+        .that().resideInAPackage(CORE).and().resideOutsideOfPackage(HOST).and().resideOutsideOfPackage(NVM)
+        .should().dependOnClassesThat().resideInAnyPackage(HOST, NVM);
 }

@@ -1,5 +1,7 @@
 package dev.sweepline.fsw.exec;
 
+import dev.sweepline.fsw.command.NonVolatileStore;
+import dev.sweepline.fsw.fault.FaultSettings;
 import dev.sweepline.fsw.table.SweepParameters;
 import dev.sweepline.fsw.table.WindowTable;
 import dev.sweepline.fsw.telemetry.TelemetryWriter;
@@ -30,4 +32,26 @@ public final class FlightConfig {
     public int timeoutMarginMicros = 20_000;
     /** Re-sends of a step before a link time-out (hardware ICD §4). */
     public int maxRetries = 2;
+    /** Fault-protection settings in force at start (replaced by a table restored from non-volatile memory). */
+    public FaultSettings faults = FaultSettings.defaults();
+    /**
+     * Shared key of the command MAC (commands.md §1.2). The default is the demo key: the 32 octets
+     * 0x00, 0x01, ... 0x1F, for bench runs only; a real configuration supplies its own.
+     */
+    public byte[] commandKey = demoKey();
+    /** Check command MACs and sequence numbers (default on; the bench may switch it off for quick runs). */
+    public boolean authenticateCommands = true;
+    /** How long an HV arm stays valid for an HV enable (commands.md §2.3): 10 s (common practice: seconds). */
+    public long hvArmTimeoutMicros = 10_000_000L;
+    /** Where the committed table image is kept across restarts; restored from at start-up. */
+    public NonVolatileStore nonVolatileStore = NonVolatileStore.NONE;
+
+    /** The demo command key: octets 0..31 (commands.md §1.2). */
+    public static byte[] demoKey() {
+        byte[] k = new byte[32];
+        for (int i = 0; i < k.length; i++) {
+            k[i] = (byte) i;
+        }
+        return k;
+    }
 }

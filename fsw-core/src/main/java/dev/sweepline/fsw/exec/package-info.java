@@ -34,6 +34,11 @@
  * <li><b>E8</b> The cycle allocates nothing; nextWakeMicros tells the host when to call again (the
  *     expected reply time, then the first instant past the deadline, Long.MAX_VALUE when idle in SAFE).
  *     <i>ExecutiveTest.shouldAllocateNothingPerCycle, shouldRunClosedLoopWithoutErrors.</i></li>
+ * <li><b>E9</b> (issue 6) {@code FlightSoftware} restores the table kept in non-volatile memory at start-up,
+ *     hands telecommands to the command processor ({@code acceptTelecommand}), the host's cycle work to
+ *     fault protection ({@code reportCycleWork}), takes fault responses once per cycle after the step work,
+ *     and stamps each spectrum with the id of the table its sweep used.
+ *     <i>TableCommandingTest, CommandRejectionTest, FlightSoftwareAllocationTest; hw-sim FaultInjectionRunTest.</i></li>
  * </ol>
  * Threading: one thread; the host adapter owns pacing.
  */

@@ -54,7 +54,11 @@ public interface DecodeListener {
     default void onEvent(EventReport report) {
     }
 
-    /** A housekeeping or event packet of the wrong shape. */
+    /** A command report packet. */
+    default void onCommandReport(CommandReport report) {
+    }
+
+    /** A housekeeping, event or command report packet of the wrong shape. */
     default void onRecordError(int apid, int sequenceCount, int octets) {
     }
 }

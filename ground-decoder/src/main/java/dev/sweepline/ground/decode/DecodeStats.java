@@ -41,6 +41,8 @@ public final class DecodeStats {
     final EnumMap<SpectrumError, Long> spectrumErrors = new EnumMap<>(SpectrumError.class);
     long housekeeping;
     long events;
+    final Map<String, Long> eventsByKind = new java.util.TreeMap<>();
+    final Map<String, Long> commandReports = new java.util.TreeMap<>();
     long recordErrors;
     CucTime firstTime;
     CucTime lastTime;
@@ -213,5 +215,35 @@ public final class DecodeStats {
     /** Latest time of a decoded packet, or null. */
     public CucTime lastTime() {
         return lastTime;
+    }
+
+    /** Counts an event under its kind (mode change, or fault monitor and response taken). */
+    void countEvent(EventReport e) {
+        String kind = switch (e.eventId()) {
+            case EventReport.MODE_CHANGE -> "MODE_CHANGE";
+            case EventReport.FAULT -> "FAULT " + EventReport.monitorName(e.argumentA()) + " "
+                    + EventReport.responseName(e.argumentB());
+            case EventReport.TABLE_COMMITTED -> "TABLE_COMMITTED";
+            case EventReport.TABLE_RESTORED -> "TABLE_RESTORED";
+            default -> "EVENT_" + e.eventId();
+        };
+        eventsByKind.merge(kind, 1L, Long::sum);
+    }
+
+    /** Counts a command report under its type and status. */
+    void countCommandReport(CommandReport c) {
+        String kind = (c.type() == CommandReport.ACCEPTANCE ? "acceptance " : "execution ")
+                + CommandReport.reasonName(c.status());
+        commandReports.merge(kind, 1L, Long::sum);
+    }
+
+    /** Events by kind: "MODE_CHANGE", "FAULT monitor response", "TABLE_COMMITTED", ... (sorted). */
+    public Map<String, Long> eventsByKind() {
+        return Collections.unmodifiableMap(eventsByKind);
+    }
+
+    /** Command reports by type and status: "acceptance OK", "acceptance BAD_MAC", "execution OK", ... (sorted). */
+    public Map<String, Long> commandReports() {
+        return Collections.unmodifiableMap(commandReports);
     }
 }

@@ -7,10 +7,10 @@ import dev.sweepline.ground.packet.CucTime;
  *
  * @param time          CUC time of the event
  * @param sequenceCount packet sequence count
- * @param eventId       1 mode change
- * @param argumentA     mode change: from-mode (0 safe, 1 survey, 2 focus)
- * @param argumentB     mode change: to-mode
- * @param reasonCode    the scheduler's mode-change reason code
+ * @param eventId       1 mode change, 2 fault response, 4 table committed, 5 table restored at start-up
+ * @param argumentA     mode change: from-mode (0 safe, 1 survey, 2 focus); fault: monitor id; restore: result
+ * @param argumentB     mode change: to-mode; fault: the response taken
+ * @param reasonCode    mode change: reason code; fault: detail; table events: the table id
  */
 public record EventReport(CucTime time, int sequenceCount, int eventId, int argumentA, int argumentB,
         int reasonCode) {
@@ -20,11 +20,41 @@ public record EventReport(CucTime time, int sequenceCount, int eventId, int argu
     public static final int USER_DATA_OCTETS = 6;
     /** Event id of a mode change (ICD §6). */
     public static final int MODE_CHANGE = 1;
+    /** Event id of a fault response (ICD §6). */
+    public static final int FAULT = 2;
+    /** Event id of a table commit (ICD §6). */
+    public static final int TABLE_COMMITTED = 4;
+    /** Event id of the start-up table restore (ICD §6). */
+    public static final int TABLE_RESTORED = 5;
+
+    private static final String[] MONITORS = {
+        "?", "HV_READBACK", "ADC_SATURATION", "STUCK_CHANNEL", "LINK_TIMEOUT", "PEAK_LOST", "CYCLE_OVERRUN",
+    };
+    private static final String[] RESPONSES = {"NONE", "RETRY", "GAIN", "SURVEY", "SAFE"};
+
+    /** Name of a fault monitor id (ICD §6), or "UNKNOWN". */
+    public static String monitorName(int id) {
+        return id > 0 && id < MONITORS.length ? MONITORS[id] : "UNKNOWN";
+    }
+
+    /** Name of a fault response code (ICD §6), or "UNKNOWN". */
+    public static String responseName(int code) {
+        return code >= 0 && code < RESPONSES.length ? RESPONSES[code] : "UNKNOWN";
+    }
 
     /** A one-line description for listings. */
     public String describe() {
         if (eventId == MODE_CHANGE) {
             return "mode change " + ModeNames.of(argumentA) + " -> " + ModeNames.of(argumentB) + " reason " + reasonCode;
+        }
+        if (eventId == FAULT) {
+            return "fault " + monitorName(argumentA) + " response " + responseName(argumentB) + " detail " + reasonCode;
+        }
+        if (eventId == TABLE_COMMITTED) {
+            return String.format("table committed id 0x%04X", reasonCode);
+        }
+        if (eventId == TABLE_RESTORED) {
+            return String.format("table restore result %d id 0x%04X", argumentA, reasonCode);
         }
         return "event " + eventId + " a=" + argumentA + " b=" + argumentB + " reason " + reasonCode;
     }

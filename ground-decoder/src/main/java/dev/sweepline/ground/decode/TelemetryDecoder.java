@@ -158,8 +158,19 @@ public final class TelemetryDecoder {
                 listener.onRecordError(apid, seq, octets);
             } else {
                 stats.events++;
+                stats.countEvent(e);
                 stats.time(e.time());
                 listener.onEvent(e);
+            }
+        } else if (apid == CommandReport.APID) {
+            CommandReport c = RecordPacketDecoder.commandReport(buf, off, octets);
+            if (c == null) {
+                stats.recordErrors++;
+                listener.onRecordError(apid, seq, octets);
+            } else {
+                stats.countCommandReport(c);
+                stats.time(c.time());
+                listener.onCommandReport(c);
             }
         }
     }

@@ -69,6 +69,10 @@ public final class SummaryJson {
         }
         root.put("housekeeping", s.housekeeping());
         root.put("events", s.events());
+        ObjectNode ek = root.putObject("eventsByKind");
+        s.eventsByKind().forEach(ek::put);
+        ObjectNode cr = root.putObject("commandReports");
+        s.commandReports().forEach(cr::put);
         root.put("recordErrors", s.recordErrors());
         ObjectNode span = root.putObject("timeSpan");
         if (s.firstTime() != null) {

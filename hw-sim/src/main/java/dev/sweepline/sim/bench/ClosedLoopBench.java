@@ -35,6 +35,27 @@ public final class ClosedLoopBench {
         Progress NONE = (done, total) -> { };
     }
 
+    /**
+     * A hook into a run (command scripts, fault injection): sees the flight configuration and the
+     * instrument before the flight software is built, then is called before every executive cycle.
+     */
+    public interface CycleHook {
+        /** Called once, before the flight software is built from {@code flight}. */
+        default void configure(FlightConfig flight, SimulatedInstrument instrument) {
+        }
+
+        /** Called once, after the flight software is built and before its first cycle. */
+        default void afterBuild(FlightSoftware fsw) {
+        }
+
+        /** Called before each {@code doWork} of the flight software at {@code nowMicros}. */
+        default void beforeCycle(FlightSoftware fsw, long nowMicros) {
+        }
+
+        /** A hook that does nothing. */
+        CycleHook NONE = new CycleHook() { };
+    }
+
     /** What one run leaves behind: its figures and the recorder with the sweep-by-sweep truth. */
     public record Result(RunSummary summary, BenchRecorder recorder) {
     }
@@ -64,27 +85,37 @@ public final class ClosedLoopBench {
     }
 
     /**
-     * What a caller may attach to a run: where the frames go, a look at the assembled flight software
-     * before the first cycle (to command a mode, as the ground would), and one more observer of the
-     * scheduler's callbacks (after the bench's own recorder).
+     * What a caller may attach to a run: where the frames go, a hook into the cycles (command
+     * scripts, fault injection, a commanded mode), and one more observer of the scheduler's callbacks
+     * (after the bench's own recorder).
      */
-    public record Hooks(FrameSink frames, Consumer<FlightSoftware> setup, SweepListener observer) {
+    public record Hooks(FrameSink frames, CycleHook cycle, SweepListener observer) {
         /** Frames discarded (still built and counted), nothing else. */
-        public static final Hooks NONE = new Hooks((f, off, len) -> { }, fsw -> { }, SweepListener.NONE);
+        public static final Hooks NONE = new Hooks((f, off, len) -> { }, CycleHook.NONE, SweepListener.NONE);
 
         /** These hooks with another frame sink. */
         public Hooks withFrames(FrameSink sink) {
-            return new Hooks(sink, setup, observer);
+            return new Hooks(sink, cycle, observer);
         }
 
-        /** These hooks with another set-up step. */
+        /** These hooks with another cycle hook. */
+        public Hooks withCycle(CycleHook hook) {
+            return new Hooks(frames, hook, observer);
+        }
+
+        /** These hooks with a set-up step run once on the built flight software (e.g. a commanded mode). */
         public Hooks withSetup(Consumer<FlightSoftware> step) {
-            return new Hooks(frames, step, observer);
+            return withCycle(new CycleHook() {
+                @Override
+                public void afterBuild(FlightSoftware fsw) {
+                    step.accept(fsw);
+                }
+            });
         }
 
         /** These hooks with another extra observer. */
         public Hooks withObserver(SweepListener listener) {
-            return new Hooks(frames, setup, listener);
+            return new Hooks(frames, cycle, listener);
         }
     }
 
@@ -96,6 +127,11 @@ public final class ClosedLoopBench {
     /** Runs {@code config} to its end, handing every telemetry frame (ASM first) to {@code frames}. */
     public static Result run(BenchConfig config, Progress progress, FrameSink frames) {
         return run(config, progress, Hooks.NONE.withFrames(frames));
+    }
+
+    /** As {@link #run(BenchConfig, Progress, FrameSink)}, with {@code hook} called before every cycle. */
+    public static Result run(BenchConfig config, Progress progress, FrameSink frames, CycleHook hook) {
+        return run(config, progress, Hooks.NONE.withFrames(frames).withCycle(hook));
     }
 
     /** Runs {@code config} to its end with {@code hooks} attached. */
@@ -113,8 +149,9 @@ public final class ClosedLoopBench {
         flight.parameters = config.parameters();
         flight.frameLength = config.frameLength();
         flight.compressSpectra = config.compressSpectra();
+        hooks.cycle().configure(flight, instrument);
         FlightSoftware fsw = new FlightSoftware(flight, link, hooks.frames(), recorder);
-        hooks.setup().accept(fsw);
+        hooks.cycle().afterBuild(fsw);
 
         long wallStart = System.nanoTime();
         long end = config.durationMicros();
@@ -122,6 +159,7 @@ public final class ClosedLoopBench {
         long nextProgress = 1_000_000;
         int stalls = 0;
         while (now < end) {
+            hooks.cycle().beforeCycle(fsw, now);
             int work = fsw.doWork(now);
             long next = link.nextReplyMicros();
             long before = now;

@@ -21,6 +21,9 @@ import java.util.SplittableRandom;
  * model's tolerance the reply carries {@link SampleReply#STATUS_HV_UNSETTLED}. A step of zero
  * periods is given the noise of one period.
  *
+ * <p>Faults ({@link #faults()}) alter the reply after it is computed: HV readback offset, ADC
+ * saturation, a stuck quadrant, a dead collector, a corrupted sequence number.
+ *
  * <p>Determinism: all randomness comes from one {@link SplittableRandom} seeded at construction, so
  * the same seed and the same calls give the same replies. Threading: not thread-safe; one instance
  * per simulated instrument. Allocates nothing itself; the only garbage per step is Hipparchus
@@ -32,6 +35,7 @@ public final class SimulatedInstrument {
     private final HvSupply hv;
     private final Preamplifier preamp;
     private final SplittableRandom rng;
+    private final InstrumentFaults faults = new InstrumentFaults();
 
     /** An instrument of {@code model}, its noise drawn from a stream seeded with {@code seed}; HV initially off. */
     public SimulatedInstrument(InstrumentModel model, long seed) {
@@ -40,6 +44,11 @@ public final class SimulatedInstrument {
         this.hv = new HvSupply(model.calibration(), model.hv());
         this.preamp = new Preamplifier(model.preampTemperatureK());
         this.rng = new SplittableRandom(seed);
+    }
+
+    /** The injectable faults of this instrument (all off at construction); applied to every later reply. */
+    public InstrumentFaults faults() {
+        return faults;
     }
 
     /** The instrument's parameter set. */
@@ -90,6 +99,9 @@ public final class SimulatedInstrument {
                 | (cmd.hvEnabled ? 0 : SampleReply.STATUS_HV_OFF);
         reply.hvMonitorCode = monitor;
         reply.gainRange = range;
+        if (faults.any()) {
+            faults.apply(reply);
+        }
 
         long end = startMicros + cmd.durationMicros();
         truth.lowVolts = low;

@@ -1,0 +1,218 @@
+package dev.sweepline.fsw.command;
+
+import dev.sweepline.fsw.fault.FaultMonitorId;
+import dev.sweepline.fsw.table.SweepParameters;
+import dev.sweepline.fsw.table.TableStatus;
+import dev.sweepline.fsw.table.WindowTable;
+import dev.sweepline.fsw.telemetry.Crc16;
+
+/**
+ * The parameter table image (commands.md §4.1), octet by octet, big-endian:
+ *
+ * <pre>
+ *   0   2  marker 0x5354 ("ST")
+ *   2   1  format version 1
+ *   3   1  reserved, 0
+ *   4   2  image length L = 134 + 4 n, octets, CRC included
+ *   6   2  window count n (1..256)
+ *   8  72  sweep parameters, 18 signed 32-bit values in SweepParameters field order
+ *  80   2  housekeeping period, seconds (1..3600)
+ *  82   2  spectrum decimation (1..256)
+ *  84  48  fault settings, monitors 1..6: response (1), retries (1), threshold (2), limit (4)
+ * 132  4n  windows: low code (2), high code (2)
+ * L-2   2  CRC-16/IBM-3740 over octets 0 .. L-3
+ * </pre>
+ *
+ * The table id is the CRC. Decoding is allocation-free and never throws on bad bytes.
+ */
+public final class TableImage {
+    /** Marker "ST". */
+    public static final int MARKER = 0x5354;
+    /** Format version. */
+    public static final int VERSION = 1;
+    /** Octets before the windows. */
+    public static final int WINDOWS_AT = 132;
+    /** Octets of the image besides the windows (header, values, CRC). */
+    public static final int FIXED_OCTETS = WINDOWS_AT + 2;
+    /** Shortest image (one window). */
+    public static final int MIN_OCTETS = FIXED_OCTETS + 4;
+    /** Longest image ({@link WindowTable#CAPACITY} windows). */
+    public static final int MAX_OCTETS = FIXED_OCTETS + 4 * WindowTable.CAPACITY;
+    /** {@link #decode} result: the image is not intact (marker, version, length or CRC). */
+    public static final int CORRUPT = -1;
+
+    private static final int PARAMETERS_AT = 8;
+    private static final int HOUSEKEEPING_AT = 80;
+    private static final int DECIMATION_AT = 82;
+    private static final int FAULTS_AT = 84;
+    private static final int FAULT_ENTRY_OCTETS = 8;
+
+    private TableImage() {
+    }
+
+    /** Image length for {@code windows} windows. */
+    public static int length(int windows) {
+        return FIXED_OCTETS + 4 * windows;
+    }
+
+    /** The table id (CRC) of an image of {@code length} octets, as stored in its last two octets. */
+    public static int tableId(byte[] b, int length) {
+        return Telecommand.u16(b, length - 2);
+    }
+
+    /**
+     * Checks the integrity of an image of {@code length} octets: marker, version, length field,
+     * window count and CRC.
+     *
+     * @return true when intact
+     */
+    public static boolean intact(byte[] b, int length) {
+        if (length < MIN_OCTETS || length > MAX_OCTETS || b.length < length) {
+            return false;
+        }
+        int n = Telecommand.u16(b, 6);
+        return Telecommand.u16(b, 0) == MARKER && (b[2] & 0xFF) == VERSION && Telecommand.u16(b, 4) == length
+            && n >= 1 && n <= WindowTable.CAPACITY && length(n) == length
+            && Crc16.of(b, 0, length - 2) == Telecommand.u16(b, length - 2);
+    }
+
+    /**
+     * Decodes an intact image into {@code into} and validates its values.
+     *
+     * @return 0 when valid; {@link #CORRUPT} when not intact; else a {@link TableStatus} code
+     *         (windows or sweep parameters), or 100 + the id of a bad fault monitor entry, or 200 for a
+     *         telemetry allocation out of range. {@code into} holds the decoded values either way.
+     */
+    public static int decode(byte[] b, int length, ParameterTable into) {
+        if (!intact(b, length)) {
+            return CORRUPT;
+        }
+        int n = Telecommand.u16(b, 6);
+        into.windowCount = n;
+        for (int w = 0; w < n; w++) {
+            into.dacLow[w] = Telecommand.u16(b, WINDOWS_AT + 4 * w);
+            into.dacHigh[w] = Telecommand.u16(b, WINDOWS_AT + 4 * w + 2);
+        }
+        readParameters(b, into.sweep);
+        into.housekeepingSeconds = Telecommand.u16(b, HOUSEKEEPING_AT);
+        into.spectrumDecimation = Telecommand.u16(b, DECIMATION_AT);
+        for (int m = 1; m <= FaultMonitorId.COUNT; m++) {
+            int p = FAULTS_AT + (m - 1) * FAULT_ENTRY_OCTETS;
+            into.faults.response[m] = b[p] & 0xFF;
+            into.faults.retries[m] = b[p + 1] & 0xFF;
+            into.faults.threshold[m] = Telecommand.u16(b, p + 2);
+            into.faults.limit[m] = s32(b, p + 4);
+        }
+        return validate(into);
+    }
+
+    /** Validates decoded values: the same codes as {@link #decode}. */
+    public static int validate(ParameterTable t) {
+        int status = WindowTable.validate(t.dacLow, t.dacHigh, t.windowCount);
+        if (status != TableStatus.OK) {
+            return status;
+        }
+        status = t.sweep.validate();
+        if (status != TableStatus.OK) {
+            return status;
+        }
+        int fault = t.faults.validate();
+        if (fault != 0) {
+            return 100 + fault;
+        }
+        if (t.housekeepingSeconds < ParameterTable.MIN_HOUSEKEEPING_SECONDS
+            || t.housekeepingSeconds > ParameterTable.MAX_HOUSEKEEPING_SECONDS
+            || t.spectrumDecimation < 1 || t.spectrumDecimation > ParameterTable.MAX_SPECTRUM_DECIMATION) {
+            return 200;
+        }
+        return 0;
+    }
+
+    /**
+     * Writes the image of {@code t} (values as they are; validate first) into {@code b}.
+     *
+     * @return the image length
+     */
+    public static int encode(ParameterTable t, byte[] b) {
+        int length = length(t.windowCount);
+        put16(b, 0, MARKER);
+        b[2] = VERSION;
+        b[3] = 0;
+        put16(b, 4, length);
+        put16(b, 6, t.windowCount);
+        writeParameters(t.sweep, b);
+        put16(b, HOUSEKEEPING_AT, t.housekeepingSeconds);
+        put16(b, DECIMATION_AT, t.spectrumDecimation);
+        for (int m = 1; m <= FaultMonitorId.COUNT; m++) {
+            int p = FAULTS_AT + (m - 1) * FAULT_ENTRY_OCTETS;
+            b[p] = (byte) t.faults.response[m];
+            b[p + 1] = (byte) t.faults.retries[m];
+            put16(b, p + 2, t.faults.threshold[m]);
+            put32(b, p + 4, t.faults.limit[m]);
+        }
+        for (int w = 0; w < t.windowCount; w++) {
+            put16(b, WINDOWS_AT + 4 * w, t.dacLow[w]);
+            put16(b, WINDOWS_AT + 4 * w + 2, t.dacHigh[w]);
+        }
+        put16(b, length - 2, Crc16.of(b, 0, length - 2));
+        return length;
+    }
+
+    private static void readParameters(byte[] b, SweepParameters p) {
+        int i = PARAMETERS_AT;
+        p.integrationPeriods = s32(b, i);
+        p.fixedSettleMicros = s32(b, i + 4);
+        p.settleMicrosPerCodeQ8 = s32(b, i + 8);
+        p.minHalfWidthWindows = s32(b, i + 12);
+        p.halfWidthPerFwhmQ8 = s32(b, i + 16);
+        p.maxBandWindows = s32(b, i + 20);
+        p.resurveyEveryFocusSweeps = s32(b, i + 24);
+        p.collapseFractionQ8 = s32(b, i + 28);
+        p.jumpWindows = s32(b, i + 32);
+        p.edgeWindows = s32(b, i + 36);
+        p.edgeSearchWindows = s32(b, i + 40);
+        p.gainUpFractionQ16 = s32(b, i + 44);
+        p.gainDownFractionQ16 = s32(b, i + 48);
+        p.alphaRatioQ16 = s32(b, i + 52);
+        p.alphaToleranceQ16 = s32(b, i + 56);
+        p.noiseCountsPerQuadrant = s32(b, i + 60);
+        p.significanceSigmas = s32(b, i + 64);
+        p.prominenceFractionQ8 = s32(b, i + 68);
+    }
+
+    private static void writeParameters(SweepParameters p, byte[] b) {
+        int i = PARAMETERS_AT;
+        put32(b, i, p.integrationPeriods);
+        put32(b, i + 4, p.fixedSettleMicros);
+        put32(b, i + 8, p.settleMicrosPerCodeQ8);
+        put32(b, i + 12, p.minHalfWidthWindows);
+        put32(b, i + 16, p.halfWidthPerFwhmQ8);
+        put32(b, i + 20, p.maxBandWindows);
+        put32(b, i + 24, p.resurveyEveryFocusSweeps);
+        put32(b, i + 28, p.collapseFractionQ8);
+        put32(b, i + 32, p.jumpWindows);
+        put32(b, i + 36, p.edgeWindows);
+        put32(b, i + 40, p.edgeSearchWindows);
+        put32(b, i + 44, p.gainUpFractionQ16);
+        put32(b, i + 48, p.gainDownFractionQ16);
+        put32(b, i + 52, p.alphaRatioQ16);
+        put32(b, i + 56, p.alphaToleranceQ16);
+        put32(b, i + 60, p.noiseCountsPerQuadrant);
+        put32(b, i + 64, p.significanceSigmas);
+        put32(b, i + 68, p.prominenceFractionQ8);
+    }
+
+    private static int s32(byte[] b, int i) {
+        return (int) Telecommand.u32(b, i);
+    }
+
+    private static void put16(byte[] b, int i, int v) {
+        b[i] = (byte) (v >>> 8);
+        b[i + 1] = (byte) v;
+    }
+
+    private static void put32(byte[] b, int i, int v) {
+        put16(b, i, v >>> 16);
+        put16(b, i + 2, v);
+    }
+}

@@ -1,0 +1,190 @@
+package dev.sweepline.sim.command;
+
+import dev.sweepline.fsw.command.CommandCode;
+import dev.sweepline.fsw.command.ParameterTable;
+import dev.sweepline.fsw.command.TableImage;
+import dev.sweepline.fsw.table.SweepParameters;
+import dev.sweepline.fsw.table.WindowTable;
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.List;
+import java.util.Locale;
+
+/**
+ * A command script: time-tagged telecommands and fault injections, one per line, sorted by time
+ * (commands.md §7). Format: {@code <seconds> <VERB> [args...]}, {@code #} starts a comment.
+ *
+ * <pre>
+ *   2.0  NO_OP
+ *   3.0  TABLE_LOGSPACED 64 100 3000 4     # windows, low V, high V, [integration periods]: load+verify+commit
+ *   5.0  SET_MODE SAFE                     # SAFE | SURVEY | FOCUS
+ *   5.1  HV_ARM
+ *   5.2  HV_ENABLE
+ *   6.0  RESET_COUNTERS 7
+ *   7.0  TABLE_DUMP 0 0 64                 # copy (0 active, 1 pending), offset, length
+ *   8.0  INJECT HV_READBACK 500            # also SATURATE on|off, STUCK q code, DEAD on|off,
+ *                                          #      SEQUENCE on|off, OVERRUN ticks, CLEAR
+ * </pre>
+ */
+public final class CommandScript {
+    private final List<ScriptEntry> entries;
+
+    private CommandScript(List<ScriptEntry> entries) {
+        this.entries = List.copyOf(entries);
+    }
+
+    /** The entries in time order. */
+    public List<ScriptEntry> entries() {
+        return entries;
+    }
+
+    /** Reads a script file. */
+    public static CommandScript read(Path file) throws IOException, ScriptException {
+        return parse(Files.readAllLines(file));
+    }
+
+    /** Parses script lines. */
+    public static CommandScript parse(List<String> lines) throws ScriptException {
+        List<ScriptEntry> out = new ArrayList<>();
+        long last = Long.MIN_VALUE;
+        for (int i = 0; i < lines.size(); i++) {
+            int lineNo = i + 1;
+            String text = lines.get(i);
+            int hash = text.indexOf('#');
+            String[] t = (hash >= 0 ? text.substring(0, hash) : text).trim().split("\\s+");
+            if (t.length == 0 || t[0].isEmpty()) {
+                continue;
+            }
+            if (t.length < 2) {
+                throw new ScriptException(lineNo, "expected '<seconds> <VERB> [args]'");
+            }
+            long at;
+            try {
+                double seconds = Double.parseDouble(t[0]);
+                if (!(seconds >= 0)) {
+                    throw new NumberFormatException();
+                }
+                at = Math.round(seconds * 1e6);
+            } catch (NumberFormatException e) {
+                throw new ScriptException(lineNo, "bad time '" + t[0] + "'");
+            }
+            if (at < last) {
+                throw new ScriptException(lineNo, "time goes backwards");
+            }
+            last = at;
+            parseLine(at, lineNo, t, out);
+        }
+        return new CommandScript(out);
+    }
+
+    private static void parseLine(long at, int line, String[] t, List<ScriptEntry> out) throws ScriptException {
+        String verb = t[1].toUpperCase(Locale.ROOT);
+        switch (verb) {
+            case "NO_OP" -> out.add(command(at, line, CommandCode.NO_OP, t, 0));
+            case "HV_ARM" -> out.add(command(at, line, CommandCode.HV_ARM, t, 0));
+            case "HV_ENABLE" -> out.add(command(at, line, CommandCode.HV_ENABLE, t, 0));
+            case "SET_MODE" -> {
+                need(t, 1, line);
+                int mode = switch (t[2].toUpperCase(Locale.ROOT)) {
+                    case "SAFE" -> 0;
+                    case "SURVEY" -> 1;
+                    case "FOCUS" -> 2;
+                    default -> throw new ScriptException(line, "mode must be SAFE, SURVEY or FOCUS");
+                };
+                out.add(new ScriptEntry(at, line, CommandCode.SET_MODE, new byte[] {(byte) mode}, null, null));
+            }
+            case "RESET_COUNTERS" -> out.add(new ScriptEntry(at, line, CommandCode.RESET_COUNTERS,
+                    new byte[] {(byte) number(t, 2, line)}, null, null));
+            case "TABLE_DUMP" -> {
+                int off = number(t, 3, line);
+                int len = number(t, 4, line);
+                out.add(new ScriptEntry(at, line, CommandCode.TABLE_DUMP, new byte[] {(byte) number(t, 2, line),
+                    (byte) (off >>> 8), (byte) off, (byte) (len >>> 8), (byte) len}, null, null));
+            }
+            case "TABLE_LOGSPACED" -> table(at, line, t, out);
+            case "INJECT" -> {
+                need(t, 1, line);
+                String what = t[2].toUpperCase(Locale.ROOT);
+                int[] values = new int[t.length - 3];
+                for (int k = 0; k < values.length; k++) {
+                    String v = t[k + 3].toLowerCase(Locale.ROOT);
+                    values[k] = v.equals("on") ? 1 : v.equals("off") ? 0 : number(t, k + 3, line);
+                }
+                switch (what) {
+                    case "HV_READBACK", "SATURATE", "DEAD", "SEQUENCE", "OVERRUN" -> {
+                        if (values.length != 1) {
+                            throw new ScriptException(line, what + " takes one value");
+                        }
+                    }
+                    case "STUCK" -> {
+                        if (values.length != 2) {
+                            throw new ScriptException(line, "STUCK takes a quadrant 0..3 and a code");
+                        }
+                    }
+                    case "CLEAR" -> {
+                    }
+                    default -> throw new ScriptException(line, "unknown injection '" + t[2] + "'");
+                }
+                out.add(new ScriptEntry(at, line, -1, new byte[0], what, values));
+            }
+            default -> throw new ScriptException(line, "unknown verb '" + t[1] + "'");
+        }
+    }
+
+    /** A log-spaced table as an image, then loads of 192 octets, a verify and a commit, all at {@code at}. */
+    private static void table(long at, int line, String[] t, List<ScriptEntry> out) throws ScriptException {
+        int windows = number(t, 2, line);
+        int lowVolts = number(t, 3, line);
+        int highVolts = number(t, 4, line);
+        ParameterTable p;
+        try {
+            p = ParameterTable.of(WindowTable.logSpaced(windows, lowVolts * 1000, highVolts * 1000),
+                    SweepParameters.defaults());
+        } catch (IllegalArgumentException e) {
+            throw new ScriptException(line, e.getMessage());
+        }
+        if (t.length > 5) {
+            p.sweep.integrationPeriods = number(t, 5, line);
+        }
+        byte[] image = new byte[TableImage.MAX_OCTETS];
+        int n = TableImage.encode(p, image);
+        for (int from = 0; from < n; from += CommandCode.MAX_LOAD_OCTETS) {
+            int k = Math.min(CommandCode.MAX_LOAD_OCTETS, n - from);
+            byte[] a = new byte[2 + k];
+            a[0] = (byte) (from >>> 8);
+            a[1] = (byte) from;
+            System.arraycopy(image, from, a, 2, k);
+            out.add(new ScriptEntry(at, line, CommandCode.TABLE_LOAD, a, null, null));
+        }
+        out.add(new ScriptEntry(at, line, CommandCode.TABLE_VERIFY, new byte[] {(byte) (n >>> 8), (byte) n}, null, null));
+        int id = TableImage.tableId(image, n);
+        out.add(new ScriptEntry(at, line, CommandCode.TABLE_COMMIT, new byte[] {(byte) (id >>> 8), (byte) id}, null, null));
+    }
+
+    private static ScriptEntry command(long at, int line, int code, String[] t, int args) throws ScriptException {
+        if (t.length != 2 + args) {
+            throw new ScriptException(line, t[1] + " takes " + args + " arguments");
+        }
+        return new ScriptEntry(at, line, code, new byte[0], null, null);
+    }
+
+    private static void need(String[] t, int args, int line) throws ScriptException {
+        if (t.length < 2 + args) {
+            throw new ScriptException(line, t[1] + " needs " + args + " argument(s)");
+        }
+    }
+
+    private static int number(String[] t, int index, int line) throws ScriptException {
+        if (index >= t.length) {
+            throw new ScriptException(line, "missing argument " + (index - 1) + " of " + t[1]);
+        }
+        try {
+            return Integer.decode(t[index]);
+        } catch (NumberFormatException e) {
+            throw new ScriptException(line, "bad number '" + t[index] + "' in " + Arrays.toString(t));
+        }
+    }
+}
