@@ -57,12 +57,16 @@ class FlightSoftwareHousekeepingTest {
         TelemetryCounters c = fsw.telemetry().counters();
         int housekeepingOctets = SpacePacket.PRIMARY_HEADER_LENGTH + CucTime.LENGTH + HousekeepingImage.LENGTH;
         byte[] expected = HousekeepingImage.of(mode(fsw.scheduler().mode()),
-                fsw.scheduler().mode() == SweepMode.SAFE ? 0 : 1, e.stepsSent(), e.repliesAccepted(),
+                fsw.scheduler().mode() != SweepMode.SAFE && fsw.hv().enabled() ? 1 : 0, e.stepsSent(),
+                e.repliesAccepted(),
                 (int) e.sequenceErrors(), (int) e.timeouts(), (int) e.retries(),
                 (int) (c.packets(Apid.SURVEY_SPECTRUM)), (int) (c.packets(Apid.FOCUS_SPECTRUM)),
                 (int) fsw.lockLosses(),
                 // ICD §5 offset 22: octets generated before this packet (the packet is counted once sent)
-                c.packetOctets() - housekeepingOctets);
+                c.packetOctets() - housekeepingOctets,
+                (int) fsw.commands().accepted(), (int) fsw.commands().rejected(),
+                (int) fsw.commands().executionFailures(), fsw.commands().lastRejection(), fsw.hv().code(now),
+                fsw.tables().activeId(), (int) Math.min(0xFFFF, fsw.faults().totalTrips()));
         assertArrayEquals(expected, last);
     }
 

@@ -106,7 +106,7 @@ class GoldenFramesTest {
 
     /** A housekeeping packet with the golden user data (make_golden_frames.py hk()). */
     private byte[] housekeepingPacket(int seq, long micros) {
-        byte[] ud = HousekeepingImage.of(1, 1, 0x00012345, 0x00012340, 2, 3, 5, 0x0102, 0x0304, 1, 0x00ABCDEF);
+        byte[] ud = HousekeepingImage.firstForm(1, 1, 0x00012345, 0x00012340, 2, 3, 5, 0x0102, 0x0304, 1, 0x00ABCDEF);
         byte[] p = new byte[SpacePacket.PRIMARY_HEADER_LENGTH + CucTime.LENGTH + ud.length];
         SpacePacket.writePrimaryHeader(p, 0, SpacePacket.TYPE_TM, true, Apid.HOUSEKEEPING, SpacePacket.UNSEGMENTED,
                 seq, CucTime.LENGTH + ud.length);

@@ -9,15 +9,17 @@ import java.nio.ByteBuffer;
  * checks that the flight software writes the same image of its own counters.
  */
 final class HousekeepingImage {
-    /** User data octets (ICD §5: offsets 0..25). */
-    static final int LENGTH = 26;
+    /** User data octets (ICD §5: offsets 0..37). */
+    static final int LENGTH = 38;
 
     private HousekeepingImage() {
     }
 
-    /** The 26 octets of ICD §5; 16- and 32-bit counters are taken modulo their field width. */
+    /** The 38 octets of ICD §5; 16- and 32-bit counters are taken modulo their field width. */
     static byte[] of(int mode, int hvEnabled, long stepsSent, long repliesAccepted, int sequenceErrors,
-            int timeouts, int retries, int surveySweeps, int focusSweeps, int lockLosses, long telemetryOctets) {
+            int timeouts, int retries, int surveySweeps, int focusSweeps, int lockLosses, long telemetryOctets,
+            int commandsAccepted, int commandsRejected, int executionFailures, int lastRejection, int hvState,
+            int tableId, int faultTrips) {
         return ByteBuffer.allocate(LENGTH)
                 .put((byte) mode)                    // offset 0
                 .put((byte) hvEnabled)               // 1
@@ -30,6 +32,23 @@ final class HousekeepingImage {
                 .putShort((short) focusSweeps)       // 18..19
                 .putShort((short) lockLosses)        // 20..21
                 .putInt((int) telemetryOctets)       // 22..25
+                .putShort((short) commandsAccepted)  // 26..27
+                .putShort((short) commandsRejected)  // 28..29
+                .putShort((short) executionFailures) // 30..31
+                .put((byte) lastRejection)           // 32
+                .put((byte) hvState)                 // 33
+                .putShort((short) tableId)           // 34..35
+                .putShort((short) faultTrips)        // 36..37
                 .array();
+    }
+
+    /**
+     * The 26-octet form of ICD §5 before issue 6 appended the command and fault fields: the golden
+     * frames carry it (the ground accepts both lengths, ICD §5).
+     */
+    static byte[] firstForm(int mode, int hvEnabled, long stepsSent, long repliesAccepted, int sequenceErrors,
+            int timeouts, int retries, int surveySweeps, int focusSweeps, int lockLosses, long telemetryOctets) {
+        return java.util.Arrays.copyOf(of(mode, hvEnabled, stepsSent, repliesAccepted, sequenceErrors, timeouts,
+                retries, surveySweeps, focusSweeps, lockLosses, telemetryOctets, 0, 0, 0, 0, 0, 0, 0), 26);
     }
 }

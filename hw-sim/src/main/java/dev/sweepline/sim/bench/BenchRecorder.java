@@ -163,6 +163,11 @@ public final class BenchRecorder implements SweepListener, InProcessLink.StepObs
         return -1;
     }
 
+    /** The scenario's plasma at {@code micros} of simulated time (the truth). */
+    public PlasmaState truthAt(long micros) {
+        return truthAt.apply(micros);
+    }
+
     /** Sweeps recorded so far, in order. */
     public List<SweepRecord> sweeps() {
         return sweeps;

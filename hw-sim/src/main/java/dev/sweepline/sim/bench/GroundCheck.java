@@ -38,6 +38,15 @@ public final class GroundCheck {
     /** Moment errors against the truth, from the recorded sweeps (call after the run). */
     public GroundFigures compare(List<SweepRecord> sweeps, LongFunction<PlasmaState> truthAt) {
         decoder.finish();
+        return compare(fits.records(), sweeps, truthAt, coarseAtTickZero);
+    }
+
+    /**
+     * Moment errors of {@code records} (the ground's fits, from either the streaming check or the
+     * ground's file processing) against the truth of the sweeps they came from.
+     */
+    public static GroundFigures compare(List<MomentRecord> records, List<SweepRecord> sweeps,
+            LongFunction<PlasmaState> truthAt, long coarseAtTickZero) {
         TreeMap<Long, SweepRecord> byStart = new TreeMap<>();
         for (SweepRecord r : sweeps) {
             byStart.put(r.startMicros(), r);
@@ -45,7 +54,7 @@ public final class GroundCheck {
         List<double[]> rel = new ArrayList<>(); // |fit - truth| / truth for n, U, T
         List<double[]> z = new ArrayList<>(); // (fit - truth) / bound for n, U, T
         int fitted = 0;
-        for (MomentRecord m : fits.records()) {
+        for (MomentRecord m : records) {
             if (!m.ok()) {
                 continue;
             }
@@ -55,8 +64,8 @@ public final class GroundCheck {
             if (e == null || start - e.getKey() > 100) {
                 continue;
             }
-            IonPopulation p = ProtonInformation.protons(truthAt.apply(e.getValue().midMicros()));
             PlasmaState plasma = truthAt.apply(e.getValue().midMicros());
+            IonPopulation p = ProtonInformation.protons(plasma);
             double[] truth = truth(plasma, p);
             double[] fit = {m.densityPerCc(), m.speedKmPerS(), m.temperatureK()};
             double[] bound = {m.crlbDensityPerCc(), m.crlbSpeedKmPerS(), m.crlbTemperatureK()};
@@ -69,7 +78,7 @@ public final class GroundCheck {
             rel.add(r);
             z.add(zz);
         }
-        return GroundFigures.of(fits.records().size(), fitted, rel, z);
+        return GroundFigures.of(records.size(), fitted, rel, z);
     }
 
     /** n (cm^-3), |U| (km/s), T along the normal (K) of the protons. */

@@ -76,8 +76,15 @@ public final class RunReportWriter {
 
     /** Writes {@code summary.json} and {@code decisions.csv} into {@code dir}, creating it. */
     public static void write(Path dir, ClosedLoopBench.Result result) throws IOException {
+        write(dir, result, Map.of());
+    }
+
+    /** As {@link #write(Path, ClosedLoopBench.Result)}, with {@code extra} fields appended to the summary. */
+    public static void write(Path dir, ClosedLoopBench.Result result, Map<String, Object> extra) throws IOException {
         Files.createDirectories(dir);
-        JSON.writeValue(dir.resolve("summary.json").toFile(), summaryMap(result.summary()));
+        Map<String, Object> summary = summaryMap(result.summary());
+        summary.putAll(extra);
+        JSON.writeValue(dir.resolve("summary.json").toFile(), summary);
         try (Writer w = Files.newBufferedWriter(dir.resolve("decisions.csv"))) {
             w.write("sweep,mode,startSeconds,endSeconds,firstWindow,lastWindow,peakWindow,bandCentre,"
                     + "trueProtonWindow,trueAlphaWindow,locked,alphaLock,saturatedSamples\n");
@@ -89,6 +96,54 @@ public final class RunReportWriter {
                         r.trueProtonWindow(),
                         r.trueAlphaWindow(), r.locked(), r.alphaLock(), r.saturatedSamples()));
             }
+        }
+    }
+
+    /** The ground comparison as summary fields: momentErrors (median, p95) and crlbRatio, per moment. */
+    public static Map<String, Object> groundMap(GroundCheck.GroundFigures g) {
+        Map<String, Object> errors = new LinkedHashMap<>();
+        Map<String, Object> ratio = new LinkedHashMap<>();
+        for (int k = 0; k < 3; k++) {
+            Map<String, Object> e = new LinkedHashMap<>();
+            e.put("median", finite(round(g.medianRelative()[k], 6)));
+            e.put("p95", finite(round(g.p95Relative()[k], 6)));
+            errors.put(GroundCheck.GroundFigures.MOMENTS[k], e);
+            ratio.put(GroundCheck.GroundFigures.MOMENTS[k], finite(round(g.crlbRatio()[k], 3)));
+        }
+        Map<String, Object> m = new LinkedHashMap<>();
+        m.put("groundSpectra", g.spectra());
+        m.put("groundFits", g.fitted());
+        m.put("momentErrors", errors);
+        m.put("crlbRatio", ratio);
+        return m;
+    }
+
+    /** The serial link load of the run's table and parameters at {@code baud} (hardware ICD §6). */
+    public static Map<String, Object> linkMap(BenchConfig config, int baud) {
+        Map<String, Object> m = new LinkedHashMap<>();
+        m.put("baud", baud);
+        boolean warning = false;
+        for (dev.sweepline.sim.serve.LinkBudget b : new dev.sweepline.sim.serve.LinkBudget[] {
+            dev.sweepline.sim.serve.LinkBudget.survey(config.table(), config.parameters(), baud),
+            dev.sweepline.sim.serve.LinkBudget.focus(config.table(), config.parameters(), baud)}) {
+            Map<String, Object> mode = new LinkedHashMap<>();
+            mode.put("stepsPerSecond", round(b.stepsPerSecond(), 2));
+            mode.put("octetsPerSecond", round(b.octetsPerSecond(), 1));
+            mode.put("load", round(b.loadFraction(), 4));
+            m.put(b.mode(), mode);
+            warning |= b.warning();
+        }
+        m.put("warning", warning);
+        return m;
+    }
+
+    /** Prints the ground comparison rows of the summary table. */
+    public static void printGround(GroundCheck.GroundFigures g, PrintStream out) {
+        row(out, "ground fits", g.fitted() + " of " + g.spectra() + " spectra");
+        for (int k = 0; k < 3; k++) {
+            row(out, "error " + GroundCheck.GroundFigures.MOMENTS[k], String.format(Locale.ROOT,
+                    "median %.4f %%, p95 %.4f %%, %.2f x the Cramer-Rao bound", 100 * g.medianRelative()[k],
+                    100 * g.p95Relative()[k], g.crlbRatio()[k]));
         }
     }
 

@@ -1,6 +1,10 @@
 package dev.sweepline.sim.cli;
 
+import dev.sweepline.fsw.exec.FlightConfig;
+import dev.sweepline.ground.product.GroundProcessing;
+import dev.sweepline.ground.product.GroundProducts;
 import dev.sweepline.sim.bench.BenchConfig;
+import dev.sweepline.sim.bench.GroundCheck;
 import dev.sweepline.sim.bench.ClosedLoopBench;
 import dev.sweepline.sim.bench.RunReportWriter;
 import dev.sweepline.sim.scenario.Scenario;
@@ -8,6 +12,10 @@ import dev.sweepline.sim.scenario.ScenarioException;
 import dev.sweepline.sim.scenario.ScenarioLoader;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.nio.file.StandardCopyOption;
+import java.util.LinkedHashMap;
+import java.util.Map;
+import java.util.OptionalDouble;
 import java.util.concurrent.Callable;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
@@ -29,6 +37,10 @@ final class RunCommand implements Callable<Integer> {
 
     @Option(names = "--out", paramLabel = "DIR", description = "Output folder (default: ${DEFAULT-VALUE}).")
     Path out = Path.of("sweepline-out", "run");
+
+    @Option(names = "--baud", paramLabel = "BAUD",
+            description = "Serial line rate the link load is checked against (default: ${DEFAULT-VALUE}).")
+    int baud = 115_200;
 
     @Option(names = "--allocation", paramLabel = "BITS_PER_S",
             description = "Downlink allocation to check the telemetry against, bit/s (default: none).")
@@ -57,9 +69,21 @@ final class RunCommand implements Callable<Integer> {
             result = ClosedLoopBench.run(config, progress, frames);
         }
         RunReportWriter.printTable(result.summary(), System.out);
-        RunReportWriter.write(out, result);
-        System.out.println("wrote " + out.resolve("summary.json") + ", " + out.resolve("decisions.csv") + " and "
-                + out.resolve("telemetry.tm"));
+        // the ground's view: decode and fit what the flight software sent, compare with the truth
+        Path groundDir = out.resolve("ground");
+        GroundProducts ground = GroundProcessing.process(out.resolve("telemetry.tm"), groundDir,
+                allocation != null ? OptionalDouble.of(allocation) : OptionalDouble.empty());
+        GroundCheck.GroundFigures figures = GroundCheck.compare(ground.moments(), result.recorder().sweeps(),
+                result.recorder()::truthAt, new FlightConfig().coarseTimeAtTickZero);
+        Files.copy(groundDir.resolve(GroundProcessing.REPORT), out.resolve("report.html"),
+                StandardCopyOption.REPLACE_EXISTING);
+        Map<String, Object> extra = new LinkedHashMap<>();
+        extra.putAll(RunReportWriter.groundMap(figures));
+        extra.put("linkLoad", RunReportWriter.linkMap(config, baud));
+        RunReportWriter.printGround(figures, System.out);
+        RunReportWriter.write(out, result, extra);
+        System.out.println("wrote " + out.resolve("summary.json") + ", decisions.csv, telemetry.tm, report.html"
+                + " and the ground products in " + groundDir);
         return 0;
     }
 }
