@@ -13,13 +13,13 @@ import dev.sweepline.fsw.telemetry.Crc16;
  *   0   2  marker 0x5354 ("ST")
  *   2   1  format version 1
  *   3   1  reserved, 0
- *   4   2  image length L = 134 + 4 n, octets, CRC included
+ *   4   2  image length L = 138 + 4 n, octets, CRC included
  *   6   2  window count n (1..256)
- *   8  72  sweep parameters, 18 signed 32-bit values in SweepParameters field order
- *  80   2  housekeeping period, seconds (1..3600)
- *  82   2  spectrum decimation (1..256)
- *  84  48  fault settings, monitors 1..6: response (1), retries (1), threshold (2), limit (4)
- * 132  4n  windows: low code (2), high code (2)
+ *   8  76  sweep parameters, 19 signed 32-bit values (order in commands.md §4.1)
+ *  84   2  housekeeping period, seconds (1..3600)
+ *  86   2  spectrum decimation (1..256)
+ *  88  48  fault settings, monitors 1..6: response (1), retries (1), threshold (2), limit (4)
+ * 136  4n  windows: low code (2), high code (2)
  * L-2   2  CRC-16/IBM-3740 over octets 0 .. L-3
  * </pre>
  *
@@ -31,7 +31,7 @@ public final class TableImage {
     /** Format version. */
     public static final int VERSION = 1;
     /** Octets before the windows. */
-    public static final int WINDOWS_AT = 132;
+    public static final int WINDOWS_AT = 136;
     /** Octets of the image besides the windows (header, values, CRC). */
     public static final int FIXED_OCTETS = WINDOWS_AT + 2;
     /** Shortest image (one window). */
@@ -42,9 +42,9 @@ public final class TableImage {
     public static final int CORRUPT = -1;
 
     private static final int PARAMETERS_AT = 8;
-    private static final int HOUSEKEEPING_AT = 80;
-    private static final int DECIMATION_AT = 82;
-    private static final int FAULTS_AT = 84;
+    private static final int HOUSEKEEPING_AT = 84;
+    private static final int DECIMATION_AT = 86;
+    private static final int FAULTS_AT = 88;
     private static final int FAULT_ENTRY_OCTETS = 8;
 
     private TableImage() {
@@ -178,6 +178,7 @@ public final class TableImage {
         p.noiseCountsPerQuadrant = s32(b, i + 60);
         p.significanceSigmas = s32(b, i + 64);
         p.prominenceFractionQ8 = s32(b, i + 68);
+        p.focusEnabled = s32(b, i + 72);
     }
 
     private static void writeParameters(SweepParameters p, byte[] b) {
@@ -200,6 +201,7 @@ public final class TableImage {
         put32(b, i + 60, p.noiseCountsPerQuadrant);
         put32(b, i + 64, p.significanceSigmas);
         put32(b, i + 68, p.prominenceFractionQ8);
+        put32(b, i + 72, p.focusEnabled);
     }
 
     private static int s32(byte[] b, int i) {

@@ -97,10 +97,10 @@ class CommandFuzzTest {
                     return m == 0 || m > 7 ? CommandReason.ARGUMENT_RANGE : CommandReason.OK;
                 }
                 case 0x30:
-                    return u16(b, 11) + args - 2 > 1158 ? CommandReason.ARGUMENT_RANGE : CommandReason.OK;
+                    return u16(b, 11) + args - 2 > 1162 ? CommandReason.ARGUMENT_RANGE : CommandReason.OK;
                 case 0x31: {
                     int l = u16(b, 11);
-                    return l < 138 || l > 1158 ? CommandReason.ARGUMENT_RANGE : CommandReason.OK;
+                    return l < 142 || l > 1162 ? CommandReason.ARGUMENT_RANGE : CommandReason.OK;
                 }
                 case 0x32:
                     return CommandReason.TABLE_NOT_VERIFIED; // random loads never make an intact image
@@ -108,7 +108,7 @@ class CommandFuzzTest {
                     int copy = b[11] & 0xFF;
                     int off = u16(b, 12);
                     int len = u16(b, 14);
-                    int available = copy == 0 ? 646 : 1158; // default image 134 + 4*128; pending buffer
+                    int available = copy == 0 ? 650 : 1162; // default image 138 + 4*128; pending buffer
                     return copy > 1 || len < 1 || len > 192 || off + len > available
                         ? CommandReason.ARGUMENT_RANGE : CommandReason.OK;
                 }

@@ -39,9 +39,9 @@ class TableCommandingTest {
 
     @Test
     void shouldSizeImageAsDocumented() {
-        // commands.md §4.1: L = 134 + 4 n; the CRC is CRC-16/IBM-3740 of octets 0..L-3
+        // commands.md §4.1: L = 138 + 4 n; the CRC is CRC-16/IBM-3740 of octets 0..L-3
         byte[] image = newImage();
-        assertEquals(134 + 4 * 64, image.length);
+        assertEquals(138 + 4 * 64, image.length);
         assertEquals(Crc16.of(image, 0, image.length - 2), TableImage.tableId(image, image.length));
         assertEquals(0x53, image[0]);
         assertEquals(0x54, image[1]);
@@ -138,7 +138,7 @@ class TableCommandingTest {
                 (byte) 0, (byte) 100)));
         // acceptance: 6 + 6 + 14 octets; execution: 6 + 6 + 14 + 5 + 100 (telemetry ICD §9)
         assertEquals(26 + 131, rig.fsw.telemetry().counters().packetOctets(Apid.COMMAND_REPORT) - before);
-        // the default image is 134 + 4 * 128 = 646 octets: a dump past it is out of range
+        // the default image is 138 + 4 * 128 = 650 octets: a dump past it is out of range
         assertEquals(CommandReason.ARGUMENT_RANGE, rig.send(tc.command(CommandCode.TABLE_DUMP, (byte) 0,
                 (byte) 0x02, (byte) 0x30, (byte) 0, (byte) 100)));
     }

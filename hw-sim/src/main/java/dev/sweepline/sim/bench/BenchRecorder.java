@@ -39,6 +39,7 @@ public final class BenchRecorder implements SweepListener, InProcessLink.StepObs
     private final double[][] measuredInformation = new double[3][3];
     private final double[] gradient = new double[3];
     private double informationSeconds;
+    private long informationSteps;
 
     /**
      * @param windows the table's windows as the HV supply makes them
@@ -81,6 +82,12 @@ public final class BenchRecorder implements SweepListener, InProcessLink.StepObs
         ProtonInformation.accumulate(measuredInformation, gradient,
                 ProtonInformation.variance(truth.totalAmps, reply.gainRange, seconds), 1.0);
         informationSeconds += seconds;
+        informationSteps++;
+    }
+
+    /** Steps behind {@link #measuredInformation()}. */
+    public long informationSteps() {
+        return informationSteps;
     }
 
     /** Fisher information of the protons' relative (n, U, w) from every unsaturated step so far. */

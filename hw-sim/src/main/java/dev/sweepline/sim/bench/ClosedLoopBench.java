@@ -72,8 +72,8 @@ public final class ClosedLoopBench {
         if (recorder.informationSeconds() <= 0) {
             return Double.NaN;
         }
-        double stepSeconds = config.parameters().integrationPeriods
-                * dev.sweepline.fsw.link.InstrumentConstants.MODULATION_PERIOD_MICROS / 1e6;
+        // the mean integration per step as flown (a commanded or restored table may differ from the config)
+        double stepSeconds = recorder.informationSeconds() / recorder.informationSteps();
         DOptimalDesign design = new DOptimalDesign(new FaradayCup(config.instrument().cup()), windows);
         return DOptimalDesign.efficiency(recorder.measuredInformation(),
                 design.optimalInformation(midRun, recorder.informationSeconds(), stepSeconds));

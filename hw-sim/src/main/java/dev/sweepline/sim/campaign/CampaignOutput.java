@@ -2,7 +2,10 @@ package dev.sweepline.sim.campaign;
 
 import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.SerializationFeature;
+import dev.sweepline.fsw.command.ParameterTable;
+import dev.sweepline.fsw.command.TableImage;
 import dev.sweepline.fsw.table.SweepParameters;
+import dev.sweepline.fsw.table.WindowTable;
 import java.io.IOException;
 import java.io.Writer;
 import java.nio.file.Files;
@@ -16,12 +19,15 @@ import java.util.Map;
 /**
  * Writes a campaign's results: {@code runs.csv} (every run; a shard writes only this), and for the
  * whole campaign {@code sets.csv}, {@code summary.json} (sets, Pareto front, recommendation) and
- * {@code recommended.yaml} (the recommended sweep parameters as a readable table). Nothing written
+ * {@code recommended.yaml} (the recommended sweep parameters as a readable table) with
+ * {@code recommended.table} (the same as an uplinkable table image). Nothing written
  * depends on the thread count, the shard split or the wall clock.
  */
 public final class CampaignOutput {
     /** File of the run rows. */
     public static final String RUNS = "runs.csv";
+    /** The recommended set as an uplinkable table image (commands.md, table image). */
+    public static final String RECOMMENDED_IMAGE = "recommended.table";
     private static final ObjectMapper JSON = new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT);
 
     private CampaignOutput() {
@@ -96,6 +102,7 @@ public final class CampaignOutput {
         JSON.writeValue(dir.resolve("summary.json").toFile(), summary);
         if (best != null) {
             writeRecommended(dir.resolve("recommended.yaml"), spec, best);
+            Files.write(dir.resolve(RECOMMENDED_IMAGE), recommendedImage(spec, best));
         }
         return best;
     }
@@ -159,6 +166,14 @@ public final class CampaignOutput {
         } catch (IllegalAccessException e) {
             throw new IllegalStateException(e);
         }
+    }
+
+    /** The default windows with the set's sweep parameters, as the table image the table commands load. */
+    public static byte[] recommendedImage(CampaignSpec spec, SetResult set) {
+        ParameterTable t = ParameterTable.of(WindowTable.defaultTable(), spec.parameters(set.set()));
+        byte[] image = new byte[TableImage.MAX_OCTETS];
+        int n = TableImage.encode(t, image);
+        return java.util.Arrays.copyOf(image, n);
     }
 
     private static Object finite(double v) {

@@ -20,6 +20,7 @@ import java.util.Locale;
  * <pre>
  *   2.0  NO_OP
  *   3.0  TABLE_LOGSPACED 64 100 3000 4     # windows, low V, high V, [integration periods]: load+verify+commit
+ *   3.5  TABLE_IMAGE recommended.table     # a table image file (bench tune writes one): load+verify+commit
  *   5.0  SET_MODE SAFE                     # SAFE | SURVEY | FOCUS
  *   5.1  HV_ARM
  *   5.2  HV_ENABLE
@@ -105,6 +106,7 @@ public final class CommandScript {
                     (byte) (off >>> 8), (byte) off, (byte) (len >>> 8), (byte) len}, null, null));
             }
             case "TABLE_LOGSPACED" -> table(at, line, t, out);
+            case "TABLE_IMAGE" -> tableFile(at, line, t, out);
             case "INJECT" -> {
                 need(t, 1, line);
                 String what = t[2].toUpperCase(Locale.ROOT);
@@ -151,6 +153,26 @@ public final class CommandScript {
         }
         byte[] image = new byte[TableImage.MAX_OCTETS];
         int n = TableImage.encode(p, image);
+        loadImage(at, line, image, n, out);
+    }
+
+    /** An image file (as {@code bench tune} writes recommended.table): its loads, verify and commit. */
+    private static void tableFile(long at, int line, String[] t, List<ScriptEntry> out) throws ScriptException {
+        need(t, 1, line);
+        byte[] image;
+        try {
+            image = Files.readAllBytes(Path.of(t[2]));
+        } catch (IOException e) {
+            throw new ScriptException(line, "cannot read table image " + t[2] + ": " + e.getMessage());
+        }
+        if (!TableImage.intact(image, image.length)) {
+            throw new ScriptException(line, t[2] + " is not an intact table image (CRC or length)");
+        }
+        loadImage(at, line, image, image.length, out);
+    }
+
+    /** The loads of {@code n} image octets in pieces, a verify and a commit, all at {@code at}. */
+    private static void loadImage(long at, int line, byte[] image, int n, List<ScriptEntry> out) {
         for (int from = 0; from < n; from += CommandCode.MAX_LOAD_OCTETS) {
             int k = Math.min(CommandCode.MAX_LOAD_OCTETS, n - from);
             byte[] a = new byte[2 + k];

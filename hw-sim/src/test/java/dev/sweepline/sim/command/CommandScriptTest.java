@@ -25,7 +25,7 @@ class CommandScriptTest {
     @Test
     void shouldExpandTableIntoLoadsVerifyAndCommit() throws Exception {
         CommandScript s = CommandScript.parse(List.of("0 TABLE_LOGSPACED 128 50 6000"));
-        // 134 + 4 * 128 = 646 octets in loads of 192: 4 loads, then verify and commit (commands.md §4.1)
+        // 138 + 4 * 128 = 650 octets in loads of 192: 4 loads, then verify and commit (commands.md §4.1)
         assertEquals(6, s.entries().size());
         assertEquals(CommandCode.TABLE_VERIFY, s.entries().get(4).code());
         assertEquals(CommandCode.TABLE_COMMIT, s.entries().get(5).code());

@@ -45,7 +45,7 @@ class CommandedRunTest {
                 "2.0 TABLE_LOGSPACED 64 100 3000 4",
                 "2.5 TABLE_DUMP 0 0 64"), 6, new FileNonVolatileStore(nvm), f -> { });
 
-        // every scripted command accepted: no-op, 3 loads (134 + 4*64 = 390 octets), verify, commit, dump
+        // every scripted command accepted: no-op, 3 loads (138 + 4*64 = 394 octets), verify, commit, dump
         assertEquals(7, run.runner.sent().size());
         assertTrue(run.runner.sent().stream().allMatch(s -> s.reason() == CommandReason.OK), run.runner.sent().toString());
         assertTrue(run.reports.stream().allMatch(CommandReport::ok), run.reports.toString());

@@ -30,11 +30,16 @@ final class HilRig {
 
     /** Flight software configured as the bench configures it, on {@code link}, frames into {@code tm}. */
     static FlightSoftware flightSoftware(BenchConfig config, InstrumentLink link, ByteArrayOutputStream tm) {
+        return new FlightSoftware(flightConfig(config), link, tm::write, SweepListener.NONE);
+    }
+
+    /** The flight configuration of {@code config}, as ClosedLoopBench builds it. */
+    static FlightConfig flightConfig(BenchConfig config) {
         FlightConfig flight = new FlightConfig();
         flight.table = config.table();
         flight.parameters = config.parameters();
         flight.frameLength = config.frameLength();
-        return new FlightSoftware(flight, link, tm::write, SweepListener.NONE);
+        return flight;
     }
 
     /**

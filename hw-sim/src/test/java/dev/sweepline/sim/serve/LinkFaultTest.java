@@ -53,7 +53,12 @@ class LinkFaultTest {
         InstrumentServer server = new InstrumentServer(instrument, faulty, 0);
         FramedInstrumentLink link = new FramedInstrumentLink(ends[0]);
         CheckingLink checking = new CheckingLink(link, instrument);
-        FlightSoftware fsw = HilRig.flightSoftware(config, checking, new ByteArrayOutputStream());
+        // the link layer alone: the fault-protection monitor of link time-outs (which retries on its own)
+        // is switched off, so every safe entry waits for the ground's command below (commands.md §6)
+        dev.sweepline.fsw.exec.FlightConfig flight = HilRig.flightConfig(config);
+        flight.faults.threshold[dev.sweepline.fsw.fault.FaultMonitorId.LINK_TIMEOUT] = 0;
+        FlightSoftware fsw = new FlightSoftware(flight, checking, new ByteArrayOutputStream()::write,
+                dev.sweepline.fsw.sweep.SweepListener.NONE);
         Executive exec = fsw.executive();
 
         long now = 0;

@@ -1,0 +1,32 @@
+package dev.sweepline.fsw.command;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+
+import dev.sweepline.fsw.table.SweepParameters;
+import dev.sweepline.fsw.table.WindowTable;
+import java.lang.reflect.Field;
+import java.lang.reflect.Modifier;
+import org.junit.jupiter.api.Test;
+
+/** Every sweep parameter survives the table image (commands.md §4.1), so a new field cannot be forgotten. */
+class TableImageFieldsTest {
+    @Test
+    void shouldCarryEverySweepParameterThroughTheImage() throws IllegalAccessException {
+        ParameterTable t = ParameterTable.of(WindowTable.defaultTable(), SweepParameters.defaults());
+        int k = 0;
+        for (Field f : SweepParameters.class.getFields()) {
+            if (!Modifier.isStatic(f.getModifiers())) {
+                f.setInt(t.sweep, 1000 + 17 * k++); // distinct values: a swapped pair of fields shows
+            }
+        }
+        byte[] image = new byte[TableImage.MAX_OCTETS];
+        int n = TableImage.encode(t, image);
+        ParameterTable back = new ParameterTable();
+        TableImage.decode(image, n, back);
+        for (Field f : SweepParameters.class.getFields()) {
+            if (!Modifier.isStatic(f.getModifiers())) {
+                assertEquals(f.getInt(t.sweep), f.getInt(back.sweep), f.getName());
+            }
+        }
+    }
+}

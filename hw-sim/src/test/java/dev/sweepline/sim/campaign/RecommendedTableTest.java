@@ -1,0 +1,75 @@
+package dev.sweepline.sim.campaign;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertNotNull;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import dev.sweepline.fsw.command.CommandReason;
+import dev.sweepline.fsw.command.TableImage;
+import dev.sweepline.fsw.exec.FlightConfig;
+import dev.sweepline.fsw.nvm.FileNonVolatileStore;
+import dev.sweepline.fsw.table.SweepParameters;
+import dev.sweepline.fsw.table.WindowTable;
+import dev.sweepline.fsw.telemetry.TelemetryWriter;
+import dev.sweepline.sim.bench.BenchConfig;
+import dev.sweepline.sim.bench.ClosedLoopBench;
+import dev.sweepline.sim.command.CommandScript;
+import dev.sweepline.sim.command.ScriptRunner;
+import dev.sweepline.sim.instrument.InstrumentModel;
+import dev.sweepline.sim.instrument.SimulatedInstrument;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/**
+ * Issue 7: the recommended table, loaded through the table commands and restored by a fresh flight
+ * software from its non-volatile memory, reproduces the metrics the campaign reported for it.
+ */
+class RecommendedTableTest {
+    @TempDir
+    Path dir;
+
+    @Test
+    void shouldReproduceTheReportedMetricsWhenUplinked() throws Exception {
+        CampaignSpec spec = CampaignReader.parse(CampaignDeterminismTest.CAMPAIGN, "small.yaml", null);
+        List<RunRow> rows = CampaignRunner.run(spec, 2, Shard.ALL, CampaignRunner.Progress.NONE);
+        SetResult best = CampaignOutput.writeResults(dir, spec, rows);
+        assertNotNull(best, "the small campaign recommends a set");
+        Path image = dir.resolve(CampaignOutput.RECOMMENDED_IMAGE);
+        byte[] bytes = Files.readAllBytes(image);
+        assertTrue(TableImage.intact(bytes, bytes.length));
+
+        // 1. uplink: load, verify and commit the image by telecommand; the commit writes the NVM file
+        Path nvm = dir.resolve("table.nvm");
+        ScriptRunner uplink = new ScriptRunner(CommandScript.parse(List.of("0.5 TABLE_IMAGE " + image)), true,
+                new FileNonVolatileStore(nvm));
+        ClosedLoopBench.run(BenchConfig.defaults(spec.member(0), 1, 3), ClosedLoopBench.Progress.NONE,
+                (f, off, len) -> { }, uplink);
+        assertTrue(uplink.sent().stream().allMatch(s -> s.reason() == CommandReason.OK), uplink.sent().toString());
+        assertTrue(Files.exists(nvm));
+
+        // 2. a fresh flight software with the default configuration restores the table at start-up
+        List<RunRow> flown = new ArrayList<>();
+        for (int run = 0; run < spec.runsPerSet(); run++) {
+            BenchConfig config = new BenchConfig(spec.member(run), spec.runSeed(run), spec.durationSeconds(),
+                    WindowTable.defaultTable(), SweepParameters.defaults(), InstrumentModel.demo(),
+                    TelemetryWriter.DEFAULT_FRAME_LENGTH, spec.allocationBitsPerSecond(), true);
+            ClosedLoopBench.CycleHook restore = new ClosedLoopBench.CycleHook() {
+                @Override
+                public void configure(FlightConfig flight, SimulatedInstrument instrument) {
+                    flight.nonVolatileStore = new FileNonVolatileStore(nvm);
+                }
+            };
+            flown.add(RunRow.of(best.set(), run, ClosedLoopBench.run(config, ClosedLoopBench.Progress.NONE,
+                    (f, off, len) -> { }, restore).summary()));
+        }
+        // the same seeds and the same table: every metric of every run equals the campaign's row
+        for (int run = 0; run < spec.runsPerSet(); run++) {
+            RunRow reported = rows.get(best.set() * spec.runsPerSet() + run);
+            assertEquals(reported, flown.get(run), "run " + run);
+        }
+    }
+}
