@@ -2,10 +2,13 @@ package dev.sweepline.ground.cli;
 
 import dev.sweepline.ground.product.GroundProcessing;
 import dev.sweepline.ground.product.GroundProducts;
+import dev.sweepline.ground.spectrum.WindowCatalogue;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
 import java.util.OptionalDouble;
 import java.util.concurrent.Callable;
 import picocli.CommandLine.Command;
@@ -29,6 +32,10 @@ final class DecodeCommand implements Callable<Integer> {
 
     @Option(names = "--out", required = true, paramLabel = "DIR", description = "Output directory (created).")
     Path out;
+
+    @Option(names = "--table", paramLabel = "IMAGE",
+            description = "An uplinked table image (commands.md §4.1), so its spectra get window edges; repeatable.")
+    List<Path> tables = new ArrayList<>();
 
     @Option(names = "--allocation", paramLabel = "BITS_PER_S",
             description = "Downlink allocation to compare the frame bit rate with in report.html.")
@@ -54,8 +61,16 @@ final class DecodeCommand implements Callable<Integer> {
         }
         GroundProducts p;
         try {
+            WindowCatalogue windows = new WindowCatalogue();
+            for (Path t : tables) {
+                if (windows.add(Files.readAllBytes(t)) < 0) {
+                    System.err.println(t + ": not an intact table image");
+                    return ExitCodes.UNREADABLE_INPUT;
+                }
+            }
             p = GroundProcessing.process(input, out,
-                    allocation == null ? OptionalDouble.empty() : OptionalDouble.of(allocation), options.config());
+                    allocation == null ? OptionalDouble.empty() : OptionalDouble.of(allocation), options.config(),
+                    windows);
         } catch (NoSuchFileException e) {
             spec.commandLine().getErr().println("cannot read " + input + ": " + e.getMessage());
             return ExitCodes.UNREADABLE_INPUT;

@@ -34,8 +34,14 @@ public final class TelemetryDecoder {
      * @param listener receives everything found
      */
     public TelemetryDecoder(DecoderConfig config, QuadrantDecompressor ccsds121, DecodeListener listener) {
+        this(config, ccsds121, new dev.sweepline.ground.spectrum.WindowCatalogue(), listener);
+    }
+
+    /** As above, with the window tables of {@code windows} (uplinked tables by id). */
+    public TelemetryDecoder(DecoderConfig config, QuadrantDecompressor ccsds121,
+            dev.sweepline.ground.spectrum.WindowCatalogue windows, DecodeListener listener) {
         this.listener = listener;
-        this.spectra = new SpectrumPacketDecoder(ccsds121);
+        this.spectra = new SpectrumPacketDecoder(ccsds121, windows);
         this.demux = new VirtualChannelDemux(new Packets());
         this.sync = new FrameSynchroniser(config.frameOctets(), config.scid(), new Frames());
     }

@@ -7,6 +7,7 @@ import dev.sweepline.ground.decode.DecodeListener;
 import dev.sweepline.ground.decode.DecoderConfig;
 import dev.sweepline.ground.decode.TelemetryDecoder;
 import dev.sweepline.ground.spectrum.Ccsds121QuadrantDecoder;
+import dev.sweepline.ground.spectrum.WindowCatalogue;
 import dev.sweepline.ground.spectrum.DecodedSpectrum;
 import java.io.IOException;
 import java.io.InputStream;
@@ -65,13 +66,19 @@ public final class GroundProcessing {
      */
     public static GroundProducts process(Path telemetryFile, Path outDir, OptionalDouble allocationBitsPerS,
             DecoderConfig config) throws IOException {
+        return process(telemetryFile, outDir, allocationBitsPerS, config, new WindowCatalogue());
+    }
+
+    /** As above, with the window tables of {@code windows} (uplinked table images, by table id). */
+    public static GroundProducts process(Path telemetryFile, Path outDir, OptionalDouble allocationBitsPerS,
+            DecoderConfig config, WindowCatalogue windows) throws IOException {
         Files.createDirectories(outDir);
         FitCollector fits = new FitCollector();
         TelemetryDecoder decoder;
         long octets = 0;
         try (Writer w = Files.newBufferedWriter(outDir.resolve(SPECTRA), StandardCharsets.UTF_8);
                 SpectraCsvWriter csv = new SpectraCsvWriter(w)) {
-            decoder = new TelemetryDecoder(config, new Ccsds121QuadrantDecoder(), new Both(csv, fits));
+            decoder = new TelemetryDecoder(config, new Ccsds121QuadrantDecoder(), windows, new Both(csv, fits));
             byte[] chunk = new byte[CHUNK_OCTETS];
             try (InputStream in = Files.newInputStream(telemetryFile)) {
                 for (int n = in.read(chunk); n >= 0; n = in.read(chunk)) {

@@ -39,11 +39,18 @@ public final class SpectrumPacketDecoder {
     static final int FIXED_OCTETS = 14;
 
     private final QuadrantDecompressor ccsds121;
+    private final WindowCatalogue windows;
     private final int[] scratch = new int[QuadrantDecompressor.paddedCount(MAX_WINDOWS)];
 
     /** @param ccsds121 decoder for compression 0x01 ({@link QuadrantDecompressor#UNAVAILABLE} if none) */
     public SpectrumPacketDecoder(QuadrantDecompressor ccsds121) {
+        this(ccsds121, new WindowCatalogue());
+    }
+
+    /** A decoder that takes window edges from {@code windows} (built-in and registered uplinked tables). */
+    public SpectrumPacketDecoder(QuadrantDecompressor ccsds121, WindowCatalogue windows) {
         this.ccsds121 = ccsds121;
+        this.windows = windows;
     }
 
     /** True for the two spectrum APIDs. */
@@ -136,14 +143,13 @@ public final class SpectrumPacketDecoder {
                 tableId, first, c, peak, periods, compression, gain, sat, adc));
     }
 
-    private static DecodedSpectrum build(CucTime time, int apid, int seq, int mode, int flags, int sweep,
+    private DecodedSpectrum build(CucTime time, int apid, int seq, int mode, int flags, int sweep,
             int tableId, int first, int c, int peak, int periods, int compression, int[] gain, boolean[] sat,
             int[][] adc) {
         double[][] amps = new double[DecodedSpectrum.QUADRANTS][c];
         double[] total = new double[c];
         double[] low = new double[c];
         double[] high = new double[c];
-        boolean defaultTable = tableId == DefaultWindowTable.TABLE_ID;
         for (int i = 0; i < c; i++) {
             double sum = 0;
             for (int q = 0; q < DecodedSpectrum.QUADRANTS; q++) {
@@ -152,8 +158,8 @@ public final class SpectrumPacketDecoder {
                 sum += a;
             }
             total[i] = sum;
-            low[i] = defaultTable ? DefaultWindowTable.lowVolts(first + i) : Double.NaN;
-            high[i] = defaultTable ? DefaultWindowTable.highVolts(first + i) : Double.NaN;
+            low[i] = windows.lowVolts(tableId, first + i);
+            high[i] = windows.highVolts(tableId, first + i);
         }
         return new DecodedSpectrum(time, apid, seq, mode, (flags & 0x80) != 0, (flags & 0x40) != 0, sweep,
                 tableId, first, c, peak, periods, compression, gain, sat, adc, amps, total, low, high);

@@ -7,6 +7,7 @@ import dev.sweepline.ground.decode.TelemetryDecoder;
 import dev.sweepline.ground.product.FitCollector;
 import dev.sweepline.ground.product.MomentRecord;
 import dev.sweepline.ground.spectrum.Ccsds121QuadrantDecoder;
+import dev.sweepline.ground.spectrum.WindowCatalogue;
 import dev.sweepline.sim.physics.PhysicalConstants;
 import dev.sweepline.sim.plasma.IonPopulation;
 import dev.sweepline.sim.plasma.PlasmaState;
@@ -26,9 +27,18 @@ import java.util.function.LongFunction;
  */
 public final class GroundCheck {
     private final FitCollector fits = new FitCollector();
-    private final TelemetryDecoder decoder = new TelemetryDecoder(DecoderConfig.icdDefaults(),
-            new Ccsds121QuadrantDecoder(), fits);
+    private final TelemetryDecoder decoder;
     private final long coarseAtTickZero = new FlightConfig().coarseTimeAtTickZero;
+
+    /** A check that knows the built-in window table. */
+    public GroundCheck() {
+        this(new WindowCatalogue());
+    }
+
+    /** A check that also knows the uplinked tables of {@code windows}. */
+    public GroundCheck(WindowCatalogue windows) {
+        decoder = new TelemetryDecoder(DecoderConfig.icdDefaults(), new Ccsds121QuadrantDecoder(), windows, fits);
+    }
 
     /** Where the run's frames go. */
     public FrameSink frames() {

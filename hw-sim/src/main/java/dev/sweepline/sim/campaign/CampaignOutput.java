@@ -28,6 +28,7 @@ public final class CampaignOutput {
     public static final String RUNS = "runs.csv";
     /** The recommended set as an uplinkable table image (commands.md, table image). */
     public static final String RECOMMENDED_IMAGE = "recommended.table";
+    private static final String[] MOMENTS = {"n", "U", "T"};
     private static final ObjectMapper JSON = new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT);
 
     private CampaignOutput() {
@@ -126,6 +127,15 @@ public final class CampaignOutput {
         m.put("bitsPerSecondMax", s.bitsPerSecondMax());
         m.put("integratingFraction", s.integratingFraction());
         m.put("informationEfficiency", finite(s.informationEfficiency()));
+        Map<String, Object> err = new LinkedHashMap<>();
+        Map<String, Object> crlb = new LinkedHashMap<>();
+        for (int k = 0; k < 3; k++) {
+            err.put(MOMENTS[k], finite(s.momentError()[k]));
+            crlb.put(MOMENTS[k], finite(s.crlbRatio()[k]));
+        }
+        m.put("momentErrorMedian", err);
+        m.put("crlbRatio", crlb);
+        m.put("accuracy", finite(s.accuracy()));
         m.put("paretoFront", onFront);
         return m;
     }
@@ -135,16 +145,18 @@ public final class CampaignOutput {
         try (Writer w = Files.newBufferedWriter(file)) {
             w.write("set," + String.join(",", spec.axisKeys()) + ",runs,lockFractionMean,lockFractionMin,alphaLocks,"
                     + "reacquireSweepsMax,reacquireSecondsMax,spectraPerSecond,bitsPerSecondMean,bitsPerSecondMax,"
-                    + "integratingFraction,informationEfficiency,paretoFront\n");
+                    + "integratingFraction,informationEfficiency,errorN,errorU,errorT,crlbRatioN,crlbRatioU,crlbRatioT,"
+                    + "paretoFront\n");
             for (SetResult s : sets) {
                 StringBuilder b = new StringBuilder().append(s.set());
                 for (double v : s.values()) {
                     b.append(',').append(v);
                 }
-                b.append(String.format(Locale.ROOT, ",%d,%s,%s,%d,%d,%s,%s,%s,%s,%s,%s,%b%n", s.runs(),
+                b.append(String.format(Locale.ROOT, ",%d,%s,%s,%d,%d,%s,%s,%s,%s,%s,%s,%s,%s,%s,%s,%s,%s,%b%n", s.runs(),
                         s.lockFractionMean(), s.lockFractionMin(), s.alphaLocks(), s.reacquireSweepsMax(),
                         s.reacquireSecondsMax(), s.spectraPerSecond(), s.bitsPerSecondMean(), s.bitsPerSecondMax(),
-                        s.integratingFraction(), s.informationEfficiency(), front.contains(s)));
+                        s.integratingFraction(), s.informationEfficiency(), s.momentError()[0], s.momentError()[1],
+                        s.momentError()[2], s.crlbRatio()[0], s.crlbRatio()[1], s.crlbRatio()[2], front.contains(s)));
                 w.write(b.toString());
             }
         }
@@ -158,6 +170,9 @@ public final class CampaignOutput {
             w.write(String.format(Locale.ROOT, "# over %d runs: lock fraction mean %.4f (worst %.4f), %.3f spectra/s, "
                     + "%.0f bit/s mean (%.0f worst)%n", best.runs(), best.lockFractionMean(), best.lockFractionMin(),
                     best.spectraPerSecond(), best.bitsPerSecondMean(), best.bitsPerSecondMax()));
+            w.write(String.format(Locale.ROOT, "# median relative errors n %.4f %%, U %.4f %%, T %.4f %%; D-efficiency %.3f%n",
+                    100 * best.momentError()[0], 100 * best.momentError()[1], 100 * best.momentError()[2],
+                    best.informationEfficiency()));
             for (java.lang.reflect.Field f : SweepParameters.class.getFields()) {
                 if (!java.lang.reflect.Modifier.isStatic(f.getModifiers())) {
                     w.write(f.getName() + ": " + f.getInt(p) + "\n");

@@ -4,6 +4,7 @@ import dev.sweepline.fsw.table.WindowTable;
 import dev.sweepline.fsw.telemetry.TelemetryWriter;
 import dev.sweepline.sim.bench.BenchConfig;
 import dev.sweepline.sim.bench.ClosedLoopBench;
+import dev.sweepline.sim.bench.GroundCheck;
 import dev.sweepline.sim.instrument.InstrumentModel;
 import java.util.ArrayList;
 import java.util.List;
@@ -76,6 +77,9 @@ public final class CampaignRunner {
         BenchConfig config = new BenchConfig(spec.member(run), spec.runSeed(run), spec.durationSeconds(),
                 WindowTable.defaultTable(), spec.parameters(set), InstrumentModel.demo(),
                 TelemetryWriter.DEFAULT_FRAME_LENGTH, spec.allocationBitsPerSecond(), true);
-        return RunRow.of(set, run, ClosedLoopBench.run(config, ClosedLoopBench.Progress.NONE).summary());
+        GroundCheck ground = new GroundCheck();
+        ClosedLoopBench.Result r = ClosedLoopBench.run(config, ClosedLoopBench.Progress.NONE,
+                ClosedLoopBench.Hooks.NONE.withFrames(ground.frames()));
+        return RunRow.of(set, run, r.summary(), ground.compare(r.recorder().sweeps(), r.recorder()::truthAt));
     }
 }

@@ -4,7 +4,8 @@ import java.util.ArrayList;
 import java.util.List;
 
 /**
- * The sets no other set beats on every objective at once: accuracy (miss fraction, lower better),
+ * The sets no other set beats on every objective at once: accuracy (the mean median relative error of
+ * the ground's n, U, T against the truth; lower better),
  * telemetry rate (bits per second, lower better) and cadence (spectra per second, higher better).
  */
 public final class ParetoFront {
@@ -31,9 +32,9 @@ public final class ParetoFront {
 
     /** True when {@code b} is no worse than {@code a} on every objective and better on one. */
     static boolean dominates(SetResult b, SetResult a) {
-        boolean noWorse = b.missFraction() <= a.missFraction() && b.bitsPerSecondMean() <= a.bitsPerSecondMean()
+        boolean noWorse = !(b.accuracy() > a.accuracy()) && b.bitsPerSecondMean() <= a.bitsPerSecondMean()
                 && b.spectraPerSecond() >= a.spectraPerSecond();
-        boolean better = b.missFraction() < a.missFraction() || b.bitsPerSecondMean() < a.bitsPerSecondMean()
+        boolean better = b.accuracy() < a.accuracy() || b.bitsPerSecondMean() < a.bitsPerSecondMean()
                 || b.spectraPerSecond() > a.spectraPerSecond();
         return noWorse && better;
     }
@@ -41,7 +42,7 @@ public final class ParetoFront {
     /**
      * The recommended set: on the front, no alpha lock, every jump reacquired, the worst run's lock
      * fraction at least 0.99 and the worst run within the allocation (when one is given); among those
-     * the highest cadence, then the fewest bits. Null when no set qualifies.
+     * the best accuracy, then the fewest bits. Null when no set qualifies.
      */
     public static SetResult recommend(List<SetResult> front, double allocationBitsPerSecond) {
         SetResult best = null;
@@ -52,8 +53,8 @@ public final class ParetoFront {
             if (!fits || !sound) {
                 continue;
             }
-            if (best == null || s.spectraPerSecond() > best.spectraPerSecond()
-                    || (s.spectraPerSecond() == best.spectraPerSecond() && s.bitsPerSecondMean() < best.bitsPerSecondMean())) {
+            if (best == null || s.accuracy() < best.accuracy()
+                    || (s.accuracy() == best.accuracy() && s.bitsPerSecondMean() < best.bitsPerSecondMean())) {
                 best = s;
             }
         }

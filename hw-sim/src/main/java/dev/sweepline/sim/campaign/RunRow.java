@@ -1,6 +1,7 @@
 package dev.sweepline.sim.campaign;
 
 import dev.sweepline.fsw.sweep.SweepMode;
+import dev.sweepline.sim.bench.GroundCheck;
 import dev.sweepline.sim.bench.RunSummary;
 import java.util.Locale;
 
@@ -19,38 +20,65 @@ import java.util.Locale;
  * @param bitsPerSecond       telemetry frames, bits per second
  * @param integratingFraction integration time over all time
  * @param informationEfficiency D-efficiency against the D-optimal design (NaN if undefined)
+ * @param momentError         median relative errors of the ground's n, U, T against the truth
+ * @param crlbRatio           rms of (fit - truth) / Cramér-Rao bound of n, U, T
  */
 public record RunRow(int set, int run, double lockFraction, int alphaLocks, int reacquireSweeps,
         double reacquireSeconds, double spectraPerSecond, double bitsPerSecond, double integratingFraction,
-        double informationEfficiency) {
+        double informationEfficiency, double[] momentError, double[] crlbRatio) {
 
     /** CSV header, matching {@link #toCsv()}. */
     public static final String HEADER = "set,run,lockFraction,alphaLocks,reacquireSweeps,reacquireSeconds,"
-            + "spectraPerSecond,bitsPerSecond,integratingFraction,informationEfficiency";
+            + "spectraPerSecond,bitsPerSecond,integratingFraction,informationEfficiency,errorN,errorU,errorT,"
+            + "crlbRatioN,crlbRatioU,crlbRatioT";
+    private static final int FIELDS = 16;
 
-    /** The row of a finished run. */
-    static RunRow of(int set, int run, RunSummary s) {
+    /** Mean of the three median relative moment errors: the accuracy objective (lower is better). */
+    public double accuracy() {
+        return (momentError[0] + momentError[1] + momentError[2]) / 3;
+    }
+
+    @Override
+    public boolean equals(Object o) {
+        return o instanceof RunRow r && toCsv().equals(r.toCsv());
+    }
+
+    @Override
+    public int hashCode() {
+        return toCsv().hashCode();
+    }
+
+    @Override
+    public String toString() {
+        return "RunRow[" + HEADER + " = " + toCsv() + "]";
+    }
+
+    /** The row of a finished run, with the ground's figures. */
+    static RunRow of(int set, int run, RunSummary s, GroundCheck.GroundFigures g) {
         double cadence = s.spectraPerSecond().get(SweepMode.SURVEY) + s.spectraPerSecond().get(SweepMode.FOCUS);
         return new RunRow(set, run, s.lockFraction(), s.alphaLocks(), s.reacquireSweepsMax(),
                 s.reacquireSecondsMax(), cadence, s.telemetry().frameBitsPerSecond(), s.integratingFraction(),
-                s.informationEfficiency());
+                s.informationEfficiency(), g.medianRelative().clone(), g.crlbRatio().clone());
     }
 
     /** One CSV line (no newline). */
     public String toCsv() {
-        return String.format(Locale.ROOT, "%d,%d,%s,%d,%d,%s,%s,%s,%s,%s", set, run, lockFraction, alphaLocks,
-                reacquireSweeps, reacquireSeconds, spectraPerSecond, bitsPerSecond, integratingFraction,
-                informationEfficiency);
+        return String.format(Locale.ROOT, "%d,%d,%s,%d,%d,%s,%s,%s,%s,%s,%s,%s,%s,%s,%s,%s", set, run, lockFraction,
+                alphaLocks, reacquireSweeps, reacquireSeconds, spectraPerSecond, bitsPerSecond, integratingFraction,
+                informationEfficiency, momentError[0], momentError[1], momentError[2], crlbRatio[0], crlbRatio[1],
+                crlbRatio[2]);
     }
 
     /** Parses a line written by {@link #toCsv()}. */
     public static RunRow parse(String line) {
         String[] f = line.split(",", -1);
-        if (f.length != 10) {
-            throw new IllegalArgumentException("expected 10 fields, got " + f.length + ": " + line);
+        if (f.length != FIELDS) {
+            throw new IllegalArgumentException("expected " + FIELDS + " fields, got " + f.length + ": " + line);
         }
         return new RunRow(Integer.parseInt(f[0]), Integer.parseInt(f[1]), Double.parseDouble(f[2]),
                 Integer.parseInt(f[3]), Integer.parseInt(f[4]), Double.parseDouble(f[5]), Double.parseDouble(f[6]),
-                Double.parseDouble(f[7]), Double.parseDouble(f[8]), Double.parseDouble(f[9]));
+                Double.parseDouble(f[7]), Double.parseDouble(f[8]), Double.parseDouble(f[9]),
+                new double[] {Double.parseDouble(f[10]), Double.parseDouble(f[11]), Double.parseDouble(f[12])},
+                new double[] {Double.parseDouble(f[13]), Double.parseDouble(f[14]), Double.parseDouble(f[15])});
     }
 }

@@ -19,14 +19,22 @@ import java.util.List;
  * @param bitsPerSecondMax    highest telemetry rate of a run
  * @param integratingFraction mean integrating fraction
  * @param informationEfficiency mean D-efficiency against the D-optimal design, over runs where it is defined
+ * @param momentError         mean over runs of the median relative errors of n, U, T
+ * @param crlbRatio           mean over runs of the CRLB ratios of n, U, T
  */
 public record SetResult(int set, double[] values, int runs, double lockFractionMean, double lockFractionMin,
         int alphaLocks, int reacquireSweepsMax, double reacquireSecondsMax, double spectraPerSecond,
-        double bitsPerSecondMean, double bitsPerSecondMax, double integratingFraction, double informationEfficiency) {
+        double bitsPerSecondMean, double bitsPerSecondMax, double integratingFraction, double informationEfficiency,
+        double[] momentError, double[] crlbRatio) {
 
-    /** Fraction of focus sweeps that missed the proton peak: the accuracy objective (lower is better). */
+    /** Fraction of focus sweeps that missed the proton peak. */
     public double missFraction() {
         return 1 - lockFractionMean;
+    }
+
+    /** The accuracy objective (lower is better): the mean of the median relative errors of n, U and T. */
+    public double accuracy() {
+        return (momentError[0] + momentError[1] + momentError[2]) / 3;
     }
 
     /** Aggregates {@code rows} (any order) into one result per set, in set order. */
@@ -60,7 +68,21 @@ public record SetResult(int set, double[] values, int runs, double lockFractionM
         double integrating = 0;
         double efficiency = 0;
         int efficiencyRuns = 0;
+        double[] error = new double[3];
+        double[] ratio = new double[3];
+        int[] errorRuns = new int[3];
+        int[] ratioRuns = new int[3];
         for (RunRow r : runs) {
+            for (int k = 0; k < 3; k++) {
+                if (Double.isFinite(r.momentError()[k])) {
+                    error[k] += r.momentError()[k];
+                    errorRuns[k]++;
+                }
+                if (Double.isFinite(r.crlbRatio()[k])) {
+                    ratio[k] += r.crlbRatio()[k];
+                    ratioRuns[k]++;
+                }
+            }
             if (!Double.isNaN(r.informationEfficiency())) {
                 efficiency += r.informationEfficiency();
                 efficiencyRuns++;
@@ -81,6 +103,15 @@ public record SetResult(int set, double[] values, int runs, double lockFractionM
         int n = Math.max(1, runs.size());
         return new SetResult(set, values, runs.size(), lockRuns == 0 ? Double.NaN : lockSum / lockRuns, lockMin,
                 alpha, reacqSweeps, reacqSeconds, cadence / n, bits / n, bitsMax, integrating / n,
-                efficiencyRuns == 0 ? Double.NaN : efficiency / efficiencyRuns);
+                efficiencyRuns == 0 ? Double.NaN : efficiency / efficiencyRuns, mean(error, errorRuns),
+                mean(ratio, ratioRuns));
+    }
+
+    private static double[] mean(double[] sum, int[] count) {
+        double[] m = new double[sum.length];
+        for (int k = 0; k < m.length; k++) {
+            m[k] = count[k] == 0 ? Double.NaN : sum[k] / count[k];
+        }
+        return m;
     }
 }

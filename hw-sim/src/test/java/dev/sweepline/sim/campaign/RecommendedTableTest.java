@@ -13,6 +13,8 @@ import dev.sweepline.fsw.table.WindowTable;
 import dev.sweepline.fsw.telemetry.TelemetryWriter;
 import dev.sweepline.sim.bench.BenchConfig;
 import dev.sweepline.sim.bench.ClosedLoopBench;
+import dev.sweepline.ground.spectrum.WindowCatalogue;
+import dev.sweepline.sim.bench.GroundCheck;
 import dev.sweepline.sim.command.CommandScript;
 import dev.sweepline.sim.command.ScriptRunner;
 import dev.sweepline.sim.instrument.InstrumentModel;
@@ -63,8 +65,14 @@ class RecommendedTableTest {
                     flight.nonVolatileStore = new FileNonVolatileStore(nvm);
                 }
             };
-            flown.add(RunRow.of(best.set(), run, ClosedLoopBench.run(config, ClosedLoopBench.Progress.NONE,
-                    (f, off, len) -> { }, restore).summary()));
+            // the ground learns the uplinked table's windows from the same image file (by its table id)
+            WindowCatalogue windows = new WindowCatalogue();
+            assertEquals(TableImage.tableId(bytes, bytes.length), windows.add(bytes));
+            GroundCheck ground = new GroundCheck(windows);
+            ClosedLoopBench.Result r = ClosedLoopBench.run(config, ClosedLoopBench.Progress.NONE,
+                    ClosedLoopBench.Hooks.NONE.withFrames(ground.frames()).withCycle(restore));
+            flown.add(RunRow.of(best.set(), run, r.summary(), ground.compare(r.recorder().sweeps(),
+                    r.recorder()::truthAt)));
         }
         // the same seeds and the same table: every metric of every run equals the campaign's row
         for (int run = 0; run < spec.runsPerSet(); run++) {
