@@ -24,7 +24,9 @@ import java.util.function.LongFunction;
  * and every sweep decision, with the scenario's true peaks placed beside each sweep.
  */
 public final class BenchRecorder implements SweepListener, InProcessLink.StepObserver {
-    private final WindowVolts windows;
+    private WindowVolts windows;
+    private dev.sweepline.fsw.sweep.SweepScheduler scheduler;
+    private dev.sweepline.sim.hv.HvCalibration calibration;
     private final FaradayCup cup;
     private final LongFunction<PlasmaState> truthAt;
     private final SweepListener next;
@@ -106,9 +108,21 @@ public final class BenchRecorder implements SweepListener, InProcessLink.StepObs
         next.onSweepComplete(spectrum, nowMicros);
     }
 
+    /**
+     * Places the truth on the windows of the scheduler's active table from now on, so that a table
+     * commanded or restored from non-volatile memory is judged on its own windows.
+     */
+    public void follow(dev.sweepline.fsw.sweep.SweepScheduler activeTable, dev.sweepline.sim.hv.HvCalibration hv) {
+        this.scheduler = activeTable;
+        this.calibration = hv;
+    }
+
     private void record(Spectrum spectrum) {
         if (spectrum.count() == 0) {
             return;
+        }
+        if (scheduler != null && !windows.matches(scheduler, calibration)) {
+            windows = new WindowVolts(scheduler, calibration);
         }
         int saturated = 0;
         for (int i = 0; i < spectrum.count(); i++) {

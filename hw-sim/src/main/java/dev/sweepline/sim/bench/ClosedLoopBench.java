@@ -151,6 +151,7 @@ public final class ClosedLoopBench {
         flight.compressSpectra = config.compressSpectra();
         hooks.cycle().configure(flight, instrument);
         FlightSoftware fsw = new FlightSoftware(flight, link, hooks.frames(), recorder);
+        recorder.follow(fsw.scheduler(), config.instrument().calibration());
         hooks.cycle().afterBuild(fsw);
 
         long wallStart = System.nanoTime();

@@ -22,6 +22,25 @@ public final class WindowVolts {
         }
     }
 
+    /** The windows of the scheduler's active table (it changes when a table is commanded or restored). */
+    public WindowVolts(dev.sweepline.fsw.sweep.SweepScheduler scheduler, HvCalibration calibration) {
+        int n = scheduler.windowCount();
+        lowVolts = new double[n];
+        highVolts = new double[n];
+        for (int w = 0; w < n; w++) {
+            lowVolts[w] = calibration.volts(scheduler.dacLow(w));
+            highVolts[w] = calibration.volts(scheduler.dacHigh(w));
+        }
+    }
+
+    /** True when these are the windows of the scheduler's active table. */
+    boolean matches(dev.sweepline.fsw.sweep.SweepScheduler scheduler, HvCalibration calibration) {
+        int n = scheduler.windowCount();
+        return n == lowVolts.length && lowVolts[0] == calibration.volts(scheduler.dacLow(0))
+                && highVolts[n - 1] == calibration.volts(scheduler.dacHigh(n - 1))
+                && lowVolts[n / 2] == calibration.volts(scheduler.dacLow(n / 2));
+    }
+
     /** Number of windows. */
     public int count() {
         return lowVolts.length;

@@ -105,6 +105,7 @@ public final class CampaignOutput {
             writeRecommended(dir.resolve("recommended.yaml"), spec, best);
             Files.write(dir.resolve(RECOMMENDED_IMAGE), recommendedImage(spec, best));
         }
+        CampaignReport.write(dir, spec, sets, front, best);
         return best;
     }
 

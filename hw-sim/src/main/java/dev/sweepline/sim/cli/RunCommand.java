@@ -5,6 +5,13 @@ import dev.sweepline.ground.product.GroundProcessing;
 import dev.sweepline.ground.product.GroundProducts;
 import dev.sweepline.sim.bench.BenchConfig;
 import dev.sweepline.sim.bench.GroundCheck;
+import dev.sweepline.ground.decode.DecoderConfig;
+import dev.sweepline.ground.spectrum.WindowCatalogue;
+import dev.sweepline.sim.command.CommandScript;
+import dev.sweepline.sim.command.ScriptException;
+import dev.sweepline.sim.command.ScriptRunner;
+import dev.sweepline.fsw.nvm.FileNonVolatileStore;
+import java.util.List;
 import dev.sweepline.sim.bench.ClosedLoopBench;
 import dev.sweepline.sim.bench.RunReportWriter;
 import dev.sweepline.sim.scenario.Scenario;
@@ -38,6 +45,17 @@ final class RunCommand implements Callable<Integer> {
     @Option(names = "--out", paramLabel = "DIR", description = "Output folder (default: ${DEFAULT-VALUE}).")
     Path out = Path.of("sweepline-out", "run");
 
+    @Option(names = "--commands", paramLabel = "SCRIPT",
+            description = "Time-tagged telecommands (and fault injections) to send during the run (commands.md §7).")
+    Path commands;
+
+    @Option(names = "--nvm", paramLabel = "FILE",
+            description = "File standing for the flight software's non-volatile memory (tables survive restarts).")
+    Path nvm;
+
+    @Option(names = "--no-auth", description = "Switch command authentication off (quick runs; the default is on).")
+    boolean noAuth;
+
     @Option(names = "--baud", paramLabel = "BAUD",
             description = "Serial line rate the link load is checked against (default: ${DEFAULT-VALUE}).")
     int baud = 115_200;
@@ -62,17 +80,42 @@ final class RunCommand implements Callable<Integer> {
         }
         BenchConfig config = BenchConfig.defaults(sc, seed, seconds)
                 .withAllocation(allocation != null ? allocation : Double.NaN);
+        ScriptRunner script = null;
+        CommandScript parsed = null;
+        if (commands != null || nvm != null) {
+            try {
+                parsed = commands == null ? CommandScript.parse(List.of()) : CommandScript.read(commands);
+                script = new ScriptRunner(parsed, !noAuth, nvm == null ? null : new FileNonVolatileStore(nvm));
+            } catch (ScriptException e) {
+                System.err.println("command script error: " + commands + ":" + e.getMessage());
+                return 2;
+            }
+        }
+        // the ground knows the built-in table, the one restored from the NVM file and those the script uplinks
+        WindowCatalogue windows = new WindowCatalogue();
+        if (nvm != null && Files.isRegularFile(nvm)) {
+            windows.add(Files.readAllBytes(nvm));
+        }
+        if (commands != null) {
+            parsed.images().forEach(windows::add);
+        }
         Files.createDirectories(out);
         ClosedLoopBench.Result result;
         try (ConsoleProgress progress = new ConsoleProgress("run " + sc.name());
                 FrameFile frames = new FrameFile(out.resolve("telemetry.tm"))) {
-            result = ClosedLoopBench.run(config, progress, frames);
+            result = ClosedLoopBench.run(config, progress, frames,
+                    script == null ? ClosedLoopBench.CycleHook.NONE : script);
+        }
+        if (script != null) {
+            long refused = script.sent().stream().filter(x -> x.reason() != 0).count();
+            System.out.println("commands: " + script.sent().size() + " sent, " + refused + " refused");
         }
         RunReportWriter.printTable(result.summary(), System.out);
         // the ground's view: decode and fit what the flight software sent, compare with the truth
         Path groundDir = out.resolve("ground");
         GroundProducts ground = GroundProcessing.process(out.resolve("telemetry.tm"), groundDir,
-                allocation != null ? OptionalDouble.of(allocation) : OptionalDouble.empty());
+                allocation != null ? OptionalDouble.of(allocation) : OptionalDouble.empty(),
+                DecoderConfig.autoLength(), windows);
         GroundCheck.GroundFigures figures = GroundCheck.compare(ground.moments(), result.recorder().sweeps(),
                 result.recorder()::truthAt, new FlightConfig().coarseTimeAtTickZero);
         Files.copy(groundDir.resolve(GroundProcessing.REPORT), out.resolve("report.html"),

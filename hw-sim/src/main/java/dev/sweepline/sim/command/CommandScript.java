@@ -32,9 +32,16 @@ import java.util.Locale;
  */
 public final class CommandScript {
     private final List<ScriptEntry> entries;
+    private final List<byte[]> images;
 
-    private CommandScript(List<ScriptEntry> entries) {
+    private CommandScript(List<ScriptEntry> entries, List<byte[]> images) {
         this.entries = List.copyOf(entries);
+        this.images = List.copyOf(images);
+    }
+
+    /** The table images the script uplinks, in order (the ground needs their windows). */
+    public List<byte[]> images() {
+        return images;
     }
 
     /** The entries in time order. */
@@ -78,7 +85,7 @@ public final class CommandScript {
             last = at;
             parseLine(at, lineNo, t, out);
         }
-        return new CommandScript(out);
+        return new CommandScript(out, images(out));
     }
 
     private static void parseLine(long at, int line, String[] t, List<ScriptEntry> out) throws ScriptException {
@@ -172,6 +179,21 @@ public final class CommandScript {
     }
 
     /** The loads of {@code n} image octets in pieces, a verify and a commit, all at {@code at}. */
+    /** The images the table loads write, each cut at the length its verify names. */
+    private static List<byte[]> images(List<ScriptEntry> entries) {
+        List<byte[]> images = new ArrayList<>();
+        byte[] pending = new byte[TableImage.MAX_OCTETS];
+        for (ScriptEntry e : entries) {
+            if (e.code() == CommandCode.TABLE_LOAD) {
+                int offset = ((e.args()[0] & 0xFF) << 8) | (e.args()[1] & 0xFF);
+                System.arraycopy(e.args(), 2, pending, offset, e.args().length - 2);
+            } else if (e.code() == CommandCode.TABLE_VERIFY) {
+                images.add(Arrays.copyOf(pending, ((e.args()[0] & 0xFF) << 8) | (e.args()[1] & 0xFF)));
+            }
+        }
+        return images;
+    }
+
     private static void loadImage(long at, int line, byte[] image, int n, List<ScriptEntry> out) {
         for (int from = 0; from < n; from += CommandCode.MAX_LOAD_OCTETS) {
             int k = Math.min(CommandCode.MAX_LOAD_OCTETS, n - from);
