@@ -9,6 +9,7 @@ import dev.sweepline.fsw.command.ParameterTable;
 import dev.sweepline.fsw.command.TableManager;
 import dev.sweepline.fsw.fault.FaultProtection;
 import dev.sweepline.fsw.link.InstrumentLink;
+import dev.sweepline.fsw.link.LinkHealth;
 import dev.sweepline.fsw.link.SampleReply;
 import dev.sweepline.fsw.link.StepCommand;
 import dev.sweepline.fsw.sweep.ModeChangeReason;
@@ -43,10 +44,12 @@ public final class FlightSoftware {
     /** Event id of the start-up table restore: argument a = TableManager RESTORE_* code, reason = table id. */
     public static final int EVENT_TABLE_RESTORED = 5;
     /** Housekeeping user data octets (telemetry ICD §5). */
-    public static final int HOUSEKEEPING_OCTETS = 38;
+    public static final int HOUSEKEEPING_OCTETS = 40;
 
     private final SweepScheduler scheduler;
     private final Executive executive;
+    /** The link's own health counters, when it has framing (null in process). */
+    private final LinkHealth linkHealth;
     private final TelemetryWriter telemetry;
     private final SweepParameters active = new SweepParameters();
     private final TableManager tables;
@@ -81,6 +84,7 @@ public final class FlightSoftware {
         this.sweepTableId = tables.activeId();
         this.scheduler = new SweepScheduler(inForce.windowTable(), inForce.sweep, new Forwarder(observer));
         this.executive = new Executive(link, scheduler, config.timeoutMarginMicros, config.maxRetries);
+        this.linkHealth = healthOf(link);
         this.faults = new FaultProtection(inForce.faults, scheduler, telemetry);
         this.hv = new HvInterlock(config.hvArmTimeoutMicros);
         this.commands = new CommandProcessor(new CommandAuthenticator(config.commandKey, config.authenticateCommands),
@@ -176,6 +180,10 @@ public final class FlightSoftware {
         return lockLosses;
     }
 
+    private static LinkHealth healthOf(InstrumentLink link) {
+        return link instanceof LinkHealth h ? h : null;
+    }
+
     /** Housekeeping user data, telemetry ICD §5. */
     private void writeHousekeeping(long nowMicros) {
         byte[] b = telemetry.buffer();
@@ -199,6 +207,7 @@ public final class FlightSoftware {
         b[p + 33] = (byte) hv.code(nowMicros);
         put16(b, p + 34, tables.activeId());
         put16(b, p + 36, saturate16(faults.totalTrips()));
+        put16(b, p + 38, linkHealth == null ? 0 : saturate16(linkHealth.framesBad()));
         telemetry.sendEngineering(Apid.HOUSEKEEPING, HOUSEKEEPING_OCTETS, nowMicros, nowMicros);
     }
 

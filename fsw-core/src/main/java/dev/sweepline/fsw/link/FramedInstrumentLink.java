@@ -13,7 +13,7 @@ package dev.sweepline.fsw.link;
  *
  * <p>Threading: one thread, the executive's.
  */
-public final class FramedInstrumentLink implements InstrumentLink {
+public final class FramedInstrumentLink implements InstrumentLink, LinkHealth {
     /** Octets read from the transport per call at most. */
     public static final int READ_CHUNK = 256;
     /** Reads per {@link #pump()} at most (bounds the work of one cycle). */
@@ -135,6 +135,12 @@ public final class FramedInstrumentLink implements InstrumentLink {
     /** True once the transport reported the end of the stream (peer gone). */
     public boolean ended() {
         return ended || sender.ended();
+    }
+
+    /** Frames received bad since start (housekeeping, telemetry ICD §5). */
+    @Override
+    public long framesBad() {
+        return counters.framesBad();
     }
 
     /** Receive and send counters. */

@@ -9,17 +9,17 @@ import java.nio.ByteBuffer;
  * checks that the flight software writes the same image of its own counters.
  */
 final class HousekeepingImage {
-    /** User data octets (ICD §5: offsets 0..37). */
-    static final int LENGTH = 38;
+    /** User data octets (ICD §5: offsets 0..39). */
+    static final int LENGTH = 40;
 
     private HousekeepingImage() {
     }
 
-    /** The 38 octets of ICD §5; 16- and 32-bit counters are taken modulo their field width. */
+    /** The 40 octets of ICD §5; 16- and 32-bit counters are taken modulo their field width. */
     static byte[] of(int mode, int hvEnabled, long stepsSent, long repliesAccepted, int sequenceErrors,
             int timeouts, int retries, int surveySweeps, int focusSweeps, int lockLosses, long telemetryOctets,
             int commandsAccepted, int commandsRejected, int executionFailures, int lastRejection, int hvState,
-            int tableId, int faultTrips) {
+            int tableId, int faultTrips, int linkFramesBad) {
         return ByteBuffer.allocate(LENGTH)
                 .put((byte) mode)                    // offset 0
                 .put((byte) hvEnabled)               // 1
@@ -39,6 +39,7 @@ final class HousekeepingImage {
                 .put((byte) hvState)                 // 33
                 .putShort((short) tableId)           // 34..35
                 .putShort((short) faultTrips)        // 36..37
+                .putShort((short) linkFramesBad)     // 38..39
                 .array();
     }
 
@@ -49,6 +50,6 @@ final class HousekeepingImage {
     static byte[] firstForm(int mode, int hvEnabled, long stepsSent, long repliesAccepted, int sequenceErrors,
             int timeouts, int retries, int surveySweeps, int focusSweeps, int lockLosses, long telemetryOctets) {
         return java.util.Arrays.copyOf(of(mode, hvEnabled, stepsSent, repliesAccepted, sequenceErrors, timeouts,
-                retries, surveySweeps, focusSweeps, lockLosses, telemetryOctets, 0, 0, 0, 0, 0, 0, 0), 26);
+                retries, surveySweeps, focusSweeps, lockLosses, telemetryOctets, 0, 0, 0, 0, 0, 0, 0, 0), 26);
     }
 }

@@ -29,11 +29,13 @@ import dev.sweepline.ground.packet.CucTime;
 public record HousekeepingReport(CucTime time, int sequenceCount, int mode, boolean hvEnabled, long stepsSent,
         long repliesAccepted, int sequenceErrors, int replyTimeouts, int retries, int surveySweeps,
         int focusSweeps, int lockLosses, long telemetryOctets, int commandsAccepted, int commandsRejected,
-        int commandFailures, int lastRejection, int hvState, int tableId, int faultTrips) {
+        int commandFailures, int lastRejection, int hvState, int tableId, int faultTrips, int linkFramesBad) {
     /** APID (ICD §3.3). */
     public static final int APID = 0x110;
-    /** User data length, octets (ICD §5: offsets 0..37). */
-    public static final int USER_DATA_OCTETS = 38;
+    /** User data length, octets (ICD §5: offsets 0..39). */
+    public static final int USER_DATA_OCTETS = 40;
+    /** User data length before the link bad-frame count was appended (offsets 0..37), still accepted. */
+    public static final int COMMAND_USER_DATA_OCTETS = 38;
     /** User data length of the issue-3 baseline packet (offsets 0..25), still accepted. */
     public static final int BASELINE_USER_DATA_OCTETS = 26;
 }

@@ -6,7 +6,8 @@ import dev.sweepline.ground.packet.SpacePacketHeader;
 /**
  * Decodes housekeeping (ICD §5), event (ICD §6) and command report (ICD §9) packets. A packet without
  * the secondary header or of the wrong length gives null; the caller counts it. Housekeeping of the
- * issue-3 baseline (26 octets, before the command and fault fields) is still read, its new fields 0.
+ * issue-3 baseline (26 octets, before the command and fault fields) and of 38 octets (before the link
+ * bad-frame count) is still read, the missing fields 0.
  * Stateless.
  */
 public final class RecordPacketDecoder {
@@ -29,7 +30,8 @@ public final class RecordPacketDecoder {
 
     /** The housekeeping packet of {@code len} octets at {@code off}, or null when malformed. */
     public static HousekeepingReport housekeeping(byte[] b, int off, int len) {
-        boolean extended = shaped(b, off, len, HousekeepingReport.USER_DATA_OCTETS);
+        boolean full = shaped(b, off, len, HousekeepingReport.USER_DATA_OCTETS);
+        boolean extended = full || shaped(b, off, len, HousekeepingReport.COMMAND_USER_DATA_OCTETS);
         if (!extended && !shaped(b, off, len, HousekeepingReport.BASELINE_USER_DATA_OCTETS)) {
             return null;
         }
@@ -39,7 +41,7 @@ public final class RecordPacketDecoder {
                 u16(b, u + 10), u16(b, u + 12), u16(b, u + 14), u16(b, u + 16), u16(b, u + 18), u16(b, u + 20),
                 u32(b, u + 22), extended ? u16(b, u + 26) : 0, extended ? u16(b, u + 28) : 0,
                 extended ? u16(b, u + 30) : 0, extended ? b[u + 32] & 0xFF : 0, extended ? b[u + 33] & 0xFF : 0,
-                extended ? u16(b, u + 34) : 0, extended ? u16(b, u + 36) : 0);
+                extended ? u16(b, u + 34) : 0, extended ? u16(b, u + 36) : 0, full ? u16(b, u + 38) : 0);
     }
 
     /** The event packet of {@code len} octets at {@code off}, or null when malformed. */

@@ -57,7 +57,8 @@ class LinkFaultTest {
         // is switched off, so every safe entry waits for the ground's command below (commands.md §6)
         dev.sweepline.fsw.exec.FlightConfig flight = HilRig.flightConfig(config);
         flight.faults.threshold[dev.sweepline.fsw.fault.FaultMonitorId.LINK_TIMEOUT] = 0;
-        FlightSoftware fsw = new FlightSoftware(flight, checking, new ByteArrayOutputStream()::write,
+        ByteArrayOutputStream tm = new ByteArrayOutputStream();
+        FlightSoftware fsw = new FlightSoftware(flight, checking, tm::write,
                 dev.sweepline.fsw.sweep.SweepListener.NONE);
         Executive exec = fsw.executive();
 
@@ -97,6 +98,22 @@ class LinkFaultTest {
                 exec.safeEntries());
 
         assertTrue(in.faults() + out.faults() >= 10_000, "the brief asks for at least 10,000 injected faults");
+        // the flight software reports its link's bad frames in housekeeping (telemetry ICD §5, offset 38)
+        fsw.close(end);
+        long[] reported = {-1};
+        dev.sweepline.ground.decode.TelemetryDecoder d = new dev.sweepline.ground.decode.TelemetryDecoder(
+                dev.sweepline.ground.decode.DecoderConfig.icdDefaults(),
+                new dev.sweepline.ground.spectrum.Ccsds121QuadrantDecoder(),
+                new dev.sweepline.ground.decode.DecodeListener() {
+                    @Override
+                    public void onHousekeeping(dev.sweepline.ground.decode.HousekeepingReport r) {
+                        reported[0] = r.linkFramesBad();
+                    }
+                });
+        byte[] frames = tm.toByteArray();
+        d.accept(frames, 0, frames.length);
+        d.finish();
+        assertEquals(Math.min(0xFFFF, fs.framesBad()), reported[0]);
         // no wrong sample: every reply the link delivered is exactly what the instrument sent for its number
         assertEquals(0, checking.mismatches);
         // inbound: every step frame the flight software wrote is intact or damaged; the server saw
@@ -167,7 +184,7 @@ class LinkFaultTest {
     }
 
     /** Compares every delivered reply, field by field, with what the instrument sent for its sequence number. */
-    private static final class CheckingLink implements InstrumentLink {
+    private static final class CheckingLink implements InstrumentLink, dev.sweepline.fsw.link.LinkHealth {
         private final InstrumentLink link;
         private final RecordingExecutor instrument;
         long mismatches;
@@ -176,6 +193,11 @@ class LinkFaultTest {
         CheckingLink(InstrumentLink link, RecordingExecutor instrument) {
             this.link = link;
             this.instrument = instrument;
+        }
+
+        @Override
+        public long framesBad() {
+            return ((dev.sweepline.fsw.link.LinkHealth) link).framesBad();
         }
 
         @Override
