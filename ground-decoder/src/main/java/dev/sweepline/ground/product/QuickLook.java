@@ -103,6 +103,13 @@ final class QuickLook {
         bits.add(row("all packets", num(rates.packets(), "%.1f")));
         bits.add(row("frames incl. ASM (downlink)", num(rates.frames(), "%.1f")));
         q.heading("Bits per second").table(row("stream", "bit/s"), bits);
+        List<List<String>> ops = new ArrayList<>();
+        s.eventsByKind().forEach((kind, n) -> ops.add(row("event " + kind, Long.toString(n))));
+        s.commandReports().forEach((kind, n) -> ops.add(row("command report " + kind, Long.toString(n))));
+        if (ops.isEmpty()) {
+            ops.add(row("events and command reports", "none"));
+        }
+        q.heading("Events and commands").table(row("item", "count"), ops);
         if (Double.isFinite(rates.allocation())) {
             boolean ok = rates.withinAllocation();
             q.paragraph(String.format("Allocation %.1f bit/s: frames use %s bit/s (%s %% of it) - %s.",
