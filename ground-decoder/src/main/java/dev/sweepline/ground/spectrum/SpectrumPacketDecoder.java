@@ -158,9 +158,8 @@ public final class SpectrumPacketDecoder {
                 sum += a;
             }
             total[i] = sum;
-            low[i] = windows.lowVolts(tableId, first + i);
-            high[i] = windows.highVolts(tableId, first + i);
         }
+        windows.edges(tableId, first, c, low, high);
         return new DecodedSpectrum(time, apid, seq, mode, (flags & 0x80) != 0, (flags & 0x40) != 0, sweep,
                 tableId, first, c, peak, periods, compression, gain, sat, adc, amps, total, low, high);
     }

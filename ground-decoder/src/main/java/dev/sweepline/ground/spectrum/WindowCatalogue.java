@@ -58,6 +58,20 @@ public final class WindowCatalogue {
         return edges.containsKey(tableId);
     }
 
+    /**
+     * Writes the calibrated edges of windows {@code first .. first + count - 1} of table {@code tableId}
+     * into {@code low} and {@code high} (NaN where unknown): one lookup per spectrum.
+     */
+    public void edges(int tableId, int first, int count, double[] low, double[] high) {
+        double[][] e = edges.get(tableId);
+        for (int i = 0; i < count; i++) {
+            int w = first + i;
+            boolean known = e != null && w >= 0 && w < e[0].length;
+            low[i] = known ? e[0][w] : Double.NaN;
+            high[i] = known ? e[1][w] : Double.NaN;
+        }
+    }
+
     /** Calibrated low edge of window {@code w} of table {@code tableId}, volts; NaN when unknown. */
     public double lowVolts(int tableId, int w) {
         double[][] e = edges.get(tableId);
