@@ -1,73 +1,38 @@
 package dev.sweepline.sim.campaign;
 
 import dev.sweepline.fsw.table.SweepParameters;
+import java.util.function.ObjIntConsumer;
 
 /**
- * The sweep parameters a campaign grid may vary, by their campaign-file key, in plain units (the
- * flight software's fixed-point scales are applied here).
+ * The sweep parameters a campaign grid may vary, by their campaign-file key, in plain units: the
+ * flight software's fixed-point scale of each is applied here (Q8: x256).
  */
 public enum TunableParameter {
     /** Dwell: modulation periods integrated per window. */
-    INTEGRATION_PERIODS("integrationPeriods") {
-        @Override
-        void apply(SweepParameters p, double v) {
-            p.integrationPeriods = (int) Math.round(v);
-        }
-    },
+    INTEGRATION_PERIODS("integrationPeriods", 1, (p, v) -> p.integrationPeriods = v),
     /** Focus band half-width per measured FWHM (a factor; Q8 in the flight software). */
-    HALF_WIDTH_PER_FWHM("halfWidthPerFwhm") {
-        @Override
-        void apply(SweepParameters p, double v) {
-            p.halfWidthPerFwhmQ8 = (int) Math.round(v * 256);
-        }
-    },
+    HALF_WIDTH_PER_FWHM("halfWidthPerFwhm", 256, (p, v) -> p.halfWidthPerFwhmQ8 = v),
     /** Smallest focus band half-width, windows. */
-    MIN_HALF_WIDTH_WINDOWS("minHalfWidthWindows") {
-        @Override
-        void apply(SweepParameters p, double v) {
-            p.minHalfWidthWindows = (int) Math.round(v);
-        }
-    },
+    MIN_HALF_WIDTH_WINDOWS("minHalfWidthWindows", 1, (p, v) -> p.minHalfWidthWindows = v),
     /** Widest focus band, windows. */
-    MAX_BAND_WINDOWS("maxBandWindows") {
-        @Override
-        void apply(SweepParameters p, double v) {
-            p.maxBandWindows = (int) Math.round(v);
-        }
-    },
+    MAX_BAND_WINDOWS("maxBandWindows", 1, (p, v) -> p.maxBandWindows = v),
     /** Focus sweeps between forced surveys (K). */
-    RESURVEY_EVERY("resurveyEvery") {
-        @Override
-        void apply(SweepParameters p, double v) {
-            p.resurveyEveryFocusSweeps = (int) Math.round(v);
-        }
-    },
+    RESURVEY_EVERY("resurveyEvery", 1, (p, v) -> p.resurveyEveryFocusSweeps = v),
     /** Lock lost below this fraction of the reference peak current (Q8 in the flight software). */
-    COLLAPSE_FRACTION("collapseFraction") {
-        @Override
-        void apply(SweepParameters p, double v) {
-            p.collapseFractionQ8 = (int) Math.round(v * 256);
-        }
-    },
+    COLLAPSE_FRACTION("collapseFraction", 256, (p, v) -> p.collapseFractionQ8 = v),
     /** Lock lost when the peak moves by more than this many windows. */
-    JUMP_WINDOWS("jumpWindows") {
-        @Override
-        void apply(SweepParameters p, double v) {
-            p.jumpWindows = (int) Math.round(v);
-        }
-    },
+    JUMP_WINDOWS("jumpWindows", 1, (p, v) -> p.jumpWindows = v),
     /** Edge search reach beyond a band edge, windows (0: survey at once). */
-    EDGE_SEARCH_WINDOWS("edgeSearchWindows") {
-        @Override
-        void apply(SweepParameters p, double v) {
-            p.edgeSearchWindows = (int) Math.round(v);
-        }
-    };
+    EDGE_SEARCH_WINDOWS("edgeSearchWindows", 1, (p, v) -> p.edgeSearchWindows = v);
 
     private final String key;
+    private final int scale;
+    private final ObjIntConsumer<SweepParameters> setter;
 
-    TunableParameter(String key) {
+    TunableParameter(String key, int scale, ObjIntConsumer<SweepParameters> setter) {
         this.key = key;
+        this.scale = scale;
+        this.setter = setter;
     }
 
     /** Key in the campaign file. */
@@ -75,8 +40,10 @@ public enum TunableParameter {
         return key;
     }
 
-    /** Sets this parameter of {@code p} to {@code value} (plain units). */
-    abstract void apply(SweepParameters p, double value);
+    /** Sets this parameter of {@code p} to {@code value} (plain units, rounded to the flight software's scale). */
+    void apply(SweepParameters p, double value) {
+        setter.accept(p, (int) Math.round(value * scale));
+    }
 
     /** The parameter of that key, or null. */
     static TunableParameter byKey(String key) {
