@@ -20,9 +20,9 @@ public final class FaultResponse {
     public static final int MAX = SAFE;
     /**
      * Mode-change reason the fault responses give the scheduler (telemetry ICD §6, reason code 12):
-     * the next number after the scheduler's own reasons (ModeChangeReason.LINK_TIMEOUT = 11).
+     * the scheduler's ModeChangeReason.FAULT_RESPONSE (12), so mode-change events name it.
      */
-    public static final int MODE_CHANGE_REASON = 12;
+    public static final int MODE_CHANGE_REASON = dev.sweepline.fsw.sweep.ModeChangeReason.FAULT_RESPONSE;
 
     private static final String[] NAMES = {"NONE", "RETRY", "GAIN", "SURVEY", "SAFE"};
 

@@ -26,10 +26,12 @@ public final class ModeChangeReason {
     public static final int NO_BAND = 10;
     /** The executive got no reply within its retries. */
     public static final int LINK_TIMEOUT = 11;
+    /** A fault-protection monitor responded (the event packet says which; commands.md §6). */
+    public static final int FAULT_RESPONSE = 12;
 
     private static final String[] NAMES = {
         "NONE", "START", "LOCK_ACQUIRED", "PEAK_ON_EDGE", "CURRENT_COLLAPSE", "PEAK_JUMP",
-        "RESURVEY", "COMMANDED", "NO_PEAK", "TABLE_LOADED", "NO_BAND", "LINK_TIMEOUT",
+        "RESURVEY", "COMMANDED", "NO_PEAK", "TABLE_LOADED", "NO_BAND", "LINK_TIMEOUT", "FAULT_RESPONSE",
     };
 
     private ModeChangeReason() {

@@ -3,7 +3,8 @@ package dev.sweepline.ground.decode;
 import dev.sweepline.ground.packet.CucTime;
 
 /**
- * A housekeeping packet (APID 0x110), ICD §5. Counters wrap at their field width.
+ * A housekeeping packet (APID 0x110), ICD §5. The 32-bit and sweep counters wrap at their field
+ * width; the 16-bit error, command and fault counters saturate at 0xFFFF.
  *
  * @param time             CUC time of the sample
  * @param sequenceCount    packet sequence count
