@@ -23,7 +23,7 @@ import java.util.Map;
 public final class CampaignReader {
     private static final String FORMAT = "sweepline-campaign/1";
     private static final List<String> TOP = List.of("format", "name", "description", "seed", "runsPerSet",
-            "durationS", "scenario", "allocationBitsPerS", "draws", "grid");
+            "durationS", "scenario", "allocationBitsPerS", "draws", "eventShiftS", "grid");
     private static final List<String> KINDS = List.of("fixed", "uniform", "logUniform", "normal");
     /** Largest campaign this reader accepts, runs: a guard against a typo exploding the grid. */
     static final int MAX_RUNS = 1_000_000;
@@ -59,8 +59,9 @@ public final class CampaignReader {
         Map<PlasmaParameter, Distribution> draws = top.has("draws") ? draws(file, top.required("draws"))
                 : Map.of();
         List<CampaignSpec.GridAxis> grid = grid(file, top.required("grid"));
+        Distribution shift = top.has("eventShiftS") ? distribution(file, top.required("eventShiftS")) : null;
         CampaignSpec spec = new CampaignSpec(top.text("name"), top.text("description", ""), seed, runs, duration,
-                base, draws, grid, allocation);
+                base, draws, grid, allocation, shift);
         if ((long) spec.setCount() * runs > MAX_RUNS) {
             throw new FileFormatException(file, top.required("grid").line(), "grid",
                     spec.setCount() + " sets x " + runs + " runs is more than " + MAX_RUNS + " runs");
@@ -199,10 +200,8 @@ public final class CampaignReader {
         }
         Section s = Section.of(file, node, keys);
         List<CampaignSpec.GridAxis> axes = new ArrayList<>();
-        for (TunableParameter t : TunableParameter.values()) {
-            if (!s.has(t.key())) {
-                continue;
-            }
+        for (String key : ((YamlNode.Mapping) node).entries().keySet()) { // the file's order
+            TunableParameter t = TunableParameter.byKey(key);
             YamlNode list = s.required(t.key());
             if (!(list instanceof YamlNode.Sequence seq) || seq.items().isEmpty()) {
                 throw s.typeError(list, "a non-empty list of values");

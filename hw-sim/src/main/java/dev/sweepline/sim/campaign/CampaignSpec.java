@@ -24,10 +24,12 @@ import java.util.SplittableRandom;
  * @param draws            distributions of starting-plasma parameters, in file order
  * @param grid             axes of the parameter grid, in file order
  * @param allocationBitsPerSecond downlink allocation the sets are judged against; NaN for none
+ * @param eventShift       distribution of the shift of the base scenario's events (when the shocks
+ *                         come), seconds; null: the events stay where the scenario has them
  */
 public record CampaignSpec(String name, String description, long seed, int runsPerSet, double durationSeconds,
         Scenario base, Map<PlasmaParameter, Distribution> draws, List<GridAxis> grid,
-        double allocationBitsPerSecond) {
+        double allocationBitsPerSecond, Distribution eventShift) {
 
     /** One grid axis: a tunable parameter and the values it takes. */
     public record GridAxis(TunableParameter parameter, List<Double> values) {
@@ -76,7 +78,9 @@ public record CampaignSpec(String name, String description, long seed, int runsP
         for (Map.Entry<PlasmaParameter, Distribution> d : draws.entrySet()) {
             start = start.with(d.getKey(), Ensemble.clip(d.getKey(), d.getValue().draw(random)));
         }
-        return base.withStart(base.name() + "-member-" + run, start, base.distanceAu(), durationSeconds);
+        // shift the events within the base scenario first, then cut the run to the campaign's duration
+        Scenario shifted = eventShift == null ? base : base.withEventsShifted(eventShift.draw(random));
+        return shifted.withStart(base.name() + "-member-" + run, start, base.distanceAu(), durationSeconds);
     }
 
     /** The keys of the grid axes, in order. */

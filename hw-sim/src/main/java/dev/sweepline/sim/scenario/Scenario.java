@@ -64,6 +64,28 @@ public final class Scenario {
                 fluctuations, kept);
     }
 
+    /**
+     * This scenario with every event moved by {@code seconds} (campaign draws of when the shocks come),
+     * clipped so that no event starts before 0 or ends after the duration.
+     */
+    public Scenario withEventsShifted(double seconds) {
+        if (events.isEmpty()) {
+            return this;
+        }
+        double first = events.get(0).atSeconds();
+        double last = 0;
+        for (ScenarioEvent e : events) {
+            last = Math.max(last, e.endSeconds());
+        }
+        double shift = Math.max(-first, Math.min(durationSeconds - last, seconds));
+        List<ScenarioEvent> moved = new ArrayList<>();
+        for (ScenarioEvent e : events) {
+            moved.add(new ScenarioEvent(e.atSeconds() + shift, e.rampSeconds(), e.label(), e.jump(), e.set(), e.scale()));
+        }
+        return new Scenario(name, description, distanceAu, durationSeconds, start, alphaDriftDirection, fluctuations,
+                moved);
+    }
+
     /** Short name, e.g. {@code quiet-perihelion}. */
     public String name() {
         return name;

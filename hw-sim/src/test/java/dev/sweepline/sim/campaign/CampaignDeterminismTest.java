@@ -3,6 +3,7 @@ package dev.sweepline.sim.campaign;
 import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.io.IOException;
 import java.nio.file.Files;
@@ -80,6 +81,20 @@ class CampaignDeterminismTest {
         assertEquals(4, spec.setCount());
         assertEquals(8, spec.parameters(spec.setCount() - 1).integrationPeriods); // last axis fastest
         assertEquals(16, spec.parameters(spec.setCount() - 1).resurveyEveryFocusSweeps);
+    }
+
+    @Test
+    void shouldDrawWhenTheShockComesPerMember() {
+        String text = CAMPAIGN.replace("durationS: 12", "durationS: 30")
+                .replace("grid:", "eventShiftS: {uniform: [-32, -20]}\ngrid:");
+        CampaignSpec spec = CampaignReader.parse(text, "shifted.yaml", null);
+        // shock-sheath's front is at 40 s (its file): shifted by -32..-20 s it falls at 8..20 s
+        double a = spec.member(0).jumps().get(0).atSeconds();
+        double b = spec.member(1).jumps().get(0).atSeconds();
+        assertTrue(a >= 8 && a <= 20 && b >= 8 && b <= 20, a + " " + b);
+        assertTrue(a != b);
+        assertEquals(a, spec.member(0).jumps().get(0).atSeconds()); // seeded: the same member, the same shock
+        assertEquals(1, spec.member(0).jumps().size()); // one jump: the shock front (the helium ramp is no jump)
     }
 
     private static void write(Path dir, CampaignSpec spec, List<RunRow> rows) throws IOException {
