@@ -9,6 +9,7 @@ import dev.sweepline.ground.fit.PlasmaModel;
 import dev.sweepline.ground.fit.SpectrumFitter;
 import dev.sweepline.ground.fit.SpectrumInput;
 import dev.sweepline.ground.plot.SpectrogramData;
+import dev.sweepline.ground.spectrum.DefaultWindowTable;
 import dev.sweepline.ground.spectrum.DecodedSpectrum;
 import java.util.ArrayList;
 import java.util.Collections;
@@ -49,11 +50,7 @@ public final class FitCollector implements DecodeListener {
             firstTai = tai;
         }
         records.add(new MomentRecord(tai, s.time().isoTai(), s.apid(), s.modeName(), s.sweep(), fit, bound));
-        double[] amps = s.totalAmps().clone();
-        for (int i = 0; i < amps.length; i++) {
-            amps[i] = s.saturated()[i] ? Double.NaN : amps[i];
-        }
-        rows.add(new SpectrogramData.Row(tai - firstTai, s.firstWindow(), amps));
+        rows.add(onDefaultGrid(s, tai - firstTai));
         int score = fit.ok() ? in.windows() * 2 + (s.mode() == DecodedSpectrum.MODE_SURVEY ? 1000 : 0) : -1;
         if (score >= exampleScore && score >= 0) {
             exampleScore = score;
@@ -61,6 +58,33 @@ public final class FitCollector implements DecodeListener {
             exampleFit = fit;
             exampleTitle = s.modeName() + " sweep " + s.sweep() + " at " + s.time().isoTai() + " TAI";
         }
+    }
+
+    /**
+     * The spectrum's currents on the default table's E/q windows, so that one spectrogram can hold
+     * spectra of uplinked tables too: each window's current goes to the default window holding its
+     * geometric centre (several currents to one window are summed; saturated windows stay NaN).
+     */
+    static SpectrogramData.Row onDefaultGrid(DecodedSpectrum s, double seconds) {
+        if (s.tableId() == DefaultWindowTable.TABLE_ID) {
+            double[] amps = s.totalAmps().clone();
+            for (int i = 0; i < amps.length; i++) {
+                amps[i] = s.saturated()[i] ? Double.NaN : amps[i];
+            }
+            return new SpectrogramData.Row(seconds, s.firstWindow(), amps);
+        }
+        double[] amps = new double[DefaultWindowTable.WINDOWS];
+        java.util.Arrays.fill(amps, Double.NaN);
+        for (int i = 0; i < s.windowCount(); i++) {
+            double centre = Math.sqrt(s.lowVolts()[i] * s.highVolts()[i]);
+            int w = DefaultWindowTable.windowOf(centre);
+            if (w < 0) {
+                continue;
+            }
+            double a = s.saturated()[i] ? Double.NaN : s.totalAmps()[i];
+            amps[w] = Double.isNaN(amps[w]) ? a : amps[w] + a;
+        }
+        return new SpectrogramData.Row(seconds, 0, amps);
     }
 
     /** The records so far, in stream order. */

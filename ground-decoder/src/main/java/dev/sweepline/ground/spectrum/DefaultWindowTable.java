@@ -48,6 +48,24 @@ public final class DefaultWindowTable {
         return CALIBRATED_VOLTS_PER_CODE * code + CALIBRATED_OFFSET_VOLTS;
     }
 
+    /** The window whose calibrated edges hold {@code volts}, or -1 outside the table (and for NaN). */
+    public static int windowOf(double volts) {
+        if (!(volts >= EDGE_VOLTS[0]) || volts >= EDGE_VOLTS[WINDOWS]) {
+            return -1;
+        }
+        int lo = 0;
+        int hi = WINDOWS - 1;
+        while (lo < hi) { // the first window whose high edge lies above volts
+            int mid = (lo + hi) >>> 1;
+            if (EDGE_VOLTS[mid + 1] <= volts) {
+                lo = mid + 1;
+            } else {
+                hi = mid;
+            }
+        }
+        return lo;
+    }
+
     /** Calibrated low edge of window {@code w}, volts; NaN outside 0..127. */
     public static double lowVolts(int w) {
         return w >= 0 && w < WINDOWS ? EDGE_VOLTS[w] : Double.NaN;
