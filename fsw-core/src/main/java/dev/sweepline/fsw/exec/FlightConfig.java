@@ -54,4 +54,9 @@ public final class FlightConfig {
         }
         return k;
     }
+    /**
+     * Whether the flight software may ask for high voltage: the host's arm-then-fire permission on real
+     * electronics (false until fired); true for the simulator.
+     */
+    public boolean hvPermitted = true;
 }

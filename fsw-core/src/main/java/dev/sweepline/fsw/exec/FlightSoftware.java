@@ -85,6 +85,7 @@ public final class FlightSoftware {
         this.scheduler = new SweepScheduler(inForce.windowTable(), inForce.sweep, new Forwarder(observer));
         this.executive = new Executive(link, scheduler, config.timeoutMarginMicros, config.maxRetries);
         this.linkHealth = healthOf(link);
+        scheduler.permitHv(config.hvPermitted);
         this.faults = new FaultProtection(inForce.faults, scheduler, telemetry);
         this.hv = new HvInterlock(config.hvArmTimeoutMicros);
         this.commands = new CommandProcessor(new CommandAuthenticator(config.commandKey, config.authenticateCommands),
@@ -190,7 +191,7 @@ public final class FlightSoftware {
         int p = telemetry.userDataOffset();
         SweepMode mode = scheduler.mode();
         b[p] = (byte) modeCode(mode);
-        b[p + 1] = (byte) (mode != SweepMode.SAFE && hv.enabled() ? 1 : 0);
+        b[p + 1] = (byte) (mode != SweepMode.SAFE && hv.enabled() && scheduler.hvPermitted() ? 1 : 0);
         put32(b, p + 2, executive.stepsSent());
         put32(b, p + 6, executive.repliesAccepted());
         put16(b, p + 10, saturate16(executive.sequenceErrors()));

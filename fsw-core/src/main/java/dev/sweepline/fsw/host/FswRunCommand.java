@@ -4,6 +4,7 @@ import dev.sweepline.fsw.exec.Executive;
 import dev.sweepline.fsw.exec.FlightConfig;
 import dev.sweepline.fsw.exec.FlightSoftware;
 import dev.sweepline.fsw.link.FramedInstrumentLink;
+import dev.sweepline.fsw.link.HousekeepingReply;
 import dev.sweepline.fsw.link.LinkCounters;
 import dev.sweepline.fsw.sweep.SweepListener;
 import java.io.BufferedReader;
@@ -85,7 +86,11 @@ final class FswRunCommand implements Callable<Integer> {
         try (HostTransport transport = address.open(baud); StreamFrameSink sink = StreamFrameSink.open(tm)) {
             FramedInstrumentLink framed = new FramedInstrumentLink(transport);
             HvGuardLink guard = new HvGuardLink(framed, arming);
-            FlightSoftware fsw = new FlightSoftware(new FlightConfig(), guard, sink, SweepListener.NONE);
+            FlightConfig flight = new FlightConfig();
+            // the core knows the permission too, so its HV monitors expect no HV and housekeeping says so;
+            // the guard on the wire stays as a second, independent barrier
+            flight.hvPermitted = arming.state() == HvArming.State.ENABLED;
+            FlightSoftware fsw = new FlightSoftware(flight, guard, sink, SweepListener.NONE);
             System.out.println("link " + address + ", HV " + arming.state() + ", clock " + clock);
             long end;
             if (clock == Clock.link) {
@@ -107,6 +112,7 @@ final class FswRunCommand implements Callable<Integer> {
             // the run ends at its planned end, like the bench's, even when the last reply overshot it
             fsw.close(Math.min(end, endMicros));
             print(fsw, framed, guard, sink, System.out);
+            printElectronics(framed, System.out);
         }
         return 0;
     }
@@ -141,6 +147,36 @@ final class FswRunCommand implements Callable<Integer> {
             Thread.currentThread().interrupt();
             return "";
         }
+    }
+
+    /**
+     * Asks the electronics for their housekeeping (hardware ICD §3.3) and prints their side of the link:
+     * what they received good and bad, their last step, HV monitors and temperature. Waits at most
+     * about half a second; electronics that do not answer are reported as such.
+     */
+    static void printElectronics(FramedInstrumentLink framed, PrintStream out) {
+        long before = framed.housekeepingReplies();
+        boolean sent = false;
+        dev.sweepline.fsw.link.SampleReply late = new dev.sweepline.fsw.link.SampleReply();
+        for (int i = 0; i < 50 && framed.housekeepingReplies() == before; i++) {
+            sent = sent || framed.requestHousekeeping(0xFFFF);
+            framed.pump();
+            framed.poll(late, Long.MAX_VALUE); // a sample reply still held would stop the reading
+            try {
+                Thread.sleep(10);
+            } catch (InterruptedException e) {
+                Thread.currentThread().interrupt();
+                return;
+            }
+        }
+        if (framed.housekeepingReplies() == before) {
+            out.println("electronics: no housekeeping reply");
+            return;
+        }
+        HousekeepingReply h = framed.housekeeping();
+        out.printf("electronics: frames good %d, bad %d; last step %d; HV monitors %d / %d codes; %.2f degC%n",
+                h.framesGood, h.framesBad, h.lastStepSequence, h.hvMonitorLowCode, h.hvMonitorHighCode,
+                h.temperatureCentiCelsius / 100.0);
     }
 
     static void print(FlightSoftware fsw, FramedInstrumentLink framed, HvGuardLink guard, StreamFrameSink sink,

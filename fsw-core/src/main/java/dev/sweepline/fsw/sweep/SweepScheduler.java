@@ -50,6 +50,7 @@ public final class SweepScheduler {
     private int hvLowCode;
     private int hvHighCode;
     private long ignoredReplies;
+    private boolean hvPermitted = true;
 
     /**
      * Builds a scheduler that starts in SURVEY (reported as a START mode change at the first step).
@@ -107,7 +108,7 @@ public final class SweepScheduler {
         out.gainRange = range;
         out.settleMicros = (int) Math.min(Integer.MAX_VALUE, settle);
         out.integrationPeriods = params.integrationPeriods;
-        out.hvEnabled = true;
+        out.hvEnabled = hvPermitted; // the host's HV permission (arm-then-fire on a real bench)
         lastStep.copyFrom(out);
         hvLowCode = low;
         hvHighCode = high;
@@ -231,6 +232,20 @@ public final class SweepScheduler {
     }
 
     // ---------------------------------------------------------------- commands
+
+    /**
+     * Whether steps may ask for high voltage at all: the host's arm-then-fire permission on real
+     * electronics (true in the simulator). Without it every step asks for the HV off, so the HV
+     * monitors expect none.
+     */
+    public void permitHv(boolean permitted) {
+        hvPermitted = permitted;
+    }
+
+    /** True when steps may ask for high voltage. */
+    public boolean hvPermitted() {
+        return hvPermitted;
+    }
 
     /** Commands a mode (ground command): same as {@link #requestMode(SweepMode, int, long)} with COMMANDED. */
     public void requestMode(SweepMode requested, long nowMicros) {
