@@ -24,7 +24,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
  * Integer arithmetic in the scheduler and the executive (architecture.md, determinism): no float or
  * double instruction in any production class of the core packages, read from the bytecode with the
  * ASM copy that ArchUnit ships. The one allowed user is the start-up table factory
- * {@code WindowTable.logSpaced} (brief: floating point allowed there, start-up only).
+ * {@code WindowTable.logSpaced} (issue 2: floating point allowed there, start-up only).
  */
 class NoFloatingPointTest {
     private static final Set<String> ALLOWED = Set.of("dev/sweepline/fsw/table/WindowTable#logSpaced");

@@ -21,7 +21,7 @@ import java.util.concurrent.TimeUnit;
  * replies of a 1 AU slow-wind spectrum (physics.md worked case P1 plasma, He/H 4 %, 2 counts of
  * noise baked in at set-up). The loop runs survey -&gt; focus -&gt; re-survey every K, so the cost of
  * the sweep analysis at every sweep end is amortised in the mean as it is in flight.
- * Target (brief): mean &lt;= 1 us, 0 B/op under {@code -prof gc}.
+ * Target (issue 2): mean &lt;= 1 us, 0 B/op under {@code -prof gc}.
  */
 @State(Scope.Thread)
 @BenchmarkMode(Mode.AverageTime)

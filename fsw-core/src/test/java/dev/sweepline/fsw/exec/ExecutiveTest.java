@@ -29,7 +29,7 @@ import static org.mockito.Mockito.when;
 /** The executive's sequence, timeout, retry and safe behaviour (exec design note R1-R7). */
 class ExecutiveTest {
     private static final WindowTable TABLE = WindowTable.defaultTable();
-    /** First step from HV off: 1000 us + 519 codes * 1 us settle + 8 ms integration (brief settle formula). */
+    /** First step from HV off: 1000 us + 519 codes * 1 us settle + 8 ms integration (issue 2 settle formula). */
     private static final long FIRST_STEP_MICROS = 1000 + 519 + 8 * 1000;
     private static final int MARGIN = 5000;
 
@@ -125,7 +125,7 @@ class ExecutiveTest {
             exec.doWork(now);
             now += FIRST_STEP_MICROS + MARGIN + 1;
         }
-        // 1 send + 2 retries, 3 time-outs, then SAFE with LINK_TIMEOUT (brief)
+        // 1 send + 2 retries, 3 time-outs, then SAFE with LINK_TIMEOUT (issue 2)
         assertEquals(3, exec.stepsSent());
         assertEquals(2, exec.retries());
         assertEquals(3, exec.timeouts());

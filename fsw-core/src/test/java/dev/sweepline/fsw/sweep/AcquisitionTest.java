@@ -25,14 +25,14 @@ class AcquisitionTest {
         RecordingListener l = new RecordingListener();
         ClosedLoop loop = Fixtures.loop(Fixtures.oneAu(12), SweepParameters.defaults(), l);
         loop.runSweeps(1);
-        // cold start: every window is read in the top range (brief: never-measured windows use the highest
+        // cold start: every window is read in the top range (issue 2: never-measured windows use the highest
         // range); the 1 AU peak (~5 counts per quadrant there) is below the 40-count significance threshold
         for (int i = 0; i < 128; i++) {
             assertEquals(GainPredictor.TOP_RANGE, l.steps.get(i).gainRange());
         }
         assertEquals(SweepMode.SURVEY, loop.scheduler.mode());
         loop.runSweeps(1);
-        // the second survey, ranged from the first, finds the peak: FOCUS with LOCK_ACQUIRED (brief)
+        // the second survey, ranged from the first, finds the peak: FOCUS with LOCK_ACQUIRED (issue 2)
         assertEquals(128, l.sweeps.get(1)[2]);
         assertEquals(SweepMode.FOCUS, loop.scheduler.mode());
         assertEquals(ModeChangeReason.LOCK_ACQUIRED, l.lastChange().reason());

@@ -111,7 +111,7 @@ class CommandTest {
         assertEquals(SweepMode.FOCUS, loop.scheduler.mode());
         loop.step();
         RecordingListener.Step s = l.steps.get(l.steps.size() - 1);
-        // HV was off: the rail change is the full high level (brief settle formula)
+        // HV was off: the rail change is the full high level (issue 2 settle formula)
         assertEquals(1000 + s.dacHigh(), s.settleMicros());
     }
 

@@ -28,13 +28,13 @@ class GainPredictorTest {
 
     @Test
     void shouldUseTopRangeForUnmeasuredWindows() {
-        assertEquals(2, g.choose(10)); // brief: never measured -> highest range
+        assertEquals(2, g.choose(10)); // issue 2: never measured -> highest range
     }
 
     @Test
     void shouldUseTopRangeAfterSaturation() {
         g.record(10, 100, true, 0);
-        assertEquals(2, g.choose(10)); // brief: saturated last time -> highest range
+        assertEquals(2, g.choose(10)); // issue 2: saturated last time -> highest range
     }
 
     @Test

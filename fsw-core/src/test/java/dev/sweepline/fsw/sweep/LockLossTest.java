@@ -10,7 +10,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 /** Loss of lock and re-survey (sweep design note R10, R11). */
 class LockLossTest {
-    /** Shock: E/q of the proton peak x1.82 (brief, scenario shock): speed x sqrt(1.82). */
+    /** Shock: E/q of the proton peak x1.82 (issue 2, scenario shock): speed x sqrt(1.82). */
     private static final double SHOCK_SPEED_FACTOR = Math.sqrt(1.82);
 
     private static ClosedLoop locked(SyntheticInstrument plasma, SweepParameters p, RecordingListener l) {
@@ -184,7 +184,7 @@ class LockLossTest {
     }
 
     /**
-     * Brief: a shock moves the proton peak by x1.82 in E/q within one survey sweep; the band must hold
+     * Issue 2: a shock moves the proton peak by x1.82 in E/q within one survey sweep; the band must hold
      * the new peak within 2 sweeps after the front. The front is put at steps across one focus-focus-survey cycle (29 + 29 + 128 steps), including the last step of each sweep,
      * in focus and in survey sweeps; counted are the complete sweeps after the one the front fell in.
      */

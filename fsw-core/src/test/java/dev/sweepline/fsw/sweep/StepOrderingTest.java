@@ -17,7 +17,7 @@ class StepOrderingTest {
         RecordingListener l = new RecordingListener();
         ClosedLoop loop = Fixtures.loop(empty, SweepParameters.defaults(), l);
         loop.runSweeps(4);
-        // brief: up, then down, ...; starting from HV off the bottom is nearer
+        // issue 2: up, then down, ...; starting from HV off the bottom is nearer
         for (int sweep = 0; sweep < 4; sweep++) {
             List<RecordingListener.Step> steps = l.steps.subList(sweep * 128, (sweep + 1) * 128);
             for (int k = 0; k < 128; k++) {
@@ -94,7 +94,7 @@ class StepOrderingTest {
         int highBefore = 0; // HV off at start
         for (RecordingListener.Step s : l.steps) {
             int change = Math.max(Math.abs(s.dacLow() - lowBefore), Math.abs(s.dacHigh() - highBefore));
-            // brief: settle = fixedSettleMicros + (max rail change in codes * settleMicrosPerCodeQ8 >> 8)
+            // issue 2: settle = fixedSettleMicros + (max rail change in codes * settleMicrosPerCodeQ8 >> 8)
             assertEquals(1000 + ((change * 256) >> 8), s.settleMicros());
             assertEquals(8, s.periods());
             lowBefore = s.dacLow();

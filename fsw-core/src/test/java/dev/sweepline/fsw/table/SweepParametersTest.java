@@ -10,7 +10,7 @@ class SweepParametersTest {
     void shouldAcceptDefaults() {
         SweepParameters p = SweepParameters.defaults();
         assertEquals(TableStatus.OK, p.validate());
-        // brief: dwell 8 periods, settle 1000 us, 1 us/code = 256 in Q8, re-survey K = 16
+        // issue 2: dwell 8 periods, settle 1000 us, 1 us/code = 256 in Q8, re-survey K = 16
         assertEquals(8, p.integrationPeriods);
         assertEquals(1000, p.fixedSettleMicros);
         assertEquals(256, p.settleMicrosPerCodeQ8);

@@ -53,7 +53,7 @@ class WindowTableTest {
 
     @Test
     void shouldRefuseTooManyWindows() {
-        int n = WindowTable.CAPACITY + 1; // capacity 256 (brief)
+        int n = WindowTable.CAPACITY + 1; // capacity 256 (issue 2)
         int[] lows = new int[n];
         int[] highs = new int[n];
         for (int w = 0; w < n; w++) {
@@ -74,7 +74,7 @@ class WindowTableTest {
 
     @Test
     void shouldRefuseNonMonotonicTables() {
-        // brief: lows and highs strictly increasing, low < high
+        // issue 2: lows and highs strictly increasing, low < high
         assertEquals(TableStatus.NOT_MONOTONIC, WindowTable.validate(new int[] {100, 300}, new int[] {100, 400}, 2));
         assertEquals(TableStatus.NOT_MONOTONIC, WindowTable.validate(new int[] {100, 100}, new int[] {200, 300}, 2));
         assertEquals(TableStatus.NOT_MONOTONIC, WindowTable.validate(new int[] {100, 150}, new int[] {300, 300}, 2));
@@ -101,7 +101,7 @@ class WindowTableTest {
         int[] highs = {150, 250};
         WindowTable t = WindowTable.of(lows, highs, 2);
         lows[0] = 999;
-        assertEquals(100, t.dacLow(0)); // immutable after build (brief)
+        assertEquals(100, t.dacLow(0)); // immutable after build (issue 2)
     }
 
     @Test

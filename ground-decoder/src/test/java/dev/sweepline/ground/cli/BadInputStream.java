@@ -9,7 +9,7 @@ import java.util.List;
 import java.util.Set;
 
 /**
- * A 1024-octet-frame stream (ICD §1 default) with one of each fault of the task brief, and what a
+ * A 1024-octet-frame stream (ICD §1 default) with one of each fault of the issue 3, and what a
  * correct decoder must make of it, derived from the construction.
  */
 final class BadInputStream {

@@ -21,7 +21,7 @@ import org.junit.jupiter.api.Test;
 class DecoderFuzzTest {
     /** Recorded seed; change it only together with a note of the run that motivated it. */
     static final long SEED = 0x5EED_C1DE_2026L;
-    /** Damaging mutations required (task brief: at least 100,000). */
+    /** Damaging mutations required (issue 3: at least 100,000). */
     static final int DAMAGED_TARGET = 100_000;
     static final long T0 = 0x7FE81780L;
 

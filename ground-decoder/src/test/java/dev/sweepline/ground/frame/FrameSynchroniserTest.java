@@ -56,7 +56,7 @@ class FrameSynchroniserTest {
         assertEquals("GOOD@4 mc=5", whole.get(0));
         assertEquals("GOOD@664 mc=10", whole.get(5));
         for (int chunk : new int[] {1, 3, 131, 132, 133, 1000}) {
-            // partial reads are normal (task brief): same events for any chunking
+            // partial reads are normal (issue 3): same events for any chunking
             assertEquals(whole, run(s, chunk), "chunk " + chunk);
         }
     }

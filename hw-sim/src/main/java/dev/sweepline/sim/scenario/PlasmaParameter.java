@@ -34,7 +34,7 @@ public enum PlasmaParameter {
      */
     public static final double MAX_ANGLE_DEG = 60.0;
 
-    /** Largest He/H ratio a scenario may ask for (the brief's validity limit; real CME material stays below ~0.3). */
+    /** Largest He/H ratio a scenario may ask for (issue 2's validity limit; real CME material stays below ~0.3). */
     public static final double MAX_ABUNDANCE = 0.5;
 
     private final String eventKey;

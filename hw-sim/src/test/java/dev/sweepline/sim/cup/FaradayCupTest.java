@@ -26,7 +26,7 @@ class FaradayCupTest {
 
     @Test
     void shouldHaveTheWorkedCaseAreaInTheDemoCup() {
-        // brief: demo effective area 1 cm^2 behind four grids of 0.90 (physics.md: common practice); exact by design
+        // issue 2: demo effective area 1 cm^2 behind four grids of 0.90 (physics.md: common practice); exact by design
         CupGeometry demo = CupGeometry.demo();
         assertEquals(1e-4, demo.effectiveAreaM2(), 1e-18);
         assertEquals(0.6561, demo.gridTransmission(), 1e-15);

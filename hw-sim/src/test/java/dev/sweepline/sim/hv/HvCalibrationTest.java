@@ -10,7 +10,7 @@ class HvCalibrationTest {
 
     @Test
     void shouldBeCloseToButNotAtTheNominalScale() {
-        // brief: demo gain +0.15 %, offset -0.8 V against InstrumentConstants' nominal 0.1 V/code
+        // issue 2: demo gain +0.15 %, offset -0.8 V against InstrumentConstants' nominal 0.1 V/code
         HvCalibration demo = HvCalibration.demo();
         assertEquals(0.1 * 1.0015, demo.voltsPerCode(), 1e-15);
         assertEquals(-0.8, demo.offsetVolts(), 0.0);

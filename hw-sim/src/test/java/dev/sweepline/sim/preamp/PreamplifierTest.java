@@ -18,7 +18,7 @@ class PreamplifierTest {
     @Test
     void shouldHaveTheThreeRangesOfTheDemoInstrument() {
         // physics.md "Noise and gain ranging" / InstrumentConstants: 40 pA, 1.28 nA, 40.96 nA; R_f = 4 V / FS
-        // (brief); exact binary-decimal arithmetic, so 1e-12 relative
+        // (issue 2); exact binary-decimal arithmetic, so 1e-12 relative
         double[] fullScale = {40e-12, 1.28e-9, 40.96e-9};
         double[] ohms = {1e11, 3.125e9, 9.765625e7};
         for (int r = 0; r < InstrumentConstants.GAIN_RANGES; r++) {

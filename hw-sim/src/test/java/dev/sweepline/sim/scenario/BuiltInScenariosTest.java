@@ -28,7 +28,7 @@ class BuiltInScenariosTest {
     private static final Path DIR = Path.of("src/main/resources/scenarios");
     private static final ObjectMapper YAML = new ObjectMapper(new YAMLFactory());
 
-    /** Cinder's invented orbit (the brief): perihelion and aphelion, AU. */
+    /** Cinder's invented orbit (issue 2): perihelion and aphelion, AU. */
     private static final double PERIHELION_AU = 0.046;
     private static final double APHELION_AU = 0.73;
 
@@ -107,7 +107,7 @@ class BuiltInScenariosTest {
     @ParameterizedTest(name = "{0}")
     @MethodSource("names")
     void shouldPlaceEveryBuiltInOnCindersOrbitAndCitePhysicsMd(String name) throws IOException {
-        // Source: the brief (Cinder's invented orbit, 0.046..0.73 AU; every file cites physics.md rows).
+        // Source: issue 2 (Cinder's invented orbit, 0.046..0.73 AU; every file cites physics.md rows).
         Scenario s = ScenarioLoader.builtIn(name);
         assertTrue(s.distanceAu() >= PERIHELION_AU && s.distanceAu() <= APHELION_AU, () -> name + " " + s.distanceAu());
         assertTrue(Files.readString(DIR.resolve(name + ".yaml")).contains("physics.md"), name);
@@ -121,7 +121,7 @@ class BuiltInScenariosTest {
                     .map(n -> n.substring(0, n.length() - ".yaml".length())).sorted().toList();
             assertEquals(onDisk, ScenarioLoader.builtInNames().stream().sorted().toList());
         }
-        assertEquals("quiet-perihelion", ScenarioLoader.defaultName()); // the brief: the DEFAULT
+        assertEquals("quiet-perihelion", ScenarioLoader.defaultName()); // issue 2: the DEFAULT
         assertEquals(ScenarioLoader.defaultName(), ScenarioLoader.builtInNames().get(0)); // index.txt header
     }
 
@@ -136,11 +136,11 @@ class BuiltInScenariosTest {
         // Same row: "U/w near 3", w = sqrt(2kT/m_p); we accept 2.5..3.5 as "near".
         double wKmPerS = Math.sqrt(2 * K_B * c.protonTemperatureK() / M_P) / 1e3;
         assertBetween(2.5, 3.5, c.protonSpeedKmPerS() / wKmPerS);
-        // physics.md "He/H ~2-4.5 % in slow wind" (Aellig et al. 2001); the brief asks ~3 %.
+        // physics.md "He/H ~2-4.5 % in slow wind" (Aellig et al. 2001); issue 2 asks ~3 %.
         assertEquals(0.03, c.alphaAbundance(), 0.005);
-        assertEquals(120, s.durationSeconds(), 0.0); // the brief
+        assertEquals(120, s.durationSeconds(), 0.0); // issue 2
         assertTrue(s.jumps().isEmpty(), "quiet: no jumps");
-        // Small fluctuations: the brief; "small" taken as at most 5 % relative rms (common practice).
+        // Small fluctuations: issue 2; "small" taken as at most 5 % relative rms (common practice).
         assertTrue(s.fluctuations().densityRelativeRms() <= 0.05 && s.fluctuations().speedRelativeRms() <= 0.05);
     }
 
@@ -164,11 +164,11 @@ class BuiltInScenariosTest {
         Scenario s = ScenarioLoader.builtIn("shock-sheath");
         assertEquals(1, s.jumps().size());
         Scenario.Jump shock = s.jumps().get(0);
-        assertTrue(shock.rampSeconds() <= 1.0, "the brief: ramp <= 1 s, a survey sweep being ~1.2 s");
+        assertTrue(shock.rampSeconds() <= 1.0, "issue 2: ramp <= 1 s, a survey sweep being ~1.2 s");
         ScenarioTimeline t = s.timeline(1);
         double before = shock.atSeconds();
         double after = shock.atSeconds() + shock.rampSeconds();
-        // The brief: density x2.5, speed +35 %, temperature x3 (exact factors of the file, rounding only).
+        // issue 2: density x2.5, speed +35 %, temperature x3 (exact factors of the file, rounding only).
         assertEquals(2.5, ratio(t, PlasmaParameter.PROTON_DENSITY, before, after), 1e-12);
         assertEquals(1.35, ratio(t, PlasmaParameter.PROTON_SPEED, before, after), 1e-12);
         assertEquals(3.0, ratio(t, PlasmaParameter.PROTON_TEMPERATURE, before, after), 1e-12);
@@ -185,7 +185,7 @@ class BuiltInScenariosTest {
         ScenarioEvent speed = s.events().stream().filter(e -> e.changes(PlasmaParameter.PROTON_SPEED)).findFirst()
                 .orElseThrow();
         ScenarioTimeline t = s.timeline(1);
-        // The brief: 300 -> 650 km/s over ten minutes, default duration >= 12 min.
+        // issue 2: 300 -> 650 km/s over ten minutes, default duration >= 12 min.
         assertEquals(600, speed.rampSeconds(), 0.0);
         assertEquals(300, t.meanAt(PlasmaParameter.PROTON_SPEED, speed.atSeconds()), 1e-9);
         assertEquals(650, t.meanAt(PlasmaParameter.PROTON_SPEED, speed.endSeconds()), 1e-9);
@@ -198,9 +198,9 @@ class BuiltInScenariosTest {
 
     @Test
     void shouldGiveHeliumRichTenPercentAndObliqueFlowFifteenDegrees() {
-        // The brief: He/H 10 %; physics.md "> 8.5 % in 12 %" of CME events (Song et al. 2022).
+        // issue 2: He/H 10 %; physics.md "> 8.5 % in 12 %" of CME events (Song et al. 2022).
         assertEquals(0.10, ScenarioLoader.builtIn("helium-rich").start().alphaAbundance(), 1e-12);
-        // The brief: flow 15 deg off the normal; the angle from z is atan(sqrt(tan^2 thetaX + tan^2 thetaY)).
+        // issue 2: flow 15 deg off the normal; the angle from z is atan(sqrt(tan^2 thetaX + tan^2 thetaY)).
         PlasmaConditions c = ScenarioLoader.builtIn("oblique-flow").start();
         double tx = Math.tan(Math.toRadians(c.flowThetaXDeg()));
         double ty = Math.tan(Math.toRadians(c.flowThetaYDeg()));

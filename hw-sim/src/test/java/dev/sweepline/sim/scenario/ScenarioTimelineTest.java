@@ -12,7 +12,7 @@ import org.junit.jupiter.api.Test;
 
 /**
  * A timeline is a pure function of (scenario, seed, time): the same for a seed whatever order the times
- * come in, different between seeds. Source of the contract: the lead's bench API (ScenarioTimeline.at
+ * come in, different between seeds. Source of the contract: the bench's use of the timeline (ScenarioTimeline.at
  * "deterministic for a seed", correct for any call order). Comparisons are exact: the values are
  * computed by the same arithmetic, so any difference is a bug, not rounding.
  */

@@ -26,7 +26,7 @@ import org.junit.jupiter.api.Test;
  * time-out SAFE), and every counter is accounted for exactly by the injector's ledger.
  */
 class LinkFaultTest {
-    /** Injected bit-error rate (the brief: 1e-4). */
+    /** Injected bit-error rate (issue 5: 1e-4). */
     private static final double BER = 1e-4;
     /** Lost and duplicated octets, per octet: 3e-4 each, so that 10,000 faults come in a few seconds. */
     private static final double DROP = 3e-4;
@@ -97,7 +97,7 @@ class LinkFaultTest {
                 exec.stepsSent(), exec.repliesAccepted(), exec.sequenceErrors(), exec.timeouts(), exec.retries(),
                 exec.safeEntries());
 
-        assertTrue(in.faults() + out.faults() >= 10_000, "the brief asks for at least 10,000 injected faults");
+        assertTrue(in.faults() + out.faults() >= 10_000, "issue 5 asks for at least 10,000 injected faults");
         // the flight software reports its link's bad frames in housekeeping (telemetry ICD §5, offset 38)
         fsw.close(end);
         long[] reported = {-1};

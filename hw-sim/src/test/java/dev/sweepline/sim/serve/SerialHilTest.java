@@ -49,7 +49,7 @@ class SerialHilTest {
             waitFor(a, b);
             Scenario sc = ScenarioLoader.resolve("quiet-perihelion");
             long seed = 11; // recorded seed
-            BenchConfig config = BenchConfig.defaults(sc, seed, 20); // 20 s simulated (brief: 20-30 s)
+            BenchConfig config = BenchConfig.defaults(sc, seed, 20); // 20 s simulated (issue 5: 20-30 s)
             byte[] reference = HilRig.inProcessTelemetry(config);
 
             InstrumentServer server;
