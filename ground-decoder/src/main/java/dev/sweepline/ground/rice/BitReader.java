@@ -26,10 +26,22 @@ final class BitReader {
         return position;
     }
 
+    /** Big-endian view of 8 octets at once: the fast path of {@link #read(int)}. */
+    private static final java.lang.invoke.VarHandle LONG_BE = java.lang.invoke.MethodHandles
+            .byteArrayViewVarHandle(long[].class, java.nio.ByteOrder.BIG_ENDIAN);
+
     /** Reads an unsigned {@code count}-bit field, 0..32 bits, or {@link #TRUNCATED}. */
     long read(int count) {
         if (endBit - position < count) {
             return TRUNCATED;
+        }
+        int at = offset + (int) (position >>> 3);
+        if (count > 0 && count <= 57 && at + 8 <= data.length) {
+            // 8 octets hold the count bits wherever they start in the first: one load, two shifts
+            long word = (long) LONG_BE.get(data, at);
+            long value = (word << (position & 7)) >>> (64 - count);
+            position += count;
+            return value;
         }
         long value = 0;
         int left = count;
