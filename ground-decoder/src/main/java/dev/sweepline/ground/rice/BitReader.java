@@ -67,12 +67,22 @@ final class BitReader {
         long start = position;
         long p = position;
         while (p < endBit) {
+            int at = offset + (int) (p >>> 3);
             int bitInByte = (int) (p & 7);
-            int current = (data[offset + (int) (p >>> 3)] << bitInByte) & 0xFF;
-            if (current == 0) {
-                p += 8 - bitInByte;
+            int span;
+            long word;
+            if (at + 8 <= data.length) {
+                word = ((long) LONG_BE.get(data, at)) << bitInByte; // 64 - bitInByte real bits
+                span = 64 - bitInByte;
             } else {
-                long ones = p + Integer.numberOfLeadingZeros(current) - 24;
+                word = ((long) ((data[at] << bitInByte) & 0xFF)) << 56; // the last octets: one at a time
+                span = 8 - bitInByte;
+            }
+            if (word != 0) {
+                long ones = p + Long.numberOfLeadingZeros(word);
+                if (ones >= endBit) {
+                    return TRUNCATED; // the one lies past the stream (padding or the next field)
+                }
                 long zeros = ones - start;
                 if (zeros > maxZeros) {
                     return TOO_LONG;
@@ -80,6 +90,7 @@ final class BitReader {
                 position = ones + 1;
                 return zeros;
             }
+            p += span;
             if (p - start > maxZeros) {
                 return TOO_LONG;
             }
