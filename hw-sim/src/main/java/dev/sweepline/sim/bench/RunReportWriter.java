@@ -3,6 +3,7 @@ package dev.sweepline.sim.bench;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.SerializationFeature;
 import dev.sweepline.fsw.sweep.SweepMode;
+import dev.sweepline.sim.serve.LinkBudget;
 import java.io.IOException;
 import java.io.PrintStream;
 import java.io.Writer;
@@ -123,9 +124,8 @@ public final class RunReportWriter {
         Map<String, Object> m = new LinkedHashMap<>();
         m.put("baud", baud);
         boolean warning = false;
-        for (dev.sweepline.sim.serve.LinkBudget b : new dev.sweepline.sim.serve.LinkBudget[] {
-            dev.sweepline.sim.serve.LinkBudget.survey(config.table(), config.parameters(), baud),
-            dev.sweepline.sim.serve.LinkBudget.focus(config.table(), config.parameters(), baud)}) {
+        for (LinkBudget b : new LinkBudget[] {LinkBudget.survey(config.table(), config.parameters(), baud),
+            LinkBudget.focus(config.table(), config.parameters(), baud)}) {
             Map<String, Object> mode = new LinkedHashMap<>();
             mode.put("stepsPerSecond", round(b.stepsPerSecond(), 2));
             mode.put("octetsPerSecond", round(b.octetsPerSecond(), 1));

@@ -33,12 +33,19 @@ public final class WindowVolts {
         }
     }
 
-    /** True when these are the windows of the scheduler's active table. */
+    /** True when these are the windows of the scheduler's active table (every edge compared). */
     boolean matches(dev.sweepline.fsw.sweep.SweepScheduler scheduler, HvCalibration calibration) {
         int n = scheduler.windowCount();
-        return n == lowVolts.length && lowVolts[0] == calibration.volts(scheduler.dacLow(0))
-                && highVolts[n - 1] == calibration.volts(scheduler.dacHigh(n - 1))
-                && lowVolts[n / 2] == calibration.volts(scheduler.dacLow(n / 2));
+        if (n != lowVolts.length) {
+            return false;
+        }
+        for (int w = 0; w < n; w++) {
+            if (lowVolts[w] != calibration.volts(scheduler.dacLow(w))
+                    || highVolts[w] != calibration.volts(scheduler.dacHigh(w))) {
+                return false;
+            }
+        }
+        return true;
     }
 
     /** Number of windows. */

@@ -2,6 +2,7 @@ package dev.sweepline.sim.campaign;
 
 import dev.sweepline.sim.report.Charts;
 import dev.sweepline.sim.report.HtmlReport;
+import dev.sweepline.sim.yaml.FileFormatException;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -85,7 +86,7 @@ final class CampaignReport {
         StringBuilder b = new StringBuilder();
         for (int a = 0; a < spec.grid().size(); a++) {
             b.append(a == 0 ? "" : ", ").append(spec.grid().get(a).parameter().key()).append(' ')
-                    .append(FileFormat.number(s.values()[a]));
+                    .append(FileFormatException.number(s.values()[a]));
         }
         return b.toString();
     }
@@ -96,12 +97,5 @@ final class CampaignReport {
 
     private static String num(double v) {
         return Double.isFinite(v) ? String.format(Locale.ROOT, "%.3f", v) : "";
-    }
-
-    /** Numbers as written in the campaign file. */
-    private static final class FileFormat {
-        static String number(double v) {
-            return dev.sweepline.sim.yaml.FileFormatException.number(v);
-        }
     }
 }
