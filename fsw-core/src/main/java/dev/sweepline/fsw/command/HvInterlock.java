@@ -4,16 +4,27 @@ package dev.sweepline.fsw.command;
  * The two-step HV interlock (commands.md §2.3): HV arm opens a window of the arm time-out in which
  * HV enable is accepted; enable without a live arm is refused. SAFE (commanded, or a fault
  * response) switches the interlock off, so leaving SAFE needs arm, enable and a mode command.
- * Enabled at start (the flight software starts surveying). Time is data; one thread.
+ * OFF at power-up: a hazardous function starts inhibited (common practice for spacecraft
+ * high-voltage and actuator functions); only an explicit start-up configuration (the simulator bench)
+ * may start it enabled. Time is data; one thread.
  */
 public final class HvInterlock {
     private final long armTimeoutMicros;
-    private HvState state = HvState.ENABLED;
+    private HvState state;
     private long armDeadlineMicros;
 
-    /** An interlock whose arm lasts {@code armTimeoutMicros}. */
+    /** An interlock whose arm lasts {@code armTimeoutMicros}, OFF at start. */
     public HvInterlock(long armTimeoutMicros) {
+        this(armTimeoutMicros, false);
+    }
+
+    /**
+     * An interlock whose arm lasts {@code armTimeoutMicros}; {@code enabledAtStart} is for the
+     * simulator bench only, by explicit configuration (FlightConfig.hvEnabledAtStart).
+     */
+    public HvInterlock(long armTimeoutMicros, boolean enabledAtStart) {
         this.armTimeoutMicros = armTimeoutMicros;
+        this.state = enabledAtStart ? HvState.ENABLED : HvState.OFF;
     }
 
     /** The state at {@code nowMicros} (an arm past its time-out reads OFF). */

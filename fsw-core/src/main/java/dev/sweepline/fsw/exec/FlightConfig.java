@@ -59,4 +59,10 @@ public final class FlightConfig {
      * electronics (false until fired); true for the simulator.
      */
     public boolean hvPermitted = true;
+    /**
+     * Whether the core HV interlock (commands.md §2.3) starts ENABLED. Default false: the HV is
+     * inhibited at power-up and needs HV_ARM then HV_ENABLE (or, on a PC host, the operator's
+     * arm-then-fire). Only the simulator bench sets it, explicitly; {@code sweepline-fsw.jar run} never does.
+     */
+    public boolean hvEnabledAtStart = false;
 }

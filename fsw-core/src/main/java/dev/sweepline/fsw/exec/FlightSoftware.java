@@ -57,6 +57,8 @@ public final class FlightSoftware {
     private final FaultProtection faults;
     private final CommandProcessor commands;
     private final int restoreStatus;
+    /** The host's HV permission (arm-then-fire on real electronics; true for the simulator). */
+    private boolean hostHvPermitted;
     private long housekeepingPeriodMicros;
     /** Id of the table the scheduler sweeps with now (a commit takes effect at the next sweep boundary). */
     private int sweepTableId;
@@ -85,9 +87,10 @@ public final class FlightSoftware {
         this.scheduler = new SweepScheduler(inForce.windowTable(), inForce.sweep, new Forwarder(observer));
         this.executive = new Executive(link, scheduler, config.timeoutMarginMicros, config.maxRetries);
         this.linkHealth = healthOf(link);
-        scheduler.permitHv(config.hvPermitted);
+        this.hostHvPermitted = config.hvPermitted;
         this.faults = new FaultProtection(inForce.faults, scheduler, telemetry);
-        this.hv = new HvInterlock(config.hvArmTimeoutMicros);
+        this.hv = new HvInterlock(config.hvArmTimeoutMicros, config.hvEnabledAtStart);
+        scheduler.permitHv(hostHvPermitted && hv.enabled());
         this.commands = new CommandProcessor(new CommandAuthenticator(config.commandKey, config.authenticateCommands),
                 scheduler, hv, tables, telemetry, new Target());
         if (restoreStatus != TableManager.RESTORE_NONE) {
@@ -100,9 +103,12 @@ public final class FlightSoftware {
      * flushing. Returns work done.
      */
     public int doWork(long nowMicros) {
+        // steps ask for HV only while both the host permits it and the core interlock is enabled
+        scheduler.permitHv(hostHvPermitted && hv.enabled());
         int work = executive.doWork(nowMicros);
         if (faults.respond(executive.safeEntries(), hv.enabled(), nowMicros) == FaultProtection.SAFE_TAKEN) {
             hv.disable();
+            scheduler.permitHv(false);
         }
         if (nowMicros - nextHousekeepingMicros >= 0) {
             writeHousekeeping(nowMicros);
@@ -120,6 +126,25 @@ public final class FlightSoftware {
      */
     public int acceptTelecommand(byte[] packet, int off, int length, long nowMicros) {
         return commands.accept(packet, off, length, nowMicros);
+    }
+
+    /**
+     * The operator's arm-then-fire on a PC host (sweepline-fsw.jar run), confirmed at the console: it
+     * stands for the ground's HV_ARM and HV_ENABLE (commands.md §2.3) and gives the host's permission.
+     * Nothing else enables the HV but those two telecommands.
+     */
+    public void operatorFireHv(long nowMicros) {
+        hostHvPermitted = true;
+        hv.arm(nowMicros);
+        hv.enable(nowMicros);
+        scheduler.permitHv(true);
+    }
+
+    /** Withdraws the host's HV permission (end of a run, a signal, a link loss): steps ask for HV off. */
+    public void operatorInhibitHv() {
+        hostHvPermitted = false;
+        hv.disable();
+        scheduler.permitHv(false);
     }
 
     /**

@@ -21,12 +21,22 @@ final class FswRig {
     }
 
     FswRig() {
-        this(new FlightConfig());
+        this(benchConfig());
     }
 
-    /** A config keeping its table in {@code store}. */
-    static FlightConfig withStore(NonVolatileStore store) {
+    /**
+     * The flight defaults with the core HV interlock enabled at start, as the simulator bench
+     * configures it explicitly (the flight default is OFF, commands.md §2.3).
+     */
+    static FlightConfig benchConfig() {
         FlightConfig c = new FlightConfig();
+        c.hvEnabledAtStart = true;
+        return c;
+    }
+
+    /** A bench config keeping its table in {@code store}. */
+    static FlightConfig withStore(NonVolatileStore store) {
+        FlightConfig c = benchConfig();
         c.nonVolatileStore = store;
         return c;
     }

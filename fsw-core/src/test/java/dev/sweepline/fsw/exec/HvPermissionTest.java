@@ -47,7 +47,7 @@ class HvPermissionTest {
     }
 
     private static FlightSoftware run(boolean permitted, boolean liarMonitor, HvHonouringLink[] out) {
-        FlightConfig config = new FlightConfig();
+        FlightConfig config = FswRig.benchConfig();
         config.hvPermitted = permitted;
         FswRig rig = new FswRig();
         HvHonouringLink link = new HvHonouringLink(liarMonitor ? new ZeroMonitorLink(rig.link) : rig.link);

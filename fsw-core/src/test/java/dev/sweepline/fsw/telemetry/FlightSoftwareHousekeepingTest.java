@@ -35,6 +35,7 @@ class FlightSoftwareHousekeepingTest {
         SyntheticInstrument plasma = new SyntheticInstrument(SEED); // 1 AU slow wind, 400 km/s
         FaultyLink link = new FaultyLink(plasma, 97, 89);
         FlightConfig config = new FlightConfig();
+        config.hvEnabledAtStart = true; // as the simulator bench configures it (flight default: OFF)
         config.frameLength = 256;
         FlightSoftware fsw = new FlightSoftware(config, link, (f, off, len) ->
                 frames.add(Arrays.copyOfRange(f, off, off + len)), SweepListener.NONE);

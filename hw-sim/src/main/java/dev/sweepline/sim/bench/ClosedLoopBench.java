@@ -149,6 +149,9 @@ public final class ClosedLoopBench {
         flight.parameters = config.parameters();
         flight.frameLength = config.frameLength();
         flight.compressSpectra = config.compressSpectra();
+        // the simulator produces no high voltage: the bench starts with the core interlock enabled,
+        // by explicit configuration (the flight default is OFF, commands.md §2.3)
+        flight.hvEnabledAtStart = true;
         hooks.cycle().configure(flight, instrument);
         FlightSoftware fsw = new FlightSoftware(flight, link, hooks.frames(), recorder);
         recorder.follow(fsw.scheduler(), config.instrument().calibration());

@@ -39,6 +39,7 @@ final class HilRig {
         flight.table = config.table();
         flight.parameters = config.parameters();
         flight.frameLength = config.frameLength();
+        flight.hvEnabledAtStart = true; // as the bench: the simulator, by explicit configuration
         return flight;
     }
 
