@@ -24,6 +24,12 @@ public final class CommandCode {
     /** Table dump: 1 octet copy (0 active, 1 pending), 2 offset, 2 length (1..MAX_DUMP_OCTETS). */
     public static final int TABLE_DUMP = 0x33;
 
+    /**
+     * Authentication recovery: 4 octets, this boot's challenge (commands.md §1.4). Accepted while the
+     * anti-replay record is lost; its own sequence number becomes the new floor.
+     */
+    public static final int AUTH_RECOVER = 0x40;
+
     /** Most image octets in one table load. */
     public static final int MAX_LOAD_OCTETS = 192;
     /** Most image octets in one dump report. */
@@ -58,6 +64,9 @@ public final class CommandCode {
                 break;
             case TABLE_DUMP:
                 expected = 5;
+                break;
+            case AUTH_RECOVER:
+                expected = 4;
                 break;
             case TABLE_LOAD:
                 return argumentOctets > LOAD_HEADER_OCTETS && argumentOctets <= LOAD_HEADER_OCTETS + MAX_LOAD_OCTETS

@@ -67,7 +67,6 @@ public final class CommandProcessor {
             return reason;
         }
         accepted++;
-        auth.accepted(authSequence);
         report(REPORT_ACCEPTANCE, code, packetSequence, authSequence, CommandReason.OK, 0, 0, nowMicros);
         int detail = execute(b, off, code, Telecommand.argumentOctets(length), nowMicros);
         int status = detail >>> 8;
@@ -99,6 +98,7 @@ public final class CommandProcessor {
         switch (code) {
             case CommandCode.NO_OP:
             case CommandCode.HV_ARM:
+            case CommandCode.AUTH_RECOVER: // checked by the authenticator (challenge), nothing more to check
                 return CommandReason.OK;
             case CommandCode.SET_MODE: {
                 int mode = b[a] & 0xFF;
@@ -175,6 +175,8 @@ public final class CommandProcessor {
                 return commit(nowMicros);
             case CommandCode.TABLE_DUMP:
                 return CommandReason.OK; // the data goes into the execution report
+            case CommandCode.AUTH_RECOVER:
+                return CommandReason.OK; // the authenticator set the new floor when it accepted it
             default:
                 throw new IllegalStateException("unknown code accepted: " + code);
         }

@@ -1,8 +1,9 @@
 package dev.sweepline.fsw.command;
 
 /**
- * Reason codes of command reports (commands.md §3): 0 is success; 1..11 reject a command at
- * acceptance (nothing changes), 12..14 are failures found while executing an accepted one. Plain
+ * Reason codes of command reports (commands.md §3): 0 is success; 1..11, 15 and 16 reject a command
+ * at acceptance (nothing changes but the consumed sequence number of an authentic command), 12..13
+ * are failures found while executing an accepted one, 14 either. Plain
  * ints so that they are reported and counted without allocation.
  */
 public final class CommandReason {
@@ -34,15 +35,22 @@ public final class CommandReason {
     public static final int TABLE_CORRUPT = 12;
     /** Execution: the image is intact but a value is out of range (detail: the table or fault code). */
     public static final int TABLE_INVALID = 13;
-    /** Execution: the table was committed but the non-volatile store refused to write it. */
+    /**
+     * Execution: the table was committed but the non-volatile store refused to write it. Acceptance:
+     * the consumed sequence number could not be made durable, so the command is not executed.
+     */
     public static final int NVM_WRITE_FAILED = 14;
+    /** The anti-replay record was lost at start-up: only AUTH_RECOVER with this boot's challenge is accepted. */
+    public static final int AUTH_LOCKED = 15;
+    /** Sequence number 0 or 0xFFFFFFFF, or more than 2^24 above the last accepted one. */
+    public static final int SEQUENCE_RANGE = 16;
     /** Number of codes (array size for per-reason counters). */
-    public static final int COUNT = 15;
+    public static final int COUNT = 17;
 
     private static final String[] NAMES = {
         "OK", "PACKET_LENGTH", "BAD_HEADER", "BAD_MAC", "REPLAY", "UNKNOWN_CODE", "ARGUMENT_LENGTH",
         "ARGUMENT_RANGE", "NOT_ARMED", "HV_NOT_ENABLED", "TABLE_NOT_VERIFIED", "TABLE_ID_MISMATCH",
-        "TABLE_CORRUPT", "TABLE_INVALID", "NVM_WRITE_FAILED",
+        "TABLE_CORRUPT", "TABLE_INVALID", "NVM_WRITE_FAILED", "AUTH_LOCKED", "SEQUENCE_RANGE",
     };
 
     private CommandReason() {

@@ -1,6 +1,7 @@
 package dev.sweepline.fsw.command;
 
 import dev.sweepline.fsw.fault.FaultMonitorId;
+import dev.sweepline.fsw.instrument.InstrumentLimits;
 import dev.sweepline.fsw.table.SweepParameters;
 import dev.sweepline.fsw.table.TableStatus;
 import dev.sweepline.fsw.table.WindowTable;
@@ -77,13 +78,14 @@ public final class TableImage {
     }
 
     /**
-     * Decodes an intact image into {@code into} and validates its values.
+     * Decodes an intact image into {@code into} and validates its values against {@code limits}.
      *
      * @return 0 when valid; {@link #CORRUPT} when not intact; else a {@link TableStatus} code
-     *         (windows or sweep parameters), or 100 + the id of a bad fault monitor entry, or 200 for a
-     *         telemetry allocation out of range. {@code into} holds the decoded values either way.
+     *         (windows, sweep parameters, instrument limits), or 100 + the id of a fault monitor entry
+     *         outside its safe range, or 200 for a telemetry allocation out of range. {@code into}
+     *         holds the decoded values either way.
      */
-    public static int decode(byte[] b, int length, ParameterTable into) {
+    public static int decode(byte[] b, int length, ParameterTable into, InstrumentLimits limits) {
         if (!intact(b, length)) {
             return CORRUPT;
         }
@@ -103,20 +105,26 @@ public final class TableImage {
             into.faults.threshold[m] = Telecommand.u16(b, p + 2);
             into.faults.limit[m] = s32(b, p + 4);
         }
-        return validate(into);
+        return validate(into, limits);
     }
 
-    /** Validates decoded values: the same codes as {@link #decode}. */
-    public static int validate(ParameterTable t) {
+    /** Validates decoded values against {@code limits}: the same codes as {@link #decode}. */
+    public static int validate(ParameterTable t, InstrumentLimits limits) {
         int status = WindowTable.validate(t.dacLow, t.dacHigh, t.windowCount);
+        if (status == TableStatus.OK) {
+            status = limits.checkLevels(t.dacLow, t.dacHigh, t.windowCount);
+        }
         if (status != TableStatus.OK) {
             return status;
         }
         status = t.sweep.validate();
+        if (status == TableStatus.OK) {
+            status = limits.checkSettle(t.sweep);
+        }
         if (status != TableStatus.OK) {
             return status;
         }
-        int fault = t.faults.validate();
+        int fault = t.faults.validateSafe();
         if (fault != 0) {
             return 100 + fault;
         }

@@ -16,6 +16,7 @@ public final class TableManager {
     public static final int RESTORE_REJECTED = 2;
 
     private final NonVolatileStore store;
+    private final dev.sweepline.fsw.instrument.InstrumentLimits limits;
     private final byte[] pending = new byte[TableImage.MAX_OCTETS];
     private final byte[] active = new byte[TableImage.MAX_OCTETS];
     private final ParameterTable decoded = new ParameterTable();
@@ -26,25 +27,32 @@ public final class TableManager {
     private int verifiedLength;
     private int lastDetail;
 
-    /** Starts with {@code startUp} active (table id 0: the built-in table), persisting to {@code store}. */
-    public TableManager(ParameterTable startUp, NonVolatileStore store) {
+    /**
+     * Starts with {@code startUp} active (table id 0: the built-in table), persisting to {@code store};
+     * every image is checked against {@code limits} before it can be verified or restored.
+     */
+    public TableManager(ParameterTable startUp, NonVolatileStore store,
+                        dev.sweepline.fsw.instrument.InstrumentLimits limits) {
         this.store = store;
+        this.limits = limits;
         activeTable.copyFrom(startUp);
         activeLength = TableImage.encode(activeTable, active);
         activeId = 0;
     }
 
     /**
-     * Restores the image kept in non-volatile memory (start-up).
+     * Restores the image kept in non-volatile memory (start-up). An empty, short, unreadable,
+     * corrupt, invalid or unsafe image is rejected (and reported by the caller as such), never taken
+     * for "nothing stored".
      *
      * @return {@link #RESTORE_NONE}, {@link #RESTORE_OK} or {@link #RESTORE_REJECTED}
      */
     public int restore() {
-        int n = store.read(pending);
-        if (n == 0) {
+        int n = store.read(NonVolatileStore.RECORD_TABLE, pending);
+        if (n == NonVolatileStore.ABSENT) {
             return RESTORE_NONE;
         }
-        if (n < 0 || TableImage.decode(pending, n, decoded) != 0) {
+        if (n < 0 || TableImage.decode(pending, n, decoded, limits) != 0) {
             return RESTORE_REJECTED;
         }
         makeActive(n);
@@ -65,7 +73,7 @@ public final class TableManager {
      */
     public int verify(int length) {
         verified = false;
-        int status = TableImage.decode(pending, length, decoded);
+        int status = TableImage.decode(pending, length, decoded, limits);
         if (status == TableImage.CORRUPT) {
             lastDetail = 0;
             return CommandReason.TABLE_CORRUPT;
@@ -109,7 +117,8 @@ public final class TableManager {
         }
         verified = false;
         makeActive(verifiedLength);
-        return store.write(active, activeLength) == NonVolatileStore.OK ? CommandReason.OK : CommandReason.NVM_WRITE_FAILED;
+        return store.write(NonVolatileStore.RECORD_TABLE, active, activeLength) == NonVolatileStore.OK
+            ? CommandReason.OK : CommandReason.NVM_WRITE_FAILED;
     }
 
     private void makeActive(int length) {

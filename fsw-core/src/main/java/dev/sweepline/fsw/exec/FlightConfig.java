@@ -2,6 +2,7 @@ package dev.sweepline.fsw.exec;
 
 import dev.sweepline.fsw.command.NonVolatileStore;
 import dev.sweepline.fsw.fault.FaultSettings;
+import dev.sweepline.fsw.instrument.InstrumentLimits;
 import dev.sweepline.fsw.table.SweepParameters;
 import dev.sweepline.fsw.table.WindowTable;
 import dev.sweepline.fsw.telemetry.TelemetryWriter;
@@ -43,8 +44,19 @@ public final class FlightConfig {
     public boolean authenticateCommands = true;
     /** How long an HV arm stays valid for an HV enable (commands.md §2.3): 10 s (common practice: seconds). */
     public long hvArmTimeoutMicros = 10_000_000L;
-    /** Where the committed table image is kept across restarts; restored from at start-up. */
+    /**
+     * Where the committed table image and the anti-replay record are kept across restarts; restored
+     * from at start-up. {@link NonVolatileStore#NONE} keeps nothing: anti-replay then holds within one run.
+     */
     public NonVolatileStore nonVolatileStore = NonVolatileStore.NONE;
+    /** The instrument's limits every table is checked against (commands.md §4.4). */
+    public InstrumentLimits instrumentLimits = InstrumentLimits.demo();
+    /**
+     * This boot's authentication-recovery challenge, 32 bits (commands.md §1.4). The host supplies it
+     * from a random source at each start (sweepline-fsw.jar: SecureRandom; the bench: drawn from the
+     * run seed, so runs stay reproducible).
+     */
+    public long bootChallenge;
 
     /** The demo command key: octets 0..31 (commands.md §1.2). */
     public static byte[] demoKey() {

@@ -6,6 +6,7 @@ import dev.sweepline.fsw.command.CommandReason;
 import dev.sweepline.fsw.command.CommandTarget;
 import dev.sweepline.fsw.command.HvInterlock;
 import dev.sweepline.fsw.command.ParameterTable;
+import dev.sweepline.fsw.command.TableImage;
 import dev.sweepline.fsw.command.TableManager;
 import dev.sweepline.fsw.fault.FaultProtection;
 import dev.sweepline.fsw.link.InstrumentLink;
@@ -43,6 +44,10 @@ public final class FlightSoftware {
     public static final int EVENT_TABLE_COMMITTED = 4;
     /** Event id of the start-up table restore: argument a = TableManager RESTORE_* code, reason = table id. */
     public static final int EVENT_TABLE_RESTORED = 5;
+    /** Event id of the start-up anti-replay restore: argument a = CommandAuthenticator restore code. */
+    public static final int EVENT_AUTH_RESTORED = 6;
+    /** Event id of a locked authenticator's challenge: a, b, reason = its 32 bits, most significant first. */
+    public static final int EVENT_AUTH_CHALLENGE = 7;
     /** Housekeeping user data octets (telemetry ICD §5). */
     public static final int HOUSEKEEPING_OCTETS = 40;
 
@@ -56,7 +61,9 @@ public final class FlightSoftware {
     private final HvInterlock hv;
     private final FaultProtection faults;
     private final CommandProcessor commands;
+    private final CommandAuthenticator authenticator;
     private final int restoreStatus;
+    private final int authRestoreStatus;
     /** The host's HV permission (arm-then-fire on real electronics; true for the simulator). */
     private boolean hostHvPermitted;
     private long housekeepingPeriodMicros;
@@ -74,10 +81,11 @@ public final class FlightSoftware {
         this.telemetry = new TelemetryWriter(config.frameLength, config.flushIntervalMicros,
                 new CucTime(config.coarseTimeAtTickZero, 0), config.compressSpectra, frames);
         ParameterTable startUp = ParameterTable.of(config.table, config.parameters);
+        requireWithinLimits(startUp, config);
         startUp.housekeepingSeconds = (int) Math.max(ParameterTable.MIN_HOUSEKEEPING_SECONDS,
                 Math.min(ParameterTable.MAX_HOUSEKEEPING_SECONDS, config.housekeepingPeriodMicros / 1_000_000L));
         startUp.faults.copyFrom(config.faults);
-        this.tables = new TableManager(startUp, config.nonVolatileStore);
+        this.tables = new TableManager(startUp, config.nonVolatileStore, config.instrumentLimits);
         this.restoreStatus = tables.restore();
         ParameterTable inForce = tables.activeTable();
         this.housekeepingPeriodMicros = restoreStatus == TableManager.RESTORE_OK
@@ -91,10 +99,20 @@ public final class FlightSoftware {
         this.faults = new FaultProtection(inForce.faults, scheduler, telemetry);
         this.hv = new HvInterlock(config.hvArmTimeoutMicros, config.hvEnabledAtStart);
         scheduler.permitHv(hostHvPermitted && hv.enabled());
-        this.commands = new CommandProcessor(new CommandAuthenticator(config.commandKey, config.authenticateCommands),
-                scheduler, hv, tables, telemetry, new Target());
+        this.authenticator = new CommandAuthenticator(config.commandKey, config.authenticateCommands,
+                config.nonVolatileStore, config.bootChallenge);
+        this.authRestoreStatus = config.authenticateCommands
+                ? authenticator.restore(restoreStatus != TableManager.RESTORE_NONE) : CommandAuthenticator.VOLATILE;
+        this.commands = new CommandProcessor(authenticator, scheduler, hv, tables, telemetry, new Target());
         if (restoreStatus != TableManager.RESTORE_NONE) {
             writeEvent(EVENT_TABLE_RESTORED, restoreStatus, 0, tables.activeId(), 0);
+        }
+        if (authRestoreStatus != CommandAuthenticator.VOLATILE) {
+            writeEvent(EVENT_AUTH_RESTORED, authRestoreStatus, 0, 0, 0);
+        }
+        if (authenticator.locked()) {
+            long c = authenticator.bootChallenge();
+            writeEvent(EVENT_AUTH_CHALLENGE, (int) (c >>> 24) & 0xFF, (int) (c >>> 16) & 0xFF, (int) c & 0xFFFF, 0);
         }
     }
 
@@ -199,6 +217,25 @@ public final class FlightSoftware {
     /** What the start-up restore found: a TableManager RESTORE_* code. */
     public int restoreStatus() {
         return restoreStatus;
+    }
+
+    /** What the start-up anti-replay restore found: a CommandAuthenticator restore code. */
+    public int authRestoreStatus() {
+        return authRestoreStatus;
+    }
+
+    /** The command authenticator (last accepted sequence, lock state, challenge). */
+    public CommandAuthenticator authenticator() {
+        return authenticator;
+    }
+
+    /** A start-up table outside the instrument's limits is a configuration error, refused at once. */
+    private static void requireWithinLimits(ParameterTable startUp, FlightConfig config) {
+        int status = TableImage.validate(startUp, config.instrumentLimits);
+        if (status != 0) {
+            throw new IllegalArgumentException("start-up table refused against the instrument's limits: code "
+                    + status + " (" + dev.sweepline.fsw.table.TableStatus.name(status) + ")");
+        }
     }
 
     /** Focus-to-survey transitions other than scheduled re-surveys. */

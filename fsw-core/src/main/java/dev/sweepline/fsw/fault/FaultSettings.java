@@ -12,6 +12,18 @@ public final class FaultSettings {
     /** Largest retry budget the table image can carry (8 bits). */
     public static final int MAX_RETRIES = 0xFF;
 
+    /**
+     * The range a parameter table may set, per monitor (commands.md §6.1): thresholds at least 1
+     * (a table may relax a monitor, never silence it) and at most these; index 0 unused.
+     */
+    static final int[] SAFE_MAX_THRESHOLD = {0, 64, 1024, 4096, 16, 4096, 64};
+    /** Smallest limit a table may set per monitor (HV: 2 V; stuck: 1 count; overrun: 1 ms). */
+    static final int[] SAFE_MIN_LIMIT = {0, 20, 0, 1, 0, 0, 1_000};
+    /** Largest limit a table may set per monitor (HV: 200 V; overrun: 1 s). */
+    static final int[] SAFE_MAX_LIMIT = {0, 2_000, 0xFFFF, 0xFFFF, 0xFFFF, 0xFFFF, 1_000_000};
+    /** Largest retry budget a table may set. */
+    public static final int SAFE_MAX_RETRIES = 16;
+
     /** Response per monitor, {@link FaultResponse} codes. */
     public final int[] response = new int[FaultMonitorId.COUNT + 1];
     /** RETRY budget per monitor before SAFE. */
@@ -54,6 +66,32 @@ public final class FaultSettings {
         System.arraycopy(other.retries, 0, retries, 0, retries.length);
         System.arraycopy(other.threshold, 0, threshold, 0, threshold.length);
         System.arraycopy(other.limit, 0, limit, 0, limit.length);
+    }
+
+    /**
+     * Checks the set against the ranges a parameter table may set (commands.md §6.1): no monitor
+     * silenced (threshold 0, response NONE), thresholds, limits and retries inside their safe ranges,
+     * and the HV-readback, link and overrun monitors ending in RETRY or SAFE (never a mere mode change).
+     *
+     * @return 0 when safe, else the id of the first monitor whose entry is outside its range
+     */
+    public int validateSafe() {
+        int basic = validate();
+        if (basic != 0) {
+            return basic;
+        }
+        for (int m = 1; m <= FaultMonitorId.COUNT; m++) {
+            boolean safetyMonitor = m == FaultMonitorId.HV_READBACK || m == FaultMonitorId.LINK_TIMEOUT
+                || m == FaultMonitorId.CYCLE_OVERRUN;
+            boolean responseOk = safetyMonitor
+                ? response[m] == FaultResponse.RETRY || response[m] == FaultResponse.SAFE
+                : response[m] != FaultResponse.NONE;
+            if (!responseOk || threshold[m] < 1 || threshold[m] > SAFE_MAX_THRESHOLD[m]
+                || limit[m] < SAFE_MIN_LIMIT[m] || limit[m] > SAFE_MAX_LIMIT[m] || retries[m] > SAFE_MAX_RETRIES) {
+                return m;
+            }
+        }
+        return 0;
     }
 
     /**

@@ -34,11 +34,18 @@ public final class TableStatus {
     public static final int BAD_ALPHA = 12;
     /** Parameter: noise model or significance outside its range. */
     public static final int BAD_NOISE = 13;
+    /** A window level lies above the instrument's modulator voltage limit (InstrumentLimits). */
+    public static final int ABOVE_VOLTAGE_LIMIT = 14;
+    /** The settle per code of rail change is shorter than the HV supply's slew limit needs. */
+    public static final int SETTLE_BELOW_SLEW = 15;
+    /** The fixed settle is shorter than the HV supply's first-order settling needs. */
+    public static final int SETTLE_TOO_SHORT = 16;
 
     private static final String[] NAMES = {
         "OK", "EMPTY", "TOO_MANY_WINDOWS", "OUT_OF_DAC_RANGE", "NOT_MONOTONIC", "MISSING_DATA",
         "BAD_INTEGRATION", "BAD_SETTLE", "BAD_BAND", "BAD_RESURVEY", "BAD_LOCK_LOSS",
-        "BAD_GAIN_THRESHOLDS", "BAD_ALPHA", "BAD_NOISE",
+        "BAD_GAIN_THRESHOLDS", "BAD_ALPHA", "BAD_NOISE", "ABOVE_VOLTAGE_LIMIT", "SETTLE_BELOW_SLEW",
+        "SETTLE_TOO_SHORT",
     };
 
     private TableStatus() {

@@ -22,7 +22,7 @@ class TableImageFieldsTest {
         byte[] image = new byte[TableImage.MAX_OCTETS];
         int n = TableImage.encode(t, image);
         ParameterTable back = new ParameterTable();
-        TableImage.decode(image, n, back);
+        TableImage.decode(image, n, back, dev.sweepline.fsw.instrument.InstrumentLimits.demo());
         for (Field f : SweepParameters.class.getFields()) {
             if (!Modifier.isStatic(f.getModifiers())) {
                 assertEquals(f.getInt(t.sweep), f.getInt(back.sweep), f.getName());

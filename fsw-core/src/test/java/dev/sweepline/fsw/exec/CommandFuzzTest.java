@@ -22,12 +22,12 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 class CommandFuzzTest {
     private static final long SEED = 0x5EED_C0DEL; // recorded seed
     private static final int PACKETS = 100_000;
-    private static final int[] KNOWN = {0x01, 0x02, 0x10, 0x11, 0x20, 0x30, 0x31, 0x32, 0x33};
+    private static final int[] KNOWN = {0x01, 0x02, 0x10, 0x11, 0x20, 0x30, 0x31, 0x32, 0x33, 0x40};
 
     /** The model: what commands.md says the flight software must do. */
     private static final class Model {
         final Mac mac;
-        long lastAuth = -1;
+        long lastAuth = 0;
         boolean hvEnabled = true;
         boolean armed;
         long armDeadline;
@@ -50,6 +50,7 @@ class CommandFuzzTest {
                 case 0x02: case 0x20: return 1;
                 case 0x31: case 0x32: return 2;
                 case 0x33: return 5;
+                case 0x40: return 4;
                 case 0x30: return -2;
                 default: return -1;
             }
@@ -74,6 +75,11 @@ class CommandFuzzTest {
             if (auth <= lastAuth) {
                 return CommandReason.REPLAY;
             }
+            // commands.md §1.3: 1..0xFFFFFFFE, at most 2^24 ahead; an authentic fresh number is consumed
+            if (auth > 0xFFFF_FFFEL || auth - lastAuth > (1L << 24)) {
+                return CommandReason.SEQUENCE_RANGE;
+            }
+            lastAuth = auth;
             int code = b[10] & 0xFF;
             int args = n - 27;
             int expected = argLength(code);
@@ -118,7 +124,6 @@ class CommandFuzzTest {
         }
 
         void apply(byte[] b, long now) {
-            lastAuth = ((long) u16(b, 6) << 16) | u16(b, 8);
             accepted++;
             reports++; // the execution report
             int code = b[10] & 0xFF;
@@ -183,6 +188,10 @@ class CommandFuzzTest {
             a[3] = 0;
         }
         long auth = rng.nextInt(10) == 0 ? Math.max(0, model.lastAuth - rng.nextInt(3)) : model.lastAuth + 1 + rng.nextInt(3);
+        if (rng.nextInt(50) == 0) { // the ends of the sequence space and of the forward window (commands.md §1.3)
+            long[] edges = {0xFFFF_FFFFL, 0xFFFF_FFFEL, model.lastAuth + (1L << 24), model.lastAuth + (1L << 24) + 1};
+            auth = Math.min(0xFFFF_FFFFL, edges[rng.nextInt(edges.length)]);
+        }
         byte[] p = tc.command(auth, code, a);
         switch (rng.nextInt(6)) {
             case 0:

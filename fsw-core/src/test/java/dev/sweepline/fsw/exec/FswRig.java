@@ -54,23 +54,40 @@ final class FswRig {
         return fsw.acceptTelecommand(packet, 0, packet.length, nowMicros);
     }
 
-    /** An in-memory non-volatile store. */
+    /** An in-memory non-volatile store: the table record in {@code content}, the auth record in {@code auth}. */
     static final class MemoryStore implements NonVolatileStore {
-        byte[] content = new byte[0];
+        /** The table record (null: never written). */
+        byte[] content;
+        /** The authentication record (null: never written). */
+        byte[] auth;
+        /** Table writes fail. */
         boolean failWrites;
+        /** Authentication-record writes fail. */
+        boolean failAuthWrites;
 
         @Override
-        public int read(byte[] into) {
-            System.arraycopy(content, 0, into, 0, content.length);
-            return content.length;
+        public int read(int record, byte[] into) {
+            byte[] r = record == RECORD_TABLE ? content : auth;
+            if (r == null) {
+                return ABSENT;
+            }
+            if (r.length == 0) {
+                return EMPTY;
+            }
+            System.arraycopy(r, 0, into, 0, r.length);
+            return r.length;
         }
 
         @Override
-        public int write(byte[] from, int length) {
-            if (failWrites) {
-                return -1;
+        public int write(int record, byte[] from, int length) {
+            if (record == RECORD_TABLE ? failWrites : failAuthWrites) {
+                return IO_ERROR;
             }
-            content = Arrays.copyOf(from, length);
+            if (record == RECORD_TABLE) {
+                content = Arrays.copyOf(from, length);
+            } else {
+                auth = Arrays.copyOf(from, length);
+            }
             return OK;
         }
     }

@@ -98,7 +98,7 @@ class TableCommandingTest {
         t.dacLow[5] = t.dacLow[4]; // lows must rise strictly (TableStatus.NOT_MONOTONIC)
         byte[] buf = new byte[TableImage.MAX_OCTETS];
         int n = TableImage.encode(t, buf);
-        assertEquals(TableStatus.NOT_MONOTONIC, TableImage.decode(buf, n, new ParameterTable()));
+        assertEquals(TableStatus.NOT_MONOTONIC, TableImage.decode(buf, n, new ParameterTable(), dev.sweepline.fsw.instrument.InstrumentLimits.demo()));
         FswRig rig = new FswRig();
         load(rig, java.util.Arrays.copyOf(buf, n));
         rig.send(tc.command(CommandCode.TABLE_VERIFY, TcBuilder.u16(n)));
@@ -114,7 +114,10 @@ class TableCommandingTest {
         FswRig rig = new FswRig(FswRig.withStore(store));
         assertEquals(TableManager.RESTORE_REJECTED, rig.fsw.restoreStatus());
         assertEquals(128, rig.fsw.scheduler().windowCount());
-        assertEquals(1, rig.fsw.telemetry().counters().packets(Apid.EVENT)); // the restore event
+        // events: the table restore (rejected), the anti-replay restore (locked: a memory holding a table
+        // but no auth record has lost it, commands.md §1.3) and the lock's challenge
+        assertEquals(3, rig.fsw.telemetry().counters().packets(Apid.EVENT));
+        assertTrue(rig.fsw.authenticator().locked());
     }
 
     @Test
