@@ -37,12 +37,39 @@ public record CommandReport(CucTime time, int sequenceCount, int type, int comma
     private static final String[] REASONS = {
         "OK", "PACKET_LENGTH", "BAD_HEADER", "BAD_MAC", "REPLAY", "UNKNOWN_CODE", "ARGUMENT_LENGTH",
         "ARGUMENT_RANGE", "NOT_ARMED", "HV_NOT_ENABLED", "TABLE_NOT_VERIFIED", "TABLE_ID_MISMATCH",
-        "TABLE_CORRUPT", "TABLE_INVALID", "NVM_WRITE_FAILED",
+        "TABLE_CORRUPT", "TABLE_INVALID", "NVM_WRITE_FAILED", "AUTH_LOCKED", "SEQUENCE_RANGE",
+    };
+    /** Reason code of an intact image with a value out of range (commands.md §3). */
+    public static final int TABLE_INVALID = 13;
+    /** Table value codes of commands.md §4.2, the detail of TABLE_INVALID below 100. */
+    private static final String[] TABLE_VALUES = {
+        "OK", "EMPTY", "TOO_MANY_WINDOWS", "OUT_OF_DAC_RANGE", "NOT_MONOTONIC", "MISSING_DATA",
+        "BAD_INTEGRATION", "BAD_SETTLE", "BAD_BAND", "BAD_RESURVEY", "BAD_LOCK_LOSS",
+        "BAD_GAIN_THRESHOLDS", "BAD_ALPHA", "BAD_NOISE", "ABOVE_VOLTAGE_LIMIT", "SETTLE_BELOW_SLEW",
+        "SETTLE_TOO_SHORT",
     };
 
     /** Name of a reason code of commands.md §3, or "UNKNOWN". */
     public static String reasonName(int code) {
         return code >= 0 && code < REASONS.length ? REASONS[code] : "UNKNOWN";
+    }
+
+    /**
+     * Name of the detail of a TABLE_INVALID report (commands.md §4.2): a table value code, a fault
+     * monitor entry outside its safe range (100 + monitor id), or the telemetry allocation (200);
+     * empty for other reports.
+     */
+    public String detailName() {
+        if (status != TABLE_INVALID) {
+            return "";
+        }
+        if (detail >= 100 && detail < 200) {
+            return "FAULT_ENTRY_" + EventReport.monitorName(detail - 100);
+        }
+        if (detail == 200) {
+            return "TELEMETRY_ALLOCATION";
+        }
+        return detail < TABLE_VALUES.length ? TABLE_VALUES[detail] : "UNKNOWN";
     }
 
     /** True for a successful report. */
@@ -53,6 +80,7 @@ public record CommandReport(CucTime time, int sequenceCount, int type, int comma
     /** A one-line description for listings. */
     public String describe() {
         return (type == ACCEPTANCE ? "acceptance" : "execution") + String.format(" code 0x%02X", commandCode)
-                + " auth " + authSequence + " " + reasonName(status) + (detail != 0 ? " detail " + detail : "");
+                + " auth " + authSequence + " " + reasonName(status) + (detail != 0 ? " detail " + detail : "")
+                + (detailName().isEmpty() ? "" : " " + detailName());
     }
 }

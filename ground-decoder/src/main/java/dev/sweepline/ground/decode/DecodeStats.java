@@ -225,6 +225,8 @@ public final class DecodeStats {
                     + EventReport.responseName(e.argumentB());
             case EventReport.TABLE_COMMITTED -> "TABLE_COMMITTED";
             case EventReport.TABLE_RESTORED -> "TABLE_RESTORED";
+            case EventReport.AUTH_RESTORED -> "AUTH_RESTORED " + EventReport.authResultName(e.argumentA());
+            case EventReport.AUTH_CHALLENGE -> "AUTH_LOCKED";
             default -> "EVENT_" + e.eventId();
         };
         eventsByKind.merge(kind, 1L, Long::sum);
@@ -233,7 +235,7 @@ public final class DecodeStats {
     /** Counts a command report under its type and status. */
     void countCommandReport(CommandReport c) {
         String kind = (c.type() == CommandReport.ACCEPTANCE ? "acceptance " : "execution ")
-                + CommandReport.reasonName(c.status());
+                + CommandReport.reasonName(c.status()) + (c.detailName().isEmpty() ? "" : " " + c.detailName());
         commandReports.merge(kind, 1L, Long::sum);
     }
 

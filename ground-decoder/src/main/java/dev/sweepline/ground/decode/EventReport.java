@@ -7,7 +7,8 @@ import dev.sweepline.ground.packet.CucTime;
  *
  * @param time          CUC time of the event
  * @param sequenceCount packet sequence count
- * @param eventId       1 mode change, 2 fault response, 4 table committed, 5 table restored at start-up
+ * @param eventId       1 mode change, 2 fault response, 4 table committed, 5 table restored at start-up,
+ *                      6 command authentication restored at start-up, 7 authentication locked (challenge)
  * @param argumentA     mode change: from-mode (0 safe, 1 survey, 2 focus); fault: monitor id; restore: result
  * @param argumentB     mode change: to-mode; fault: the response taken
  * @param reasonCode    mode change: reason code; fault: detail; table events: the table id
@@ -26,6 +27,12 @@ public record EventReport(CucTime time, int sequenceCount, int eventId, int argu
     public static final int TABLE_COMMITTED = 4;
     /** Event id of the start-up table restore (ICD §6). */
     public static final int TABLE_RESTORED = 5;
+    /** Event id of the start-up anti-replay restore: argument a = result (ICD §6). */
+    public static final int AUTH_RESTORED = 6;
+    /** Event id of a locked authenticator's challenge: a, b, reason = its 32 bits (ICD §6). */
+    public static final int AUTH_CHALLENGE = 7;
+
+    private static final String[] AUTH_RESULTS = {"RESTORED", "NEW_MEMORY", "LOCKED"};
 
     private static final String[] MONITORS = {
         "?", "HV_READBACK", "ADC_SATURATION", "STUCK_CHANNEL", "LINK_TIMEOUT", "PEAK_LOST", "CYCLE_OVERRUN",
@@ -42,6 +49,16 @@ public record EventReport(CucTime time, int sequenceCount, int eventId, int argu
         return code >= 0 && code < RESPONSES.length ? RESPONSES[code] : "UNKNOWN";
     }
 
+    /** Name of an anti-replay restore result (ICD §6 event 6), or "UNKNOWN". */
+    public static String authResultName(int code) {
+        return code >= 0 && code < AUTH_RESULTS.length ? AUTH_RESULTS[code] : "UNKNOWN";
+    }
+
+    /** The 32-bit challenge of an AUTH_CHALLENGE event (a, b, reason, most significant first). */
+    public long challenge() {
+        return ((long) (argumentA & 0xFF) << 24) | ((argumentB & 0xFF) << 16) | (reasonCode & 0xFFFF);
+    }
+
     /** A one-line description for listings. */
     public String describe() {
         if (eventId == MODE_CHANGE) {
@@ -55,6 +72,12 @@ public record EventReport(CucTime time, int sequenceCount, int eventId, int argu
         }
         if (eventId == TABLE_RESTORED) {
             return String.format("table restore result %d id 0x%04X", argumentA, reasonCode);
+        }
+        if (eventId == AUTH_RESTORED) {
+            return "command authentication restore " + authResultName(argumentA);
+        }
+        if (eventId == AUTH_CHALLENGE) {
+            return String.format("command authentication LOCKED: recovery challenge 0x%08X", challenge());
         }
         return "event " + eventId + " a=" + argumentA + " b=" + argumentB + " reason " + reasonCode;
     }

@@ -152,6 +152,10 @@ public final class ClosedLoopBench {
         // the simulator produces no high voltage: the bench starts with the core interlock enabled,
         // by explicit configuration (the flight default is OFF, commands.md §2.3)
         flight.hvEnabledAtStart = true;
+        // the recovery challenge is drawn from the run seed so that runs stay reproducible; the PC
+        // host draws it from SecureRandom (commands.md §1.4)
+        flight.bootChallenge = new java.util.SplittableRandom(instrumentSeed(config.seed()) ^ 0x6368616CL).nextLong()
+                & 0xFFFF_FFFFL;
         hooks.cycle().configure(flight, instrument);
         FlightSoftware fsw = new FlightSoftware(flight, link, hooks.frames(), recorder);
         recorder.follow(fsw.scheduler(), config.instrument().calibration());

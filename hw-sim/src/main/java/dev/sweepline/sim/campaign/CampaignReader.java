@@ -1,5 +1,10 @@
 package dev.sweepline.sim.campaign;
 
+import dev.sweepline.fsw.command.ParameterTable;
+import dev.sweepline.fsw.command.TableImage;
+import dev.sweepline.fsw.instrument.InstrumentLimits;
+import dev.sweepline.fsw.table.TableStatus;
+import dev.sweepline.fsw.table.WindowTable;
 import dev.sweepline.sim.scenario.PlasmaParameter;
 import dev.sweepline.sim.scenario.Scenario;
 import dev.sweepline.sim.scenario.ScenarioLoader;
@@ -66,16 +71,31 @@ public final class CampaignReader {
             throw new FileFormatException(file, top.required("grid").line(), "grid",
                     spec.setCount() + " sets x " + runs + " runs is more than " + MAX_RUNS + " runs");
         }
-        // every set must be a parameter table the flight software accepts
+        // every set must be a parameter table the flight software accepts, within the instrument's limits
+        InstrumentLimits limits = InstrumentLimits.demo();
         for (int s = 0; s < spec.setCount(); s++) {
-            int status = spec.parameters(s).validate();
+            ParameterTable table = ParameterTable.of(WindowTable.defaultTable(), spec.parameters(s));
+            int status = TableImage.validate(table, limits);
             if (status != 0) {
                 throw new FileFormatException(file, top.required("grid").line(), "grid",
                         "set " + s + " " + java.util.Arrays.toString(spec.setValues(s)) + " is refused by the flight software: "
-                                + dev.sweepline.fsw.table.TableStatus.name(status));
+                                + TableStatus.name(status) + limitHint(status, limits));
             }
         }
         return spec;
+    }
+
+    /** What the instrument needs, for a refusal against its limits. */
+    private static String limitHint(int status, InstrumentLimits limits) {
+        return switch (status) {
+            case TableStatus.SETTLE_BELOW_SLEW -> " (the HV supply's slew limit needs settleMicrosPerCode >= "
+                    + limits.minSettleMicrosPerCodeQ8 / 256.0 + ")";
+            case TableStatus.SETTLE_TOO_SHORT -> " (the HV supply's settling needs fixedSettleMicros >= "
+                    + limits.minFixedSettleMicros + ")";
+            case TableStatus.ABOVE_VOLTAGE_LIMIT -> " (the instrument is rated to "
+                    + limits.maxModulatorMillivolts / 1000 + " V)";
+            default -> "";
+        };
     }
 
     private static double positive(Section s, String key, boolean zeroAllowed) {

@@ -23,7 +23,11 @@ public enum TunableParameter {
     /** Lock lost when the peak moves by more than this many windows. */
     JUMP_WINDOWS("jumpWindows", 1, (p, v) -> p.jumpWindows = v),
     /** Edge search reach beyond a band edge, windows (0: survey at once). */
-    EDGE_SEARCH_WINDOWS("edgeSearchWindows", 1, (p, v) -> p.edgeSearchWindows = v);
+    EDGE_SEARCH_WINDOWS("edgeSearchWindows", 1, (p, v) -> p.edgeSearchWindows = v),
+    /** Settle after every level change, microseconds (at least the HV supply's settling). */
+    FIXED_SETTLE_MICROS("fixedSettleMicros", 1, (p, v) -> p.fixedSettleMicros = v),
+    /** Extra settle per DAC code of rail change, microseconds (Q8 in the flight software; at least the slew limit's). */
+    SETTLE_MICROS_PER_CODE("settleMicrosPerCode", 256, (p, v) -> p.settleMicrosPerCodeQ8 = v);
 
     private final String key;
     private final int scale;

@@ -10,6 +10,9 @@ import dev.sweepline.ground.spectrum.WindowCatalogue;
 import dev.sweepline.sim.command.CommandScript;
 import dev.sweepline.sim.command.ScriptException;
 import dev.sweepline.sim.command.ScriptRunner;
+import dev.sweepline.sim.command.GroundCommandCounter;
+import dev.sweepline.sim.command.UplinkLog;
+import dev.sweepline.fsw.command.CommandReason;
 import dev.sweepline.fsw.nvm.FileNonVolatileStore;
 import java.util.List;
 import dev.sweepline.sim.bench.ClosedLoopBench;
@@ -53,6 +56,11 @@ final class RunCommand implements Callable<Integer> {
             description = "File standing for the flight software's non-volatile memory (tables survive restarts).")
     Path nvm;
 
+    @Option(names = "--uplink-replay", paramLabel = "UPLINK_TC",
+            description = "Send the telecommand packets of an earlier run's uplink.tc again, unchanged, at their "
+                + "time tags (instead of --commands): an authenticated flight software must refuse them as REPLAY.")
+    Path uplinkReplay;
+
     @Option(names = "--no-auth", description = "Switch command authentication off (quick runs; the default is on).")
     boolean noAuth;
 
@@ -83,16 +91,29 @@ final class RunCommand implements Callable<Integer> {
         }
         BenchConfig config = BenchConfig.defaults(sc, seed, seconds)
                 .withAllocation(allocation != null ? allocation : Double.NaN);
+        if (commands != null && uplinkReplay != null) {
+            System.err.println("--commands and --uplink-replay exclude each other: give one");
+            return 2;
+        }
         ScriptRunner script = null;
         CommandScript parsed = null;
-        if (commands != null || nvm != null) {
+        if (commands != null || nvm != null || uplinkReplay != null) {
+            Path source = uplinkReplay != null ? uplinkReplay : commands;
             try {
-                parsed = commands == null ? CommandScript.parse(List.of()) : CommandScript.read(commands);
-                script = new ScriptRunner(parsed, !noAuth, nvm == null ? null : new FileNonVolatileStore(nvm));
+                parsed = uplinkReplay != null ? CommandScript.ofUplink(UplinkLog.read(uplinkReplay))
+                        : commands == null ? CommandScript.parse(List.of()) : CommandScript.read(commands);
+                // the bench's sender keeps its authentication counter beside the NVM file (commands.md §7.3)
+                GroundCommandCounter counter = nvm == null ? GroundCommandCounter.inMemory()
+                        : GroundCommandCounter.beside(nvm);
+                script = new ScriptRunner(parsed, !noAuth, nvm == null ? null : new FileNonVolatileStore(nvm), counter);
             } catch (ScriptException e) {
-                System.err.println("command script error: " + commands + ":" + e.getMessage());
+                System.err.println("command script error: " + source + ":" + e.getMessage());
+                return 2;
+            } catch (java.nio.file.NoSuchFileException e) {
+                System.err.println("command script error: no such file " + source);
                 return 2;
             }
+            parsed.warnings().forEach(w -> System.out.println("warning: " + source + ": " + w));
         }
         // the ground knows the built-in table, the one restored from the NVM file and those the script uplinks
         WindowCatalogue windows = new WindowCatalogue();
@@ -105,13 +126,13 @@ final class RunCommand implements Callable<Integer> {
         Files.createDirectories(out);
         ClosedLoopBench.Result result;
         try (ConsoleProgress progress = new ConsoleProgress("run " + sc.name());
-                FrameFile frames = new FrameFile(out.resolve("telemetry.tm"))) {
+                FrameFile frames = new FrameFile(out.resolve("telemetry.tm"));
+                UplinkLog uplink = UplinkLog.create(out.resolve(UplinkLog.FILE))) {
             result = ClosedLoopBench.run(config, progress, frames,
-                    script == null ? ClosedLoopBench.CycleHook.NONE : script);
+                    script == null ? ClosedLoopBench.CycleHook.NONE : script.recordingTo(uplink));
         }
         if (script != null) {
-            long refused = script.sent().stream().filter(x -> x.reason() != 0).count();
-            System.out.println("commands: " + script.sent().size() + " sent, " + refused + " refused");
+            printCommandOutcome(script);
         }
         RunReportWriter.printTable(result.summary(), System.out);
         Map<String, Object> extra = new LinkedHashMap<>();
@@ -136,5 +157,15 @@ final class RunCommand implements Callable<Integer> {
         System.out.println("wrote " + out.resolve("summary.json") + ", decisions.csv, telemetry.tm, report.html"
                 + " and the ground products in " + groundDir);
         return 0;
+    }
+
+    /** Commands sent and refused, with the count of each refusal reason. */
+    private static void printCommandOutcome(ScriptRunner script) {
+        Map<String, Long> refusals = new java.util.TreeMap<>();
+        script.sent().stream().filter(x -> x.reason() != 0)
+                .forEach(x -> refusals.merge(CommandReason.name(x.reason()), 1L, Long::sum));
+        long refused = refusals.values().stream().mapToLong(Long::longValue).sum();
+        System.out.println("commands: " + script.sent().size() + " sent, " + refused + " refused"
+                + (refusals.isEmpty() ? "" : " " + refusals));
     }
 }

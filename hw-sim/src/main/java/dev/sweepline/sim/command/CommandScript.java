@@ -3,6 +3,7 @@ package dev.sweepline.sim.command;
 import dev.sweepline.fsw.command.CommandCode;
 import dev.sweepline.fsw.command.ParameterTable;
 import dev.sweepline.fsw.command.TableImage;
+import dev.sweepline.fsw.instrument.InstrumentLimits;
 import dev.sweepline.fsw.table.SweepParameters;
 import dev.sweepline.fsw.table.WindowTable;
 import java.io.IOException;
@@ -28,15 +29,35 @@ import java.util.Locale;
  *   7.0  TABLE_DUMP 0 0 64                 # copy (0 active, 1 pending), offset, length
  *   8.0  INJECT HV_READBACK 500            # also SATURATE on|off, STUCK q code, DEAD on|off,
  *                                          #      SEQUENCE on|off, OVERRUN ticks, CLEAR
+ *   9.0  AUTH_RECOVER                      # names this boot's challenge (commands.md §1.4)
  * </pre>
+ *
+ * A table above the instrument's limits is still sent (the flight software must refuse it, and the
+ * run shows that it does); the script notes it in {@link #warnings()}.
  */
 public final class CommandScript {
     private final List<ScriptEntry> entries;
     private final List<byte[]> images;
+    private final List<String> warnings;
 
-    private CommandScript(List<ScriptEntry> entries, List<byte[]> images) {
+    private CommandScript(List<ScriptEntry> entries, List<byte[]> images, List<String> warnings) {
         this.entries = List.copyOf(entries);
         this.images = List.copyOf(images);
+        this.warnings = List.copyOf(warnings);
+    }
+
+    /** What the script sends that the flight software is expected to refuse (one line each, with the script line). */
+    public List<String> warnings() {
+        return warnings;
+    }
+
+    /** The packets of an uplink log, to be sent unchanged at their time tags (an uplink replay). */
+    public static CommandScript ofUplink(List<UplinkLog.Recorded> records) {
+        List<ScriptEntry> out = new ArrayList<>();
+        for (int i = 0; i < records.size(); i++) {
+            out.add(ScriptEntry.recorded(records.get(i).atMicros(), i + 1, records.get(i).packet()));
+        }
+        return new CommandScript(out, List.of(), List.of());
     }
 
     /** The table images the script uplinks, in order (the ground needs their windows). */
@@ -57,6 +78,7 @@ public final class CommandScript {
     /** Parses script lines. */
     public static CommandScript parse(List<String> lines) throws ScriptException {
         List<ScriptEntry> out = new ArrayList<>();
+        List<String> warnings = new ArrayList<>();
         long last = Long.MIN_VALUE;
         for (int i = 0; i < lines.size(); i++) {
             int lineNo = i + 1;
@@ -84,8 +106,11 @@ public final class CommandScript {
             }
             last = at;
             parseLine(at, lineNo, t, out);
+            if ("TABLE_LOGSPACED".equalsIgnoreCase(t[1])) {
+                warnAboveLimit(lineNo, t, warnings);
+            }
         }
-        return new CommandScript(out, images(out));
+        return new CommandScript(out, images(out), warnings);
     }
 
     private static void parseLine(long at, int line, String[] t, List<ScriptEntry> out) throws ScriptException {
@@ -94,6 +119,7 @@ public final class CommandScript {
             case "NO_OP" -> out.add(command(at, line, CommandCode.NO_OP, t, 0));
             case "HV_ARM" -> out.add(command(at, line, CommandCode.HV_ARM, t, 0));
             case "HV_ENABLE" -> out.add(command(at, line, CommandCode.HV_ENABLE, t, 0));
+            case "AUTH_RECOVER" -> out.add(command(at, line, CommandCode.AUTH_RECOVER, t, 0));
             case "SET_MODE" -> {
                 need(t, 1, line);
                 int mode = switch (t[2].toUpperCase(Locale.ROOT)) {
@@ -140,6 +166,17 @@ public final class CommandScript {
                 out.add(new ScriptEntry(at, line, -1, new byte[0], what, values));
             }
             default -> throw new ScriptException(line, "unknown verb '" + t[1] + "'");
+        }
+    }
+
+    /** Notes a log-spaced table whose top edge lies above the demo instrument's voltage limit. */
+    private static void warnAboveLimit(int line, String[] t, List<String> warnings) throws ScriptException {
+        InstrumentLimits limits = InstrumentLimits.demo();
+        long highMillivolts = number(t, 4, line) * 1000L;
+        if (highMillivolts > limits.maxModulatorMillivolts) {
+            warnings.add("line " + line + ": TABLE_LOGSPACED reaches " + number(t, 4, line) + " V, above the instrument's "
+                    + limits.maxModulatorMillivolts / 1000 + " V limit: the flight software must refuse it"
+                    + " (TABLE_INVALID ABOVE_VOLTAGE_LIMIT)");
         }
     }
 

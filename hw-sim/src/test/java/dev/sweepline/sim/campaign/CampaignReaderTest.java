@@ -29,6 +29,10 @@ class CampaignReaderTest {
         "draws: {alphaAbundance: {uniform: [0.1, 0.9]}}|5|draws.alphaAbundance|draws must lie in",
         "draws: {protonSpeed: {uniform: [400, 300]}}|5|draws.protonSpeed|upper bound",
         "grid: {resurveyEvery: [0]}|5|grid|refused by the flight software",
+        // the demo cup's HV supply slews 1 code per us and settles with tau 150 us (its description):
+        // 0.5 us per code and 300 us fixed settle are below what it needs (commands.md §4.4)
+        "grid: {settleMicrosPerCode: [1, 0.5]}|5|grid|SETTLE_BELOW_SLEW (the HV supply's slew limit",
+        "grid: {fixedSettleMicros: [1000, 300]}|5|grid|SETTLE_TOO_SHORT (the HV supply's settling",
     })
     void shouldNameFileLineAndField(String line, int lineNo, String field, String problem) {
         String head = """
