@@ -58,6 +58,28 @@ class UplinkReplayTest {
     }
 
     @Test
+    void shouldLockOnATornAntiReplayRecordAndRecoverWithThisBootsChallenge() throws IOException {
+        Path nvm = dir.resolve("nvm.bin");
+        Path table = dir.resolve("table.txt");
+        Files.writeString(table, "1.0 TABLE_LOGSPACED 64 100 3000 4\n");
+        assertEquals(0, run("run", "--minutes", "0.05", "--commands", table.toString(), "--nvm", nvm.toString(),
+                "--out", dir.resolve("r1").toString()));
+        Files.write(dir.resolve("nvm.bin.auth"), new byte[0]); // a write torn by a power loss
+        Path noOp = dir.resolve("noop.txt");
+        Files.writeString(noOp, "1.0 NO_OP\n");
+        assertEquals(0, run("run", "--minutes", "0.05", "--commands", noOp.toString(), "--nvm", nvm.toString(),
+                "--out", dir.resolve("r2").toString()));
+        assertEquals(1, reports(dir.resolve("r2")).get("acceptance AUTH_LOCKED").asLong());
+        JsonNode events = new ObjectMapper().readTree(dir.resolve("r2/ground/summary.json").toFile()).get("eventsByKind");
+        assertTrue(events.toString().contains("AUTH_LOCKED"), events.toString());
+        Path recover = dir.resolve("recover.txt");
+        Files.writeString(recover, "1.0 AUTH_RECOVER\n1.5 NO_OP\n");
+        assertEquals(0, run("run", "--minutes", "0.05", "--commands", recover.toString(), "--nvm", nvm.toString(),
+                "--out", dir.resolve("r3").toString()));
+        assertEquals(2, reports(dir.resolve("r3")).get("acceptance OK").asLong());
+    }
+
+    @Test
     void shouldReportAnUnsafeTableRefusedInTheGroundsSummary() throws IOException {
         Path script = dir.resolve("unsafe.txt");
         Files.writeString(script, "3.0 TABLE_LOGSPACED 64 100 6400 4\n");
