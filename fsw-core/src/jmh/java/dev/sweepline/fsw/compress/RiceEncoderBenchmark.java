@@ -56,7 +56,7 @@ public class RiceEncoderBenchmark {
                 spectrum[window * QUADRANTS + quadrant] = (int) Math.max(0, Math.min(65_535, value));
             }
         }
-        encoder = new RiceEncoder(RiceParameters.of(16, 16, 32, true, false), SAMPLES);
+        encoder = new RiceEncoder(RiceParameters.of(16, 16, 32, true, false, false), SAMPLES);
         out = new byte[(int) encoder.maxEncodedBytes(SAMPLES)];
     }
 

@@ -73,14 +73,22 @@ public final class BitWriter {
     }
 
     /**
+     * Zero-fills to the next byte boundary; writes nothing when already on one. The end of a padded
+     * reference sample interval and the end of the stream (CCSDS 121.0-B) both use it.
+     */
+    public void padToOctet() {
+        if (pendingBits > 0) {
+            writeBits(0, 8 - pendingBits);
+        }
+    }
+
+    /**
      * Ends the stream: zero-fills the last byte (CCSDS 121.0-B, end of stream).
      *
      * @return bytes written since {@link #wrap}, or {@link #OVERFLOW}
      */
     public int finish() {
-        if (pendingBits > 0) {
-            writeBits(0, 8 - pendingBits);
-        }
+        padToOctet();
         return overflow ? OVERFLOW : position - start;
     }
 

@@ -10,9 +10,12 @@ package dev.sweepline.fsw.compress;
  * the last sample (its mapped values are 0), so the decoder needs the sample count.
  *
  * <pre>
- *   stream  = CDS CDS ... CDS fill
+ *   stream  = interval interval ... interval fill
+ *   interval = CDS CDS ... CDS [pad]        (r blocks; the last interval may be shorter)
  *   CDS     = ID [reference sample, n bits, first block of an interval] data
  *   zero run: ID 0 + '0' [ref] FS(m-1) for m = 1..4, FS(4) = rest of segment/interval, FS(m) for m &gt;= 5
+ *   pad     = 0..7 zero bits to the next octet, only with {@link RiceParameters#padIntervalsToOctet()}
+ *             (libaec "pad RSI"); after the last interval it coincides with the stream's fill
  * </pre>
  *
  * <p>All buffers are sized in the constructor; {@link #encode} allocates nothing, uses no floating
@@ -38,6 +41,7 @@ public final class RiceEncoder {
     private final int blockSize;
     private final int intervalBlocks;
     private final boolean preprocessed;
+    private final boolean padIntervals;
     private final long maxSample;
     private final long[] mapped;
     private final BitWriter writer = new BitWriter();
@@ -61,6 +65,7 @@ public final class RiceEncoder {
         this.blockSize = parameters.blockSize();
         this.intervalBlocks = parameters.referenceIntervalBlocks();
         this.preprocessed = parameters.preprocessed();
+        this.padIntervals = parameters.padIntervalsToOctet();
         this.maxSample = parameters.maxSample();
         this.mapped = new long[blockSize];
         this.blockCoder = new RiceBlockCoder(parameters);
@@ -73,12 +78,14 @@ public final class RiceEncoder {
 
     /**
      * Largest stream, in bytes, that {@code sampleCount} samples can give: every block with no
-     * compression (no option chosen is longer, and a zero-block CDS is shorter for J &gt;= 8).
+     * compression (no option chosen is longer, and a zero-block CDS is shorter for J &gt;= 8), plus
+     * at most 7 fill bits per reference sample interval when intervals are padded, else at the end.
      */
     public long maxEncodedBytes(int sampleCount) {
         long blocks = (sampleCount + (long) blockSize - 1) / blockSize;
         long bits = blocks * (parameters.idBits() + (long) blockSize * bitsPerSample);
-        return (bits + 7) / 8;
+        long fillRuns = padIntervals ? (blocks + intervalBlocks - 1) / intervalBlocks : 1;
+        return (bits + 7 * Math.max(1, fillRuns)) / 8;
     }
 
     /**
@@ -132,6 +139,11 @@ public final class RiceEncoder {
                     writeZeroRun(false);
                 }
                 blockCoder.encode(mapped, reference, refSample, writer);
+            }
+            if (padIntervals && blockInInterval + 1 == intervalBlocks) {
+                // the interval's last CDS is written (a zero run is closed at an interval end):
+                // zero-fill so that the next interval starts on an octet
+                writer.padToOctet();
             }
         }
         int written = writer.finish();

@@ -3,6 +3,10 @@ package dev.sweepline.fsw.compress;
 /**
  * An immutable, validated CCSDS 121.0-B (adaptive Rice coder) parameter set, and the quantities
  * derived from it that the encoder needs: option-ID width, largest split position, largest sample.
+ * Besides n, J, r, preprocessing and the option set it carries one stream-format option, padding of
+ * each reference sample interval to an octet (libaec's "pad RSI" flag, {@code aec -p}): off, the
+ * intervals follow each other bit to bit and only the stream's end is zero-filled; on, the bit
+ * stream is also zero-filled to the next octet after the last coded data set of every interval.
  *
  * <p>Built once at start-up from the parameter table. {@link #check} gives the reason a set is
  * refused without throwing; {@link #of} is for sets already known to be valid.
@@ -31,17 +35,19 @@ public final class RiceParameters {
     private final int referenceIntervalBlocks;
     private final boolean preprocessed;
     private final boolean restrictedSet;
+    private final boolean padIntervalsToOctet;
     private final int idBits;
     private final int maxSplitK;
     private final long maxSample;
 
     private RiceParameters(int bitsPerSample, int blockSize, int referenceIntervalBlocks,
-                           boolean preprocessed, boolean restrictedSet) {
+                           boolean preprocessed, boolean restrictedSet, boolean padIntervalsToOctet) {
         this.bitsPerSample = bitsPerSample;
         this.blockSize = blockSize;
         this.referenceIntervalBlocks = referenceIntervalBlocks;
         this.preprocessed = preprocessed;
         this.restrictedSet = restrictedSet;
+        this.padIntervalsToOctet = padIntervalsToOctet;
         this.idBits = idBitsFor(bitsPerSample, restrictedSet);
         // The ID space holds split positions up to 2^idBits - 3; beyond n - 2 a split block is never
         // shorter than the no-compression block, so the encoder does not try those.
@@ -57,10 +63,15 @@ public final class RiceParameters {
      * @param referenceIntervalBlocks r, blocks per reference sample interval, 1..4096
      * @param preprocessed            true for the unit-delay predictor and mapper (unsigned samples)
      * @param restrictedSet           true for the restricted code-option set (n at most 4)
+     * @param padIntervalsToOctet     true to zero-fill the stream to an octet at the end of every
+     *                                reference sample interval (libaec "pad RSI"); either value goes
+     *                                with every n, J, r, preprocessing and option set, so it is
+     *                                never a reason for refusal
      * @return {@link RiceParameterCheck#OK} or the first reason the set is refused
      */
     public static RiceParameterCheck check(int bitsPerSample, int blockSize, int referenceIntervalBlocks,
-                                           boolean preprocessed, boolean restrictedSet) {
+                                           boolean preprocessed, boolean restrictedSet,
+                                           boolean padIntervalsToOctet) {
         if (bitsPerSample < 1 || bitsPerSample > MAX_BITS_PER_SAMPLE) {
             return RiceParameterCheck.BITS_PER_SAMPLE_OUT_OF_RANGE;
         }
@@ -83,13 +94,14 @@ public final class RiceParameters {
      *                                  (a start-up programming error; table input goes through {@link #check})
      */
     public static RiceParameters of(int bitsPerSample, int blockSize, int referenceIntervalBlocks,
-                                    boolean preprocessed, boolean restrictedSet) {
+                                    boolean preprocessed, boolean restrictedSet, boolean padIntervalsToOctet) {
         RiceParameterCheck result = check(bitsPerSample, blockSize, referenceIntervalBlocks, preprocessed,
-                restrictedSet);
+                restrictedSet, padIntervalsToOctet);
         if (result != RiceParameterCheck.OK) {
             throw new IllegalArgumentException("Rice parameters refused: " + result);
         }
-        return new RiceParameters(bitsPerSample, blockSize, referenceIntervalBlocks, preprocessed, restrictedSet);
+        return new RiceParameters(bitsPerSample, blockSize, referenceIntervalBlocks, preprocessed, restrictedSet,
+                padIntervalsToOctet);
     }
 
     /** Width of the option ID for {@code bitsPerSample} in the basic or restricted set (table above). */
@@ -126,6 +138,15 @@ public final class RiceParameters {
     /** True for the restricted code-option set. */
     public boolean restrictedSet() {
         return restrictedSet;
+    }
+
+    /**
+     * True when every reference sample interval ends zero-filled to an octet, so each interval starts
+     * on an octet of the stream (libaec "pad RSI", {@code aec -p}); false for the plain format, where
+     * only the stream's end is zero-filled.
+     */
+    public boolean padIntervalsToOctet() {
+        return padIntervalsToOctet;
     }
 
     /** Width of the option ID in bits. */

@@ -7,7 +7,7 @@
  * the shortest of zero-block (runs, with "remainder of segment"), second extension, fundamental
  * sequence, split-sample k and no compression ({@code RiceBlockCoder}), packed MSB-first by
  * {@link dev.sweepline.fsw.compress.BitWriter}. {@link dev.sweepline.fsw.compress.RiceParameters}
- * holds the validated parameter set (n, J, r, preprocessing, restricted set).
+ * holds the validated parameter set (n, J, r, preprocessing, restricted set, interval padding).
  *
  * <h2>Decisions</h2>
  * <ul>
@@ -20,7 +20,17 @@
  *       than no compression.</li>
  *   <li>Ties: no compression, then second extension, then split-sample with the smallest k. This is
  *       the reference coders' order; with it the encoder reproduces all 72 official test streams and
- *       the small vectors of standards.md byte for byte.</li>
+ *       the small vectors of standards.md byte for byte. aec (libaec 1.0.6) is not always the same
+ *       on a split-k tie: its search starts from the previous block's k and may keep the larger, so
+ *       its streams can differ from ours in such blocks, at the same length.</li>
+ *   <li>Interval padding ({@code RiceParameters.padIntervalsToOctet}, libaec's "pad RSI", {@code aec -p}):
+ *       when on, the writer is zero-filled to an octet after the block that ends each reference
+ *       interval (any zero run is closed there first), so each interval starts on an octet; after
+ *       the last interval that fill is the end-of-stream fill, so a one-interval stream is the same
+ *       either way. There is no default: every construction names the value; the ICD's configuration
+ *       ({@code SpectrumPacker}) has it off. It is one {@code padToOctet} call per interval: no
+ *       allocation, integers only. CCSDS 121.0-B-3 has, as far as we remember, no such option, and
+ *       libaec says it "violates the standard"; it exists here to match streams written that way.</li>
  * </ul>
  *
  * <h2>Requirements and how each is verified</h2>
@@ -37,6 +47,12 @@
  *       (java.lang only).</li>
  *   <li>R5 Bad input is a status: output too small, too many samples, bad range, sample above
  *       x_max. Verified by {@code RiceEncoderSmallVectorsTest}; parameter sets by {@code RiceParametersTest}.</li>
+ *   <li>R6 Interval padding: with it on, every interval but the last ends with 0..7 zero bits to an
+ *       octet; {@code maxEncodedBytes} counts them; padded streams are allocation-free too. Verified
+ *       by {@code RiceIntervalPaddingTest} (hand-written bits, the bound, allocation), the one-interval
+ *       official streams in {@code OfficialVectorsEncodeTest}, and hw-sim
+ *       {@code AecPaddedIntervalsCrossCheckTest} ({@code aec -d -p} decodes ours; n = 8, 12, 16, every J,
+ *       r = 1, 5, 128, data ending mid-block and mid-interval) and {@code ZeroRunRoundTripTest}.</li>
  * </ol>
  *
  * <p>Threading: an encoder and its bit writer belong to one thread.

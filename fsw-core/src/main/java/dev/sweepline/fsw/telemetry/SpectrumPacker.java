@@ -33,6 +33,11 @@ public final class SpectrumPacker {
      * CompressionStudy).
      */
     public static final int BLOCK_SIZE = 8;
+    /**
+     * CCSDS 121 reference-interval padding of the ICD (§4): off. Each quadrant stream is a single
+     * reference sample interval, whose end is the stream's end, zero-filled to an octet anyway.
+     */
+    public static final boolean PAD_INTERVALS_TO_OCTET = false;
     /** Octets of the fixed header of the user data. */
     public static final int HEADER_LENGTH = 14;
     /** Flag bit: the sweep stepped downward. */
@@ -52,8 +57,8 @@ public final class SpectrumPacker {
     public SpectrumPacker(boolean compress) {
         this.compress = compress;
         int blocks = (WindowTable.CAPACITY + BLOCK_SIZE - 1) / BLOCK_SIZE;
-        this.encoder = new RiceEncoder(RiceParameters.of(BITS_PER_SAMPLE, BLOCK_SIZE, blocks, true, false),
-                WindowTable.CAPACITY);
+        this.encoder = new RiceEncoder(RiceParameters.of(BITS_PER_SAMPLE, BLOCK_SIZE, blocks, true, false,
+                PAD_INTERVALS_TO_OCTET), WindowTable.CAPACITY);
     }
 
     /** Largest user data this packer writes for a full-capacity spectrum. */

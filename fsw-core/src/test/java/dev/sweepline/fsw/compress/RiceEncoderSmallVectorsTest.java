@@ -15,7 +15,7 @@ import org.junit.jupiter.api.Test;
 class RiceEncoderSmallVectorsTest {
 
     private static byte[] encode(int[] samples, int intervalBlocks) {
-        RiceEncoder encoder = new RiceEncoder(RiceParameters.of(16, 16, intervalBlocks, true, false), 1024);
+        RiceEncoder encoder = new RiceEncoder(RiceParameters.of(16, 16, intervalBlocks, true, false, false), 1024);
         byte[] out = new byte[(int) encoder.maxEncodedBytes(samples.length)];
         int written = encoder.encode(samples, 0, samples.length, out, 0);
         return Arrays.copyOf(out, Math.max(written, 0));
@@ -60,7 +60,7 @@ class RiceEncoderSmallVectorsTest {
 
     @Test
     void shouldReportAnOutputRegionThatIsTooSmall() {
-        RiceEncoder encoder = new RiceEncoder(RiceParameters.of(16, 16, 1, true, false), 64);
+        RiceEncoder encoder = new RiceEncoder(RiceParameters.of(16, 16, 1, true, false, false), 64);
         int[] samples = new int[16];
         Arrays.fill(samples, 0x1234);
         // vector 1 needs 3 bytes (standards.md); 2 cannot hold it
@@ -70,7 +70,7 @@ class RiceEncoderSmallVectorsTest {
 
     @Test
     void shouldReportBadArgumentsAsStatus() {
-        RiceEncoder encoder = new RiceEncoder(RiceParameters.of(12, 16, 1, true, false), 32);
+        RiceEncoder encoder = new RiceEncoder(RiceParameters.of(12, 16, 1, true, false, false), 32);
         byte[] out = new byte[256];
         // limits of the API contract (RiceEncoder Javadoc)
         assertEquals(RiceEncoder.STATUS_TOO_MANY_SAMPLES, encoder.encode(new int[33], 0, 33, out, 0));

@@ -59,6 +59,15 @@ final class BitReader {
     }
 
     /**
+     * Skips to the next octet boundary of the stream (nothing when already on one) and returns the
+     * skipped bits as an unsigned value, 0 when they are all zero. The skipped bits lie in the octet
+     * of the last bit read, so this never runs past the region.
+     */
+    long skipToOctet() {
+        return read((int) (-position & 7));
+    }
+
+    /**
      * Reads a fundamental sequence codeword (zeros ended by a one) and returns the number of zeros,
      * or {@link #TRUNCATED} if the region ends first, or {@link #TOO_LONG} once more than
      * {@code maxZeros} zeros are seen (the position then stays at the codeword's start).

@@ -14,6 +14,12 @@ public enum DecodeStatus {
     FS_TOO_LONG("fundamental sequence longer than any valid value"),
     /** A decoded value lies outside the sample range (mapped value above x_max, or a bad pair). */
     VALUE_OUT_OF_RANGE("decoded value outside the sample range"),
+    /**
+     * With padded reference sample intervals, a fill bit between an interval's last coded data set
+     * and the next octet is a one (CCSDS 121.0-B fill is zero); often the sign of a stream that was
+     * not padded at all.
+     */
+    INTERVAL_FILL_NOT_ZERO("fill bits after a padded reference sample interval are not zero"),
     /** The call's arguments do not fit the arrays. */
     BAD_ARGUMENTS("offset, length or sample count outside the arrays");
 

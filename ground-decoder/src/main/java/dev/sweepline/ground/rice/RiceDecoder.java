@@ -16,6 +16,9 @@ import java.util.Arrays;
  *   1                fundamental sequence       [ref] FS(d) per sample
  *   k + 1            split-sample k             [ref] FS(d &gt;&gt; k) per sample, then the k LSBs per sample
  *   all ones         no compression             [ref] n bits per sample
+ *
+ *   padded intervals: after the last CDS of every r blocks, zero bits up to the next octet
+ *   (checked to be zero); after the last CDS of the stream, whatever fill there is is not read
  * </pre>
  *
  * <p>Bad input never throws: {@link #decode} returns a {@link DecodeResult} with the reason and the
@@ -32,6 +35,7 @@ public final class RiceDecoder {
     private final long maxSample;
     private final long allOnesId;
     private final long maxGamma;
+    private final boolean padIntervals;
     private final long[] mapped;
 
     private BitReader reader;
@@ -51,6 +55,7 @@ public final class RiceDecoder {
         this.maxSample = settings.maxSample();
         this.allOnesId = (1L << idBits) - 1;
         this.maxGamma = SecondExtension.maxGamma(n);
+        this.padIntervals = settings.padIntervalsToOctet();
         this.mapped = new long[blockSize];
     }
 
@@ -61,7 +66,8 @@ public final class RiceDecoder {
 
     /**
      * Decodes {@code sampleCount} samples from {@code in[offset .. offset+length)} into
-     * {@code out[0 .. sampleCount)}. Fill bits after the last coded data set are ignored.
+     * {@code out[0 .. sampleCount)}. Fill bits after the last coded data set are ignored; with
+     * padded intervals the fill between intervals must be zero ({@link DecodeStatus#INTERVAL_FILL_NOT_ZERO}).
      */
     public DecodeResult decode(byte[] in, int offset, int length, int sampleCount, int[] out) {
         if (in == null || out == null || offset < 0 || length < 0 || offset > in.length - length
@@ -76,8 +82,13 @@ public final class RiceDecoder {
         this.failure = null;
         int blocks = (int) (((long) sampleCount + blockSize - 1) / blockSize);
         int block = 0;
+        int intervalBlocks = settings.referenceIntervalBlocks();
         while (block < blocks && failure == null) {
             block += decodeCds(block, blocks - block);
+            // a CDS never spans an interval end (zero runs stop there), so block lands on it exactly
+            if (padIntervals && failure == null && block < blocks && block % intervalBlocks == 0) {
+                skipIntervalFill();
+            }
         }
         DecodeResult result = failure == null
                 ? new DecodeResult(DecodeStatus.OK, produced, reader.position())
@@ -123,6 +134,14 @@ public final class RiceDecoder {
         }
         long refSample = reference ? readReference() : 0;
         return failure == null && split(reference, refSample, k) ? 1 : 0;
+    }
+
+    /** Skips the zero fill that ends a padded reference sample interval; a one bit in it is a fault. */
+    private void skipIntervalFill() {
+        long position = reader.position();
+        if (reader.skipToOctet() != 0) {
+            fail(DecodeStatus.INTERVAL_FILL_NOT_ZERO, position);
+        }
     }
 
     private long readReference() {

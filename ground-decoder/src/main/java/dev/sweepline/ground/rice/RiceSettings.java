@@ -3,21 +3,29 @@ package dev.sweepline.ground.rice;
 /**
  * The CCSDS 121.0-B parameters a stream was coded with, as the telemetry ICD gives them to the
  * ground: bits per sample n, block size J, reference sample interval r in blocks, whether the
- * unit-delay predictor and mapper ran (unsigned samples), and whether the restricted option set is used.
+ * unit-delay predictor and mapper ran (unsigned samples), whether the restricted option set is used,
+ * and whether every reference sample interval is zero-filled to an octet (libaec "pad RSI").
  *
  * @param bitsPerSample           n, 1..32
  * @param blockSize               J, 8, 16, 32 or 64
  * @param referenceIntervalBlocks r, 1..4096 blocks
  * @param preprocessed            unit-delay predictor + mapper on (x_min = 0, x_max = 2^n - 1)
  * @param restrictedSet           restricted code-option set, only for n at most 4
+ * @param padIntervalsToOctet     after the last coded data set of each interval of r blocks the
+ *                                stream is zero-filled to the next octet, so every interval starts
+ *                                on an octet ({@code aec -p}); false: intervals follow bit to bit.
+ *                                Valid with every other setting
  */
 public record RiceSettings(int bitsPerSample, int blockSize, int referenceIntervalBlocks,
-                           boolean preprocessed, boolean restrictedSet) {
+                           boolean preprocessed, boolean restrictedSet, boolean padIntervalsToOctet) {
 
     /** Blocks in a zero-block segment (CCSDS 121.0-B: "remainder of segment" counts to its end). */
     public static final int SEGMENT_BLOCKS = 64;
 
-    /** Validates the set; a bad set is a configuration error, not stream input, so it throws. */
+    /**
+     * Validates the set; a bad set is a configuration error, not stream input, so it throws. The
+     * padding flag has no invalid value and no combination it is refused with.
+     */
     public RiceSettings {
         if (bitsPerSample < 1 || bitsPerSample > 32) {
             throw new IllegalArgumentException("bits per sample must be 1..32: " + bitsPerSample);
@@ -34,9 +42,9 @@ public record RiceSettings(int bitsPerSample, int blockSize, int referenceInterv
         }
     }
 
-    /** The usual set: preprocessing on, basic option set. */
+    /** The usual set, and the telemetry ICD's (§4): preprocessing on, basic option set, intervals not padded. */
     public static RiceSettings basic(int bitsPerSample, int blockSize, int referenceIntervalBlocks) {
-        return new RiceSettings(bitsPerSample, blockSize, referenceIntervalBlocks, true, false);
+        return new RiceSettings(bitsPerSample, blockSize, referenceIntervalBlocks, true, false, false);
     }
 
     /**

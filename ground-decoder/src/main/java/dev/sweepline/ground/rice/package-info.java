@@ -3,7 +3,7 @@
  *
  * <h2>What it does</h2>
  * {@link dev.sweepline.ground.rice.RiceDecoder} reads a stream coded with a given
- * {@link dev.sweepline.ground.rice.RiceSettings} (n, J, r, preprocessing, restricted set) and writes
+ * {@link dev.sweepline.ground.rice.RiceSettings} (n, J, r, preprocessing, restricted set, interval padding) and writes
  * the samples. It was written from standards.md and CCSDS 121.0-B, independently of the flight
  * encoder, and depends on no project module: golden vectors and cross-decoding keep the two honest.
  *
@@ -16,6 +16,12 @@
  *       encoder has a use for (it is longer than no compression).</li>
  *   <li>Each fundamental-sequence read has a limit - 64 for a zero run, x_max &gt;&gt; k for a split sample,
  *       the largest valid pair code for second extension - so a stream of zeros is refused quickly.</li>
+ *   <li>Interval padding ({@code RiceSettings.padIntervalsToOctet}, libaec's "pad RSI"): when on, after
+ *       the CDS that ends each interval of r blocks the reader skips to the next octet, and a one
+ *       among the skipped bits is {@code INTERVAL_FILL_NOT_ZERO} (one way a stream that was not padded
+ *       shows; it may instead fail another check or, rarely, decode to wrong samples). After the last CDS asked for,
+ *       nothing is skipped or checked, as for the end-of-stream fill. libaec's own decoder skips the
+ *       bits without looking at them; we check because fill is zero in CCSDS 121.0-B.</li>
  * </ul>
  *
  * <h2>Requirements and how each is verified</h2>
@@ -28,6 +34,12 @@
  *       {@link dev.sweepline.ground.rice.DecodeStatus} and a bit position, never an exception:
  *       truncation at every byte of every official stream, crafted faults, 2000 random garbage
  *       streams: {@code RiceDecoderBadInputTest}.</li>
+ *   <li>G5 Reads padded intervals: hand-written streams (two intervals with the first ending mid-octet,
+ *       zero runs to interval ends, a partial last interval), a one in the fill, truncation after
+ *       it: {@code RiceDecoderIntervalPaddingTest}; aec's padded streams over n = 8, 12, 16, every J,
+ *       r = 1, 5, 128: hw-sim {@code AecPaddedIntervalsCrossCheckTest}. The official set is not padded
+ *       (its only streams of two intervals, the Lowset3 forms, read as padded fail where the first
+ *       interval ends mid-octet): {@code OfficialVectorsDecodeTest}.</li>
  * </ol>
  *
  * <p>Threading: one decode at a time per decoder instance.

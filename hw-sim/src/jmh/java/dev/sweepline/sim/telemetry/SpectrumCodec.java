@@ -36,7 +36,7 @@ public interface SpectrumCodec {
      * basic option set), one stream per quadrant, each zero-filled to an octet (telemetry ICD §4).
      */
     final class Rice implements SpectrumCodec {
-        private final RiceEncoder encoder = new RiceEncoder(RiceParameters.of(16, 8, 32, true, false), 256);
+        private final RiceEncoder encoder = new RiceEncoder(RiceParameters.of(16, 8, 32, true, false, false), 256);
         private final byte[] out = new byte[(int) encoder.maxEncodedBytes(256)];
 
         @Override

@@ -28,8 +28,6 @@ class AecCrossCheckTest {
     @TempDir
     Path temp;
 
-    enum Signal { UNIFORM, SPECTRUM, ZERO_RUNS }
-
     static Stream<Arguments> cases() {
         List<Arguments> cases = new ArrayList<>();
         // issue 3's grid: n = 8, 12, 16 and J = 8, 16, 32, 64; r = 5 (short intervals, a partial last
@@ -37,7 +35,7 @@ class AecCrossCheckTest {
         for (int n : new int[] {8, 12, 16}) {
             for (int j : new int[] {8, 16, 32, 64}) {
                 for (int r : new int[] {5, 128}) {
-                    for (Signal signal : Signal.values()) {
+                    for (TestSignals.Kind signal : TestSignals.Kind.values()) {
                         cases.add(Arguments.of(n, j, r, signal));
                     }
                 }
@@ -46,30 +44,21 @@ class AecCrossCheckTest {
         return cases.stream();
     }
 
-    private static int[] signal(int n, int j, int r, Signal signal) {
+    private static int[] signal(int n, int j, int r, TestSignals.Kind signal) {
         Random random = new Random(SEED + 1000L * n + 10L * j + r + signal.ordinal());
         // whole blocks (aec pads a partial block with repeats); 2.6 intervals for r = 5, 1.6 for r = 128
         int blocks = r == 5 ? 13 : 205;
         int count = blocks * j;
-        switch (signal) {
-            case UNIFORM:
-                return TestSignals.uniform(random, count, n);
-            case SPECTRUM:
-                return TestSignals.spectrum(random, count, n);
-            case ZERO_RUNS:
-                return TestSignals.zeroRuns(random, count, n, j);
-            default:
-                throw new IllegalStateException("unknown signal " + signal);
-        }
+        return TestSignals.of(signal, random, count, n, j);
     }
 
     @ParameterizedTest(name = "n={0} J={1} r={2} {3}")
     @MethodSource("cases")
-    void shouldDecodeTheFlightStreamWithAec(int n, int j, int r, Signal kind) throws Exception {
+    void shouldDecodeTheFlightStreamWithAec(int n, int j, int r, TestSignals.Kind kind) throws Exception {
         AecTool aec = AecTool.onPathOrSkip(temp);
         int[] samples = signal(n, j, r, kind);
-        byte[] ours = RiceChain.encode(samples, n, j, r, false, true);
-        int[] back = aec.decode(ours, n, j, r, false, true);
+        byte[] ours = RiceChain.encode(samples, n, j, r, false, true, false);
+        int[] back = aec.decode(ours, n, j, r, false, true, false);
         // aec -d writes whole reference intervals (it pads the last one), so compare the data part
         assertTrue(back.length >= samples.length, "aec gave " + back.length + " of " + samples.length);
         assertArrayEquals(samples, Arrays.copyOf(back, samples.length));
@@ -77,12 +66,12 @@ class AecCrossCheckTest {
 
     @ParameterizedTest(name = "n={0} J={1} r={2} {3}")
     @MethodSource("cases")
-    void shouldDecodeTheAecStreamWithTheGroundDecoder(int n, int j, int r, Signal kind) throws Exception {
+    void shouldDecodeTheAecStreamWithTheGroundDecoder(int n, int j, int r, TestSignals.Kind kind) throws Exception {
         AecTool aec = AecTool.onPathOrSkip(temp);
         int[] samples = signal(n, j, r, kind);
-        byte[] theirs = aec.encode(samples, n, j, r, false, true);
+        byte[] theirs = aec.encode(samples, n, j, r, false, true, false);
         int[] back = new int[samples.length];
-        DecodeResult result = RiceChain.decode(theirs, samples.length, back, n, j, r, false, true);
+        DecodeResult result = RiceChain.decode(theirs, samples.length, back, n, j, r, false, true, false);
         assertTrue(result.ok(), result.describe());
         assertArrayEquals(samples, back);
     }

@@ -25,10 +25,11 @@ class FlightEncoderOfficialVectorsTest {
     Stream<DynamicTest> shouldDecodeTheFlightEncodingOfEveryRawFileWithTheGroundDecoder() {
         return Ccsds121TestSet.vectors().stream().map(v -> DynamicTest.dynamicTest(v.name(), () -> {
             int[] raw = v.samples();
-            byte[] ours = RiceChain.encode(raw, v.bitsPerSample(), v.blockSize(), v.intervalBlocks(), v.restricted(), true);
+            byte[] ours = RiceChain.encode(raw, v.bitsPerSample(), v.blockSize(), v.intervalBlocks(), v.restricted(),
+                    true, false);
             int[] back = new int[raw.length];
             DecodeResult result = RiceChain.decode(ours, raw.length, back, v.bitsPerSample(), v.blockSize(),
-                    v.intervalBlocks(), v.restricted(), true);
+                    v.intervalBlocks(), v.restricted(), true, false);
             assertTrue(result.ok(), result.describe());
             assertArrayEquals(raw, back); // lossless: exact
             // our per-block choice is the shortest option, so the stream is no longer than the
@@ -43,8 +44,10 @@ class FlightEncoderOfficialVectorsTest {
         AecTool aec = AecTool.onPathOrSkip(temp);
         return Ccsds121TestSet.vectors().stream().map(v -> DynamicTest.dynamicTest(v.name(), () -> {
             int[] raw = v.samples();
-            byte[] ours = RiceChain.encode(raw, v.bitsPerSample(), v.blockSize(), v.intervalBlocks(), v.restricted(), true);
-            int[] back = aec.decode(ours, v.bitsPerSample(), v.blockSize(), v.intervalBlocks(), v.restricted(), true);
+            byte[] ours = RiceChain.encode(raw, v.bitsPerSample(), v.blockSize(), v.intervalBlocks(), v.restricted(),
+                    true, false);
+            int[] back = aec.decode(ours, v.bitsPerSample(), v.blockSize(), v.intervalBlocks(), v.restricted(),
+                    true, false);
             // aec writes whole reference intervals; the raw files are whole intervals already
             assertArrayEquals(raw, Arrays.copyOf(back, raw.length));
         }));

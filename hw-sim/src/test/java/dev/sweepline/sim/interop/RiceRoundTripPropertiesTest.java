@@ -94,10 +94,10 @@ class RiceRoundTripPropertiesTest {
     void shouldGiveBackEverySampleExactly(@ForAll("cases") Case c) {
         int[] samples = c.samples();
         byte[] stream = RiceChain.encode(samples, c.n(), c.blockSize(), c.intervalBlocks(), c.restricted(),
-                c.preprocessed());
+                c.preprocessed(), false);
         int[] back = new int[samples.length];
         DecodeResult result = RiceChain.decode(stream, samples.length, back, c.n(), c.blockSize(),
-                c.intervalBlocks(), c.restricted(), c.preprocessed());
+                c.intervalBlocks(), c.restricted(), c.preprocessed(), false);
         assertTrue(result.ok(), result.describe());
         assertArrayEquals(samples, back);
         // the stream is used to its last CDS; only the zero fill (< 8 bits) is left (CCSDS 121.0-B end of stream)
@@ -108,7 +108,7 @@ class RiceRoundTripPropertiesTest {
     void shouldNeverBeLongerThanNoCompressionOfEveryBlock(@ForAll("cases") Case c) {
         int[] samples = c.samples();
         byte[] stream = RiceChain.encode(samples, c.n(), c.blockSize(), c.intervalBlocks(), c.restricted(),
-                c.preprocessed());
+                c.preprocessed(), false);
         long blocks = (samples.length + c.blockSize() - 1) / c.blockSize();
         int idBits = c.restricted() ? (c.n() <= 2 ? 1 : 2) : c.n() <= 8 ? 3 : c.n() <= 16 ? 4 : 5;
         // the option with the fewest bits is chosen per block (standards.md), and no compression is

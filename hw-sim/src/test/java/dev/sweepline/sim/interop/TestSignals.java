@@ -4,7 +4,24 @@ import java.util.Random;
 
 /** Seeded sample sequences for the interop tests: uniform noise, a spectrum-like peak, zero-block runs. */
 final class TestSignals {
+    /** The signals of the aec cross-checks, one per method below. */
+    enum Kind { UNIFORM, SPECTRUM, ZERO_RUNS }
+
     private TestSignals() {
+    }
+
+    /** {@code count} samples of {@code kind}: {@link #uniform}, {@link #spectrum} or {@link #zeroRuns}. */
+    static int[] of(Kind kind, Random random, int count, int n, int blockSize) {
+        switch (kind) {
+            case UNIFORM:
+                return uniform(random, count, n);
+            case SPECTRUM:
+                return spectrum(random, count, n);
+            case ZERO_RUNS:
+                return zeroRuns(random, count, n, blockSize);
+            default:
+                throw new IllegalStateException("unknown signal " + kind);
+        }
     }
 
     /** Uniform samples over 0..2^n - 1: maximal entropy, the coder falls back to no compression. */
