@@ -42,10 +42,12 @@ final class InspectCommand implements Callable<Integer> {
             return ExitCodes.UNREADABLE_INPUT;
         }
         DecodeStats s = d.stats();
-        out.printf("frame length %d%s; %d good frames (%d idle), bad %s, %d garbage octets; "
-                        + "%d survey + %d focus spectra, %d housekeeping, %d events%n",
+        out.printf("frame length %d%s; %d good frames (%d idle), bad %s, dropped %s, %d VC restarts, "
+                        + "%d garbage octets; %d survey + %d focus spectra, %d housekeeping, %d events, "
+                        + "spectrum errors %s%n",
                 d.frameOctets(), d.frameLengthDetected() ? " (detected)" : "", s.framesGood(), s.framesIdle(),
-                s.framesBad(), s.garbageOctets(), s.spectraSurvey(), s.spectraFocus(), s.housekeeping(), s.events());
+                s.framesBad(), s.framesDropped(), s.vcRestarts(), s.garbageOctets(), s.spectraSurvey(),
+                s.spectraFocus(), s.housekeeping(), s.events(), s.spectrumErrors());
         out.flush();
         return ExitCodes.OK;
     }

@@ -7,6 +7,7 @@ import dev.sweepline.ground.decode.ModeNames;
 import dev.sweepline.ground.frame.FrameReason;
 import dev.sweepline.ground.frame.TmFrameHeader;
 import dev.sweepline.ground.packet.CucTime;
+import dev.sweepline.ground.packet.FrameDrop;
 import dev.sweepline.ground.packet.PacketAnomaly;
 import dev.sweepline.ground.packet.SpacePacketHeader;
 import dev.sweepline.ground.spectrum.DecodedSpectrum;
@@ -55,6 +56,16 @@ final class InspectListing implements DecodeListener {
     @Override
     public void onMasterChannelGap(int expected, int actual, int missing) {
         out.printf("  GAP mc expected %d got %d: %d frames missing%n", expected, actual, missing);
+    }
+
+    @Override
+    public void onFrameDropped(int vcid, int vcCount, FrameDrop why) {
+        out.printf("  DROPPED vc=%d vcc=%d %s frame (fed nothing)%n", vcid, vcCount, why);
+    }
+
+    @Override
+    public void onVcRestart(int vcid, int lastVcCount, int newVcCount) {
+        out.printf("  RESTART vc=%d vcc %d -> %d: the count sequence started again%n", vcid, lastVcCount, newVcCount);
     }
 
     @Override

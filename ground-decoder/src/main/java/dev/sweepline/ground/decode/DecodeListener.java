@@ -1,6 +1,7 @@
 package dev.sweepline.ground.decode;
 
 import dev.sweepline.ground.frame.FrameReason;
+import dev.sweepline.ground.packet.FrameDrop;
 import dev.sweepline.ground.packet.PacketAnomaly;
 import dev.sweepline.ground.spectrum.DecodedSpectrum;
 import dev.sweepline.ground.spectrum.SpectrumError;
@@ -32,6 +33,14 @@ public interface DecodeListener {
 
     /** Frames of the master channel lost (MC count jump). */
     default void onMasterChannelGap(int expectedMcCount, int actualMcCount, int missing) {
+    }
+
+    /** A good frame dropped by its VC count, repeated or stale (ICD §10); it fed no packet. */
+    default void onFrameDropped(int vcid, int vcCount, FrameDrop why) {
+    }
+
+    /** The count sequence of a VC started again (ICD §10); its partial packet was dropped. */
+    default void onVcRestart(int vcid, int lastVcCount, int newVcCount) {
     }
 
     /** Packets of an APID lost (sequence count jump). */

@@ -2,6 +2,7 @@ package dev.sweepline.ground.decode;
 
 import dev.sweepline.ground.frame.FrameReason;
 import dev.sweepline.ground.packet.CucTime;
+import dev.sweepline.ground.packet.FrameDrop;
 import dev.sweepline.ground.packet.PacketAnomaly;
 import dev.sweepline.ground.spectrum.SpectrumError;
 import java.util.ArrayList;
@@ -25,6 +26,8 @@ public final class DecodeStats {
     final long[] framesByVc = new long[8];
     final EnumMap<FrameReason, Long> framesBad = new EnumMap<>(FrameReason.class);
     long garbageOctets;
+    final EnumMap<FrameDrop, Long> framesDropped = new EnumMap<>(FrameDrop.class);
+    long vcRestarts;
     final EnumMap<PacketAnomaly, Long> packetAnomalies = new EnumMap<>(PacketAnomaly.class);
     long anomalyOctets;
     final long[] packetsByApid = new long[APIDS];
@@ -87,7 +90,10 @@ public final class DecodeStats {
         return c != 0 ? c : Integer.compare(a.fine(), b.fine());
     }
 
-    /** Good frames, idle frames included. */
+    /**
+     * Frames that passed the synchroniser's checks, idle frames included, and so also those the packet
+     * layer then dropped as repeated or stale ({@link #framesDropped()}).
+     */
     public long framesGood() {
         return framesGood;
     }
@@ -110,6 +116,21 @@ public final class DecodeStats {
     /** Rejected frames of one reason. */
     public long framesBad(FrameReason r) {
         return framesBad.getOrDefault(r, 0L);
+    }
+
+    /** Good frames dropped by their VC count (ICD §10), by reason; they fed no packet and no gap. */
+    public Map<FrameDrop, Long> framesDropped() {
+        return Collections.unmodifiableMap(framesDropped);
+    }
+
+    /** Good frames dropped for one reason. */
+    public long framesDropped(FrameDrop why) {
+        return framesDropped.getOrDefault(why, 0L);
+    }
+
+    /** Times a VC's count sequence started again (ICD §10: a restart, or an outage of over 127 frames). */
+    public long vcRestarts() {
+        return vcRestarts;
     }
 
     /** Octets skipped while searching for sync. */

@@ -5,6 +5,7 @@ import dev.sweepline.ground.frame.FrameListener;
 import dev.sweepline.ground.frame.FrameReason;
 import dev.sweepline.ground.frame.FrameSynchroniser;
 import dev.sweepline.ground.frame.TmFrameHeader;
+import dev.sweepline.ground.packet.FrameDrop;
 import dev.sweepline.ground.packet.PacketAnomaly;
 import dev.sweepline.ground.packet.PacketListener;
 import dev.sweepline.ground.packet.SequenceCountTracker;
@@ -26,6 +27,8 @@ public final class TelemetryDecoder {
     private final FrameSynchroniser sync;
     private final VirtualChannelDemux demux;
     private final SequenceCountTracker sequences = new SequenceCountTracker();
+    /** VC of each APID's last packet, -1 before its first: a VC restart restarts its APIDs' counts. */
+    private final int[] vcOfApid = new int[SpacePacketHeader.IDLE_APID + 1];
     private final SpectrumPacketDecoder spectra;
 
     /**
@@ -44,6 +47,7 @@ public final class TelemetryDecoder {
         this.spectra = new SpectrumPacketDecoder(ccsds121, windows);
         this.demux = new VirtualChannelDemux(new Packets());
         this.sync = new FrameSynchroniser(config.frameOctets(), config.scid(), new Frames());
+        java.util.Arrays.fill(vcOfApid, -1);
     }
 
     /** Feeds octets; everything complete in them is reported before this returns. */
@@ -100,6 +104,7 @@ public final class TelemetryDecoder {
             if (apid == SpacePacketHeader.IDLE_APID) {
                 return;
             }
+            vcOfApid[apid] = vcid;
             int seq = SpacePacketHeader.sequenceCount(buf, off);
             int expected = sequences.expected(apid);
             int missing = sequences.observe(apid, seq);
@@ -128,6 +133,23 @@ public final class TelemetryDecoder {
         public void onMasterChannelGap(int expectedMcCount, int actualMcCount, int missing) {
             stats.mcFramesMissing += missing;
             listener.onMasterChannelGap(expectedMcCount, actualMcCount, missing);
+        }
+
+        @Override
+        public void onFrameDropped(int vcid, int vcCount, FrameDrop why) {
+            stats.framesDropped.merge(why, 1L, Long::sum);
+            listener.onFrameDropped(vcid, vcCount, why);
+        }
+
+        @Override
+        public void onVcRestart(int vcid, int lastVcCount, int newVcCount) {
+            stats.vcRestarts++;
+            for (int apid = 0; apid < vcOfApid.length; apid++) {
+                if (vcOfApid[apid] == vcid) {
+                    sequences.expectRestart(apid);
+                }
+            }
+            listener.onVcRestart(vcid, lastVcCount, newVcCount);
         }
     }
 

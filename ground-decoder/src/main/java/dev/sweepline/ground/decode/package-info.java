@@ -9,6 +9,11 @@
  * order. Idle packets are counted under APID 0x7FF (bits per APID include them) and then dropped;
  * sequence-count gaps are checked per APID except idle (the ICD does not say whether idle packets of
  * VC 0 and VC 1 share one count). APID 0x130 (command report, issue 6) is counted but not decoded.
+ * Frames dropped by their VC count ({@code framesDropped}: DUPLICATE, STALE) and restarts of a VC's count
+ * sequence ({@code vcRestarts}) are counted apart from rejected frames ({@code framesBad}, where
+ * UNKNOWN_VCID is): a dropped frame passed every check of the frame layer ({@code framesGood} includes
+ * it) but carries nothing new. After a VC restart, each APID last seen on that VC whose next sequence
+ * count is 0 starts a new sequence rather than showing a gap of up to 16,383 packets.
  *
  * <p>Requirements and how each is verified:
  * <ol>
@@ -16,7 +21,9 @@
  *       {@code GoldenFrames} were made with python3 from the ICD and are shared with fsw-core).</li>
  *   <li>D2 no exception escapes on any input, every intact frame decodes and every packet carried only
  *       by intact frames comes out: {@code DecoderFuzzTest}, recorded seed, 100,143 damaged frames among
- *       200,468 (about 1.6 s).</li>
+ *       200,468 (about 1.6 s). Repeated, stale (alone and in replayed runs) and unused-VCID frames put
+ *       into 15,233 clean frames (3,226 of them, same seed) change no packet and are counted exactly:
+ *       its injection test.</li>
  *   <li>D3 throughput: {@code FrameDecodeBenchmark} (src/jmh), 1024-octet frames carrying raw survey
  *       spectra of 128 windows, whole chain: 32.3 ± 4.6 ms per 8.42 MB, about 260 MB/s of frames on the
  *       shared 2-core machine (target 200 MB/s).</li>

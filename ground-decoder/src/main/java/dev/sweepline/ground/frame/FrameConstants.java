@@ -34,6 +34,13 @@ public final class FrameConstants {
     public static final int VC_HOUSEKEEPING = 1;
     /** Virtual channel of idle frames (ICD §2 table). */
     public static final int VC_IDLE = 7;
+    /** The VCIDs the ICD §2 table uses, one bit each (bit v for VCID v): 0, 1 and 7. */
+    public static final int VCIDS_IN_USE = (1 << VC_SCIENCE) | (1 << VC_HOUSEKEEPING) | (1 << VC_IDLE);
+
+    /** True for a VCID the ICD §2 table uses. */
+    public static boolean vcidInUse(int vcid) {
+        return ((VCIDS_IN_USE >>> vcid) & 1) != 0;
+    }
 
     private FrameConstants() {
     }

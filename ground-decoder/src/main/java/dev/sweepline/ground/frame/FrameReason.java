@@ -8,6 +8,11 @@ public enum FrameReason {
     WRONG_VERSION,
     /** SCID is not the configured spacecraft (ICD §1). */
     WRONG_SCID,
+    /**
+     * A VCID the ICD §2 does not use (2..6): under a good CRC a frame from elsewhere or a corrupted one;
+     * refused before it reaches, or starts, any VC's state.
+     */
+    UNKNOWN_VCID,
     /** Data field status not S=0, Y=0, O=0, SLI=11 (ICD §2). */
     BAD_DATA_FIELD_STATUS,
     /** Fewer than L octets between this ASM and the next ASM or the end of the stream. */

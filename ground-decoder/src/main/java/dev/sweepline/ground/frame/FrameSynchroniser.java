@@ -2,8 +2,8 @@ package dev.sweepline.ground.frame;
 
 /**
  * Frame synchroniser: finds ASM + fixed-length TM frames in a byte stream fed in any chunking,
- * checks each frame's FECF and primary header, and reports good frames and rejects to a
- * {@link FrameListener}. Bad input is reported, never thrown.
+ * checks each frame's FECF and primary header (version, SCID, VCID in use, data field status), and
+ * reports good frames and rejects to a {@link FrameListener}. Bad input is reported, never thrown.
  *
  * <p>Lock: after a frame the next ASM is expected straight away; otherwise the octets up to the next
  * ASM are skipped and reported as {@link FrameReason#GARBAGE_BEFORE_SYNC}. A frame whose FECF fails is
@@ -162,6 +162,9 @@ public final class FrameSynchroniser {
         }
         if (TmFrameHeader.scid(buf, f) != scid) {
             return FrameReason.WRONG_SCID;
+        }
+        if (!FrameConstants.vcidInUse(TmFrameHeader.vcid(buf, f))) {
+            return FrameReason.UNKNOWN_VCID;
         }
         if (!TmFrameHeader.dataFieldStatusValid(buf, f)) {
             return FrameReason.BAD_DATA_FIELD_STATUS;

@@ -18,13 +18,19 @@
  *   <li>F4 bad input is reported with a reason, never thrown, and the next good frame decodes: garbage,
  *       truncation, bit flip, wrong SCID/version ({@code FrameSynchroniserTest}, {@code DecoderFuzzTest}).</li>
  *   <li>F5 the frame length is found from the stream when not given ({@code FrameLengthDetectorTest}).</li>
+ *   <li>F6 a CRC-valid frame of a VCID the ICD §2 does not use (2..6) is rejected as
+ *       {@link dev.sweepline.ground.frame.FrameReason#UNKNOWN_VCID} and reaches no VC's state, nor the MC
+ *       count check ({@code FrameSynchroniserTest}, {@code VcFrameCountTest}, the injection test of
+ *       {@code DecoderFuzzTest}).</li>
  * </ol>
  *
  * <p>Choices: the FECF is checked before the header (a header is only trusted under a good CRC); a frame
  * whose CRC fails is searched for an ASM inside it, so that a truncated frame does not swallow the next
  * one; the ASM must match exactly (no bit-error tolerance), so a frame with a damaged ASM is skipped as
  * garbage; right after a good frame a missing ASM is also looked for up to 3 octets back, so a stream
- * that slipped by an octet or three keeps the next frame. The synchroniser reports every frame of the right SCID, including idle frames; per-VC
- * continuity is the packet layer's business.
+ * that slipped by an octet or three keeps the next frame. The synchroniser reports every frame of the
+ * right SCID and a VCID in use, including idle frames: a VCID outside the ICD's table is a header fault
+ * like a wrong SCID, so it is refused here, before any VC could start a reassembly for it. Per-VC
+ * continuity (gaps, repeats, stale frames, restarts) is the packet layer's business.
  */
 package dev.sweepline.ground.frame;

@@ -2,7 +2,10 @@ package dev.sweepline.ground.packet;
 
 /** Why the packet layer dropped octets; each is counted, none throws. */
 public enum PacketAnomaly {
-    /** A partial packet was dropped because frames of its VC were lost (VC count jump). */
+    /**
+     * A partial packet was dropped because frames of its VC were lost (VC count jump) or its VC's count
+     * sequence started again (ICD §10).
+     */
     INCOMPLETE_AT_GAP,
     /** The stream ended inside a packet. */
     INCOMPLETE_AT_END,

@@ -16,4 +16,13 @@ public interface PacketListener {
 
     /** The master channel frame count jumped: {@code missing} frames of any VC were lost. */
     void onMasterChannelGap(int expectedMcCount, int actualMcCount, int missing);
+
+    /** A good frame of VC {@code vcid} dropped by its VC count (ICD §10): it fed nothing. */
+    void onFrameDropped(int vcid, int vcCount, FrameDrop why);
+
+    /**
+     * The VC count sequence started again (ICD §10: a restart, or an outage of more than 127 frames):
+     * after {@code lastVcCount} the VC goes on from {@code newVcCount}; the partial packet was dropped.
+     */
+    void onVcRestart(int vcid, int lastVcCount, int newVcCount);
 }

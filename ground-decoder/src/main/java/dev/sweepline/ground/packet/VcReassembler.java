@@ -34,7 +34,7 @@ public final class VcReassembler {
         synced = false;
     }
 
-    /** A frame of this VC was lost: the partial packet is dropped, sync is lost. */
+    /** A frame of this VC was lost, or its count started again: the partial packet is dropped, sync is lost. */
     public void onGap() {
         drop(PacketAnomaly.INCOMPLETE_AT_GAP);
         synced = false;

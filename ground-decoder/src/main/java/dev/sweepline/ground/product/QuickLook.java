@@ -91,6 +91,8 @@ final class QuickLook {
         List<List<String>> frames = new ArrayList<>();
         frames.add(row("good frames", Long.toString(s.framesGood()) + " (" + s.framesIdle() + " idle)"));
         frames.add(row("bad frames", Long.toString(bad) + " " + s.framesBad()));
+        frames.add(row("frames dropped by VC count", s.framesDropped().toString()));
+        frames.add(row("VC count restarts", Long.toString(s.vcRestarts())));
         frames.add(row("VC frame gaps", s.frameGapCount() + " gaps, " + s.vcFramesMissing() + " frames missing"));
         frames.add(row("master-channel frames missing", Long.toString(s.mcFramesMissing())));
         frames.add(row("packet sequence gaps", s.sequenceGapCount() + " gaps, " + s.packetsMissing() + " packets missing"));

@@ -8,6 +8,7 @@ import dev.sweepline.ground.decode.FrameGap;
 import dev.sweepline.ground.decode.SequenceGap;
 import dev.sweepline.ground.decode.TelemetryDecoder;
 import dev.sweepline.ground.frame.FrameReason;
+import dev.sweepline.ground.packet.FrameDrop;
 import dev.sweepline.ground.packet.PacketAnomaly;
 import dev.sweepline.ground.spectrum.SpectrumError;
 import java.util.Map;
@@ -15,8 +16,10 @@ import java.util.Map;
 /**
  * Builds summary.json from a finished decoder. Keys: {@code input}, {@code inputOctets},
  * {@code frameLength}, {@code frameLengthDetected}, {@code framesGood}, {@code framesIdle}, {@code framesByVc},
- * {@code framesBad} (by reason), {@code garbageOctets}, {@code gaps} (frame gaps, master-channel frames
- * missing, packet sequence gaps), {@code packetAnomalies}, {@code packets} and {@code bits} (by APID, hex),
+ * {@code framesBad} (by reason, UNKNOWN_VCID among them), {@code framesDropped} (good frames dropped by
+ * their VC count: DUPLICATE, STALE; ICD §10), {@code vcRestarts}, {@code garbageOctets}, {@code gaps}
+ * (frame gaps, master-channel frames missing, packet sequence gaps), {@code packetAnomalies},
+ * {@code packets} and {@code bits} (by APID, hex),
  * {@code spectra} (by mode), {@code spectrumErrors}, {@code housekeeping}, {@code events},
  * {@code recordErrors}, {@code timeSpan}.
  */
@@ -44,6 +47,11 @@ public final class SummaryJson {
         for (FrameReason r : FrameReason.values()) {
             bad.put(r.name(), s.framesBad(r));
         }
+        ObjectNode dropped = root.putObject("framesDropped");
+        for (FrameDrop r : FrameDrop.values()) {
+            dropped.put(r.name(), s.framesDropped(r));
+        }
+        root.put("vcRestarts", s.vcRestarts());
         root.put("garbageOctets", s.garbageOctets());
         root.set("gaps", gaps(m, s));
         ObjectNode anomalies = root.putObject("packetAnomalies");

@@ -8,7 +8,8 @@ import dev.sweepline.ground.rice.RiceSettings;
 /**
  * Compression 0x01 of the telemetry ICD §4: the CCSDS 121.0-B decoder with the ICD's parameters
  * (n = 16, J = 8, preprocessor on, basic option set, one reference interval of 32 blocks, so the
- * first sample of each quadrant stream is its reference). Not thread-safe: one per decoder.
+ * first sample of each quadrant stream is its reference). A stream whose last coded data set ends before
+ * its last octet is refused (ICD §10). Not thread-safe: one per decoder.
  */
 public final class Ccsds121QuadrantDecoder implements QuadrantDecompressor {
     /** Reference sample interval of the ICD, blocks: 32 blocks of 8 cover the 256-window maximum. */
@@ -21,7 +22,8 @@ public final class Ccsds121QuadrantDecoder implements QuadrantDecompressor {
     public int decode(byte[] in, int off, int len, int sampleCount, int[] out) {
         DecodeResult r = decoder.decode(in, off, len, sampleCount, out);
         if (r.ok()) {
-            return r.samplesDecoded();
+            // fill reaches only the next octet boundary (ICD §4), so the last coded bit lies in octet Lq
+            return (r.bitPosition() + 7) / 8 < len ? ERROR_UNUSED_OCTETS : r.samplesDecoded();
         }
         return r.status() == DecodeStatus.TRUNCATED ? ERROR_SHORT_INPUT : ERROR_CORRUPT;
     }

@@ -13,6 +13,9 @@ package dev.sweepline.ground.spectrum;
  *       sample; the padding is coded, and the decoder decodes and discards it;</li>
  *   <li>the stream is zero-filled to an octet; each quadrant's stream is independent.</li>
  * </ul>
+ * The stream's length is Lq: the coded data sets and at most the 7 fill bits of its last octet, so a
+ * stream whose samples end a whole octet or more before Lq is refused with {@link #ERROR_UNUSED_OCTETS}
+ * (ICD §10).
  * Implementations are used from one thread at a time per instance.
  */
 public interface QuadrantDecompressor {
@@ -31,6 +34,8 @@ public interface QuadrantDecompressor {
     int ERROR_SHORT_INPUT = -2;
     /** Error: the stream is malformed (bad option id, bad zero-block run, a value out of range, ...). */
     int ERROR_CORRUPT = -3;
+    /** Error: the samples end a whole octet or more before the stream's stated length Lq (ICD §10). */
+    int ERROR_UNUSED_OCTETS = -4;
 
     /**
      * Decodes {@code sampleCount} samples from {@code in[off .. off+len)}.

@@ -8,14 +8,17 @@ public final class RawQuadrantDecoder implements QuadrantDecompressor {
     private RawQuadrantDecoder() {
     }
 
-    /** {@inheritDoc} The stream must be exactly {@code 2 × sampleCount} octets. */
+    /**
+     * {@inheritDoc} The stream must be exactly {@code 2 × sampleCount} octets: raw samples have no fill,
+     * so a longer one leaves octets unused (ICD §10).
+     */
     @Override
     public int decode(byte[] in, int off, int len, int sampleCount, int[] out) {
         if (len < 2 * sampleCount) {
             return ERROR_SHORT_INPUT;
         }
         if (len > 2 * sampleCount) {
-            return ERROR_CORRUPT;
+            return ERROR_UNUSED_OCTETS;
         }
         for (int i = 0; i < sampleCount; i++) {
             out[i] = ((in[off + 2 * i] & 0xFF) << 8) | (in[off + 2 * i + 1] & 0xFF);

@@ -18,8 +18,14 @@ public enum SpectrumError {
     BAD_GAIN_RANGE,
     /** Compression octet neither 0x00 nor 0x01. */
     UNKNOWN_COMPRESSION,
-    /** The quadrant decoder reported an error (or, for raw, Lq ≠ 2c). */
+    /** The quadrant decoder reported an error (or, for raw, Lq &lt; 2c). */
     DECOMPRESSION_FAILED,
+    /**
+     * A quadrant stream's samples end a whole octet or more before its stated length Lq (for raw,
+     * Lq &gt; 2c): fill is allowed only to the next octet boundary (ICD §4, §10), so under a good CRC
+     * the stream is corrupt or the two sides disagree on it.
+     */
+    UNUSED_OCTETS,
     /** Compression 0x01 but no CCSDS 121 decoder is plugged in. */
     DECOMPRESSOR_UNAVAILABLE
 }

@@ -129,9 +129,7 @@ public final class SpectrumPacketDecoder {
             }
             int got = qd.decode(pkt, p, lq, c, scratch);
             if (got != c) {
-                SpectrumError e = got == QuadrantDecompressor.ERROR_UNAVAILABLE
-                        ? SpectrumError.DECOMPRESSOR_UNAVAILABLE : SpectrumError.DECOMPRESSION_FAILED;
-                return SpectrumResult.fail(e, "quadrant " + (q + 1) + " returned " + got);
+                return SpectrumResult.fail(quadrantError(got), "quadrant " + (q + 1) + " returned " + got);
             }
             adc[q] = java.util.Arrays.copyOf(scratch, c);
             p += lq;
@@ -141,6 +139,15 @@ public final class SpectrumPacketDecoder {
         }
         return SpectrumResult.ok(build(time, apid, SpacePacketHeader.sequenceCount(pkt, off), mode, flags, sweep,
                 tableId, first, c, peak, periods, compression, gain, sat, adc));
+    }
+
+    /** The spectrum error of a quadrant decoder's error code. */
+    private static SpectrumError quadrantError(int code) {
+        return switch (code) {
+            case QuadrantDecompressor.ERROR_UNAVAILABLE -> SpectrumError.DECOMPRESSOR_UNAVAILABLE;
+            case QuadrantDecompressor.ERROR_UNUSED_OCTETS -> SpectrumError.UNUSED_OCTETS;
+            default -> SpectrumError.DECOMPRESSION_FAILED;
+        };
     }
 
     private DecodedSpectrum build(CucTime time, int apid, int seq, int mode, int flags, int sweep,

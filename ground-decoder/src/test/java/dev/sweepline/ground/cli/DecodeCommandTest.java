@@ -127,4 +127,39 @@ class DecodeCommandTest {
         assertEquals(0, GroundMain.run("decode", junk.toString(), "--out", dir.resolve("j").toString()));
         assertEquals(5, summary(dir.resolve("j")).get("garbageOctets").asInt());
     }
+
+    @Test
+    void shouldCountRepeatedStaleAndForeignFramesInSummaryJsonWithoutDuplicateRows() throws IOException {
+        // 8 survey spectra of 128 windows: 6 + 6 + 14 + 32 + 16 + 1 + 4 × (2 + 256) = 1107 octets (ICD §3, §4),
+        // so each spans two frames of 1016 data octets (ICD §1 default L = 1024)
+        dev.sweepline.ground.decode.FrameStreamBuilder b = new dev.sweepline.ground.decode.FrameStreamBuilder(1024);
+        int c = 128;
+        for (int s = 0; s < 8; s++) {
+            int[][] adc = new int[4][c];
+            for (int q = 0; q < 4; q++) {
+                java.util.Arrays.fill(adc[q], 300 + s + q);
+            }
+            b.add(0, dev.sweepline.ground.decode.TestPackets.spectrum(0x100, s, BadInputStream.T0 + s, 0, s, 0,
+                    new int[c], new boolean[c], adc));
+        }
+        b.flush(0);
+        List<byte[]> frames = new java.util.ArrayList<>(b.frames());
+        frames.add(3, frames.get(2).clone()); // a repeat (ICD §10: DUPLICATE)
+        frames.add(6, frames.get(1).clone()); // a copy four counts behind (STALE)
+        frames.add(8, dev.sweepline.ground.decode.FrameStreamBuilder.withVcid(frames.get(7), 4)); // VCID 4 unused (ICD §2)
+        Path in = Files.write(dir.resolve("repeats.tm"), dev.sweepline.ground.decode.FrameStreamBuilder.stream(frames));
+        Path out = dir.resolve("repeats");
+        assertEquals(0, GroundMain.run("decode", in.toString(), "--out", out.toString(), "--frame-length", "1024"));
+        JsonNode s = summary(out);
+        assertEquals(1, s.get("framesDropped").get("DUPLICATE").asInt());
+        assertEquals(1, s.get("framesDropped").get("STALE").asInt());
+        assertEquals(1, s.get("framesBad").get("UNKNOWN_VCID").asInt());
+        assertEquals(0, s.get("vcRestarts").asInt());
+        assertEquals(0, s.get("gaps").get("frameGapCount").asInt());
+        assertEquals(0, s.get("gaps").get("packetsMissing").asInt());
+        assertEquals(0, s.get("gaps").get("masterChannelFramesMissing").asInt());
+        // every spectrum once: 8 × 128 rows, one per window
+        assertEquals(8, s.get("spectra").get("survey").asInt());
+        assertEquals(8 * c, csv(out).size());
+    }
 }

@@ -34,4 +34,21 @@ class InspectCommandTest {
         assertTrue(out.contains("spectrum survey sweep=291 windows 40..55 peak=47.500"), out);
         assertTrue(out.contains("packet vc=1 apid=0x110 seq=   45"), out);
     }
+
+    @Test
+    void shouldListDroppedFramesAndCountThem() throws IOException {
+        java.util.List<String> frames = new java.util.ArrayList<>(java.util.List.of(GoldenFrames.STREAM));
+        frames.add(3, frames.get(2)); // the third golden frame twice (ICD §10: a repeat)
+        Path in = Files.write(dir.resolve("r.tm"), Hex.stream(frames.toArray(new String[0])));
+        StringWriter text = new StringWriter();
+        int rc = new CommandLine(new GroundMain()).setOut(new PrintWriter(text)).execute("inspect", in.toString());
+        String out = text.toString();
+        assertEquals(0, rc);
+        int vcc = dev.sweepline.ground.frame.TmFrameHeader.vcCount(Hex.bytes(frames.get(2)), 0);
+        assertTrue(out.contains("DROPPED vc=0 vcc=" + vcc + " DUPLICATE frame"), out);
+        assertTrue(out.contains("dropped {DUPLICATE=1}, 0 VC restarts"), out);
+        // the spectrum the repeated frame carries a part of comes out once (GoldenFrames: sweep 291)
+        assertEquals(1, out.lines().filter(l -> l.contains("spectrum survey sweep=291")).count());
+        assertTrue(!out.contains("GAP"), out);
+    }
 }

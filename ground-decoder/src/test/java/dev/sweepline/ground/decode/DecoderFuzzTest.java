@@ -1,5 +1,6 @@
 package dev.sweepline.ground.decode;
 
+import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import dev.sweepline.ground.spectrum.QuadrantDecompressor;
@@ -17,6 +18,10 @@ import org.junit.jupiter.api.Test;
  * about 60 % of the frames damaged (bit flips, truncation, insertion, overwrite with random octets, loss)
  * or preceded by garbage, fed in random chunks. Properties: nothing is thrown; every frame left intact
  * decodes at its offset; every packet whose frames are all intact comes out octet for octet.
+ *
+ * <p>And CRC-valid frames that must not count (ICD §10) put into clean streams: repeats, stale copies
+ * (alone and in replayed runs) and frames of unused VCIDs. Properties: the packets are exactly the clean
+ * stream's, in order, each once; the counters equal what was put in.
  */
 class DecoderFuzzTest {
     /** Recorded seed; change it only together with a note of the run that motivated it. */
@@ -26,6 +31,16 @@ class DecoderFuzzTest {
     static final long T0 = 0x7FE81780L;
 
     private enum Mutation { BIT_FLIPS, TRUNCATE, INSERT, OVERWRITE, DROP, GARBAGE_BEFORE }
+
+    /** Frames put into a clean stream that must be dropped whole (ICD §10). */
+    private enum Injection { REPEAT, STALE, STALE_RUN, FOREIGN_COPY, FOREIGN_RANDOM }
+
+    /** Batches of the injection test: about 15,000 clean frames, each decoded clean and injected. */
+    static final int INJECTION_BATCHES = 16;
+    /** The VCIDs in use (ICD §2), where stale copies come from. */
+    private static final int[] VCS = {0, 1, 7};
+    /** Chance that a frame of the clean stream is followed by injected ones. */
+    static final double INJECTION_RATE = 0.15;
 
     private final Random rnd = new Random(SEED);
     private int damaged;
@@ -49,6 +64,118 @@ class DecoderFuzzTest {
         // common practice): ~50,000 such windows (overwrite, insertion, truncation) give ~0.8 expected;
         // 8 bounds the Poisson tail below 1e-5
         assertTrue(strayGoodFrames <= 8, "stray good frames " + strayGoodFrames);
+    }
+
+    @Test
+    void shouldDropInjectedRepeatedStaleAndForeignFramesWithoutCollateralLoss() {
+        long t = System.nanoTime();
+        long[] injected = new long[Injection.values().length];
+        long frames = 0;
+        for (int batch = 0; batch < INJECTION_BATCHES; batch++) {
+            frames += runInjectionBatch(batch % 4 == 3 ? 1024 : 128, batch, injected);
+        }
+        System.out.printf("injection seed %x: %d clean frames, injected %s = %s, %d ms%n", SEED, frames,
+                java.util.Arrays.toString(Injection.values()), java.util.Arrays.toString(injected),
+                (System.nanoTime() - t) / 1_000_000);
+        for (long n : injected) {
+            assertTrue(n > 100, "every kind of injection must be exercised: " + java.util.Arrays.toString(injected));
+        }
+    }
+
+    /** One clean stream and the same with frames put in; returns the clean frame count. */
+    private int runInjectionBatch(int l, int batch, long[] injected) {
+        List<byte[]> frames = build(l).frames();
+        List<List<byte[]>> byVc = new ArrayList<>();
+        for (int v = 0; v < 8; v++) {
+            byVc.add(new ArrayList<>());
+        }
+        ByteArrayOutputStream o = new ByteArrayOutputStream();
+        long[] here = new long[Injection.values().length];
+        for (byte[] f : frames) {
+            o.writeBytes(Hex.ASM);
+            o.writeBytes(f);
+            byVc.get(dev.sweepline.ground.frame.TmFrameHeader.vcid(f, 0)).add(f);
+            if (rnd.nextDouble() < INJECTION_RATE) {
+                inject(o, f, frames, byVc, here);
+            }
+        }
+        RecordingListener clean = new RecordingListener();
+        DecodeStats cleanStats = decodeInChunks(FrameStreamBuilder.stream(frames), l, clean).stats();
+        RecordingListener dirty = new RecordingListener();
+        DecodeStats s = decodeInChunks(o.toByteArray(), l, dirty).stats();
+        String where = "batch " + batch;
+        // zero duplicates and zero collateral loss: the clean stream's packets, octet for octet, in order
+        assertEquals(clean.packets.size(), dirty.packets.size(), where + ": packets");
+        for (int i = 0; i < clean.packets.size(); i++) {
+            assertTrue(java.util.Arrays.equals(clean.packets.get(i), dirty.packets.get(i)), where + ": packet " + i);
+        }
+        assertEquals(clean.spectra.size(), dirty.spectra.size(), where + ": spectra");
+        assertEquals(clean.anomalies, dirty.anomalies, where + ": anomalies");
+        assertEquals(clean.frameGaps, dirty.frameGaps, where + ": frame gaps");
+        assertEquals(clean.sequenceGaps, dirty.sequenceGaps, where + ": sequence gaps");
+        assertEquals(cleanStats.mcFramesMissing(), s.mcFramesMissing(), where + ": MC frames missing");
+        // the counters are what was put in
+        assertEquals(here[Injection.REPEAT.ordinal()], s.framesDropped(dev.sweepline.ground.packet.FrameDrop.DUPLICATE),
+                where + ": repeats");
+        assertEquals(here[Injection.STALE.ordinal()] + here[Injection.STALE_RUN.ordinal()],
+                s.framesDropped(dev.sweepline.ground.packet.FrameDrop.STALE), where + ": stale");
+        assertEquals(here[Injection.FOREIGN_COPY.ordinal()] + here[Injection.FOREIGN_RANDOM.ordinal()],
+                s.framesBad(dev.sweepline.ground.frame.FrameReason.UNKNOWN_VCID), where + ": unused VCIDs");
+        assertEquals(0, s.vcRestarts(), where + ": restarts");
+        for (int k = 0; k < here.length; k++) {
+            injected[k] += here[k];
+        }
+        return frames.size();
+    }
+
+    /** Writes injected frames after {@code f}, the last clean frame written, and counts them by kind. */
+    private void inject(ByteArrayOutputStream o, byte[] f, List<byte[]> frames, List<List<byte[]>> byVc,
+            long[] count) {
+        Injection kind = Injection.values()[rnd.nextInt(Injection.values().length)];
+        List<byte[]> vc = byVc.get(VCS[rnd.nextInt(VCS.length)]);
+        switch (kind) {
+            case REPEAT -> write(o, f); // the frame just written, again
+            case STALE, STALE_RUN -> {
+                // a frame of one VC 1..127 counts behind its last (ICD §10); a run goes on in order
+                if (vc.size() < 2) {
+                    return;
+                }
+                int back = 1 + rnd.nextInt(Math.min(127, vc.size() - 1));
+                int run = kind == Injection.STALE ? 1 : Math.min(back, 2 + rnd.nextInt(4));
+                for (int k = 0; k < run; k++) {
+                    write(o, vc.get(vc.size() - 1 - back + k));
+                }
+                count[kind.ordinal()] += run - 1;
+            }
+            case FOREIGN_COPY -> write(o, FrameStreamBuilder.withVcid(frames.get(rnd.nextInt(frames.size())),
+                    2 + rnd.nextInt(5))); // ICD §2 uses VCIDs 0, 1, 7 only
+            case FOREIGN_RANDOM -> {
+                byte[] g = randomBytes(f.length);
+                System.arraycopy(f, 0, g, 0, 6); // a header that passes every other check (ICD §2)
+                g[4] = (byte) ((g[4] & 0xF8) | (rnd.nextInt(8)));
+                write(o, FrameStreamBuilder.withVcid(g, 2 + rnd.nextInt(5)));
+            }
+            default -> throw new IllegalStateException("unhandled injection " + kind);
+        }
+        count[kind.ordinal()]++;
+    }
+
+    private static void write(ByteArrayOutputStream o, byte[] frame) {
+        o.writeBytes(Hex.ASM);
+        o.writeBytes(frame);
+    }
+
+    /** Decodes {@code stream} of L-octet frames fed in random chunks (partial reads are normal, issue 3). */
+    private TelemetryDecoder decodeInChunks(byte[] stream, int l, DecodeListener listener) {
+        TelemetryDecoder d = new TelemetryDecoder(DecoderConfig.icdDefaults().withFrameOctets(l),
+                QuadrantDecompressor.UNAVAILABLE, listener);
+        for (int p = 0; p < stream.length; ) {
+            int n = Math.min(stream.length - p, 1 + rnd.nextInt(3000));
+            d.accept(stream, p, n);
+            p += n;
+        }
+        d.finish();
+        return d;
     }
 
     private void runBatch(int l, int batch) {
@@ -110,14 +237,7 @@ class DecoderFuzzTest {
         byte[] stream = o.toByteArray();
         frameCount += frames.size();
         Collector c = new Collector();
-        TelemetryDecoder d = new TelemetryDecoder(DecoderConfig.icdDefaults().withFrameOctets(l),
-                QuadrantDecompressor.UNAVAILABLE, c);
-        for (int p = 0; p < stream.length; ) {
-            int n = Math.min(stream.length - p, 1 + rnd.nextInt(3000));
-            d.accept(stream, p, n);
-            p += n;
-        }
-        d.finish();
+        decodeInChunks(stream, l, c);
         Set<Long> intactOffsets = new HashSet<>();
         for (int i = 0; i < frames.size(); i++) {
             if (intact[i]) {

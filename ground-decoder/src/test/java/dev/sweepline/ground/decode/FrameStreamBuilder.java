@@ -130,13 +130,38 @@ public final class FrameStreamBuilder {
 
     /** ASM + frame for every frame, concatenated. */
     public byte[] stream() {
-        byte[] s = new byte[frames.size() * (frameOctets + 4)];
+        return stream(frames);
+    }
+
+    /** ASM + frame for each of {@code frames} (all of one length), concatenated. */
+    public static byte[] stream(List<byte[]> frames) {
+        int l = frames.isEmpty() ? 0 : frames.get(0).length;
+        byte[] s = new byte[frames.size() * (l + 4)];
         int p = 0;
         for (byte[] f : frames) {
             System.arraycopy(Hex.ASM, 0, s, p, 4);
-            System.arraycopy(f, 0, s, p + 4, frameOctets);
-            p += frameOctets + 4;
+            System.arraycopy(f, 0, s, p + 4, l);
+            p += l + 4;
         }
         return s;
+    }
+
+    /**
+     * A copy of {@code frame} carrying VCID {@code vc} (CCSDS 132.0-B-3 §4.1.2.4: 3 bits after the SCID),
+     * with its FECF recomputed so that it passes the CRC (CCSDS 132.0-B-3 §4.1.6).
+     */
+    public static byte[] withVcid(byte[] frame, int vc) {
+        byte[] f = frame.clone();
+        f[1] = (byte) ((f[1] & 0xF1) | (vc << 1));
+        return withFecf(f);
+    }
+
+    /** {@code frame} (changed in place) with its FECF recomputed over all octets before it. */
+    public static byte[] withFecf(byte[] frame) {
+        int n = frame.length;
+        int crc = Crc16Ibm3740.compute(frame, 0, n - 2);
+        frame[n - 2] = (byte) (crc >>> 8);
+        frame[n - 1] = (byte) crc;
+        return frame;
     }
 }

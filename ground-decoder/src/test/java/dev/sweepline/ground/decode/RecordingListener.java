@@ -1,6 +1,7 @@
 package dev.sweepline.ground.decode;
 
 import dev.sweepline.ground.frame.FrameReason;
+import dev.sweepline.ground.packet.FrameDrop;
 import dev.sweepline.ground.packet.PacketAnomaly;
 import dev.sweepline.ground.spectrum.DecodedSpectrum;
 import dev.sweepline.ground.spectrum.SpectrumError;
@@ -18,6 +19,14 @@ public final class RecordingListener implements DecodeListener {
     public record Anomaly(int vcid, PacketAnomaly anomaly, int octets) {
     }
 
+    /** A good frame dropped by its VC count. */
+    public record Drop(int vcid, int vcCount, FrameDrop why) {
+    }
+
+    /** A VC count sequence that started again. */
+    public record Restart(int vcid, int lastVcCount, int newVcCount) {
+    }
+
     public final List<Long> frameOffsets = new ArrayList<>();
     public final List<byte[]> frames = new ArrayList<>();
     public final List<Bad> bad = new ArrayList<>();
@@ -26,6 +35,8 @@ public final class RecordingListener implements DecodeListener {
     public final List<FrameGap> frameGaps = new ArrayList<>();
     public final List<SequenceGap> sequenceGaps = new ArrayList<>();
     public final List<int[]> mcGaps = new ArrayList<>();
+    public final List<Drop> drops = new ArrayList<>();
+    public final List<Restart> restarts = new ArrayList<>();
     public final List<DecodedSpectrum> spectra = new ArrayList<>();
     public final List<SpectrumError> spectrumErrors = new ArrayList<>();
     public final List<HousekeepingReport> housekeeping = new ArrayList<>();
@@ -73,6 +84,16 @@ public final class RecordingListener implements DecodeListener {
     @Override
     public void onMasterChannelGap(int expected, int actual, int missing) {
         mcGaps.add(new int[] {expected, actual, missing});
+    }
+
+    @Override
+    public void onFrameDropped(int vcid, int vcCount, FrameDrop why) {
+        drops.add(new Drop(vcid, vcCount, why));
+    }
+
+    @Override
+    public void onVcRestart(int vcid, int lastVcCount, int newVcCount) {
+        restarts.add(new Restart(vcid, lastVcCount, newVcCount));
     }
 
     @Override

@@ -52,7 +52,31 @@ public final class TestPackets {
     public static byte[] spectrum(int apid, int seq, long coarse, int fine, int sweep, int first, int[] gains,
             boolean[] sat, int[][] adc) {
         int c = gains.length;
-        ByteBuffer b = ByteBuffer.allocate(6 + 14 + (c + 3) / 4 + (c + 7) / 8 + 1 + 4 * (2 + 2 * c));
+        byte[][] streams = new byte[4][];
+        for (int q = 0; q < 4; q++) {
+            ByteBuffer s = ByteBuffer.allocate(2 * c);
+            for (int i = 0; i < c; i++) {
+                s.putShort((short) adc[q][i]);
+            }
+            streams[q] = s.array();
+        }
+        return spectrum(apid, seq, coarse, fine, sweep, first, gains, sat, 0x00, streams);
+    }
+
+    /**
+     * A spectrum packet (ICD §4) with the given compression octet and quadrant streams; each stream's
+     * Lq is its length.
+     *
+     * @param streams [4] the quadrant streams, in quadrant order
+     */
+    public static byte[] spectrum(int apid, int seq, long coarse, int fine, int sweep, int first, int[] gains,
+            boolean[] sat, int compression, byte[][] streams) {
+        int c = gains.length;
+        int octets = 0;
+        for (byte[] s : streams) {
+            octets += 2 + s.length;
+        }
+        ByteBuffer b = ByteBuffer.allocate(6 + 14 + (c + 3) / 4 + (c + 7) / 8 + 1 + octets);
         b.putInt((int) coarse).putShort((short) fine);
         b.put((byte) (apid == 0x100 ? 1 : 2)).put((byte) 0).putShort((short) sweep).putShort((short) 0)
                 .putShort((short) first).putShort((short) c).putShort((short) 0xFFFF).putShort((short) 4);
@@ -64,12 +88,9 @@ public final class TestPackets {
                 flags[i / 8] |= (byte) (0x80 >>> (i % 8));
             }
         }
-        b.put(tags).put(flags).put((byte) 0);
-        for (int q = 0; q < 4; q++) {
-            b.putShort((short) (2 * c));
-            for (int i = 0; i < c; i++) {
-                b.putShort((short) adc[q][i]);
-            }
+        b.put(tags).put(flags).put((byte) compression);
+        for (byte[] s : streams) {
+            b.putShort((short) s.length).put(s);
         }
         return packet(apid, seq, true, b.array());
     }

@@ -105,6 +105,16 @@ class FrameSynchroniserTest {
     }
 
     @Test
+    void shouldRefuseAVcidTheIcdDoesNotUse() {
+        // the idle frame's second octet 0x5E is SCID low nibble 5, VCID 7, OCF 0; 0x54 is VCID 2, 0x5C VCID 6
+        byte[] vc2 = reCrc(Hex.bytes(GoldenFrames.IDLE_FRAME), 1, (byte) 0x54);
+        byte[] vc6 = reCrc(Hex.bytes(GoldenFrames.IDLE_FRAME), 1, (byte) 0x5C);
+        byte[] s = cat(Hex.ASM, vc2, Hex.ASM, vc6, Hex.stream(GoldenFrames.IDLE_FRAME));
+        // ICD §2 uses VCIDs 0, 1 and 7 only; both with a valid FECF (CCSDS 132.0-B-3 §4.1.6)
+        assertEquals(List.of("UNKNOWN_VCID@4/128", "UNKNOWN_VCID@136/128", "GOOD@268 mc=8"), run(s, 128));
+    }
+
+    @Test
     void shouldReportTrailingGarbageAtTheEnd() {
         byte[] s = cat(Hex.stream(GoldenFrames.IDLE_FRAME), new byte[] {1, 2});
         // 2 stray octets after the last frame (offset 132)

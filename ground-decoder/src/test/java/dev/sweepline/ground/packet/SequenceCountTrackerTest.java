@@ -27,4 +27,21 @@ class SequenceCountTrackerTest {
         // a different APID has its own count (ICD §3.1 "per APID")
         assertEquals(0, t.observe(0x120, 77));
     }
+
+    @Test
+    void shouldStartANewSequenceAtCountZeroAfterARestartOnly() {
+        SequenceCountTracker t = new SequenceCountTracker();
+        t.observe(0x100, 500);
+        t.expectRestart(0x100);
+        // ICD §2: the packet sequence counts start at 0 at start-up, so 0 after a restart is no gap
+        assertEquals(0, t.observe(0x100, 0));
+        assertEquals(0, t.observe(0x100, 1));
+        // after an outage the counts go on: 1 -> 40 is 38 missing, restart or not (ICD §10)
+        t.expectRestart(0x100);
+        assertEquals(38, t.observe(0x100, 40));
+        // the restart is forgotten after one packet: a later 0 is a gap again, (0 - 41 - 1) mod 2^14
+        t.expectRestart(0x100);
+        t.observe(0x100, 41);
+        assertEquals(16342, t.observe(0x100, 0));
+    }
 }
