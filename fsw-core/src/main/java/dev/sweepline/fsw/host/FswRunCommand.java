@@ -1,31 +1,51 @@
 package dev.sweepline.fsw.host;
 
-import dev.sweepline.fsw.exec.Executive;
 import dev.sweepline.fsw.exec.FlightConfig;
 import dev.sweepline.fsw.exec.FlightSoftware;
 import dev.sweepline.fsw.link.FramedInstrumentLink;
-import dev.sweepline.fsw.link.HousekeepingReply;
-import dev.sweepline.fsw.link.LinkCounters;
+import dev.sweepline.fsw.link.InstrumentConstants;
 import dev.sweepline.fsw.sweep.SweepListener;
-import java.io.BufferedReader;
 import java.io.IOException;
-import java.io.InputStreamReader;
 import java.io.PrintStream;
-import java.nio.charset.StandardCharsets;
+import java.nio.file.AccessDeniedException;
+import java.nio.file.FileSystemException;
+import java.nio.file.NoSuchFileException;
 import java.util.concurrent.Callable;
-import java.util.concurrent.CompletableFuture;
+import java.util.concurrent.CountDownLatch;
 import java.util.concurrent.TimeUnit;
-import java.util.concurrent.TimeoutException;
+import java.util.function.LongSupplier;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
 
-/** {@code run}: the flight software in a loop on a link, writing telemetry frames. */
+/**
+ * {@code run}: the flight software in a loop on a link, writing telemetry frames. The link and the
+ * telemetry output are opened first, then the operator arms and fires, then the run's time starts;
+ * every way out (planned end, signal, exception, link loss) goes through one {@link HvShutdown}.
+ */
 @Command(name = "run", mixinStandardHelpOptions = true,
         description = {"Run the flight software against electronics (real or 'sweepline-bench serve') on a serial "
             + "port or TCP, writing TM frames to a file or socket ('sweepline-ground.jar decode' reads them).",
             "",
-            HvText.CAUTION})
+            HvText.CAUTION,
+            "",
+            HvText.END_OF_RUN},
+        exitCodeListHeading = "Exit status:%n",
+        exitCodeList = {"0:planned end, HV off confirmed", "1:run failed (exception, link lost, SAFE), HV off confirmed",
+            "2:bad input (options, link or telemetry output that cannot be opened)", "3:HV off NOT confirmed"})
 final class FswRunCommand implements Callable<Integer> {
+    /** Planned end reached and the HV off confirmed. */
+    static final int EXIT_OK = 0;
+    /** The run ended early (exception, link lost, SAFE); the HV off was confirmed. */
+    static final int EXIT_RUN_FAILED = 1;
+    /** Bad input: an option, or a link or telemetry output that cannot be opened. */
+    static final int EXIT_BAD_INPUT = 2;
+    /** The HV off could not be confirmed (hardware ICD §4.2). */
+    static final int EXIT_HV_NOT_CONFIRMED = 3;
+    /** Time the shutdown hook leaves the run's thread to start the HV shutdown itself, milliseconds (design value). */
+    static final long HOOK_GRACE_MILLIS = 1_000;
+    /** Time the shutdown hook then leaves the run's thread to print its summary, milliseconds (design value). */
+    static final long HOOK_SUMMARY_MILLIS = 1_000;
+
     /** HV choices. */
     enum Hv { off, arm }
 
@@ -40,7 +60,9 @@ final class FswRunCommand implements Callable<Integer> {
             description = "Where the telemetry frames go: a file, or a ground listener to connect to.")
     String tm;
 
-    @Option(names = "--minutes", paramLabel = "M", description = "Minutes to run (default: until interrupted).")
+    @Option(names = "--minutes", paramLabel = "M",
+            description = "Minutes to run, counted from the start of the run, after the HV prompt "
+                + "(default: until interrupted).")
     Double minutes;
 
     @Option(names = "--baud", paramLabel = "B", description = "Serial line rate (default: ${DEFAULT-VALUE}).")
@@ -53,7 +75,7 @@ final class FswRunCommand implements Callable<Integer> {
 
     @Option(names = "--reply-wait-ms", paramLabel = "MS",
             description = "With --clock link: wall-clock wait for a reply before letting its time-out run "
-                + "(default: ${DEFAULT-VALUE}).")
+                + "(default: ${DEFAULT-VALUE}; keep two of them below the electronics' 2 s link watchdog).")
     long replyWaitMillis = 500;
 
     @Option(names = "--hv", paramLabel = "off|arm",
@@ -62,134 +84,165 @@ final class FswRunCommand implements Callable<Integer> {
     Hv hv = Hv.off;
 
     @Option(names = "--hv-confirm", paramLabel = "WORD",
-            description = "Second flag that fires an armed HV without the prompt: must be FIRE.")
+            description = "Second flag that fires an armed HV without the prompt: must be FIRE (ignored without --hv arm).")
     String hvConfirm;
 
     @Option(names = "--hv-timeout-s", paramLabel = "S", description = "Arm-to-fire time-out (default: ${DEFAULT-VALUE} s).")
     long hvTimeoutSeconds = HvArming.DEFAULT_TIMEOUT_MICROS / 1_000_000L;
 
+    /** Where the operator types FIRE (tests give their own). */
+    HvPrompt.Console console = HvPrompt.stdin(System.in);
+    /** The clock of the arm-to-fire time-out, microseconds (tests give a fake one). */
+    LongSupplier promptClock = new MonotonicClock()::nowMicros;
+    /** Console output. */
+    PrintStream out = System.out;
+    /** Console errors. */
+    PrintStream err = System.err;
+
     @Override
-    public Integer call() throws Exception {
+    public Integer call() {
         LinkAddress address;
         try {
             address = LinkAddress.parse(link);
         } catch (IllegalArgumentException e) {
-            System.err.println(e.getMessage());
-            return 2;
+            err.println("--link: " + e.getMessage());
+            return EXIT_BAD_INPUT;
+        }
+        if (hvConfirm != null && hv != Hv.arm) {
+            out.println("--hv-confirm ignored: it confirms only an armed HV (--hv arm); running with HV off");
+        }
+        if (clock == Clock.link && 2 * replyWaitMillis * 1_000 >= InstrumentConstants.LINK_WATCHDOG_MICROS) {
+            out.println("warning: two --reply-wait-ms of " + replyWaitMillis + " ms reach the electronics' link "
+                    + "watchdog (hardware ICD §4.1): a lost reply will switch their HV off");
+        }
+        HostTransport transport;
+        try {
+            transport = address.open(baud);
+        } catch (IOException | RuntimeException e) {
+            err.println("--link " + address + ": cannot open the link (" + reason(e) + ")");
+            return EXIT_BAD_INPUT;
+        }
+        StreamFrameSink sink;
+        try {
+            sink = StreamFrameSink.open(tm);
+        } catch (IOException | RuntimeException e) {
+            transport.close();
+            err.println("--tm " + tm + ": cannot open the telemetry output (" + reason(e) + ")");
+            return EXIT_BAD_INPUT;
+        }
+        try {
+            return run(address, transport, sink);
+        } finally {
+            try {
+                sink.close();
+            } catch (IOException | RuntimeException e) {
+                err.println("--tm " + tm + ": telemetry output not closed cleanly: " + e.getMessage());
+            }
+            transport.close();
+        }
+    }
+
+    /** The run on an open link and telemetry output: prompt, then the flight software on its loop. */
+    private int run(LinkAddress address, HostTransport transport, StreamFrameSink sink) {
+        HvArming arming = new HvArming(hvTimeoutSeconds * 1_000_000L);
+        boolean fired = hv == Hv.arm && fire(arming);
+        FramedInstrumentLink framed = new FramedInstrumentLink(transport);
+        HvGuardLink guard = new HvGuardLink(framed, arming);
+        FlightConfig flight = new FlightConfig();
+        flight.hvPermitted = false; // the core interlock starts OFF too; the operator's fire below enables both
+        FlightSoftware fsw = new FlightSoftware(flight, guard, sink, SweepListener.NONE);
+        // the run's time starts here, after the prompt: --minutes is run time, whenever FIRE was typed
+        MonotonicClock runClock = new MonotonicClock();
+        HostLoop loop = clock == Clock.link
+                ? new LinkClockLoop(fsw, framed, LinkClockLoop.wallClockWait(replyWaitMillis))
+                : new RealTimeLoop(fsw, framed, runClock);
+        if (fired) {
+            fsw.operatorFireHv(clock == Clock.link ? 0 : runClock.nowMicros());
         }
         MonotonicClock wall = new MonotonicClock();
-        HvArming arming = new HvArming(hvTimeoutSeconds * 1_000_000L);
-        if (hv == Hv.arm && !fire(arming, wall)) {
-            System.err.println("HV not fired: running with HV off");
-        }
-        long endMicros = minutes == null ? Long.MAX_VALUE : Math.round(minutes * 60e6);
-        try (HostTransport transport = address.open(baud); StreamFrameSink sink = StreamFrameSink.open(tm)) {
-            FramedInstrumentLink framed = new FramedInstrumentLink(transport);
-            HvGuardLink guard = new HvGuardLink(framed, arming);
-            FlightConfig flight = new FlightConfig();
-            // the core knows the permission too, so its HV monitors expect no HV and housekeeping says so;
-            // the guard on the wire stays as a second, independent barrier
-            flight.hvPermitted = arming.state() == HvArming.State.ENABLED;
-            FlightSoftware fsw = new FlightSoftware(flight, guard, sink, SweepListener.NONE);
-            System.out.println("link " + address + ", HV " + arming.state() + ", clock " + clock);
-            long end;
-            if (clock == Clock.link) {
-                end = new LinkClockLoop(fsw, framed, LinkClockLoop.wallClockWait(replyWaitMillis)).run(endMicros);
-            } else {
-                RealTimeLoop loop = new RealTimeLoop(fsw, framed, wall);
-                Thread main = Thread.currentThread();
-                Thread hook = new Thread(() -> {
-                    loop.stop();
-                    try {
-                        main.join(2_000);
-                    } catch (InterruptedException e) {
-                        Thread.currentThread().interrupt();
-                    }
-                });
-                Runtime.getRuntime().addShutdownHook(hook);
-                end = loop.run(endMicros);
-            }
-            // the run ends at its planned end, like the bench's, even when the last reply overshot it
-            fsw.close(Math.min(end, endMicros));
-            print(fsw, framed, guard, sink, System.out);
-            printElectronics(framed, System.out);
-        }
-        return 0;
-    }
-
-    private boolean fire(HvArming arming, MonotonicClock wall) throws IOException {
-        System.out.println(HvText.CAUTION);
-        arming.arm(wall.nowMicros());
-        String word = hvConfirm;
-        if (word == null) {
-            System.out.println("HV ARMED. Type " + HvArming.CONFIRM_WORD + " within " + hvTimeoutSeconds
-                    + " s to enable the high voltage; anything else keeps it off.");
-            word = readLine(hvTimeoutSeconds);
-        }
-        return arming.confirm(word, wall.nowMicros()) == HvArming.State.ENABLED;
-    }
-
-    private static String readLine(long timeoutSeconds) {
-        BufferedReader in = new BufferedReader(new InputStreamReader(System.in, StandardCharsets.UTF_8));
-        CompletableFuture<String> line = CompletableFuture.supplyAsync(() -> {
-            try {
-                String s = in.readLine();
-                return s == null ? "" : s.trim();
-            } catch (IOException e) {
-                return "";
-            }
-        });
+        HvShutdown shutdown = new HvShutdown(fsw, arming, framed, wall::nowMicros, HvShutdown.parking(), out);
+        out.println("link " + address + ", HV " + arming.state() + ", clock " + clock + ", run "
+                + (minutes == null ? "until interrupted" : minutes + " min"));
+        CountDownLatch reported = new CountDownLatch(1);
+        Runnable removeHook = transport.onShutdown(shutdownHook(loop, shutdown, reported));
         try {
-            return line.get(timeoutSeconds, TimeUnit.SECONDS);
-        } catch (TimeoutException | java.util.concurrent.ExecutionException e) {
-            return "";
-        } catch (InterruptedException e) {
-            Thread.currentThread().interrupt();
-            return "";
+            return fly(fsw, loop, shutdown, guard, framed, sink);
+        } finally {
+            reported.countDown();
+            removeHook.run();
         }
+    }
+
+    /** The operator's arm-then-fire; says why when the HV was not fired. */
+    private boolean fire(HvArming arming) {
+        HvPrompt.Answer answer = new HvPrompt(console, promptClock, out).fire(arming, hvConfirm, hvTimeoutSeconds);
+        if (!answer.fired()) {
+            out.println(answer.why());
+        }
+        return answer.fired();
+    }
+
+    /** The loop until its end, whatever it is, then the HV shutdown, the telemetry's end and the report. */
+    private int fly(FlightSoftware fsw, HostLoop loop, HvShutdown shutdown, HvGuardLink guard,
+            FramedInstrumentLink framed, StreamFrameSink sink) {
+        long endMicros = minutes == null ? Long.MAX_VALUE : Math.round(minutes * 60e6);
+        String failure = null;
+        HvShutdown.Result off;
+        try {
+            loop.run(endMicros);
+        } catch (RuntimeException e) {
+            failure = "exception in the loop: " + e;
+            err.println("run stopped: " + e + (e.getCause() == null ? "" : " (" + e.getCause().getMessage() + ")"));
+        } finally {
+            off = shutdown.run(failure != null ? failure : loop.end().text()); // an Error still passes here
+        }
+        // the run ends at its planned end, like the bench's, even when the last reply overshot it
+        closeTelemetry(fsw, Math.min(loop.lastMicros(), endMicros));
+        RunReport.print(fsw, framed, guard, sink, out);
+        RunReport.printElectronics(framed, out);
+        if (!off.confirmed()) {
+            return EXIT_HV_NOT_CONFIRMED;
+        }
+        boolean planned = loop.end() == LoopEnd.END_TIME || loop.end() == LoopEnd.STOPPED;
+        return failure == null && planned ? EXIT_OK : EXIT_RUN_FAILED;
     }
 
     /**
-     * Asks the electronics for their housekeeping (hardware ICD §3.3) and prints their side of the link:
-     * what they received good and bad, their last step, HV monitors and temperature. Waits at most
-     * about half a second; electronics that do not answer are reported as such.
+     * The hook of SIGINT and SIGTERM: stops the loop, lets the run's thread run the HV shutdown (or runs
+     * it when that thread does not come to it), then leaves that thread a moment to print.
      */
-    static void printElectronics(FramedInstrumentLink framed, PrintStream out) {
-        long before = framed.housekeepingReplies();
-        boolean sent = false;
-        dev.sweepline.fsw.link.SampleReply late = new dev.sweepline.fsw.link.SampleReply();
-        for (int i = 0; i < 50 && framed.housekeepingReplies() == before; i++) {
-            sent = sent || framed.requestHousekeeping(0xFFFF);
-            framed.pump();
-            framed.poll(late, Long.MAX_VALUE); // a sample reply still held would stop the reading
+    private static Runnable shutdownHook(HostLoop loop, HvShutdown shutdown, CountDownLatch reported) {
+        return () -> {
+            loop.stop();
+            shutdown.awaitOrRun(HOOK_GRACE_MILLIS, "stopped by a signal (shutdown hook)");
             try {
-                Thread.sleep(10);
+                reported.await(HOOK_SUMMARY_MILLIS, TimeUnit.MILLISECONDS);
             } catch (InterruptedException e) {
                 Thread.currentThread().interrupt();
-                return;
             }
-        }
-        if (framed.housekeepingReplies() == before) {
-            out.println("electronics: no housekeeping reply");
-            return;
-        }
-        HousekeepingReply h = framed.housekeeping();
-        out.printf("electronics: frames good %d, bad %d; last step %d; HV monitors %d / %d codes; %.2f degC%n",
-                h.framesGood, h.framesBad, h.lastStepSequence, h.hvMonitorLowCode, h.hvMonitorHighCode,
-                h.temperatureCentiCelsius / 100.0);
+        };
     }
 
-    static void print(FlightSoftware fsw, FramedInstrumentLink framed, HvGuardLink guard, StreamFrameSink sink,
-            PrintStream out) {
-        Executive e = fsw.executive();
-        LinkCounters c = framed.counters();
-        out.printf("mode %s; steps sent %d, replies %d, sequence errors %d, time-outs %d, retries %d, safe entries %d%n",
-                fsw.scheduler().mode(), e.stepsSent(), e.repliesAccepted(), e.sequenceErrors(), e.timeouts(),
-                e.retries(), e.safeEntries());
-        out.printf("link frames good %d, bad %d (CRC %d, COBS %d, length %d, type %d, wrong length %d), empty %d%n",
-                c.framesGood, c.framesBad(), c.badCrc, c.badCobs, c.badLength, c.unknownType, c.wrongLength,
-                c.emptyChunks);
-        out.printf("steps sent with HV cleared (not fired): %d; telemetry frames written: %d%n",
-                guard.stepsWithHvCleared(), sink.frames());
+    /** What went wrong opening a port, socket or file, in words (the exception's class is no help to an operator). */
+    static String reason(Exception e) {
+        if (e instanceof NoSuchFileException) {
+            return "no such file or directory";
+        }
+        if (e instanceof AccessDeniedException) {
+            return "permission denied";
+        }
+        if (e instanceof FileSystemException f && f.getReason() != null) {
+            return f.getReason();
+        }
+        return e.getMessage() != null ? e.getMessage() : e.getClass().getSimpleName();
+    }
+
+    /** Ends the telemetry (last housekeeping, open frames flushed); a failing output is one line. */
+    private void closeTelemetry(FlightSoftware fsw, long nowMicros) {
+        try {
+            fsw.close(nowMicros);
+        } catch (RuntimeException e) {
+            err.println("--tm " + tm + ": telemetry not completed: " + e.getMessage());
+        }
     }
 }

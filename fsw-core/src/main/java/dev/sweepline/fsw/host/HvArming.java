@@ -6,7 +6,9 @@ package dev.sweepline.fsw.host;
  * one, or {@link #disarm()} return to {@link State#OFF}. This is a software permission only: it does
  * not replace the bench's hardware interlock or the laboratory's procedures.
  *
- * <p>Threading: one thread.
+ * <p>Threading: one thread arms and confirms; {@link #disarm()} may come from any thread (the
+ * shutdown hook's {@link HvShutdown}), so the state is volatile and a step sent after a disarm goes
+ * out with the HV cleared.
  */
 public final class HvArming {
     /** The word that fires an armed HV. */
@@ -25,7 +27,7 @@ public final class HvArming {
     }
 
     private final long timeoutMicros;
-    private State state = State.OFF;
+    private volatile State state = State.OFF;
     private long armedMicros;
 
     /** Arming with {@code timeoutMicros} between arm and fire. */

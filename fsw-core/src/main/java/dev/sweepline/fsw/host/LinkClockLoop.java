@@ -12,11 +12,13 @@ import java.util.concurrent.locks.LockSupport;
  * electronics would take). That is exactly the time line of the in-process bench, so the same
  * seed gives the same decisions and telemetry. A reply that does not come within a wall-clock wait
  * lets simulated time jump to the executive's next wake-up, so its time-out and retries run as in
- * flight. With nothing in flight (safe), time moves in steps of {@link #IDLE_MICROS}.
+ * flight. With nothing in flight, time moves in steps of {@link #IDLE_MICROS}. Ends at the planned
+ * end, on {@link #stop()}, or at a link loss: the peer gone, or a link time-out of the executive
+ * ({@link LoopEnd}).
  *
- * <p>Threading: runs on the calling thread.
+ * <p>Threading: runs on the calling thread; {@link #stop()} may be called from any thread.
  */
-public final class LinkClockLoop {
+public final class LinkClockLoop extends HostLoop {
     /** Simulated time step with nothing in flight, microseconds (the in-process bench's idle step). */
     public static final long IDLE_MICROS = 10_000;
     /** Busy polls before the wait starts to park (a reply over a pty takes a few ms; design value). */
@@ -61,11 +63,14 @@ public final class LinkClockLoop {
         };
     }
 
-    /** Runs simulated time from 0 to {@code endMicros} (or until the peer leaves); returns where time stopped. */
+    /** Runs simulated time from 0 to {@code endMicros}, until {@link #stop()} or a link loss; returns where time stopped. */
+    @Override
     public long run(long endMicros) {
         long now = 0;
         Executive exec = fsw.executive();
-        while (now < endMicros && !link.ended()) {
+        long safeAtStart = exec.safeEntries();
+        while ((end = LoopEnd.check(now, endMicros, stopped, link, fsw, safeAtStart)) == LoopEnd.RUNNING) {
+            lastMicros = now;
             int work = fsw.doWork(now);
             if (exec.outstanding()) {
                 if (wait.await(link)) {
@@ -78,6 +83,7 @@ public final class LinkClockLoop {
                 now += IDLE_MICROS;
             }
         }
+        lastMicros = now;
         return now;
     }
 

@@ -7,18 +7,19 @@ import java.util.concurrent.locks.LockSupport;
 /**
  * The flight software on a PC in real time: reads the monotonic clock once per cycle, calls
  * {@link FlightSoftware#doWork(long)} with it, and parks briefly when there is nothing to do (at most
- * {@link #MAX_PARK_MICROS}, less when the executive wakes sooner).
+ * {@link #MAX_PARK_MICROS}, less when the executive wakes sooner). Ends at the planned end, on
+ * {@link #stop()}, or at a link loss: the peer gone, or a link time-out of the executive
+ * ({@link LoopEnd}).
  *
  * <p>Threading: runs on the calling thread; {@link #stop()} may be called from any thread.
  */
-public final class RealTimeLoop {
+public final class RealTimeLoop extends HostLoop {
     /** Longest park between cycles with nothing to do, microseconds (bounds the added reply latency). */
     public static final long MAX_PARK_MICROS = 200;
 
     private final FlightSoftware fsw;
     private final FramedInstrumentLink link;
     private final MonotonicClock clock;
-    private volatile boolean stopped;
     private long cycles;
 
     /** A loop driving {@code fsw}, whose link is (or wraps) {@code link}, on {@code clock}. */
@@ -28,10 +29,13 @@ public final class RealTimeLoop {
         this.clock = clock;
     }
 
-    /** Runs until {@code endMicros} on the clock, {@link #stop()}, or the link's peer leaves; returns the last time. */
+    /** Runs until {@code endMicros} on the clock, {@link #stop()}, or a link loss; returns the last time. */
+    @Override
     public long run(long endMicros) {
+        long safeAtStart = fsw.executive().safeEntries();
         long now = clock.nowMicros();
-        while (now < endMicros && !stopped && !link.ended()) {
+        while ((end = LoopEnd.check(now, endMicros, stopped, link, fsw, safeAtStart)) == LoopEnd.RUNNING) {
+            lastMicros = now;
             int work = fsw.doWork(now);
             cycles++;
             if (work == 0 && !link.pump()) {
@@ -40,12 +44,8 @@ public final class RealTimeLoop {
             }
             now = clock.nowMicros();
         }
+        lastMicros = now;
         return now;
-    }
-
-    /** Asks the loop to end after its current cycle. */
-    public void stop() {
-        stopped = true;
     }
 
     /** Cycles run. */

@@ -2,6 +2,8 @@ package dev.sweepline.fsw.host;
 
 import com.fazecast.jSerialComm.SerialPort;
 import java.io.IOException;
+import java.util.Set;
+import java.util.concurrent.CopyOnWriteArraySet;
 
 /**
  * A {@link ByteTransport} on a serial port through jSerialComm (hardware ICD §1): 8 data bits, no
@@ -12,6 +14,10 @@ import java.io.IOException;
 public final class SerialTransport implements HostTransport {
     /** Default line rate (hardware ICD §1). */
     public static final int DEFAULT_BAUD = 115_200;
+
+    /** The actions of {@link #onShutdown}, run from the one hook given to jSerialComm. */
+    private static final Set<Runnable> SHUTDOWN_ACTIONS = new CopyOnWriteArraySet<>();
+    private static boolean hookGiven;
 
     private final SerialPort port;
 
@@ -53,6 +59,24 @@ public final class SerialTransport implements HostTransport {
     public int write(byte[] buffer, int offset, int length) {
         int n = port.writeBytes(buffer, length, offset);
         return n < 0 ? 0 : n;
+    }
+
+    /**
+     * jSerialComm (2.11) closes every port in a JVM shutdown hook of its own, after running the hooks
+     * given to {@link SerialPort#addShutdownHook}; a plain JVM hook races with it and finds the port
+     * closed (seen: a SIGTERM then could not confirm the HV off). So the action runs from there. jSerialComm cannot remove a hook: one is given, once,
+     * and it runs the actions registered at the time.
+     */
+    @Override
+    public Runnable onShutdown(Runnable action) {
+        synchronized (SHUTDOWN_ACTIONS) {
+            if (!hookGiven) {
+                SerialPort.addShutdownHook(new Thread(() -> SHUTDOWN_ACTIONS.forEach(Runnable::run), "fsw-shutdown"));
+                hookGiven = true;
+            }
+        }
+        SHUTDOWN_ACTIONS.add(action);
+        return () -> SHUTDOWN_ACTIONS.remove(action);
     }
 
     @Override

@@ -6,14 +6,16 @@ package dev.sweepline.fsw.link;
  * request:  0x02 | seq(2)
  * reply:    0x82 | seq(2) | frames good(4) | frames bad(4) | last step seq(2)
  *                | HV mon low(2) | HV mon high(2) | temperature 0.01 degC(2, signed)
+ *                | status(1) | link watchdog trips(2)
+ * status: bit 0 HV output on, bit 1 HV switched off by the link watchdog (ICD §4.1)
  * </pre>
  * Allocation-free.
  */
 public final class HousekeepingCodec {
     /** Request payload length, octets. */
     public static final int REQUEST_LENGTH = 3;
-    /** Reply payload length, octets. */
-    public static final int REPLY_LENGTH = 19;
+    /** Reply payload length, octets (ICD §3.3: 22 since the watchdog fields were added). */
+    public static final int REPLY_LENGTH = 22;
     /** Offset of the sequence number in both messages (2). */
     public static final int SEQUENCE_OFFSET = 1;
     /** Reply: offset of frames received good (4). */
@@ -28,6 +30,16 @@ public final class HousekeepingCodec {
     public static final int HV_HIGH_OFFSET = 15;
     /** Reply: offset of the temperature, 0.01 degC signed (2). */
     public static final int TEMPERATURE_OFFSET = 17;
+    /** Reply: offset of the electronics' status flags (1). */
+    public static final int STATUS_OFFSET = 19;
+    /** Reply: offset of the link watchdog trips since power-up, saturating at 65535 (2). */
+    public static final int WATCHDOG_TRIPS_OFFSET = 20;
+    /** Status bit 0: the HV output is on (ICD §3.3). */
+    public static final int STATUS_HV_ON = 0x01;
+    /** Status bit 1: the link watchdog switched the HV off and no step has enabled it since (ICD §4.1). */
+    public static final int STATUS_WATCHDOG_OFF = 0x02;
+    /** Largest count the watchdog-trip field holds (2 octets). */
+    public static final int MAX_WATCHDOG_TRIPS = 0xFFFF;
 
     private HousekeepingCodec() {
     }
@@ -57,6 +69,8 @@ public final class HousekeepingCodec {
         Octets.put16(b, offset + HV_LOW_OFFSET, hk.hvMonitorLowCode);
         Octets.put16(b, offset + HV_HIGH_OFFSET, hk.hvMonitorHighCode);
         Octets.put16(b, offset + TEMPERATURE_OFFSET, hk.temperatureCentiCelsius);
+        b[offset + STATUS_OFFSET] = (byte) hk.status;
+        Octets.put16(b, offset + WATCHDOG_TRIPS_OFFSET, Math.min(hk.watchdogTrips, MAX_WATCHDOG_TRIPS));
         return REPLY_LENGTH;
     }
 
@@ -79,6 +93,8 @@ public final class HousekeepingCodec {
         into.hvMonitorLowCode = Octets.get16(b, offset + HV_LOW_OFFSET);
         into.hvMonitorHighCode = Octets.get16(b, offset + HV_HIGH_OFFSET);
         into.temperatureCentiCelsius = (short) Octets.get16(b, offset + TEMPERATURE_OFFSET);
+        into.status = b[offset + STATUS_OFFSET] & 0xFF;
+        into.watchdogTrips = Octets.get16(b, offset + WATCHDOG_TRIPS_OFFSET);
         return LinkStatus.OK;
     }
 }

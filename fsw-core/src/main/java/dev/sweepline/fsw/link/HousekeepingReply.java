@@ -19,4 +19,8 @@ public final class HousekeepingReply {
     public int hvMonitorHighCode;
     /** Electronics temperature, 0.01 degC, signed. */
     public int temperatureCentiCelsius;
+    /** Status flags: {@link HousekeepingCodec#STATUS_HV_ON}, {@link HousekeepingCodec#STATUS_WATCHDOG_OFF}. */
+    public int status;
+    /** Link watchdog trips since power-up (ICD §4.1), saturating at 65535 on the wire. */
+    public int watchdogTrips;
 }

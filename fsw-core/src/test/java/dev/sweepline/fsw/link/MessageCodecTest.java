@@ -91,8 +91,12 @@ class MessageCodecTest {
         hk.hvMonitorLowCode = 100;
         hk.hvMonitorHighCode = 60_000;
         hk.temperatureCentiCelsius = -1234; // signed field (ICD §3.3)
+        hk.status = HousekeepingCodec.STATUS_WATCHDOG_OFF; // HV off by the link watchdog (ICD §3.3, §4.1)
+        hk.watchdogTrips = 70_000; // saturates at 65535 (ICD §3.3)
         byte[] b = new byte[HousekeepingCodec.REPLY_LENGTH];
-        assertEquals(19, HousekeepingCodec.encodeReply(hk, b, 0)); // ICD §3 table
+        assertEquals(22, HousekeepingCodec.encodeReply(hk, b, 0)); // ICD §3 table
+        // ICD §3.3 field by field: 82 | 0009 | fffffff0 | 00000003 | beef | 0064 | ea60 | fb2e | 02 | ffff
+        assertArrayEquals(HEX.parseHex("820009fffffff000000003beef0064ea60fb2e02ffff"), b);
         HousekeepingReply back = new HousekeepingReply();
         assertEquals(LinkStatus.OK, HousekeepingCodec.decodeReply(b, 0, b.length, back));
         assertEquals(0xFFFF_FFF0L, back.framesGood);
@@ -100,6 +104,9 @@ class MessageCodecTest {
         assertEquals(0xBEEF, back.lastStepSequence);
         assertEquals(60_000, back.hvMonitorHighCode);
         assertEquals(-1234, back.temperatureCentiCelsius);
+        assertEquals(HousekeepingCodec.STATUS_WATCHDOG_OFF, back.status);
+        assertEquals(0xFFFF, back.watchdogTrips);
+        assertEquals(LinkStatus.WRONG_LENGTH, HousekeepingCodec.decodeReply(b, 0, 19, back)); // the old length
         byte[] req = new byte[3];
         HousekeepingCodec.encodeRequest(0x0102, req, 0);
         assertArrayEquals(HEX.parseHex("020102"), req);

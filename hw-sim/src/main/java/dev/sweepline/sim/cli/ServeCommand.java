@@ -121,9 +121,10 @@ final class ServeCommand implements Callable<Integer> {
 
     private static void print(InstrumentServer server, FaultyTransport faulty) {
         LinkCounters c = server.counters();
-        System.out.printf("steps executed %d, repeats answered %d, levels refused %d, housekeeping %d, clock %.3f s%n",
-                server.stepsExecuted(), server.repeatsAnswered(), server.levelRefusals(),
-                server.housekeepingAnswered(), server.clockMicros() / 1e6);
+        System.out.printf("steps executed %d, repeats answered %d, levels refused %d, housekeeping %d, "
+                + "link watchdog trips %d, clock %.3f s%n", server.stepsExecuted(), server.repeatsAnswered(),
+                server.levelRefusals(), server.housekeepingAnswered(), server.watchdogTrips(),
+                server.clockMicros() / 1e6);
         System.out.printf("frames good %d, bad %d (CRC %d, COBS %d, length %d, type %d, wrong length %d), empty %d%n",
                 c.framesGood, c.framesBad(), c.badCrc, c.badCobs, c.badLength, c.unknownType, c.wrongLength,
                 c.emptyChunks);

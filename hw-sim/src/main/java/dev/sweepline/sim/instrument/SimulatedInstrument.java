@@ -57,6 +57,17 @@ public final class SimulatedInstrument {
     }
 
     /**
+     * Switches the HV off at {@code nowMicros} (the link watchdog, hardware ICD §4.1): the supply's
+     * output is crowbarred to 0 V, as for a step with the HV disabled.
+     *
+     * @return the HV monitor's reading then, noise-free (the noise stream of the steps is not drawn from)
+     */
+    public int switchHvOff(long nowMicros) {
+        hv.disable(nowMicros);
+        return hv.calibration().code(hv.highVoltsAt(nowMicros));
+    }
+
+    /**
      * Executes one step.
      *
      * @param cmd         the step

@@ -5,6 +5,7 @@ import dev.sweepline.fsw.link.FrameReceiver;
 import dev.sweepline.fsw.link.FrameSender;
 import dev.sweepline.fsw.link.HousekeepingCodec;
 import dev.sweepline.fsw.link.HousekeepingReply;
+import dev.sweepline.fsw.link.InstrumentConstants;
 import dev.sweepline.fsw.link.LinkCounters;
 import dev.sweepline.fsw.link.MessageType;
 import dev.sweepline.fsw.link.SampleReply;
@@ -24,11 +25,18 @@ import java.util.concurrent.locks.LockSupport;
  * A step with low level not below the high level is executed with the HV off (ICD §5). Bad frames are
  * discarded and counted. Housekeeping requests are answered between steps.
  *
+ * <p>Link watchdog (ICD §4.1): with the HV on, no valid step frame for
+ * {@link #WATCHDOG_NANOS} of wall time after the reply to the last step, or the end of the stream,
+ * switches the HV off ({@link StepExecutor#switchHvOff}); housekeeping reports it (status bit 1 and
+ * the trip count) until a step enables the HV again.
+ *
  * <p>Threading: one thread ({@link #doWork(long)} or {@link #run}); {@link #stop()} from any thread.
  */
 public final class InstrumentServer {
     /** Octets read from the transport per call at most. */
     static final int READ_CHUNK = 256;
+    /** The link watchdog, wall nanoseconds (hardware ICD §4.1: 2 s). */
+    public static final long WATCHDOG_NANOS = InstrumentConstants.LINK_WATCHDOG_MICROS * 1_000;
 
     private final StepExecutor executor;
     private final ByteTransport transport;
@@ -55,6 +63,12 @@ public final class InstrumentServer {
     private long housekeepingAnswered;
     private boolean ended;
     private volatile boolean stopped;
+    /** The HV as the last executed step left it (after a refusal of its levels). */
+    private boolean hvOn;
+    /** Wall time since which the link has been quiet: when the last reply went out. */
+    private long quietSinceNanos;
+    private boolean watchdogOff;
+    private volatile long watchdogTrips;
 
     /**
      * A server of {@code executor} on {@code transport}.
@@ -73,7 +87,7 @@ public final class InstrumentServer {
 
     /** One cycle at wall time {@code nowNanos}: send what is due, else read and handle frames. Returns work done. */
     public int doWork(long nowNanos) {
-        int work = 0;
+        int work = watchdog(nowNanos);
         if (!sender.flush()) {
             return work;
         }
@@ -91,6 +105,7 @@ public final class InstrumentServer {
             int n = SampleReplyCodec.encode(reply, out, 0);
             sender.send(out, 0, n);
             replyPending = false;
+            quietSinceNanos = nowNanos;
             work++;
         }
         while (!replyPending && !hkPending) {
@@ -112,7 +127,27 @@ public final class InstrumentServer {
                 }
             }
         }
-        return work;
+        return work + watchdog(nowNanos); // the stream may have ended just now
+    }
+
+    /**
+     * Trips the link watchdog (ICD §4.1) when the HV is on, no step executes, and either the link has
+     * been quiet for more than {@link #WATCHDOG_NANOS} since the last reply (at exactly that time it
+     * has not) or the stream has ended. Returns 1 when it tripped.
+     */
+    private int watchdog(long nowNanos) {
+        if (!hvOn || replyPending) {
+            return 0;
+        }
+        boolean streamGone = ended || sender.ended();
+        if (!streamGone && nowNanos - (quietSinceNanos + WATCHDOG_NANOS) <= 0) {
+            return 0;
+        }
+        executor.switchHvOff(clockMicros);
+        hvOn = false;
+        watchdogOff = true;
+        watchdogTrips++;
+        return 1;
     }
 
     private void handle(int type, long nowNanos) {
@@ -128,6 +163,9 @@ public final class InstrumentServer {
                 hk.framesGood = counters.framesGood;
                 hk.framesBad = counters.framesBad();
                 hk.lastStepSequence = lastSequence;
+                hk.status = (hvOn ? HousekeepingCodec.STATUS_HV_ON : 0)
+                        | (watchdogOff ? HousekeepingCodec.STATUS_WATCHDOG_OFF : 0);
+                hk.watchdogTrips = (int) Math.min(watchdogTrips, HousekeepingCodec.MAX_WATCHDOG_TRIPS);
                 executor.housekeeping(hk);
                 hkPending = true;
                 break;
@@ -142,11 +180,13 @@ public final class InstrumentServer {
         if (haveLast && step.sequence == lastSequence) {
             repeatsAnswered++; // a repeat: the stored reply again, no second execution
         } else {
-            if (step.dacLow >= step.dacHigh) {
+            if (step.hvEnabled && step.dacLow >= step.dacHigh) {
                 step.hvEnabled = false; // ICD §5: levels refused, HV kept off for this step
                 levelRefusals++;
             }
             executor.execute(step, clockMicros, reply);
+            hvOn = step.hvEnabled;
+            watchdogOff &= !hvOn; // reported until a step enables the HV again
             clockMicros += durationMicros;
             stepsExecuted++;
             haveLast = true;
@@ -198,6 +238,16 @@ public final class InstrumentServer {
     /** Steps executed with the HV off because their levels were refused. */
     public long levelRefusals() {
         return levelRefusals;
+    }
+
+    /** Link watchdog trips (ICD §4.1); readable from any thread. */
+    public long watchdogTrips() {
+        return watchdogTrips;
+    }
+
+    /** True while the HV is on as the last executed step left it (false after a watchdog trip). */
+    public boolean hvOn() {
+        return hvOn;
     }
 
     /** Housekeeping requests answered. */

@@ -53,6 +53,12 @@ public final class ScenarioInstrument implements StepExecutor {
         return end;
     }
 
+    @Override
+    public void switchHvOff(long atMicros) {
+        lastHvHighCode = instrument.switchHvOff(atMicros); // housekeeping reports the reading after the trip
+        lastLowCode = 0;
+    }
+
     /** What really happened in the last step. */
     public StepTruth lastTruth() {
         return truth;

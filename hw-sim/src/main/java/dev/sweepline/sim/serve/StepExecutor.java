@@ -13,6 +13,13 @@ public interface StepExecutor {
      */
     long execute(StepCommand cmd, long startMicros, SampleReply reply);
 
+    /**
+     * Switches the HV off at {@code atMicros} of the instrument's clock: the link watchdog tripped
+     * (hardware ICD §4.1). Test doubles without an HV supply may ignore it.
+     */
+    default void switchHvOff(long atMicros) {
+    }
+
     /** Fills the electronics' own fields of a housekeeping reply (HV monitors, temperature). */
     default void housekeeping(HousekeepingReply hk) {
     }

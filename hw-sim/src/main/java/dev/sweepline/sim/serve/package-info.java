@@ -20,6 +20,10 @@
  * <li><b>S3</b> Every damaged frame is discarded and counted on both sides; the counts add up exactly
  *     to the ledger; no wrong sample is accepted. <i>LinkFaultTest.</i></li>
  * <li><b>S4</b> Link load per mode against the baud rate, warning above 80 %. <i>LinkBudgetTest.</i></li>
+ * <li><b>S5</b> The link watchdog of the hardware ICD §4.1: with the HV on, no valid step frame for
+ *     2000 ms of wall time after the last reply (not at exactly 2000 ms), or the end of the stream,
+ *     switches the HV off and is reported in housekeeping (status bit 1, trip count).
+ *     <i>InstrumentServerTest (T - 1 ms, T, T + 1 ms on an injected clock), RunHvShutdownHilTest.</i></li>
  * </ol>
  * Threading: each server and injector on one thread.
  */

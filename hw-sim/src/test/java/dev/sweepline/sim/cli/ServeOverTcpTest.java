@@ -2,9 +2,15 @@ package dev.sweepline.sim.cli;
 
 import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import dev.sweepline.fsw.host.FswMain;
+import dev.sweepline.ground.decode.DecodeListener;
+import dev.sweepline.ground.decode.DecoderConfig;
+import dev.sweepline.ground.decode.HousekeepingReport;
+import dev.sweepline.ground.decode.TelemetryDecoder;
+import dev.sweepline.ground.spectrum.Ccsds121QuadrantDecoder;
 import dev.sweepline.sim.bench.BenchConfig;
 import dev.sweepline.sim.bench.ClosedLoopBench;
 import dev.sweepline.sim.scenario.ScenarioLoader;
@@ -12,6 +18,9 @@ import java.io.ByteArrayOutputStream;
 import java.net.ServerSocket;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.List;
 import java.util.concurrent.TimeUnit;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.Timeout;
@@ -20,7 +29,8 @@ import org.junit.jupiter.api.io.TempDir;
 /**
  * Both command lines end to end over TCP on loopback: {@code bench serve --as-fast-as-possible} and
  * {@code fsw run --clock link} with HV armed and fired, whose TM file must equal the in-process run's
- * telemetry for the same seed (architecture.md, determinism).
+ * telemetry for the same seed (architecture.md, determinism), but for the closing housekeeping packet,
+ * which reports the HV off that ends every run (hardware ICD §4.2, §7).
  */
 class ServeOverTcpTest {
     @Test
@@ -51,7 +61,59 @@ class ServeOverTcpTest {
                 ClosedLoopBench.Progress.NONE, reference::write);
         byte[] got = Files.readAllBytes(tm);
         assertTrue(got.length > 0);
-        assertArrayEquals(reference.toByteArray(), got);
+        assertEquals(reference.size(), got.length);
+        // the same telemetry packet for packet, but for the closing housekeeping: every run ends with the HV
+        // commanded off (hardware ICD §4.2), the bench's run does not
+        Decoded want = Decoded.of(reference.toByteArray());
+        Decoded have = Decoded.of(got);
+        assertEquals(want.packets.size(), have.packets.size());
+        int closing = have.lastHousekeeping;
+        assertEquals(want.lastHousekeeping, closing);
+        for (int i = 0; i < have.packets.size(); i++) {
+            if (i != closing) {
+                assertArrayEquals(want.packets.get(i), have.packets.get(i), "packet " + i);
+            }
+        }
+        byte[] a = want.packets.get(closing);
+        byte[] b = have.packets.get(closing);
+        int userData = b.length - HousekeepingReport.USER_DATA_OCTETS;
+        List<Integer> differ = new ArrayList<>();
+        for (int i = 0; i < b.length; i++) {
+            if (a[i] != b[i]) {
+                differ.add(i - userData);
+            }
+        }
+        assertEquals(List.of(1, 33), differ); // telemetry ICD §5: HV enabled (1), HV interlock state (33)
+        assertTrue(want.closing.hvEnabled() && want.closing.hvState() == 2);
+        assertFalse(have.closing.hvEnabled());
+        assertEquals(0, have.closing.hvState()); // OFF
+    }
+
+    /** Every packet of a TM stream as the independent ground decoder reads it, and the last housekeeping. */
+    private static final class Decoded {
+        final List<byte[]> packets = new ArrayList<>();
+        int lastHousekeeping = -1;
+        HousekeepingReport closing;
+
+        static Decoded of(byte[] tm) {
+            Decoded d = new Decoded();
+            TelemetryDecoder decoder = new TelemetryDecoder(DecoderConfig.icdDefaults(), new Ccsds121QuadrantDecoder(),
+                    new DecodeListener() {
+                        @Override
+                        public void onPacket(int vcid, byte[] buf, int off, int octets) {
+                            d.packets.add(Arrays.copyOfRange(buf, off, off + octets));
+                        }
+
+                        @Override
+                        public void onHousekeeping(HousekeepingReport report) {
+                            d.lastHousekeeping = d.packets.size() - 1;
+                            d.closing = report;
+                        }
+                    });
+            decoder.accept(tm, 0, tm.length);
+            decoder.finish();
+            return d;
+        }
     }
 
     @Test

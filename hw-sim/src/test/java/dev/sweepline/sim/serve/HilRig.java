@@ -12,6 +12,7 @@ import dev.sweepline.ground.spectrum.DecodedSpectrum;
 import dev.sweepline.sim.bench.BenchConfig;
 import dev.sweepline.sim.bench.ClosedLoopBench;
 import java.io.ByteArrayOutputStream;
+import java.io.File;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
@@ -19,6 +20,17 @@ import java.util.List;
 /** Shared pieces of the hardware-in-the-loop tests: the in-process reference run and the ground's view. */
 final class HilRig {
     private HilRig() {
+    }
+
+    /** The socat on the PATH, or null when it is not installed (the serial tests then skip). */
+    static String socatPath() {
+        for (String dir : System.getenv().getOrDefault("PATH", "/usr/bin").split(File.pathSeparator)) {
+            File f = new File(dir, "socat");
+            if (f.canExecute()) {
+                return f.getPath();
+            }
+        }
+        return null;
     }
 
     /** The telemetry of the in-process bench for {@code config}. */

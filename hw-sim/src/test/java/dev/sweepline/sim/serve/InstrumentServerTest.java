@@ -5,17 +5,26 @@ import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import dev.sweepline.fsw.link.FramedInstrumentLink;
+import dev.sweepline.fsw.link.HousekeepingCodec;
 import dev.sweepline.fsw.link.PipeTransport;
 import dev.sweepline.fsw.link.SampleReply;
 import dev.sweepline.fsw.link.StepCommand;
 import org.junit.jupiter.api.Test;
 
-/** The server's rules (serve design note S2; hardware ICD §4, §5). */
+/** The server's rules (serve design note S2, S5; hardware ICD §4, §4.1, §5). */
 class InstrumentServerTest {
     /** Counts executions; the reply carries the execution number in Q1 and the start time in Q2. */
     private static final class CountingExecutor implements StepExecutor {
         int executions;
         boolean lastHvEnabled;
+        int hvSwitchedOff;
+        long hvSwitchedOffAtMicros = -1;
+
+        @Override
+        public void switchHvOff(long atMicros) {
+            hvSwitchedOff++;
+            hvSwitchedOffAtMicros = atMicros;
+        }
 
         @Override
         public long execute(StepCommand cmd, long startMicros, SampleReply reply) {
@@ -98,10 +107,84 @@ class InstrumentServerTest {
         assertEquals(4, link.housekeeping().lastStepSequence);
     }
 
+    @Test
+    void shouldSwitchTheHvOffWhenNoStepFrameCameForTheWatchdogTime() {
+        InstrumentServer server = new InstrumentServer(executor, ends[1], 0);
+        long replyNanos = 7_000_000_000L; // any wall time: the reply of the last step goes out here
+        assertTrue(exchange(server, step(1, 100, 200), replyNanos));
+        long t = InstrumentServer.WATCHDOG_NANOS; // hardware ICD §4.1: 2 s
+        assertEquals(2_000_000_000L, t);
+        server.doWork(replyNanos + t - 1_000_000); // T - 1 ms: quiet, but not for long enough
+        assertEquals(0, executor.hvSwitchedOff);
+        server.doWork(replyNanos + t); // at T: still on (the deadline itself is in time, as the executive's)
+        assertTrue(server.hvOn());
+        server.doWork(replyNanos + t + 1_000_000); // T + 1 ms: tripped
+        assertEquals(1, executor.hvSwitchedOff);
+        assertEquals(9_000, executor.hvSwitchedOffAtMicros); // at the instrument clock's end of the 9 ms step
+        assertEquals(1, server.watchdogTrips());
+        assertFalse(server.hvOn());
+        server.doWork(replyNanos + 10 * t);
+        assertEquals(1, executor.hvSwitchedOff); // once per quiet spell
+
+        assertTrue(housekeeping(server, replyNanos + 10 * t));
+        assertEquals(HousekeepingCodec.STATUS_WATCHDOG_OFF, link.housekeeping().status); // ICD §3.3: bit 1, HV off
+        assertEquals(1, link.housekeeping().watchdogTrips);
+        assertTrue(exchange(server, step(2, 100, 200), replyNanos + 11 * t)); // the next step enables it again
+        assertTrue(housekeeping(server, replyNanos + 11 * t));
+        assertEquals(HousekeepingCodec.STATUS_HV_ON, link.housekeeping().status);
+        assertEquals(1, link.housekeeping().watchdogTrips); // the count stays (since power-up)
+    }
+
+    @Test
+    void shouldNotRunTheWatchdogWhileTheHvIsOffOrAStepExecutes() {
+        InstrumentServer server = new InstrumentServer(executor, ends[1], 1.0); // real time: a 2.2 s step
+        StepCommand off = step(1, 0, 0);
+        off.hvEnabled = false;
+        link.send(off, 0);
+        server.doWork(0);
+        server.doWork(off.durationMicros() * 1_000); // its reply is due after 9 ms
+        assertTrue(link.poll(reply, 0));
+        server.doWork(10 * InstrumentServer.WATCHDOG_NANOS);
+        assertEquals(0, executor.hvSwitchedOff); // nothing to switch off
+        StepCommand longStep = step(2, 100, 200);
+        longStep.settleMicros = 1_200_000; // longer than T with its integration: the watchdog waits for the reply
+        longStep.integrationPeriods = 1000;
+        long start = 20 * InstrumentServer.WATCHDOG_NANOS;
+        link.send(longStep, 0);
+        server.doWork(start);
+        server.doWork(start + InstrumentServer.WATCHDOG_NANOS + 1);
+        assertEquals(0, executor.hvSwitchedOff);
+        assertFalse(link.poll(reply, 0));
+    }
+
+    @Test
+    void shouldSwitchTheHvOffAtOnceWhenTheStreamEnds() {
+        InstrumentServer server = new InstrumentServer(executor, ends[1], 0);
+        assertTrue(exchange(server, step(1, 100, 200), 0));
+        ends[0].close(); // the flight software's end hangs up
+        server.doWork(1); // long before T
+        assertEquals(1, executor.hvSwitchedOff);
+        assertTrue(server.ended());
+    }
+
+    private boolean housekeeping(InstrumentServer server, long nowNanos) {
+        long before = link.housekeepingReplies();
+        link.requestHousekeeping(5);
+        for (int i = 0; i < 4 && link.housekeepingReplies() == before; i++) {
+            server.doWork(nowNanos);
+            link.pump();
+        }
+        return link.housekeepingReplies() > before;
+    }
+
     private boolean exchange(InstrumentServer server, StepCommand s) {
+        return exchange(server, s, 0);
+    }
+
+    private boolean exchange(InstrumentServer server, StepCommand s, long nowNanos) {
         link.send(s, 0);
         for (int i = 0; i < 4; i++) {
-            server.doWork(0);
+            server.doWork(nowNanos);
             if (link.poll(reply, 0)) {
                 return true;
             }

@@ -16,7 +16,6 @@ import dev.sweepline.sim.bench.BenchConfig;
 import dev.sweepline.sim.scenario.Scenario;
 import dev.sweepline.sim.scenario.ScenarioLoader;
 import java.io.ByteArrayOutputStream;
-import java.io.File;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
@@ -38,11 +37,11 @@ class SerialHilTest {
     @Test
     @Timeout(value = 120, unit = TimeUnit.SECONDS)
     void shouldMatchTheInProcessRunOverAPtyPairAt115200Baud() throws Exception {
-        assumeTrue(socatPath() != null, "socat is not installed: the serial hardware-in-the-loop test is skipped");
+        assumeTrue(HilRig.socatPath() != null, "socat is not installed: the serial hardware-in-the-loop test is skipped");
         Path dir = Files.createTempDirectory("sweepline-pty");
         Path a = dir.resolve("a");
         Path b = dir.resolve("b");
-        Process socat = new ProcessBuilder(socatPath(), "-d", "-d",
+        Process socat = new ProcessBuilder(HilRig.socatPath(), "-d", "-d",
                 "pty,raw,echo=0,link=" + a, "pty,raw,echo=0,link=" + b).redirectErrorStream(true)
                 .redirectOutput(dir.resolve("socat.log").toFile()).start();
         try {
@@ -99,16 +98,6 @@ class SerialHilTest {
             assertTrue(System.nanoTime() < deadline, "socat made no pty pair");
             Thread.sleep(20);
         }
-    }
-
-    private static String socatPath() {
-        for (String dir : System.getenv().getOrDefault("PATH", "/usr/bin").split(File.pathSeparator)) {
-            File f = new File(dir, "socat");
-            if (f.canExecute()) {
-                return f.getPath();
-            }
-        }
-        return null;
     }
 
     /** Times each step from its send to the poll that returns its reply. */
