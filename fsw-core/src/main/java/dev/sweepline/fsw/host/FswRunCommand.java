@@ -150,6 +150,8 @@ final class FswRunCommand implements Callable<Integer> {
         HvGuardLink guard = new HvGuardLink(framed, arming);
         FlightConfig flight = new FlightConfig();
         flight.hvPermitted = false; // the core interlock starts OFF too; the operator's fire below enables both
+        // this boot's authentication-recovery challenge (commands.md §1.4): unpredictable to an eavesdropper
+        flight.bootChallenge = new java.security.SecureRandom().nextInt() & 0xFFFF_FFFFL;
         FlightSoftware fsw = new FlightSoftware(flight, guard, sink, SweepListener.NONE);
         // the run's time starts here, after the prompt: --minutes is run time, whenever FIRE was typed
         MonotonicClock runClock = new MonotonicClock();
