@@ -8,6 +8,7 @@ import dev.sweepline.fsw.sweep.SweepListener;
 import dev.sweepline.fsw.sweep.SweepMode;
 import dev.sweepline.sim.cup.FaradayCup;
 import dev.sweepline.sim.design.ProtonInformation;
+import dev.sweepline.sim.hv.WindowVolts;
 import dev.sweepline.sim.instrument.StepTruth;
 import dev.sweepline.sim.link.InProcessLink;
 import dev.sweepline.sim.plasma.IonPopulation;

@@ -5,6 +5,7 @@ import dev.sweepline.fsw.exec.FlightSoftware;
 import dev.sweepline.fsw.telemetry.FrameSink;
 import dev.sweepline.sim.cup.FaradayCup;
 import dev.sweepline.sim.design.DOptimalDesign;
+import dev.sweepline.sim.hv.WindowVolts;
 import dev.sweepline.sim.instrument.SimulatedInstrument;
 import dev.sweepline.sim.link.InProcessLink;
 import dev.sweepline.sim.plasma.PlasmaState;

@@ -3,7 +3,7 @@ package dev.sweepline.sim.bench;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.SerializationFeature;
 import dev.sweepline.fsw.sweep.SweepMode;
-import dev.sweepline.sim.serve.LinkBudget;
+import dev.sweepline.sim.link.LinkBudget;
 import java.io.IOException;
 import java.io.PrintStream;
 import java.io.Writer;

@@ -1,8 +1,8 @@
 package dev.sweepline.sim.design;
 
 import dev.sweepline.fsw.link.InstrumentConstants;
-import dev.sweepline.sim.bench.WindowVolts;
 import dev.sweepline.sim.cup.FaradayCup;
+import dev.sweepline.sim.hv.WindowVolts;
 import dev.sweepline.sim.plasma.IonPopulation;
 import dev.sweepline.sim.plasma.PlasmaState;
 import dev.sweepline.sim.preamp.Preamplifier;

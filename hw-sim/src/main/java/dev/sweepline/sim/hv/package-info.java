@@ -8,7 +8,9 @@
  * form: a linear slew, then exponential settling inside the band S tau.
  * {@link dev.sweepline.sim.hv.HvSupply} has the low and high rails, the HV enable, and a noisy monitor
  * of the high rail in DAC code units ({@link dev.sweepline.sim.hv.HvSupplyParameters}: demo 100 V/ms,
- * tau 150 us, 0.5 V rms).
+ * tau 150 us, 0.5 V rms). {@link dev.sweepline.sim.hv.WindowVolts} gives the energy-per-charge
+ * windows a table's DAC codes make through the calibration: where the bench places the true peaks and
+ * the D-optimal design spends its time.
  *
  * <h2>Requirements</h2>
  * <ol>

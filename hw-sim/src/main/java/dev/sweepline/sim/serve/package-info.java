@@ -8,7 +8,8 @@
  * {@link dev.sweepline.sim.serve.ScenarioInstrument}) and replies, paced in real time, at a speed-up,
  * or at once. {@link dev.sweepline.sim.serve.FaultyTransport} damages the traffic (bit flips, lost
  * and duplicated octets, stalls, seeded) and keeps a {@link dev.sweepline.sim.serve.FaultLedger} of
- * what the receivers must see. {@link dev.sweepline.sim.serve.LinkBudget} sizes the serial link.
+ * what the receivers must see. The serial link's load is sized in the link package
+ * ({@code dev.sweepline.sim.link.LinkBudget}).
  *
  * <h2>Requirements and how each is verified</h2>
  * <ol>
@@ -19,7 +20,7 @@
  *     execution; a step with low &ge; high runs with the HV off. <i>InstrumentServerTest.</i></li>
  * <li><b>S3</b> Every damaged frame is discarded and counted on both sides; the counts add up exactly
  *     to the ledger; no wrong sample is accepted. <i>LinkFaultTest.</i></li>
- * <li><b>S4</b> Link load per mode against the baud rate, warning above 80 %. <i>LinkBudgetTest.</i></li>
+ * <li><b>S4</b> (the link budget) is the link package's L2.</li>
  * <li><b>S5</b> The link watchdog of the hardware ICD §4.1: with the HV on, no valid step frame for
  *     2000 ms of wall time after the last reply (not at exactly 2000 ms), or the end of the stream,
  *     switches the HV off and is reported in housekeeping (status bit 1, trip count).

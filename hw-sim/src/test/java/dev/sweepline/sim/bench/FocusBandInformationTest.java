@@ -8,6 +8,7 @@ import dev.sweepline.sim.cup.CupGeometry;
 import dev.sweepline.sim.cup.FaradayCup;
 import dev.sweepline.sim.design.ProtonInformation;
 import dev.sweepline.sim.hv.HvCalibration;
+import dev.sweepline.sim.hv.WindowVolts;
 import dev.sweepline.sim.plasma.IonPopulation;
 import dev.sweepline.sim.plasma.PlasmaState;
 import java.util.ArrayList;

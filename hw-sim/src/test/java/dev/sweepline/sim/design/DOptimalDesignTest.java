@@ -5,10 +5,10 @@ import static org.junit.jupiter.api.Assertions.assertNotNull;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import dev.sweepline.fsw.table.WindowTable;
-import dev.sweepline.sim.bench.WindowVolts;
 import dev.sweepline.sim.cup.CupGeometry;
 import dev.sweepline.sim.cup.FaradayCup;
 import dev.sweepline.sim.hv.HvCalibration;
+import dev.sweepline.sim.hv.WindowVolts;
 import dev.sweepline.sim.plasma.IonPopulation;
 import dev.sweepline.sim.plasma.IonSpecies;
 import dev.sweepline.sim.plasma.PlasmaState;

@@ -1,4 +1,4 @@
-package dev.sweepline.sim.serve;
+package dev.sweepline.sim.link;
 
 import dev.sweepline.fsw.link.FrameEncoder;
 import dev.sweepline.fsw.link.InstrumentConstants;

@@ -1,11 +1,12 @@
-package dev.sweepline.sim.bench;
+package dev.sweepline.sim.hv;
 
+import dev.sweepline.fsw.sweep.SweepScheduler;
 import dev.sweepline.fsw.table.WindowTable;
-import dev.sweepline.sim.hv.HvCalibration;
 
 /**
  * The energy-per-charge windows of a table as the real HV supply makes them (the table's DAC codes
- * through the supply's calibration): the bench uses them to place the true peaks on the window axis.
+ * through the supply's calibration). The bench places the true peaks on them; the D-optimal design
+ * spends its integration time over them.
  */
 public final class WindowVolts {
     private final double[] lowVolts;
@@ -23,7 +24,7 @@ public final class WindowVolts {
     }
 
     /** The windows of the scheduler's active table (it changes when a table is commanded or restored). */
-    public WindowVolts(dev.sweepline.fsw.sweep.SweepScheduler scheduler, HvCalibration calibration) {
+    public WindowVolts(SweepScheduler scheduler, HvCalibration calibration) {
         int n = scheduler.windowCount();
         lowVolts = new double[n];
         highVolts = new double[n];
@@ -34,7 +35,7 @@ public final class WindowVolts {
     }
 
     /** True when these are the windows of the scheduler's active table (every edge compared). */
-    boolean matches(dev.sweepline.fsw.sweep.SweepScheduler scheduler, HvCalibration calibration) {
+    public boolean matches(SweepScheduler scheduler, HvCalibration calibration) {
         int n = scheduler.windowCount();
         if (n != lowVolts.length) {
             return false;
