@@ -12,6 +12,7 @@ import dev.sweepline.sim.plasma.PlasmaState;
 import dev.sweepline.sim.scenario.AlphaDriftDirection;
 import dev.sweepline.sim.scenario.ScenarioTimeline;
 import dev.sweepline.fsw.sweep.SweepListener;
+import dev.sweepline.sim.seed.SeedTree;
 import java.util.function.Consumer;
 import java.util.function.LongFunction;
 
@@ -80,11 +81,6 @@ public final class ClosedLoopBench {
                 design.optimalInformation(midRun, recorder.informationSeconds(), stepSeconds));
     }
 
-    /** Seed of the instrument's noise, derived from the run seed so the two streams are independent. */
-    public static long instrumentSeed(long runSeed) {
-        return runSeed * 0x9E3779B97F4A7C15L + 0x632BE59BD9B4E019L;
-    }
-
     /**
      * What a caller may attach to a run: where the frames go, a hook into the cycles (command
      * scripts, fault injection, a commanded mode), and one more observer of the scheduler's callbacks
@@ -143,7 +139,8 @@ public final class ClosedLoopBench {
         LongFunction<PlasmaState> plasma = micros -> PlasmaStates.of(timeline.at(micros / 1e6), drift);
         BenchRecorder recorder = new BenchRecorder(windows, new FaradayCup(config.instrument().cup()), plasma,
                 hooks.observer());
-        SimulatedInstrument instrument = new SimulatedInstrument(config.instrument(), instrumentSeed(config.seed()));
+        SeedTree seeds = SeedTree.of(config.seed());
+        SimulatedInstrument instrument = new SimulatedInstrument(config.instrument(), seeds.instrument());
         InProcessLink link = new InProcessLink(instrument, plasma::apply, recorder);
         FlightConfig flight = new FlightConfig();
         flight.table = config.table();
@@ -155,8 +152,7 @@ public final class ClosedLoopBench {
         flight.hvEnabledAtStart = true;
         // the recovery challenge is drawn from the run seed so that runs stay reproducible; the PC
         // host draws it from SecureRandom (commands.md §1.4)
-        flight.bootChallenge = new java.util.SplittableRandom(instrumentSeed(config.seed()) ^ 0x6368616CL).nextLong()
-                & 0xFFFF_FFFFL;
+        flight.bootChallenge = seeds.bootChallenge();
         hooks.cycle().configure(flight, instrument);
         FlightSoftware fsw = new FlightSoftware(flight, link, hooks.frames(), recorder);
         recorder.follow(fsw.scheduler(), config.instrument().calibration());

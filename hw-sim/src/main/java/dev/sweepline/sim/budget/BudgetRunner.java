@@ -8,6 +8,7 @@ import dev.sweepline.sim.bench.BenchConfig;
 import dev.sweepline.sim.bench.ClosedLoopBench;
 import dev.sweepline.sim.bench.RunSummary;
 import dev.sweepline.sim.instrument.InstrumentModel;
+import dev.sweepline.sim.seed.SeedTree;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
@@ -53,7 +54,7 @@ public final class BudgetRunner {
             List<Future<BudgetResult.Sample>> futures = new ArrayList<>();
             for (int i = 0; i < points.size(); i++) {
                 double[] pt = points.get(i);
-                long pointSeed = seed * 1_000_003L + i; // each point its own, repeatable noise
+                long pointSeed = SeedTree.of(seed).point(i).seed(); // each point its own, repeatable noise
                 futures.add(pool.submit(() -> sampleOne(plan, plan.phases().get((int) pt[0]), pt[1], pt[2], pointSeed)));
             }
             List<BudgetResult.Sample> samples = new ArrayList<>();

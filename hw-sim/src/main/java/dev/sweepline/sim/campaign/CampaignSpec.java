@@ -7,6 +7,7 @@ import dev.sweepline.sim.scenario.Scenario;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
+import dev.sweepline.sim.seed.SeedTree;
 import java.util.SplittableRandom;
 
 /**
@@ -66,14 +67,14 @@ public record CampaignSpec(String name, String description, long seed, int runsP
         return p;
     }
 
-    /** Seed of ensemble member {@code run}, the same for every set. */
+    /** Seed of ensemble member {@code run}, the same for every set ({@link SeedTree#member}). */
     public long runSeed(int run) {
-        return new SplittableRandom(seed).split().nextLong() ^ (0x9E3779B97F4A7C15L * (run + 1));
+        return SeedTree.of(seed).member(run).seed();
     }
 
     /** Ensemble member {@code run}: the base scenario from a drawn start. */
     public Scenario member(int run) {
-        SplittableRandom random = new SplittableRandom(runSeed(run));
+        SplittableRandom random = SeedTree.of(seed).member(run).ensembleDraws();
         PlasmaConditions start = base.start();
         for (Map.Entry<PlasmaParameter, Distribution> d : draws.entrySet()) {
             start = start.with(d.getKey(), Ensemble.clip(d.getKey(), d.getValue().draw(random)));

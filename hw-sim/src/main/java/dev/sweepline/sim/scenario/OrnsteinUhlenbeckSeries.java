@@ -1,15 +1,16 @@
 package dev.sweepline.sim.scenario;
 
+import dev.sweepline.sim.seed.SeedTree;
 import java.util.Arrays;
 
 /**
- * A stationary Ornstein-Uhlenbeck process of zero mean and unit variance, fixed by a seed and a
- * stream number, evaluated on a grid of step tau/64 and linearly interpolated between grid points.
+ * A stationary Ornstein-Uhlenbeck process of zero mean and unit variance, fixed by a key (a fluctuation
+ * stream of the run's {@link SeedTree}), evaluated on a grid of step tau/64 and linearly interpolated between grid points.
  *
  * <p>Grid values follow the exact update x[k+1] = a x[k] + sqrt(1 - a^2) g[k+1] with a = exp(-step/tau)
  * and x[0] = g[0], so the variance is 1 and the autocorrelation exp(-lag/tau) at every grid lag
  * (Gillespie 1996, Phys. Rev. E 54, "Exact numerical simulation of the Ornstein-Uhlenbeck process"
- * [memory]). The Gaussian g[k] is a pure function of (seed, stream, k) (SplitMix64 mixing of a counter,
+ * [memory]). The Gaussian g[k] is a pure function of (key, k) (SplitMix64 mixing of a counter,
  * Steele, Lea and Flood 2014 [memory], then Box-Muller), so any grid point can be recomputed from the
  * nearest checkpoint: the series keeps one checkpoint per block of {@value #BLOCK} points and one cached
  * block. Calls in time order cost one interpolation each (a block is filled once); calls in any other
@@ -23,8 +24,6 @@ final class OrnsteinUhlenbeckSeries {
     static final int STEPS_PER_TAU = 64;
     /** Grid points per block. */
     static final int BLOCK = 1024;
-    private static final long GOLDEN_GAMMA = 0x9E3779B97F4A7C15L;
-
     private final long key;
     private final double stepSeconds;
     private final double a;
@@ -34,9 +33,9 @@ final class OrnsteinUhlenbeckSeries {
     private final double[] block = new double[BLOCK + 1];
     private long cachedBlock = -1;
 
-    /** The process of correlation time {@code tauSeconds} for {@code seed} and stream {@code stream}. */
-    OrnsteinUhlenbeckSeries(long seed, int stream, double tauSeconds) {
-        this.key = mix64(mix64(seed) + stream * GOLDEN_GAMMA);
+    /** The process of correlation time {@code tauSeconds} for {@code key} ({@link SeedTree#fluctuation}). */
+    OrnsteinUhlenbeckSeries(long key, double tauSeconds) {
+        this.key = key;
         this.stepSeconds = tauSeconds / STEPS_PER_TAU;
         this.a = Math.exp(-1.0 / STEPS_PER_TAU);
         this.b = Math.sqrt(1.0 - a * a);
@@ -97,17 +96,10 @@ final class OrnsteinUhlenbeckSeries {
 
     /** A standard normal value that depends only on (key, k): Box-Muller on two mixed counters. */
     private double gaussian(long k) {
-        long h1 = mix64(key + (2 * k + 1) * GOLDEN_GAMMA);
-        long h2 = mix64(key + (2 * k + 2) * GOLDEN_GAMMA);
+        long h1 = SeedTree.mix64(key + (2 * k + 1) * SeedTree.GOLDEN_GAMMA);
+        long h2 = SeedTree.mix64(key + (2 * k + 2) * SeedTree.GOLDEN_GAMMA);
         double u1 = ((h1 >>> 11) + 1) * 0x1.0p-53; // in (0, 1], so the log is finite
         double u2 = (h2 >>> 11) * 0x1.0p-53;
         return Math.sqrt(-2.0 * Math.log(u1)) * Math.cos(2.0 * Math.PI * u2);
-    }
-
-    /** The SplitMix64 output function (Steele, Lea and Flood 2014 [memory]). */
-    static long mix64(long z) {
-        z = (z ^ (z >>> 30)) * 0xBF58476D1CE4E5B9L;
-        z = (z ^ (z >>> 27)) * 0x94D049BB133111EBL;
-        return z ^ (z >>> 31);
     }
 }

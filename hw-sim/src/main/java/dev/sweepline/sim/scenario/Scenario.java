@@ -1,5 +1,6 @@
 package dev.sweepline.sim.scenario;
 
+import dev.sweepline.sim.seed.SeedTree;
 import java.util.ArrayList;
 import java.util.List;
 
@@ -136,7 +137,7 @@ public final class Scenario {
 
     /** The plasma of a run with {@code seed}; each call gives a new, independent timeline object. */
     public ScenarioTimeline timeline(long seed) {
-        return new ScenarioTimeline(tracks, fluctuations, seed);
+        return new ScenarioTimeline(tracks, fluctuations, SeedTree.of(seed));
     }
 
     @Override

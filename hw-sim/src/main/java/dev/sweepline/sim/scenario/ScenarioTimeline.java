@@ -1,5 +1,7 @@
 package dev.sweepline.sim.scenario;
 
+import dev.sweepline.sim.seed.SeedTree;
+
 /**
  * The plasma of one scenario run as a function of time: the event-driven course of each parameter
  * with the seeded fluctuations laid over it. Values are fixed by the seed alone, whatever times are
@@ -27,16 +29,17 @@ public final class ScenarioTimeline {
     private final OrnsteinUhlenbeckSeries[] series;
     private final double[] values = new double[PlasmaParameter.values().length];
 
-    ScenarioTimeline(ParameterTrack[] tracks, Fluctuations fluctuations, long seed) {
+    ScenarioTimeline(ParameterTrack[] tracks, Fluctuations fluctuations, SeedTree seeds) {
         this.tracks = tracks;
         this.fluctuations = fluctuations;
         double[] rms = {fluctuations.densityRelativeRms(), fluctuations.speedRelativeRms(),
             fluctuations.temperatureRelativeRms(), fluctuations.flowAngleRmsDeg(), fluctuations.flowAngleRmsDeg()};
         this.series = new OrnsteinUhlenbeckSeries[rms.length];
         for (int i = 0; i < series.length; i++) {
-            // The stream number is the quantity's index, so adding a fluctuation to one quantity in a
+            // The stream index is the quantity's index, so adding a fluctuation to one quantity in a
             // file leaves the others' histories for the same seed unchanged.
-            series[i] = rms[i] > 0 ? new OrnsteinUhlenbeckSeries(seed, i, fluctuations.correlationSeconds()) : null;
+            series[i] = rms[i] > 0
+                    ? new OrnsteinUhlenbeckSeries(seeds.fluctuation(i), fluctuations.correlationSeconds()) : null;
         }
     }
 

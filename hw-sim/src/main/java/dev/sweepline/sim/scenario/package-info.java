@@ -33,7 +33,8 @@
  * <li>Line numbers: Jackson's tree drops token locations, so {@code YamlTreeReader} builds its own small
  *     tree from the streaming YAML parser; every node keeps its dotted path and line.</li>
  * <li>Fluctuations without state that depends on the call order: the Gaussian increments are a pure
- *     function of (seed, stream, grid index) (counter-based SplitMix64 + Box-Muller), the exact OU update
+ *     function of (seed, stream, grid index) (the stream's key from the run's
+ *     {@link dev.sweepline.sim.seed.SeedTree}, counter-based SplitMix64 + Box-Muller), the exact OU update
  *     runs on a grid of tau/64, one checkpoint per 1024 grid points lets any block be rebuilt, and values
  *     between grid points are interpolated linearly. Memory grows by one double per 1024 grid points.</li>
  * <li>Fluctuations are multiplicative on density, speed and temperature (so a relative rms stays a

@@ -1,11 +1,14 @@
 package dev.sweepline.sim.serve;
 
+import dev.sweepline.sim.seed.SeedTree;
+import dev.sweepline.sim.seed.SeedTree.LinkFault;
 import java.util.SplittableRandom;
 
 /**
  * Damages one direction of a byte stream octet by octet, as {@link FaultPlan} says, and keeps its
  * {@link FaultLedger}. Each fault kind draws geometric gaps to its next occurrence from its own
- * split of the seed, so the same seed damages the same octets whatever the chunking.
+ * stream of the fault seed's tree ({@link SeedTree#linkFaults}), so the same seed damages the same
+ * octets whatever the chunking.
  *
  * <p>Threading: one thread.
  */
@@ -25,11 +28,11 @@ final class FaultInjector {
     private boolean frameTouched;
     private boolean previousDelimiterDestroyed;
 
-    FaultInjector(FaultPlan plan, SplittableRandom random) {
-        this.flips = new Gaps(plan.bitErrorRate(), random.split());
-        this.drops = new Gaps(plan.dropPerOctet(), random.split());
-        this.dups = new Gaps(plan.dupPerOctet(), random.split());
-        this.stalls = new Gaps(plan.stallPerOctet(), random.split());
+    FaultInjector(FaultPlan plan, SeedTree seeds, SeedTree.LinkDirection direction) {
+        this.flips = new Gaps(plan.bitErrorRate(), seeds.linkFaults(direction, LinkFault.BIT_FLIP));
+        this.drops = new Gaps(plan.dropPerOctet(), seeds.linkFaults(direction, LinkFault.DROP));
+        this.dups = new Gaps(plan.dupPerOctet(), seeds.linkFaults(direction, LinkFault.DUPLICATE));
+        this.stalls = new Gaps(plan.stallPerOctet(), seeds.linkFaults(direction, LinkFault.STALL));
     }
 
     /** Decides the fate of one clean octet: the octet to send (low 8 bits) and the {@code DROP/DUPLICATE/STALL} bits. */

@@ -8,7 +8,8 @@ package dev.sweepline.sim.serve;
  * @param dupPerOctet    probability that an octet arrives twice
  * @param stallPerOctet  probability that the stream stops after an octet
  * @param stallMicros    how long a stall holds the stream back
- * @param seed           seeds every draw (the two directions use independent streams split from it)
+ * @param seed           root of the damage's seed tree: each kind in each direction its own stream
+ *                       ({@code SeedTree.linkFaults})
  */
 public record FaultPlan(double bitErrorRate, double dropPerOctet, double dupPerOctet, double stallPerOctet,
         long stallMicros, long seed) {

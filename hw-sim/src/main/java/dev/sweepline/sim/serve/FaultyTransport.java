@@ -1,7 +1,7 @@
 package dev.sweepline.sim.serve;
 
 import dev.sweepline.fsw.link.ByteTransport;
-import java.util.SplittableRandom;
+import dev.sweepline.sim.seed.SeedTree;
 import java.util.function.LongSupplier;
 
 /**
@@ -40,9 +40,9 @@ public final class FaultyTransport implements ByteTransport {
         this.inner = inner;
         this.plan = plan;
         this.clockMicros = clockMicros;
-        SplittableRandom root = new SplittableRandom(plan.seed());
-        this.in = new FaultInjector(plan, root.split());
-        this.out = new FaultInjector(plan, root.split());
+        SeedTree seeds = SeedTree.of(plan.seed());
+        this.in = new FaultInjector(plan, seeds, SeedTree.LinkDirection.INBOUND);
+        this.out = new FaultInjector(plan, seeds, SeedTree.LinkDirection.OUTBOUND);
         long now = clockMicros.getAsLong();
         this.inStallUntil = now;
         this.outStallUntil = now;

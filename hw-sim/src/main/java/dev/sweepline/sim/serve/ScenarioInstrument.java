@@ -3,7 +3,6 @@ package dev.sweepline.sim.serve;
 import dev.sweepline.fsw.link.HousekeepingReply;
 import dev.sweepline.fsw.link.SampleReply;
 import dev.sweepline.fsw.link.StepCommand;
-import dev.sweepline.sim.bench.ClosedLoopBench;
 import dev.sweepline.sim.bench.PlasmaStates;
 import dev.sweepline.sim.instrument.InstrumentModel;
 import dev.sweepline.sim.instrument.SimulatedInstrument;
@@ -11,10 +10,11 @@ import dev.sweepline.sim.instrument.StepTruth;
 import dev.sweepline.sim.scenario.AlphaDriftDirection;
 import dev.sweepline.sim.scenario.Scenario;
 import dev.sweepline.sim.scenario.ScenarioTimeline;
+import dev.sweepline.sim.seed.SeedTree;
 
 /**
  * The simulated electronics flying through a scenario, as the in-process bench builds them: the
- * instrument's noise seeded with {@link ClosedLoopBench#instrumentSeed(long)}, the plasma of the
+ * instrument's noise seeded with {@link SeedTree#instrument()} of the run seed, the plasma of the
  * scenario's timeline for the same seed evaluated at each step's mid-integration time (as
  * {@code InProcessLink} does). Same seed, same steps at the same times: the same samples.
  *
@@ -38,7 +38,7 @@ public final class ScenarioInstrument implements StepExecutor {
 
     /** Instrument {@code model} in {@code scenario} with run seed {@code seed}. */
     public ScenarioInstrument(Scenario scenario, long seed, InstrumentModel model) {
-        this.instrument = new SimulatedInstrument(model, ClosedLoopBench.instrumentSeed(seed));
+        this.instrument = new SimulatedInstrument(model, SeedTree.of(seed).instrument());
         this.timeline = scenario.timeline(seed);
         this.drift = scenario.alphaDriftDirection();
     }

@@ -14,7 +14,7 @@
  * <h2>Requirements and how each is verified</h2>
  * <ol>
  * <li><b>S1</b> Same seed, same samples as the in-process bench: the instrument's clock is the sum of
- *     the executed steps' durations, the noise seed is {@code ClosedLoopBench.instrumentSeed}, the plasma
+ *     the executed steps' durations, the noise seed is the run seed tree's {@code instrument()}, the plasma
  *     is taken at mid-integration. <i>LinkClockEquivalenceTest, SerialHilTest.</i></li>
  * <li><b>S2</b> A repeat of the last executed sequence number gets the stored reply without a second
  *     execution; a step with low &ge; high runs with the HV off. <i>InstrumentServerTest.</i></li>

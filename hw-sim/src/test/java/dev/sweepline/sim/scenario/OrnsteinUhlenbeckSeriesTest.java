@@ -2,6 +2,7 @@ package dev.sweepline.sim.scenario;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 
+import dev.sweepline.sim.seed.SeedTree;
 import org.junit.jupiter.api.Test;
 
 /**
@@ -22,7 +23,7 @@ class OrnsteinUhlenbeckSeriesTest {
         double[] xTau = new double[SEEDS];
         double[] xFar = new double[SEEDS];
         for (int seed = 1; seed <= SEEDS; seed++) {
-            OrnsteinUhlenbeckSeries s = new OrnsteinUhlenbeckSeries(seed, 0, TAU_S);
+            OrnsteinUhlenbeckSeries s = new OrnsteinUhlenbeckSeries(SeedTree.of(seed).fluctuation(0), TAU_S);
             x0[seed - 1] = s.atGridPoint(0);
             xTau[seed - 1] = s.atGridPoint(OrnsteinUhlenbeckSeries.STEPS_PER_TAU);
             xFar[seed - 1] = s.atGridPoint(far);
@@ -37,7 +38,7 @@ class OrnsteinUhlenbeckSeriesTest {
     @Test
     void shouldInterpolateLinearlyBetweenGridPoints() {
         // Source: the class contract (linear interpolation on a grid of tau/64).
-        OrnsteinUhlenbeckSeries s = new OrnsteinUhlenbeckSeries(5, 1, TAU_S);
+        OrnsteinUhlenbeckSeries s = new OrnsteinUhlenbeckSeries(SeedTree.of(5).fluctuation(1), TAU_S);
         double step = s.stepSeconds();
         assertEquals(TAU_S / 64, step, 0.0);
         double a = s.atGridPoint(1000);
@@ -48,8 +49,8 @@ class OrnsteinUhlenbeckSeriesTest {
     @Test
     void shouldGiveDifferentStreamsForOneSeed() {
         // Streams of one seed are independent draws: equal values would mean a shared stream.
-        OrnsteinUhlenbeckSeries a = new OrnsteinUhlenbeckSeries(9, 0, TAU_S);
-        OrnsteinUhlenbeckSeries b = new OrnsteinUhlenbeckSeries(9, 1, TAU_S);
+        OrnsteinUhlenbeckSeries a = new OrnsteinUhlenbeckSeries(SeedTree.of(9).fluctuation(0), TAU_S);
+        OrnsteinUhlenbeckSeries b = new OrnsteinUhlenbeckSeries(SeedTree.of(9).fluctuation(1), TAU_S);
         for (int k = 0; k < 100; k++) {
             org.junit.jupiter.api.Assertions.assertNotEquals(a.atGridPoint(k), b.atGridPoint(k));
         }
