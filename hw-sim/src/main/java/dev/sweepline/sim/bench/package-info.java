@@ -15,6 +15,9 @@
  *     shock. Verified: SweepPropertiesTest.</li>
  * <li>B4 On a plasma held still the whole chain recovers n, U, T at the Cramér-Rao bound (0.8-1.3 x).
  *     Verified: GroundCheckTest.</li>
+ * <li>B5 Independent runs on N threads ({@code RunPool}, used by campaigns and budgets) come back in the
+ *     order they were given, whatever N; N below 1 is refused. Verified: RunPoolTest,
+ *     CampaignDeterminismTest.</li>
  * </ol>
  * Truth conventions: the true peak of a species is the window where its noise-free current peaks
  * (for a hot wind well above the bulk-speed E/q); a focus sweep is locked when its band holds the

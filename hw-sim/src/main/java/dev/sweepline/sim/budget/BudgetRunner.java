@@ -6,16 +6,13 @@ import dev.sweepline.fsw.table.WindowTable;
 import dev.sweepline.fsw.telemetry.TelemetryWriter;
 import dev.sweepline.sim.bench.BenchConfig;
 import dev.sweepline.sim.bench.ClosedLoopBench;
+import dev.sweepline.sim.bench.RunPool;
 import dev.sweepline.sim.bench.RunSummary;
 import dev.sweepline.sim.instrument.InstrumentModel;
 import dev.sweepline.sim.seed.SeedTree;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
-import java.util.concurrent.ExecutionException;
-import java.util.concurrent.ExecutorService;
-import java.util.concurrent.Executors;
-import java.util.concurrent.Future;
 
 /**
  * Checks an orbit plan's telemetry against its allocations: representative closed loops along each
@@ -26,7 +23,7 @@ public final class BudgetRunner {
     private BudgetRunner() {
     }
 
-    /** Runs the check on {@code threads} threads with run seed {@code seed}. */
+    /** Runs the check on {@code threads} threads (at least 1) with budget seed {@code seed}. */
     public static BudgetResult run(OrbitPlan plan, long seed, int threads) {
         List<double[]> points = new ArrayList<>(); // phase index, hours, distance
         for (int p = 0; p < plan.phases().size(); p++) {
@@ -45,31 +42,15 @@ public final class BudgetRunner {
     }
 
     private static List<BudgetResult.Sample> sample(OrbitPlan plan, long seed, int threads, List<double[]> points) {
-        ExecutorService pool = Executors.newFixedThreadPool(Math.max(1, threads), r -> {
-            Thread t = new Thread(r, "budget-run");
-            t.setDaemon(true);
-            return t;
-        });
-        try {
-            List<Future<BudgetResult.Sample>> futures = new ArrayList<>();
-            for (int i = 0; i < points.size(); i++) {
-                double[] pt = points.get(i);
-                long pointSeed = SeedTree.of(seed).point(i).seed(); // each point its own, repeatable noise
-                futures.add(pool.submit(() -> sampleOne(plan, plan.phases().get((int) pt[0]), pt[1], pt[2], pointSeed)));
-            }
-            List<BudgetResult.Sample> samples = new ArrayList<>();
-            for (Future<BudgetResult.Sample> f : futures) {
-                samples.add(f.get());
-            }
-            return samples;
-        } catch (InterruptedException e) {
-            Thread.currentThread().interrupt();
-            throw new IllegalStateException("budget check interrupted", e);
-        } catch (ExecutionException e) {
-            throw new IllegalStateException("a budget run failed: " + e.getCause(), e.getCause());
-        } finally {
-            pool.shutdownNow();
+        List<Integer> indices = new ArrayList<>();
+        for (int i = 0; i < points.size(); i++) {
+            indices.add(i);
         }
+        return RunPool.map("budget point", threads, indices, i -> {
+            double[] pt = points.get(i);
+            long pointSeed = SeedTree.of(seed).point(i).seed(); // each point its own, repeatable noise
+            return sampleOne(plan, plan.phases().get((int) pt[0]), pt[1], pt[2], pointSeed);
+        }, RunPool.Progress.NONE);
     }
 
     static BudgetResult.Sample sampleOne(OrbitPlan plan, Phase phase, double hours, double distanceAu, long seed) {

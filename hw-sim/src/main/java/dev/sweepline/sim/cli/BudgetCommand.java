@@ -31,6 +31,10 @@ final class BudgetCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws Exception {
+        if (threads < 1) {
+            System.err.println("--threads must be at least 1, got " + threads);
+            return 2;
+        }
         OrbitPlan p;
         try {
             p = PlanReader.load(plan);

@@ -48,6 +48,10 @@ final class TuneCommand implements Callable<Integer> {
             System.err.println("campaign error: " + e.getMessage());
             return 2;
         }
+        if (threads < 1) {
+            System.err.println("--threads must be at least 1, got " + threads);
+            return 2;
+        }
         long jobs = (long) spec.setCount() * spec.runsPerSet();
         System.out.printf(Locale.ROOT, "campaign %s: %d sets x %d runs of %.0f s, shard %s, %d threads%n",
                 spec.name(), spec.setCount(), spec.runsPerSet(), spec.durationSeconds(), slice, threads);

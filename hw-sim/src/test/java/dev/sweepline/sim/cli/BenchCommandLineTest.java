@@ -42,4 +42,17 @@ class BenchCommandLineTest {
         assertEquals(2, status); // a usage error, not a crash
         assertTrue(Files.notExists(dir.resolve("summary.json")));
     }
+
+    @Test
+    void shouldRefuseFewerThanOneThreadForCampaignsAndBudgets() {
+        // cli design note: exit status 2 for a usage error; the run pool needs at least one thread
+        Path plan = Path.of("src/main/resources/plans/cinder-orbit.yaml");
+        assertEquals(2, BenchMain.commandLine().execute("budget", plan.toString(), "--threads", "0", "--out",
+                dir.resolve("budget").toString()));
+        assertTrue(Files.notExists(dir.resolve("budget")));
+        Path campaign = Path.of("src/main/resources/campaigns/perihelion-tuning.yaml");
+        assertEquals(2, BenchMain.commandLine().execute("tune", campaign.toString(), "--threads", "0", "--out",
+                dir.resolve("tune").toString()));
+        assertTrue(Files.notExists(dir.resolve("tune")));
+    }
 }
