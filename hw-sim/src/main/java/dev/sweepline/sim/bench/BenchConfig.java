@@ -1,39 +1,58 @@
 package dev.sweepline.sim.bench;
 
-import dev.sweepline.fsw.table.SweepParameters;
-import dev.sweepline.fsw.table.WindowTable;
-import dev.sweepline.fsw.telemetry.TelemetryWriter;
+import dev.sweepline.fsw.exec.FlightConfig;
 import dev.sweepline.sim.instrument.InstrumentModel;
 import dev.sweepline.sim.scenario.Scenario;
+import java.util.Objects;
+import java.util.function.Consumer;
 
 /**
- * Everything one closed-loop run depends on; the same config gives the same bytes.
+ * Everything one closed-loop run depends on; the same config gives the same bytes. The flight
+ * software's start-up configuration is carried whole (table, sweep parameters, frame length,
+ * compression, fault settings, and whatever the flight software gains), so a flight option needs no
+ * field here.
+ *
+ * <p>A value: the flight configuration is copied in and copied out ({@code FlightConfigCopy}), so
+ * neither a run, nor a hook completing one run's configuration, nor a caller changes a config once made.
+ * Change it with {@link #withFlight}.
  *
  * @param scenario        the plasma to fly through
- * @param seed            seeds the scenario's fluctuations and the instrument's noise
+ * @param seed            root of the run's seed tree (scenario fluctuations, instrument noise, ...)
  * @param durationSeconds simulated time to run
- * @param table           the flight software's window table
- * @param parameters      the flight software's sweep parameters
+ * @param flight          the flight software's start-up configuration (the bench adds its own two
+ *                        settings to it, see {@link ClosedLoopBench#flightConfig})
  * @param instrument      the simulated instrument
- * @param frameLength     telemetry transfer frame length, octets
  * @param allocationBitsPerSecond the downlink allocation the telemetry is checked against; NaN for none
- * @param compressSpectra CCSDS 121 coding of spectrum packets (the ICD's compression 0x01), else raw
  */
-public record BenchConfig(Scenario scenario, long seed, double durationSeconds, WindowTable table,
-        SweepParameters parameters, InstrumentModel instrument, int frameLength, double allocationBitsPerSecond,
-        boolean compressSpectra) {
+public record BenchConfig(Scenario scenario, long seed, double durationSeconds, FlightConfig flight,
+        InstrumentModel instrument, double allocationBitsPerSecond) {
 
-    /** The demo instrument with the default table, parameters and frame length, no allocation. */
+    /** Keeps a copy of {@code flight}. */
+    public BenchConfig {
+        flight = FlightConfigCopy.of(Objects.requireNonNull(flight, "flight"));
+    }
+
+    /** The demo instrument and the flight software's default configuration, no allocation. */
     public static BenchConfig defaults(Scenario scenario, long seed, double durationSeconds) {
-        return new BenchConfig(scenario, seed, durationSeconds, WindowTable.defaultTable(),
-                SweepParameters.defaults(), InstrumentModel.demo(), TelemetryWriter.DEFAULT_FRAME_LENGTH, Double.NaN,
-                true);
+        return new BenchConfig(scenario, seed, durationSeconds, new FlightConfig(), InstrumentModel.demo(), Double.NaN);
+    }
+
+    /** A copy of the flight software's start-up configuration; changing it changes nothing here. */
+    @Override
+    public FlightConfig flight() {
+        return FlightConfigCopy.of(flight);
+    }
+
+    /** This config with the flight configuration changed by {@code change} (on a copy). */
+    public BenchConfig withFlight(Consumer<FlightConfig> change) {
+        FlightConfig f = flight();
+        change.accept(f);
+        return new BenchConfig(scenario, seed, durationSeconds, f, instrument, allocationBitsPerSecond);
     }
 
     /** This config with another downlink allocation. */
     public BenchConfig withAllocation(double bitsPerSecond) {
-        return new BenchConfig(scenario, seed, durationSeconds, table, parameters, instrument, frameLength,
-                bitsPerSecond, compressSpectra);
+        return new BenchConfig(scenario, seed, durationSeconds, flight, instrument, bitsPerSecond);
     }
 
     /** Simulated duration in microseconds. */

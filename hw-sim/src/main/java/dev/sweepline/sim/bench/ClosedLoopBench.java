@@ -131,28 +131,32 @@ public final class ClosedLoopBench {
         return run(config, progress, Hooks.NONE.withFrames(frames).withCycle(hook));
     }
 
+    /**
+     * The flight configuration of a bench run: {@code config}'s, with the bench's two settings. The
+     * simulator makes no high voltage, so the core HV interlock starts enabled, by explicit
+     * configuration (the flight default is OFF, commands.md §2.3); the recovery challenge is drawn from
+     * the run's seed tree so that runs stay reproducible (the PC host draws it from SecureRandom,
+     * commands.md §1.4). A new copy each call.
+     */
+    public static FlightConfig flightConfig(BenchConfig config) {
+        FlightConfig flight = config.flight();
+        flight.hvEnabledAtStart = true;
+        flight.bootChallenge = SeedTree.of(config.seed()).bootChallenge();
+        return flight;
+    }
+
     /** Runs {@code config} to its end with {@code hooks} attached. */
     public static Result run(BenchConfig config, Progress progress, Hooks hooks) {
         ScenarioTimeline timeline = config.scenario().timeline(config.seed());
-        WindowVolts windows = new WindowVolts(config.table(), config.instrument().calibration());
+        FlightConfig flight = flightConfig(config);
+        WindowVolts windows = new WindowVolts(flight.table, config.instrument().calibration());
         AlphaDriftDirection drift = config.scenario().alphaDriftDirection();
         LongFunction<PlasmaState> plasma = micros -> PlasmaStates.of(timeline.at(micros / 1e6), drift);
         BenchRecorder recorder = new BenchRecorder(windows, new FaradayCup(config.instrument().cup()), plasma,
                 hooks.observer());
-        SeedTree seeds = SeedTree.of(config.seed());
-        SimulatedInstrument instrument = new SimulatedInstrument(config.instrument(), seeds.instrument());
+        SimulatedInstrument instrument = new SimulatedInstrument(config.instrument(),
+                SeedTree.of(config.seed()).instrument());
         InProcessLink link = new InProcessLink(instrument, plasma::apply, recorder);
-        FlightConfig flight = new FlightConfig();
-        flight.table = config.table();
-        flight.parameters = config.parameters();
-        flight.frameLength = config.frameLength();
-        flight.compressSpectra = config.compressSpectra();
-        // the simulator produces no high voltage: the bench starts with the core interlock enabled,
-        // by explicit configuration (the flight default is OFF, commands.md §2.3)
-        flight.hvEnabledAtStart = true;
-        // the recovery challenge is drawn from the run seed so that runs stay reproducible; the PC
-        // host draws it from SecureRandom (commands.md §1.4)
-        flight.bootChallenge = seeds.bootChallenge();
         hooks.cycle().configure(flight, instrument);
         FlightSoftware fsw = new FlightSoftware(flight, link, hooks.frames(), recorder);
         recorder.follow(fsw.scheduler(), config.instrument().calibration());

@@ -2,6 +2,7 @@ package dev.sweepline.sim.bench;
 
 import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.SerializationFeature;
+import dev.sweepline.fsw.exec.FlightConfig;
 import dev.sweepline.fsw.sweep.SweepMode;
 import dev.sweepline.sim.link.LinkBudget;
 import java.io.IOException;
@@ -124,8 +125,9 @@ public final class RunReportWriter {
         Map<String, Object> m = new LinkedHashMap<>();
         m.put("baud", baud);
         boolean warning = false;
-        for (LinkBudget b : new LinkBudget[] {LinkBudget.survey(config.table(), config.parameters(), baud),
-            LinkBudget.focus(config.table(), config.parameters(), baud)}) {
+        FlightConfig flight = config.flight();
+        for (LinkBudget b : new LinkBudget[] {LinkBudget.survey(flight.table, flight.parameters, baud),
+            LinkBudget.focus(flight.table, flight.parameters, baud)}) {
             Map<String, Object> mode = new LinkedHashMap<>();
             mode.put("stepsPerSecond", round(b.stepsPerSecond(), 2));
             mode.put("octetsPerSecond", round(b.octetsPerSecond(), 1));

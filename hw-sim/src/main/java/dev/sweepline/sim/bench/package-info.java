@@ -18,6 +18,9 @@
  * <li>B5 Independent runs on N threads ({@code RunPool}, used by campaigns and budgets) come back in the
  *     order they were given, whatever N; N below 1 is refused. Verified: RunPoolTest,
  *     CampaignDeterminismTest.</li>
+ * <li>B6 A run's configuration carries the flight software's start-up configuration whole, as a value:
+ *     every option reaches the flight software, and no run or hook changes the config it came from.
+ *     Verified: FlightConfigCopyTest.</li>
  * </ol>
  * Truth conventions: the true peak of a species is the window where its noise-free current peaks
  * (for a hot wind well above the bulk-speed E/q); a focus sweep is locked when its band holds the

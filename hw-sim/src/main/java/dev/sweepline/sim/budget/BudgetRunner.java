@@ -2,13 +2,10 @@ package dev.sweepline.sim.budget;
 
 import dev.sweepline.fsw.sweep.SweepMode;
 import dev.sweepline.fsw.table.SweepParameters;
-import dev.sweepline.fsw.table.WindowTable;
-import dev.sweepline.fsw.telemetry.TelemetryWriter;
 import dev.sweepline.sim.bench.BenchConfig;
 import dev.sweepline.sim.bench.ClosedLoopBench;
 import dev.sweepline.sim.bench.RunPool;
 import dev.sweepline.sim.bench.RunSummary;
-import dev.sweepline.sim.instrument.InstrumentModel;
 import dev.sweepline.sim.seed.SeedTree;
 import java.util.ArrayList;
 import java.util.List;
@@ -59,9 +56,8 @@ public final class BudgetRunner {
         if (phase.mode() == Phase.Mode.SURVEY) {
             parameters.focusEnabled = 0;
         }
-        BenchConfig config = new BenchConfig(DistanceScaling.at(plan.scenario(), distanceAu, seconds), seed, seconds,
-                WindowTable.defaultTable(), parameters, InstrumentModel.demo(), TelemetryWriter.DEFAULT_FRAME_LENGTH,
-                phase.allocationBitsPerSecond(), true);
+        BenchConfig config = BenchConfig.defaults(DistanceScaling.at(plan.scenario(), distanceAu, seconds), seed, seconds)
+                .withFlight(f -> f.parameters = parameters).withAllocation(phase.allocationBitsPerSecond());
         RunSummary s = ClosedLoopBench.run(config, ClosedLoopBench.Progress.NONE, ClosedLoopBench.Hooks.NONE.withSetup(fsw -> {
             if (phase.mode() == Phase.Mode.SAFE) {
                 fsw.scheduler().requestMode(SweepMode.SAFE, 0);

@@ -1,12 +1,9 @@
 package dev.sweepline.sim.campaign;
 
-import dev.sweepline.fsw.table.WindowTable;
-import dev.sweepline.fsw.telemetry.TelemetryWriter;
 import dev.sweepline.sim.bench.BenchConfig;
 import dev.sweepline.sim.bench.ClosedLoopBench;
 import dev.sweepline.sim.bench.GroundCheck;
 import dev.sweepline.sim.bench.RunPool;
-import dev.sweepline.sim.instrument.InstrumentModel;
 import java.util.ArrayList;
 import java.util.List;
 
@@ -41,13 +38,16 @@ public final class CampaignRunner {
         return RunPool.map("campaign run", threads, jobs, job -> runOne(spec, job[0], job[1]), progress::update);
     }
 
+    /** Set {@code set} on ensemble member {@code run}: the default flight software with the set's parameters. */
+    static BenchConfig config(CampaignSpec spec, int set, int run) {
+        return BenchConfig.defaults(spec.member(run), spec.runSeed(run), spec.durationSeconds())
+                .withFlight(f -> f.parameters = spec.parameters(set)).withAllocation(spec.allocationBitsPerSecond());
+    }
+
     /** One job: set {@code set} on ensemble member {@code run}. */
     static RunRow runOne(CampaignSpec spec, int set, int run) {
-        BenchConfig config = new BenchConfig(spec.member(run), spec.runSeed(run), spec.durationSeconds(),
-                WindowTable.defaultTable(), spec.parameters(set), InstrumentModel.demo(),
-                TelemetryWriter.DEFAULT_FRAME_LENGTH, spec.allocationBitsPerSecond(), true);
         GroundCheck ground = new GroundCheck();
-        ClosedLoopBench.Result r = ClosedLoopBench.run(config, ClosedLoopBench.Progress.NONE,
+        ClosedLoopBench.Result r = ClosedLoopBench.run(config(spec, set, run), ClosedLoopBench.Progress.NONE,
                 ClosedLoopBench.Hooks.NONE.withFrames(ground.frames()));
         return RunRow.of(set, run, r.summary(), ground.compare(r.recorder().sweeps(), r.recorder()::truthAt));
     }

@@ -8,16 +8,12 @@ import dev.sweepline.fsw.command.CommandReason;
 import dev.sweepline.fsw.command.TableImage;
 import dev.sweepline.fsw.exec.FlightConfig;
 import dev.sweepline.fsw.nvm.FileNonVolatileStore;
-import dev.sweepline.fsw.table.SweepParameters;
-import dev.sweepline.fsw.table.WindowTable;
-import dev.sweepline.fsw.telemetry.TelemetryWriter;
 import dev.sweepline.sim.bench.BenchConfig;
 import dev.sweepline.sim.bench.ClosedLoopBench;
 import dev.sweepline.ground.spectrum.WindowCatalogue;
 import dev.sweepline.sim.bench.GroundCheck;
 import dev.sweepline.sim.command.CommandScript;
 import dev.sweepline.sim.command.ScriptRunner;
-import dev.sweepline.sim.instrument.InstrumentModel;
 import dev.sweepline.sim.instrument.SimulatedInstrument;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -56,9 +52,8 @@ class RecommendedTableTest {
         // 2. a fresh flight software with the default configuration restores the table at start-up
         List<RunRow> flown = new ArrayList<>();
         for (int run = 0; run < spec.runsPerSet(); run++) {
-            BenchConfig config = new BenchConfig(spec.member(run), spec.runSeed(run), spec.durationSeconds(),
-                    WindowTable.defaultTable(), SweepParameters.defaults(), InstrumentModel.demo(),
-                    TelemetryWriter.DEFAULT_FRAME_LENGTH, spec.allocationBitsPerSecond(), true);
+            BenchConfig config = BenchConfig.defaults(spec.member(run), spec.runSeed(run), spec.durationSeconds())
+                    .withAllocation(spec.allocationBitsPerSecond());
             ClosedLoopBench.CycleHook restore = new ClosedLoopBench.CycleHook() {
                 @Override
                 public void configure(FlightConfig flight, SimulatedInstrument instrument) {

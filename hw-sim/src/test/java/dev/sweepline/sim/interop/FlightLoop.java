@@ -26,13 +26,11 @@ public final class FlightLoop {
      * A loop over {@code scenario} for {@code seconds} of simulated time.
      *
      * @param seed   seeds the scenario's fluctuations and the instrument's noise
-     * @param flight the flight software's frame length and compression
+     * @param flight the flight software's start-up configuration (frame length, compression, ...)
      * @param frames receives every frame, ASM first
      */
     public FlightLoop(Scenario scenario, long seed, double seconds, FlightConfig flight, FrameSink frames) {
-        BenchConfig defaults = BenchConfig.defaults(scenario, seed, seconds);
-        this.config = new BenchConfig(scenario, seed, seconds, flight.table, flight.parameters, InstrumentModel.demo(),
-                flight.frameLength, defaults.allocationBitsPerSecond(), flight.compressSpectra);
+        this.config = new BenchConfig(scenario, seed, seconds, flight, InstrumentModel.demo(), Double.NaN);
         this.frames = frames;
     }
 

@@ -47,12 +47,7 @@ final class HilRig {
 
     /** The flight configuration of {@code config}, as ClosedLoopBench builds it. */
     static FlightConfig flightConfig(BenchConfig config) {
-        FlightConfig flight = new FlightConfig();
-        flight.table = config.table();
-        flight.parameters = config.parameters();
-        flight.frameLength = config.frameLength();
-        flight.hvEnabledAtStart = true; // as the bench: the simulator, by explicit configuration
-        return flight;
+        return ClosedLoopBench.flightConfig(config);
     }
 
     /**
