@@ -1,11 +1,12 @@
 package dev.sweepline.sim.budget;
 
+import dev.sweepline.fsw.command.CommandReason;
 import dev.sweepline.fsw.sweep.SweepMode;
-import dev.sweepline.fsw.table.SweepParameters;
 import dev.sweepline.sim.bench.BenchConfig;
 import dev.sweepline.sim.bench.ClosedLoopBench;
 import dev.sweepline.sim.bench.RunPool;
 import dev.sweepline.sim.bench.RunSummary;
+import dev.sweepline.sim.command.ScriptRunner;
 import dev.sweepline.sim.seed.SeedTree;
 import java.util.ArrayList;
 import java.util.List;
@@ -15,56 +16,68 @@ import java.util.Locale;
  * Checks an orbit plan's telemetry against its allocations: representative closed loops along each
  * phase (plasma scaled to the distance), interpolated hour by hour, summed per phase, and run
  * through the onboard store with the downlink passes. Deterministic for a seed, whatever the thread count.
+ *
+ * <p>Each closed loop flies the flight software as it is built for flight (FlightSoftware through the
+ * closed-loop bench, HV interlock and command authentication on), put into the phase's mode by signed
+ * telecommands at its start ({@link PhaseCommands}); a command the flight software refuses fails the check.
  */
 public final class BudgetRunner {
+    /** One representative closed loop of the plan: its index (for its seed), phase, time and distance. */
+    record Point(int index, Phase phase, double hours, double distanceAu) {
+    }
+
+    /** What one point's closed loop gave, and what the flight software answered to its commands. */
+    record Flown(RunSummary summary, List<ScriptRunner.Sent> commands) {
+    }
+
     private BudgetRunner() {
     }
 
     /** Runs the check on {@code threads} threads (at least 1) with budget seed {@code seed}. */
     public static BudgetResult run(OrbitPlan plan, long seed, int threads) {
-        List<double[]> points = new ArrayList<>(); // phase index, hours, distance
-        for (int p = 0; p < plan.phases().size(); p++) {
-            Phase phase = plan.phases().get(p);
-            int steps = Math.max(1, (int) Math.ceil(phase.hours() / plan.sampleEveryHours()));
-            for (int k = 0; k <= steps; k++) {
-                double h = phase.startHours() + phase.hours() * k / steps;
-                points.add(new double[] {p, h, phase.distanceAt(h)});
-            }
-        }
-        List<BudgetResult.Sample> samples = sample(plan, seed, threads, points);
+        List<BudgetResult.Sample> samples = RunPool.map("budget point", threads, points(plan),
+                p -> sampleOne(plan, p, SeedTree.of(seed).point(p.index()).seed()), RunPool.Progress.NONE);
         List<BudgetResult.Hour> hours = hours(plan, samples);
         List<String> violations = new ArrayList<>();
         List<BudgetResult.PhaseBudget> phases = phases(plan, hours, violations);
         return new BudgetResult(plan, samples, hours, phases, violations);
     }
 
-    private static List<BudgetResult.Sample> sample(OrbitPlan plan, long seed, int threads, List<double[]> points) {
-        List<Integer> indices = new ArrayList<>();
-        for (int i = 0; i < points.size(); i++) {
-            indices.add(i);
+    /** Both ends of each phase and points at most {@code sampleEveryHours} apart between them, in plan order. */
+    static List<Point> points(OrbitPlan plan) {
+        List<Point> points = new ArrayList<>();
+        for (Phase phase : plan.phases()) {
+            int steps = Math.max(1, (int) Math.ceil(phase.hours() / plan.sampleEveryHours()));
+            for (int k = 0; k <= steps; k++) {
+                double h = phase.startHours() + phase.hours() * k / steps;
+                points.add(new Point(points.size(), phase, h, phase.distanceAt(h)));
+            }
         }
-        return RunPool.map("budget point", threads, indices, i -> {
-            double[] pt = points.get(i);
-            long pointSeed = SeedTree.of(seed).point(i).seed(); // each point its own, repeatable noise
-            return sampleOne(plan, plan.phases().get((int) pt[0]), pt[1], pt[2], pointSeed);
-        }, RunPool.Progress.NONE);
+        return points;
     }
 
-    static BudgetResult.Sample sampleOne(OrbitPlan plan, Phase phase, double hours, double distanceAu, long seed) {
-        double seconds = plan.sampleMinutes() * 60;
-        SweepParameters parameters = SweepParameters.defaults();
-        if (phase.mode() == Phase.Mode.SURVEY) {
-            parameters.focusEnabled = 0;
-        }
-        BenchConfig config = BenchConfig.defaults(DistanceScaling.at(plan.scenario(), distanceAu, seconds), seed, seconds)
-                .withFlight(f -> f.parameters = parameters).withAllocation(phase.allocationBitsPerSecond());
-        RunSummary s = ClosedLoopBench.run(config, ClosedLoopBench.Progress.NONE, ClosedLoopBench.Hooks.NONE.withSetup(fsw -> {
-            if (phase.mode() == Phase.Mode.SAFE) {
-                fsw.scheduler().requestMode(SweepMode.SAFE, 0);
-            }
-        })).summary();
+    static BudgetResult.Sample sampleOne(OrbitPlan plan, Point point, long seed) {
+        RunSummary s = fly(plan, point.phase(), point.distanceAu(), seed).summary();
         double cadence = s.spectraPerSecond().get(SweepMode.SURVEY) + s.spectraPerSecond().get(SweepMode.FOCUS);
-        return new BudgetResult.Sample(phase.name(), hours, distanceAu, s.telemetry().frameBitsPerSecond(), cadence);
+        return new BudgetResult.Sample(point.phase().name(), point.hours(), point.distanceAu(),
+                s.telemetry().frameBitsPerSecond(), cadence);
+    }
+
+    /** The closed loop of one point: the default flight software, commanded into the phase's mode at its start. */
+    static Flown fly(OrbitPlan plan, Phase phase, double distanceAu, long seed) {
+        double seconds = plan.sampleMinutes() * 60;
+        BenchConfig config = BenchConfig.defaults(DistanceScaling.at(plan.scenario(), distanceAu, seconds), seed, seconds)
+                .withAllocation(phase.allocationBitsPerSecond());
+        ScriptRunner commands = new ScriptRunner(PhaseCommands.of(phase.mode(), config.flight()), true, null);
+        RunSummary s = ClosedLoopBench.run(config, ClosedLoopBench.Progress.NONE,
+                ClosedLoopBench.Hooks.NONE.withCycle(commands)).summary();
+        for (ScriptRunner.Sent sent : commands.sent()) {
+            if (sent.reason() != CommandReason.OK) {
+                throw new IllegalStateException("phase '" + phase.name() + "': the flight software refused command 0x"
+                        + Integer.toHexString(sent.code()) + " (" + CommandReason.name(sent.reason()) + ")");
+            }
+        }
+        return new Flown(s, commands.sent());
     }
 
     /** Hour by hour: the rate interpolated between the phase's samples, and the store. */

@@ -60,6 +60,18 @@ public final class CommandScript {
         return new CommandScript(out, List.of(), List.of());
     }
 
+    /**
+     * The uplink of {@code table} at {@code atMicros}: its image in loads of up to 192 octets, a verify
+     * and a commit (commands.md §4.2), as {@code TABLE_LOGSPACED} and {@code TABLE_IMAGE} send theirs.
+     */
+    public static CommandScript tableUplink(long atMicros, ParameterTable table) {
+        byte[] image = new byte[TableImage.MAX_OCTETS];
+        int n = TableImage.encode(table, image);
+        List<ScriptEntry> out = new ArrayList<>();
+        loadImage(atMicros, 0, image, n, out);
+        return new CommandScript(out, images(out), List.of());
+    }
+
     /** The table images the script uplinks, in order (the ground needs their windows). */
     public List<byte[]> images() {
         return images;
@@ -215,7 +227,6 @@ public final class CommandScript {
         loadImage(at, line, image, image.length, out);
     }
 
-    /** The loads of {@code n} image octets in pieces, a verify and a commit, all at {@code at}. */
     /** The images the table loads write, each cut at the length its verify names. */
     private static List<byte[]> images(List<ScriptEntry> entries) {
         List<byte[]> images = new ArrayList<>();
@@ -231,6 +242,7 @@ public final class CommandScript {
         return images;
     }
 
+    /** The loads of {@code n} image octets in pieces, a verify and a commit, all at {@code at}. */
     private static void loadImage(long at, int line, byte[] image, int n, List<ScriptEntry> out) {
         for (int from = 0; from < n; from += CommandCode.MAX_LOAD_OCTETS) {
             int k = Math.min(CommandCode.MAX_LOAD_OCTETS, n - from);

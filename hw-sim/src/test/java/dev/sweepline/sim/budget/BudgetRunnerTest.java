@@ -7,15 +7,41 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
+import dev.sweepline.fsw.command.CommandCode;
+import dev.sweepline.fsw.command.CommandReason;
+import dev.sweepline.fsw.exec.FlightConfig;
+import dev.sweepline.fsw.exec.FlightSoftware;
+import dev.sweepline.fsw.sweep.SweepMode;
+import dev.sweepline.sim.bench.BenchConfig;
+import dev.sweepline.sim.bench.ClosedLoopBench;
+import dev.sweepline.sim.command.ScriptRunner;
+import dev.sweepline.sim.instrument.SimulatedInstrument;
 import dev.sweepline.sim.scenario.Scenario;
 import dev.sweepline.sim.scenario.ScenarioLoader;
 import dev.sweepline.sim.yaml.FileFormatException;
 import java.io.IOException;
 import java.nio.file.Path;
+import java.util.List;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
+/** The orbit-plan budget (budget design note G1-G4). */
 class BudgetRunnerTest {
+    /** One minute per point, one phase of each mode, so that the figures below can be counted by hand. */
+    private static final String MODES = """
+            format: sweepline-plan/1
+            name: modes
+            scenario: quiet-perihelion
+            sampleMinutes: 1
+            sampleEveryHours: 100
+            phases:
+              - {name: cruise, startHours: 0, endHours: 10, distanceAu: 0.2, mode: survey, allocationBitsPerS: 9000}
+              - {name: encounter, startHours: 10, endHours: 20, distanceAu: 0.2, mode: adaptive, allocationBitsPerS: 9000}
+              - {name: rest, startHours: 20, endHours: 30, distanceAu: 0.2, mode: safe, allocationBitsPerS: 9000}
+            """;
+    /** Telemetry ICD §3.1, §3.2, §9: primary header 6 + CUC time 6 + report user data 14 octets. */
+    private static final int REPORT_OCTETS = 6 + 6 + 14;
+
     private static final String PLAN = """
             format: sweepline-plan/1
             name: test-plan
@@ -48,6 +74,11 @@ class BudgetRunnerTest {
         for (BudgetResult.PhaseBudget p : r.phases()) {
             assertTrue(p.margin() > 0 && p.margin() < 1, p.name() + " margin " + p.margin());
         }
+        // recorded from 'bench budget' (seed 1) before the points flew by telecommand, and unchanged since:
+        // the 12 command reports of a survey point (312 octets) ride in frames that go out anyway
+        assertEquals(1746.8, r.phases().get(0).generatedMegabits(), 0.05);
+        assertEquals(1231.6, r.phases().get(1).generatedMegabits(), 0.05);
+        assertEquals(2445.5, r.phases().get(2).generatedMegabits(), 0.05);
         BudgetOutput.write(dir, r);
         JsonNode json = new ObjectMapper().readTree(dir.resolve("budget.json").toFile());
         assertEquals("FITS", json.get("verdict").asText());
@@ -64,6 +95,64 @@ class BudgetRunnerTest {
         assertTrue(v.startsWith("phase 'encounter', hour 10:"), v);
         assertTrue(r.phases().get(1).margin() < 0);
         assertTrue(r.phases().get(0).margin() > 0);
+    }
+
+    @Test
+    void shouldFlyASurveyPhaseOnTheStartUpTableCommittedWithFocusOff() {
+        OrbitPlan plan = PlanReader.parse(MODES, "modes.yaml");
+        BudgetRunner.Flown f = BudgetRunner.fly(plan, plan.phases().get(0), 0.2, 1);
+        // commands.md §4.2: the 650-octet default image (§4.1) in loads of at most 192 octets (4 loads),
+        // then a verify and a commit; every one accepted (the runner fails on a refusal)
+        List<Integer> codes = f.commands().stream().map(ScriptRunner.Sent::code).toList();
+        assertEquals(List.of(CommandCode.TABLE_LOAD, CommandCode.TABLE_LOAD, CommandCode.TABLE_LOAD,
+                CommandCode.TABLE_LOAD, CommandCode.TABLE_VERIFY, CommandCode.TABLE_COMMIT), codes);
+        assertTrue(f.commands().stream().allMatch(c -> c.reason() == CommandReason.OK));
+        // telemetry ICD §9: an acceptance and an execution report per command, 12 x 26 octets in 60 s
+        assertEquals(12 * REPORT_OCTETS * 8 / 60.0, f.summary().telemetry().packetBitsPerSecond().get("commandReport"),
+                1e-9);
+        assertEquals(0, f.summary().sweepsByMode().get(SweepMode.FOCUS)); // focusEnabled 0: survey only
+        assertTrue(f.summary().sweepsByMode().get(SweepMode.SURVEY) > 0);
+        // the adaptive phase at the same place sends nothing and focuses
+        BudgetRunner.Flown adaptive = BudgetRunner.fly(plan, plan.phases().get(1), 0.2, 1);
+        assertEquals(List.of(), adaptive.commands());
+        assertTrue(adaptive.summary().sweepsByMode().get(SweepMode.FOCUS) > 0);
+    }
+
+    @Test
+    void shouldFlyASafePhaseCommandedToSafeWithTheHvInterlockOff() {
+        OrbitPlan plan = PlanReader.parse(MODES, "modes.yaml");
+        BudgetRunner.Flown f = BudgetRunner.fly(plan, plan.phases().get(2), 0.2, 1);
+        assertEquals(1, f.commands().size());
+        assertEquals(CommandCode.SET_MODE, f.commands().get(0).code());
+        assertEquals(CommandReason.OK, f.commands().get(0).reason());
+        assertEquals(2 * REPORT_OCTETS * 8 / 60.0, f.summary().telemetry().packetBitsPerSecond().get("commandReport"),
+                1e-9);
+        assertEquals(0, f.summary().sweepsByMode().get(SweepMode.SURVEY) + f.summary().sweepsByMode().get(SweepMode.FOCUS));
+        // housekeeping every 16 s (telemetry ICD §3.3) at 0, 16, 32 and 48 s, each frame flushed 10 s later
+        // (FlightConfig's flush interval), and the closing housekeeping at 60 s: 5 frames of 1024 octets +
+        // 4 ASM octets (telemetry ICD §2) in 60 s. The reports and the mode-change event of the command
+        // travel in the first frame. The old path (a direct scheduler call) gave the same 5 frames.
+        assertEquals(5 * 1028 * 8 / 60.0, f.summary().telemetry().frameBitsPerSecond(), 1e-9);
+
+        // the same command into a run watched from outside: the scheduler is in SAFE and the interlock off
+        // (commands.md §2.3), which the direct scheduler call the budget used to make left enabled
+        FlightSoftware[] flown = new FlightSoftware[1];
+        ScriptRunner script = new ScriptRunner(PhaseCommands.of(Phase.Mode.SAFE, new FlightConfig()), true, null);
+        ClosedLoopBench.run(BenchConfig.defaults(ScenarioLoader.builtIn("quiet-perihelion"), 1, 2),
+                ClosedLoopBench.Progress.NONE, ClosedLoopBench.Hooks.NONE.withCycle(new ClosedLoopBench.CycleHook() {
+                    @Override
+                    public void configure(FlightConfig flight, SimulatedInstrument instrument) {
+                        script.configure(flight, instrument);
+                    }
+
+                    @Override
+                    public void beforeCycle(FlightSoftware fsw, long nowMicros) {
+                        flown[0] = fsw;
+                        script.beforeCycle(fsw, nowMicros);
+                    }
+                }));
+        assertEquals(SweepMode.SAFE, flown[0].scheduler().mode());
+        assertFalse(flown[0].hv().enabled());
     }
 
     @Test
