@@ -33,8 +33,13 @@ import java.util.concurrent.locks.LockSupport;
  * <p>Threading: one thread ({@link #doWork(long)} or {@link #run}); {@link #stop()} from any thread.
  */
 public final class InstrumentServer {
-    /** Octets read from the transport per call at most. */
+    /** Octets read from the transport per read at most: the size of the one receive buffer. */
     static final int READ_CHUNK = 256;
+    /**
+     * Reads per {@link #doWork} at most, so one cycle handles at most 8 x 256 = 2048 octets however fast
+     * they come (as the flight software's link bounds its pump; common practice: bound every loop).
+     */
+    static final int MAX_READS_PER_CALL = 8;
     /** The link watchdog, wall nanoseconds (hardware ICD §4.1: 2 s). */
     public static final long WATCHDOG_NANOS = InstrumentConstants.LINK_WATCHDOG_MICROS * 1_000;
 
@@ -85,7 +90,10 @@ public final class InstrumentServer {
         this.sender = new FrameSender(transport, counters);
     }
 
-    /** One cycle at wall time {@code nowNanos}: send what is due, else read and handle frames. Returns work done. */
+    /**
+     * One cycle at wall time {@code nowNanos}: send what is due, else read and handle frames (at most
+     * {@link #MAX_READS_PER_CALL} reads). Returns work done: frames sent and handled, reads that moved octets.
+     */
     public int doWork(long nowNanos) {
         int work = watchdog(nowNanos);
         if (!sender.flush()) {
@@ -108,8 +116,21 @@ public final class InstrumentServer {
             quietSinceNanos = nowNanos;
             work++;
         }
-        while (!replyPending && !hkPending) {
+        work += readFrames(nowNanos);
+        return work + watchdog(nowNanos); // the stream may have ended just now
+    }
+
+    /**
+     * Reads and deframes until a reply or a housekeeping answer waits, nothing more has arrived, or
+     * {@link #MAX_READS_PER_CALL} reads were made; octets of a read left over stay for the next call.
+     */
+    private int readFrames(long nowNanos) {
+        int work = 0;
+        for (int reads = 0; !replyPending && !hkPending; ) {
             if (inPos == inLength) {
+                if (reads == MAX_READS_PER_CALL) {
+                    break;
+                }
                 int n = ended ? -1 : transport.read(in, 0, in.length);
                 if (n <= 0) {
                     ended |= n < 0;
@@ -118,6 +139,8 @@ public final class InstrumentServer {
                 counters.octetsRead += n;
                 inPos = 0;
                 inLength = n;
+                reads++;
+                work++;
             }
             while (inPos < inLength && !replyPending && !hkPending) {
                 int type = receiver.accept(in[inPos++]);
@@ -127,7 +150,7 @@ public final class InstrumentServer {
                 }
             }
         }
-        return work + watchdog(nowNanos); // the stream may have ended just now
+        return work;
     }
 
     /**

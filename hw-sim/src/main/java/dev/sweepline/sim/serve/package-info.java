@@ -25,6 +25,9 @@
  *     2000 ms of wall time after the last reply (not at exactly 2000 ms), or the end of the stream,
  *     switches the HV off and is reported in housekeeping (status bit 1, trip count).
  *     <i>InstrumentServerTest (T - 1 ms, T, T + 1 ms on an injected clock), RunHvShutdownHilTest.</i></li>
+ * <li><b>S6</b> Bounded work per cycle: one 256-octet receive buffer, at most 8 reads per
+ *     {@code doWork}, so a peer flooding the line cannot hold a cycle; what a cycle leaves is read by the
+ *     next. <i>InstrumentServerTest.</i></li>
  * </ol>
  * Threading: each server and injector on one thread.
  */

@@ -2,9 +2,11 @@ package dev.sweepline.sim.campaign;
 
 import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertNotEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import dev.sweepline.sim.bench.BenchConfig;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -12,7 +14,7 @@ import java.util.List;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
-/** Issue 7: results do not depend on the thread count; sharded-then-merged equals unsharded. */
+/** Campaign design note C1: results do not depend on the thread count; sharded-then-merged equals unsharded. */
 class CampaignDeterminismTest {
     static final String CAMPAIGN = """
             format: sweepline-campaign/1
@@ -76,8 +78,22 @@ class CampaignDeterminismTest {
     @Test
     void shouldGiveEverySetTheSameEnsemble() {
         CampaignSpec spec = CampaignReader.parse(CAMPAIGN, "small.yaml", null);
-        // common random numbers: member k's plasma does not depend on the set
-        assertEquals(spec.member(1).start(), spec.member(1).start());
+        CampaignSpec again = CampaignReader.parse(CAMPAIGN, "small.yaml", null); // read independently
+        // common random numbers (campaign design note): the run of member k in the first set and in the
+        // last set, built from two readings of the file, fly the same plasma with the same seed; only the
+        // sweep parameters differ (integrationPeriods 4 and 8, the grid's first axis)
+        for (int run = 0; run < spec.runsPerSet(); run++) {
+            BenchConfig first = CampaignRunner.config(spec, 0, run);
+            BenchConfig last = CampaignRunner.config(again, again.setCount() - 1, run);
+            assertEquals(first.scenario().start(), last.scenario().start(), "member " + run);
+            assertEquals(first.scenario().jumps(), last.scenario().jumps(), "member " + run);
+            assertEquals(first.seed(), last.seed(), "member " + run);
+            assertEquals(4, first.flight().parameters.integrationPeriods);
+            assertEquals(8, last.flight().parameters.integrationPeriods);
+        }
+        // and the members are drawn apart from each other
+        assertNotEquals(spec.member(0).start(), spec.member(1).start());
+        assertNotEquals(spec.runSeed(0), spec.runSeed(1));
         assertEquals(4, spec.setCount());
         assertEquals(8, spec.parameters(spec.setCount() - 1).integrationPeriods); // last axis fastest
         assertEquals(16, spec.parameters(spec.setCount() - 1).resurveyEveryFocusSweeps);

@@ -4,6 +4,7 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import dev.sweepline.fsw.link.ByteTransport;
 import dev.sweepline.fsw.link.FramedInstrumentLink;
 import dev.sweepline.fsw.link.HousekeepingCodec;
 import dev.sweepline.fsw.link.PipeTransport;
@@ -11,7 +12,7 @@ import dev.sweepline.fsw.link.SampleReply;
 import dev.sweepline.fsw.link.StepCommand;
 import org.junit.jupiter.api.Test;
 
-/** The server's rules (serve design note S2, S5; hardware ICD §4, §4.1, §5). */
+/** The server's rules (serve design note S2, S5, S6; hardware ICD §4, §4.1, §5). */
 class InstrumentServerTest {
     /** Counts executions; the reply carries the execution number in Q1 and the start time in Q2. */
     private static final class CountingExecutor implements StepExecutor {
@@ -165,6 +166,51 @@ class InstrumentServerTest {
         server.doWork(1); // long before T
         assertEquals(1, executor.hvSwitchedOff);
         assertTrue(server.ended());
+    }
+
+    @Test
+    void shouldReadAtMostEightBuffersPerCycleHoweverFastOctetsCome() {
+        // a peer that never stops sending noise (0x55, no delimiter: no frame ever completes)
+        int[] reads = new int[1];
+        ByteTransport flood = new ByteTransport() {
+            @Override
+            public int read(byte[] buffer, int offset, int length) {
+                reads[0]++;
+                java.util.Arrays.fill(buffer, offset, offset + length, (byte) 0x55);
+                return length;
+            }
+
+            @Override
+            public int write(byte[] buffer, int offset, int length) {
+                return length;
+            }
+        };
+        InstrumentServer server = new InstrumentServer(executor, flood, 0);
+        assertTrue(server.doWork(0) > 0); // reading is work: the serving loop does not park on a full line
+        // serve design note S6: 8 reads of the 256-octet buffer per cycle (common practice: bound every loop)
+        assertEquals(InstrumentServer.MAX_READS_PER_CALL, reads[0]);
+        assertEquals(8 * 256, server.counters().octetsRead);
+        server.doWork(0);
+        assertEquals(16, reads[0]);
+    }
+
+    @Test
+    void shouldAnswerAStepThatArrivesBehindALongBurstOfNoise() {
+        InstrumentServer server = new InstrumentServer(executor, ends[1], 0);
+        // 900 octets of noise closed by a delimiter (one bad chunk, hardware ICD §2), then the step's frame:
+        // more than 3 buffers of 256 octets, fewer than the pipe's 1024
+        byte[] noise = new byte[900];
+        java.util.Arrays.fill(noise, 0, 899, (byte) 0x55);
+        ends[0].write(noise, 0, noise.length);
+        link.send(step(1, 100, 200), 0);
+        boolean answered = false;
+        for (int cycle = 0; cycle < 8 && !answered; cycle++) {
+            server.doWork(0);
+            answered = link.poll(reply, 0);
+        }
+        assertTrue(answered);
+        assertEquals(1, server.stepsExecuted());
+        assertEquals(1, server.counters().framesBad());
     }
 
     private boolean housekeeping(InstrumentServer server, long nowNanos) {
