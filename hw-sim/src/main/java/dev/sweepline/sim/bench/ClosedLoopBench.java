@@ -10,6 +10,7 @@ import dev.sweepline.sim.instrument.SimulatedInstrument;
 import dev.sweepline.sim.link.InProcessLink;
 import dev.sweepline.sim.plasma.PlasmaState;
 import dev.sweepline.sim.scenario.AlphaDriftDirection;
+import dev.sweepline.sim.scenario.PlasmaStates;
 import dev.sweepline.sim.scenario.ScenarioTimeline;
 import dev.sweepline.fsw.sweep.SweepListener;
 import dev.sweepline.sim.seed.SeedTree;

@@ -9,7 +9,9 @@
  * {@link dev.sweepline.sim.scenario.Scenario#timeline(long)} gives, for one run seed, the
  * {@link dev.sweepline.sim.scenario.PlasmaConditions} at any time: the event-driven course of each
  * parameter ({@code ParameterTrack}, piecewise linear) times or plus the seeded fluctuations
- * ({@code OrnsteinUhlenbeckSeries}).
+ * ({@code OrnsteinUhlenbeckSeries}). {@link dev.sweepline.sim.scenario.PlasmaStates} turns those conditions
+ * (trade units) into the simulator's plasma state (SI, instrument frame): the form in which the bench
+ * and the instrument server hand the plasma to the instrument.
  *
  * <h2>Requirements and how each is verified</h2>
  * <ol>

@@ -1,10 +1,8 @@
-package dev.sweepline.sim.bench;
+package dev.sweepline.sim.scenario;
 
 import dev.sweepline.sim.plasma.IonPopulation;
 import dev.sweepline.sim.plasma.IonSpecies;
 import dev.sweepline.sim.plasma.PlasmaState;
-import dev.sweepline.sim.scenario.AlphaDriftDirection;
-import dev.sweepline.sim.scenario.PlasmaConditions;
 import java.util.List;
 
 /**
