@@ -18,5 +18,6 @@ class ArchitectureTest {
      * seeds in seed), never in the package of its first user.
      */
     @ArchTest
-    static final ArchRule packagesAreFreeOfCycles = slices().matching("dev.sweepline.sim.(*)..").should().beFreeOfCycles();
+    static final ArchRule packagesAreFreeOfCycles =
+        slices().matching("dev.sweepline.sim.(*)..").should().beFreeOfCycles();
 }

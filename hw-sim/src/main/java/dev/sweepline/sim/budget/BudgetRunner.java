@@ -7,6 +7,7 @@ import dev.sweepline.sim.bench.ClosedLoopBench;
 import dev.sweepline.sim.bench.RunPool;
 import dev.sweepline.sim.bench.RunSummary;
 import dev.sweepline.sim.command.ScriptRunner;
+import dev.sweepline.sim.scenario.Scenario;
 import dev.sweepline.sim.seed.SeedTree;
 import java.util.ArrayList;
 import java.util.List;
@@ -66,8 +67,8 @@ public final class BudgetRunner {
     /** The closed loop of one point: the default flight software, commanded into the phase's mode at its start. */
     static Flown fly(OrbitPlan plan, Phase phase, double distanceAu, long seed) {
         double seconds = plan.sampleMinutes() * 60;
-        BenchConfig config = BenchConfig.defaults(DistanceScaling.at(plan.scenario(), distanceAu, seconds), seed, seconds)
-                .withAllocation(phase.allocationBitsPerSecond());
+        Scenario scaled = DistanceScaling.at(plan.scenario(), distanceAu, seconds);
+        BenchConfig config = BenchConfig.defaults(scaled, seed, seconds).withAllocation(phase.allocationBitsPerSecond());
         ScriptRunner commands = new ScriptRunner(PhaseCommands.of(phase.mode(), config.flight()), true, null);
         RunSummary s = ClosedLoopBench.run(config, ClosedLoopBench.Progress.NONE,
                 ClosedLoopBench.Hooks.NONE.withCycle(commands)).summary();

@@ -34,7 +34,10 @@ public enum PlasmaParameter {
      */
     public static final double MAX_ANGLE_DEG = 60.0;
 
-    /** Largest He/H ratio a scenario may ask for (issue 2's validity limit; real CME material stays below ~0.3). */
+    /**
+     * Largest He/H ratio a scenario may ask for (scenarios/FORMAT.md: 0 .. 0.5): our limit, set above real CME
+     * material, which stays below ~0.3 [memory].
+     */
     public static final double MAX_ABUNDANCE = 0.5;
 
     private final String eventKey;

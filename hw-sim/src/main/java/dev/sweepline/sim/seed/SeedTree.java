@@ -19,7 +19,8 @@ import java.util.SplittableRandom;
  *     series i (0 density, 1 speed, 2 temperature, 3 and 4 flow angles)</td></tr>
  * <tr><td>member</td><td>member k</td><td>child SR(seed).split().nextLong() ^ γ·(k + 1)</td>
  *     <td>campaign ensemble member k, the same for every set</td></tr>
- * <tr><td>ensemble-draws</td><td>-</td><td>SR(seed)</td><td>a member's drawn start and event shift, in file order</td></tr>
+ * <tr><td>ensemble-draws</td><td>-</td><td>SR(seed)</td>
+ *     <td>a member's drawn start and event shift, in file order</td></tr>
  * <tr><td>point</td><td>point i</td><td>child seed·1 000 003 + i</td><td>budget point i</td></tr>
  * <tr><td>link-faults</td><td>direction d, kind f</td><td>the f-th split of the d-th split of SR(seed)</td>
  *     <td>one kind of damage ({@link LinkFault}) in one direction ({@link LinkDirection})</td></tr>

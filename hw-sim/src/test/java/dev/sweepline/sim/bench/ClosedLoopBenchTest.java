@@ -19,7 +19,7 @@ class ClosedLoopBenchTest {
     Path dir;
 
     @Test
-    void shouldWriteTheSummaryFieldsTheIssueAsksFor() throws IOException {
+    void shouldWriteTheSummaryFieldsOfDesignNoteB2() throws IOException {
         ClosedLoopBench.Result result = ClosedLoopBench.run(
                 BenchConfig.defaults(ScenarioLoader.builtIn("shock-sheath"), 3, 60), ClosedLoopBench.Progress.NONE);
         RunReportWriter.write(dir, result);

@@ -29,7 +29,7 @@ final class RandomWind {
 
     /**
      * A wind hit by a shock at a random time 8-12 s, ramp 0-1 s (within one survey sweep of about
-     * 1.2 s), with the issue's sheath: density x2.5, speed +35 %, temperature x3; marked as a jump.
+     * 1.2 s), with shock-sheath.yaml's shock: density x2.5, speed +35 %, temperature x3; marked as a jump.
      */
     static Scenario shocked(long seed, double secondsAfterFront) {
         SplittableRandom r = new SplittableRandom(seed);

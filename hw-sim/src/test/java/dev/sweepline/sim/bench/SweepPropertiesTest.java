@@ -9,7 +9,7 @@ import java.util.stream.LongStream;
 import org.junit.jupiter.api.Test;
 
 /**
- * The issue's closed-loop properties over at least 1000 seeds each: the flight scheduler against the
+ * The bench design note's closed-loop properties (B3) over at least 1000 seeds each: the flight scheduler against the
  * simulated instrument on random winds. Seeds are the integers from a recorded base, so any failure
  * names the seed that reproduces it with {@code bench run}.
  */
@@ -29,7 +29,7 @@ class SweepPropertiesTest {
     void shouldHoldTheProtonPeakInSteadyWind() {
         List<String> failures = runAll(20_000, seed -> {
             RunSummary s = run(RandomWind.steady(seed, 0.01, 0.15, 40), seed);
-            // issue 2: steady wind gives lock fraction >= 0.99
+            // bench design note B3: steady wind gives lock fraction >= 0.99
             return s.lockFraction() >= 0.99 ? null : "seed " + seed + ": lock fraction " + s.lockFraction();
         });
         assertTrue(failures.isEmpty(), String.join("\n", failures));
@@ -41,7 +41,7 @@ class SweepPropertiesTest {
             RunSummary s = run(RandomWind.shocked(seed, 8), seed);
             assertEquals(1, s.reacquisitions().size());
             Reacquisition r = s.reacquisitions().get(0);
-            // issue 2: after the shock front the band holds the new peak within 2 sweeps
+            // bench design note B3: after the shock front the band holds the new peak within 2 sweeps
             return r.reacquired() && r.sweeps() <= 2 ? null
                     : "seed " + seed + ": reacquired after " + r.sweeps() + " sweeps";
         });

@@ -23,7 +23,7 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
 /**
- * Issue 7: the recommended table, loaded through the table commands and restored by a fresh flight
+ * Campaign design note C3: the recommended table, loaded through the table commands and restored by a fresh flight
  * software from its non-volatile memory, reproduces the metrics the campaign reported for it.
  */
 class RecommendedTableTest {

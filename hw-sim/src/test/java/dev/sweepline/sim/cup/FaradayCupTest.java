@@ -26,7 +26,8 @@ class FaradayCupTest {
 
     @Test
     void shouldHaveTheWorkedCaseAreaInTheDemoCup() {
-        // issue 2: demo effective area 1 cm^2 behind four grids of 0.90 (physics.md: common practice); exact by design
+        // cup design note: the demo's 1 cm^2 is the area of physics.md's worked cases, behind four grids of 0.90
+        // (physics.md: ~90 % each, common practice); exact by design
         CupGeometry demo = CupGeometry.demo();
         assertEquals(1e-4, demo.effectiveAreaM2(), 1e-18);
         assertEquals(0.6561, demo.gridTransmission(), 1e-15);

@@ -77,7 +77,7 @@ class SplitCollectorTest {
 
     @Test
     void shouldMatchAnIndependentQuadratureForAnyShift() {
-        // exactness requirement of issue 2 (1e-9 of the image area); the reference converges to 1e-13
+        // cup design note CUP-1: exact to 1e-9 of the image area; the reference converges to 1e-13
         SplitCollector collector = SplitCollector.of(DEMO);
         double[] out = new double[4];
         double[][] fixed = {{0, 0}, {1e-3, 0}, {0, -2e-3}, {3e-3, 2e-3}, {-5e-3, 4e-3}, {7e-3, -1e-3},

@@ -30,7 +30,8 @@ class AecCrossCheckTest {
 
     static Stream<Arguments> cases() {
         List<Arguments> cases = new ArrayList<>();
-        // issue 3's grid: n = 8, 12, 16 and J = 8, 16, 32, 64; r = 5 (short intervals, a partial last
+        // sample widths n = 8, 12, 16 (the spectra's 16 bits and two narrower) and every block size of
+        // CCSDS 121.0-B, J = 8, 16, 32, 64 (standards.md); r = 5 (short intervals, a partial last
         // one) and r = 128 (intervals longer than a 64-block segment, so ROS meets segment ends)
         for (int n : new int[] {8, 12, 16}) {
             for (int j : new int[] {8, 16, 32, 64}) {

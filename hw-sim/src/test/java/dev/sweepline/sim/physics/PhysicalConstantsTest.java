@@ -19,7 +19,7 @@ class PhysicalConstantsTest {
 
     @Test
     void shouldGiveTheProtonSpeedAtOneKilovolt() {
-        // issue 2 / physics.md [computed from CODATA 2018]: v = sqrt(2 e 1000 V / m_p) = 437.7 km/s;
+        // physics.md [computed from CODATA 2018]: v = sqrt(2 e 1000 V / m_p) = 437.7 km/s;
         // tolerance half a unit of the last quoted digit (0.05 km/s)
         double v = Math.sqrt(2 * PhysicalConstants.ELEMENTARY_CHARGE_COULOMB * 1000 / PhysicalConstants.PROTON_MASS_KG);
         assertEquals(437.7e3, v, 50.0);

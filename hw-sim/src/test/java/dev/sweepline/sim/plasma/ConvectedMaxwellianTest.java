@@ -67,7 +67,7 @@ class ConvectedMaxwellianTest {
     @MethodSource("grid")
     void shouldEqualTheQuadratureOfTheFlux(double n, double u, double w, double v1, double v2) {
         // physics.md: cross-check the closed form against quadrature by a reference integrator (Hipparchus);
-        // 1e-9 relative is issue 2's requirement; the integrator converges to 1e-12 relative, 1000x tighter
+        // 1e-9 relative is the plasma design note's PLA-1; the integrator converges to 1e-12 relative, 1000x tighter
         double closed = ConvectedMaxwellian.windowCurrent(E, n, AREA_M2, u, w, v1, v2);
         double reference = quadrature(E, n, AREA_M2, u, w, v1, v2);
         assertTrue(closed > 0, "current must stay positive, even far in the tail");

@@ -28,7 +28,7 @@ class BuiltInScenariosTest {
     private static final Path DIR = Path.of("src/main/resources/scenarios");
     private static final ObjectMapper YAML = new ObjectMapper(new YAMLFactory());
 
-    /** Cinder's invented orbit (issue 2): perihelion and aphelion, AU. */
+    /** Cinder's orbit, perihelion and aphelion, AU (scenario design note; invented, architecture.md "Naming"). */
     private static final double PERIHELION_AU = 0.046;
     private static final double APHELION_AU = 0.73;
 
@@ -107,7 +107,8 @@ class BuiltInScenariosTest {
     @ParameterizedTest(name = "{0}")
     @MethodSource("names")
     void shouldPlaceEveryBuiltInOnCindersOrbitAndCitePhysicsMd(String name) throws IOException {
-        // Source: issue 2 (Cinder's invented orbit, 0.046..0.73 AU; every file cites physics.md rows).
+        // Source: the scenario design note (Cinder's invented orbit, 0.046..0.73 AU) and DEVELOPERS.md "How to
+        // add a scenario" (every file cites the source of its plasma values: physics.md rows).
         Scenario s = ScenarioLoader.builtIn(name);
         assertTrue(s.distanceAu() >= PERIHELION_AU && s.distanceAu() <= APHELION_AU, () -> name + " " + s.distanceAu());
         assertTrue(Files.readString(DIR.resolve(name + ".yaml")).contains("physics.md"), name);
@@ -121,7 +122,7 @@ class BuiltInScenariosTest {
                     .map(n -> n.substring(0, n.length() - ".yaml".length())).sorted().toList();
             assertEquals(onDisk, ScenarioLoader.builtInNames().stream().sorted().toList());
         }
-        assertEquals("quiet-perihelion", ScenarioLoader.defaultName()); // issue 2: the DEFAULT
+        assertEquals("quiet-perihelion", ScenarioLoader.defaultName()); // what 'bench run' flies unless told
         assertEquals(ScenarioLoader.defaultName(), ScenarioLoader.builtInNames().get(0)); // index.txt header
     }
 
@@ -136,11 +137,11 @@ class BuiltInScenariosTest {
         // Same row: "U/w near 3", w = sqrt(2kT/m_p); we accept 2.5..3.5 as "near".
         double wKmPerS = Math.sqrt(2 * K_B * c.protonTemperatureK() / M_P) / 1e3;
         assertBetween(2.5, 3.5, c.protonSpeedKmPerS() / wKmPerS);
-        // physics.md "He/H ~2-4.5 % in slow wind" (Aellig et al. 2001); issue 2 asks ~3 %.
+        // physics.md "He/H ~2-4.5 % in slow wind" (Aellig et al. 2001); the file takes 3 %, inside the row.
         assertEquals(0.03, c.alphaAbundance(), 0.005);
-        assertEquals(120, s.durationSeconds(), 0.0); // issue 2
+        assertEquals(120, s.durationSeconds(), 0.0); // the file's durationS: a two-minute demo run
         assertTrue(s.jumps().isEmpty(), "quiet: no jumps");
-        // Small fluctuations: issue 2; "small" taken as at most 5 % relative rms (common practice).
+        // A quiet wind fluctuates little: at most 5 % relative rms (common practice).
         assertTrue(s.fluctuations().densityRelativeRms() <= 0.05 && s.fluctuations().speedRelativeRms() <= 0.05);
     }
 
@@ -164,11 +165,13 @@ class BuiltInScenariosTest {
         Scenario s = ScenarioLoader.builtIn("shock-sheath");
         assertEquals(1, s.jumps().size());
         Scenario.Jump shock = s.jumps().get(0);
-        assertTrue(shock.rampSeconds() <= 1.0, "issue 2: ramp <= 1 s, a survey sweep being ~1.2 s");
+        assertTrue(shock.rampSeconds() <= 1.0,
+                "the front passes within one survey sweep (~1.2 s on the default table): ramp <= 1 s");
         ScenarioTimeline t = s.timeline(1);
         double before = shock.atSeconds();
         double after = shock.atSeconds() + shock.rampSeconds();
-        // issue 2: density x2.5, speed +35 %, temperature x3 (exact factors of the file, rounding only).
+        // the file's shock: density x2.5, speed +35 %, temperature x3 (its header gives their sources;
+        // exact factors, rounding only).
         assertEquals(2.5, ratio(t, PlasmaParameter.PROTON_DENSITY, before, after), 1e-12);
         assertEquals(1.35, ratio(t, PlasmaParameter.PROTON_SPEED, before, after), 1e-12);
         assertEquals(3.0, ratio(t, PlasmaParameter.PROTON_TEMPERATURE, before, after), 1e-12);
@@ -185,7 +188,8 @@ class BuiltInScenariosTest {
         ScenarioEvent speed = s.events().stream().filter(e -> e.changes(PlasmaParameter.PROTON_SPEED)).findFirst()
                 .orElseThrow();
         ScenarioTimeline t = s.timeline(1);
-        // issue 2: 300 -> 650 km/s over ten minutes, default duration >= 12 min.
+        // the file's interface: 300 -> 650 km/s over ten minutes (its header: slow wind near the Sun, the
+        // 1 AU fast-wind row), and a default run of at least 12 min so that the fast side is seen settled.
         assertEquals(600, speed.rampSeconds(), 0.0);
         assertEquals(300, t.meanAt(PlasmaParameter.PROTON_SPEED, speed.atSeconds()), 1e-9);
         assertEquals(650, t.meanAt(PlasmaParameter.PROTON_SPEED, speed.endSeconds()), 1e-9);
@@ -198,9 +202,10 @@ class BuiltInScenariosTest {
 
     @Test
     void shouldGiveHeliumRichTenPercentAndObliqueFlowFifteenDegrees() {
-        // issue 2: He/H 10 %; physics.md "> 8.5 % in 12 %" of CME events (Song et al. 2022).
+        // helium-rich.yaml: He/H 10 %, inside physics.md "> 8.5 % in 12 %" of CME events (Song et al. 2022).
         assertEquals(0.10, ScenarioLoader.builtIn("helium-rich").start().alphaAbundance(), 1e-12);
-        // issue 2: flow 15 deg off the normal; the angle from z is atan(sqrt(tan^2 thetaX + tan^2 thetaY)).
+        // oblique-flow.yaml: flow 15 deg off the normal, inside the 20 deg the split collector inverts (cup
+        // design note CUP-2); the angle from z is atan(sqrt(tan^2 thetaX + tan^2 thetaY)).
         PlasmaConditions c = ScenarioLoader.builtIn("oblique-flow").start();
         double tx = Math.tan(Math.toRadians(c.flowThetaXDeg()));
         double ty = Math.tan(Math.toRadians(c.flowThetaYDeg()));
@@ -215,7 +220,7 @@ class BuiltInScenariosTest {
         assertEquals(0, shock.rampSeconds(), 0.0);
         ScenarioTimeline t = s.timeline(1);
         double r = ratio(t, PlasmaParameter.PROTON_DENSITY, shock.atSeconds() - 1e-6, shock.atSeconds());
-        // physics.md "Shocks": r -> 4 for gamma = 5/3, r(M = 5) = 3.571; the file asks 3.5.
+        // physics.md "Shocks": r -> 4 for gamma = 5/3, r(M = 5) = 3.571; the file sets 3.5.
         assertEquals(3.5, r, 1e-12);
         assertTrue(r < 4.0);
     }

@@ -10,7 +10,7 @@ import java.nio.file.Path;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
-/** resolve() finds built-ins by name and files by path; unknown names list the built-ins (issue 2). */
+/** resolve() finds built-ins by name and files by path; unknown names list the built-ins (scenario note SC-6). */
 class ScenarioLoaderTest {
     @Test
     void shouldResolveABuiltInByName() {
@@ -58,7 +58,7 @@ class ScenarioLoaderTest {
 
     @Test
     void shouldPointTheFieldDriftAlongTheFieldAngles() {
-        // Geometry of the angle convention (issue 2: tan thetaX = vx / vz): a unit vector whose
+        // Geometry of the angle convention (scenarios/FORMAT.md: tan thetaX = vx / vz): a unit vector whose
         // x/z and y/z ratios are the tangents of the field angles.
         PlasmaConditions c = ScenarioLoader.builtIn("helium-rich").start();
         double[] u = AlphaDriftDirection.FIELD.unitVector(c);
