@@ -1,7 +1,9 @@
 /**
  * The closed-loop bench: the flight software drives the simulated instrument through the in-process
  * link on simulated time, a recorder keeps the truth beside every decision, and the ground check
- * decodes and fits the run's own telemetry.
+ * decodes and fits the run's own telemetry. A run is described by a {@code BenchConfig} (scenario, seed,
+ * duration, the flight software's whole {@code FlightConfig}, the simulated instrument, the allocation);
+ * campaigns and budgets run many on a {@code RunPool}.
  *
  * <h2>Requirements</h2>
  * <ol>
