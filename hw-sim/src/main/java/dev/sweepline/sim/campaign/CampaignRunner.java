@@ -13,20 +13,14 @@ import java.util.List;
  * thread count, and a shard's rows are exactly the unsharded rows it owns.
  */
 public final class CampaignRunner {
-    /** Told after each finished job. */
-    public interface Progress {
-        /** {@code done} of {@code total} jobs of this shard finished. */
-        void update(int done, int total);
-
-        /** Shows nothing. */
-        Progress NONE = (done, total) -> { };
-    }
-
     private CampaignRunner() {
     }
 
-    /** Runs the jobs of {@code shard} on {@code threads} threads (at least 1); rows in job order. */
-    public static List<RunRow> run(CampaignSpec spec, int threads, Shard shard, Progress progress) {
+    /**
+     * Runs the jobs of {@code shard} on {@code threads} threads (at least 1); rows in job order;
+     * {@code progress} counts this shard's jobs.
+     */
+    public static List<RunRow> run(CampaignSpec spec, int threads, Shard shard, RunPool.Progress progress) {
         List<int[]> jobs = new ArrayList<>();
         for (int set = 0; set < spec.setCount(); set++) {
             for (int run = 0; run < spec.runsPerSet(); run++) {
@@ -35,7 +29,7 @@ public final class CampaignRunner {
                 }
             }
         }
-        return RunPool.map("campaign run", threads, jobs, job -> runOne(spec, job[0], job[1]), progress::update);
+        return RunPool.map("campaign run", threads, jobs, job -> runOne(spec, job[0], job[1]), progress);
     }
 
     /** Set {@code set} on ensemble member {@code run}: the default flight software with the set's parameters. */

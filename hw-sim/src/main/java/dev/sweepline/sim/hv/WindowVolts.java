@@ -2,6 +2,7 @@ package dev.sweepline.sim.hv;
 
 import dev.sweepline.fsw.sweep.SweepScheduler;
 import dev.sweepline.fsw.table.WindowTable;
+import java.util.function.IntUnaryOperator;
 
 /**
  * The energy-per-charge windows of a table as the real HV supply makes them (the table's DAC codes
@@ -14,23 +15,20 @@ public final class WindowVolts {
 
     /** The windows of {@code table} through {@code calibration}. */
     public WindowVolts(WindowTable table, HvCalibration calibration) {
-        int n = table.count();
-        lowVolts = new double[n];
-        highVolts = new double[n];
-        for (int w = 0; w < n; w++) {
-            lowVolts[w] = calibration.volts(table.dacLow(w));
-            highVolts[w] = calibration.volts(table.dacHigh(w));
-        }
+        this(table.count(), table::dacLow, table::dacHigh, calibration);
     }
 
     /** The windows of the scheduler's active table (it changes when a table is commanded or restored). */
     public WindowVolts(SweepScheduler scheduler, HvCalibration calibration) {
-        int n = scheduler.windowCount();
-        lowVolts = new double[n];
-        highVolts = new double[n];
-        for (int w = 0; w < n; w++) {
-            lowVolts[w] = calibration.volts(scheduler.dacLow(w));
-            highVolts[w] = calibration.volts(scheduler.dacHigh(w));
+        this(scheduler.windowCount(), scheduler::dacLow, scheduler::dacHigh, calibration);
+    }
+
+    private WindowVolts(int count, IntUnaryOperator dacLow, IntUnaryOperator dacHigh, HvCalibration calibration) {
+        lowVolts = new double[count];
+        highVolts = new double[count];
+        for (int w = 0; w < count; w++) {
+            lowVolts[w] = calibration.volts(dacLow.applyAsInt(w));
+            highVolts[w] = calibration.volts(dacHigh.applyAsInt(w));
         }
     }
 

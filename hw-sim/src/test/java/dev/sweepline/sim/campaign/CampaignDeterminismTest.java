@@ -7,6 +7,7 @@ import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import dev.sweepline.sim.bench.BenchConfig;
+import dev.sweepline.sim.bench.RunPool;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -41,8 +42,8 @@ class CampaignDeterminismTest {
         CampaignSpec spec = CampaignReader.parse(CAMPAIGN, "small.yaml", null);
         Path one = dir.resolve("one");
         Path two = dir.resolve("two");
-        write(one, spec, CampaignRunner.run(spec, 1, Shard.ALL, CampaignRunner.Progress.NONE));
-        write(two, spec, CampaignRunner.run(spec, 2, Shard.ALL, CampaignRunner.Progress.NONE));
+        write(one, spec, CampaignRunner.run(spec, 1, Shard.ALL, RunPool.Progress.NONE));
+        write(two, spec, CampaignRunner.run(spec, 2, Shard.ALL, RunPool.Progress.NONE));
         for (String f : new String[] {"runs.csv", "sets.csv", "summary.json"}) {
             assertArrayEquals(Files.readAllBytes(one.resolve(f)), Files.readAllBytes(two.resolve(f)), f);
         }
@@ -52,13 +53,13 @@ class CampaignDeterminismTest {
     void shouldMergeShardsIntoTheUnshardedResult() throws IOException {
         CampaignSpec spec = CampaignReader.parse(CAMPAIGN, "small.yaml", null);
         Path whole = dir.resolve("whole");
-        write(whole, spec, CampaignRunner.run(spec, 2, Shard.ALL, CampaignRunner.Progress.NONE));
+        write(whole, spec, CampaignRunner.run(spec, 2, Shard.ALL, RunPool.Progress.NONE));
         Path s1 = dir.resolve("s1");
         Path s2 = dir.resolve("s2");
         Path s3 = dir.resolve("s3");
-        CampaignOutput.writeRuns(s1, CampaignRunner.run(spec, 1, new Shard(1, 3), CampaignRunner.Progress.NONE));
-        CampaignOutput.writeRuns(s2, CampaignRunner.run(spec, 2, new Shard(2, 3), CampaignRunner.Progress.NONE));
-        CampaignOutput.writeRuns(s3, CampaignRunner.run(spec, 1, new Shard(3, 3), CampaignRunner.Progress.NONE));
+        CampaignOutput.writeRuns(s1, CampaignRunner.run(spec, 1, new Shard(1, 3), RunPool.Progress.NONE));
+        CampaignOutput.writeRuns(s2, CampaignRunner.run(spec, 2, new Shard(2, 3), RunPool.Progress.NONE));
+        CampaignOutput.writeRuns(s3, CampaignRunner.run(spec, 1, new Shard(3, 3), RunPool.Progress.NONE));
         Path merged = dir.resolve("merged");
         write(merged, spec, CampaignOutput.readRuns(spec, List.of(s3, s1, s2)));
         for (String f : new String[] {"runs.csv", "sets.csv", "summary.json"}) {
@@ -70,7 +71,7 @@ class CampaignDeterminismTest {
     void shouldRefuseAMergeWithAShardMissing() throws IOException {
         CampaignSpec spec = CampaignReader.parse(CAMPAIGN, "small.yaml", null);
         Path s1 = dir.resolve("s1");
-        CampaignOutput.writeRuns(s1, CampaignRunner.run(spec, 2, new Shard(1, 2), CampaignRunner.Progress.NONE));
+        CampaignOutput.writeRuns(s1, CampaignRunner.run(spec, 2, new Shard(1, 2), RunPool.Progress.NONE));
         IOException e = assertThrows(IOException.class, () -> CampaignOutput.readRuns(spec, List.of(s1)));
         assertEquals(true, e.getMessage().contains("a shard is missing"), e.getMessage());
     }

@@ -12,6 +12,7 @@ import dev.sweepline.sim.bench.BenchConfig;
 import dev.sweepline.sim.bench.ClosedLoopBench;
 import dev.sweepline.ground.spectrum.WindowCatalogue;
 import dev.sweepline.sim.bench.GroundCheck;
+import dev.sweepline.sim.bench.RunPool;
 import dev.sweepline.sim.command.CommandScript;
 import dev.sweepline.sim.command.ScriptRunner;
 import dev.sweepline.sim.instrument.SimulatedInstrument;
@@ -33,7 +34,7 @@ class RecommendedTableTest {
     @Test
     void shouldReproduceTheReportedMetricsWhenUplinked() throws Exception {
         CampaignSpec spec = CampaignReader.parse(CampaignDeterminismTest.CAMPAIGN, "small.yaml", null);
-        List<RunRow> rows = CampaignRunner.run(spec, 2, Shard.ALL, CampaignRunner.Progress.NONE);
+        List<RunRow> rows = CampaignRunner.run(spec, 2, Shard.ALL, RunPool.Progress.NONE);
         SetResult best = CampaignOutput.writeResults(dir, spec, rows);
         assertNotNull(best, "the small campaign recommends a set");
         Path image = dir.resolve(CampaignOutput.RECOMMENDED_IMAGE);
