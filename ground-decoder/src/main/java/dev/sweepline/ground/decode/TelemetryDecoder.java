@@ -15,6 +15,7 @@ import dev.sweepline.ground.spectrum.DecodedSpectrum;
 import dev.sweepline.ground.spectrum.QuadrantDecompressor;
 import dev.sweepline.ground.spectrum.SpectrumPacketDecoder;
 import dev.sweepline.ground.spectrum.SpectrumResult;
+import dev.sweepline.ground.spectrum.WindowCatalogue;
 
 /**
  * The whole ground chain of the telemetry ICD: bytes → frames → packets → spectra, housekeeping and
@@ -32,19 +33,19 @@ public final class TelemetryDecoder {
     private final SpectrumPacketDecoder spectra;
 
     /**
-     * @param config   frame length and SCID
+     * @param config   frame length, SCID and the instrument descriptions
      * @param ccsds121 decoder for compression 0x01 ({@link QuadrantDecompressor#UNAVAILABLE} if none)
      * @param listener receives everything found
      */
     public TelemetryDecoder(DecoderConfig config, QuadrantDecompressor ccsds121, DecodeListener listener) {
-        this(config, ccsds121, new dev.sweepline.ground.spectrum.WindowCatalogue(), listener);
+        this(config, ccsds121, new WindowCatalogue(), listener);
     }
 
     /** As above, with the window tables of {@code windows} (uplinked tables by id). */
-    public TelemetryDecoder(DecoderConfig config, QuadrantDecompressor ccsds121,
-            dev.sweepline.ground.spectrum.WindowCatalogue windows, DecodeListener listener) {
+    public TelemetryDecoder(DecoderConfig config, QuadrantDecompressor ccsds121, WindowCatalogue windows,
+            DecodeListener listener) {
         this.listener = listener;
-        this.spectra = new SpectrumPacketDecoder(ccsds121, windows);
+        this.spectra = new SpectrumPacketDecoder(ccsds121, windows, config.instruments());
         this.demux = new VirtualChannelDemux(new Packets());
         this.sync = new FrameSynchroniser(config.frameOctets(), config.scid(), new Frames());
         java.util.Arrays.fill(vcOfApid, -1);
@@ -163,6 +164,7 @@ public final class TelemetryDecoder {
                 } else {
                     stats.spectraFocus++;
                 }
+                stats.spectraByInstrument.merge(s.instrument().name(), 1L, Long::sum);
                 stats.time(s.time());
                 listener.onSpectrum(s);
             } else {

