@@ -94,8 +94,8 @@ class GroundProcessingTest {
         for (CSVRecord row : rows) {
             for (String col : MomentsCsv.HEADER) {
                 String v = row.get(col);
-                if (col.startsWith("time_tai") && !col.endsWith("_s") || col.equals("apid") || col.equals("instrument") || col.equals("mode")
-                        || col.equals("flags") || v.isEmpty()) {
+                if (col.startsWith("time_tai") && !col.endsWith("_s") || col.equals("apid") || col.equals("instrument")
+                        || col.equals("mode") || col.equals("flags") || v.isEmpty()) {
                     continue;
                 }
                 assertTrue(Double.isFinite(Double.parseDouble(v)), col + " = " + v);
