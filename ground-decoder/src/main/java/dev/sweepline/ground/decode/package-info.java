@@ -1,14 +1,18 @@
 /**
  * The ground chain of the telemetry ICD put together: {@link dev.sweepline.ground.decode.TelemetryDecoder}
  * (bytes → frames → packets → spectra, housekeeping, events), its counts
- * {@link dev.sweepline.ground.decode.DecodeStats}, and the housekeeping (ICD §5) and event (ICD §6) records.
+ * {@link dev.sweepline.ground.decode.DecodeStats}, and the housekeeping (ICD §5), event (ICD §6) and command
+ * report (ICD §9) records. {@link dev.sweepline.ground.decode.DecoderConfig} names the frame length, the SCID
+ * and the instrument descriptions spectra are decoded with (default: every built-in).
  *
  * <h2>Design note</h2>
  * <p>Driven from outside: the caller feeds octets in any chunking and calls {@code finish()}; everything
  * is reported to one {@link dev.sweepline.ground.decode.DecodeListener} on the feeding thread, in stream
  * order. Idle packets are counted under APID 0x7FF (bits per APID include them) and then dropped;
  * sequence-count gaps are checked per APID except idle (the ICD does not say whether idle packets of
- * VC 0 and VC 1 share one count). APID 0x130 (command report, issue 6) is counted but not decoded.
+ * VC 0 and VC 1 share one count). APID 0x130 (command report, ICD §9) is decoded into a {@link
+ * dev.sweepline.ground.decode.CommandReport} (a table dump's image octets included), counted by type and
+ * status ({@code commandReports}) and handed to the listener; one of the wrong shape is a record error.
  * Frames dropped by their VC count ({@code framesDropped}: DUPLICATE, STALE) and restarts of a VC's count
  * sequence ({@code vcRestarts}) are counted apart from rejected frames ({@code framesBad}, where
  * UNKNOWN_VCID is): a dropped frame passed every check of the frame layer ({@code framesGood} includes
@@ -27,6 +31,10 @@
  *   <li>D3 throughput: {@code FrameDecodeBenchmark} (src/jmh), 1024-octet frames carrying raw survey
  *       spectra of 128 windows, whole chain: 32.3 ± 4.6 ms per 8.42 MB, about 260 MB/s of frames on the
  *       shared 2-core machine (target 200 MB/s).</li>
+ *   <li>D4 command reports decode field by field and through the whole chain ({@code CommandRecordDecodeTest}).</li>
+ *   <li>D5 spectra of an instrument the ground has no description for, or of another sample width than its
+ *       description's ADC, are refused each with its own reason and counted, and the good spectra after them
+ *       decode (the golden layout-2 stream, {@code GoldenSpectraV2DecodeTest}).</li>
  * </ol>
  */
 package dev.sweepline.ground.decode;
