@@ -17,9 +17,10 @@ import com.tngtech.archunit.lang.ArchRule;
 class ArchitectureTest {
     /** The packages depend on each other one way: no cycle between any two (or more) of them. */
     @ArchTest
-    static final ArchRule packagesAreFreeOfCycles = slices().matching("dev.sweepline.ground.(*)..").should().beFreeOfCycles();
+    static final ArchRule packagesAreFreeOfCycles =
+            slices().matching("dev.sweepline.ground.(*)..").should().beFreeOfCycles();
 
-    /** Nothing of the flight software or the simulator: the ground reads their documents and data files, not their code. */
+    /** Nothing of the flight software or the simulator: the ground reads their documents and data files, no code. */
     @ArchTest
     static final ArchRule noFlightOrSimulatorCode = noClasses().that().resideInAPackage("dev.sweepline.ground..")
             .should().dependOnClassesThat().resideInAnyPackage("dev.sweepline.fsw..", "dev.sweepline.sim..");

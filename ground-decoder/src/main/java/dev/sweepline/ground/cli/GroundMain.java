@@ -5,7 +5,8 @@ import picocli.CommandLine.Command;
 
 /**
  * Command-line entry point of the ground decoder jar: {@code decode FILE --out DIR},
- * {@code inspect FILE} and {@code instruments}. Exit status: 0 when the input was read (bad frames included), 2 for an unreadable
+ * {@code inspect FILE} and {@code instruments}. Exit status: 0 when the input was read (bad frames
+ * included), 2 for an unreadable
  * input or bad usage, 1 when the products cannot be written.
  */
 @Command(name = "sweepline-ground", mixinStandardHelpOptions = true, version = "sweepline-ground 0.1.0",

@@ -1,5 +1,6 @@
 package dev.sweepline.ground.cli;
 
+import dev.sweepline.ground.instrument.DefaultWindowTable;
 import dev.sweepline.ground.instrument.GroundInstrument;
 import dev.sweepline.ground.instrument.InstrumentSet;
 import java.io.PrintWriter;
@@ -26,9 +27,10 @@ final class InstrumentsCommand implements Callable<Integer> {
         out.printf("%-12s %5s %7s  %-17s %9s %8s  %s%n", "name", "id", "windows", "table (V)", "rating", "ADC bits",
                 "ranges (full scale)");
         for (GroundInstrument i : InstrumentSet.builtIns().all()) {
-            out.printf("%-12s %5d %7d  %-17s %7.0f V %8d  %s%n", i.name(), i.id(), i.windows().windows(),
-                    String.format("%s-%s", volts(i.windows().tableVolts(0)), volts(i.windows().tableVolts(i.windows().windows()))),
-                    i.modulator().maxVolts(), i.sampleBits(), ranges(i));
+            DefaultWindowTable t = i.windows();
+            out.printf("%-12s %5d %7d  %-17s %7.0f V %8d  %s%n", i.name(), i.id(), t.windows(),
+                    volts(t.tableVolts(0)) + "-" + volts(t.tableVolts(t.windows())), i.modulator().maxVolts(),
+                    i.sampleBits(), ranges(i));
         }
         out.flush();
         return ExitCodes.OK;

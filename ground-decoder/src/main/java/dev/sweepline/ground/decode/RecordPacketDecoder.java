@@ -1,6 +1,8 @@
 package dev.sweepline.ground.decode;
 
-import dev.sweepline.ground.frame.BigEndian;
+import static dev.sweepline.ground.frame.BigEndian.u16;
+import static dev.sweepline.ground.frame.BigEndian.u32;
+
 import dev.sweepline.ground.packet.CucTime;
 import dev.sweepline.ground.packet.SpacePacketHeader;
 
@@ -30,11 +32,11 @@ public final class RecordPacketDecoder {
         }
         int u = off + USER_DATA_OFFSET;
         return new HousekeepingReport(CucTime.read(b, off + SpacePacketHeader.OCTETS),
-                SpacePacketHeader.sequenceCount(b, off), b[u] & 0xFF, b[u + 1] != 0, BigEndian.u32(b, u + 2), BigEndian.u32(b, u + 6),
-                BigEndian.u16(b, u + 10), BigEndian.u16(b, u + 12), BigEndian.u16(b, u + 14), BigEndian.u16(b, u + 16), BigEndian.u16(b, u + 18), BigEndian.u16(b, u + 20),
-                BigEndian.u32(b, u + 22), extended ? BigEndian.u16(b, u + 26) : 0, extended ? BigEndian.u16(b, u + 28) : 0,
-                extended ? BigEndian.u16(b, u + 30) : 0, extended ? b[u + 32] & 0xFF : 0, extended ? b[u + 33] & 0xFF : 0,
-                extended ? BigEndian.u16(b, u + 34) : 0, extended ? BigEndian.u16(b, u + 36) : 0, full ? BigEndian.u16(b, u + 38) : 0);
+                SpacePacketHeader.sequenceCount(b, off), b[u] & 0xFF, b[u + 1] != 0, u32(b, u + 2), u32(b, u + 6),
+                u16(b, u + 10), u16(b, u + 12), u16(b, u + 14), u16(b, u + 16), u16(b, u + 18), u16(b, u + 20),
+                u32(b, u + 22), extended ? u16(b, u + 26) : 0, extended ? u16(b, u + 28) : 0,
+                extended ? u16(b, u + 30) : 0, extended ? b[u + 32] & 0xFF : 0, extended ? b[u + 33] & 0xFF : 0,
+                extended ? u16(b, u + 34) : 0, extended ? u16(b, u + 36) : 0, full ? u16(b, u + 38) : 0);
     }
 
     /** The event packet of {@code len} octets at {@code off}, or null when malformed. */
@@ -44,7 +46,7 @@ public final class RecordPacketDecoder {
         }
         int u = off + USER_DATA_OFFSET;
         return new EventReport(CucTime.read(b, off + SpacePacketHeader.OCTETS), SpacePacketHeader.sequenceCount(b, off),
-                BigEndian.u16(b, u), b[u + 2] & 0xFF, b[u + 3] & 0xFF, BigEndian.u16(b, u + 4));
+                u16(b, u), b[u + 2] & 0xFF, b[u + 3] & 0xFF, u16(b, u + 4));
     }
 
     /** The command report of {@code len} octets at {@code off}, or null when malformed. */
@@ -63,17 +65,17 @@ public final class RecordPacketDecoder {
         boolean dump = type == CommandReport.EXECUTION && code == CommandReport.TABLE_DUMP && status == 0;
         if (dump) {
             int d = u + CommandReport.USER_DATA_OCTETS;
-            if (extra < 5 || BigEndian.u16(b, d + 3) != extra - 5) {
+            if (extra < 5 || u16(b, d + 3) != extra - 5) {
                 return null;
             }
             copy = b[d] & 0xFF;
-            dumpOffset = BigEndian.u16(b, d + 1);
+            dumpOffset = u16(b, d + 1);
             data = java.util.Arrays.copyOfRange(b, d + 5, d + extra);
         } else if (extra != 0) {
             return null;
         }
         return new CommandReport(CucTime.read(b, off + SpacePacketHeader.OCTETS), SpacePacketHeader.sequenceCount(b, off),
-                type, code, BigEndian.u16(b, u + 2), BigEndian.u32(b, u + 4), status, b[u + 9] & 0xFF, BigEndian.u16(b, u + 10), BigEndian.u16(b, u + 12),
+                type, code, u16(b, u + 2), u32(b, u + 4), status, b[u + 9] & 0xFF, u16(b, u + 10), u16(b, u + 12),
                 copy, dumpOffset, data);
     }
 }

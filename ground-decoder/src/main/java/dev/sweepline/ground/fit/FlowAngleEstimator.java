@@ -16,7 +16,10 @@ public final class FlowAngleEstimator {
     private FlowAngleEstimator() {
     }
 
-    /** The angles on a cup of geometry {@code cup}, or {@link FlowAngles#NONE} when there are no quadrants or too little current. */
+    /**
+     * The angles on a cup of geometry {@code cup}, or {@link FlowAngles#NONE} when there are no quadrants or
+     * too little current.
+     */
     public static FlowAngles estimate(SpectrumInput in, CupGeometry cup) {
         if (!in.hasQuadrants() || in.windows() == 0) {
             return FlowAngles.NONE;

@@ -60,12 +60,14 @@ public final class BuiltInInstruments {
         String file = FOLDER + name + ".yaml";
         InputStream in = BuiltInInstruments.class.getResourceAsStream("/" + file);
         if (in == null) {
-            throw new InstrumentFileException(file, 0, "", "listed in " + FOLDER + "index.txt but not on the class path");
+            throw new InstrumentFileException(file, 0, "", "listed in " + FOLDER + "index.txt but not on the class "
+                    + "path");
         }
         try (InputStreamReader r = new InputStreamReader(in, StandardCharsets.UTF_8)) {
             GroundInstrument i = InstrumentReader.read(file, file, r);
             if (!i.name().equals(name)) {
-                throw new InstrumentFileException(file, 0, "name", "must be the file's name " + name + ", got " + i.name());
+                throw new InstrumentFileException(file, 0, "name", "must be the file's name " + name + ", got "
+                        + i.name());
             }
             return i;
         } catch (IOException e) {

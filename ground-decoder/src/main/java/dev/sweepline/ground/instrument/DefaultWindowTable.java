@@ -72,7 +72,10 @@ public final class DefaultWindowTable {
         return w >= 0 && w < windows() ? edgeVolts[w + 1] : Double.NaN;
     }
 
-    /** The window whose calibrated edges hold {@code volts} (an edge belongs to the window above it), or −1 outside the table and for NaN. */
+    /**
+     * The window whose calibrated edges hold {@code volts} (an edge belongs to the window above it), or −1
+     * outside the table and for NaN.
+     */
     public int windowOf(double volts) {
         if (!(volts >= edgeVolts[0]) || volts >= edgeVolts[windows()]) {
             return -1;

@@ -53,8 +53,8 @@ final class DescriptionSection {
             throw new InstrumentFileException(file, node.line(), field(key), "missing: expected " + expected);
         }
         if (v.kind() != kind || kind == YamlNode.Kind.SCALAR && v.text().isEmpty()) {
-            throw new InstrumentFileException(file, v.line(), field(key), "expected " + expected
-                    + (v.kind() == YamlNode.Kind.SCALAR ? ", got '" + v.text() + "'" : ", got a " + v.kind().name().toLowerCase()));
+            String got = v.kind() == YamlNode.Kind.SCALAR ? "'" + v.text() + "'" : "a " + v.kind().name().toLowerCase();
+            throw new InstrumentFileException(file, v.line(), field(key), "expected " + expected + ", got " + got);
         }
         return v;
     }
@@ -98,7 +98,8 @@ final class DescriptionSection {
             x = null; // a YAML float such as .inf or .nan
         }
         if (x == null) {
-            throw new InstrumentFileException(file, v.line(), field(key), "expected " + expected + ", got '" + v.text() + "'");
+            throw new InstrumentFileException(file, v.line(), field(key), "expected " + expected + ", got '" + v.text()
+                    + "'");
         }
         if (whole && x.stripTrailingZeros().scale() > 0 || !range.holds(x.doubleValue())) {
             throw new InstrumentFileException(file, v.line(), field(key), "must be " + expected + ", got " + v.text());

@@ -33,7 +33,10 @@ public record GroundInstrument(int id, String name, String description, String s
         return gains.fullScaleAmps(r) / adc.spanCounts();
     }
 
-    /** The current of an ADC value on range {@code r}: (ADC − pedestal) × LSB_r, amperes; negative below the pedestal. */
+    /**
+     * The current of an ADC value on range {@code r}: (ADC − pedestal) × LSB_r, amperes;
+     * negative below the pedestal.
+     */
     public double amps(int adcCounts, int r) {
         return (adcCounts - adc.pedestalCounts()) * lsbAmps(r);
     }

@@ -33,8 +33,8 @@ public final class InstrumentReader {
             "gainError", "offsetVolts", "slewVoltsPerMs", "settleTauMicros", "monitorNoiseVoltsRms",
             "settledToleranceCodes", "modulationPeriodMicros");
     static final List<String> WINDOWS = List.of("count", "spacing", "lowVolts", "highVolts");
-    static final List<String> PREAMP = List.of("ranges", "rangeRatio", "fullScaleRange0PicoAmps", "outputFullScaleVolts",
-            "bandwidthHz", "temperatureK", "noiseCountsPerQuadrant");
+    static final List<String> PREAMP = List.of("ranges", "rangeRatio", "fullScaleRange0PicoAmps",
+            "outputFullScaleVolts", "bandwidthHz", "temperatureK", "noiseCountsPerQuadrant");
     static final List<String> ADC = List.of("bits", "pedestalCounts");
     static final List<String> CADENCE = List.of("integrationPeriods", "fixedSettleMicros", "settleMicrosPerCode");
 
@@ -77,7 +77,8 @@ public final class InstrumentReader {
         AdcFormat adc = adc(top.section("adc", ADC));
         cadence(top.section("cadence", CADENCE), modulator, slewVoltsPerMs, settleTauMicros);
         if (top.has("sweep")) {
-            SweepDefaults.check(top.section("sweep", SweepDefaults.KEYS), windows.windows(), modulator, slewVoltsPerMs, settleTauMicros);
+            SweepDefaults.check(top.section("sweep", SweepDefaults.KEYS), windows.windows(), modulator, slewVoltsPerMs,
+                    settleTauMicros);
         }
         return new GroundInstrument(id, name, description, source, geometry, modulator, windows, gains, adc);
     }
@@ -99,8 +100,8 @@ public final class InstrumentReader {
         Geometry geo = area ? Geometry.fromArea(size, distanceMm, collectorMm, grids, transparency)
                 : Geometry.fromRadius(size, distanceMm, collectorMm, grids, transparency);
         if (geo.collectorRadiusM() < geo.apertureRadiusM()) {
-            throw g.fail("collectorRadiusMm", "must be >= the aperture radius R = "
-                    + String.format("%.4f", geo.apertureRadiusM() / Geometry.M_PER_MM) + " mm, got " + NumberRange.number(collectorMm));
+            throw g.fail("collectorRadiusMm", "must be >= the aperture radius R = " + String.format("%.4f",
+                    geo.apertureRadiusM() / Geometry.M_PER_MM) + " mm, got " + NumberRange.number(collectorMm));
         }
         return geo;
     }
@@ -127,13 +128,15 @@ public final class InstrumentReader {
         double low = w.number("lowVolts", NumberRange.closed(mod.minVolts(), mod.maxVolts()));
         double high = w.number("highVolts", NumberRange.closed(mod.minVolts(), mod.maxVolts()));
         if (!(high > low)) {
-            throw w.fail("highVolts", "must be above lowVolts " + NumberRange.number(low) + ", got " + NumberRange.number(high));
+            throw w.fail("highVolts", "must be above lowVolts " + NumberRange.number(low) + ", got "
+                    + NumberRange.number(high));
         }
         DefaultWindowTable t = new DefaultWindowTable(count, low, high, mod.calibration());
         for (int k = 0; k < count; k++) {
             if (t.edgeCode(k + 1) <= t.edgeCode(k)) {
                 throw w.fail("count", "window " + k + " rounds to no width: edges " + k + " and " + (k + 1)
-                        + " are both DAC code " + t.edgeCode(k) + " (a table must rise, commands.md §4.2 NOT_MONOTONIC)");
+                        + " are both DAC code " + t.edgeCode(k)
+                        + " (a table must rise, commands.md §4.2 NOT_MONOTONIC)");
             }
         }
         return t;
@@ -167,7 +170,7 @@ public final class InstrumentReader {
 
     private static void cadence(DescriptionSection c, Modulator mod, double slewVoltsPerMs, double tauMicros) {
         c.whole("integrationPeriods", 1, 1000);
-        c.number("fixedSettleMicros", NumberRange.atLeast(5 * tauMicros));
-        c.number("settleMicrosPerCode", NumberRange.atLeast(mod.calibration().nominalMillivoltsPerCode() / slewVoltsPerMs));
+        c.number("fixedSettleMicros", SweepDefaults.fixedSettle(tauMicros));
+        c.number("settleMicrosPerCode", SweepDefaults.settlePerCode(mod, slewVoltsPerMs));
     }
 }

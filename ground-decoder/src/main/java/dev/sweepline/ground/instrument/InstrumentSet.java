@@ -23,7 +23,8 @@ public final class InstrumentSet {
             GroundInstrument sameId = byId.putIfAbsent(i.id(), i);
             if (sameId != null) {
                 throw new IllegalArgumentException("instruments " + sameId.name() + " (" + sameId.source() + ") and "
-                        + i.name() + " (" + i.source() + ") share id " + i.id() + ": telemetry could not tell them apart");
+                        + i.name() + " (" + i.source() + ") share id " + i.id()
+                        + ": telemetry could not tell them apart");
             }
             GroundInstrument sameName = names.putIfAbsent(i.name(), i);
             if (sameName != null) {

@@ -33,7 +33,8 @@ final class LocatedYaml {
         try (JsonParser p = FACTORY.createParser(in)) {
             JsonToken t = p.nextToken();
             if (t == null) {
-                throw new InstrumentFileException(file, 0, "", "empty file: expected a mapping of the keys of FORMAT.md");
+                throw new InstrumentFileException(file, 0, "", "empty file: expected a mapping of the keys of "
+                        + "FORMAT.md");
             }
             if (t != JsonToken.START_OBJECT) {
                 throw new InstrumentFileException(file, line(p), "", "expected a mapping of the keys of FORMAT.md");

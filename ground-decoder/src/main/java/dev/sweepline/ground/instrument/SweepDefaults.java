@@ -14,8 +14,18 @@ import java.util.List;
 final class SweepDefaults {
     /** The keys of {@code sweep} (FORMAT.md; the campaign grid keys of hw-sim's campaigns FORMAT.md and three more). */
     static final List<String> KEYS = List.of("integrationPeriods", "halfWidthPerFwhm", "minHalfWidthWindows",
-            "maxBandWindows", "resurveyEvery", "collapseFraction", "jumpWindows", "edgeSearchWindows", "fixedSettleMicros",
-            "settleMicrosPerCode", "edgeWindows", "gainUpFraction", "gainDownFraction");
+            "maxBandWindows", "resurveyEvery", "collapseFraction", "jumpWindows", "edgeSearchWindows",
+            "fixedSettleMicros", "settleMicrosPerCode", "edgeWindows", "gainUpFraction", "gainDownFraction");
+
+    /** The shortest fixed settle the flight software accepts: 5 × settleTauMicros (FORMAT.md, derived values). */
+    static NumberRange fixedSettle(double tauMicros) {
+        return NumberRange.atLeast(5 * tauMicros);
+    }
+
+    /** The shortest settle per code of rail change: nominal scale / slew, µs (FORMAT.md, derived values). */
+    static NumberRange settlePerCode(Modulator mod, double slewVoltsPerMs) {
+        return NumberRange.atLeast(mod.calibration().nominalMillivoltsPerCode() / slewVoltsPerMs);
+    }
 
     private SweepDefaults() {
     }
@@ -42,10 +52,10 @@ final class SweepDefaults {
             }
         }
         if (s.has("fixedSettleMicros")) {
-            s.number("fixedSettleMicros", NumberRange.atLeast(5 * tauMicros));
+            s.number("fixedSettleMicros", fixedSettle(tauMicros));
         }
         if (s.has("settleMicrosPerCode")) {
-            s.number("settleMicrosPerCode", NumberRange.atLeast(mod.calibration().nominalMillivoltsPerCode() / slewVoltsPerMs));
+            s.number("settleMicrosPerCode", settlePerCode(mod, slewVoltsPerMs));
         }
     }
 }

@@ -43,7 +43,8 @@ final class YamlNode {
     }
 
     /** A mapping of {@code entries} whose keys start on {@code keyLines}. */
-    static YamlNode mapping(int line, LinkedHashMap<String, YamlNode> entries, LinkedHashMap<String, Integer> keyLines) {
+    static YamlNode mapping(int line, LinkedHashMap<String, YamlNode> entries,
+            LinkedHashMap<String, Integer> keyLines) {
         return new YamlNode(Kind.MAPPING, line, "", false, Collections.unmodifiableMap(entries),
                 Collections.unmodifiableMap(keyLines));
     }

@@ -24,7 +24,8 @@ public final class SpectrumFitPlot {
      * PNG of the spectrum, its fit and residuals; {@code title} names the spectrum, currents below
      * {@code floorAmps} are drawn at it on the log axis.
      */
-    public static byte[] render(SpectrumInput in, PlasmaFit fit, String title, double floorAmps, int width, int height) {
+    public static byte[] render(SpectrumInput in, PlasmaFit fit, String title, double floorAmps, int width,
+            int height) {
         int m = in.windows();
         PlasmaModel model = new PlasmaModel(in.lowVolts(), in.highVolts(), fit.areaM2(), fit.alphasFitted());
         double[] total = new double[m];

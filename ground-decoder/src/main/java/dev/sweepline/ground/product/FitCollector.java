@@ -125,7 +125,8 @@ public final class FitCollector implements DecodeListener {
     /** Spectrogram rows so far of {@link #spectrogramInstrument()} (none before the first spectrum). */
     public SpectrogramData spectrogram() {
         GroundInstrument i = spectrogramInstrument();
-        return new SpectrogramData(i == null ? List.of() : Collections.unmodifiableList(spectrograms.get(i.id()).rows()));
+        return new SpectrogramData(i == null ? List.of()
+                : Collections.unmodifiableList(spectrograms.get(i.id()).rows()));
     }
 
     /** Spectra of instruments other than {@link #spectrogramInstrument()}, which its spectrogram leaves out. */

@@ -100,7 +100,8 @@ final class QuickLook {
                         : s.firstTime().isoTai() + " .. " + s.lastTime().isoTai() + " TAI ("
                         + num(rates.spanSeconds(), "%.1f") + " s)"),
                 row("spectra", s.spectraSurvey() + " survey, " + s.spectraFocus() + " focus"),
-                row("spectra by instrument", s.spectraByInstrument().isEmpty() ? "none" : s.spectraByInstrument().toString()),
+                row("spectra by instrument",
+                        s.spectraByInstrument().isEmpty() ? "none" : s.spectraByInstrument().toString()),
                 row("housekeeping / events", s.housekeeping() + " / " + s.events())));
         List<List<String>> frames = new ArrayList<>();
         frames.add(row("good frames", Long.toString(s.framesGood()) + " (" + s.framesIdle() + " idle)"));
@@ -148,9 +149,10 @@ final class QuickLook {
                 List.of(medians(collector.records())));
         q.heading("Plots");
         GroundInstrument si = collector.spectrogramInstrument();
+        int others = collector.spectraNotInSpectrogram();
         q.image("spectrogram", plots.spectrogram(), "Spectrogram: time x E/q window, colour = log10 summed current"
-                + (si == null ? "." : ", on the windows of " + si.label() + (collector.spectraNotInSpectrogram() == 0 ? "."
-                        : "; " + collector.spectraNotInSpectrogram() + " spectra of other instruments not shown.")));
+                + (si == null ? "." : ", on the windows of " + si.label()
+                        + (others == 0 ? "." : "; " + others + " spectra of other instruments not shown.")));
         q.image("moments", plots.moments(), "Proton moments, flow angle and alpha abundance with 1-sigma fit errors.");
         q.image("spectrum fit", plots.spectrumFit(), "One spectrum with its fit (protons, alphas) and residuals.");
         return q.toBytes();

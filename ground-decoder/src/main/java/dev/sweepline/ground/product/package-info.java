@@ -13,7 +13,8 @@
  * moments.csv and moments.json name each row's instrument; summary.json counts the spectra by instrument.
  * The spectrogram is drawn on the default-table E/q windows of the instrument with the most spectra (the
  * report says so and how many spectra of other instruments it leaves out); plot floors are a tenth of one
- * count of the instrument's most sensitive range. Values not available are NaN in the records and become an empty CSV cell
+ * count of the instrument's most sensitive range. Values not available are NaN in the records and become an
+ * empty CSV cell
  * or JSON null: no product carries NaN or Infinity. Bits per second are packet octets × 8 over the time
  * span of the decoded packets, per APID, and frames × (L + 4 ASM) × 8 for the downlink.
  *

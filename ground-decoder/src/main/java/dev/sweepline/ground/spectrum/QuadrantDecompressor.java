@@ -55,7 +55,7 @@ public interface QuadrantDecompressor {
      */
     int decode(byte[] in, int off, int len, int sampleCount, int sampleBits, int[] out);
 
-    /** Decodes 16-bit samples, the width of layout-1 spectra (as {@link #decode(byte[], int, int, int, int, int[])}). */
+    /** Decodes 16-bit samples, the width of layout-1 spectra (else as the method above). */
     default int decode(byte[] in, int off, int len, int sampleCount, int[] out) {
         return decode(in, off, len, sampleCount, LAYOUT_1_SAMPLE_BITS, out);
     }

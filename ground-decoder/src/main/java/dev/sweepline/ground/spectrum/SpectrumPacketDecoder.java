@@ -40,7 +40,11 @@ public final class SpectrumPacketDecoder {
     private final InstrumentSet instruments;
     private final int[] scratch = new int[QuadrantDecompressor.paddedCount(MAX_WINDOWS)];
 
-    /** @param ccsds121 decoder for compression 0x01 ({@link QuadrantDecompressor#UNAVAILABLE} if none); every built-in instrument */
+    /**
+     * A decoder for every built-in instrument.
+     *
+     * @param ccsds121 decoder for compression 0x01 ({@link QuadrantDecompressor#UNAVAILABLE} if none)
+     */
     public SpectrumPacketDecoder(QuadrantDecompressor ccsds121) {
         this(ccsds121, new WindowCatalogue());
     }
@@ -78,7 +82,8 @@ public final class SpectrumPacketDecoder {
         }
         int fixed = SpectrumHeader.octetsOf(pkt[u] & 0xFF);
         if (fixed < 0) {
-            return SpectrumResult.fail(SpectrumError.UNKNOWN_LAYOUT, String.format("first octet 0x%02X", pkt[u] & 0xFF));
+            return SpectrumResult.fail(SpectrumError.UNKNOWN_LAYOUT,
+                    String.format("first octet 0x%02X", pkt[u] & 0xFF));
         }
         if (end - u < fixed) {
             return SpectrumResult.fail(SpectrumError.LENGTH_BEYOND_DATA, "packet of " + len + " octets");
@@ -89,14 +94,16 @@ public final class SpectrumPacketDecoder {
             return SpectrumResult.fail(SpectrumError.UNKNOWN_INSTRUMENT, h.layout() == 1
                     ? "layout 1 is the demo cup's and the ground has no demo-cup description (it has "
                             + instruments.labels() + ")"
-                    : "instrument id " + h.instrumentId() + ": no description (the ground has " + instruments.labels() + ")");
+                    : "instrument id " + h.instrumentId() + ": no description (the ground has "
+                            + instruments.labels() + ")");
         }
         if (h.sampleBits() != instrument.sampleBits()) {
             return SpectrumResult.fail(SpectrumError.SAMPLE_WIDTH_MISMATCH, "instrument " + instrument.label()
                     + ": samples of " + h.sampleBits() + " bits, its description's ADC has " + instrument.sampleBits());
         }
         if (h.mode() != (apid == APID_SURVEY ? DecodedSpectrum.MODE_SURVEY : DecodedSpectrum.MODE_FOCUS)) {
-            return SpectrumResult.fail(SpectrumError.BAD_MODE, "mode " + h.mode() + " on APID " + Integer.toHexString(apid));
+            return SpectrumResult.fail(SpectrumError.BAD_MODE, "mode " + h.mode() + " on APID "
+                    + Integer.toHexString(apid));
         }
         if (h.windowCount() < 1 || h.windowCount() > MAX_WINDOWS) {
             return SpectrumResult.fail(SpectrumError.BAD_WINDOW_COUNT, "c = " + h.windowCount());
@@ -153,8 +160,9 @@ public final class SpectrumPacketDecoder {
         if (p != end) {
             return SpectrumResult.fail(SpectrumError.TRAILING_OCTETS, (end - p) + " octets");
         }
-        return SpectrumResult.ok(build(CucTime.read(pkt, off + SpacePacketHeader.OCTETS), SpacePacketHeader.apid(pkt, off),
-                SpacePacketHeader.sequenceCount(pkt, off), h, instrument, compression, gain, sat, adc));
+        return SpectrumResult.ok(build(CucTime.read(pkt, off + SpacePacketHeader.OCTETS),
+                SpacePacketHeader.apid(pkt, off), SpacePacketHeader.sequenceCount(pkt, off), h, instrument, compression,
+                gain, sat, adc));
     }
 
     /** The spectrum error of a quadrant decoder's error code. */

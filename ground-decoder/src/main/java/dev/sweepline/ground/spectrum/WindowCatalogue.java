@@ -74,12 +74,12 @@ public final class WindowCatalogue {
         }
     }
 
-    /** Calibrated low edge of window {@code w} of table {@code tableId} on {@code instrument}, volts; NaN when unknown. */
+    /** Calibrated low edge of window {@code w} of table {@code tableId} on {@code instrument}, V; NaN if unknown. */
     public double lowVolts(GroundInstrument instrument, int tableId, int w) {
         return edge(instrument, tableId, w, 0);
     }
 
-    /** Calibrated high edge of window {@code w} of table {@code tableId} on {@code instrument}, volts; NaN when unknown. */
+    /** Calibrated high edge of window {@code w} of table {@code tableId} on {@code instrument}, V; NaN if unknown. */
     public double highVolts(GroundInstrument instrument, int tableId, int w) {
         return edge(instrument, tableId, w, 1);
     }
