@@ -14,9 +14,13 @@ package dev.sweepline.ground.instrument;
  */
 public record GainRanges(int ranges, int rangeRatio, double fullScaleRange0Amps, double outputFullScaleVolts,
         double bandwidthHz, double temperatureK, int noiseCountsPerQuadrant) {
-    /** Full scale of range {@code r} (0 .. ranges − 1): FS₀ × ratio^r, A. */
+    /** Full scale of range {@code r} (0 .. ranges − 1): FS₀ × ratio^r, A (ratio^r ≤ 1024³ is a whole number, exact). */
     public double fullScaleAmps(int r) {
-        return fullScaleRange0Amps * Math.pow(rangeRatio, r);
+        long factor = 1;
+        for (int k = 0; k < r; k++) {
+            factor *= rangeRatio;
+        }
+        return fullScaleRange0Amps * factor;
     }
 
     /** Feedback resistor of range {@code r}: outputFullScaleVolts / FS_r, Ω. */

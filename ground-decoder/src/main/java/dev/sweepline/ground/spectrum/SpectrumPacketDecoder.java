@@ -181,12 +181,15 @@ public final class SpectrumPacketDecoder {
         double[] total = new double[c];
         double[] low = new double[c];
         double[] high = new double[c];
+        double[] lsb = new double[instrument.gains().ranges()];
+        for (int r = 0; r < lsb.length; r++) {
+            lsb[r] = instrument.lsbAmps(r); // GroundInstrument.amps, one LSB per range and spectrum
+        }
+        int pedestal = instrument.adc().pedestalCounts();
         for (int i = 0; i < c; i++) {
-            double lsb = instrument.lsbAmps(gain[i]);
-            int pedestal = instrument.adc().pedestalCounts();
             double sum = 0;
             for (int q = 0; q < DecodedSpectrum.QUADRANTS; q++) {
-                double a = (adc[q][i] - pedestal) * lsb;
+                double a = (adc[q][i] - pedestal) * lsb[gain[i]];
                 amps[q][i] = a;
                 sum += a;
             }
