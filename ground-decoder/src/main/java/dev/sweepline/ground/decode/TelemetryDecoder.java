@@ -5,6 +5,7 @@ import dev.sweepline.ground.frame.FrameListener;
 import dev.sweepline.ground.frame.FrameReason;
 import dev.sweepline.ground.frame.FrameSynchroniser;
 import dev.sweepline.ground.frame.TmFrameHeader;
+import dev.sweepline.ground.instrument.InstrumentSet;
 import dev.sweepline.ground.packet.FrameDrop;
 import dev.sweepline.ground.packet.PacketAnomaly;
 import dev.sweepline.ground.packet.PacketListener;
@@ -31,6 +32,7 @@ public final class TelemetryDecoder {
     /** VC of each APID's last packet, -1 before its first: a VC restart restarts its APIDs' counts. */
     private final int[] vcOfApid = new int[SpacePacketHeader.IDLE_APID + 1];
     private final SpectrumPacketDecoder spectra;
+    private final InstrumentSet instruments;
 
     /**
      * @param config   frame length, SCID and the instrument descriptions
@@ -45,7 +47,8 @@ public final class TelemetryDecoder {
     public TelemetryDecoder(DecoderConfig config, QuadrantDecompressor ccsds121, WindowCatalogue windows,
             DecodeListener listener) {
         this.listener = listener;
-        this.spectra = new SpectrumPacketDecoder(ccsds121, windows, config.instruments());
+        this.instruments = config.instruments();
+        this.spectra = new SpectrumPacketDecoder(ccsds121, windows, instruments);
         this.demux = new VirtualChannelDemux(new Packets());
         this.sync = new FrameSynchroniser(config.frameOctets(), config.scid(), new Frames());
         java.util.Arrays.fill(vcOfApid, -1);
@@ -60,6 +63,11 @@ public final class TelemetryDecoder {
     public void finish() {
         sync.finish();
         demux.finish();
+    }
+
+    /** The instrument descriptions spectra are decoded with. */
+    public InstrumentSet instruments() {
+        return instruments;
     }
 
     /** The counts so far. */
