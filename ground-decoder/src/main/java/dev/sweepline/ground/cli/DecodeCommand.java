@@ -1,7 +1,6 @@
 package dev.sweepline.ground.cli;
 
 import dev.sweepline.ground.decode.DecoderConfig;
-import dev.sweepline.ground.instrument.InstrumentFileException;
 import dev.sweepline.ground.product.GroundProcessing;
 import dev.sweepline.ground.product.GroundProducts;
 import dev.sweepline.ground.spectrum.WindowCatalogue;
@@ -56,11 +55,8 @@ final class DecodeCommand implements Callable<Integer> {
             spec.commandLine().getErr().println("cannot read " + input);
             return ExitCodes.UNREADABLE_INPUT;
         }
-        DecoderConfig config;
-        try {
-            config = options.config();
-        } catch (InstrumentFileException | IllegalArgumentException e) {
-            spec.commandLine().getErr().println(e.getMessage());
+        DecoderConfig config = options.configOrNull(spec.commandLine().getErr());
+        if (config == null) {
             return ExitCodes.UNREADABLE_INPUT;
         }
         try {

@@ -2,7 +2,6 @@ package dev.sweepline.ground.cli;
 
 import dev.sweepline.ground.decode.DecodeStats;
 import dev.sweepline.ground.decode.DecoderConfig;
-import dev.sweepline.ground.instrument.InstrumentFileException;
 import dev.sweepline.ground.decode.TelemetryDecoder;
 import dev.sweepline.ground.spectrum.Ccsds121QuadrantDecoder;
 import java.io.IOException;
@@ -39,11 +38,8 @@ final class InspectCommand implements Callable<Integer> {
             spec.commandLine().getErr().println("cannot read " + input);
             return ExitCodes.UNREADABLE_INPUT;
         }
-        DecoderConfig config;
-        try {
-            config = options.config();
-        } catch (InstrumentFileException | IllegalArgumentException e) {
-            spec.commandLine().getErr().println(e.getMessage());
+        DecoderConfig config = options.configOrNull(spec.commandLine().getErr());
+        if (config == null) {
             return ExitCodes.UNREADABLE_INPUT;
         }
         TelemetryDecoder d = new TelemetryDecoder(config, new Ccsds121QuadrantDecoder(), new InspectListing(out));

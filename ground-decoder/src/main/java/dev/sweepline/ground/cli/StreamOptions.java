@@ -3,7 +3,9 @@ package dev.sweepline.ground.cli;
 import dev.sweepline.ground.decode.DecoderConfig;
 import dev.sweepline.ground.frame.FrameConstants;
 import dev.sweepline.ground.frame.FrameSynchroniser;
+import dev.sweepline.ground.instrument.InstrumentFileException;
 import dev.sweepline.ground.instrument.InstrumentSet;
+import java.io.PrintWriter;
 import java.util.ArrayList;
 import java.util.List;
 import picocli.CommandLine.Option;
@@ -24,6 +26,19 @@ final class StreamOptions {
                     + "(FORMAT.md; a built-in name wins, write ./NAME for a file of that name); repeatable. "
                     + "Default: every built-in.")
     List<String> instruments = new ArrayList<>();
+
+    /**
+     * The configuration the options give, or null after writing to {@code err} why there is none (a broken
+     * or missing description, two descriptions of one id, a bad frame length).
+     */
+    DecoderConfig configOrNull(PrintWriter err) {
+        try {
+            return config();
+        } catch (InstrumentFileException | IllegalArgumentException e) {
+            err.println(e.getMessage());
+            return null;
+        }
+    }
 
     /**
      * The configuration the options give.
