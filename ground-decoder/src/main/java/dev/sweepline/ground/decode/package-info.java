@@ -30,7 +30,10 @@
  *       its injection test.</li>
  *   <li>D3 throughput: {@code FrameDecodeBenchmark} (src/jmh), 1024-octet frames carrying raw survey
  *       spectra of 128 windows, whole chain: 32.3 ± 4.6 ms per 8.42 MB, about 260 MB/s of frames on the
- *       shared 2-core machine (target 200 MB/s).</li>
+ *       shared 2-core machine (target 200 MB/s), measured before spectrum layout 2. The layout-2 code was run
+ *       side by side with the code before it under a load of 4 to 6 on the 2 cores: 66 vs 57, 79 vs 78 and
+ *       86 vs 79 ms per op, with errors of 30 to 110 ms, so no difference the load lets one see; not yet
+ *       measured again on a quiet machine.</li>
  *   <li>D4 command reports decode field by field and through the whole chain ({@code CommandRecordDecodeTest}).</li>
  *   <li>D5 spectra of an instrument the ground has no description for, or of another sample width than its
  *       description's ADC, are refused each with its own reason and counted, and the good spectra after them
