@@ -68,9 +68,18 @@ public final class WindowCatalogue {
      * window is not known): one lookup per spectrum.
      */
     public void edges(GroundInstrument instrument, int tableId, int first, int count, double[] low, double[] high) {
+        if (tableId == DefaultWindowTable.TABLE_ID) {
+            DefaultWindowTable t = instrument.windows();
+            for (int i = 0; i < count; i++) {
+                low[i] = t.lowVolts(first + i);
+                high[i] = t.highVolts(first + i);
+            }
+            return;
+        }
+        int[][] codes = uplinked.get(tableId);
         for (int i = 0; i < count; i++) {
-            low[i] = lowVolts(instrument, tableId, first + i);
-            high[i] = highVolts(instrument, tableId, first + i);
+            low[i] = volts(instrument.calibration(), codes, 0, first + i);
+            high[i] = volts(instrument.calibration(), codes, 1, first + i);
         }
     }
 
@@ -104,11 +113,11 @@ public final class WindowCatalogue {
             DefaultWindowTable t = instrument.windows();
             return side == 0 ? t.lowVolts(w) : t.highVolts(w);
         }
-        int[][] codes = uplinked.get(tableId);
-        if (codes == null || w < 0 || w >= codes[side].length) {
-            return Double.NaN;
-        }
-        HvCalibration cal = instrument.calibration();
-        return cal.volts(codes[side][w]);
+        return volts(instrument.calibration(), uplinked.get(tableId), side, w);
+    }
+
+    /** Calibrated edge {@code side} (0 low, 1 high) of window {@code w} of an image's codes; NaN when unknown. */
+    private static double volts(HvCalibration cal, int[][] codes, int side, int w) {
+        return codes == null || w < 0 || w >= codes[side].length ? Double.NaN : cal.volts(codes[side][w]);
     }
 }
