@@ -1,5 +1,6 @@
 package dev.sweepline.ground.cli;
 
+import dev.sweepline.ground.decode.DecoderConfig;
 import dev.sweepline.ground.product.GroundProcessing;
 import dev.sweepline.ground.product.GroundProducts;
 import dev.sweepline.ground.spectrum.WindowCatalogue;
@@ -19,8 +20,9 @@ import picocli.CommandLine.Spec;
 import picocli.CommandLine.Model.CommandSpec;
 
 /**
- * {@code decode FILE --out DIR [--allocation BITS_PER_S]}: writes DIR/spectra.csv, summary.json,
- * moments.csv, moments.json, the plots and report.html ({@link GroundProcessing}).
+ * {@code decode FILE --out DIR [--instrument NAME|FILE]... [--table IMAGE]... [--allocation BITS_PER_S]}:
+ * writes DIR/spectra.csv, summary.json, moments.csv, moments.json, the plots and report.html
+ * ({@link GroundProcessing}), each spectrum with the description of the instrument it names.
  */
 @Command(name = "decode", mixinStandardHelpOptions = true,
         description = "Decodes a file of ASM + TM frames, fits every spectrum and writes DIR/spectra.csv, "
@@ -53,6 +55,10 @@ final class DecodeCommand implements Callable<Integer> {
             spec.commandLine().getErr().println("cannot read " + input);
             return ExitCodes.UNREADABLE_INPUT;
         }
+        DecoderConfig config = options.configOrNull(spec.commandLine().getErr());
+        if (config == null) {
+            return ExitCodes.UNREADABLE_INPUT;
+        }
         try {
             Files.createDirectories(out);
         } catch (IOException e) {
@@ -64,12 +70,12 @@ final class DecodeCommand implements Callable<Integer> {
             WindowCatalogue windows = new WindowCatalogue();
             for (Path t : tables) {
                 if (windows.add(Files.readAllBytes(t)) < 0) {
-                    System.err.println(t + ": not an intact table image");
+                    spec.commandLine().getErr().println(t + ": not an intact table image");
                     return ExitCodes.UNREADABLE_INPUT;
                 }
             }
             p = GroundProcessing.process(input, out,
-                    allocation == null ? OptionalDouble.empty() : OptionalDouble.of(allocation), options.config(),
+                    allocation == null ? OptionalDouble.empty() : OptionalDouble.of(allocation), config,
                     windows);
         } catch (NoSuchFileException e) {
             spec.commandLine().getErr().println("cannot read " + input + ": " + e.getMessage());

@@ -4,13 +4,14 @@ import picocli.CommandLine;
 import picocli.CommandLine.Command;
 
 /**
- * Command-line entry point of the ground decoder jar: {@code decode FILE --out DIR} and
- * {@code inspect FILE}. Exit status: 0 when the input was read (bad frames included), 2 for an unreadable
+ * Command-line entry point of the ground decoder jar: {@code decode FILE --out DIR},
+ * {@code inspect FILE} and {@code instruments}. Exit status: 0 when the input was read (bad frames
+ * included), 2 for an unreadable
  * input or bad usage, 1 when the products cannot be written.
  */
 @Command(name = "sweepline-ground", mixinStandardHelpOptions = true, version = "sweepline-ground 0.1.0",
         description = "Decodes TM frames of the telemetry ICD into spectra and reports.",
-        subcommands = {DecodeCommand.class, InspectCommand.class})
+        subcommands = {DecodeCommand.class, InspectCommand.class, InstrumentsCommand.class})
 public final class GroundMain implements Runnable {
     @CommandLine.Spec
     CommandLine.Model.CommandSpec spec;

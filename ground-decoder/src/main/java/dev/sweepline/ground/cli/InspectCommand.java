@@ -1,6 +1,7 @@
 package dev.sweepline.ground.cli;
 
 import dev.sweepline.ground.decode.DecodeStats;
+import dev.sweepline.ground.decode.DecoderConfig;
 import dev.sweepline.ground.decode.TelemetryDecoder;
 import dev.sweepline.ground.spectrum.Ccsds121QuadrantDecoder;
 import java.io.IOException;
@@ -14,7 +15,10 @@ import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
 import picocli.CommandLine.Model.CommandSpec;
 
-/** {@code inspect FILE}: a per-frame / per-packet listing on standard output. */
+/**
+ * {@code inspect FILE [--instrument NAME|FILE]...}: a per-frame / per-packet listing on standard output;
+ * spectrum lines show the layout, instrument id and sample width.
+ */
 @Command(name = "inspect", mixinStandardHelpOptions = true,
         description = "Lists every frame, reject, packet and decoded record of a file of ASM + TM frames.")
 final class InspectCommand implements Callable<Integer> {
@@ -34,7 +38,11 @@ final class InspectCommand implements Callable<Integer> {
             spec.commandLine().getErr().println("cannot read " + input);
             return ExitCodes.UNREADABLE_INPUT;
         }
-        TelemetryDecoder d = new TelemetryDecoder(options.config(), new Ccsds121QuadrantDecoder(), new InspectListing(out));
+        DecoderConfig config = options.configOrNull(spec.commandLine().getErr());
+        if (config == null) {
+            return ExitCodes.UNREADABLE_INPUT;
+        }
+        TelemetryDecoder d = new TelemetryDecoder(config, new Ccsds121QuadrantDecoder(), new InspectListing(out));
         try {
             StreamReader.feed(input, d);
         } catch (IOException e) {

@@ -75,9 +75,11 @@ final class InspectListing implements DecodeListener {
 
     @Override
     public void onSpectrum(DecodedSpectrum s) {
-        out.printf("    spectrum %s sweep=%d windows %d..%d peak=%s compression=%d%n", s.modeName(), s.sweep(),
-                s.firstWindow(), s.firstWindow() + s.windowCount() - 1,
-                s.hasPeak() ? String.format("%.3f", s.peakWindow()) : "none", s.compression());
+        out.printf("    spectrum %s sweep=%d windows %d..%d peak=%s compression=%d instrument=%d (%s) w=%d layout=%d "
+                        + "table=0x%04X%s%n", s.modeName(), s.sweep(), s.firstWindow(),
+                s.firstWindow() + s.windowCount() - 1, s.hasPeak() ? String.format("%.3f", s.peakWindow()) : "none",
+                s.compression(), s.instrumentId(), s.instrument().name(), s.sampleBits(), s.layoutVersion(),
+                s.tableId(), s.tableChanged() ? " changed" : "");
     }
 
     @Override

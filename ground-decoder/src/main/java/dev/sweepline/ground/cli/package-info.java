@@ -3,7 +3,9 @@
  * [--allocation BITS_PER_S]} writes {@code spectra.csv} (one row per window per spectrum),
  * {@code summary.json} (counts, gaps, bits per APID, time span, fits), {@code moments.csv},
  * {@code moments.json}, three PNG plots and {@code report.html} through
- * {@link dev.sweepline.ground.product.GroundProcessing}; {@code inspect FILE} lists frames and packets.
+ * {@link dev.sweepline.ground.product.GroundProcessing}; {@code inspect FILE} lists frames and packets (spectra
+ * with their layout, instrument id and sample width); both take {@code --instrument NAME|FILE} (repeatable;
+ * default: every built-in). {@code instruments} lists the built-in descriptions.
  *
  * <h2>Design note</h2>
  * <p>Requirements and how each is verified ({@code DecodeCommandTest}, {@code InspectCommandTest}):
@@ -12,6 +14,9 @@
  *   <li>C2 bad frames are counted by reason in summary.json and do not change the exit status (0).</li>
  *   <li>C3 an unreadable input gives exit status 2 and no exception.</li>
  *   <li>C4 decode writes the moments, plots and report ({@code GroundProcessingTest}).</li>
+ *   <li>C5 {@code --instrument} takes a built-in or a file; a broken file stops the command with exit status 2
+ *       and its file, line and field; spectra of an instrument not given are refused and counted;
+ *       {@code instruments} lists the built-ins ({@code InstrumentOptionTest}).</li>
  * </ol>
  * <p>Compression 0x01 is decoded by {@link dev.sweepline.ground.spectrum.Ccsds121QuadrantDecoder}
  * (the module's own CCSDS 121.0-B decoder with the ICD's parameters).

@@ -42,6 +42,7 @@ public final class DecodeStats {
     long spectraSurvey;
     long spectraFocus;
     final EnumMap<SpectrumError, Long> spectrumErrors = new EnumMap<>(SpectrumError.class);
+    final Map<String, Long> spectraByInstrument = new java.util.TreeMap<>();
     long housekeeping;
     long events;
     final Map<String, Long> eventsByKind = new java.util.TreeMap<>();
@@ -206,6 +207,11 @@ public final class DecodeStats {
     /** Focus spectra decoded. */
     public long spectraFocus() {
         return spectraFocus;
+    }
+
+    /** Spectra decoded, by instrument name (sorted). */
+    public Map<String, Long> spectraByInstrument() {
+        return Collections.unmodifiableMap(spectraByInstrument);
     }
 
     /** Spectrum packets rejected, by error. */

@@ -1,5 +1,8 @@
 package dev.sweepline.ground.decode;
 
+import static dev.sweepline.ground.frame.BigEndian.u16;
+import static dev.sweepline.ground.frame.BigEndian.u32;
+
 import dev.sweepline.ground.packet.CucTime;
 import dev.sweepline.ground.packet.SpacePacketHeader;
 
@@ -14,14 +17,6 @@ public final class RecordPacketDecoder {
     private static final int USER_DATA_OFFSET = SpacePacketHeader.OCTETS + CucTime.OCTETS;
 
     private RecordPacketDecoder() {
-    }
-
-    private static int u16(byte[] b, int i) {
-        return ((b[i] & 0xFF) << 8) | (b[i + 1] & 0xFF);
-    }
-
-    private static long u32(byte[] b, int i) {
-        return ((long) u16(b, i) << 16) | u16(b, i + 2);
     }
 
     private static boolean shaped(byte[] b, int off, int len, int userOctets) {

@@ -5,6 +5,7 @@ import dev.sweepline.ground.frame.FrameListener;
 import dev.sweepline.ground.frame.FrameReason;
 import dev.sweepline.ground.frame.FrameSynchroniser;
 import dev.sweepline.ground.frame.TmFrameHeader;
+import dev.sweepline.ground.instrument.InstrumentSet;
 import dev.sweepline.ground.packet.FrameDrop;
 import dev.sweepline.ground.packet.PacketAnomaly;
 import dev.sweepline.ground.packet.PacketListener;
@@ -15,6 +16,7 @@ import dev.sweepline.ground.spectrum.DecodedSpectrum;
 import dev.sweepline.ground.spectrum.QuadrantDecompressor;
 import dev.sweepline.ground.spectrum.SpectrumPacketDecoder;
 import dev.sweepline.ground.spectrum.SpectrumResult;
+import dev.sweepline.ground.spectrum.WindowCatalogue;
 
 /**
  * The whole ground chain of the telemetry ICD: bytes → frames → packets → spectra, housekeeping and
@@ -30,21 +32,23 @@ public final class TelemetryDecoder {
     /** VC of each APID's last packet, -1 before its first: a VC restart restarts its APIDs' counts. */
     private final int[] vcOfApid = new int[SpacePacketHeader.IDLE_APID + 1];
     private final SpectrumPacketDecoder spectra;
+    private final InstrumentSet instruments;
 
     /**
-     * @param config   frame length and SCID
+     * @param config   frame length, SCID and the instrument descriptions
      * @param ccsds121 decoder for compression 0x01 ({@link QuadrantDecompressor#UNAVAILABLE} if none)
      * @param listener receives everything found
      */
     public TelemetryDecoder(DecoderConfig config, QuadrantDecompressor ccsds121, DecodeListener listener) {
-        this(config, ccsds121, new dev.sweepline.ground.spectrum.WindowCatalogue(), listener);
+        this(config, ccsds121, new WindowCatalogue(), listener);
     }
 
     /** As above, with the window tables of {@code windows} (uplinked tables by id). */
-    public TelemetryDecoder(DecoderConfig config, QuadrantDecompressor ccsds121,
-            dev.sweepline.ground.spectrum.WindowCatalogue windows, DecodeListener listener) {
+    public TelemetryDecoder(DecoderConfig config, QuadrantDecompressor ccsds121, WindowCatalogue windows,
+            DecodeListener listener) {
         this.listener = listener;
-        this.spectra = new SpectrumPacketDecoder(ccsds121, windows);
+        this.instruments = config.instruments();
+        this.spectra = new SpectrumPacketDecoder(ccsds121, windows, instruments);
         this.demux = new VirtualChannelDemux(new Packets());
         this.sync = new FrameSynchroniser(config.frameOctets(), config.scid(), new Frames());
         java.util.Arrays.fill(vcOfApid, -1);
@@ -59,6 +63,11 @@ public final class TelemetryDecoder {
     public void finish() {
         sync.finish();
         demux.finish();
+    }
+
+    /** The instrument descriptions spectra are decoded with. */
+    public InstrumentSet instruments() {
+        return instruments;
     }
 
     /** The counts so far. */
@@ -163,6 +172,7 @@ public final class TelemetryDecoder {
                 } else {
                     stats.spectraFocus++;
                 }
+                stats.spectraByInstrument.merge(s.instrument().name(), 1L, Long::sum);
                 stats.time(s.time());
                 listener.onSpectrum(s);
             } else {

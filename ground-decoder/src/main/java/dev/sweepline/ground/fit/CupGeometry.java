@@ -1,35 +1,56 @@
 package dev.sweepline.ground.fit;
 
+import dev.sweepline.ground.instrument.Geometry;
+import dev.sweepline.ground.instrument.GroundInstrument;
+
 /**
- * The demo cup's geometry for the ground (ICD §8) and the split-collector relations of physics.md:
- * a beam at angle θ shifts the aperture image by s = d tan θ; with u = s/R the two-half difference
- * ratio is D(u) = 1 − (2/π)[acos u − u√(1−u²)], so tan θ_x = (R/d)·D⁻¹(D_x).
+ * One cup's geometry as the fit uses it (from its description, telemetry ICD §8) and the
+ * split-collector relations of physics.md: a beam at angle θ shifts the aperture image by s = d tan θ;
+ * with u = s/R the two-half difference ratio is D(u) = 1 − (2/π)[acos u − u√(1−u²)], so
+ * tan θ_x = (R/d)·D⁻¹(D). The relations that hold for every cup are static. Immutable.
  */
 public final class CupGeometry {
-    /** Effective area at normal incidence, m²: 1.000 cm² (ICD §8). */
-    public static final double EFFECTIVE_AREA_M2 = 1.0e-4;
-    /** Transmission of the four grids, 0.90⁴ (ICD §8). */
-    public static final double GRID_TRANSMISSION = 0.6561;
-    /** Aperture radius R = √(A / (π × 0.6561)), m: 6.966 mm (ICD §8). */
-    public static final double APERTURE_RADIUS_M = Math.sqrt(EFFECTIVE_AREA_M2 / (Math.PI * GRID_TRANSMISSION));
-    /** Aperture-to-collector distance d, m: 15.0 mm (ICD §8). */
-    public static final double APERTURE_TO_COLLECTOR_M = 15.0e-3;
-    /** Collector radius, m: 12.5 mm (ICD §8). */
-    public static final double COLLECTOR_RADIUS_M = 12.5e-3;
-    /** tan θ up to which the image lies wholly on the collector: (12.5 − 6.966)/15 (ICD §8, θ = 20.25°). */
-    public static final double FULL_ACCEPTANCE_TAN = (COLLECTOR_RADIUS_M - APERTURE_RADIUS_M) / APERTURE_TO_COLLECTOR_M;
+    private final double effectiveAreaM2;
+    private final double apertureRadiusM;
+    private final double apertureToCollectorM;
+    private final double collectorRadiusM;
 
-    private CupGeometry() {
+    /** The geometry of a description. */
+    public CupGeometry(Geometry g) {
+        this.effectiveAreaM2 = g.effectiveAreaM2();
+        this.apertureRadiusM = g.apertureRadiusM();
+        this.apertureToCollectorM = g.apertureToCollectorM();
+        this.collectorRadiusM = g.collectorRadiusM();
+    }
+
+    /** The geometry of {@code instrument}. */
+    public static CupGeometry of(GroundInstrument instrument) {
+        return new CupGeometry(instrument.geometry());
+    }
+
+    /** Effective area at normal incidence, m². */
+    public double effectiveAreaM2() {
+        return effectiveAreaM2;
+    }
+
+    /** Aperture radius R, m. */
+    public double apertureRadiusM() {
+        return apertureRadiusM;
+    }
+
+    /** tan θ up to which the image lies wholly on the collector: (collector − R)/d (ICD §8). */
+    public double fullAcceptanceTan() {
+        return (collectorRadiusM - apertureRadiusM) / apertureToCollectorM;
     }
 
     /** Image shift in aperture radii, u = d tan θ / R. */
-    public static double shiftRadii(double tanTheta) {
-        return APERTURE_TO_COLLECTOR_M * tanTheta / APERTURE_RADIUS_M;
+    public double shiftRadii(double tanTheta) {
+        return apertureToCollectorM * tanTheta / apertureRadiusM;
     }
 
     /** tan θ of an image shift of u aperture radii. */
-    public static double tanOfShift(double u) {
-        return u * APERTURE_RADIUS_M / APERTURE_TO_COLLECTOR_M;
+    public double tanOfShift(double u) {
+        return u * apertureRadiusM / apertureToCollectorM;
     }
 
     /** Two-half difference ratio D(u), odd in u, ±1 beyond |u| = 1 (physics.md). */
@@ -66,12 +87,12 @@ public final class CupGeometry {
 
     /**
      * Acceptance A(θ)/A(0): the part of the aperture image (radius R, shifted by d·tan θ) that falls on
-     * the collector; 1 up to {@link #FULL_ACCEPTANCE_TAN}.
+     * the collector; 1 up to {@link #fullAcceptanceTan()}.
      */
-    public static double transmission(double tanX, double tanY) {
-        double s = APERTURE_TO_COLLECTOR_M * Math.hypot(tanX, tanY);
-        return DiscOverlap.twoDiscArea(APERTURE_RADIUS_M, COLLECTOR_RADIUS_M, s)
-                / (Math.PI * APERTURE_RADIUS_M * APERTURE_RADIUS_M);
+    public double transmission(double tanX, double tanY) {
+        double s = apertureToCollectorM * Math.hypot(tanX, tanY);
+        return DiscOverlap.twoDiscArea(apertureRadiusM, collectorRadiusM, s)
+                / (Math.PI * apertureRadiusM * apertureRadiusM);
     }
 
     /** cos θ of the flow from its two angle tangents: 1/√(1 + tan²θx + tan²θy) (ICD §8 angle convention). */
@@ -81,10 +102,10 @@ public final class CupGeometry {
 
     /**
      * Share of each quadrant Q1..Q4 of the current of a beam at (tan θx, tan θy): exact disc-quadrant
-     * overlap of the shifted image, times {@link #transmission} (beyond 20.25° the clipped part is taken
-     * evenly from the quadrants: an approximation).
+     * overlap of the shifted image, times {@link #transmission} (beyond full acceptance the clipped part
+     * is taken evenly from the quadrants: an approximation).
      */
-    public static void quadrantShares(double tanX, double tanY, double[] out) {
+    public void quadrantShares(double tanX, double tanY, double[] out) {
         DiscOverlap.quadrantFractions(shiftRadii(tanX), shiftRadii(tanY), out);
         double t = transmission(tanX, tanY);
         for (int q = 0; q < 4; q++) {

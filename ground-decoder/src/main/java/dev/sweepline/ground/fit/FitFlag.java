@@ -22,7 +22,10 @@ public enum FitFlag {
     SINGULAR_BOUND(false),
     /** No quadrant currents, or too little current to split: flow angles unset. */
     ANGLES_NOT_FITTED(false),
-    /** A difference ratio reached ±1 or the image left the collector (beyond 20.25°, ICD §8). */
+    /**
+     * A difference ratio reached ±1 or the image left the collector (beyond the cup's full acceptance:
+     * 20.25° for the demo cup, ICD §8).
+     */
     ANGLE_OUT_OF_RANGE(false);
 
     private final boolean failure;

@@ -16,8 +16,11 @@ public final class FlowAngleEstimator {
     private FlowAngleEstimator() {
     }
 
-    /** The angles, or {@link FlowAngles#NONE} when there are no quadrants or too little current. */
-    public static FlowAngles estimate(SpectrumInput in) {
+    /**
+     * The angles on a cup of geometry {@code cup}, or {@link FlowAngles#NONE} when there are no quadrants or
+     * too little current.
+     */
+    public static FlowAngles estimate(SpectrumInput in, CupGeometry cup) {
         if (!in.hasQuadrants() || in.windows() == 0) {
             return FlowAngles.NONE;
         }
@@ -48,21 +51,21 @@ public final class FlowAngleEstimator {
                 varY += (SIGN_Y[k] - dy) * (SIGN_Y[k] - dy) * s2;
             }
         }
-        return new FlowAngles(angle(dx), angle(dy), sigma(dx, Math.sqrt(varX) / total),
-                sigma(dy, Math.sqrt(varY) / total), dx, dy);
+        return new FlowAngles(angle(cup, dx), angle(cup, dy), sigma(cup, dx, Math.sqrt(varX) / total),
+                sigma(cup, dy, Math.sqrt(varY) / total), dx, dy);
     }
 
-    private static double angle(double ratio) {
-        return Math.atan(CupGeometry.tanOfShift(CupGeometry.inverseHalfDifference(ratio)));
+    private static double angle(CupGeometry cup, double ratio) {
+        return Math.atan(cup.tanOfShift(CupGeometry.inverseHalfDifference(ratio)));
     }
 
-    private static double sigma(double ratio, double sigmaRatio) {
+    private static double sigma(CupGeometry cup, double ratio, double sigmaRatio) {
         double u = CupGeometry.inverseHalfDifference(ratio);
         double slope = CupGeometry.halfDifferenceSlope(u);
         if (slope <= 0) {
             return Double.NaN;
         }
-        double t = CupGeometry.tanOfShift(u);
-        return CupGeometry.tanOfShift(sigmaRatio / slope) / (1 + t * t);
+        double t = cup.tanOfShift(u);
+        return cup.tanOfShift(sigmaRatio / slope) / (1 + t * t);
     }
 }

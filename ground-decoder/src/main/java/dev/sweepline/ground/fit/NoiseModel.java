@@ -1,37 +1,39 @@
 package dev.sweepline.ground.fit;
 
+import dev.sweepline.ground.instrument.GroundInstrument;
+
 /**
- * Noise of one quadrant sample, ICD §8: σ² = 2e|I|B + 4kTB/R_f + LSB²/12 with B = 1/(2 T_int),
- * T = 300 K, R_f = 4 V / FS(range), LSB = FS/(65535 − 256), FS = 40 pA × 32^range (ICD §4).
+ * Noise of one quadrant sample of an instrument, ICD §8: σ² = 2e|I|B + 4kTB/R_f + LSB²/12 with
+ * B = 1/(2 T_int), T_int = integration periods × the modulation period, T the preamplifier's
+ * temperature, R_f = outputFullScaleVolts / FS(range), LSB = FS/(top code − pedestal), all from the
+ * instrument's description (for the demo cup: 1 ms, 300 K, 4 V, 40 pA × 32^range, 65535 − 256).
+ * Immutable.
  */
 public final class NoiseModel {
-    /** Preamp temperature, K (ICD §8). */
-    public static final double PREAMP_TEMPERATURE_K = 300.0;
-    /** Feedback voltage at full scale, V: R_f = 4 V / FS (ICD §8). */
-    public static final double FULL_SCALE_VOLTS = 4.0;
-    /** One modulation period, seconds: 1000 µs (ICD §4). */
-    public static final double PERIOD_SECONDS = 1.0e-3;
-    /** Full scale of range 0, A (ICD §4). */
-    public static final double FULL_SCALE_RANGE0_AMPS = 40e-12;
-    /** ADC codes from pedestal to top: 65535 − 256 (ICD §4). */
-    public static final double ADC_SPAN_COUNTS = 65535 - 256;
+    private final GroundInstrument instrument;
 
-    private NoiseModel() {
+    /** The noise model of {@code instrument}. */
+    public NoiseModel(GroundInstrument instrument) {
+        this.instrument = instrument;
     }
 
-    /** Full scale of a gain range 0..2, amperes (ICD §4). */
-    public static double fullScaleAmps(int range) {
-        return FULL_SCALE_RANGE0_AMPS * Math.pow(32, range);
+    /** Full scale of a gain range, amperes (ICD §4). */
+    public double fullScaleAmps(int range) {
+        return instrument.gains().fullScaleAmps(range);
+    }
+
+    /** One ADC count of a gain range, amperes (ICD §4). */
+    public double lsbAmps(int range) {
+        return instrument.lsbAmps(range);
     }
 
     /** Variance of one quadrant sample, A², for current {@code amps} on {@code range} over {@code periods}. */
-    public static double quadrantVariance(double amps, int range, int periods) {
-        double bandwidthHz = 1 / (2 * Math.max(1, periods) * PERIOD_SECONDS);
-        double fs = fullScaleAmps(range);
-        double feedbackOhms = FULL_SCALE_VOLTS / fs;
-        double lsb = fs / ADC_SPAN_COUNTS;
+    public double quadrantVariance(double amps, int range, int periods) {
+        double bandwidthHz = 1 / (2 * Math.max(1, periods) * instrument.modulator().modulationPeriodSeconds());
+        double feedbackOhms = instrument.gains().feedbackOhms(range);
+        double lsb = lsbAmps(range);
         return 2 * PlasmaConstants.ELEMENTARY_CHARGE_C * Math.abs(amps) * bandwidthHz
-                + 4 * PlasmaConstants.BOLTZMANN_J_PER_K * PREAMP_TEMPERATURE_K * bandwidthHz / feedbackOhms
+                + 4 * PlasmaConstants.BOLTZMANN_J_PER_K * instrument.gains().temperatureK() * bandwidthHz / feedbackOhms
                 + lsb * lsb / 12;
     }
 }

@@ -21,10 +21,15 @@ import java.util.Set;
 public record PlasmaFit(SpeciesMoments protons, SpeciesMoments alphas, FlowAngles angles, double reducedChiSquare,
         int windowsUsed, int iterations, Set<FitFlag> flags, double[] normalParameters, double areaM2) {
 
-    /** A failed fit with these flags. */
-    public static PlasmaFit failed(EnumSet<FitFlag> flags, int windows, FlowAngles angles) {
+    /** A failed fit with these flags on a cup of effective area {@code areaM2}. */
+    public static PlasmaFit failed(EnumSet<FitFlag> flags, int windows, FlowAngles angles, double areaM2) {
         return new PlasmaFit(SpeciesMoments.NONE, SpeciesMoments.NONE, angles, Double.NaN, windows, 0,
-                Collections.unmodifiableSet(flags), new double[0], CupGeometry.EFFECTIVE_AREA_M2);
+                Collections.unmodifiableSet(flags), new double[0], areaM2);
+    }
+
+    /** A failed fit with these flags and no cup (area NaN): nothing was fitted, so no model is drawn. */
+    public static PlasmaFit failed(EnumSet<FitFlag> flags, int windows, FlowAngles angles) {
+        return failed(flags, windows, angles, Double.NaN);
     }
 
     /** The same fit with one more flag. */

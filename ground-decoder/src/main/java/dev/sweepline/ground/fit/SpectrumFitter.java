@@ -1,5 +1,7 @@
 package dev.sweepline.ground.fit;
 
+import dev.sweepline.ground.instrument.BuiltInInstruments;
+import dev.sweepline.ground.instrument.GroundInstrument;
 import java.util.Collections;
 import java.util.EnumSet;
 
@@ -8,7 +10,8 @@ import java.util.EnumSet;
  * spectrum by weighted Levenberg–Marquardt ({@link LeastSquaresRun}), first protons alone from
  * {@link InitialGuess}, then, where the windows reach the alpha peak, protons and alphas jointly. The
  * summed spectrum sees the normal speed U cos θ (physics.md, oblique flow) and the acceptance
- * A(θ)/A(0) of ICD §8; the bulk speed is U_n / cos θ. Stateless and thread-safe.
+ * A(θ)/A(0) of ICD §8; the bulk speed is U_n / cos θ. One fitter per cup geometry; immutable and
+ * thread-safe.
  */
 public final class SpectrumFitter {
     /** Fewest windows for the proton model: 3 parameters and one degree of freedom. */
@@ -26,6 +29,28 @@ public final class SpectrumFitter {
     /** T_α/T_p at the start of the joint fit: T_α ≈ 4 T_p (physics.md [memory]). */
     public static final double START_ALPHA_TEMPERATURE_RATIO = 4.0;
 
+    private final CupGeometry cup;
+
+    /** A fitter for a cup of geometry {@code cup}. */
+    public SpectrumFitter(CupGeometry cup) {
+        this.cup = cup;
+    }
+
+    /** A fitter for {@code instrument}'s cup. */
+    public SpectrumFitter(GroundInstrument instrument) {
+        this(CupGeometry.of(instrument));
+    }
+
+    /** A fitter for the demo cup, the default instrument (its built-in description). */
+    public SpectrumFitter() {
+        this(BuiltInInstruments.demoCup());
+    }
+
+    /** The cup this fitter models. */
+    public CupGeometry cup() {
+        return cup;
+    }
+
     /** Fits {@code in}; never throws for bad data, flags it instead. */
     public PlasmaFit fit(SpectrumInput in) {
         EnumSet<FitFlag> flags = EnumSet.noneOf(FitFlag.class);
@@ -35,11 +60,11 @@ public final class SpectrumFitter {
         int m = in.windows();
         if (m == 0 && in.uncalibratedDropped() > 0) {
             flags.add(FitFlag.NO_CALIBRATION);
-            return PlasmaFit.failed(flags, m, FlowAngles.NONE);
+            return PlasmaFit.failed(flags, m, FlowAngles.NONE, cup.effectiveAreaM2());
         }
         if (m < MIN_WINDOWS) {
             flags.add(FitFlag.TOO_FEW_WINDOWS);
-            return PlasmaFit.failed(flags, m, FlowAngles.NONE);
+            return PlasmaFit.failed(flags, m, FlowAngles.NONE, cup.effectiveAreaM2());
         }
         double signal = 0;
         double var = 0;
@@ -49,26 +74,26 @@ public final class SpectrumFitter {
         }
         if (!(signal > MIN_SNR * Math.sqrt(var))) {
             flags.add(FitFlag.NO_SIGNAL);
-            return PlasmaFit.failed(flags, m, FlowAngles.NONE);
+            return PlasmaFit.failed(flags, m, FlowAngles.NONE, cup.effectiveAreaM2());
         }
-        FlowAngles angles = FlowAngleEstimator.estimate(in);
+        FlowAngles angles = FlowAngleEstimator.estimate(in, cup);
         if (!angles.measured()) {
             flags.add(FitFlag.ANGLES_NOT_FITTED);
         } else if (Math.abs(angles.ratioX()) >= 1 || Math.abs(angles.ratioY()) >= 1
-                || Math.hypot(angles.tanX(), angles.tanY()) > CupGeometry.FULL_ACCEPTANCE_TAN) {
+                || Math.hypot(angles.tanX(), angles.tanY()) > cup.fullAcceptanceTan()) {
             flags.add(FitFlag.ANGLE_OUT_OF_RANGE);
         }
-        double area = CupGeometry.EFFECTIVE_AREA_M2 * CupGeometry.transmission(angles.tanX(), angles.tanY());
+        double area = cup.effectiveAreaM2() * cup.transmission(angles.tanX(), angles.tanY());
         PlasmaModel protonModel = new PlasmaModel(in.lowVolts(), in.highVolts(), area, false);
         double[] guess = InitialGuess.protons(protonModel, in.totalAmps(), area);
         if (guess == null) {
             flags.add(FitFlag.NO_SIGNAL);
-            return PlasmaFit.failed(flags, m, angles);
+            return PlasmaFit.failed(flags, m, angles, cup.effectiveAreaM2());
         }
         LeastSquaresRun.Outcome best = LeastSquaresRun.fit(protonModel, in.totalAmps(), in.sigmaAmps(), guess);
         if (best == null || !physical(best.parameters(), in)) {
             flags.add(FitFlag.NO_CONVERGENCE);
-            return PlasmaFit.failed(flags, m, angles);
+            return PlasmaFit.failed(flags, m, angles, cup.effectiveAreaM2());
         }
         LeastSquaresRun.Outcome joint = alphasCovered(protonModel, best.parameters()) && m >= MIN_WINDOWS_JOINT
                 ? jointFit(in, area, protonModel, best) : null;

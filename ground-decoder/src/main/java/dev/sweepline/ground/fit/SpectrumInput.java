@@ -37,8 +37,9 @@ public record SpectrumInput(double[] lowVolts, double[] highVolts, double[] tota
         return new SpectrumInput(lowVolts, highVolts, totalAmps, s, null, null, 0, 0);
     }
 
-    /** The usable windows of a decoded spectrum, with the noise model of ICD §8 for the weights. */
+    /** The usable windows of a decoded spectrum, with its instrument's noise model (ICD §8) for the weights. */
     public static SpectrumInput of(DecodedSpectrum s) {
+        NoiseModel noise = new NoiseModel(s.instrument());
         int c = s.windowCount();
         int keep = 0;
         int saturated = 0;
@@ -68,7 +69,7 @@ public record SpectrumInput(double[] lowVolts, double[] highVolts, double[] tota
             double var = 0;
             for (int q = 0; q < DecodedSpectrum.QUADRANTS; q++) {
                 double a = s.currentAmps()[q][i];
-                double v = NoiseModel.quadrantVariance(a, s.gainRange()[i], s.integrationPeriods());
+                double v = noise.quadrantVariance(a, s.gainRange()[i], s.integrationPeriods());
                 qa[q][k] = a;
                 qs[q][k] = Math.sqrt(v);
                 tot[k] += a;

@@ -2,11 +2,15 @@
  * From spectra to plasma: convected-Maxwellian fit of one spectrum (protons, alphas, flow angles).
  *
  * <h2>Design note</h2>
- * <p>Written from the telemetry ICD (§4, §8) and physics.md alone. The model ({@link
+ * <p>Written from the telemetry ICD (§4, §8) and physics.md alone; every instrument fact (effective area,
+ * aperture, collector and distance for the angles and the acceptance, gain ranges, ADC, temperature and
+ * modulation period for the noise) is the description of the spectrum's instrument ({@link
+ * dev.sweepline.ground.fit.CupGeometry}, {@link dev.sweepline.ground.fit.NoiseModel}), one
+ * {@link dev.sweepline.ground.fit.SpectrumFitter} per instrument. The model ({@link
  * dev.sweepline.ground.fit.PlasmaModel}, {@link dev.sweepline.ground.fit.WindowCurrent}) is the closed
  * form of physics.md, I = q n A [(U/2)(erf x2 − erf x1) + (w/(2√π))(e1 − e2)], with its analytic
- * derivatives, thresholds v = √(2qV/m) at the calibrated window edges (ICD §8 HV calibration, applied by
- * {@code DefaultWindowTable}), alphas with charge 2e and m_α (CODATA 2018).
+ * derivatives, thresholds v = √(2qV/m) at the calibrated window edges (ICD §8 HV calibration of the
+ * instrument, applied by the spectrum package), alphas with charge 2e and m_α (CODATA 2018).
  *
  * <p>Design: a two-step fit. (1) Flow angles from the four quadrants ({@link
  * dev.sweepline.ground.fit.FlowAngleEstimator}): the current-weighted ratios D_x, D_y over the spectrum,
@@ -15,8 +19,8 @@
  * shifted by d tan θ of the bulk flow) makes the ratio the same in every window. (2) The summed spectrum
  * by weighted Levenberg–Marquardt (Hipparchus {@code LevenbergMarquardtOptimizer}, weights 1/σ² from the
  * ICD §8 noise row), which sees only the normal speed U cos θ and the acceptance A(θ)/A(0) (exact
- * disc–disc overlap of the image and the collector, 1 up to 20.25°): first protons alone from moments of the
- * spectrum ({@link dev.sweepline.ground.fit.InitialGuess}, the half below the peak so that alphas do not
+ * disc–disc overlap of the image and the collector, 1 up to the cup's full acceptance, 20.25° for the
+ * demo cup): first protons alone from moments of the spectrum ({@link dev.sweepline.ground.fit.InitialGuess}, the half below the peak so that alphas do not
  * widen it), then, where the windows reach the alpha peak, protons and alphas jointly (n_α, U_α, w_α
  * free, so an alpha drift is allowed). The joint fit replaces the proton fit only when it lowers χ² and is
  * physical (0 < n_α/n_p < 0.5, 0.7 U_p < U_α < 1.5 U_p, alpha peak inside the windows). The bulk speed is
@@ -24,7 +28,7 @@
  * (JᵀWJ)⁻¹ mapped back; σ_T = 2 T σ_w / w.
  *
  * <p>Limits: the thermal spread of the arrival angles is not modelled (each window's image is shifted by
- * the bulk angle, as ICD §8 describes a beam); past 20.25° the clipped part of the image is taken evenly
+ * the bulk angle, as ICD §8 describes a beam); past full acceptance the clipped part of the image is taken evenly
  * from the quadrants; alphas share the protons' flow direction.
  *
  * <p>Requirements and how each is verified:
@@ -41,6 +45,8 @@
  *   <li>F5 all-zero, saturated, one-window and uncalibrated spectra give a flagged fit with NaN moments,
  *       never an exception ({@link dev.sweepline.ground.fit.FitFlag}; {@code GroundProcessingTest}).</li>
  *   <li>F6 fit rate measured by {@code FitBenchmark} (JMH, src/jmh).</li>
+ *   <li>F7 a second cup's spectra (fine-cup.yaml: half the area, 256 windows, 20-bit ADC, other ranges and
+ *       cadence) fit to the same truth with its own geometry and noise ({@code FineCupProcessingTest}).</li>
  * </ol>
  */
 package dev.sweepline.ground.fit;

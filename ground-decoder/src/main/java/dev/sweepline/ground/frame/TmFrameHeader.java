@@ -26,11 +26,11 @@ public final class TmFrameHeader {
     }
 
     private static int id(byte[] b, int off) {
-        return ((b[off] & 0xFF) << 8) | (b[off + 1] & 0xFF);
+        return BigEndian.u16(b, off);
     }
 
     private static int status(byte[] b, int off) {
-        return ((b[off + 4] & 0xFF) << 8) | (b[off + 5] & 0xFF);
+        return BigEndian.u16(b, off + DATA_FIELD_STATUS_OFFSET);
     }
 
     /** Transfer frame version number (2 bits); 0 for a TM frame. */

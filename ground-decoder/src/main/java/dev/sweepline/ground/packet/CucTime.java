@@ -1,5 +1,6 @@
 package dev.sweepline.ground.packet;
 
+import dev.sweepline.ground.frame.BigEndian;
 import java.time.Instant;
 import java.time.ZoneOffset;
 import java.time.format.DateTimeFormatter;
@@ -29,9 +30,8 @@ public record CucTime(long coarseSeconds, int fine) {
 
     /** Reads the 6 octets at {@code off}. */
     public static CucTime read(byte[] b, int off) {
-        long coarse = ((long) (b[off] & 0xFF) << 24) | ((b[off + 1] & 0xFF) << 16)
-                | ((b[off + 2] & 0xFF) << 8) | (b[off + 3] & 0xFF);
-        int fine = ((b[off + 4] & 0xFF) << 8) | (b[off + 5] & 0xFF);
+        long coarse = BigEndian.u32(b, off);
+        int fine = BigEndian.u16(b, off + 4);
         return new CucTime(coarse, fine);
     }
 

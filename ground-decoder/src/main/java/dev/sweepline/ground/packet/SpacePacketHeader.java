@@ -1,5 +1,7 @@
 package dev.sweepline.ground.packet;
 
+import dev.sweepline.ground.frame.BigEndian;
+
 /**
  * Reader of the space packet primary header (CCSDS 133.0-B-2 §4.1.3, ICD §3.1), static accessors over
  * a byte array holding the packet at {@code off}:
@@ -28,7 +30,7 @@ public final class SpacePacketHeader {
     }
 
     private static int word(byte[] b, int off) {
-        return ((b[off] & 0xFF) << 8) | (b[off + 1] & 0xFF);
+        return BigEndian.u16(b, off);
     }
 
     /** Packet version number (3 bits); 0 for version 1. */

@@ -1,5 +1,6 @@
 package dev.sweepline.ground.packet;
 
+import dev.sweepline.ground.frame.BigEndian;
 import dev.sweepline.ground.frame.FrameConstants;
 import dev.sweepline.ground.frame.TmFrameHeader;
 
@@ -132,6 +133,6 @@ final class VcFrameGate {
 
     private static int fecf(byte[] buf, int off, int frameOctets) {
         int at = off + frameOctets - FrameConstants.FECF_OCTETS;
-        return ((buf[at] & 0xFF) << 8) | (buf[at + 1] & 0xFF);
+        return BigEndian.u16(buf, at);
     }
 }

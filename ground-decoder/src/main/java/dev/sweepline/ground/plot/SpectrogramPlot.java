@@ -17,8 +17,6 @@ public final class SpectrogramPlot {
     public static final int MAX_TIME_BINS = 80;
     /** One axis label in this many cells. */
     public static final int LABEL_EVERY = 8;
-    /** Smallest current shown, A: well below one LSB of range 0 (0.6 fA, ICD §4). */
-    public static final double FLOOR_AMPS = 1e-15;
 
     private SpectrogramPlot() {
     }
@@ -29,8 +27,10 @@ public final class SpectrogramPlot {
      * @param data       the spectra
      * @param windows    windows of the table (rows of the map)
      * @param edgeVolts  low edge of window w, volts (for the labels)
+     * @param floorAmps  smallest current shown, A (smaller ones, and zero, are drawn at it)
      */
-    public static byte[] render(SpectrogramData data, int windows, IntToDoubleFunction edgeVolts, int width, int height) {
+    public static byte[] render(SpectrogramData data, int windows, IntToDoubleFunction edgeVolts, double floorAmps,
+            int width, int height) {
         List<SpectrogramData.Row> rows = data.rows();
         int bins = Math.max(1, Math.min(MAX_TIME_BINS, rows.size()));
         double t0 = rows.isEmpty() ? 0 : rows.get(0).secondsFromStart();
@@ -43,7 +43,7 @@ public final class SpectrogramPlot {
                 int w = r.firstWindow() + i;
                 double a = r.totalAmps()[i];
                 if (w >= 0 && w < windows && Double.isFinite(a)) {
-                    cell[b][w] = Math.max(cell[b][w], Math.max(a, FLOOR_AMPS));
+                    cell[b][w] = Math.max(cell[b][w], Math.max(a, floorAmps));
                 }
             }
         }
@@ -77,8 +77,8 @@ public final class SpectrogramPlot {
         chart.getStyler().setLegendVisible(true);
         chart.getStyler().setChartBackgroundColor(Color.WHITE);
         if (heat.isEmpty()) {
-            heat.add(new Number[] {0, 0, Math.log10(FLOOR_AMPS)});
-            min = max = Math.log10(FLOOR_AMPS);
+            heat.add(new Number[] {0, 0, Math.log10(floorAmps)});
+            min = max = Math.log10(floorAmps);
         }
         chart.getStyler().setMin(min).setMax(max > min ? max : min + 1);
         chart.addSeries("log10 I", x, y, heat);

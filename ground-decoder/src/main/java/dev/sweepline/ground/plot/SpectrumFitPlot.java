@@ -17,14 +17,15 @@ import org.knowm.xchart.style.markers.SeriesMarkers;
  * (log axes), the fitted total, protons and alphas; below, the normalised residuals (data − model)/σ.
  */
 public final class SpectrumFitPlot {
-    /** Smallest current drawn on the log axis, A (below one LSB of range 0, ICD §4). */
-    public static final double FLOOR_AMPS = 1e-16;
-
     private SpectrumFitPlot() {
     }
 
-    /** PNG of the spectrum, its fit and residuals; {@code title} names the spectrum. */
-    public static byte[] render(SpectrumInput in, PlasmaFit fit, String title, int width, int height) {
+    /**
+     * PNG of the spectrum, its fit and residuals; {@code title} names the spectrum, currents below
+     * {@code floorAmps} are drawn at it on the log axis.
+     */
+    public static byte[] render(SpectrumInput in, PlasmaFit fit, String title, double floorAmps, int width,
+            int height) {
         int m = in.windows();
         PlasmaModel model = new PlasmaModel(in.lowVolts(), in.highVolts(), fit.areaM2(), fit.alphasFitted());
         double[] total = new double[m];
@@ -47,21 +48,21 @@ public final class SpectrumFitPlot {
                 continue;
             }
             x.add(v);
-            y.add(Math.max(in.totalAmps()[j], FLOOR_AMPS));
-            e.add(Math.min(in.sigmaAmps()[j], 0.9 * Math.max(in.totalAmps()[j], FLOOR_AMPS)));
+            y.add(Math.max(in.totalAmps()[j], floorAmps));
+            e.add(Math.min(in.sigmaAmps()[j], 0.9 * Math.max(in.totalAmps()[j], floorAmps)));
             if (fitted) {
                 xm.add(v);
-                ym.add(Math.max(total[j], FLOOR_AMPS));
-                yp.add(Math.max(model.speciesCurrent(Species.PROTON, j, p[0], p[1], p[2]), FLOOR_AMPS));
+                ym.add(Math.max(total[j], floorAmps));
+                yp.add(Math.max(model.speciesCurrent(Species.PROTON, j, p[0], p[1], p[2]), floorAmps));
                 if (fit.alphasFitted()) {
-                    ya.add(Math.max(model.speciesCurrent(Species.ALPHA, j, p[3], p[4], p[5]), FLOOR_AMPS));
+                    ya.add(Math.max(model.speciesCurrent(Species.ALPHA, j, p[3], p[4], p[5]), floorAmps));
                 }
                 res.add((in.totalAmps()[j] - total[j]) / in.sigmaAmps()[j]);
             }
         }
         if (x.isEmpty()) {
             x.add(1.0);
-            y.add(FLOOR_AMPS);
+            y.add(floorAmps);
             e.add(0.0);
         }
         XYChart c = new XYChartBuilder().width(width).height(height / 2).title(title)

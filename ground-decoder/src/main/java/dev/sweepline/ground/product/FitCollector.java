@@ -8,34 +8,45 @@ import dev.sweepline.ground.fit.PlasmaFit;
 import dev.sweepline.ground.fit.PlasmaModel;
 import dev.sweepline.ground.fit.SpectrumFitter;
 import dev.sweepline.ground.fit.SpectrumInput;
+import dev.sweepline.ground.instrument.DefaultWindowTable;
+import dev.sweepline.ground.instrument.GroundInstrument;
 import dev.sweepline.ground.plot.SpectrogramData;
-import dev.sweepline.ground.spectrum.DefaultWindowTable;
 import dev.sweepline.ground.spectrum.DecodedSpectrum;
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.Collections;
+import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Map;
 
 /**
- * Fits every decoded spectrum as it arrives, with its Cramér–Rao bound, and keeps what the plots need:
- * one spectrogram row per spectrum and the example spectrum for the fit plot (the latest fitted spectrum
- * with the most windows, survey preferred).
+ * Fits every decoded spectrum as it arrives, with its instrument's geometry and noise and its
+ * Cramér–Rao bound, and keeps what the plots need: one spectrogram row per spectrum, on the default
+ * table of the spectrum's instrument, and the example spectrum for the fit plot (the latest fitted
+ * spectrum with the most windows, survey preferred).
  */
 public final class FitCollector implements DecodeListener {
-    private final SpectrumFitter fitter = new SpectrumFitter();
+    private final Map<Integer, SpectrumFitter> fitters = new LinkedHashMap<>();
+    private final Map<Integer, Spectrogram> spectrograms = new LinkedHashMap<>();
     private final List<MomentRecord> records = new ArrayList<>();
-    private final List<SpectrogramData.Row> rows = new ArrayList<>();
     private double firstTai = Double.NaN;
     private long fitNanos;
     private SpectrumInput exampleInput;
     private PlasmaFit exampleFit;
+    private GroundInstrument exampleInstrument;
     private String exampleTitle = "";
     private int exampleScore = -1;
+
+    /** The rows of one instrument's spectrogram. */
+    private record Spectrogram(GroundInstrument instrument, List<SpectrogramData.Row> rows) {
+    }
 
     @Override
     public void onSpectrum(DecodedSpectrum s) {
         long t0 = System.nanoTime();
+        GroundInstrument instrument = s.instrument();
         SpectrumInput in = SpectrumInput.of(s);
-        PlasmaFit fit = fitter.fit(in);
+        PlasmaFit fit = fitters.computeIfAbsent(instrument.id(), id -> new SpectrumFitter(instrument)).fit(in);
         CramerRaoBound bound = null;
         if (fit.ok()) {
             PlasmaModel m = new PlasmaModel(in.lowVolts(), in.highVolts(), fit.areaM2(), fit.alphasFitted());
@@ -49,20 +60,24 @@ public final class FitCollector implements DecodeListener {
         if (Double.isNaN(firstTai)) {
             firstTai = tai;
         }
-        records.add(new MomentRecord(tai, s.time().isoTai(), s.apid(), s.modeName(), s.sweep(), fit, bound));
-        rows.add(onDefaultGrid(s, tai - firstTai));
+        records.add(new MomentRecord(tai, s.time().isoTai(), s.apid(), s.modeName(), s.sweep(), fit, bound,
+                instrument.name()));
+        spectrograms.computeIfAbsent(instrument.id(), id -> new Spectrogram(instrument, new ArrayList<>())).rows()
+                .add(onDefaultGrid(s, tai - firstTai));
         int score = fit.ok() ? in.windows() * 2 + (s.mode() == DecodedSpectrum.MODE_SURVEY ? 1000 : 0) : -1;
         if (score >= exampleScore && score >= 0) {
             exampleScore = score;
             exampleInput = in;
             exampleFit = fit;
-            exampleTitle = s.modeName() + " sweep " + s.sweep() + " at " + s.time().isoTai() + " TAI";
+            exampleInstrument = instrument;
+            exampleTitle = instrument.name() + " " + s.modeName() + " sweep " + s.sweep() + " at " + s.time().isoTai()
+                    + " TAI";
         }
     }
 
     /**
-     * The spectrum's currents on the default table's E/q windows, so that one spectrogram can hold
-     * spectra of uplinked tables too: each window's current goes to the default window holding its
+     * The spectrum's currents on its instrument's default-table E/q windows, so that one spectrogram can
+     * hold spectra of uplinked tables too: each window's current goes to the default window holding its
      * geometric centre (several currents to one window are summed; saturated windows stay NaN).
      */
     static SpectrogramData.Row onDefaultGrid(DecodedSpectrum s, double seconds) {
@@ -73,11 +88,12 @@ public final class FitCollector implements DecodeListener {
             }
             return new SpectrogramData.Row(seconds, s.firstWindow(), amps);
         }
-        double[] amps = new double[DefaultWindowTable.WINDOWS];
-        java.util.Arrays.fill(amps, Double.NaN);
+        DefaultWindowTable table = s.instrument().windows();
+        double[] amps = new double[table.windows()];
+        Arrays.fill(amps, Double.NaN);
         for (int i = 0; i < s.windowCount(); i++) {
             double centre = Math.sqrt(s.lowVolts()[i] * s.highVolts()[i]);
-            int w = DefaultWindowTable.windowOf(centre);
+            int w = table.windowOf(centre);
             if (w < 0) {
                 continue;
             }
@@ -92,9 +108,30 @@ public final class FitCollector implements DecodeListener {
         return Collections.unmodifiableList(records);
     }
 
-    /** Spectrogram rows so far. */
+    /**
+     * The instrument of the spectrogram: the one with the most spectra (the first seen of a tie), or
+     * null before the first spectrum.
+     */
+    public GroundInstrument spectrogramInstrument() {
+        Spectrogram best = null;
+        for (Spectrogram g : spectrograms.values()) {
+            if (best == null || g.rows().size() > best.rows().size()) {
+                best = g;
+            }
+        }
+        return best == null ? null : best.instrument();
+    }
+
+    /** Spectrogram rows so far of {@link #spectrogramInstrument()} (none before the first spectrum). */
     public SpectrogramData spectrogram() {
-        return new SpectrogramData(Collections.unmodifiableList(rows));
+        GroundInstrument i = spectrogramInstrument();
+        return new SpectrogramData(i == null ? List.of()
+                : Collections.unmodifiableList(spectrograms.get(i.id()).rows()));
+    }
+
+    /** Spectra of instruments other than {@link #spectrogramInstrument()}, which its spectrogram leaves out. */
+    public int spectraNotInSpectrogram() {
+        return records.size() - spectrogram().rows().size();
     }
 
     /** Seconds spent fitting and bounding. */
@@ -110,6 +147,11 @@ public final class FitCollector implements DecodeListener {
     /** Its fit. */
     public PlasmaFit exampleFit() {
         return exampleFit;
+    }
+
+    /** Its instrument, or null when no spectrum was fitted. */
+    public GroundInstrument exampleInstrument() {
+        return exampleInstrument;
     }
 
     /** Its title. */

@@ -25,8 +25,10 @@ import java.util.OptionalDouble;
  *           OptionalDouble.of(8000));
  *   for (MomentRecord r : p.moments()) { ... r.densityPerCc(), r.crlbDensityPerCc(), r.fit().flags() ... }
  * </pre>
- * It decodes the frames (frame length detected, SCID 0x2C5), fits every spectrum with its Cramér–Rao
- * bound, and writes into {@code outDir}: spectra.csv, summary.json (with a {@code fits} section),
+ * It decodes the frames (frame length detected, SCID 0x2C5), each spectrum with the description of the
+ * instrument it names (every built-in by default; {@link DecoderConfig#withInstruments} for others), fits
+ * every spectrum with its instrument's geometry and noise and its Cramér–Rao bound, and writes into
+ * {@code outDir}: spectra.csv, summary.json (with a {@code fits} section),
  * moments.csv, moments.json, spectrogram.png, moments.png, spectrum-fit.png and report.html.
  */
 public final class GroundProcessing {

@@ -16,9 +16,10 @@ import dev.sweepline.ground.fit.PlasmaFit;
  * @param fit        the fit
  * @param bound      the Cramér–Rao bound of the fitted model at the fitted values for this window set
  *                   and noise; null when the fit failed
+ * @param instrument name of the instrument the spectrum came from (its description's {@code name})
  */
 public record MomentRecord(double taiSeconds, String isoTai, int apid, String mode, int sweep, PlasmaFit fit,
-        CramerRaoBound bound) {
+        CramerRaoBound bound, String instrument) {
     private static final double PER_CC = 1e-6;
     private static final double KM = 1e-3;
 

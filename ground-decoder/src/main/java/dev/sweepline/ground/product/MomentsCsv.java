@@ -16,7 +16,7 @@ import org.apache.commons.csv.CSVPrinter;
  */
 public final class MomentsCsv {
     /** Column names, in order. */
-    public static final String[] HEADER = {"time_tai_s", "time_tai", "apid", "mode", "sweep", "windows",
+    public static final String[] HEADER = {"time_tai_s", "time_tai", "apid", "instrument", "mode", "sweep", "windows",
         "n_cc", "u_kms", "t_k", "theta_x_deg", "theta_y_deg", "alpha_n_cc", "alpha_u_kms", "alpha_t_k",
         "sigma_n_cc", "sigma_u_kms", "sigma_t_k", "sigma_theta_x_deg", "sigma_theta_y_deg",
         "sigma_alpha_n_cc", "sigma_alpha_u_kms", "sigma_alpha_t_k",
@@ -47,6 +47,7 @@ public final class MomentsCsv {
         c.add(cell(r.taiSeconds()));
         c.add(r.isoTai());
         c.add(String.format("0x%03X", r.apid()));
+        c.add(r.instrument());
         c.add(r.mode());
         c.add(Integer.toString(r.sweep()));
         c.add(Integer.toString(f.windowsUsed()));

@@ -40,6 +40,7 @@ public final class MomentsJson {
             ObjectNode o = a.addObject();
             o.put("timeTaiSeconds", r.taiSeconds());
             o.put("timeTai", r.isoTai());
+            o.put("instrument", r.instrument());
             o.put("mode", r.mode());
             o.put("sweep", r.sweep());
             num(o, "nPerCc", r.densityPerCc());

@@ -8,7 +8,8 @@ import dev.sweepline.ground.plot.SpectrogramPlot;
 import dev.sweepline.ground.plot.SpectrumFitPlot;
 import dev.sweepline.ground.plot.TimeSeries;
 import dev.sweepline.ground.report.QuickLookReport;
-import dev.sweepline.ground.spectrum.DefaultWindowTable;
+import dev.sweepline.ground.instrument.BuiltInInstruments;
+import dev.sweepline.ground.instrument.GroundInstrument;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
@@ -27,9 +28,20 @@ final class QuickLook {
     private QuickLook() {
     }
 
+    /**
+     * Smallest current drawn, A: a tenth of one count of {@code instrument}'s most sensitive range
+     * (ICD §4), below anything its ADC resolves.
+     */
+    static double floorAmps(GroundInstrument instrument) {
+        return instrument.lsbAmps(0) / 10;
+    }
+
     static Plots plots(FitCollector fits) {
-        byte[] spectrogram = SpectrogramPlot.render(fits.spectrogram(), DefaultWindowTable.WINDOWS,
-                DefaultWindowTable::lowVolts, WIDTH, HEIGHT);
+        // before any spectrum there is nothing to draw: the demo cup's axes frame the empty plots
+        GroundInstrument si = fits.spectrogramInstrument() == null ? BuiltInInstruments.demoCup()
+                : fits.spectrogramInstrument();
+        byte[] spectrogram = SpectrogramPlot.render(fits.spectrogram(), si.windows().windows(), si.windows()::lowVolts,
+                floorAmps(si), WIDTH, HEIGHT);
         List<MomentRecord> r = fits.records();
         int n = r.size();
         double t0 = n == 0 ? 0 : r.get(0).taiSeconds();
@@ -61,9 +73,10 @@ final class QuickLook {
                 ? SpectrumFitPlot.render(new dev.sweepline.ground.fit.SpectrumInput(new double[0], new double[0],
                         new double[0], new double[0], null, null, 0, 0),
                         dev.sweepline.ground.fit.PlasmaFit.failed(java.util.EnumSet.of(FitFlag.NO_SIGNAL), 0,
-                                dev.sweepline.ground.fit.FlowAngles.NONE), "no spectrum fitted", WIDTH, HEIGHT * 3 / 2)
-                : SpectrumFitPlot.render(fits.exampleInput(), fits.exampleFit(), fits.exampleTitle(), WIDTH,
-                        HEIGHT * 3 / 2);
+                                dev.sweepline.ground.fit.FlowAngles.NONE), "no spectrum fitted", floorAmps(si), WIDTH,
+                        HEIGHT * 3 / 2)
+                : SpectrumFitPlot.render(fits.exampleInput(), fits.exampleFit(), fits.exampleTitle(),
+                        floorAmps(fits.exampleInstrument()), WIDTH, HEIGHT * 3 / 2);
         return new Plots(spectrogram, moments, fit);
     }
 
@@ -87,6 +100,8 @@ final class QuickLook {
                         : s.firstTime().isoTai() + " .. " + s.lastTime().isoTai() + " TAI ("
                         + num(rates.spanSeconds(), "%.1f") + " s)"),
                 row("spectra", s.spectraSurvey() + " survey, " + s.spectraFocus() + " focus"),
+                row("spectra by instrument",
+                        s.spectraByInstrument().isEmpty() ? "none" : s.spectraByInstrument().toString()),
                 row("housekeeping / events", s.housekeeping() + " / " + s.events())));
         List<List<String>> frames = new ArrayList<>();
         frames.add(row("good frames", Long.toString(s.framesGood()) + " (" + s.framesIdle() + " idle)"));
@@ -133,7 +148,11 @@ final class QuickLook {
         q.table(row("median of fitted", "n (cm^-3)", "U (km/s)", "T (K)", "theta_x (deg)", "theta_y (deg)", "n_a/n_p (%)"),
                 List.of(medians(collector.records())));
         q.heading("Plots");
-        q.image("spectrogram", plots.spectrogram(), "Spectrogram: time x E/q window, colour = log10 summed current.");
+        GroundInstrument si = collector.spectrogramInstrument();
+        int others = collector.spectraNotInSpectrogram();
+        q.image("spectrogram", plots.spectrogram(), "Spectrogram: time x E/q window, colour = log10 summed current"
+                + (si == null ? "." : ", on the windows of " + si.label()
+                        + (others == 0 ? "." : "; " + others + " spectra of other instruments not shown.")));
         q.image("moments", plots.moments(), "Proton moments, flow angle and alpha abundance with 1-sigma fit errors.");
         q.image("spectrum fit", plots.spectrumFit(), "One spectrum with its fit (protons, alphas) and residuals.");
         return q.toBytes();

@@ -14,7 +14,8 @@ import org.apache.commons.csv.CSVPrinter;
  */
 public final class SpectraCsvWriter implements DecodeListener, AutoCloseable {
     /** Column names, in order. */
-    public static final String[] HEADER = {"time_tai", "time_utc", "apid", "mode", "sweep", "sequence_count", "window",
+    public static final String[] HEADER = {"time_tai", "time_utc", "apid", "instrument", "mode", "sweep",
+        "sequence_count", "window",
         "low_volts", "high_volts", "gain_range", "saturated", "q1_amps", "q2_amps", "q3_amps", "q4_amps",
         "total_amps"};
 
@@ -36,7 +37,8 @@ public final class SpectraCsvWriter implements DecodeListener, AutoCloseable {
         try {
             for (int i = 0; i < s.windowCount(); i++) {
                 double[][] a = s.currentAmps();
-                csv.printRecord(tai, utc, apid, s.modeName(), s.sweep(), s.sequenceCount(), s.firstWindow() + i,
+                csv.printRecord(tai, utc, apid, s.instrument().name(), s.modeName(), s.sweep(), s.sequenceCount(),
+                        s.firstWindow() + i,
                         volts(s.lowVolts()[i]), volts(s.highVolts()[i]), s.gainRange()[i], s.saturated()[i] ? 1 : 0,
                         a[0][i], a[1][i], a[2][i], a[3][i], s.totalAmps()[i]);
             }

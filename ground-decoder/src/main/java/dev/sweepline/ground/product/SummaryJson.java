@@ -8,6 +8,7 @@ import dev.sweepline.ground.decode.FrameGap;
 import dev.sweepline.ground.decode.SequenceGap;
 import dev.sweepline.ground.decode.TelemetryDecoder;
 import dev.sweepline.ground.frame.FrameReason;
+import dev.sweepline.ground.instrument.GroundInstrument;
 import dev.sweepline.ground.packet.FrameDrop;
 import dev.sweepline.ground.packet.PacketAnomaly;
 import dev.sweepline.ground.spectrum.SpectrumError;
@@ -15,12 +16,14 @@ import java.util.Map;
 
 /**
  * Builds summary.json from a finished decoder. Keys: {@code input}, {@code inputOctets},
- * {@code frameLength}, {@code frameLengthDetected}, {@code framesGood}, {@code framesIdle}, {@code framesByVc},
+ * {@code frameLength}, {@code frameLengthDetected}, {@code instruments} (the descriptions configured: name,
+ * id, sampleBits, source), {@code framesGood}, {@code framesIdle}, {@code framesByVc},
  * {@code framesBad} (by reason, UNKNOWN_VCID among them), {@code framesDropped} (good frames dropped by
  * their VC count: DUPLICATE, STALE; ICD §10), {@code vcRestarts}, {@code garbageOctets}, {@code gaps}
  * (frame gaps, master-channel frames missing, packet sequence gaps), {@code packetAnomalies},
  * {@code packets} and {@code bits} (by APID, hex),
- * {@code spectra} (by mode), {@code spectrumErrors}, {@code housekeeping}, {@code events},
+ * {@code spectra} (by mode), {@code spectraByInstrument}, {@code spectrumErrors} (UNKNOWN_INSTRUMENT and
+ * SAMPLE_WIDTH_MISMATCH among them), {@code housekeeping}, {@code events},
  * {@code recordErrors}, {@code timeSpan}.
  */
 public final class SummaryJson {
@@ -35,6 +38,11 @@ public final class SummaryJson {
         root.put("inputOctets", inputOctets);
         root.put("frameLength", d.frameOctets());
         root.put("frameLengthDetected", d.frameLengthDetected());
+        ArrayNode instruments = root.putArray("instruments");
+        for (GroundInstrument i : d.instruments().all()) {
+            instruments.addObject().put("name", i.name()).put("id", i.id()).put("sampleBits", i.sampleBits())
+                    .put("source", i.source());
+        }
         root.put("framesGood", s.framesGood());
         root.put("framesIdle", s.framesIdle());
         ObjectNode byVc = root.putObject("framesByVc");
@@ -71,6 +79,8 @@ public final class SummaryJson {
         ObjectNode spectra = root.putObject("spectra");
         spectra.put("survey", s.spectraSurvey());
         spectra.put("focus", s.spectraFocus());
+        ObjectNode si = root.putObject("spectraByInstrument");
+        s.spectraByInstrument().forEach(si::put);
         ObjectNode se = root.putObject("spectrumErrors");
         for (Map.Entry<SpectrumError, Long> e : s.spectrumErrors().entrySet()) {
             se.put(e.getKey().name(), e.getValue());

@@ -8,8 +8,13 @@
  *
  * <h2>Design note</h2>
  * <p>{@link dev.sweepline.ground.product.FitCollector} listens to the decoder and fits each spectrum as it
- * arrives (one thread), with the bound of {@code dev.sweepline.ground.bound}; so memory grows with the
- * records, not with the spectra. Values not available are NaN in the records and become an empty CSV cell
+ * arrives (one thread), with the fitter of the spectrum's instrument and the bound of
+ * {@code dev.sweepline.ground.bound}; so memory grows with the records, not with the spectra. spectra.csv,
+ * moments.csv and moments.json name each row's instrument; summary.json counts the spectra by instrument.
+ * The spectrogram is drawn on the default-table E/q windows of the instrument with the most spectra (the
+ * report says so and how many spectra of other instruments it leaves out); plot floors are a tenth of one
+ * count of the instrument's most sensitive range. Values not available are NaN in the records and become an
+ * empty CSV cell
  * or JSON null: no product carries NaN or Infinity. Bits per second are packet octets × 8 over the time
  * span of the decoded packets, per APID, and frames × (L + 4 ASM) × 8 for the downlink.
  *
@@ -19,6 +24,8 @@
  *   <li>P2 degenerate spectra are flagged and counted; the CSV and JSON have no NaN or Infinity.</li>
  *   <li>P3 decode on the command line writes every product; --allocation appears in the report.</li>
  *   <li>P4 the report is well-formed XHTML, self-contained, its images decode, Chromium renders it.</li>
+ *   <li>P5 layout-2 telemetry of the fine cup is processed with its own description: moments near the truth,
+ *       its 256 windows in spectra.csv, its spectrogram ({@code FineCupProcessingTest}).</li>
  * </ol>
  */
 package dev.sweepline.ground.product;

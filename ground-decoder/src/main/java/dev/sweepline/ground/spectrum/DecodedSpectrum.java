@@ -1,5 +1,6 @@
 package dev.sweepline.ground.spectrum;
 
+import dev.sweepline.ground.instrument.GroundInstrument;
 import dev.sweepline.ground.packet.CucTime;
 
 /**
@@ -18,20 +19,24 @@ import dev.sweepline.ground.packet.CucTime;
  * @param firstWindow        first window index f
  * @param windowCount        window count c
  * @param peakQ8             refined proton peak, window units Q8; 0xFFFF when none
- * @param integrationPeriods modulation periods of 1000 µs integrated per window
+ * @param integrationPeriods modulation periods (the instrument's {@code modulationPeriodMicros}) integrated per window
  * @param compression        0x00 raw or 0x01 CCSDS 121
- * @param gainRange          gain range 0..2 per window
+ * @param gainRange          gain range 0 .. ranges − 1 of the instrument, per window
  * @param saturated          saturation flag per window
- * @param adcCounts          ADC samples [q][i]
+ * @param adcCounts          ADC samples [q][i], 0 .. 2^w − 1
  * @param currentAmps        quadrant current [q][i], amperes
  * @param totalAmps          sum of the four quadrant currents per window, amperes
  * @param lowVolts           low window edge per window, volts; NaN when the table is not known
  * @param highVolts          high window edge per window, volts; NaN when the table is not known
+ * @param layoutVersion      spectrum packet layout, 1 or 2 (ICD §4)
+ * @param instrument         the instrument the packet names (layout 2), or the demo cup (layout 1),
+ *                           whose description gave the currents and edges
  */
 public record DecodedSpectrum(CucTime time, int apid, int sequenceCount, int mode, boolean steppedDown,
         boolean tableChanged, int sweep, int tableId, int firstWindow, int windowCount, int peakQ8,
         int integrationPeriods, int compression, int[] gainRange, boolean[] saturated, int[][] adcCounts,
-        double[][] currentAmps, double[] totalAmps, double[] lowVolts, double[] highVolts) {
+        double[][] currentAmps, double[] totalAmps, double[] lowVolts, double[] highVolts, int layoutVersion,
+        GroundInstrument instrument) {
     /** Peak value meaning "no peak" (ICD §4). */
     public static final int NO_PEAK = 0xFFFF;
     /** Mode code of survey (ICD §4). */
@@ -40,6 +45,16 @@ public record DecodedSpectrum(CucTime time, int apid, int sequenceCount, int mod
     public static final int MODE_FOCUS = 2;
     /** Quadrants per spectrum (ICD §4). */
     public static final int QUADRANTS = 4;
+
+    /** The instrument id (layout 2 carries it; layout 1 is the demo cup's). */
+    public int instrumentId() {
+        return instrument.id();
+    }
+
+    /** Sample width w, bits: the packet's, which equals its instrument's ADC width (ICD §4). */
+    public int sampleBits() {
+        return instrument.sampleBits();
+    }
 
     /** True when a proton peak was found. */
     public boolean hasPeak() {

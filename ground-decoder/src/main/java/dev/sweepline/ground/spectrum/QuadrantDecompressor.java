@@ -1,12 +1,13 @@
 package dev.sweepline.ground.spectrum;
 
 /**
- * Decoder of one quadrant's sample stream of a spectrum packet (ICD §4). The ICD's compression
- * {@code 0x01} is CCSDS 121.0-B adaptive Rice coding with these parameters, which an implementation
- * must apply (they are not transmitted):
+ * Decoder of one quadrant's sample stream of a spectrum packet (ICD §4) of w-bit samples, w being the
+ * packet's sample width (8..24; 16 in layout 1). The ICD's compression {@code 0x01} is CCSDS 121.0-B
+ * adaptive Rice coding with these parameters, which an implementation must apply (they are not
+ * transmitted):
  * <ul>
- *   <li>n = {@value #BITS_PER_SAMPLE} bits per sample, block size J = {@value #BLOCK_SAMPLES};</li>
- *   <li>preprocessor on: unit-delay predictor, mapper with x_min = 0, x_max = 65535;</li>
+ *   <li>n = w bits per sample, block size J = {@value #BLOCK_SAMPLES};</li>
+ *   <li>preprocessor on: unit-delay predictor, mapper with x_min = 0, x_max = 2^w − 1;</li>
  *   <li>basic option set (not the restricted set);</li>
  *   <li>one reference sample interval for the whole stream: the first sample is the reference, sent raw;</li>
  *   <li>the {@code sampleCount} samples are padded to a whole number of blocks by repeating the last
@@ -18,15 +19,18 @@ package dev.sweepline.ground.spectrum;
  * (ICD §10).
  * Implementations are used from one thread at a time per instance.
  */
+@FunctionalInterface
 public interface QuadrantDecompressor {
-    /** Bits per sample n (ICD §4). */
-    int BITS_PER_SAMPLE = 16;
+    /** Sample width of layout-1 spectra, bits (ICD §4: the demo cup's 16-bit ADC). */
+    int LAYOUT_1_SAMPLE_BITS = 16;
+    /** Narrowest sample width (ICD §4: 8..24 bits). */
+    int MIN_SAMPLE_BITS = 8;
+    /** Widest sample width (ICD §4). */
+    int MAX_SAMPLE_BITS = 24;
     /** Block size J, samples (ICD §4). */
     int BLOCK_SAMPLES = 8;
     /** Smallest sample value x_min of the mapper (ICD §4). */
     int X_MIN = 0;
-    /** Largest sample value x_max of the mapper (ICD §4). */
-    int X_MAX = 65535;
 
     /** Error: no decoder for this compression is plugged in. */
     int ERROR_UNAVAILABLE = -1;
@@ -38,17 +42,23 @@ public interface QuadrantDecompressor {
     int ERROR_UNUSED_OCTETS = -4;
 
     /**
-     * Decodes {@code sampleCount} samples from {@code in[off .. off+len)}.
+     * Decodes {@code sampleCount} samples of {@code sampleBits} bits from {@code in[off .. off+len)}.
      *
      * @param in          packet buffer
      * @param off         first octet of this quadrant's stream
      * @param len         stream length Lq in octets
      * @param sampleCount samples to deliver (the window count c, 1..256)
-     * @param out         receives the samples (0..65535) from index 0; at least
+     * @param sampleBits  sample width w, 8..24
+     * @param out         receives the samples (0 .. 2^w − 1) from index 0; at least
      *                    {@link #paddedCount(int) paddedCount(sampleCount)} long, so whole blocks fit
      * @return {@code sampleCount} on success, or a negative error code ({@code ERROR_...})
      */
-    int decode(byte[] in, int off, int len, int sampleCount, int[] out);
+    int decode(byte[] in, int off, int len, int sampleCount, int sampleBits, int[] out);
+
+    /** Decodes 16-bit samples, the width of layout-1 spectra (else as the method above). */
+    default int decode(byte[] in, int off, int len, int sampleCount, int[] out) {
+        return decode(in, off, len, sampleCount, LAYOUT_1_SAMPLE_BITS, out);
+    }
 
     /** Samples rounded up to whole blocks of J. */
     static int paddedCount(int sampleCount) {
@@ -56,5 +66,5 @@ public interface QuadrantDecompressor {
     }
 
     /** Placeholder until a CCSDS 121 decoder is plugged in: always {@link #ERROR_UNAVAILABLE}. */
-    QuadrantDecompressor UNAVAILABLE = (in, off, len, sampleCount, out) -> ERROR_UNAVAILABLE;
+    QuadrantDecompressor UNAVAILABLE = (in, off, len, sampleCount, sampleBits, out) -> ERROR_UNAVAILABLE;
 }

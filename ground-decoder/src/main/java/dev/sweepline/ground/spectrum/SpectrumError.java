@@ -6,6 +6,18 @@ public enum SpectrumError {
     NOT_A_SPECTRUM,
     /** The secondary header flag is 0 although ICD §3.1 requires the CUC time. */
     NO_SECONDARY_HEADER,
+    /**
+     * The first user-data octet has bit 7 set but is not 0x82: a layout version this ground does not
+     * know (ICD §4: 0x82 is layout 2; layout 1 begins with the mode, bit 7 clear).
+     */
+    UNKNOWN_LAYOUT,
+    /**
+     * The instrument id (layout 2) is not one the ground has a description for, or a layout-1 spectrum
+     * (the demo cup's, ICD §4) reached a ground configured without the demo cup.
+     */
+    UNKNOWN_INSTRUMENT,
+    /** The sample width w (layout 2) differs from the ADC width of the instrument's description (ICD §4). */
+    SAMPLE_WIDTH_MISMATCH,
     /** A field (or a quadrant stream of length Lq) runs past the end of the packet. */
     LENGTH_BEYOND_DATA,
     /** Octets left after the fourth quadrant stream. */
@@ -14,15 +26,15 @@ public enum SpectrumError {
     BAD_MODE,
     /** Window count outside 1..256. */
     BAD_WINDOW_COUNT,
-    /** A gain-range tag of 3 (ICD §4 allows 0..2). */
+    /** A gain-range tag the instrument has no range for (ICD §4 allows 0 .. ranges − 1 of its description). */
     BAD_GAIN_RANGE,
     /** Compression octet neither 0x00 nor 0x01. */
     UNKNOWN_COMPRESSION,
-    /** The quadrant decoder reported an error (or, for raw, Lq &lt; 2c). */
+    /** The quadrant decoder reported an error (or, for raw, Lq &lt; c⌈w/8⌉, or a sample above 2^w − 1). */
     DECOMPRESSION_FAILED,
     /**
      * A quadrant stream's samples end a whole octet or more before its stated length Lq (for raw,
-     * Lq &gt; 2c): fill is allowed only to the next octet boundary (ICD §4, §10), so under a good CRC
+     * Lq &gt; c⌈w/8⌉): fill is allowed only to the next octet boundary (ICD §4, §10), so under a good CRC
      * the stream is corrupt or the two sides disagree on it.
      */
     UNUSED_OCTETS,

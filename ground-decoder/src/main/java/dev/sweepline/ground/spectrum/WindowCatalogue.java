@@ -1,29 +1,33 @@
 package dev.sweepline.ground.spectrum;
 
+import dev.sweepline.ground.frame.BigEndian;
 import dev.sweepline.ground.frame.Crc16Ibm3740;
+import dev.sweepline.ground.instrument.BuiltInInstruments;
+import dev.sweepline.ground.instrument.DefaultWindowTable;
+import dev.sweepline.ground.instrument.GroundInstrument;
+import dev.sweepline.ground.instrument.HvCalibration;
 import java.util.HashMap;
 import java.util.Map;
 
 /**
- * The window tables the ground knows, by table id: the built-in table (id 0, telemetry ICD §4/§8)
- * and any uplinked table image registered from its file (commands.md §4.1: marker "ST", length L at
- * offset 4, window count n at offset 6, windows from offset 136 as low/high DAC codes, CRC-16/IBM-3740
- * of octets 0..L-3 at L-2, which is also the table id). Edges are calibrated volts (ICD §8).
+ * The window tables the ground knows, by table id: the built-in table (id 0), which is each
+ * instrument's own default table (FORMAT.md {@code windows}), and any uplinked table image registered
+ * from its file (commands.md §4.1: marker "ST", length L at offset 4, window count n at offset 6,
+ * windows from offset 136 as low/high DAC codes, CRC-16/IBM-3740 of octets 0..L-3 at L-2, which is also
+ * the table id). An image holds DAC codes and names no instrument, so its edges are the codes put
+ * through the calibration of the instrument whose spectrum asks (telemetry ICD §8). Edges are
+ * calibrated volts. Not thread-safe while tables are added.
  */
 public final class WindowCatalogue {
     private static final int MARKER = 0x5354;
     private static final int WINDOWS_AT = 136;
+    private static final int MAX_WINDOWS = 256;
 
-    private final Map<Integer, double[][]> edges = new HashMap<>();
+    /** Uplinked tables by id: [0] low codes, [1] high codes. */
+    private final Map<Integer, int[][]> uplinked = new HashMap<>();
 
-    /** A catalogue holding the built-in table. */
+    /** A catalogue holding the built-in table (of every instrument) and no uplinked one. */
     public WindowCatalogue() {
-        double[][] builtIn = new double[2][DefaultWindowTable.WINDOWS];
-        for (int w = 0; w < DefaultWindowTable.WINDOWS; w++) {
-            builtIn[0][w] = DefaultWindowTable.lowVolts(w);
-            builtIn[1][w] = DefaultWindowTable.highVolts(w);
-        }
-        edges.put(DefaultWindowTable.TABLE_ID, builtIn);
     }
 
     /**
@@ -32,59 +36,88 @@ public final class WindowCatalogue {
      * @return its table id, or -1 when the octets are not an intact image
      */
     public int add(byte[] image) {
-        if (image.length < WINDOWS_AT + 2 + 4 || u16(image, 0) != MARKER) {
+        if (image.length < WINDOWS_AT + 2 + 4 || BigEndian.u16(image, 0) != MARKER) {
             return -1;
         }
-        int length = u16(image, 4);
-        int n = u16(image, 6);
-        if (length != image.length || n < 1 || n > 256 || length != WINDOWS_AT + 2 + 4 * n) {
+        int length = BigEndian.u16(image, 4);
+        int n = BigEndian.u16(image, 6);
+        if (length != image.length || n < 1 || n > MAX_WINDOWS || length != WINDOWS_AT + 2 + 4 * n) {
             return -1;
         }
-        int crc = u16(image, length - 2);
+        int crc = BigEndian.u16(image, length - 2);
         if (Crc16Ibm3740.compute(image, 0, length - 2) != crc) {
             return -1;
         }
-        double[][] e = new double[2][n];
+        int[][] codes = new int[2][n];
         for (int w = 0; w < n; w++) {
-            e[0][w] = DefaultWindowTable.calibratedVolts(u16(image, WINDOWS_AT + 4 * w));
-            e[1][w] = DefaultWindowTable.calibratedVolts(u16(image, WINDOWS_AT + 4 * w + 2));
+            codes[0][w] = BigEndian.u16(image, WINDOWS_AT + 4 * w);
+            codes[1][w] = BigEndian.u16(image, WINDOWS_AT + 4 * w + 2);
         }
-        edges.put(crc, e);
+        uplinked.put(crc, codes);
         return crc;
     }
 
-    /** True when {@code tableId} is known. */
+    /** True when {@code tableId} is known: the built-in table or a registered image. */
     public boolean knows(int tableId) {
-        return edges.containsKey(tableId);
+        return tableId == DefaultWindowTable.TABLE_ID || uplinked.containsKey(tableId);
     }
 
     /**
-     * Writes the calibrated edges of windows {@code first .. first + count - 1} of table {@code tableId}
-     * into {@code low} and {@code high} (NaN where unknown): one lookup per spectrum.
+     * Writes the calibrated edges of windows {@code first .. first + count - 1} of table {@code tableId},
+     * as {@code instrument} flies it, into {@code low} and {@code high} (NaN where the table or the
+     * window is not known): one lookup per spectrum.
      */
-    public void edges(int tableId, int first, int count, double[] low, double[] high) {
-        double[][] e = edges.get(tableId);
+    public void edges(GroundInstrument instrument, int tableId, int first, int count, double[] low, double[] high) {
+        if (tableId == DefaultWindowTable.TABLE_ID) {
+            DefaultWindowTable t = instrument.windows();
+            for (int i = 0; i < count; i++) {
+                low[i] = t.lowVolts(first + i);
+                high[i] = t.highVolts(first + i);
+            }
+            return;
+        }
+        int[][] codes = uplinked.get(tableId);
         for (int i = 0; i < count; i++) {
-            int w = first + i;
-            boolean known = e != null && w >= 0 && w < e[0].length;
-            low[i] = known ? e[0][w] : Double.NaN;
-            high[i] = known ? e[1][w] : Double.NaN;
+            low[i] = volts(instrument.calibration(), codes, 0, first + i);
+            high[i] = volts(instrument.calibration(), codes, 1, first + i);
         }
     }
 
-    /** Calibrated low edge of window {@code w} of table {@code tableId}, volts; NaN when unknown. */
+    /** Calibrated low edge of window {@code w} of table {@code tableId} on {@code instrument}, V; NaN if unknown. */
+    public double lowVolts(GroundInstrument instrument, int tableId, int w) {
+        return edge(instrument, tableId, w, 0);
+    }
+
+    /** Calibrated high edge of window {@code w} of table {@code tableId} on {@code instrument}, V; NaN if unknown. */
+    public double highVolts(GroundInstrument instrument, int tableId, int w) {
+        return edge(instrument, tableId, w, 1);
+    }
+
+    /** As {@link #edges(GroundInstrument, int, int, int, double[], double[])} for the demo cup. */
+    public void edges(int tableId, int first, int count, double[] low, double[] high) {
+        edges(BuiltInInstruments.demoCup(), tableId, first, count, low, high);
+    }
+
+    /** Calibrated low edge of window {@code w} of table {@code tableId} on the demo cup, volts; NaN when unknown. */
     public double lowVolts(int tableId, int w) {
-        double[][] e = edges.get(tableId);
-        return e == null || w < 0 || w >= e[0].length ? Double.NaN : e[0][w];
+        return lowVolts(BuiltInInstruments.demoCup(), tableId, w);
     }
 
-    /** Calibrated high edge of window {@code w} of table {@code tableId}, volts; NaN when unknown. */
+    /** Calibrated high edge of window {@code w} of table {@code tableId} on the demo cup, volts; NaN when unknown. */
     public double highVolts(int tableId, int w) {
-        double[][] e = edges.get(tableId);
-        return e == null || w < 0 || w >= e[1].length ? Double.NaN : e[1][w];
+        return highVolts(BuiltInInstruments.demoCup(), tableId, w);
     }
 
-    private static int u16(byte[] b, int at) {
-        return ((b[at] & 0xFF) << 8) | (b[at + 1] & 0xFF);
+    private double edge(GroundInstrument instrument, int tableId, int w, int side) {
+        if (tableId == DefaultWindowTable.TABLE_ID) {
+            DefaultWindowTable t = instrument.windows();
+            return side == 0 ? t.lowVolts(w) : t.highVolts(w);
+        }
+        return volts(instrument.calibration(), uplinked.get(tableId), side, w);
+    }
+
+    /** Calibrated edge {@code side} (0 low, 1 high) of window {@code w} of an image's codes; NaN when unknown. */
+    private static double volts(HvCalibration cal, int[][] codes, int side, int w) {
+        return codes == null || w < 0 || w >= codes[side].length ? Double.NaN : cal.volts(codes[side][w]);
     }
 }

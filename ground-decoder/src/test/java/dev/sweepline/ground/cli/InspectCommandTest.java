@@ -30,8 +30,10 @@ class InspectCommandTest {
         // 5 good frame lines, one BAD_CRC line (six golden frames, the first damaged)
         assertEquals(5, out.lines().filter(l -> l.startsWith("frame  @")).count());
         assertTrue(out.contains("BAD    @4          BAD_CRC (128 octets)"), out);
-        // the spectrum of GoldenFrames: sweep 0x0123 = 291, windows 40..55, peak 47.5
-        assertTrue(out.contains("spectrum survey sweep=291 windows 40..55 peak=47.500"), out);
+        // the spectrum of GoldenFrames: sweep 0x0123 = 291, windows 40..55, peak 47.5; layout 1, so the demo
+        // cup (id 1, demo-cup.yaml) with 16-bit samples (ICD §4)
+        assertTrue(out.contains("spectrum survey sweep=291 windows 40..55 peak=47.500 compression=0 instrument=1 "
+                + "(demo-cup) w=16 layout=1 table=0x0000\n"), out);
         assertTrue(out.contains("packet vc=1 apid=0x110 seq=   45"), out);
     }
 

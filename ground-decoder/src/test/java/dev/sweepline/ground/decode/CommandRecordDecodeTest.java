@@ -15,6 +15,27 @@ class CommandRecordDecodeTest {
     }
 
     @Test
+    void shouldDecodeCommandReportsThroughTheWholeChain() {
+        // ICD §3.3: APID 0x130 on VC 1; the ground decodes it (ICD §9) and counts it by type and status
+        byte[] p = packet(0x130, "0102" + "0007" + "00000102" + "03" + "00" + "0009" + "0004");
+        byte[] stream = new FrameStreamBuilder(1024).add(1, p).flush(1).stream();
+        java.util.List<CommandReport> seen = new java.util.ArrayList<>();
+        TelemetryDecoder d = new TelemetryDecoder(DecoderConfig.icdDefaults(),
+                dev.sweepline.ground.spectrum.QuadrantDecompressor.UNAVAILABLE, new DecodeListener() {
+                    @Override
+                    public void onCommandReport(CommandReport r) {
+                        seen.add(r);
+                    }
+                });
+        d.accept(stream, 0, stream.length);
+        d.finish();
+        assertEquals(1, seen.size());
+        assertEquals(CommandReport.ACCEPTANCE, seen.get(0).type()); // ICD §9: report type 1; status 3 BAD_MAC (commands.md §3)
+        assertEquals(java.util.Map.of("acceptance BAD_MAC", 1L), d.stats().commandReports());
+        assertEquals(0, d.stats().recordErrors());
+    }
+
+    @Test
     void shouldDecodeRejectionReport() {
         // ICD §9: acceptance, code 0x02, TC count 0x0007, auth 0x00000102, status 3 BAD_MAC, detail 0, 9 accepted, 4 rejected
         byte[] p = packet(0x130, "0102" + "0007" + "00000102" + "03" + "00" + "0009" + "0004");

@@ -37,6 +37,8 @@ public final class RecordingListener implements DecodeListener {
     public final List<int[]> mcGaps = new ArrayList<>();
     public final List<Drop> drops = new ArrayList<>();
     public final List<Restart> restarts = new ArrayList<>();
+    /** The detail text of each spectrum error, in order. */
+    public final List<String> spectrumErrorDetails = new ArrayList<>();
     public final List<DecodedSpectrum> spectra = new ArrayList<>();
     public final List<SpectrumError> spectrumErrors = new ArrayList<>();
     public final List<HousekeepingReport> housekeeping = new ArrayList<>();
@@ -109,6 +111,7 @@ public final class RecordingListener implements DecodeListener {
     @Override
     public void onSpectrumError(int apid, int seq, SpectrumError error, String detail) {
         spectrumErrors.add(error);
+        spectrumErrorDetails.add(detail);
     }
 
     @Override

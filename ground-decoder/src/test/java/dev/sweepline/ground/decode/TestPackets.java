@@ -64,6 +64,34 @@ public final class TestPackets {
     }
 
     /**
+     * A layout-2 spectrum packet (ICD §4: 0x82, instrument id, sample width w first), raw compression:
+     * each sample in ⌈w/8⌉ octets, big-endian.
+     *
+     * @param flags the flags octet (bit 7 stepped downward, bit 6 table changed)
+     * @param adc   [4][c] samples
+     */
+    public static byte[] spectrumV2(int instrumentId, int bits, int flags, int apid, int seq, long coarse, int fine,
+            int sweep, int first, int[] gains, boolean[] sat, int[][] adc) {
+        int c = gains.length;
+        int each = (bits + 7) / 8;
+        byte[][] streams = new byte[4][each * c];
+        for (int q = 0; q < 4; q++) {
+            for (int i = 0; i < c; i++) {
+                for (int k = 0; k < each; k++) {
+                    streams[q][each * i + k] = (byte) (adc[q][i] >>> (8 * (each - 1 - k)));
+                }
+            }
+        }
+        byte[] v1 = spectrum(apid, seq, coarse, fine, sweep, first, gains, sat, 0x00, streams);
+        // layout 2 = layout 1's user data behind four octets: 0x82, id (2), w; the flags octet set
+        ByteBuffer b = ByteBuffer.allocate(v1.length - 6 + 4);
+        b.put(v1, 6, 6).put((byte) 0x82).putShort((short) instrumentId).put((byte) bits).put(v1, 12, v1.length - 12);
+        byte[] data = b.array();
+        data[6 + 4 + 1] = (byte) flags;
+        return packet(apid, seq, true, data);
+    }
+
+    /**
      * A spectrum packet (ICD §4) with the given compression octet and quadrant streams; each stream's
      * Lq is its length.
      *

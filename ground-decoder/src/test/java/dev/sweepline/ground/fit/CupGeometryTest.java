@@ -62,14 +62,13 @@ class CupGeometryTest {
 
     @Test
     void shouldKeepFullAcceptanceTo20Point25Degrees() {
-        // ICD §8: R = √(1 cm² / (π × 0.6561)) "= 6.966 mm"; the formula gives 6.9653 mm (python3), so the
-        // ICD's figure is rounded up by 0.7 µm: tolerance 1 µm. The image lies wholly on the collector up to
-        // θ = 20.25° (ICD §8; 20.254° with the formula's R)
-        assertEquals(6.966e-3, CupGeometry.APERTURE_RADIUS_M, 1e-6);
-        assertEquals(20.25, Math.toDegrees(Math.atan(CupGeometry.FULL_ACCEPTANCE_TAN)), 0.005);
-        assertEquals(1.0, CupGeometry.transmission(Math.tan(Math.toRadians(20.2)), 0), 1e-12);
+        // ICD §8 (demo-cup.yaml geometry): R = √(1 cm² / (π × 0.6561)) = 6.9653 mm, to its last digit: 0.05 µm.
+        // The image lies wholly on the collector up to θ = 20.25° (ICD §8; 20.253° with the formula's R)
+        assertEquals(6.9653e-3, DemoCup.CUP.apertureRadiusM(), 5e-8);
+        assertEquals(20.25, Math.toDegrees(Math.atan(DemoCup.CUP.fullAcceptanceTan())), 0.005);
+        assertEquals(1.0, DemoCup.CUP.transmission(Math.tan(Math.toRadians(20.2)), 0), 1e-12);
         // past it the image leaves the collector; by symmetry of two discs the loss grows steadily
-        double t25 = CupGeometry.transmission(Math.tan(Math.toRadians(25)), 0);
+        double t25 = DemoCup.CUP.transmission(Math.tan(Math.toRadians(25)), 0);
         assertEquals(true, t25 < 1 && t25 > 0.8, "transmission at 25° " + t25);
     }
 }

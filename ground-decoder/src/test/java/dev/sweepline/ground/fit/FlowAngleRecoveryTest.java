@@ -19,8 +19,8 @@ class FlowAngleRecoveryTest {
      * DiscOverlap, error ~ GRID^-1.5 ≈ 3e-5 in a share.
      */
     static double[] gridShares(double tanX, double tanY) {
-        double ux = 15.0e-3 * tanX / CupGeometry.APERTURE_RADIUS_M;
-        double uy = 15.0e-3 * tanY / CupGeometry.APERTURE_RADIUS_M;
+        double ux = 15.0e-3 * tanX / DemoCup.CUP.apertureRadiusM();
+        double uy = 15.0e-3 * tanY / DemoCup.CUP.apertureRadiusM();
         double[] q = new double[4];
         double h = 2.0 / GRID;
         long n = 0;

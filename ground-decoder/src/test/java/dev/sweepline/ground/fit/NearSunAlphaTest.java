@@ -18,7 +18,7 @@ class NearSunAlphaTest {
         double[] truth = NearSunCase.truth();
         double[] clean = NearSunCase.currents();
         double[] sigma = NearSunCase.sigma(clean);
-        PlasmaModel joint = new PlasmaModel(NearSunCase.low(), NearSunCase.high(), CupGeometry.EFFECTIVE_AREA_M2, true);
+        PlasmaModel joint = new PlasmaModel(NearSunCase.low(), NearSunCase.high(), DemoCup.CUP.effectiveAreaM2(), true);
         CramerRaoBound bound = FisherMatrix.bound(joint, truth, sigma);
         // the overlap that makes the joint fit necessary (physics.md "Alpha particles"): at the window of the
         // alpha peak the protons carry more current than the alphas
@@ -62,7 +62,7 @@ class NearSunAlphaTest {
         // denser proton population; the temperature error is many times its own bound
         double[] clean = NearSunCase.currents();
         double[] sigma = NearSunCase.sigma(clean);
-        PlasmaModel protons = new PlasmaModel(NearSunCase.low(), NearSunCase.high(), CupGeometry.EFFECTIVE_AREA_M2, false);
+        PlasmaModel protons = new PlasmaModel(NearSunCase.low(), NearSunCase.high(), DemoCup.CUP.effectiveAreaM2(), false);
         double[] w = NearSunCase.truth();
         double[] start = {w[0], w[1], w[2]};
         LeastSquaresRun.Outcome o = LeastSquaresRun.fit(protons, clean, sigma, start);

@@ -1,7 +1,5 @@
 package dev.sweepline.ground.fit;
 
-import dev.sweepline.ground.spectrum.DefaultWindowTable;
-
 /**
  * The near-Sun case of physics.md "Solar wind": near 0.05 AU, n 3000–4300 cm⁻³, U 250–350 km/s, T_p
  * 4e5–1e6 K, U/w near 3; He/H a few % (2–4.5 % in slow wind); T_α ≈ 4 T_p. Here n = 3600 cm⁻³,
@@ -27,30 +25,30 @@ final class NearSunCase {
     }
 
     static double[] low() {
-        double[] v = new double[DefaultWindowTable.WINDOWS];
+        double[] v = new double[DemoCup.TABLE.windows()];
         for (int w = 0; w < v.length; w++) {
-            v[w] = DefaultWindowTable.lowVolts(w);
+            v[w] = DemoCup.TABLE.lowVolts(w);
         }
         return v;
     }
 
     static double[] high() {
-        double[] v = new double[DefaultWindowTable.WINDOWS];
+        double[] v = new double[DemoCup.TABLE.windows()];
         for (int w = 0; w < v.length; w++) {
-            v[w] = DefaultWindowTable.highVolts(w);
+            v[w] = DemoCup.TABLE.highVolts(w);
         }
         return v;
     }
 
     static double[] currents() {
-        double[] i = new double[DefaultWindowTable.WINDOWS];
-        new PlasmaModel(low(), high(), CupGeometry.EFFECTIVE_AREA_M2, true).evaluate(truth(), i, null);
+        double[] i = new double[DemoCup.TABLE.windows()];
+        new PlasmaModel(low(), high(), DemoCup.CUP.effectiveAreaM2(), true).evaluate(truth(), i, null);
         return i;
     }
 
     static int range(double quadrantAmps) {
         for (int r = 0; r < 2; r++) {
-            if (Math.abs(quadrantAmps) * 1.25 < NoiseModel.fullScaleAmps(r)) {
+            if (Math.abs(quadrantAmps) * 1.25 < DemoCup.NOISE.fullScaleAmps(r)) {
                 return r;
             }
         }
@@ -62,7 +60,7 @@ final class NearSunCase {
         double[] s = new double[currents.length];
         for (int j = 0; j < s.length; j++) {
             double q = currents[j] / 4;
-            s[j] = Math.sqrt(4 * NoiseModel.quadrantVariance(q, range(q), PERIODS));
+            s[j] = Math.sqrt(4 * DemoCup.NOISE.quadrantVariance(q, range(q), PERIODS));
         }
         return s;
     }

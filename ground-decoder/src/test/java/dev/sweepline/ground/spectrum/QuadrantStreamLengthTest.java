@@ -136,7 +136,7 @@ class QuadrantStreamLengthTest {
         dev.sweepline.ground.rice.RiceDecoder rice = new dev.sweepline.ground.rice.RiceDecoder(
                 dev.sweepline.ground.rice.RiceSettings.basic(16, 8, Ccsds121QuadrantDecoder.REFERENCE_INTERVAL_BLOCKS));
         // the decoder as it was before the check: any stream that yields its samples is good
-        SpectrumPacketDecoder unchecked = new SpectrumPacketDecoder((in, off, len, c, out) -> {
+        SpectrumPacketDecoder unchecked = new SpectrumPacketDecoder((in, off, len, c, bits, out) -> {
             dev.sweepline.ground.rice.DecodeResult r = rice.decode(in, off, len, c, out);
             return r.ok() ? r.samplesDecoded() : QuadrantDecompressor.ERROR_CORRUPT;
         });
@@ -200,7 +200,7 @@ class QuadrantStreamLengthTest {
     /** A copy of {@code p} (a packet of c windows) with one mutation of kind {@code m}. */
     private static byte[] mutate(byte[] p, int c, Mutation m, Random rnd) {
         byte[] x = p.clone();
-        int quadrants = 6 + 6 + SpectrumPacketDecoder.FIXED_OCTETS + (c + 3) / 4 + (c + 7) / 8 + 1;
+        int quadrants = 6 + 6 + SpectrumHeader.LAYOUT_1_OCTETS + (c + 3) / 4 + (c + 7) / 8 + 1;
         if (m == Mutation.BIT_IN_QUADRANTS) {
             int bit = quadrants * 8 + rnd.nextInt((x.length - quadrants) * 8);
             x[bit / 8] ^= (byte) (0x80 >>> (bit % 8));

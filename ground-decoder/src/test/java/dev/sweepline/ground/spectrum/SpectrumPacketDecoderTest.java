@@ -54,7 +54,7 @@ class SpectrumPacketDecoderTest {
         p[12 + 9] = 0; // window count 0 (ICD §4: 1..256)
         assertEquals(SpectrumError.BAD_WINDOW_COUNT, error(p));
         p = golden();
-        p[12 + 14] = (byte) 0xC0; // gain tag 3 for window 40 (ICD §4: values 0..2)
+        p[12 + 14] = (byte) 0xC0; // gain tag 3 for window 40 (ICD §4: 0 .. ranges − 1; demo-cup.yaml: 3 ranges)
         assertEquals(SpectrumError.BAD_GAIN_RANGE, error(p));
         p = golden();
         p[COMPRESSION_AT] = 2; // ICD §4: only 0x00 and 0x01
@@ -71,8 +71,8 @@ class SpectrumPacketDecoderTest {
         byte[] p = golden();
         p[COMPRESSION_AT] = 1;
         List<int[]> calls = new ArrayList<>();
-        QuadrantDecompressor fake = (in, off, len, c, out) -> {
-            calls.add(new int[] {off, len, c, out.length});
+        QuadrantDecompressor fake = (in, off, len, c, bits, out) -> {
+            calls.add(new int[] {off, len, c, out.length, bits});
             for (int i = 0; i < c; i++) {
                 out[i] = 1000 + i;
             }
@@ -80,13 +80,14 @@ class SpectrumPacketDecoderTest {
         };
         SpectrumResult r = new SpectrumPacketDecoder(fake).decode(p, 0, p.length);
         assertTrue(r.isOk(), r.detail());
-        // four independent streams (ICD §4), each Lq = 32 here; c = 16; a buffer for the 256-window maximum
+        // four independent streams (ICD §4), each Lq = 32 here; c = 16; a buffer for the 256-window maximum;
+        // layout 1: 16-bit samples (ICD §4)
         assertEquals(4, calls.size());
-        assertArrayEquals(new int[] {COMPRESSION_AT + 3, 32, 16, 256}, calls.get(0));
-        assertArrayEquals(new int[] {COMPRESSION_AT + 1 + 3 * 34 + 2, 32, 16, 256}, calls.get(3));
+        assertArrayEquals(new int[] {COMPRESSION_AT + 3, 32, 16, 256, 16}, calls.get(0));
+        assertArrayEquals(new int[] {COMPRESSION_AT + 1 + 3 * 34 + 2, 32, 16, 256, 16}, calls.get(3));
         assertEquals(1015, r.spectrum().adcCounts()[2][15]);
         // an error code from the decoder rejects the spectrum
-        QuadrantDecompressor failing = (in, off, len, c, out) -> QuadrantDecompressor.ERROR_CORRUPT;
+        QuadrantDecompressor failing = (in, off, len, c, bits, out) -> QuadrantDecompressor.ERROR_CORRUPT;
         assertEquals(SpectrumError.DECOMPRESSION_FAILED, new SpectrumPacketDecoder(failing).decode(p, 0, p.length).error());
     }
 

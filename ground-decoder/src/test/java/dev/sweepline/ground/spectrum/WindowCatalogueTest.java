@@ -4,7 +4,10 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import dev.sweepline.ground.decode.GoldenSpectraV2;
+import dev.sweepline.ground.decode.Hex;
 import dev.sweepline.ground.frame.Crc16Ibm3740;
+import dev.sweepline.ground.instrument.InstrumentSet;
 import java.nio.ByteBuffer;
 import org.junit.jupiter.api.Test;
 
@@ -44,5 +47,30 @@ class WindowCatalogueTest {
         assertFalse(c.knows(0x1234));
         // the built-in table (id 0) is always there: window 0 starts at 50 V (ICD §4) calibrated (ICD §8)
         assertEquals(0.100150 * 500 - 0.8, c.lowVolts(0, 0), 1e-9);
+    }
+
+    @Test
+    void shouldGiveASpectrumOfAnUplinkedTableItsEdgesOnTheSpectrumsOwnInstrument() {
+        WindowCatalogue c = new WindowCatalogue();
+        int id = c.add(image());
+        // GoldenSpectraV2.FINE_RAW (fine-cup, windows 100..109) restamped with the image's table id (ICD §4 offset 8
+        // of layout 2) and first window 0: its two windows get edges, the other eight none
+        byte[] p = Hex.bytes(GoldenSpectraV2.FINE_RAW);
+        int u = 12;
+        p[u + 8] = (byte) (id >>> 8);
+        p[u + 9] = (byte) id;
+        p[u + 10] = 0;
+        p[u + 11] = 0;
+        SpectrumResult r = new SpectrumPacketDecoder(QuadrantDecompressor.UNAVAILABLE, c).decode(p, 0, p.length);
+        assertTrue(r.isOk(), r.detail());
+        // the image holds codes; fine-cup.yaml calibrates them: (1 − 0.001) × 0.125 V × code + 0.5 V
+        assertEquals(0.999 * 0.125 * 1000 + 0.5, r.spectrum().lowVolts()[0], 1e-9);
+        assertEquals(0.999 * 0.125 * 1200 + 0.5, r.spectrum().highVolts()[1], 1e-9);
+        assertTrue(Double.isNaN(r.spectrum().lowVolts()[2]));
+        // the same codes on the demo cup (ICD §8): 0.100150 V × code − 0.8 V
+        assertEquals(0.100150 * 1000 - 0.8, c.lowVolts(InstrumentSet.builtIns().byId(1), id, 0), 1e-9);
+        // a table id nobody registered: no edges
+        assertFalse(c.knows(id ^ 1));
+        assertTrue(Double.isNaN(c.lowVolts(InstrumentSet.builtIns().byId(2), id ^ 1, 0)));
     }
 }
