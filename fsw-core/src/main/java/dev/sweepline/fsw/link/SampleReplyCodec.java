@@ -1,5 +1,7 @@
 package dev.sweepline.fsw.link;
 
+import dev.sweepline.fsw.octets.BigEndian;
+
 /**
  * Sample reply codec (hardware ICD §3.2), big-endian:
  * <pre>
@@ -32,13 +34,13 @@ public final class SampleReplyCodec {
     /** Writes {@code reply} at {@code offset}; returns {@link #LENGTH}. */
     public static int encode(SampleReply reply, byte[] b, int offset) {
         b[offset + TYPE_OFFSET] = (byte) MessageType.SAMPLE_REPLY;
-        Octets.put16(b, offset + SEQUENCE_OFFSET, reply.sequence);
+        BigEndian.put16(b, offset + SEQUENCE_OFFSET, reply.sequence);
         b[offset + STATUS_OFFSET] = (byte) reply.status;
         b[offset + GAIN_OFFSET] = (byte) reply.gainRange;
         for (int q = 0; q < InstrumentConstants.QUADRANTS; q++) {
-            Octets.put16(b, offset + QUADRANT_OFFSET + 2 * q, reply.quadrant[q]);
+            BigEndian.put16(b, offset + QUADRANT_OFFSET + 2 * q, reply.quadrant[q]);
         }
-        Octets.put16(b, offset + HV_MONITOR_OFFSET, reply.hvMonitorCode);
+        BigEndian.put16(b, offset + HV_MONITOR_OFFSET, reply.hvMonitorCode);
         return LENGTH;
     }
 
@@ -55,13 +57,13 @@ public final class SampleReplyCodec {
         if ((b[offset + TYPE_OFFSET] & 0xFF) != MessageType.SAMPLE_REPLY) {
             return LinkStatus.UNKNOWN_TYPE;
         }
-        into.sequence = Octets.get16(b, offset + SEQUENCE_OFFSET);
+        into.sequence = BigEndian.get16(b, offset + SEQUENCE_OFFSET);
         into.status = b[offset + STATUS_OFFSET] & 0xFF;
         into.gainRange = b[offset + GAIN_OFFSET] & 0xFF;
         for (int q = 0; q < InstrumentConstants.QUADRANTS; q++) {
-            into.quadrant[q] = Octets.get16(b, offset + QUADRANT_OFFSET + 2 * q);
+            into.quadrant[q] = BigEndian.get16(b, offset + QUADRANT_OFFSET + 2 * q);
         }
-        into.hvMonitorCode = Octets.get16(b, offset + HV_MONITOR_OFFSET);
+        into.hvMonitorCode = BigEndian.get16(b, offset + HV_MONITOR_OFFSET);
         return LinkStatus.OK;
     }
 }

@@ -10,7 +10,7 @@ import dev.sweepline.fsw.table.SweepParameters;
 import dev.sweepline.fsw.table.TableStatus;
 import dev.sweepline.fsw.table.WindowTable;
 import dev.sweepline.fsw.telemetry.Apid;
-import dev.sweepline.fsw.telemetry.Crc16;
+import dev.sweepline.fsw.octets.Crc16;
 import org.junit.jupiter.api.Test;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;

@@ -1,5 +1,7 @@
 package dev.sweepline.fsw.telemetry;
 
+import dev.sweepline.fsw.octets.Crc16;
+
 import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
