@@ -1,5 +1,6 @@
 package dev.sweepline.fsw.sweep;
 
+import dev.sweepline.fsw.DemoCup;
 import dev.sweepline.fsw.link.SampleReply;
 import dev.sweepline.fsw.link.StepCommand;
 import dev.sweepline.fsw.table.SweepParameters;
@@ -52,10 +53,10 @@ public class SchedulerStepBenchmark {
     /** Builds the scheduler and the canned replies and issues the first step. */
     @Setup(Level.Trial)
     public void setUp() {
-        WindowTable table = WindowTable.defaultTable();
+        WindowTable table = DemoCup.table();
         SyntheticInstrument plasma = new SyntheticInstrument(20261201L);
         canned = new CannedReplies(table, plasma);
-        scheduler = new SweepScheduler(table, SweepParameters.defaults(), counter);
+        scheduler = new SweepScheduler(DemoCup.INSTRUMENT, table, DemoCup.parameters(), counter);
         scheduler.nextStep(step, nowMicros);
     }
 
@@ -71,7 +72,7 @@ public class SchedulerStepBenchmark {
     /** Ingest one sample, choose the next step. */
     @Benchmark
     public int step() {
-        nowMicros += step.durationMicros();
+        nowMicros += step.durationMicros(DemoCup.MODULATION_PERIOD_MICROS);
         canned.answer(step, reply);
         scheduler.ingest(reply, nowMicros);
         scheduler.nextStep(step, nowMicros);

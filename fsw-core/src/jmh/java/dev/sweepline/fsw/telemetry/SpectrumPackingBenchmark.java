@@ -1,5 +1,6 @@
 package dev.sweepline.fsw.telemetry;
 
+import dev.sweepline.fsw.DemoCup;
 import dev.sweepline.fsw.link.SampleReply;
 import dev.sweepline.fsw.link.StepCommand;
 import dev.sweepline.fsw.sweep.CannedReplies;
@@ -43,7 +44,7 @@ public class SpectrumPackingBenchmark {
     @Param({"true", "false"})
     public boolean compress;
 
-    private final Spectrum spectrum = new Spectrum();
+    private final Spectrum spectrum = new Spectrum(DemoCup.INSTRUMENT);
     private TelemetryWriter writer;
     private int integrationPeriods;
     private long nowMicros;
@@ -51,9 +52,9 @@ public class SpectrumPackingBenchmark {
     /** Captures the first survey spectrum of the scheduler and builds the writer. */
     @Setup(Level.Trial)
     public void setUp() {
-        WindowTable table = WindowTable.defaultTable();
+        WindowTable table = DemoCup.table();
         CannedReplies canned = new CannedReplies(table, new SyntheticInstrument(SEED));
-        SweepScheduler scheduler = new SweepScheduler(table, SweepParameters.defaults(), new SweepListener() {
+        SweepScheduler scheduler = new SweepScheduler(DemoCup.INSTRUMENT, table, DemoCup.parameters(), new SweepListener() {
             @Override
             public void onSweepComplete(Spectrum s, long now) {
                 if (spectrum.count() == 0 && s.mode() == SweepMode.SURVEY && s.peakValid()) {
@@ -66,16 +67,16 @@ public class SpectrumPackingBenchmark {
         long now = 0;
         for (int i = 0; i < 100 * table.count() && spectrum.count() == 0; i++) {
             scheduler.nextStep(step, now);
-            now += step.durationMicros();
+            now += step.durationMicros(DemoCup.MODULATION_PERIOD_MICROS);
             canned.answer(step, reply);
             scheduler.ingest(reply, now);
         }
         if (spectrum.count() != table.count() || !spectrum.peakValid()) {
             throw new IllegalStateException("no full survey spectrum with a peak: " + spectrum.count());
         }
-        integrationPeriods = SweepParameters.defaults().integrationPeriods;
+        integrationPeriods = DemoCup.parameters().integrationPeriods;
         writer = new TelemetryWriter(TelemetryWriter.DEFAULT_FRAME_LENGTH, Long.MAX_VALUE, new CucTime(0, 0),
-                compress, (frame, offset, length) -> { });
+                compress, DemoCup.INSTRUMENT, (frame, offset, length) -> { });
     }
 
     /** Packs the spectrum once; returns the frames emitted so far so the work stays observable. */

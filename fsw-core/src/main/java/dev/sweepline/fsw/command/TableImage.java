@@ -111,17 +111,11 @@ public final class TableImage {
 
     /** Validates decoded values against {@code limits}: the same codes as {@link #decode}. */
     public static int validate(ParameterTable t, InstrumentLimits limits) {
-        int status = WindowTable.validate(t.dacLow, t.dacHigh, t.windowCount);
-        if (status == TableStatus.OK) {
-            status = limits.checkLevels(t.dacLow, t.dacHigh, t.windowCount);
-        }
+        int status = limits.validateTable(t.dacLow, t.dacHigh, t.windowCount);
         if (status != TableStatus.OK) {
             return status;
         }
-        status = t.sweep.validate();
-        if (status == TableStatus.OK) {
-            status = limits.checkSettle(t.sweep);
-        }
+        status = limits.validateParameters(t.sweep);
         if (status != TableStatus.OK) {
             return status;
         }

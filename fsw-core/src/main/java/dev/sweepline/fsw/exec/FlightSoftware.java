@@ -79,20 +79,21 @@ public final class FlightSoftware {
     /** Builds the flight software on {@code link}, writing frames to {@code frames}. */
     public FlightSoftware(FlightConfig config, InstrumentLink link, FrameSink frames, SweepListener observer) {
         this.telemetry = new TelemetryWriter(config.frameLength, config.flushIntervalMicros,
-                new CucTime(config.coarseTimeAtTickZero, 0), config.compressSpectra, frames);
+                new CucTime(config.coarseTimeAtTickZero, 0), config.compressSpectra, config.instrument, frames);
         ParameterTable startUp = ParameterTable.of(config.table, config.parameters);
         requireWithinLimits(startUp, config);
         startUp.housekeepingSeconds = (int) Math.max(ParameterTable.MIN_HOUSEKEEPING_SECONDS,
                 Math.min(ParameterTable.MAX_HOUSEKEEPING_SECONDS, config.housekeepingPeriodMicros / 1_000_000L));
         startUp.faults.copyFrom(config.faults);
-        this.tables = new TableManager(startUp, config.nonVolatileStore, config.instrumentLimits);
+        this.tables = new TableManager(startUp, config.nonVolatileStore, config.instrument.limits());
         this.restoreStatus = tables.restore();
         ParameterTable inForce = tables.activeTable();
         this.housekeepingPeriodMicros = restoreStatus == TableManager.RESTORE_OK
                 ? inForce.housekeepingSeconds * 1_000_000L : config.housekeepingPeriodMicros;
         this.spectrumDecimation = inForce.spectrumDecimation;
         this.sweepTableId = tables.activeId();
-        this.scheduler = new SweepScheduler(inForce.windowTable(), inForce.sweep, new Forwarder(observer));
+        this.scheduler = new SweepScheduler(config.instrument, inForce.windowTable(), inForce.sweep,
+                new Forwarder(observer));
         this.executive = new Executive(link, scheduler, config.timeoutMarginMicros, config.maxRetries);
         this.linkHealth = healthOf(link);
         this.hostHvPermitted = config.hvPermitted;
@@ -231,7 +232,7 @@ public final class FlightSoftware {
 
     /** A start-up table outside the instrument's limits is a configuration error, refused at once. */
     private static void requireWithinLimits(ParameterTable startUp, FlightConfig config) {
-        int status = TableImage.validate(startUp, config.instrumentLimits);
+        int status = TableImage.validate(startUp, config.instrument.limits());
         if (status != 0) {
             throw new IllegalArgumentException("start-up table refused against the instrument's limits: code "
                     + status + " (" + dev.sweepline.fsw.table.TableStatus.name(status) + ")");

@@ -29,11 +29,11 @@ public final class FaultProtection {
     private final SweepScheduler scheduler;
     private final TelemetryWriter telemetry;
     private final FaultSettings settings = new FaultSettings();
-    private final StepMonitors steps = new StepMonitors(settings);
+    private final StepMonitors steps;
     private final SweepParameters work = new SweepParameters();
     private final int[] retriesUsed = new int[FaultMonitorId.COUNT + 1];
     private final long[] trips = new long[FaultMonitorId.COUNT + 1];
-    private final int[] detail = steps.detail;
+    private final int[] detail;
     private int pending;
     private int trippedThisSweep;
     private int peakLostSweeps;
@@ -47,6 +47,8 @@ public final class FaultProtection {
     public FaultProtection(FaultSettings initial, SweepScheduler scheduler, TelemetryWriter telemetry) {
         this.scheduler = scheduler;
         this.telemetry = telemetry;
+        this.steps = new StepMonitors(settings, scheduler.instrument().adcTopCode());
+        this.detail = steps.detail;
         if (configure(initial) != 0) {
             throw new IllegalArgumentException("fault settings refused");
         }

@@ -1,8 +1,9 @@
 package dev.sweepline.fsw.sweep;
 
-import dev.sweepline.fsw.link.InstrumentConstants;
+import dev.sweepline.fsw.instrument.InstrumentDescription;
 import dev.sweepline.fsw.link.SampleReply;
 import dev.sweepline.fsw.link.StepCommand;
+import dev.sweepline.fsw.table.SettleTime;
 import dev.sweepline.fsw.table.SweepParameters;
 import dev.sweepline.fsw.table.TableStatus;
 import dev.sweepline.fsw.table.WindowTable;
@@ -27,14 +28,15 @@ public final class SweepScheduler {
     private final int[] dacHigh;
     private final SweepParameters params;
 
-    private final GainPredictor gain = new GainPredictor();
+    private final InstrumentDescription instrument;
+    private final GainPredictor gain;
     private final PeakFinder peakFinder;
     private final FocusBand band;
     private final DecisionHash hash = new DecisionHash();
     private final StepCommand lastStep = new StepCommand();
 
-    private Spectrum building = new Spectrum();
-    private Spectrum completed = new Spectrum();
+    private Spectrum building;
+    private Spectrum completed;
 
     private SweepMode mode = SweepMode.SURVEY;
     private boolean startPending = true;
@@ -53,21 +55,27 @@ public final class SweepScheduler {
     private boolean hvPermitted = true;
 
     /**
-     * Builds a scheduler that starts in SURVEY (reported as a START mode change at the first step).
+     * Builds a scheduler for {@code instrument} that starts in SURVEY (reported as a START mode change
+     * at the first step); every buffer is sized from the description and the table capacity here.
      *
      * @throws IllegalArgumentException if {@code params} does not validate (programmer misuse)
      */
-    public SweepScheduler(WindowTable table, SweepParameters params, SweepListener listener) {
-        int status = params.validate();
+    public SweepScheduler(InstrumentDescription instrument, WindowTable table, SweepParameters params,
+                          SweepListener listener) {
+        int status = params.validate(instrument.rangeRatioShift());
         if (status != TableStatus.OK) {
             throw new IllegalArgumentException("sweep parameters refused: " + TableStatus.name(status));
         }
+        this.instrument = instrument;
         this.listener = listener == null ? SweepListener.NONE : listener;
-        this.config = new ActiveConfiguration(table, params);
+        this.config = new ActiveConfiguration(table, params, instrument);
         this.dacLow = config.dacLow;
         this.dacHigh = config.dacHigh;
         this.params = config.params;
-        this.peakFinder = new PeakFinder(config.centreCode, this.params);
+        this.gain = new GainPredictor(instrument);
+        this.building = new Spectrum(instrument);
+        this.completed = new Spectrum(instrument);
+        this.peakFinder = new PeakFinder(config.centreCode, this.params, instrument.rangeRatioShift());
         this.band = new FocusBand(config.centreCode, this.params);
         gain.reset(config.windowCount());
         gain.configure(this.params);
@@ -100,8 +108,7 @@ public final class SweepScheduler {
         int range = gain.choose(window);
         int low = dacLow[window];
         int high = dacHigh[window];
-        int railChange = Math.max(Math.abs(low - hvLowCode), Math.abs(high - hvHighCode));
-        long settle = params.fixedSettleMicros + (((long) railChange * params.settleMicrosPerCodeQ8) >> 8);
+        long settle = SettleTime.micros(params, hvLowCode, hvHighCode, low, high);
         out.window = window;
         out.dacLow = low;
         out.dacHigh = high;
@@ -133,7 +140,7 @@ public final class SweepScheduler {
         awaitingWindow = NO_WINDOW;
         int range = reply.gainRange;
         int extra = 0;
-        if (range < 0 || range >= InstrumentConstants.GAIN_RANGES) {
+        if (range < 0 || range >= instrument.gainRanges()) {
             range = awaitingRange;
             extra = Spectrum.STATUS_BAD_RANGE;
         }
@@ -147,9 +154,9 @@ public final class SweepScheduler {
         }
     }
 
-    private static boolean anyAtTop(SampleReply reply) {
-        for (int q = 0; q < InstrumentConstants.QUADRANTS; q++) {
-            if (reply.quadrant[q] >= InstrumentConstants.ADC_MAX_COUNTS) {
+    private boolean anyAtTop(SampleReply reply) {
+        for (int q = 0; q < InstrumentDescription.QUADRANTS; q++) {
+            if (reply.quadrant[q] >= instrument.adcTopCode()) {
                 return true;
             }
         }
@@ -410,6 +417,11 @@ public final class SweepScheduler {
     /** Replies ingested when no step awaited one. */
     public long ignoredReplies() {
         return ignoredReplies;
+    }
+
+    /** The instrument this scheduler sweeps. */
+    public InstrumentDescription instrument() {
+        return instrument;
     }
 
     /** The active value of a parameter set (a copy into {@code into}, allocation-free). */

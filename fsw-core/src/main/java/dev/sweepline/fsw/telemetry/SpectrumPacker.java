@@ -2,7 +2,8 @@ package dev.sweepline.fsw.telemetry;
 
 import dev.sweepline.fsw.compress.RiceEncoder;
 import dev.sweepline.fsw.compress.RiceParameters;
-import dev.sweepline.fsw.link.InstrumentConstants;
+import dev.sweepline.fsw.instrument.InstrumentDescription;
+import dev.sweepline.fsw.octets.BigEndian;
 import dev.sweepline.fsw.link.SampleReply;
 import dev.sweepline.fsw.sweep.Spectrum;
 import dev.sweepline.fsw.sweep.SweepMode;
@@ -25,8 +26,6 @@ public final class SpectrumPacker {
     public static final int COMPRESSION_RICE = 0x01;
     /** Compression id: raw 16-bit samples. */
     public static final int COMPRESSION_NONE = 0x00;
-    /** Bits per sample of the coded quadrant streams. */
-    public static final int BITS_PER_SAMPLE = 16;
     /**
      * CCSDS 121 block size J of the ICD: 8, because spectra change fast along the sweep (a peak, gain
      * switches); on simulated spectra J = 8 codes 12.5 bits/sample against 13.2 for J = 16 (hw-sim
@@ -47,24 +46,33 @@ public final class SpectrumPacker {
     /** Peak field value when the sweep held no valid peak. */
     public static final int NO_PEAK = 0xFFFF;
 
-    private static final int Q = InstrumentConstants.QUADRANTS;
+    private static final int Q = InstrumentDescription.QUADRANTS;
 
     private final RiceEncoder encoder;
     private final int[] samples = new int[WindowTable.CAPACITY];
     private final boolean compress;
+    private final int sampleBits;
+    private final int sampleOctets;
+    private final int sampleMask;
 
-    /** A packer that codes the quadrants with CCSDS 121 ({@code compress}) or sends them raw. */
-    public SpectrumPacker(boolean compress) {
+    /**
+     * A packer for {@code instrument}'s samples (w = its ADC width) that codes the quadrants with
+     * CCSDS 121 ({@code compress}, n = w) or sends them raw (⌈w/8⌉ octets each).
+     */
+    public SpectrumPacker(boolean compress, InstrumentDescription instrument) {
         this.compress = compress;
+        this.sampleBits = instrument.adcBits();
+        this.sampleOctets = instrument.sampleOctets();
+        this.sampleMask = instrument.adcTopCode();
         int blocks = (WindowTable.CAPACITY + BLOCK_SIZE - 1) / BLOCK_SIZE;
-        this.encoder = new RiceEncoder(RiceParameters.of(BITS_PER_SAMPLE, BLOCK_SIZE, blocks, true, false,
+        this.encoder = new RiceEncoder(RiceParameters.of(sampleBits, BLOCK_SIZE, blocks, true, false,
                 PAD_INTERVALS_TO_OCTET), WindowTable.CAPACITY);
     }
 
     /** Largest user data this packer writes for a full-capacity spectrum. */
     public int maxUserDataLength() {
         int c = WindowTable.CAPACITY;
-        int perQuadrant = (int) Math.max(encoder.maxEncodedBytes(c), 2L * c);
+        int perQuadrant = (int) Math.max(encoder.maxEncodedBytes(c), (long) sampleOctets * c);
         return HEADER_LENGTH + (c + 3) / 4 + (c + 7) / 8 + 1 + Q * (2 + perQuadrant);
     }
 
@@ -89,7 +97,7 @@ public final class SpectrumPacker {
         out[p++] = (byte) (compress ? COMPRESSION_RICE : COMPRESSION_NONE);
         for (int q = 0; q < Q; q++) {
             for (int i = 0; i < c; i++) {
-                samples[i] = s.quadrant(i, q) & 0xFFFF;
+                samples[i] = s.quadrant(i, q) & sampleMask;
             }
             int lengthAt = p;
             p += 2;
@@ -101,9 +109,9 @@ public final class SpectrumPacker {
                 }
             } else {
                 for (int i = 0; i < c; i++) {
-                    put16(out, p + 2 * i, samples[i]);
+                    BigEndian.putN(out, p + sampleOctets * i, samples[i], sampleOctets);
                 }
-                n = 2 * c;
+                n = sampleOctets * c;
             }
             put16(out, lengthAt, n);
             p += n;
@@ -138,8 +146,6 @@ public final class SpectrumPacker {
     }
 
     static int put16(byte[] out, int p, int value) {
-        out[p] = (byte) (value >>> 8);
-        out[p + 1] = (byte) value;
-        return p + 2;
+        return BigEndian.put16(out, p, value);
     }
 }

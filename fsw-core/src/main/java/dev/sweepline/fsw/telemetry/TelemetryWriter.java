@@ -32,9 +32,10 @@ public final class TelemetryWriter {
      * @param compress            CCSDS 121 coding of spectra (true) or raw samples
      * @param sink                receives every frame with its ASM
      */
-    public TelemetryWriter(int frameLength, long flushIntervalMicros, CucTime time, boolean compress, FrameSink sink) {
+    public TelemetryWriter(int frameLength, long flushIntervalMicros, CucTime time, boolean compress,
+                           dev.sweepline.fsw.instrument.InstrumentDescription instrument, FrameSink sink) {
         this.time = time;
-        this.packer = new SpectrumPacker(compress);
+        this.packer = new SpectrumPacker(compress, instrument);
         this.packet = new byte[DATA_AT + packer.maxUserDataLength()];
         this.frames = new TransferFrameBuilder(SPACECRAFT_ID, frameLength, flushIntervalMicros, (f, off, len) -> {
             counters.countFrame((f[off + TransferFrameBuilder.ASM_LENGTH + 1] >> 1) & 7, len);

@@ -1,5 +1,6 @@
 package dev.sweepline.fsw.command;
 
+import dev.sweepline.fsw.DemoCup;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 
 import dev.sweepline.fsw.table.SweepParameters;
@@ -12,7 +13,7 @@ import org.junit.jupiter.api.Test;
 class TableImageFieldsTest {
     @Test
     void shouldCarryEverySweepParameterThroughTheImage() throws IllegalAccessException {
-        ParameterTable t = ParameterTable.of(WindowTable.defaultTable(), SweepParameters.defaults());
+        ParameterTable t = ParameterTable.of(DemoCup.table(), DemoCup.parameters());
         int k = 0;
         for (Field f : SweepParameters.class.getFields()) {
             if (!Modifier.isStatic(f.getModifiers())) {
@@ -22,7 +23,7 @@ class TableImageFieldsTest {
         byte[] image = new byte[TableImage.MAX_OCTETS];
         int n = TableImage.encode(t, image);
         ParameterTable back = new ParameterTable();
-        TableImage.decode(image, n, back, dev.sweepline.fsw.instrument.InstrumentLimits.demo());
+        TableImage.decode(image, n, back, DemoCup.INSTRUMENT.limits());
         for (Field f : SweepParameters.class.getFields()) {
             if (!Modifier.isStatic(f.getModifiers())) {
                 assertEquals(f.getInt(t.sweep), f.getInt(back.sweep), f.getName());

@@ -1,5 +1,6 @@
 package dev.sweepline.fsw.exec;
 
+import dev.sweepline.fsw.DemoCup;
 import dev.sweepline.fsw.link.InstrumentLink;
 import dev.sweepline.fsw.link.SampleReply;
 import dev.sweepline.fsw.link.StepCommand;
@@ -28,7 +29,7 @@ import static org.mockito.Mockito.when;
 
 /** The executive's sequence, timeout, retry and safe behaviour (exec design note R1-R7). */
 class ExecutiveTest {
-    private static final WindowTable TABLE = WindowTable.defaultTable();
+    private static final WindowTable TABLE = DemoCup.table();
     /** First step from HV off: 1000 us + 519 codes * 1 us settle + 8 ms integration (issue 2 settle formula). */
     private static final long FIRST_STEP_MICROS = 1000 + 519 + 8 * 1000;
     private static final int MARGIN = 5000;
@@ -42,7 +43,7 @@ class ExecutiveTest {
     void setUp() {
         SyntheticInstrument plasma = new SyntheticInstrument(91);
         listener = new RecordingListener();
-        scheduler = new SweepScheduler(TABLE, SweepParameters.defaults(), listener);
+        scheduler = new SweepScheduler(DemoCup.INSTRUMENT, TABLE, DemoCup.parameters(), listener);
         link = new FakeLink(new CannedReplies(TABLE, plasma));
         exec = new Executive(link, scheduler, MARGIN, 2);
     }
@@ -52,7 +53,7 @@ class ExecutiveTest {
         assertTrue(exec.doWork(0) > 0);
         assertEquals(1, exec.stepsSent());
         assertTrue(exec.outstanding());
-        assertEquals(FIRST_STEP_MICROS, exec.currentStep().durationMicros());
+        assertEquals(FIRST_STEP_MICROS, exec.currentStep().durationMicros(DemoCup.MODULATION_PERIOD_MICROS));
         assertEquals(0, exec.doWork(1000)); // reply not due: nothing to do
         exec.doWork(FIRST_STEP_MICROS + 100); // due (latency 100 us): ingest, and send the next step
         assertEquals(1, exec.repliesAccepted());
@@ -184,7 +185,7 @@ class ExecutiveTest {
     @Test
     void shouldAllocateNothingPerCycle() {
         // architecture.md: the per-step path allocates nothing; executive + scheduler (AllocationMeter rule)
-        Executive quiet = new Executive(link, new SweepScheduler(TABLE, SweepParameters.defaults(), null), MARGIN, 2);
+        Executive quiet = new Executive(link, new SweepScheduler(DemoCup.INSTRUMENT, TABLE, DemoCup.parameters(), null), MARGIN, 2);
         long[] now = {0};
         AllocationMeter.assertAllocationFree(cycles -> {
             for (int k = 0; k < cycles; k++) {

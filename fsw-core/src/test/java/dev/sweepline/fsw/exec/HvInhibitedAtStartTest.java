@@ -1,5 +1,6 @@
 package dev.sweepline.fsw.exec;
 
+import dev.sweepline.fsw.DemoCup;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -45,7 +46,7 @@ class HvInhibitedAtStartTest {
 
     private final FswRig rig = new FswRig();
     private final HvCountingLink link = new HvCountingLink(rig.link);
-    private final FlightSoftware fsw = new FlightSoftware(new FlightConfig(), link, (f, off, len) -> { },
+    private final FlightSoftware fsw = new FlightSoftware(DemoCup.config(), link, (f, off, len) -> { },
             SweepListener.NONE);
     private final TcBuilder tc = TcBuilder.demo();
     private long now;

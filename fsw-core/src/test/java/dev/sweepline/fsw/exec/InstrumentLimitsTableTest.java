@@ -1,5 +1,6 @@
 package dev.sweepline.fsw.exec;
 
+import dev.sweepline.fsw.DemoCup;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertThrows;
@@ -35,7 +36,7 @@ class InstrumentLimitsTableTest {
     }
 
     private static ParameterTable logSpaced(int highVolts) {
-        return ParameterTable.of(WindowTable.logSpaced(64, 100_000, highVolts * 1000), SweepParameters.defaults());
+        return ParameterTable.of(WindowTable.logSpaced(64, 100_000, highVolts * 1000, DemoCup.INSTRUMENT.millivoltsPerCode()), DemoCup.parameters());
     }
 
     private int verify(FswRig rig, byte[] image) {
@@ -63,7 +64,7 @@ class InstrumentLimitsTableTest {
 
     @Test
     void shouldAcceptTheLimitItselfAndRefuseOneCodeAbove() {
-        InstrumentLimits demo = InstrumentLimits.demo();
+        InstrumentLimits demo = DemoCup.INSTRUMENT.limits();
         assertEquals(60_000, demo.maxLevelCode); // 6000 V / 0.1 V per code
         int[] low = {59_000};
         assertEquals(TableStatus.OK, demo.checkLevels(low, new int[] {60_000}, 1));
@@ -82,7 +83,7 @@ class InstrumentLimitsTableTest {
     @Test
     void shouldRefuseAnUnsafeStartUpConfiguration() {
         FlightConfig c = FswRig.benchConfig();
-        c.table = WindowTable.logSpaced(64, 100_000, 6_400_000);
+        c.table = WindowTable.logSpaced(64, 100_000, 6_400_000, DemoCup.INSTRUMENT.millivoltsPerCode());
         assertThrows(IllegalArgumentException.class, () -> new FswRig(c));
     }
 

@@ -1,5 +1,6 @@
 package dev.sweepline.fsw.host;
 
+import dev.sweepline.fsw.DemoCup;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertSame;
@@ -23,9 +24,9 @@ import org.junit.jupiter.api.Test;
 class HvShutdownTest {
     private final PipeTransport[] ends = PipeTransport.pair(1 << 16);
     private final FakeElectronics electronics = new FakeElectronics(ends[1]);
-    private final FramedInstrumentLink link = new FramedInstrumentLink(ends[0]);
+    private final FramedInstrumentLink link = new FramedInstrumentLink(ends[0], DemoCup.INSTRUMENT);
     private final HvArming arming = new HvArming(HvArming.DEFAULT_TIMEOUT_MICROS);
-    private final FlightSoftware fsw = new FlightSoftware(new FlightConfig(), new HvGuardLink(link, arming),
+    private final FlightSoftware fsw = new FlightSoftware(DemoCup.config(), new HvGuardLink(link, arming),
             (b, off, len) -> { }, SweepListener.NONE);
     private final ByteArrayOutputStream printed = new ByteArrayOutputStream();
     private long nowMicros;

@@ -1,5 +1,6 @@
 package dev.sweepline.fsw.nvm;
 
+import dev.sweepline.fsw.DemoCup;
 import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
@@ -71,7 +72,7 @@ class FileNonVolatileStoreTest {
         Files.write(file, new byte[0]);
         FileNonVolatileStore store = new FileNonVolatileStore(file);
         assertEquals(NonVolatileStore.EMPTY, store.read(NonVolatileStore.RECORD_TABLE, new byte[64]));
-        FlightConfig c = new FlightConfig();
+        FlightConfig c = DemoCup.config();
         c.nonVolatileStore = store;
         FlightSoftware fsw = new FlightSoftware(c, IDLE, (f, off, len) -> { }, SweepListener.NONE);
         assertEquals(TableManager.RESTORE_REJECTED, fsw.restoreStatus());

@@ -1,5 +1,6 @@
 package dev.sweepline.fsw.sweep;
 
+import dev.sweepline.fsw.DemoCup;
 import dev.sweepline.fsw.table.SweepParameters;
 import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
@@ -21,9 +22,9 @@ class GainPredictorTest {
 
     @BeforeEach
     void setUp() {
-        g = new GainPredictor();
+        g = new GainPredictor(DemoCup.INSTRUMENT);
         g.reset(128);
-        g.configure(SweepParameters.defaults());
+        g.configure(DemoCup.parameters());
     }
 
     @Test
@@ -95,7 +96,7 @@ class GainPredictorTest {
     @Test
     void shouldNeverSaturateAfterFirstSurveyNearTheSun() {
         RecordingListener l = new RecordingListener();
-        ClosedLoop loop = Fixtures.loop(Fixtures.nearSun(41), SweepParameters.defaults(), l);
+        ClosedLoop loop = Fixtures.loop(Fixtures.nearSun(41), DemoCup.parameters(), l);
         loop.runSweeps(1);
         int saturatedInFirst = l.saturatedSamples;
         loop.runSweeps(20);
@@ -114,7 +115,7 @@ class GainPredictorTest {
         // prediction would have chosen a higher range); drift between sweeps is nil here
         SyntheticInstrument plasma = Fixtures.nearSun(42);
         plasma.protonDensityPerCm3 = 20_000; // ~0.7 nA per quadrant at the peak, near range 1's 80 %
-        ClosedLoop loop = Fixtures.loop(plasma, SweepParameters.defaults(), new RecordingListener());
+        ClosedLoop loop = Fixtures.loop(plasma, DemoCup.parameters(), new RecordingListener());
         loop.runSweeps(3);
         Spectrum s = loop.scheduler.lastSpectrum();
         for (int i = 0; i < s.count(); i++) {

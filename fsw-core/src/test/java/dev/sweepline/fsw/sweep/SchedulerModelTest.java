@@ -1,5 +1,6 @@
 package dev.sweepline.fsw.sweep;
 
+import dev.sweepline.fsw.DemoCup;
 import dev.sweepline.fsw.link.StepCommand;
 import dev.sweepline.fsw.table.SweepParameters;
 import dev.sweepline.fsw.table.TableStatus;
@@ -32,7 +33,7 @@ class SchedulerModelTest {
         Random random = new Random(seed);
         SyntheticInstrument plasma = Fixtures.oneAu(seed);
         Model model = new Model();
-        SweepScheduler scheduler = new SweepScheduler(Fixtures.TABLE, SweepParameters.defaults(), model);
+        SweepScheduler scheduler = new SweepScheduler(DemoCup.INSTRUMENT, Fixtures.TABLE, DemoCup.parameters(), model);
         model.scheduler = scheduler;
         ClosedLoop loop = new ClosedLoop(scheduler, plasma);
         int focusSweepsSeen = 0;
@@ -88,7 +89,7 @@ class SchedulerModelTest {
         int count = s.windowCount();
         if (r.nextBoolean()) {
             int windows = 16 + r.nextInt(WindowTable.CAPACITY - 16 + 1);
-            assertEquals(TableStatus.OK, s.loadTable(WindowTable.logSpaced(windows, 50_000, 6_000_000)));
+            assertEquals(TableStatus.OK, s.loadTable(WindowTable.logSpaced(windows, 50_000, 6_000_000, DemoCup.INSTRUMENT.millivoltsPerCode())));
         } else {
             int[] lows = {100, 90};
             int[] highs = {150, 160};
@@ -98,7 +99,7 @@ class SchedulerModelTest {
     }
 
     private static void loadRandomParameters(SweepScheduler s, Random r) {
-        SweepParameters p = SweepParameters.defaults();
+        SweepParameters p = DemoCup.parameters();
         p.integrationPeriods = 1 + r.nextInt(16);
         p.resurveyEveryFocusSweeps = 1 + r.nextInt(20);
         p.halfWidthPerFwhmQ8 = r.nextInt(1024);

@@ -1,5 +1,6 @@
 package dev.sweepline.fsw.telemetry;
 
+import dev.sweepline.fsw.DemoCup;
 import dev.sweepline.fsw.link.InstrumentLink;
 import dev.sweepline.fsw.link.SampleReply;
 import dev.sweepline.fsw.link.StepCommand;
@@ -34,7 +35,7 @@ final class FaultyLink implements InstrumentLink {
         sends++;
         hasPending = sends % dropEvery != 0 && instrument.answer(step, pending);
         staleFirst = hasPending && sends % staleEvery == 0;
-        dueMicros = nowMicros + step.durationMicros() + LATENCY_MICROS;
+        dueMicros = nowMicros + step.durationMicros(DemoCup.MODULATION_PERIOD_MICROS) + LATENCY_MICROS;
         return true;
     }
 

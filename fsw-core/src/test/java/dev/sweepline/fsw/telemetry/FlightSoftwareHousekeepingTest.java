@@ -1,5 +1,6 @@
 package dev.sweepline.fsw.telemetry;
 
+import dev.sweepline.fsw.DemoCup;
 import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -34,7 +35,7 @@ class FlightSoftwareHousekeepingTest {
     void shouldWriteTheIcdImageOfItsCountersInTheLastHousekeepingPacket() {
         SyntheticInstrument plasma = new SyntheticInstrument(SEED); // 1 AU slow wind, 400 km/s
         FaultyLink link = new FaultyLink(plasma, 97, 89);
-        FlightConfig config = new FlightConfig();
+        FlightConfig config = DemoCup.config();
         config.hvEnabledAtStart = true; // as the simulator bench configures it (flight default: OFF)
         config.frameLength = 256;
         FlightSoftware fsw = new FlightSoftware(config, link, (f, off, len) ->

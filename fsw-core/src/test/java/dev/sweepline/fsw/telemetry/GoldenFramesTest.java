@@ -1,5 +1,6 @@
 package dev.sweepline.fsw.telemetry;
 
+import dev.sweepline.fsw.DemoCup;
 import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 
@@ -57,7 +58,7 @@ class GoldenFramesTest {
     void shouldPackTheGoldenSpectrumThroughTheTelemetryWriter() {
         // the writer's own path (APID by mode, CUC from the sweep's start, sequence per APID): the 8th
         // spectrum it writes carries sequence count 7, the golden packet's (make_golden_frames.py)
-        TelemetryWriter w = new TelemetryWriter(GoldenFrames.FRAME_LENGTH, Long.MAX_VALUE, time, false, sink);
+        TelemetryWriter w = new TelemetryWriter(GoldenFrames.FRAME_LENGTH, Long.MAX_VALUE, time, false, DemoCup.INSTRUMENT, sink);
         Spectrum s = goldenSpectrum();
         for (int i = 0; i <= 7; i++) {
             w.writeSpectrum(s, 4, 0, 0, 0);
@@ -117,7 +118,7 @@ class GoldenFramesTest {
 
     /** The golden spectrum packet: primary header, CUC, SpectrumPacker raw user data. */
     private byte[] spectrumPacket(int seq) {
-        SpectrumPacker packer = new SpectrumPacker(false);
+        SpectrumPacker packer = new SpectrumPacker(false, DemoCup.INSTRUMENT);
         byte[] buf = new byte[SpacePacket.PRIMARY_HEADER_LENGTH + CucTime.LENGTH + packer.maxUserDataLength()];
         Spectrum s = goldenSpectrum();
         int n = packer.write(s, 4, 0, 0, buf, SpacePacket.PRIMARY_HEADER_LENGTH + CucTime.LENGTH);
@@ -135,7 +136,7 @@ class GoldenFramesTest {
      */
     static Spectrum goldenSpectrum() {
         int[] gains = {0, 0, 0, 0, 0, 1, 1, 1, 2, 2, 1, 1, 0, 0, 0, 0};
-        Spectrum s = new Spectrum();
+        Spectrum s = new Spectrum(DemoCup.INSTRUMENT);
         SpectrumFill.begin(s, 0x0123, SweepMode.SURVEY, 40, 16, false, 10_500_000L);
         for (int i = 0; i < 16; i++) {
             boolean saturated = i == 8;

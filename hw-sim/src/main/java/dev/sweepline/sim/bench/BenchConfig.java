@@ -1,5 +1,6 @@
 package dev.sweepline.sim.bench;
 
+import dev.sweepline.fsw.instrument.InstrumentDescription;
 import dev.sweepline.fsw.table.SweepParameters;
 import dev.sweepline.fsw.table.WindowTable;
 import dev.sweepline.fsw.telemetry.TelemetryWriter;
@@ -23,11 +24,12 @@ public record BenchConfig(Scenario scenario, long seed, double durationSeconds, 
         SweepParameters parameters, InstrumentModel instrument, int frameLength, double allocationBitsPerSecond,
         boolean compressSpectra) {
 
-    /** The demo instrument with the default table, parameters and frame length, no allocation. */
+    /** The demo instrument with its default table and parameters, the default frame length, no allocation. */
     public static BenchConfig defaults(Scenario scenario, long seed, double durationSeconds) {
-        return new BenchConfig(scenario, seed, durationSeconds, WindowTable.defaultTable(),
-                SweepParameters.defaults(), InstrumentModel.demo(), TelemetryWriter.DEFAULT_FRAME_LENGTH, Double.NaN,
-                true);
+        InstrumentModel instrument = InstrumentModel.demo();
+        InstrumentDescription flight = instrument.flight();
+        return new BenchConfig(scenario, seed, durationSeconds, flight.defaultTable(), flight.defaultParameters(),
+                instrument, TelemetryWriter.DEFAULT_FRAME_LENGTH, Double.NaN, true);
     }
 
     /** This config with another downlink allocation. */

@@ -144,7 +144,8 @@ public final class ClosedLoopBench {
                 hooks.observer());
         SimulatedInstrument instrument = new SimulatedInstrument(config.instrument(), instrumentSeed(config.seed()));
         InProcessLink link = new InProcessLink(instrument, plasma::apply, recorder);
-        FlightConfig flight = new FlightConfig();
+        // the flight software is configured from the description the simulated instrument models
+        FlightConfig flight = FlightConfig.of(config.instrument().flight());
         flight.table = config.table();
         flight.parameters = config.parameters();
         flight.frameLength = config.frameLength();

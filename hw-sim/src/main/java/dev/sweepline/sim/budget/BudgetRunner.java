@@ -73,12 +73,13 @@ public final class BudgetRunner {
 
     static BudgetResult.Sample sampleOne(OrbitPlan plan, Phase phase, double hours, double distanceAu, long seed) {
         double seconds = plan.sampleMinutes() * 60;
-        SweepParameters parameters = SweepParameters.defaults();
+        InstrumentModel instrument = InstrumentModel.demo();
+        SweepParameters parameters = instrument.flight().defaultParameters();
         if (phase.mode() == Phase.Mode.SURVEY) {
             parameters.focusEnabled = 0;
         }
         BenchConfig config = new BenchConfig(DistanceScaling.at(plan.scenario(), distanceAu, seconds), seed, seconds,
-                WindowTable.defaultTable(), parameters, InstrumentModel.demo(), TelemetryWriter.DEFAULT_FRAME_LENGTH,
+                instrument.flight().defaultTable(), parameters, instrument, TelemetryWriter.DEFAULT_FRAME_LENGTH,
                 phase.allocationBitsPerSecond(), true);
         RunSummary s = ClosedLoopBench.run(config, ClosedLoopBench.Progress.NONE, ClosedLoopBench.Hooks.NONE.withSetup(fsw -> {
             if (phase.mode() == Phase.Mode.SAFE) {

@@ -74,8 +74,9 @@ public final class CampaignRunner {
 
     /** One job: set {@code set} on ensemble member {@code run}. */
     static RunRow runOne(CampaignSpec spec, int set, int run) {
+        InstrumentModel instrument = InstrumentModel.demo();
         BenchConfig config = new BenchConfig(spec.member(run), spec.runSeed(run), spec.durationSeconds(),
-                WindowTable.defaultTable(), spec.parameters(set), InstrumentModel.demo(),
+                instrument.flight().defaultTable(), spec.parameters(set), instrument,
                 TelemetryWriter.DEFAULT_FRAME_LENGTH, spec.allocationBitsPerSecond(), true);
         GroundCheck ground = new GroundCheck();
         ClosedLoopBench.Result r = ClosedLoopBench.run(config, ClosedLoopBench.Progress.NONE,

@@ -1,5 +1,7 @@
 package dev.sweepline.sim.command;
 
+import dev.sweepline.fsw.instrument.InstrumentDescription;
+import dev.sweepline.sim.instrument.InstrumentModel;
 import dev.sweepline.fsw.command.CommandCode;
 import dev.sweepline.fsw.command.ParameterTable;
 import dev.sweepline.fsw.command.TableImage;
@@ -171,7 +173,7 @@ public final class CommandScript {
 
     /** Notes a log-spaced table whose top edge lies above the demo instrument's voltage limit. */
     private static void warnAboveLimit(int line, String[] t, List<String> warnings) throws ScriptException {
-        InstrumentLimits limits = InstrumentLimits.demo();
+        InstrumentLimits limits = InstrumentModel.demo().flight().limits();
         long highMillivolts = number(t, 4, line) * 1000L;
         if (highMillivolts > limits.maxModulatorMillivolts) {
             warnings.add("line " + line + ": TABLE_LOGSPACED reaches " + number(t, 4, line) + " V, above the instrument's "
@@ -187,8 +189,9 @@ public final class CommandScript {
         int highVolts = number(t, 4, line);
         ParameterTable p;
         try {
-            p = ParameterTable.of(WindowTable.logSpaced(windows, lowVolts * 1000, highVolts * 1000),
-                    SweepParameters.defaults());
+            InstrumentDescription instrument = InstrumentModel.demo().flight();
+            p = ParameterTable.of(WindowTable.logSpaced(windows, lowVolts * 1000, highVolts * 1000,
+                    instrument.millivoltsPerCode()), instrument.defaultParameters());
         } catch (IllegalArgumentException e) {
             throw new ScriptException(line, e.getMessage());
         }

@@ -1,7 +1,7 @@
 package dev.sweepline.sim.scenario;
 
-import dev.sweepline.sim.yaml.FileFormatException;
-import dev.sweepline.sim.yaml.YamlTreeReader;
+import dev.sweepline.fsw.host.yaml.FileFormatException;
+import dev.sweepline.fsw.host.yaml.YamlTreeReader;
 import java.io.IOException;
 import java.io.InputStream;
 import java.io.UncheckedIOException;

@@ -1,5 +1,6 @@
 package dev.sweepline.sim.bench;
 
+import dev.sweepline.sim.instrument.InstrumentModel;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import dev.sweepline.fsw.sweep.SweepMode;
@@ -25,7 +26,7 @@ import org.junit.jupiter.api.Test;
 class FocusBandInformationTest {
     @Test
     void shouldNeverChooseABandThatCannotPinDownTheProtons() {
-        WindowVolts windows = new WindowVolts(WindowTable.defaultTable(), HvCalibration.demo());
+        WindowVolts windows = new WindowVolts(InstrumentModel.demo().flight().defaultTable(), HvCalibration.demo());
         FaradayCup cup = new FaradayCup(CupGeometry.demo());
         ProtonInformation info = new ProtonInformation(CupGeometry.demo());
         List<String> bad = new ArrayList<>();

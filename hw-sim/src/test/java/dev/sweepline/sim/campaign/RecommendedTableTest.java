@@ -57,7 +57,7 @@ class RecommendedTableTest {
         List<RunRow> flown = new ArrayList<>();
         for (int run = 0; run < spec.runsPerSet(); run++) {
             BenchConfig config = new BenchConfig(spec.member(run), spec.runSeed(run), spec.durationSeconds(),
-                    WindowTable.defaultTable(), SweepParameters.defaults(), InstrumentModel.demo(),
+                    InstrumentModel.demo().flight().defaultTable(), InstrumentModel.demo().flight().defaultParameters(), InstrumentModel.demo(),
                     TelemetryWriter.DEFAULT_FRAME_LENGTH, spec.allocationBitsPerSecond(), true);
             ClosedLoopBench.CycleHook restore = new ClosedLoopBench.CycleHook() {
                 @Override

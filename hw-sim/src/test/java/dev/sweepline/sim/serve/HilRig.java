@@ -1,5 +1,6 @@
 package dev.sweepline.sim.serve;
 
+import dev.sweepline.sim.instrument.InstrumentModel;
 import dev.sweepline.fsw.exec.FlightConfig;
 import dev.sweepline.fsw.exec.FlightSoftware;
 import dev.sweepline.fsw.link.InstrumentLink;
@@ -47,7 +48,7 @@ final class HilRig {
 
     /** The flight configuration of {@code config}, as ClosedLoopBench builds it. */
     static FlightConfig flightConfig(BenchConfig config) {
-        FlightConfig flight = new FlightConfig();
+        FlightConfig flight = FlightConfig.of(InstrumentModel.demo().flight());
         flight.table = config.table();
         flight.parameters = config.parameters();
         flight.frameLength = config.frameLength();

@@ -1,5 +1,6 @@
 package dev.sweepline.sim.serve;
 
+import dev.sweepline.sim.instrument.InstrumentModel;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -25,8 +26,8 @@ class LinkBudgetTest {
 
     @Test
     void shouldTimeSurveyAndFocusStepsAsTheSchedulerDoes() {
-        WindowTable t = WindowTable.defaultTable();
-        SweepParameters p = SweepParameters.defaults();
+        WindowTable t = InstrumentModel.demo().flight().defaultTable();
+        SweepParameters p = InstrumentModel.demo().flight().defaultParameters();
         LinkBudget survey = LinkBudget.survey(t, p, 115_200);
         LinkBudget focus = LinkBudget.focus(t, p, 115_200);
         System.out.println(survey.describe());
