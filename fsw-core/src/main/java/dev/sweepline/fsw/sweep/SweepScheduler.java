@@ -21,7 +21,7 @@ public final class SweepScheduler {
     private static final int NO_WINDOW = -1;
     private static final int NONE = ModeChangeReason.NONE;
 
-    private final SweepListener listener;
+    private SweepListener listener;
 
     private final ActiveConfiguration config;
     private final int[] dacLow;
@@ -53,6 +53,8 @@ public final class SweepScheduler {
     private int hvHighCode;
     private long ignoredReplies;
     private boolean hvPermitted = true;
+    /** Configurations applied since start (the start-up one is 0). */
+    private int generation;
 
     /**
      * Builds a scheduler for {@code instrument} that starts in SURVEY (reported as a START mode change
@@ -79,6 +81,14 @@ public final class SweepScheduler {
         this.band = new FocusBand(config.centreCode, this.params);
         gain.reset(config.windowCount());
         gain.configure(this.params);
+    }
+
+    /**
+     * Sets the listener of every callback (at start-up, before the first step, by whoever assembles the
+     * flight software around this scheduler); null for none.
+     */
+    public void listen(SweepListener l) {
+        listener = l == null ? SweepListener.NONE : l;
     }
 
     // ---------------------------------------------------------------- step path
@@ -165,21 +175,16 @@ public final class SweepScheduler {
 
     private void beginSweep(long nowMicros) {
         applyPending(nowMicros);
-        int first;
-        int last;
-        switch (mode) {
-            case SURVEY:
-                first = 0;
-                last = config.windowCount() - 1;
-                break;
-            case FOCUS:
-                first = band.first();
-                last = band.last();
-                break;
-            case SAFE:
-            default:
-                throw new IllegalStateException("no sweep in mode " + mode);
-        }
+        int first = switch (mode) {
+            case SURVEY -> 0;
+            case FOCUS -> band.first();
+            case SAFE -> throw new IllegalStateException("no sweep in mode " + mode);
+        };
+        int last = switch (mode) {
+            case SURVEY -> config.windowCount() - 1;
+            case FOCUS -> band.last();
+            case SAFE -> throw new IllegalStateException("no sweep in mode " + mode);
+        };
         // start from the end nearer the present HV level: consecutive surveys alternate direction
         int toFirst = Math.max(Math.abs(dacLow[first] - hvLowCode), Math.abs(dacHigh[first] - hvHighCode));
         int toLast = Math.max(Math.abs(dacLow[last] - hvLowCode), Math.abs(dacHigh[last] - hvHighCode));
@@ -202,32 +207,34 @@ public final class SweepScheduler {
         sweepNumber++;
         listener.onSweepComplete(done, nowMicros);
         switch (mode) {
-            case SURVEY:
-                if (done.peakValid() && params.focusEnabled != 0) {
-                    chooseBand(done, nowMicros);
-                    focusSweepsSinceSurvey = 0;
-                    changeMode(SweepMode.FOCUS, ModeChangeReason.LOCK_ACQUIRED, nowMicros);
-                }
-                break;
-            case FOCUS:
-                focusSweepsSinceSurvey++;
-                int lost = band.lossOfLock(done, config.windowCount());
-                if (lost == ModeChangeReason.PEAK_ON_EDGE && !band.searching() && params.edgeSearchWindows > 0) {
-                    band.searchBeyondEdge(done, config.windowCount());
-                    hash.add(band.first());
-                    hash.add(band.last());
-                    listener.onBandChosen(band.first(), band.last(), done.peakWindowQ8(), nowMicros);
-                } else if (lost != NONE) {
-                    changeMode(SweepMode.SURVEY, lost, nowMicros);
-                } else if (focusSweepsSinceSurvey >= params.resurveyEveryFocusSweeps) {
-                    changeMode(SweepMode.SURVEY, ModeChangeReason.RESURVEY, nowMicros);
-                } else {
-                    chooseBand(done, nowMicros);
-                }
-                break;
-            case SAFE:
-            default:
-                throw new IllegalStateException("sweep completed in mode " + mode);
+            case SURVEY -> afterSurvey(done, nowMicros);
+            case FOCUS -> afterFocus(done, nowMicros);
+            case SAFE -> throw new IllegalStateException("sweep completed in mode " + mode);
+        }
+    }
+
+    private void afterSurvey(Spectrum done, long nowMicros) {
+        if (done.peakValid() && params.focusEnabled != 0) {
+            chooseBand(done, nowMicros);
+            focusSweepsSinceSurvey = 0;
+            changeMode(SweepMode.FOCUS, ModeChangeReason.LOCK_ACQUIRED, nowMicros);
+        }
+    }
+
+    private void afterFocus(Spectrum done, long nowMicros) {
+        focusSweepsSinceSurvey++;
+        int lost = band.lossOfLock(done, config.windowCount());
+        if (lost == ModeChangeReason.PEAK_ON_EDGE && !band.searching() && params.edgeSearchWindows > 0) {
+            band.searchBeyondEdge(done, config.windowCount());
+            hash.add(band.first());
+            hash.add(band.last());
+            listener.onBandChosen(band.first(), band.last(), done.peakWindowQ8(), nowMicros);
+        } else if (lost != NONE) {
+            changeMode(SweepMode.SURVEY, lost, nowMicros);
+        } else if (focusSweepsSinceSurvey >= params.resurveyEveryFocusSweeps) {
+            changeMode(SweepMode.SURVEY, ModeChangeReason.RESURVEY, nowMicros);
+        } else {
+            chooseBand(done, nowMicros);
         }
     }
 
@@ -270,24 +277,20 @@ public final class SweepScheduler {
         sweepActive = false;
         awaitingWindow = NO_WINDOW;
         switch (requested) {
-            case SAFE:
+            case SAFE -> {
                 hvLowCode = 0;
                 hvHighCode = 0;
                 changeMode(SweepMode.SAFE, reason, nowMicros);
-                break;
-            case SURVEY:
-                changeMode(SweepMode.SURVEY, reason, nowMicros);
-                break;
-            case FOCUS:
+            }
+            case SURVEY -> changeMode(SweepMode.SURVEY, reason, nowMicros);
+            case FOCUS -> {
                 if (band.valid() && !config.tablePending()) {
                     focusSweepsSinceSurvey = 0;
                     changeMode(SweepMode.FOCUS, reason, nowMicros);
                 } else if (mode != SweepMode.SURVEY) {
                     changeMode(SweepMode.SURVEY, ModeChangeReason.NO_BAND, nowMicros);
                 }
-                break;
-            default:
-                throw new IllegalStateException("unknown mode " + requested);
+            }
         }
     }
 
@@ -322,6 +325,10 @@ public final class SweepScheduler {
 
     private void applyPending(long nowMicros) {
         int changed = config.applyPending();
+        if (changed != 0) {
+            generation++;
+            listener.onConfigurationApplied(changed, generation, nowMicros);
+        }
         if ((changed & ActiveConfiguration.PARAMETERS_CHANGED) != 0) {
             gain.configure(params);
         }

@@ -27,5 +27,10 @@ public enum SpectrumError {
      */
     UNUSED_OCTETS,
     /** Compression 0x01 but no CCSDS 121 decoder is plugged in. */
-    DECOMPRESSOR_UNAVAILABLE
+    DECOMPRESSOR_UNAVAILABLE,
+    /**
+     * A spectrum of layout version 2 (ICD §4) of an instrument or sample width this ground has no
+     * description for (it knows the demo cup, id 1, 16-bit samples), or an unknown layout version.
+     */
+    UNKNOWN_INSTRUMENT
 }

@@ -4,7 +4,9 @@ import dev.sweepline.ground.packet.CucTime;
 import dev.sweepline.ground.packet.SpacePacketHeader;
 
 /**
- * Decodes a spectrum packet (APIDs 0x100, 0x101) per ICD §4. User data after the 6-octet CUC time:
+ * Decodes a spectrum packet (APIDs 0x100, 0x101) per ICD §4. User data after the 6-octet CUC time, layout 1
+ * below; layout 2 puts version 0x82, the instrument id (2) and the sample width (1) before it, and is read
+ * for the demo cup (id 1, 16-bit samples) only:
  *
  * <pre>
  * off  octets  field
@@ -35,8 +37,16 @@ public final class SpectrumPacketDecoder {
     public static final int COMPRESSION_CCSDS121 = 0x01;
     /** Largest window count (ICD §4). */
     public static final int MAX_WINDOWS = 256;
-    /** Fixed part of the user data before the gain tags, octets (ICD §4). */
+    /** Fixed part of the user data before the gain tags, octets (ICD §4, layout 1). */
     static final int FIXED_OCTETS = 14;
+    /** First octet of layout version 2 (ICD §4): bit 7 set, version 2. */
+    static final int LAYOUT_VERSION_2 = 0x82;
+    /** Octets layout 2 puts before the layout-1 fields: version, instrument id, sample width (ICD §4). */
+    static final int LAYOUT_2_PREFIX_OCTETS = 4;
+    /** The instrument this ground has a description of: the demo cup (ICD §4, §8; instruments/demo-cup.yaml id). */
+    static final int DEMO_CUP_ID = 1;
+    /** The demo cup's sample width, bits (ICD §4: w = 16 for the demo cup). */
+    static final int DEMO_CUP_BITS = 16;
 
     private final QuadrantDecompressor ccsds121;
     private final WindowCatalogue windows;
@@ -77,6 +87,19 @@ public final class SpectrumPacketDecoder {
         }
         CucTime time = CucTime.read(pkt, off + SpacePacketHeader.OCTETS);
         int u = off + SpacePacketHeader.OCTETS + CucTime.OCTETS;
+        if ((pkt[u] & 0x80) != 0) {
+            // ICD §4 layout 2: version 0x82, instrument id (2), sample width w (1), then the layout-1 fields
+            int id = u16(pkt, u + 1);
+            int width = pkt[u + 3] & 0xFF;
+            if ((pkt[u] & 0xFF) != LAYOUT_VERSION_2 || id != DEMO_CUP_ID || width != DEMO_CUP_BITS) {
+                return SpectrumResult.fail(SpectrumError.UNKNOWN_INSTRUMENT, "layout 0x" + Integer.toHexString(pkt[u] & 0xFF)
+                        + ", instrument " + id + ", " + width + "-bit samples");
+            }
+            u += LAYOUT_2_PREFIX_OCTETS;
+            if (end - u < FIXED_OCTETS) {
+                return SpectrumResult.fail(SpectrumError.LENGTH_BEYOND_DATA, "packet of " + len + " octets");
+            }
+        }
         int mode = pkt[u] & 0xFF;
         if (mode != (apid == APID_SURVEY ? DecodedSpectrum.MODE_SURVEY : DecodedSpectrum.MODE_FOCUS)) {
             return SpectrumResult.fail(SpectrumError.BAD_MODE, "mode " + mode + " on APID " + Integer.toHexString(apid));

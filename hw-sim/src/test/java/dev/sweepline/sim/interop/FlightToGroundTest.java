@@ -126,7 +126,7 @@ class FlightToGroundTest {
         assertTrue(e.stepsSent() > 0xFF, "steps sent " + e.stepsSent()); // both low octets of the 32-bit field used
         assertTrue(fsw.lockLosses() > 0, "no lock loss: the shock at 40 s should break the lock");
         // ICD §5 offset 22: packet octets generated before this housekeeping packet (6 + 6 + 38 octets)
-        assertEquals(fsw.telemetry().counters().packetOctets() - (12 + FlightSoftware.HOUSEKEEPING_OCTETS),
+        assertEquals(fsw.telemetry().counters().packetOctets() - (12 + dev.sweepline.fsw.report.HousekeepingWriter.LENGTH),
                 h.telemetryOctets());
     }
 }

@@ -1,4 +1,4 @@
-package dev.sweepline.fsw.telemetry;
+package dev.sweepline.fsw.science;
 
 import dev.sweepline.fsw.DemoCup;
 import dev.sweepline.fsw.link.SampleReply;
@@ -10,6 +10,8 @@ import dev.sweepline.fsw.sweep.SweepListener;
 import dev.sweepline.fsw.sweep.SweepMode;
 import dev.sweepline.fsw.sweep.SweepScheduler;
 import dev.sweepline.fsw.sweep.SyntheticInstrument;
+import dev.sweepline.fsw.telemetry.CucTime;
+import dev.sweepline.fsw.telemetry.TelemetryWriter;
 import dev.sweepline.fsw.table.SweepParameters;
 import dev.sweepline.fsw.table.WindowTable;
 import java.util.concurrent.TimeUnit;
@@ -24,7 +26,7 @@ import org.openjdk.jmh.annotations.Setup;
 import org.openjdk.jmh.annotations.State;
 
 /**
- * Packing one realistic 128-window survey spectrum through {@link TelemetryWriter#writeSpectrum}: user data
+ * Packing one realistic 128-window survey spectrum through {@link SpectrumTelemetry#write}: user data
  * (header, gain tags, saturation flags, four quadrant streams CCSDS 121 coded or raw), primary and CUC
  * headers, counters, and transfer framing into a sink that discards the frames. The spectrum is the first
  * survey sweep the real scheduler makes of a 1 AU slow wind (physics.md worked case P1 plasma, canned
@@ -46,6 +48,7 @@ public class SpectrumPackingBenchmark {
 
     private final Spectrum spectrum = new Spectrum(DemoCup.INSTRUMENT);
     private TelemetryWriter writer;
+    private SpectrumTelemetry spectra;
     private int integrationPeriods;
     private long nowMicros;
 
@@ -75,15 +78,17 @@ public class SpectrumPackingBenchmark {
             throw new IllegalStateException("no full survey spectrum with a peak: " + spectrum.count());
         }
         integrationPeriods = DemoCup.parameters().integrationPeriods;
+        SpectrumPacker packer = new SpectrumPacker(compress, DemoCup.INSTRUMENT);
         writer = new TelemetryWriter(TelemetryWriter.DEFAULT_FRAME_LENGTH, Long.MAX_VALUE, new CucTime(0, 0),
-                compress, DemoCup.INSTRUMENT, (frame, offset, length) -> { });
+                packer.maxUserDataLength(), (frame, offset, length) -> { });
+        spectra = new SpectrumTelemetry(packer, writer);
     }
 
     /** Packs the spectrum once; returns the frames emitted so far so the work stays observable. */
     @Benchmark
     public long writeSpectrum() {
         nowMicros += SWEEP_MICROS;
-        writer.writeSpectrum(spectrum, integrationPeriods, 0, 0, nowMicros);
+        spectra.write(spectrum, integrationPeriods, 0, 0, nowMicros);
         return writer.framesEmitted();
     }
 }
