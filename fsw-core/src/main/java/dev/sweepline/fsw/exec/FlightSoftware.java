@@ -94,14 +94,16 @@ public final class FlightSoftware {
     /** The configured start-up table; one outside the instrument's limits is a configuration error, refused at once. */
     private static ParameterTable startUpTable(FlightConfig config) {
         ParameterTable startUp = ParameterTable.of(config.table, config.parameters);
-        startUp.housekeepingSeconds = (int) Math.max(ParameterTable.MIN_HOUSEKEEPING_SECONDS,
-                Math.min(ParameterTable.MAX_HOUSEKEEPING_SECONDS, config.housekeepingPeriodMicros / 1_000_000L));
-        startUp.faults.copyFrom(config.faults);
+        // the windows and parameters are held to the instrument's limits; the fault settings are the
+        // build's own and not held to a table's safe ranges (commands.md §6.1), so they come in after
         int status = TableImage.validate(startUp, config.instrument.limits());
         if (status != 0) {
             throw new IllegalArgumentException("start-up table refused against the instrument's limits: code "
                     + status + " (" + TableStatus.name(status) + ")");
         }
+        startUp.housekeepingSeconds = (int) Math.max(ParameterTable.MIN_HOUSEKEEPING_SECONDS,
+                Math.min(ParameterTable.MAX_HOUSEKEEPING_SECONDS, config.housekeepingPeriodMicros / 1_000_000L));
+        startUp.faults.copyFrom(config.faults);
         return startUp;
     }
 

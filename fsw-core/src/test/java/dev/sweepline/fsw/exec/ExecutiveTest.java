@@ -27,7 +27,7 @@ import static org.mockito.Mockito.times;
 import static org.mockito.Mockito.verify;
 import static org.mockito.Mockito.when;
 
-/** The executive's sequence, timeout, retry and safe behaviour (exec design note R1-R7). */
+/** The executive's sequence, timeout, retry and safe behaviour (exec design note E1-E8). */
 class ExecutiveTest {
     private static final WindowTable TABLE = DemoCup.table();
     /** First step from HV off: 1000 us + 519 codes * 1 us settle + 8 ms integration (issue 2 settle formula). */

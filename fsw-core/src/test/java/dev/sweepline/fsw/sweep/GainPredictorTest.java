@@ -11,7 +11,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 /**
  * Gain prediction and hysteresis (physics.md, noise and gain ranging: up above ~80 %, down below ~2 %
  * of full scale, ranges 32x apart). Full scale of one quadrant in range 0 is 65535 - 256 = 65279
- * counts above the pedestal (InstrumentConstants), so in range-0 units, with the Q16 fractions
+ * counts above the pedestal (instruments/demo-cup.yaml adc: 16 bits, pedestal 256), so in range-0 units, with the Q16 fractions
  * 52429 (0.80000) and 1311 (0.020004): up of range 0 = 65279 * 52429 >> 16 = 52223; down of range 1
  * = (65279 << 5) * 1311 >> 16 = 41787. The checks sit 2 units either side.
  */

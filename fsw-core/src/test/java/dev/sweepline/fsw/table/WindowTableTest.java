@@ -67,7 +67,7 @@ class WindowTableTest {
 
     @Test
     void shouldRefuseCodesOutsideDacRange() {
-        // 16-bit DAC: 0..65535 (InstrumentConstants.DAC_MAX_CODE)
+        // 16-bit DAC: 0..65535 (hardware ICD §3.1 16-bit codes; demo-cup.yaml modulator.dacBits 16)
         assertEquals(TableStatus.OUT_OF_DAC_RANGE, WindowTable.validate(new int[] {100, 60_000}, new int[] {200, 65_536}, 2));
         assertEquals(TableStatus.OUT_OF_DAC_RANGE, WindowTable.validate(new int[] {-1, 100}, new int[] {50, 200}, 2));
         assertEquals(TableStatus.OK, WindowTable.validate(new int[] {0, 60_000}, new int[] {200, 65_535}, 2));
