@@ -28,6 +28,7 @@ public final class Spectrum {
 
     private final int pedestalCounts;
     private final int rangeRatioShift;
+    private final int adcTopCode;
 
     private final int[] gainRange = new int[WindowTable.CAPACITY];
     private final int[] quadrant = new int[WindowTable.CAPACITY * Q];
@@ -53,6 +54,7 @@ public final class Spectrum {
     public Spectrum(InstrumentDescription instrument) {
         this.pedestalCounts = instrument.pedestalCounts();
         this.rangeRatioShift = instrument.rangeRatioShift();
+        this.adcTopCode = instrument.adcTopCode();
     }
 
     /** Sweep number, counting completed sweeps from 1. */
@@ -103,6 +105,16 @@ public final class Spectrum {
     /** Raw ADC counts of quadrant {@code q} (0..3) of entry {@code i}. */
     public int quadrant(int i, int q) {
         return quadrant[i * Q + q];
+    }
+
+    /** True when a quadrant of entry {@code i} reads the ADC's top code (saturated, FORMAT.md derived values). */
+    public boolean anyAtTop(int i) {
+        for (int q = 0; q < Q; q++) {
+            if (quadrant[i * Q + q] >= adcTopCode) {
+                return true;
+            }
+        }
+        return false;
     }
 
     /** Status bits of entry {@code i}: {@link SampleReply} {@code STATUS_*} and this class's. */

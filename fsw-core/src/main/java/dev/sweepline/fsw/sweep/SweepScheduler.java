@@ -132,7 +132,7 @@ public final class SweepScheduler {
         stepsIssued++;
         awaitingWindow = window;
         awaitingRange = range;
-        hashStep(out);
+        hash.addStep(out);
         listener.onStep(out, nowMicros);
         return true;
     }
@@ -156,7 +156,7 @@ public final class SweepScheduler {
         }
         int i = window - sweepFirst;
         building.store(i, reply, range, extra);
-        boolean saturated = (reply.status & SampleReply.STATUS_SATURATED) != 0 || anyAtTop(reply);
+        boolean saturated = (reply.status & SampleReply.STATUS_SATURATED) != 0 || building.anyAtTop(i);
         gain.record(window, building.maxQuadrantUnits(i), saturated, range);
         listener.onSample(lastStep, reply, nowMicros);
         if (stepsIssued == sweepSteps) {
@@ -164,27 +164,15 @@ public final class SweepScheduler {
         }
     }
 
-    private boolean anyAtTop(SampleReply reply) {
-        for (int q = 0; q < InstrumentDescription.QUADRANTS; q++) {
-            if (reply.quadrant[q] >= instrument.adcTopCode()) {
-                return true;
-            }
-        }
-        return false;
-    }
-
     private void beginSweep(long nowMicros) {
         applyPending(nowMicros);
-        int first = switch (mode) {
-            case SURVEY -> 0;
-            case FOCUS -> band.first();
+        boolean survey = switch (mode) {
+            case SURVEY -> true;
+            case FOCUS -> false;
             case SAFE -> throw new IllegalStateException("no sweep in mode " + mode);
         };
-        int last = switch (mode) {
-            case SURVEY -> config.windowCount() - 1;
-            case FOCUS -> band.last();
-            case SAFE -> throw new IllegalStateException("no sweep in mode " + mode);
-        };
+        int first = survey ? 0 : band.first();
+        int last = survey ? config.windowCount() - 1 : band.last();
         // start from the end nearer the present HV level: consecutive surveys alternate direction
         int toFirst = Math.max(Math.abs(dacLow[first] - hvLowCode), Math.abs(dacHigh[first] - hvHighCode));
         int toLast = Math.max(Math.abs(dacLow[last] - hvLowCode), Math.abs(dacHigh[last] - hvHighCode));
@@ -226,8 +214,7 @@ public final class SweepScheduler {
         int lost = band.lossOfLock(done, config.windowCount());
         if (lost == ModeChangeReason.PEAK_ON_EDGE && !band.searching() && params.edgeSearchWindows > 0) {
             band.searchBeyondEdge(done, config.windowCount());
-            hash.add(band.first());
-            hash.add(band.last());
+            hash.addBand(band.first(), band.last());
             listener.onBandChosen(band.first(), band.last(), done.peakWindowQ8(), nowMicros);
         } else if (lost != NONE) {
             changeMode(SweepMode.SURVEY, lost, nowMicros);
@@ -240,8 +227,7 @@ public final class SweepScheduler {
 
     private void chooseBand(Spectrum s, long nowMicros) {
         band.choose(s, config.windowCount());
-        hash.add(band.first());
-        hash.add(band.last());
+        hash.addBand(band.first(), band.last());
         listener.onBandChosen(band.first(), band.last(), s.peakWindowQ8(), nowMicros);
     }
 
@@ -352,16 +338,6 @@ public final class SweepScheduler {
         hash.add(to.ordinal());
         hash.add(reason);
         listener.onModeChange(from, to, reason, nowMicros);
-    }
-
-    private void hashStep(StepCommand s) {
-        hash.add(s.window);
-        hash.add(s.dacLow);
-        hash.add(s.dacHigh);
-        hash.add(s.gainRange);
-        hash.add(s.settleMicros);
-        hash.add(s.integrationPeriods);
-        hash.add(s.hvEnabled ? 1 : 0);
     }
 
     // ---------------------------------------------------------------- state

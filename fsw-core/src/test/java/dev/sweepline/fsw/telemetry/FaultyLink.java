@@ -12,7 +12,7 @@ import dev.sweepline.fsw.sweep.SyntheticInstrument;
  * sequence number of no step in flight (a sequence error), so that every housekeeping counter moves.
  * Replies arrive 100 µs after the step's duration.
  */
-final class FaultyLink implements InstrumentLink {
+public final class FaultyLink implements InstrumentLink {
     private static final long LATENCY_MICROS = 100;
 
     private final SyntheticInstrument instrument;
@@ -23,6 +23,11 @@ final class FaultyLink implements InstrumentLink {
     private boolean staleFirst;
     private long dueMicros;
     private long sends;
+
+    /** A link that loses nothing and delivers no stray reply: every step answered as commanded. */
+    public static FaultyLink faultless(SyntheticInstrument instrument) {
+        return new FaultyLink(instrument, Integer.MAX_VALUE, Integer.MAX_VALUE);
+    }
 
     FaultyLink(SyntheticInstrument instrument, int dropEvery, int staleEvery) {
         this.instrument = instrument;

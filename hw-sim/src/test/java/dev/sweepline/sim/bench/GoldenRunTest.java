@@ -19,21 +19,56 @@ import java.util.Arrays;
 import java.util.HexFormat;
 import org.junit.jupiter.api.Test;
 
-/** Probe (temporary): records one deterministic run's decision hash, telemetry and ground-decoded spectra. */
+/**
+ * One deterministic closed-loop run pinned byte for byte: the demo cup (instruments/demo-cup.yaml) on
+ * quiet-perihelion, seed 1, 60 s, default table and parameters, CCSDS 121 spectra.
+ *
+ * <p>How the values were obtained: the decision hash and the SHA-256 of the run's telemetry (every frame,
+ * ASM first) and of the ground-decoded spectra (one text line per spectrum: header fields, time, gain
+ * tags, saturation flags, every quadrant's samples) were recorded with this code before the instrument
+ * description replaced the compile-time constants, and again after: the decision hash and the decoded
+ * spectra are the same; the telemetry differs only where layout 2 of the spectrum packet (telemetry ICD
+ * §4) says, checked by splitting both streams into packets with a python reader written from the ICD:
+ * every spectrum packet equals the old one with the four octets of layout 2 (0x82, instrument id 1,
+ * width 16) removed, every event packet is the same, and housekeeping differs only in its telemetry-octet
+ * counter (ICD §5 offset 22), by 4 octets per spectrum generated before it. The values below are those of
+ * the run after the change. Set {@code -Dgolden.dir=DIR} to have the run's frames and spectra written there.
+ */
 class GoldenRunTest {
+    /** The decision hash: the same before and after the instrument description (see the class comment). */
+    static final String DECISION_HASH = "f44054cc20c6555f";
+    /** SHA-256 of the telemetry frames with spectrum packets of layout 2 (before: f57c8506...71b33, layout 1). */
+    static final String TELEMETRY_SHA256 = "e06d2dcc27a20426bee350b580a86d2a0f98a21eaa1889ab4918c629009ccc18";
+    /** SHA-256 of the ground-decoded spectra: the same before and after. */
+    static final String SPECTRA_SHA256 = "9c58b6d40c4d6bfb7470c41d3ead1dbaf691061c63b4b372a7f3cc98a0b64db8";
+
     @Test
-    void record() throws IOException, NoSuchAlgorithmException {
+    void shouldRepeatThePinnedRunByteForByte() throws IOException, NoSuchAlgorithmException {
         BenchConfig config = BenchConfig.defaults(ScenarioLoader.builtIn("quiet-perihelion"), 1, 60);
         ByteArrayOutputStream frames = new ByteArrayOutputStream();
         ClosedLoopBench.Result r = ClosedLoopBench.run(config, ClosedLoopBench.Progress.NONE,
                 (f, off, len) -> frames.write(f, off, len));
         byte[] tm = frames.toByteArray();
-        StringBuilder spectra = new StringBuilder();
+        byte[] spectra = decodedSpectra(tm);
+        String dir = System.getProperty("golden.dir");
+        if (dir != null) {
+            Files.createDirectories(Path.of(dir));
+            Files.write(Path.of(dir, "frames.bin"), tm);
+            Files.write(Path.of(dir, "spectra.txt"), spectra);
+        }
+        assertEquals(DECISION_HASH, r.summary().decisionHash());
+        assertEquals(TELEMETRY_SHA256, sha256(tm));
+        assertEquals(SPECTRA_SHA256, sha256(spectra));
+    }
+
+    /** The ground's spectra of {@code tm}, one line each, every field the decoder gives. */
+    private static byte[] decodedSpectra(byte[] tm) {
+        StringBuilder out = new StringBuilder();
         TelemetryDecoder decoder = new TelemetryDecoder(DecoderConfig.icdDefaults(), new Ccsds121QuadrantDecoder(),
                 new DecodeListener() {
                     @Override
                     public void onSpectrum(DecodedSpectrum s) {
-                        spectra.append(s.apid()).append(' ').append(s.sequenceCount()).append(' ').append(s.mode())
+                        out.append(s.apid()).append(' ').append(s.sequenceCount()).append(' ').append(s.mode())
                                 .append(' ').append(s.steppedDown()).append(' ').append(s.tableChanged()).append(' ')
                                 .append(s.sweep()).append(' ').append(s.tableId()).append(' ').append(s.firstWindow())
                                 .append(' ').append(s.windowCount()).append(' ').append(s.peakQ8()).append(' ')
@@ -46,17 +81,10 @@ class GoldenRunTest {
                 });
         decoder.accept(tm, 0, tm.length);
         decoder.finish();
-        Path dir = Path.of(System.getProperty("golden.dir", "target/golden-run"));
-        Files.createDirectories(dir);
-        Files.write(dir.resolve("frames.bin"), tm);
-        byte[] sp = spectra.toString().getBytes(StandardCharsets.UTF_8);
-        Files.write(dir.resolve("spectra.txt"), sp);
-        String line = "hash " + r.summary().decisionHash() + " tm " + sha(tm) + " spectra " + sha(sp) + "\n";
-        Files.writeString(dir.resolve("summary.txt"), line);
-        assertEquals(line, line);
+        return out.toString().getBytes(StandardCharsets.UTF_8);
     }
 
-    private static String sha(byte[] b) throws NoSuchAlgorithmException {
+    private static String sha256(byte[] b) throws NoSuchAlgorithmException {
         return HexFormat.of().formatHex(MessageDigest.getInstance("SHA-256").digest(b));
     }
 }
