@@ -1,9 +1,12 @@
 package dev.sweepline.fsw.exec;
 
 import dev.sweepline.fsw.command.NonVolatileStore;
+import dev.sweepline.fsw.command.ParameterTable;
+import dev.sweepline.fsw.command.TableImage;
 import dev.sweepline.fsw.fault.FaultSettings;
 import dev.sweepline.fsw.instrument.InstrumentDescription;
 import dev.sweepline.fsw.table.SweepParameters;
+import dev.sweepline.fsw.table.TableStatus;
 import dev.sweepline.fsw.table.WindowTable;
 import dev.sweepline.fsw.telemetry.TelemetryWriter;
 
@@ -72,6 +75,26 @@ public final class FlightConfig {
             throw new IllegalArgumentException("no instrument description");
         }
         return new FlightConfig(instrument);
+    }
+
+    /**
+     * The parameter table this configuration starts with: its table and parameters, held to the
+     * instrument's limits, then its housekeeping period and its fault settings (the build's own, not held
+     * to a table's safe ranges, commands.md §6.1).
+     *
+     * @throws IllegalArgumentException for a table or parameters outside the limits (a configuration error)
+     */
+    ParameterTable startUpTable() {
+        ParameterTable startUp = ParameterTable.of(table, parameters);
+        int status = TableImage.validate(startUp, instrument.limits());
+        if (status != 0) {
+            throw new IllegalArgumentException("start-up table refused against the instrument's limits: code "
+                    + status + " (" + TableStatus.name(status) + ")");
+        }
+        startUp.housekeepingSeconds = (int) Math.max(ParameterTable.MIN_HOUSEKEEPING_SECONDS,
+                Math.min(ParameterTable.MAX_HOUSEKEEPING_SECONDS, housekeepingPeriodMicros / 1_000_000L));
+        startUp.faults.copyFrom(faults);
+        return startUp;
     }
 
     /** The demo command key: octets 0..31 (commands.md §1.2). */

@@ -5,7 +5,6 @@ import dev.sweepline.fsw.command.CommandProcessor;
 import dev.sweepline.fsw.command.CommandReason;
 import dev.sweepline.fsw.command.HvInterlock;
 import dev.sweepline.fsw.command.ParameterTable;
-import dev.sweepline.fsw.command.TableImage;
 import dev.sweepline.fsw.command.TableManager;
 import dev.sweepline.fsw.fault.FaultProtection;
 import dev.sweepline.fsw.link.InstrumentLink;
@@ -18,7 +17,6 @@ import dev.sweepline.fsw.science.SpectrumTelemetry;
 import dev.sweepline.fsw.sweep.SweepListener;
 import dev.sweepline.fsw.sweep.SweepMode;
 import dev.sweepline.fsw.sweep.SweepScheduler;
-import dev.sweepline.fsw.table.TableStatus;
 import dev.sweepline.fsw.telemetry.CucTime;
 import dev.sweepline.fsw.telemetry.FrameSink;
 import dev.sweepline.fsw.telemetry.TelemetryWriter;
@@ -66,7 +64,7 @@ public final class FlightSoftware {
         this.spectra = new SpectrumTelemetry(packer, telemetry);
         this.housekeepingPacket = new HousekeepingWriter(telemetry);
         EventWriter events = new EventWriter(telemetry);
-        ParameterTable startUp = startUpTable(config);
+        ParameterTable startUp = config.startUpTable();
         this.tables = new TableManager(startUp, config.nonVolatileStore, config.instrument.limits());
         this.restoreStatus = tables.restore();
         ParameterTable inForce = tables.activeTable();
@@ -89,22 +87,6 @@ public final class FlightSoftware {
         this.commands = new CommandProcessor(authenticator, scheduler, hv, tables, new CommandReportWriter(telemetry),
                 new FlightTarget(scheduler, faults, routing, housekeeping, events));
         reportStartUp(events);
-    }
-
-    /** The configured start-up table; one outside the instrument's limits is a configuration error, refused at once. */
-    private static ParameterTable startUpTable(FlightConfig config) {
-        ParameterTable startUp = ParameterTable.of(config.table, config.parameters);
-        // the windows and parameters are held to the instrument's limits; the fault settings are the
-        // build's own and not held to a table's safe ranges (commands.md §6.1), so they come in after
-        int status = TableImage.validate(startUp, config.instrument.limits());
-        if (status != 0) {
-            throw new IllegalArgumentException("start-up table refused against the instrument's limits: code "
-                    + status + " (" + TableStatus.name(status) + ")");
-        }
-        startUp.housekeepingSeconds = (int) Math.max(ParameterTable.MIN_HOUSEKEEPING_SECONDS,
-                Math.min(ParameterTable.MAX_HOUSEKEEPING_SECONDS, config.housekeepingPeriodMicros / 1_000_000L));
-        startUp.faults.copyFrom(config.faults);
-        return startUp;
     }
 
     /** The start-up events: table restored, authentication restored, the recovery challenge when locked. */

@@ -8,7 +8,7 @@ import picocli.CommandLine.Command;
         description = {"The Faraday-cup flight software on a PC, on a serial or TCP link to the electronics.",
             "",
             HvText.CAUTION},
-        subcommands = {FswRunCommand.class, CommandLine.HelpCommand.class})
+        subcommands = {FswRunCommand.class, FswInstrumentsCommand.class, CommandLine.HelpCommand.class})
 public final class FswMain implements Runnable {
     @CommandLine.Spec
     private CommandLine.Model.CommandSpec spec;

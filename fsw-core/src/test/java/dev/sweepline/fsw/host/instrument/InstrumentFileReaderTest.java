@@ -16,8 +16,13 @@ import org.junit.jupiter.params.provider.Arguments;
 import org.junit.jupiter.params.provider.MethodSource;
 
 /** The instrument description reader (instruments/FORMAT.md, format sweepline-instrument/1). */
-class InstrumentFileReaderTest {
+public class InstrumentFileReaderTest {
     private static final String DEMO_TEXT = Instruments.BUILT_INS.resource("instruments/demo-cup.yaml");
+
+    /** The text of instruments/demo-cup.yaml, for tests that break it. */
+    public static String demoText() {
+        return DEMO_TEXT;
+    }
 
     @Test
     void shouldLoadEveryBuiltInWithItsOwnName() {
