@@ -3,8 +3,8 @@ package dev.sweepline.fsw.sweep;
 import dev.sweepline.fsw.DemoCup;
 import dev.sweepline.fsw.link.SampleReply;
 import dev.sweepline.fsw.link.StepCommand;
-import dev.sweepline.fsw.table.SweepParameters;
 import dev.sweepline.fsw.table.WindowTable;
+import java.util.concurrent.TimeUnit;
 import org.openjdk.jmh.annotations.Benchmark;
 import org.openjdk.jmh.annotations.BenchmarkMode;
 import org.openjdk.jmh.annotations.Level;
@@ -14,8 +14,6 @@ import org.openjdk.jmh.annotations.Scope;
 import org.openjdk.jmh.annotations.Setup;
 import org.openjdk.jmh.annotations.State;
 import org.openjdk.jmh.annotations.TearDown;
-
-import java.util.concurrent.TimeUnit;
 
 /**
  * One scheduler step: ingest the reply to the last step and choose the next one, against canned

@@ -1,12 +1,12 @@
 package dev.sweepline.fsw.command;
 
-import dev.sweepline.fsw.octets.BigEndian;
 import dev.sweepline.fsw.fault.FaultMonitorId;
 import dev.sweepline.fsw.instrument.InstrumentLimits;
+import dev.sweepline.fsw.octets.BigEndian;
+import dev.sweepline.fsw.octets.Crc16;
 import dev.sweepline.fsw.table.SweepParameters;
 import dev.sweepline.fsw.table.TableStatus;
 import dev.sweepline.fsw.table.WindowTable;
-import dev.sweepline.fsw.octets.Crc16;
 
 /**
  * The parameter table image (commands.md §4.1), octet by octet, big-endian:

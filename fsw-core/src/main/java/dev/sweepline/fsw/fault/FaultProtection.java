@@ -2,12 +2,12 @@ package dev.sweepline.fsw.fault;
 
 import dev.sweepline.fsw.link.SampleReply;
 import dev.sweepline.fsw.link.StepCommand;
+import dev.sweepline.fsw.report.EventWriter;
 import dev.sweepline.fsw.sweep.Spectrum;
 import dev.sweepline.fsw.sweep.SweepMode;
 import dev.sweepline.fsw.sweep.SweepScheduler;
 import dev.sweepline.fsw.table.SweepParameters;
 import dev.sweepline.fsw.table.TableStatus;
-import dev.sweepline.fsw.report.EventWriter;
 
 /**
  * Fault protection (fault design note): the monitors detect during the scheduler's callbacks, the

@@ -1,7 +1,7 @@
 package dev.sweepline.fsw.host;
 
-import picocli.CommandLine;
 import picocli.CommandLine.Command;
+import picocli.CommandLine;
 
 /** {@code sweepline-fsw.jar}: the flight software on a PC, talking to real or simulated electronics. */
 @Command(name = "sweepline-fsw", mixinStandardHelpOptions = true, version = "sweepline-fsw 0.1",

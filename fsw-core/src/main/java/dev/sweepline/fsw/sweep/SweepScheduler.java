@@ -194,10 +194,15 @@ public final class SweepScheduler {
         completed = done;
         sweepNumber++;
         listener.onSweepComplete(done, nowMicros);
-        switch (mode) {
-            case SURVEY -> afterSurvey(done, nowMicros);
-            case FOCUS -> afterFocus(done, nowMicros);
+        boolean surveyed = switch (mode) {
+            case SURVEY -> true;
+            case FOCUS -> false;
             case SAFE -> throw new IllegalStateException("sweep completed in mode " + mode);
+        };
+        if (surveyed) {
+            afterSurvey(done, nowMicros);
+        } else {
+            afterFocus(done, nowMicros);
         }
     }
 
@@ -262,22 +267,22 @@ public final class SweepScheduler {
         }
         sweepActive = false;
         awaitingWindow = NO_WINDOW;
-        switch (requested) {
-            case SAFE -> {
-                hvLowCode = 0;
-                hvHighCode = 0;
-                changeMode(SweepMode.SAFE, reason, nowMicros);
-            }
-            case SURVEY -> changeMode(SweepMode.SURVEY, reason, nowMicros);
-            case FOCUS -> {
-                if (band.valid() && !config.tablePending()) {
-                    focusSweepsSinceSurvey = 0;
-                    changeMode(SweepMode.FOCUS, reason, nowMicros);
-                } else if (mode != SweepMode.SURVEY) {
-                    changeMode(SweepMode.SURVEY, ModeChangeReason.NO_BAND, nowMicros);
-                }
-            }
+        SweepMode to = switch (requested) {
+            case SAFE -> SweepMode.SAFE;
+            case SURVEY -> SweepMode.SURVEY;
+            case FOCUS -> band.valid() && !config.tablePending() ? SweepMode.FOCUS : SweepMode.SURVEY;
+        };
+        int why = to == requested ? reason : ModeChangeReason.NO_BAND;
+        if (to == mode) {
+            return; // FOCUS without a band while surveying: nothing changes
         }
+        if (to == SweepMode.SAFE) {
+            hvLowCode = 0;
+            hvHighCode = 0;
+        } else if (to == SweepMode.FOCUS) {
+            focusSweepsSinceSurvey = 0;
+        }
+        changeMode(to, why, nowMicros);
     }
 
     /**

@@ -1,7 +1,7 @@
 package dev.sweepline.fsw.telemetry;
 
-import dev.sweepline.fsw.octets.Crc16;
 import dev.sweepline.fsw.octets.BigEndian;
+import dev.sweepline.fsw.octets.Crc16;
 /**
  * Packs space packets into fixed-length CCSDS 132.0-B-3 TM transfer frames (telemetry ICD §2):
  * packets of a virtual channel go back to back and span frames; the first header pointer marks the

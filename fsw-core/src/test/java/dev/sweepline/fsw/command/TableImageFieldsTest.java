@@ -1,13 +1,12 @@
 package dev.sweepline.fsw.command;
 
 import dev.sweepline.fsw.DemoCup;
-import static org.junit.jupiter.api.Assertions.assertEquals;
-
 import dev.sweepline.fsw.table.SweepParameters;
-import dev.sweepline.fsw.table.WindowTable;
 import java.lang.reflect.Field;
 import java.lang.reflect.Modifier;
 import org.junit.jupiter.api.Test;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
 
 /** Every sweep parameter survives the table image (commands.md §4.1), so a new field cannot be forgotten. */
 class TableImageFieldsTest {

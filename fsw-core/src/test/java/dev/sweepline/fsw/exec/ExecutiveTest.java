@@ -11,7 +11,6 @@ import dev.sweepline.fsw.sweep.RecordingListener;
 import dev.sweepline.fsw.sweep.SweepMode;
 import dev.sweepline.fsw.sweep.SweepScheduler;
 import dev.sweepline.fsw.sweep.SyntheticInstrument;
-import dev.sweepline.fsw.table.SweepParameters;
 import dev.sweepline.fsw.table.WindowTable;
 import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;

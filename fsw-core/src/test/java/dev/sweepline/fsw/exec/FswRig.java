@@ -6,7 +6,6 @@ import dev.sweepline.fsw.sweep.CannedReplies;
 import dev.sweepline.fsw.sweep.SweepListener;
 import dev.sweepline.fsw.sweep.SyntheticInstrument;
 import dev.sweepline.fsw.table.WindowTable;
-
 import java.util.Arrays;
 
 /** Flight software on a {@link FakeLink} with canned 1 AU replies, stepped like the bench loop. */

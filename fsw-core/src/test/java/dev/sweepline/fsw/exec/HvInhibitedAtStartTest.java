@@ -1,10 +1,6 @@
 package dev.sweepline.fsw.exec;
 
 import dev.sweepline.fsw.DemoCup;
-import static org.junit.jupiter.api.Assertions.assertEquals;
-import static org.junit.jupiter.api.Assertions.assertFalse;
-import static org.junit.jupiter.api.Assertions.assertTrue;
-
 import dev.sweepline.fsw.command.CommandCode;
 import dev.sweepline.fsw.command.CommandReason;
 import dev.sweepline.fsw.command.HvState;
@@ -14,6 +10,10 @@ import dev.sweepline.fsw.link.SampleReply;
 import dev.sweepline.fsw.link.StepCommand;
 import dev.sweepline.fsw.sweep.SweepListener;
 import org.junit.jupiter.api.Test;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
 
 /**
  * Hazardous functions start inhibited (common practice for spacecraft high-voltage functions;

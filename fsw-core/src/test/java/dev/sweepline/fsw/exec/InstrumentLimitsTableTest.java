@@ -1,11 +1,6 @@
 package dev.sweepline.fsw.exec;
 
 import dev.sweepline.fsw.DemoCup;
-import static org.junit.jupiter.api.Assertions.assertEquals;
-import static org.junit.jupiter.api.Assertions.assertFalse;
-import static org.junit.jupiter.api.Assertions.assertThrows;
-import static org.junit.jupiter.api.Assertions.assertTrue;
-
 import dev.sweepline.fsw.command.CommandCode;
 import dev.sweepline.fsw.command.CommandReason;
 import dev.sweepline.fsw.command.ParameterTable;
@@ -15,11 +10,15 @@ import dev.sweepline.fsw.command.TcBuilder;
 import dev.sweepline.fsw.fault.FaultMonitorId;
 import dev.sweepline.fsw.fault.FaultResponse;
 import dev.sweepline.fsw.instrument.InstrumentLimits;
-import dev.sweepline.fsw.table.SweepParameters;
 import dev.sweepline.fsw.table.TableStatus;
 import dev.sweepline.fsw.table.WindowTable;
 import java.util.Arrays;
 import org.junit.jupiter.api.Test;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
 
 /**
  * No table takes the instrument outside its own limits (commands.md §4.4, §6.1): the demo cup is

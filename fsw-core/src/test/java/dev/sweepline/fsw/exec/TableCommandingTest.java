@@ -7,11 +7,10 @@ import dev.sweepline.fsw.command.ParameterTable;
 import dev.sweepline.fsw.command.TableImage;
 import dev.sweepline.fsw.command.TableManager;
 import dev.sweepline.fsw.command.TcBuilder;
-import dev.sweepline.fsw.table.SweepParameters;
+import dev.sweepline.fsw.octets.Crc16;
 import dev.sweepline.fsw.table.TableStatus;
 import dev.sweepline.fsw.table.WindowTable;
 import dev.sweepline.fsw.telemetry.Apid;
-import dev.sweepline.fsw.octets.Crc16;
 import org.junit.jupiter.api.Test;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;

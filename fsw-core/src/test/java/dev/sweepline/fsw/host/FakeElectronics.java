@@ -9,7 +9,6 @@ import dev.sweepline.fsw.link.HousekeepingReply;
 import dev.sweepline.fsw.link.LinkCounters;
 import dev.sweepline.fsw.link.MessageType;
 import dev.sweepline.fsw.link.SampleReply;
-import dev.sweepline.fsw.link.SampleReplyCodec;
 import dev.sweepline.fsw.link.StepCommand;
 import dev.sweepline.fsw.link.StepCommandCodec;
 

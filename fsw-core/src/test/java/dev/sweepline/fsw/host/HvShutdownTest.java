@@ -1,12 +1,6 @@
 package dev.sweepline.fsw.host;
 
 import dev.sweepline.fsw.DemoCup;
-import static org.junit.jupiter.api.Assertions.assertEquals;
-import static org.junit.jupiter.api.Assertions.assertFalse;
-import static org.junit.jupiter.api.Assertions.assertSame;
-import static org.junit.jupiter.api.Assertions.assertTrue;
-
-import dev.sweepline.fsw.exec.FlightConfig;
 import dev.sweepline.fsw.exec.FlightSoftware;
 import dev.sweepline.fsw.link.FramedInstrumentLink;
 import dev.sweepline.fsw.link.PipeTransport;
@@ -15,6 +9,11 @@ import java.io.ByteArrayOutputStream;
 import java.io.PrintStream;
 import java.nio.charset.StandardCharsets;
 import org.junit.jupiter.api.Test;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertSame;
+import static org.junit.jupiter.api.Assertions.assertTrue;
 
 /**
  * The end of every run (hardware ICD §4.2): permission withdrawn, HV-off steps, the readback confirmed

@@ -1,13 +1,13 @@
 package dev.sweepline.fsw.link;
 
 import dev.sweepline.fsw.DemoCup;
+import dev.sweepline.fsw.sweep.AllocationMeter;
+import org.junit.jupiter.api.Test;
+
 import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
-
-import dev.sweepline.fsw.sweep.AllocationMeter;
-import org.junit.jupiter.api.Test;
 
 class FramedInstrumentLinkTest {
     @Test

@@ -1,11 +1,6 @@
 package dev.sweepline.fsw.nvm;
 
 import dev.sweepline.fsw.DemoCup;
-import static org.junit.jupiter.api.Assertions.assertArrayEquals;
-import static org.junit.jupiter.api.Assertions.assertEquals;
-import static org.junit.jupiter.api.Assertions.assertFalse;
-import static org.junit.jupiter.api.Assertions.assertTrue;
-
 import dev.sweepline.fsw.command.NonVolatileStore;
 import dev.sweepline.fsw.command.TableManager;
 import dev.sweepline.fsw.exec.FlightConfig;
@@ -23,6 +18,11 @@ import java.util.ArrayList;
 import java.util.List;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
+
+import static org.junit.jupiter.api.Assertions.assertArrayEquals;
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
 
 /**
  * The PC's non-volatile memory: durable writes (POSIX fsync(2) of the data before rename(2), then of

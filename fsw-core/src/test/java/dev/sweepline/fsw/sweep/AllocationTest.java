@@ -3,7 +3,6 @@ package dev.sweepline.fsw.sweep;
 import dev.sweepline.fsw.DemoCup;
 import dev.sweepline.fsw.link.SampleReply;
 import dev.sweepline.fsw.link.StepCommand;
-import dev.sweepline.fsw.table.SweepParameters;
 import org.junit.jupiter.api.Test;
 
 import static org.junit.jupiter.api.Assertions.assertTrue;

@@ -2,9 +2,9 @@ package dev.sweepline.fsw.sweep;
 
 import dev.sweepline.fsw.DemoCup;
 import dev.sweepline.fsw.table.SweepParameters;
+import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.ValueSource;
-import org.junit.jupiter.api.Test;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;

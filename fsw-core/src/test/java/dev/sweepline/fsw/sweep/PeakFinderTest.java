@@ -1,7 +1,6 @@
 package dev.sweepline.fsw.sweep;
 
 import dev.sweepline.fsw.DemoCup;
-import dev.sweepline.fsw.table.SweepParameters;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.ValueSource;

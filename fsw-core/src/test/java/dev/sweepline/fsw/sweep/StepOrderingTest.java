@@ -2,9 +2,8 @@ package dev.sweepline.fsw.sweep;
 
 import dev.sweepline.fsw.DemoCup;
 import dev.sweepline.fsw.table.SweepParameters;
-import org.junit.jupiter.api.Test;
-
 import java.util.List;
+import org.junit.jupiter.api.Test;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;

@@ -4,7 +4,6 @@ import dev.sweepline.fsw.DemoCup;
 import dev.sweepline.fsw.instrument.InstrumentDescription;
 import dev.sweepline.fsw.link.SampleReply;
 import dev.sweepline.fsw.link.StepCommand;
-
 import java.util.Random;
 
 /**

@@ -1,9 +1,6 @@
 package dev.sweepline.fsw.telemetry;
 
 import dev.sweepline.fsw.DemoCup;
-import static org.junit.jupiter.api.Assertions.assertArrayEquals;
-import static org.junit.jupiter.api.Assertions.assertEquals;
-
 import dev.sweepline.fsw.host.instrument.Instruments;
 import dev.sweepline.fsw.instrument.InstrumentDescription;
 import dev.sweepline.fsw.link.SampleReply;
@@ -19,6 +16,9 @@ import java.util.Arrays;
 import java.util.HexFormat;
 import java.util.List;
 import org.junit.jupiter.api.Test;
+
+import static org.junit.jupiter.api.Assertions.assertArrayEquals;
+import static org.junit.jupiter.api.Assertions.assertEquals;
 
 /**
  * fsw-core's own writers (TransferFrameBuilder, SpacePacket, CucTime, SpectrumPacker raw, the ICD §5

@@ -2,7 +2,6 @@ package dev.sweepline.sim.budget;
 
 import dev.sweepline.fsw.sweep.SweepMode;
 import dev.sweepline.fsw.table.SweepParameters;
-import dev.sweepline.fsw.table.WindowTable;
 import dev.sweepline.fsw.telemetry.TelemetryWriter;
 import dev.sweepline.sim.bench.BenchConfig;
 import dev.sweepline.sim.bench.ClosedLoopBench;

@@ -6,7 +6,6 @@ import com.fasterxml.jackson.databind.SerializationFeature;
 import dev.sweepline.fsw.command.ParameterTable;
 import dev.sweepline.fsw.command.TableImage;
 import dev.sweepline.fsw.table.SweepParameters;
-import dev.sweepline.fsw.table.WindowTable;
 import java.io.IOException;
 import java.io.Writer;
 import java.nio.file.Files;

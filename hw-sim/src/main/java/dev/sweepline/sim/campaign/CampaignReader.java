@@ -6,7 +6,6 @@ import dev.sweepline.fsw.command.ParameterTable;
 import dev.sweepline.fsw.command.TableImage;
 import dev.sweepline.fsw.instrument.InstrumentLimits;
 import dev.sweepline.fsw.table.TableStatus;
-import dev.sweepline.fsw.table.WindowTable;
 import dev.sweepline.sim.scenario.PlasmaParameter;
 import dev.sweepline.sim.scenario.Scenario;
 import dev.sweepline.sim.scenario.ScenarioLoader;

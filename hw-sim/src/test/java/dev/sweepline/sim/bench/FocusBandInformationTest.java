@@ -4,7 +4,6 @@ import dev.sweepline.sim.instrument.InstrumentModel;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import dev.sweepline.fsw.sweep.SweepMode;
-import dev.sweepline.fsw.table.WindowTable;
 import dev.sweepline.sim.cup.CupGeometry;
 import dev.sweepline.sim.cup.FaradayCup;
 import dev.sweepline.sim.design.ProtonInformation;

@@ -8,8 +8,6 @@ import dev.sweepline.fsw.command.CommandReason;
 import dev.sweepline.fsw.command.TableImage;
 import dev.sweepline.fsw.exec.FlightConfig;
 import dev.sweepline.fsw.nvm.FileNonVolatileStore;
-import dev.sweepline.fsw.table.SweepParameters;
-import dev.sweepline.fsw.table.WindowTable;
 import dev.sweepline.fsw.telemetry.TelemetryWriter;
 import dev.sweepline.sim.bench.BenchConfig;
 import dev.sweepline.sim.bench.ClosedLoopBench;

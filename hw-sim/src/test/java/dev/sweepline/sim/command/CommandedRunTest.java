@@ -6,7 +6,6 @@ import dev.sweepline.fsw.command.CommandReason;
 import dev.sweepline.fsw.command.ParameterTable;
 import dev.sweepline.fsw.command.TableImage;
 import dev.sweepline.fsw.nvm.FileNonVolatileStore;
-import dev.sweepline.fsw.table.SweepParameters;
 import dev.sweepline.fsw.table.WindowTable;
 import dev.sweepline.ground.decode.CommandReport;
 import dev.sweepline.ground.decode.EventReport;

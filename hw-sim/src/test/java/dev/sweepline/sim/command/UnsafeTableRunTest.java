@@ -6,7 +6,6 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import dev.sweepline.fsw.command.CommandCode;
 import dev.sweepline.fsw.command.CommandReason;
-import dev.sweepline.fsw.instrument.InstrumentLimits;
 import dev.sweepline.fsw.link.StepCommand;
 import dev.sweepline.fsw.sweep.SweepListener;
 import dev.sweepline.sim.bench.BenchConfig;

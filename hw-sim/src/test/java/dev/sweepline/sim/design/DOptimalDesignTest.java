@@ -5,7 +5,6 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertNotNull;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import dev.sweepline.fsw.table.WindowTable;
 import dev.sweepline.sim.bench.WindowVolts;
 import dev.sweepline.sim.cup.CupGeometry;
 import dev.sweepline.sim.cup.FaradayCup;

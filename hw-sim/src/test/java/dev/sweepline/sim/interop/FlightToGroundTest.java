@@ -9,7 +9,6 @@ import dev.sweepline.fsw.exec.Executive;
 import dev.sweepline.fsw.exec.FlightConfig;
 import dev.sweepline.fsw.exec.FlightSoftware;
 import dev.sweepline.fsw.sweep.SweepMode;
-import dev.sweepline.fsw.table.SweepParameters;
 import dev.sweepline.fsw.telemetry.Apid;
 import dev.sweepline.ground.decode.DecodeListener;
 import dev.sweepline.ground.decode.DecodeStats;
