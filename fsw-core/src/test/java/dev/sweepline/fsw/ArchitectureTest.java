@@ -9,6 +9,7 @@ import static com.tngtech.archunit.core.domain.JavaClass.Predicates.resideInAnyP
 import static com.tngtech.archunit.core.domain.JavaClass.Predicates.type;
 import static com.tngtech.archunit.lang.syntax.ArchRuleDefinition.classes;
 import static com.tngtech.archunit.lang.syntax.ArchRuleDefinition.noClasses;
+import static com.tngtech.archunit.library.dependencies.SlicesRuleDefinition.slices;
 
 /**
  * The flight software's dependency rules (architecture.md, modules: core packages use the JDK alone,
@@ -63,4 +64,28 @@ class ArchitectureTest {
     static final ArchRule coreDoesNotDependOnHost = noClasses()
         .that().resideInAPackage(CORE).and().resideOutsideOfPackage(HOST).and().resideOutsideOfPackage(NVM)
         .should().dependOnClassesThat().resideInAnyPackage(HOST, NVM);
+
+    /**
+     * The packages form no cycle (review of the instrument re-layering: link, telemetry, sweep and table
+     * once depended on each other through the CRC and the instrument constants): octets and instrument at
+     * the bottom, telemetry CCSDS only, science and report above it, exec wiring them; host on top of all.
+     */
+    @ArchTest
+    static final ArchRule packagesAreFreeOfCycles = slices().matching("dev.sweepline.fsw.(*)..").should().beFreeOfCycles();
+
+    /** The CCSDS layer knows no science: telemetry depends on octets alone among the flight packages. */
+    @ArchTest
+    static final ArchRule telemetryIsCcsdsOnly = classes()
+        .that().resideInAPackage("dev.sweepline.fsw.telemetry..")
+        .should().onlyDependOnClassesThat(resideInAnyPackage("java.lang..", "dev.sweepline.fsw.telemetry..",
+            "dev.sweepline.fsw.octets..").or(type(java.util.Arrays.class)));
+
+    /** The instrument description and the octet helpers depend on no other flight package but the table's. */
+    @ArchTest
+    static final ArchRule instrumentAndOctetsAreAtTheBottom = noClasses()
+        .that().resideInAnyPackage("dev.sweepline.fsw.instrument..", "dev.sweepline.fsw.octets..")
+        .should().dependOnClassesThat().resideInAnyPackage("dev.sweepline.fsw.link..", "dev.sweepline.fsw.sweep..",
+            "dev.sweepline.fsw.telemetry..", "dev.sweepline.fsw.science..", "dev.sweepline.fsw.report..",
+            "dev.sweepline.fsw.command..", "dev.sweepline.fsw.fault..", "dev.sweepline.fsw.exec..",
+            "dev.sweepline.fsw.compress..");
 }

@@ -1,9 +1,10 @@
 package dev.sweepline.fsw.sweep;
 
+import dev.sweepline.fsw.DemoCup;
 import dev.sweepline.fsw.link.SampleReply;
 import dev.sweepline.fsw.link.StepCommand;
-import dev.sweepline.fsw.table.SweepParameters;
 import dev.sweepline.fsw.table.WindowTable;
+import java.util.concurrent.TimeUnit;
 import org.openjdk.jmh.annotations.Benchmark;
 import org.openjdk.jmh.annotations.BenchmarkMode;
 import org.openjdk.jmh.annotations.Level;
@@ -13,8 +14,6 @@ import org.openjdk.jmh.annotations.Scope;
 import org.openjdk.jmh.annotations.Setup;
 import org.openjdk.jmh.annotations.State;
 import org.openjdk.jmh.annotations.TearDown;
-
-import java.util.concurrent.TimeUnit;
 
 /**
  * One scheduler step: ingest the reply to the last step and choose the next one, against canned
@@ -52,10 +51,10 @@ public class SchedulerStepBenchmark {
     /** Builds the scheduler and the canned replies and issues the first step. */
     @Setup(Level.Trial)
     public void setUp() {
-        WindowTable table = WindowTable.defaultTable();
+        WindowTable table = DemoCup.table();
         SyntheticInstrument plasma = new SyntheticInstrument(20261201L);
         canned = new CannedReplies(table, plasma);
-        scheduler = new SweepScheduler(table, SweepParameters.defaults(), counter);
+        scheduler = new SweepScheduler(DemoCup.INSTRUMENT, table, DemoCup.parameters(), counter);
         scheduler.nextStep(step, nowMicros);
     }
 
@@ -71,7 +70,7 @@ public class SchedulerStepBenchmark {
     /** Ingest one sample, choose the next step. */
     @Benchmark
     public int step() {
-        nowMicros += step.durationMicros();
+        nowMicros += step.durationMicros(DemoCup.MODULATION_PERIOD_MICROS);
         canned.answer(step, reply);
         scheduler.ingest(reply, nowMicros);
         scheduler.nextStep(step, nowMicros);

@@ -1,6 +1,7 @@
 package dev.sweepline.fsw.command;
 
-import dev.sweepline.fsw.telemetry.Crc16;
+import dev.sweepline.fsw.octets.BigEndian;
+import dev.sweepline.fsw.octets.Crc16;
 
 /**
  * The anti-replay record kept in non-volatile memory (commands.md §1.3), 10 octets, big-endian:
@@ -30,17 +31,11 @@ public final class AuthRecord {
 
     /** Writes the record of {@code lastAccepted} into {@code b}; returns {@link #OCTETS}. */
     public static int encode(long lastAccepted, byte[] b) {
-        b[0] = (byte) (MARKER >>> 8);
-        b[1] = (byte) MARKER;
+        BigEndian.put16(b, 0, MARKER);
         b[2] = VERSION;
         b[3] = 0;
-        b[4] = (byte) (lastAccepted >>> 24);
-        b[5] = (byte) (lastAccepted >>> 16);
-        b[6] = (byte) (lastAccepted >>> 8);
-        b[7] = (byte) lastAccepted;
-        int crc = Crc16.of(b, 0, OCTETS - 2);
-        b[8] = (byte) (crc >>> 8);
-        b[9] = (byte) crc;
+        BigEndian.put32(b, 4, lastAccepted);
+        BigEndian.put16(b, 8, Crc16.of(b, 0, OCTETS - 2));
         return OCTETS;
     }
 

@@ -1,10 +1,9 @@
 package dev.sweepline.fsw.command;
 
+import dev.sweepline.fsw.report.CommandReportWriter;
 import dev.sweepline.fsw.sweep.ModeChangeReason;
 import dev.sweepline.fsw.sweep.SweepMode;
 import dev.sweepline.fsw.sweep.SweepScheduler;
-import dev.sweepline.fsw.telemetry.Apid;
-import dev.sweepline.fsw.telemetry.TelemetryWriter;
 
 /**
  * Accepts, validates and executes telecommands (commands.md): header, length, MAC, sequence, code,
@@ -15,19 +14,17 @@ import dev.sweepline.fsw.telemetry.TelemetryWriter;
  */
 public final class CommandProcessor {
     /** Report type: acceptance (success or rejection). */
-    public static final int REPORT_ACCEPTANCE = 1;
+    public static final int REPORT_ACCEPTANCE = CommandReportWriter.ACCEPTANCE;
     /** Report type: execution (success or failure; a dump carries data). */
-    public static final int REPORT_EXECUTION = 2;
-    /** User data octets of a report without dump data. */
-    public static final int REPORT_OCTETS = 14;
-    /** Octets a dump report adds before its data: copy, offset, length. */
-    public static final int DUMP_HEADER_OCTETS = 5;
+    public static final int REPORT_EXECUTION = CommandReportWriter.EXECUTION;
+    /** The longest report this processor sends: a dump of {@link CommandCode#MAX_DUMP_OCTETS}. */
+    public static final int MAX_REPORT_OCTETS = CommandReportWriter.maxLength(CommandCode.MAX_DUMP_OCTETS);
 
     private final CommandAuthenticator auth;
     private final SweepScheduler scheduler;
     private final HvInterlock hv;
     private final TableManager tables;
-    private final TelemetryWriter telemetry;
+    private final CommandReportWriter reports;
     private final CommandTarget target;
     private final long[] rejectedByReason = new long[CommandReason.COUNT];
 
@@ -38,12 +35,12 @@ public final class CommandProcessor {
 
     /** A processor acting on these parts. */
     public CommandProcessor(CommandAuthenticator auth, SweepScheduler scheduler, HvInterlock hv, TableManager tables,
-                            TelemetryWriter telemetry, CommandTarget target) {
+                            CommandReportWriter reports, CommandTarget target) {
         this.auth = auth;
         this.scheduler = scheduler;
         this.hv = hv;
         this.tables = tables;
-        this.telemetry = telemetry;
+        this.reports = reports;
         this.target = target;
     }
 
@@ -101,11 +98,11 @@ public final class CommandProcessor {
             case CommandCode.AUTH_RECOVER: // checked by the authenticator (challenge), nothing more to check
                 return CommandReason.OK;
             case CommandCode.SET_MODE: {
-                int mode = b[a] & 0xFF;
-                if (mode > 2) {
+                SweepMode mode = SweepMode.fromIcdCode(b[a] & 0xFF);
+                if (mode == null) {
                     return CommandReason.ARGUMENT_RANGE;
                 }
-                return mode != 0 && !hv.enabled() ? CommandReason.HV_NOT_ENABLED : CommandReason.OK;
+                return mode != SweepMode.SAFE && !hv.enabled() ? CommandReason.HV_NOT_ENABLED : CommandReason.OK;
             }
             case CommandCode.HV_ENABLE:
                 return hv.canEnable(nowMicros) ? CommandReason.OK : CommandReason.NOT_ARMED;
@@ -182,21 +179,13 @@ public final class CommandProcessor {
         }
     }
 
+    /** SET_MODE: the mode of the ICD code (range-checked at acceptance); SAFE also disables the HV interlock. */
     private int setMode(int modeCode, long nowMicros) {
-        switch (modeCode) {
-            case 0:
-                hv.disable();
-                scheduler.requestMode(SweepMode.SAFE, ModeChangeReason.COMMANDED, nowMicros);
-                break;
-            case 1:
-                scheduler.requestMode(SweepMode.SURVEY, ModeChangeReason.COMMANDED, nowMicros);
-                break;
-            case 2:
-                scheduler.requestMode(SweepMode.FOCUS, ModeChangeReason.COMMANDED, nowMicros);
-                break;
-            default:
-                throw new IllegalStateException("mode passed the range check: " + modeCode);
+        SweepMode mode = SweepMode.fromIcdCode(modeCode);
+        if (mode == SweepMode.SAFE) {
+            hv.disable();
         }
+        scheduler.requestMode(mode, ModeChangeReason.COMMANDED, nowMicros);
         return CommandReason.OK;
     }
 
@@ -213,38 +202,13 @@ public final class CommandProcessor {
     private int writeDump(byte[] cmd, int off) {
         int a = off + Telecommand.ARGUMENTS_AT;
         int copy = cmd[a] & 0xFF;
-        int offset = Telecommand.u16(cmd, a + 1);
-        int octets = Telecommand.u16(cmd, a + 3);
-        byte[] r = telemetry.buffer();
-        int p = telemetry.userDataOffset() + REPORT_OCTETS;
-        r[p] = (byte) copy;
-        r[p + 1] = (byte) (offset >>> 8);
-        r[p + 2] = (byte) offset;
-        r[p + 3] = (byte) (octets >>> 8);
-        r[p + 4] = (byte) octets;
-        System.arraycopy(tables.image(copy), offset, r, p + DUMP_HEADER_OCTETS, octets);
-        return DUMP_HEADER_OCTETS + octets;
+        return reports.dump(copy, tables.image(copy), Telecommand.u16(cmd, a + 1), Telecommand.u16(cmd, a + 3));
     }
 
     private void report(int type, int code, int packetSequence, long authSequence, int status, int detail,
                         int extraOctets, long nowMicros) {
-        byte[] r = telemetry.buffer();
-        int p = telemetry.userDataOffset();
-        r[p] = (byte) type;
-        r[p + 1] = (byte) code;
-        r[p + 2] = (byte) (packetSequence >>> 8);
-        r[p + 3] = (byte) packetSequence;
-        r[p + 4] = (byte) (authSequence >>> 24);
-        r[p + 5] = (byte) (authSequence >>> 16);
-        r[p + 6] = (byte) (authSequence >>> 8);
-        r[p + 7] = (byte) authSequence;
-        r[p + 8] = (byte) status;
-        r[p + 9] = (byte) detail;
-        r[p + 10] = (byte) (accepted >>> 8);
-        r[p + 11] = (byte) accepted;
-        r[p + 12] = (byte) (rejected >>> 8);
-        r[p + 13] = (byte) rejected;
-        telemetry.sendEngineering(Apid.COMMAND_REPORT, REPORT_OCTETS + extraOctets, nowMicros, nowMicros);
+        reports.write(type, code, packetSequence, authSequence, status, detail, accepted, rejected, extraOctets,
+                nowMicros);
     }
 
     private void resetCounters() {

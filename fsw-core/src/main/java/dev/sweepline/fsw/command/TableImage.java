@@ -2,10 +2,11 @@ package dev.sweepline.fsw.command;
 
 import dev.sweepline.fsw.fault.FaultMonitorId;
 import dev.sweepline.fsw.instrument.InstrumentLimits;
+import dev.sweepline.fsw.octets.BigEndian;
+import dev.sweepline.fsw.octets.Crc16;
 import dev.sweepline.fsw.table.SweepParameters;
 import dev.sweepline.fsw.table.TableStatus;
 import dev.sweepline.fsw.table.WindowTable;
-import dev.sweepline.fsw.telemetry.Crc16;
 
 /**
  * The parameter table image (commands.md §4.1), octet by octet, big-endian:
@@ -110,17 +111,11 @@ public final class TableImage {
 
     /** Validates decoded values against {@code limits}: the same codes as {@link #decode}. */
     public static int validate(ParameterTable t, InstrumentLimits limits) {
-        int status = WindowTable.validate(t.dacLow, t.dacHigh, t.windowCount);
-        if (status == TableStatus.OK) {
-            status = limits.checkLevels(t.dacLow, t.dacHigh, t.windowCount);
-        }
+        int status = limits.validateTable(t.dacLow, t.dacHigh, t.windowCount);
         if (status != TableStatus.OK) {
             return status;
         }
-        status = t.sweep.validate();
-        if (status == TableStatus.OK) {
-            status = limits.checkSettle(t.sweep);
-        }
+        status = limits.validateParameters(t.sweep);
         if (status != TableStatus.OK) {
             return status;
         }
@@ -213,16 +208,14 @@ public final class TableImage {
     }
 
     private static int s32(byte[] b, int i) {
-        return (int) Telecommand.u32(b, i);
+        return BigEndian.get32(b, i);
     }
 
     private static void put16(byte[] b, int i, int v) {
-        b[i] = (byte) (v >>> 8);
-        b[i + 1] = (byte) v;
+        BigEndian.put16(b, i, v);
     }
 
     private static void put32(byte[] b, int i, int v) {
-        put16(b, i, v >>> 16);
-        put16(b, i + 2, v);
+        BigEndian.put32(b, i, v);
     }
 }

@@ -1,5 +1,6 @@
 package dev.sweepline.fsw.command;
 
+import dev.sweepline.fsw.octets.BigEndian;
 /**
  * The telecommand packet (commands.md §1), a CCSDS 133.0-B-2 space packet of type TC: offsets and
  * readers over a byte array. Big-endian.
@@ -35,12 +36,12 @@ public final class Telecommand {
 
     /** Unsigned 16-bit field. */
     static int u16(byte[] b, int i) {
-        return ((b[i] & 0xFF) << 8) | (b[i + 1] & 0xFF);
+        return BigEndian.get16(b, i);
     }
 
     /** Unsigned 32-bit field. */
     static long u32(byte[] b, int i) {
-        return ((long) u16(b, i) << 16) | u16(b, i + 2);
+        return BigEndian.getUnsigned32(b, i);
     }
 
     /**
@@ -93,12 +94,8 @@ public final class Telecommand {
         b[off + 1] = (byte) APID;
         b[off + 2] = (byte) (0xC0 | ((packetSequence >>> 8) & 0x3F));
         b[off + 3] = (byte) packetSequence;
-        b[off + 4] = (byte) (dataLength >>> 8);
-        b[off + 5] = (byte) dataLength;
-        b[off + 6] = (byte) (authSequence >>> 24);
-        b[off + 7] = (byte) (authSequence >>> 16);
-        b[off + 8] = (byte) (authSequence >>> 8);
-        b[off + 9] = (byte) authSequence;
+        BigEndian.put16(b, off + 4, dataLength);
+        BigEndian.put32(b, off + 6, authSequence);
         b[off + CODE_AT] = (byte) code;
         System.arraycopy(args, argOff, b, off + ARGUMENTS_AT, argOctets);
         return length;

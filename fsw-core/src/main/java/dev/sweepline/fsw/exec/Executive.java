@@ -20,9 +20,12 @@ import dev.sweepline.fsw.sweep.SweepScheduler;
  * Threading: one thread.
  */
 public final class Executive {
-    /** Default reply margin beyond the step's own duration, microseconds (link latency + jitter; design value). */
-    public static final int DEFAULT_TIMEOUT_MARGIN_MICROS = 5_000;
-    /** Default number of re-sends before SAFE (design value). */
+    /**
+     * Default reply margin beyond the step's own duration, microseconds: 20 ms (hardware ICD §4: the
+     * wire time of both frames, 3.3 ms at 115200 baud, and the host's jitter).
+     */
+    public static final int DEFAULT_TIMEOUT_MARGIN_MICROS = 20_000;
+    /** Default number of re-sends before SAFE (hardware ICD §4: at most 2). */
     public static final int DEFAULT_MAX_RETRIES = 2;
     /** Replies drained per {@link #doWork} call at most (bounds the work of one cycle). */
     public static final int MAX_POLLS_PER_CYCLE = 4;
@@ -33,6 +36,7 @@ public final class Executive {
     private final SweepScheduler scheduler;
     private final int timeoutMarginMicros;
     private final int maxRetries;
+    private final int modulationPeriodMicros;
     private final StepCommand step = new StepCommand();
     private final SampleReply reply = new SampleReply();
 
@@ -75,6 +79,7 @@ public final class Executive {
         this.scheduler = scheduler;
         this.timeoutMarginMicros = timeoutMarginMicros;
         this.maxRetries = maxRetries;
+        this.modulationPeriodMicros = scheduler.instrument().modulationPeriodMicros();
     }
 
     /**
@@ -125,7 +130,7 @@ public final class Executive {
         transmissions++;
         linkAccepted = false;
         sentMicros = nowMicros;
-        deadlineMicros = nowMicros + step.durationMicros() + timeoutMarginMicros;
+        deadlineMicros = nowMicros + step.durationMicros(modulationPeriodMicros) + timeoutMarginMicros;
         return trySend(nowMicros) + 1;
     }
 
@@ -192,7 +197,7 @@ public final class Executive {
             if (!linkAccepted) {
                 return lastNowMicros;
             }
-            long expected = sentMicros + step.durationMicros();
+            long expected = sentMicros + step.durationMicros(modulationPeriodMicros);
             return lastNowMicros - expected < 0 ? expected : deadlineMicros + 1;
         }
         return scheduler.mode() == SweepMode.SAFE ? Long.MAX_VALUE : lastNowMicros;

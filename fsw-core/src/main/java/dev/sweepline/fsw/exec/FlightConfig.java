@@ -1,21 +1,28 @@
 package dev.sweepline.fsw.exec;
 
 import dev.sweepline.fsw.command.NonVolatileStore;
+import dev.sweepline.fsw.command.ParameterTable;
+import dev.sweepline.fsw.command.TableImage;
 import dev.sweepline.fsw.fault.FaultSettings;
-import dev.sweepline.fsw.instrument.InstrumentLimits;
+import dev.sweepline.fsw.instrument.InstrumentDescription;
 import dev.sweepline.fsw.table.SweepParameters;
+import dev.sweepline.fsw.table.TableStatus;
 import dev.sweepline.fsw.table.WindowTable;
 import dev.sweepline.fsw.telemetry.TelemetryWriter;
 
 /**
- * Start-up configuration of the flight software: everything its buffers are sized from. Mutable
- * while it is being set up, read once by {@link FlightSoftware}'s constructor.
+ * Start-up configuration of the flight software: everything its buffers are sized from. Made for one
+ * instrument ({@link #of(InstrumentDescription)}), whose description gives the default table and
+ * parameters and every limit; mutable while it is being set up, read once by {@link FlightSoftware}'s
+ * constructor.
  */
 public final class FlightConfig {
-    /** The window table in force at start. */
-    public WindowTable table = WindowTable.defaultTable();
-    /** The sweep parameters in force at start. */
-    public SweepParameters parameters = SweepParameters.defaults();
+    /** The instrument flown: sizes, limits, defaults (the description file, read at start-up by the host). */
+    public final InstrumentDescription instrument;
+    /** The window table in force at start (default: the description's). */
+    public WindowTable table;
+    /** The sweep parameters in force at start (default: the description's). */
+    public SweepParameters parameters;
     /** Transfer frame length, octets. */
     public int frameLength = TelemetryWriter.DEFAULT_FRAME_LENGTH;
     /** Longest wait of a partly filled frame. */
@@ -29,10 +36,10 @@ public final class FlightConfig {
      * invented epoch: 72 years incl. 18 leap days to 2030-01-01, plus 59 days).
      */
     public long coarseTimeAtTickZero = ((72L * 365 + 18) + 59) * 86_400;
-    /** Reply time-out margin beyond the step duration (hardware ICD §4). */
-    public int timeoutMarginMicros = 20_000;
-    /** Re-sends of a step before a link time-out (hardware ICD §4). */
-    public int maxRetries = 2;
+    /** Reply time-out margin beyond the step duration (hardware ICD §4: 20 ms). */
+    public int timeoutMarginMicros = Executive.DEFAULT_TIMEOUT_MARGIN_MICROS;
+    /** Re-sends of a step before a link time-out (hardware ICD §4: 2). */
+    public int maxRetries = Executive.DEFAULT_MAX_RETRIES;
     /** Fault-protection settings in force at start (replaced by a table restored from non-volatile memory). */
     public FaultSettings faults = FaultSettings.defaults();
     /**
@@ -49,14 +56,46 @@ public final class FlightConfig {
      * from at start-up. {@link NonVolatileStore#NONE} keeps nothing: anti-replay then holds within one run.
      */
     public NonVolatileStore nonVolatileStore = NonVolatileStore.NONE;
-    /** The instrument's limits every table is checked against (commands.md §4.4). */
-    public InstrumentLimits instrumentLimits = InstrumentLimits.demo();
     /**
      * This boot's authentication-recovery challenge, 32 bits (commands.md §1.4). The host supplies it
      * from a random source at each start (sweepline-fsw.jar: SecureRandom; the bench: drawn from the
      * run seed, so runs stay reproducible).
      */
     public long bootChallenge;
+
+    private FlightConfig(InstrumentDescription instrument) {
+        this.instrument = instrument;
+        this.table = instrument.defaultTable();
+        this.parameters = instrument.defaultParameters();
+    }
+
+    /** The configuration for {@code instrument}, with its default table and parameters and every other default. */
+    public static FlightConfig of(InstrumentDescription instrument) {
+        if (instrument == null) {
+            throw new IllegalArgumentException("no instrument description");
+        }
+        return new FlightConfig(instrument);
+    }
+
+    /**
+     * The parameter table this configuration starts with: its table and parameters, held to the
+     * instrument's limits, then its housekeeping period and its fault settings (the build's own, not held
+     * to a table's safe ranges, commands.md §6.1).
+     *
+     * @throws IllegalArgumentException for a table or parameters outside the limits (a configuration error)
+     */
+    ParameterTable startUpTable() {
+        ParameterTable startUp = ParameterTable.of(table, parameters);
+        int status = TableImage.validate(startUp, instrument.limits());
+        if (status != 0) {
+            throw new IllegalArgumentException("start-up table refused against the instrument's limits: code "
+                    + status + " (" + TableStatus.name(status) + ")");
+        }
+        startUp.housekeepingSeconds = (int) Math.max(ParameterTable.MIN_HOUSEKEEPING_SECONDS,
+                Math.min(ParameterTable.MAX_HOUSEKEEPING_SECONDS, housekeepingPeriodMicros / 1_000_000L));
+        startUp.faults.copyFrom(faults);
+        return startUp;
+    }
 
     /** The demo command key: octets 0..31 (commands.md §1.2). */
     public static byte[] demoKey() {

@@ -19,7 +19,9 @@
  * <li><b>E3</b> Other sequence numbers are counted (sequenceErrors) and dropped; the step keeps waiting.
  *     Replies that come while nothing is in flight (SAFE) are drained and counted the same way.
  *     <i>ExecutiveTest.shouldDropAndCountWrongSequence, shouldDrainStaleRepliesInSafeWithMockLink.</i></li>
- * <li><b>E4</b> Deadline = send time + step duration (settle + integration) + margin; at the deadline the
+ * <li><b>E4</b> Deadline = send time + step duration (settle + integration periods × the description's
+ *     modulation period) + margin (default 20 ms, hardware ICD §4; {@code FlightConfig} takes the same
+ *     default); at the deadline the
  *     reply is still in time, one microsecond later it has timed out (style.md: tested at T and T+1).
  *     <i>ExecutiveTest.shouldTimeOutOnlyAfterDeadline.</i></li>
  * <li><b>E5</b> A timed-out step is re-sent at most maxRetries times (timeouts and retries counted);
@@ -39,6 +41,14 @@
  *     fault protection ({@code reportCycleWork}), takes fault responses once per cycle after the step work,
  *     and stamps each spectrum with the id of the table its sweep used.
  *     <i>TableCommandingTest, CommandRejectionTest, FlightSoftwareAllocationTest; hw-sim FaultInjectionRunTest.</i></li>
+ * <li><b>E10</b> {@code FlightSoftware} is wiring: made for one instrument description
+ *     ({@code FlightConfig.of(description)}: default table and parameters, limits, buffer sizes), it builds
+ *     the parts and runs the cycle; {@code SweepRouting} sends the scheduler's callbacks to fault protection,
+ *     the science and event telemetry and the observer, and stamps the table id and the table-changed flag
+ *     when the scheduler announces a configuration applied; {@code FlightTarget} is the command processor's
+ *     view; {@code HousekeepingClock} says when housekeeping is due.
+ *     <i>TableChangedFlagTest, FlightSoftwareHousekeepingTest; hw-sim GoldenRunTest (decision hash and
+ *     telemetry of a pinned run).</i></li>
  * </ol>
  * Threading: one thread; the host adapter owns pacing.
  */

@@ -2,13 +2,12 @@ package dev.sweepline.fsw.fault;
 
 import dev.sweepline.fsw.link.SampleReply;
 import dev.sweepline.fsw.link.StepCommand;
+import dev.sweepline.fsw.report.EventWriter;
 import dev.sweepline.fsw.sweep.Spectrum;
 import dev.sweepline.fsw.sweep.SweepMode;
 import dev.sweepline.fsw.sweep.SweepScheduler;
 import dev.sweepline.fsw.table.SweepParameters;
 import dev.sweepline.fsw.table.TableStatus;
-import dev.sweepline.fsw.telemetry.Apid;
-import dev.sweepline.fsw.telemetry.TelemetryWriter;
 
 /**
  * Fault protection (fault design note): the monitors detect during the scheduler's callbacks, the
@@ -22,18 +21,18 @@ import dev.sweepline.fsw.telemetry.TelemetryWriter;
  */
 public final class FaultProtection {
     /** Event id of a fault response (telemetry ICD §6). */
-    public static final int EVENT_FAULT = 2;
+    public static final int EVENT_FAULT = EventWriter.FAULT_RESPONSE;
     /** {@link #respond} result bit: a SAFE response was taken (the caller switches the HV off). */
     public static final int SAFE_TAKEN = 1;
 
     private final SweepScheduler scheduler;
-    private final TelemetryWriter telemetry;
+    private final EventWriter events;
     private final FaultSettings settings = new FaultSettings();
-    private final StepMonitors steps = new StepMonitors(settings);
+    private final StepMonitors steps;
     private final SweepParameters work = new SweepParameters();
     private final int[] retriesUsed = new int[FaultMonitorId.COUNT + 1];
     private final long[] trips = new long[FaultMonitorId.COUNT + 1];
-    private final int[] detail = steps.detail;
+    private final int[] detail;
     private int pending;
     private int trippedThisSweep;
     private int peakLostSweeps;
@@ -44,9 +43,11 @@ public final class FaultProtection {
     /**
      * @throws IllegalArgumentException if {@code initial} does not validate (programmer misuse)
      */
-    public FaultProtection(FaultSettings initial, SweepScheduler scheduler, TelemetryWriter telemetry) {
+    public FaultProtection(FaultSettings initial, SweepScheduler scheduler, EventWriter events) {
         this.scheduler = scheduler;
-        this.telemetry = telemetry;
+        this.events = events;
+        this.steps = new StepMonitors(settings, scheduler.instrument().adcTopCode());
+        this.detail = steps.detail;
         if (configure(initial) != 0) {
             throw new IllegalArgumentException("fault settings refused");
         }
@@ -209,15 +210,7 @@ public final class FaultProtection {
     }
 
     private void writeEvent(int monitor, int response, int eventDetail, long nowMicros) {
-        byte[] b = telemetry.buffer();
-        int p = telemetry.userDataOffset();
-        b[p] = 0;
-        b[p + 1] = (byte) EVENT_FAULT;
-        b[p + 2] = (byte) monitor;
-        b[p + 3] = (byte) response;
-        b[p + 4] = (byte) (eventDetail >>> 8);
-        b[p + 5] = (byte) eventDetail;
-        telemetry.sendEngineering(Apid.EVENT, 6, nowMicros, nowMicros);
+        events.write(EventWriter.FAULT_RESPONSE, monitor, response, eventDetail, nowMicros);
     }
 
     // ------------------------------------------------------------ counters

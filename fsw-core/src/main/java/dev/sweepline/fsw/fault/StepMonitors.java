@@ -1,6 +1,6 @@
 package dev.sweepline.fsw.fault;
 
-import dev.sweepline.fsw.link.InstrumentConstants;
+import dev.sweepline.fsw.instrument.InstrumentDescription;
 import dev.sweepline.fsw.link.SampleReply;
 import dev.sweepline.fsw.link.StepCommand;
 
@@ -11,16 +11,19 @@ import dev.sweepline.fsw.link.StepCommand;
  */
 final class StepMonitors {
     private final FaultSettings settings;
-    private final int[] lastCode = new int[InstrumentConstants.QUADRANTS];
-    private final int[] sameRun = new int[InstrumentConstants.QUADRANTS];
+    private final int adcTopCode;
+    private final int[] lastCode = new int[InstrumentDescription.QUADRANTS];
+    private final int[] sameRun = new int[InstrumentDescription.QUADRANTS];
     private boolean haveLast;
     private int hvStreak;
     private int saturationStreak;
     /** Detail of the last trip of each monitor (telemetry ICD §6 event 2 reason field). */
     final int[] detail = new int[FaultMonitorId.COUNT + 1];
 
-    StepMonitors(FaultSettings settings) {
+    /** Monitors reading {@code settings} (shared, kept current by the caller) for an ADC whose top is {@code adcTopCode}. */
+    StepMonitors(FaultSettings settings, int adcTopCode) {
         this.settings = settings;
+        this.adcTopCode = adcTopCode;
     }
 
     /** Forgets every streak (after a configuration change or a response). */
@@ -68,8 +71,8 @@ final class StepMonitors {
     private int saturation(StepCommand step, SampleReply reply) {
         int n = settings.threshold[FaultMonitorId.ADC_SATURATION];
         boolean top = (reply.status & SampleReply.STATUS_SATURATED) != 0;
-        for (int q = 0; q < InstrumentConstants.QUADRANTS && !top; q++) {
-            top = reply.quadrant[q] >= InstrumentConstants.ADC_MAX_COUNTS;
+        for (int q = 0; q < InstrumentDescription.QUADRANTS && !top; q++) {
+            top = reply.quadrant[q] >= adcTopCode;
         }
         if (n == 0 || !top) {
             saturationStreak = 0;
@@ -92,8 +95,8 @@ final class StepMonitors {
         }
         int limit = settings.limit[FaultMonitorId.STUCK_CHANNEL];
         int tripped = 0;
-        for (int q = 0; q < InstrumentConstants.QUADRANTS; q++) {
-            if (code[q] != lastCode[q] || code[q] >= InstrumentConstants.ADC_MAX_COUNTS) {
+        for (int q = 0; q < InstrumentDescription.QUADRANTS; q++) {
+            if (code[q] != lastCode[q] || code[q] >= adcTopCode) {
                 sameRun[q] = 0;
             } else if (otherMoved(q, code, limit)) {
                 if (++sameRun[q] >= n) {
@@ -108,7 +111,7 @@ final class StepMonitors {
     }
 
     private boolean otherMoved(int stuck, int[] code, int limit) {
-        for (int q = 0; q < InstrumentConstants.QUADRANTS; q++) {
+        for (int q = 0; q < InstrumentDescription.QUADRANTS; q++) {
             if (q != stuck && Math.abs(code[q] - lastCode[q]) > limit) {
                 return true;
             }

@@ -17,6 +17,10 @@
  *     <i>FaultInjectionRunTest: HV readback (retry, retry, safe), link (3 retries then safe), overrun.</i></li>
  * <li><b>F3</b> The defaults trip on no built-in scenario. <i>FaultInjectionRunTest.shouldTripNoMonitorOnAnyBuiltInScenario.</i></li>
  * <li><b>F4</b> Nothing is allocated after construction. <i>FlightSoftwareAllocationTest.</i></li>
+ * <li><b>F5</b> Every counting monitor trips on the N-th consecutive offence and not on the (N−1)-th; a
+ *     value at its limit L does not offend and L + 1 does; saturation is the description's ADC top code.
+ *     <i>StepMonitorsTest (HV readback, saturation, stuck channel), FaultProtectionThresholdTest (peak
+ *     lost, cycle overrun, link time-out).</i></li>
  * </ol>
  * Known limit: a GAIN response loads parameters into the scheduler's pending slot, so it replaces the
  * parameters of a table committed in the same sweep.

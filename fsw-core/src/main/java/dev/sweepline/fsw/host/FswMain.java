@@ -1,14 +1,14 @@
 package dev.sweepline.fsw.host;
 
-import picocli.CommandLine;
 import picocli.CommandLine.Command;
+import picocli.CommandLine;
 
 /** {@code sweepline-fsw.jar}: the flight software on a PC, talking to real or simulated electronics. */
 @Command(name = "sweepline-fsw", mixinStandardHelpOptions = true, version = "sweepline-fsw 0.1",
         description = {"The Faraday-cup flight software on a PC, on a serial or TCP link to the electronics.",
             "",
             HvText.CAUTION},
-        subcommands = {FswRunCommand.class, CommandLine.HelpCommand.class})
+        subcommands = {FswRunCommand.class, FswInstrumentsCommand.class, CommandLine.HelpCommand.class})
 public final class FswMain implements Runnable {
     @CommandLine.Spec
     private CommandLine.Model.CommandSpec spec;

@@ -2,8 +2,11 @@ package dev.sweepline.fsw.host;
 
 import dev.sweepline.fsw.exec.FlightConfig;
 import dev.sweepline.fsw.exec.FlightSoftware;
+import dev.sweepline.fsw.host.instrument.Instruments;
+import dev.sweepline.fsw.host.yaml.FileFormatException;
+import dev.sweepline.fsw.instrument.InstrumentDescription;
 import dev.sweepline.fsw.link.FramedInstrumentLink;
-import dev.sweepline.fsw.link.InstrumentConstants;
+import dev.sweepline.fsw.link.LinkWatchdog;
 import dev.sweepline.fsw.sweep.SweepListener;
 import java.io.IOException;
 import java.io.PrintStream;
@@ -60,6 +63,11 @@ final class FswRunCommand implements Callable<Integer> {
             description = "Where the telemetry frames go: a file, or a ground listener to connect to.")
     String tm;
 
+    @Option(names = "--instrument", paramLabel = "NAME|FILE",
+            description = "The instrument description: a built-in name or a file (default: ${DEFAULT-VALUE}; "
+                + "instruments/FORMAT.md).")
+    String instrument = Instruments.defaultName();
+
     @Option(names = "--minutes", paramLabel = "M",
             description = "Minutes to run, counted from the start of the run, after the HV prompt "
                 + "(default: until interrupted).")
@@ -108,10 +116,17 @@ final class FswRunCommand implements Callable<Integer> {
             err.println("--link: " + e.getMessage());
             return EXIT_BAD_INPUT;
         }
+        InstrumentDescription described;
+        try {
+            described = Instruments.resolve(instrument).flight();
+        } catch (FileFormatException e) {
+            err.println("--instrument: " + e.getMessage());
+            return EXIT_BAD_INPUT;
+        }
         if (hvConfirm != null && hv != Hv.arm) {
             out.println("--hv-confirm ignored: it confirms only an armed HV (--hv arm); running with HV off");
         }
-        if (clock == Clock.link && 2 * replyWaitMillis * 1_000 >= InstrumentConstants.LINK_WATCHDOG_MICROS) {
+        if (clock == Clock.link && 2 * replyWaitMillis * 1_000 >= LinkWatchdog.TIMEOUT_MICROS) {
             out.println("warning: two --reply-wait-ms of " + replyWaitMillis + " ms reach the electronics' link "
                     + "watchdog (hardware ICD §4.1): a lost reply will switch their HV off");
         }
@@ -131,7 +146,7 @@ final class FswRunCommand implements Callable<Integer> {
             return EXIT_BAD_INPUT;
         }
         try {
-            return run(address, transport, sink);
+            return run(described, address, transport, sink);
         } finally {
             try {
                 sink.close();
@@ -143,12 +158,13 @@ final class FswRunCommand implements Callable<Integer> {
     }
 
     /** The run on an open link and telemetry output: prompt, then the flight software on its loop. */
-    private int run(LinkAddress address, HostTransport transport, StreamFrameSink sink) {
+    private int run(InstrumentDescription described, LinkAddress address, HostTransport transport,
+            StreamFrameSink sink) {
         HvArming arming = new HvArming(hvTimeoutSeconds * 1_000_000L);
         boolean fired = hv == Hv.arm && fire(arming);
-        FramedInstrumentLink framed = new FramedInstrumentLink(transport);
+        FramedInstrumentLink framed = new FramedInstrumentLink(transport, described);
         HvGuardLink guard = new HvGuardLink(framed, arming);
-        FlightConfig flight = new FlightConfig();
+        FlightConfig flight = FlightConfig.of(described);
         flight.hvPermitted = false; // the core interlock starts OFF too; the operator's fire below enables both
         // this boot's authentication-recovery challenge (commands.md §1.4): unpredictable to an eavesdropper
         flight.bootChallenge = new java.security.SecureRandom().nextInt() & 0xFFFF_FFFFL;

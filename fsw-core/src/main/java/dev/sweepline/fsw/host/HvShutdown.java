@@ -2,7 +2,7 @@ package dev.sweepline.fsw.host;
 
 import dev.sweepline.fsw.exec.FlightSoftware;
 import dev.sweepline.fsw.link.FramedInstrumentLink;
-import dev.sweepline.fsw.link.InstrumentConstants;
+import dev.sweepline.fsw.link.LinkWatchdog;
 import dev.sweepline.fsw.link.SampleReply;
 import dev.sweepline.fsw.link.StepCommand;
 import java.io.PrintStream;
@@ -36,11 +36,11 @@ public final class HvShutdown {
     public static final int OFF_THRESHOLD_CODES = 300;
     /**
      * Longest wait for the confirmation, microseconds (hardware ICD §4.2): 3 s, the electronics' link
-     * watchdog ({@link InstrumentConstants#LINK_WATCHDOG_MICROS}, 2 s) plus 1 s, so that when the host
+     * watchdog ({@link LinkWatchdog#TIMEOUT_MICROS}, 2 s) plus 1 s, so that when the host
      * cannot confirm, electronics whose watchdog works have switched the HV off by the time the run
      * reports it.
      */
-    public static final long CONFIRM_WAIT_MICROS = InstrumentConstants.LINK_WATCHDOG_MICROS + 1_000_000L;
+    public static final long CONFIRM_WAIT_MICROS = LinkWatchdog.TIMEOUT_MICROS + 1_000_000L;
     /**
      * Wait for the reply to one HV-off step before a fresh one goes out, microseconds (hardware ICD
      * §4.2): ten times the step's 11 ms plus the 3.3 ms wire time of both frames at 115200 baud (§6).

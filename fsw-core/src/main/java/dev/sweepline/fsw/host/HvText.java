@@ -17,7 +17,7 @@ public final class HvText {
             + HvShutdown.CONFIRM_WAIT_MICROS / 1_000_000 + " s for their HV monitor to read below "
             + HvShutdown.OFF_THRESHOLD_CODES + " codes and prints 'HV off confirmed' or 'HV off NOT confirmed' "
             + "(exit status 3). The electronics' own link watchdog switches the HV off "
-            + dev.sweepline.fsw.link.InstrumentConstants.LINK_WATCHDOG_MICROS / 1_000_000
+            + dev.sweepline.fsw.link.LinkWatchdog.TIMEOUT_MICROS / 1_000_000
             + " s after the last step when the host is gone (hardware ICD §4.1).";
 
     private HvText() {

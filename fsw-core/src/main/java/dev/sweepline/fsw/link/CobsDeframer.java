@@ -1,6 +1,6 @@
 package dev.sweepline.fsw.link;
 
-import dev.sweepline.fsw.telemetry.Crc16;
+import dev.sweepline.fsw.octets.Crc16;
 
 /**
  * Streaming receiver of wire frames (hardware ICD §2, §5): fed one octet at a time, in whatever

@@ -1,6 +1,7 @@
 package dev.sweepline.fsw.link;
 
-import dev.sweepline.fsw.telemetry.Crc16;
+import dev.sweepline.fsw.octets.BigEndian;
+import dev.sweepline.fsw.octets.Crc16;
 
 /**
  * Builds one wire frame (hardware ICD §2): {@code COBS(payload | CRC-16) | 0x00}, the CRC-16/IBM-3740
@@ -34,9 +35,7 @@ public final class FrameEncoder {
             throw new IllegalArgumentException("payload over " + MAX_PAYLOAD + " octets");
         }
         System.arraycopy(payload, offset, scratch, 0, length);
-        int crc = Crc16.of(payload, offset, length);
-        scratch[length] = (byte) (crc >>> 8);
-        scratch[length + 1] = (byte) crc;
+        BigEndian.put16(scratch, length, Crc16.of(payload, offset, length));
         int n = Cobs.encode(scratch, 0, length + CRC_OCTETS, out, outOffset);
         out[outOffset + n] = Cobs.DELIMITER;
         return n + 1;

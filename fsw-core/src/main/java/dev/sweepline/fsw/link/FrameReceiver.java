@@ -13,10 +13,12 @@ public final class FrameReceiver {
 
     private final CobsDeframer deframer = new CobsDeframer();
     private final LinkCounters counters;
+    private final int sampleReplyLength;
 
-    /** A receiver counting into {@code counters}. */
-    public FrameReceiver(LinkCounters counters) {
+    /** A receiver counting into {@code counters}, taking sample replies of {@code replies}' length. */
+    public FrameReceiver(LinkCounters counters, SampleReplyCodec replies) {
         this.counters = counters;
+        this.sampleReplyLength = replies.length();
     }
 
     /**
@@ -49,7 +51,7 @@ public final class FrameReceiver {
     }
 
     private int checkFrame() {
-        int status = MessageType.check(deframer.payload(), 0, deframer.payloadLength());
+        int status = MessageType.check(deframer.payload(), 0, deframer.payloadLength(), sampleReplyLength);
         switch (status) {
             case LinkStatus.OK:
                 counters.framesGood++;

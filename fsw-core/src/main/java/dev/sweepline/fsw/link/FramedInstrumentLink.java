@@ -1,5 +1,7 @@
 package dev.sweepline.fsw.link;
 
+import dev.sweepline.fsw.instrument.InstrumentDescription;
+
 /**
  * The flight software's {@link InstrumentLink} over a {@link ByteTransport} (hardware ICD): each step
  * goes out as one COBS/CRC frame, replies are deframed from whatever octets have arrived, and every
@@ -21,7 +23,9 @@ public final class FramedInstrumentLink implements InstrumentLink, LinkHealth {
 
     private final ByteTransport transport;
     private final LinkCounters counters = new LinkCounters();
-    private final FrameReceiver receiver = new FrameReceiver(counters);
+    private final SampleReplyCodec replies;
+    private final FrameReceiver receiver;
+    private final int modulationPeriodMicros;
     private final FrameSender sender;
     private final byte[] payload = new byte[FrameEncoder.MAX_PAYLOAD];
     private final byte[] in = new byte[READ_CHUNK];
@@ -36,9 +40,12 @@ public final class FramedInstrumentLink implements InstrumentLink, LinkHealth {
     private long repliesDelivered;
     private long housekeepingReplies;
 
-    /** A link over {@code transport}. */
-    public FramedInstrumentLink(ByteTransport transport) {
+    /** A link over {@code transport} to the electronics of {@code instrument} (its sample width and modulation). */
+    public FramedInstrumentLink(ByteTransport transport, InstrumentDescription instrument) {
         this.transport = transport;
+        this.replies = SampleReplyCodec.of(instrument);
+        this.receiver = new FrameReceiver(counters, replies);
+        this.modulationPeriodMicros = instrument.modulationPeriodMicros();
         this.sender = new FrameSender(transport, counters);
     }
 
@@ -49,7 +56,7 @@ public final class FramedInstrumentLink implements InstrumentLink, LinkHealth {
             return false;
         }
         lastSendMicros = nowMicros;
-        lastStepDurationMicros = step.durationMicros();
+        lastStepDurationMicros = step.durationMicros(modulationPeriodMicros);
         return true;
     }
 
@@ -109,7 +116,7 @@ public final class FramedInstrumentLink implements InstrumentLink, LinkHealth {
         int len = receiver.payloadLength();
         switch (type) {
             case MessageType.SAMPLE_REPLY:
-                SampleReplyCodec.decode(p, 0, len, held); // length and type already checked
+                replies.decode(p, 0, len, held); // length and type already checked
                 replyHeld = true;
                 break;
             case MessageType.HOUSEKEEPING_REPLY:

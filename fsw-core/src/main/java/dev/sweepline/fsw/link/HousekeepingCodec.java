@@ -1,5 +1,7 @@
 package dev.sweepline.fsw.link;
 
+import dev.sweepline.fsw.octets.BigEndian;
+
 /**
  * Housekeeping request and reply codecs (hardware ICD §3.3), big-endian.
  * <pre>
@@ -47,7 +49,7 @@ public final class HousekeepingCodec {
     /** Writes a request with {@code sequence}; returns {@link #REQUEST_LENGTH}. */
     public static int encodeRequest(int sequence, byte[] b, int offset) {
         b[offset] = (byte) MessageType.HOUSEKEEPING_REQUEST;
-        Octets.put16(b, offset + SEQUENCE_OFFSET, sequence);
+        BigEndian.put16(b, offset + SEQUENCE_OFFSET, sequence);
         return REQUEST_LENGTH;
     }
 
@@ -56,21 +58,21 @@ public final class HousekeepingCodec {
         if (length != REQUEST_LENGTH || (b[offset] & 0xFF) != MessageType.HOUSEKEEPING_REQUEST) {
             return -1;
         }
-        return Octets.get16(b, offset + SEQUENCE_OFFSET);
+        return BigEndian.get16(b, offset + SEQUENCE_OFFSET);
     }
 
     /** Writes {@code hk}; returns {@link #REPLY_LENGTH}. */
     public static int encodeReply(HousekeepingReply hk, byte[] b, int offset) {
         b[offset] = (byte) MessageType.HOUSEKEEPING_REPLY;
-        Octets.put16(b, offset + SEQUENCE_OFFSET, hk.sequence);
-        Octets.put32(b, offset + FRAMES_GOOD_OFFSET, hk.framesGood);
-        Octets.put32(b, offset + FRAMES_BAD_OFFSET, hk.framesBad);
-        Octets.put16(b, offset + LAST_STEP_OFFSET, hk.lastStepSequence);
-        Octets.put16(b, offset + HV_LOW_OFFSET, hk.hvMonitorLowCode);
-        Octets.put16(b, offset + HV_HIGH_OFFSET, hk.hvMonitorHighCode);
-        Octets.put16(b, offset + TEMPERATURE_OFFSET, hk.temperatureCentiCelsius);
+        BigEndian.put16(b, offset + SEQUENCE_OFFSET, hk.sequence);
+        BigEndian.put32(b, offset + FRAMES_GOOD_OFFSET, hk.framesGood);
+        BigEndian.put32(b, offset + FRAMES_BAD_OFFSET, hk.framesBad);
+        BigEndian.put16(b, offset + LAST_STEP_OFFSET, hk.lastStepSequence);
+        BigEndian.put16(b, offset + HV_LOW_OFFSET, hk.hvMonitorLowCode);
+        BigEndian.put16(b, offset + HV_HIGH_OFFSET, hk.hvMonitorHighCode);
+        BigEndian.put16(b, offset + TEMPERATURE_OFFSET, hk.temperatureCentiCelsius);
         b[offset + STATUS_OFFSET] = (byte) hk.status;
-        Octets.put16(b, offset + WATCHDOG_TRIPS_OFFSET, Math.min(hk.watchdogTrips, MAX_WATCHDOG_TRIPS));
+        BigEndian.put16(b, offset + WATCHDOG_TRIPS_OFFSET, Math.min(hk.watchdogTrips, MAX_WATCHDOG_TRIPS));
         return REPLY_LENGTH;
     }
 
@@ -86,15 +88,15 @@ public final class HousekeepingCodec {
         if ((b[offset] & 0xFF) != MessageType.HOUSEKEEPING_REPLY) {
             return LinkStatus.UNKNOWN_TYPE;
         }
-        into.sequence = Octets.get16(b, offset + SEQUENCE_OFFSET);
-        into.framesGood = Octets.getUnsigned32(b, offset + FRAMES_GOOD_OFFSET);
-        into.framesBad = Octets.getUnsigned32(b, offset + FRAMES_BAD_OFFSET);
-        into.lastStepSequence = Octets.get16(b, offset + LAST_STEP_OFFSET);
-        into.hvMonitorLowCode = Octets.get16(b, offset + HV_LOW_OFFSET);
-        into.hvMonitorHighCode = Octets.get16(b, offset + HV_HIGH_OFFSET);
-        into.temperatureCentiCelsius = (short) Octets.get16(b, offset + TEMPERATURE_OFFSET);
+        into.sequence = BigEndian.get16(b, offset + SEQUENCE_OFFSET);
+        into.framesGood = BigEndian.getUnsigned32(b, offset + FRAMES_GOOD_OFFSET);
+        into.framesBad = BigEndian.getUnsigned32(b, offset + FRAMES_BAD_OFFSET);
+        into.lastStepSequence = BigEndian.get16(b, offset + LAST_STEP_OFFSET);
+        into.hvMonitorLowCode = BigEndian.get16(b, offset + HV_LOW_OFFSET);
+        into.hvMonitorHighCode = BigEndian.get16(b, offset + HV_HIGH_OFFSET);
+        into.temperatureCentiCelsius = (short) BigEndian.get16(b, offset + TEMPERATURE_OFFSET);
         into.status = b[offset + STATUS_OFFSET] & 0xFF;
-        into.watchdogTrips = Octets.get16(b, offset + WATCHDOG_TRIPS_OFFSET);
+        into.watchdogTrips = BigEndian.get16(b, offset + WATCHDOG_TRIPS_OFFSET);
         return LinkStatus.OK;
     }
 }

@@ -14,32 +14,31 @@ public final class MessageType {
     private MessageType() {
     }
 
-    /** Payload length of {@code type}, octets, or -1 for a type the ICD does not define. */
-    public static int payloadLength(int type) {
-        switch (type) {
-            case STEP_COMMAND:
-                return StepCommandCodec.LENGTH;
-            case SAMPLE_REPLY:
-                return SampleReplyCodec.LENGTH;
-            case HOUSEKEEPING_REQUEST:
-                return HousekeepingCodec.REQUEST_LENGTH;
-            case HOUSEKEEPING_REPLY:
-                return HousekeepingCodec.REPLY_LENGTH;
-            default:
-                return -1;
-        }
+    /**
+     * Payload length of {@code type}, octets, or -1 for a type the ICD does not define; a sample reply
+     * is {@code sampleReplyLength} long (its samples have the instrument's width, hardware ICD §3.2).
+     */
+    public static int payloadLength(int type, int sampleReplyLength) {
+        return switch (type) {
+            case STEP_COMMAND -> StepCommandCodec.LENGTH;
+            case SAMPLE_REPLY -> sampleReplyLength;
+            case HOUSEKEEPING_REQUEST -> HousekeepingCodec.REQUEST_LENGTH;
+            case HOUSEKEEPING_REPLY -> HousekeepingCodec.REPLY_LENGTH;
+            default -> -1;
+        };
     }
 
     /**
-     * Checks a good frame's payload against the ICD: a known type and that type's length.
+     * Checks a good frame's payload against the ICD: a known type and that type's length (a sample
+     * reply of {@code sampleReplyLength}).
      *
      * @return {@link LinkStatus#OK}, {@link LinkStatus#UNKNOWN_TYPE} or {@link LinkStatus#WRONG_LENGTH}
      */
-    public static int check(byte[] payload, int offset, int length) {
+    public static int check(byte[] payload, int offset, int length, int sampleReplyLength) {
         if (length < 1) {
             return LinkStatus.WRONG_LENGTH;
         }
-        int expected = payloadLength(payload[offset] & 0xFF);
+        int expected = payloadLength(payload[offset] & 0xFF, sampleReplyLength);
         if (expected < 0) {
             return LinkStatus.UNKNOWN_TYPE;
         }

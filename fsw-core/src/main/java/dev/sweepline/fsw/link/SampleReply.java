@@ -1,12 +1,14 @@
 package dev.sweepline.fsw.link;
 
+import dev.sweepline.fsw.instrument.InstrumentDescription;
+
 /**
  * The electronics' answer to one {@link StepCommand}: a mutable flyweight, allocated once and
  * refilled for every step (hardware ICD, sample reply).
  *
- * <p>Quadrant values are the demodulated preamplifier output in ADC counts, unsigned 16 bits,
- * offset by {@link InstrumentConstants#ADC_PEDESTAL_COUNTS} so that noise around zero current is not
- * clipped. Threading: owned by one thread, the executive's.
+ * <p>Quadrant values are the demodulated preamplifier output in ADC counts, unsigned, of the
+ * instrument's ADC width, offset by its pedestal (InstrumentDescription#pedestalCounts) so that noise
+ * around zero current is not clipped. Threading: owned by one thread, the executive's.
  */
 public final class SampleReply {
     /** Status bit: at least one quadrant reached the top of the ADC range. */
@@ -21,7 +23,7 @@ public final class SampleReply {
     /** Status bits, {@code STATUS_*}. */
     public int status;
     /** Demodulated output of collector quadrants Q1..Q4, ADC counts. */
-    public final int[] quadrant = new int[InstrumentConstants.QUADRANTS];
+    public final int[] quadrant = new int[InstrumentDescription.QUADRANTS];
     /** HV monitor readback of the high level at the start of integration, HV DAC code units. */
     public int hvMonitorCode;
     /** Gain range the electronics actually used (tags the sample). */
@@ -34,14 +36,5 @@ public final class SampleReply {
         System.arraycopy(other.quadrant, 0, quadrant, 0, quadrant.length);
         hvMonitorCode = other.hvMonitorCode;
         gainRange = other.gainRange;
-    }
-
-    /** Sum of the four quadrants with the pedestal removed, ADC counts (may be slightly negative from noise). */
-    public int totalCountsAbovePedestal() {
-        int sum = 0;
-        for (int q = 0; q < quadrant.length; q++) {
-            sum += quadrant[q] - InstrumentConstants.ADC_PEDESTAL_COUNTS;
-        }
-        return sum;
     }
 }

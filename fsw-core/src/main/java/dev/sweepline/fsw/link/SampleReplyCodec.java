@@ -1,18 +1,21 @@
 package dev.sweepline.fsw.link;
 
+import dev.sweepline.fsw.instrument.InstrumentDescription;
+import dev.sweepline.fsw.octets.BigEndian;
+
 /**
- * Sample reply codec (hardware ICD §3.2), big-endian:
+ * Sample reply codec (hardware ICD §3.2), big-endian, for samples of b = ⌈adc.bits / 8⌉ octets each
+ * (the instrument description's ADC width):
  * <pre>
- *  0      1       3        4      5                           13           15
+ *  0      1       3        4      5                           5+4b         7+4b
  * +------+-------+--------+------+---------------------------+------------+
- * | 0x81 | seq   | status | gain | Q1 | Q2 | Q3 | Q4 (2 each) | HV monitor |
+ * | 0x81 | seq   | status | gain | Q1 | Q2 | Q3 | Q4 (b each) | HV monitor |
  * +------+-------+--------+------+---------------------------+------------+
  * </pre>
- * Allocation-free.
+ * The demo cup's 16-bit ADC gives b = 2 and the 15-octet reply of the ICD before descriptions; a
+ * 20-bit ADC gives b = 3 and 19 octets. Immutable, allocation-free.
  */
 public final class SampleReplyCodec {
-    /** Payload length, octets. */
-    public static final int LENGTH = 15;
     /** Offset of the message type. */
     public static final int TYPE_OFFSET = 0;
     /** Offset of the sequence number (2). */
@@ -21,25 +24,69 @@ public final class SampleReplyCodec {
     public static final int STATUS_OFFSET = 3;
     /** Offset of the gain range used (1). */
     public static final int GAIN_OFFSET = 4;
-    /** Offset of quadrant Q1; Q2..Q4 follow, 2 octets each. */
+    /** Offset of quadrant Q1; Q2..Q4 follow, b octets each. */
     public static final int QUADRANT_OFFSET = 5;
-    /** Offset of the HV monitor, high level, DAC code (2). */
-    public static final int HV_MONITOR_OFFSET = 13;
+    /** Octets of the HV monitor field that ends the reply. */
+    public static final int HV_MONITOR_OCTETS = 2;
+    /** Widest sample the ICD carries, octets (a 24-bit ADC). */
+    public static final int MAX_SAMPLE_OCTETS = 3;
+    /** Longest reply, octets: 3-octet samples. */
+    public static final int MAX_LENGTH = length(MAX_SAMPLE_OCTETS);
 
-    private SampleReplyCodec() {
+    private final int sampleOctets;
+    private final int hvMonitorOffset;
+    private final int length;
+
+    /**
+     * A codec for samples of {@code sampleOctets} octets (1..{@value #MAX_SAMPLE_OCTETS}).
+     *
+     * @throws IllegalArgumentException for another width (programmer misuse: the description is checked)
+     */
+    public SampleReplyCodec(int sampleOctets) {
+        if (sampleOctets < 1 || sampleOctets > MAX_SAMPLE_OCTETS) {
+            throw new IllegalArgumentException("sample width " + sampleOctets + " octets");
+        }
+        this.sampleOctets = sampleOctets;
+        this.hvMonitorOffset = QUADRANT_OFFSET + InstrumentDescription.QUADRANTS * sampleOctets;
+        this.length = hvMonitorOffset + HV_MONITOR_OCTETS;
     }
 
-    /** Writes {@code reply} at {@code offset}; returns {@link #LENGTH}. */
-    public static int encode(SampleReply reply, byte[] b, int offset) {
+    /** The codec of {@code instrument}'s sample width. */
+    public static SampleReplyCodec of(InstrumentDescription instrument) {
+        return new SampleReplyCodec(instrument.sampleOctets());
+    }
+
+    /** Payload length of a reply with samples of {@code sampleOctets} octets: 7 + 4 b. */
+    public static int length(int sampleOctets) {
+        return QUADRANT_OFFSET + InstrumentDescription.QUADRANTS * sampleOctets + HV_MONITOR_OCTETS;
+    }
+
+    /** Payload length, octets. */
+    public int length() {
+        return length;
+    }
+
+    /** Octets per quadrant sample. */
+    public int sampleOctets() {
+        return sampleOctets;
+    }
+
+    /** Offset of the HV monitor, high level, DAC code (2): 5 + 4 b. */
+    public int hvMonitorOffset() {
+        return hvMonitorOffset;
+    }
+
+    /** Writes {@code reply} at {@code offset}; returns {@link #length()}. */
+    public int encode(SampleReply reply, byte[] b, int offset) {
         b[offset + TYPE_OFFSET] = (byte) MessageType.SAMPLE_REPLY;
-        Octets.put16(b, offset + SEQUENCE_OFFSET, reply.sequence);
+        BigEndian.put16(b, offset + SEQUENCE_OFFSET, reply.sequence);
         b[offset + STATUS_OFFSET] = (byte) reply.status;
         b[offset + GAIN_OFFSET] = (byte) reply.gainRange;
-        for (int q = 0; q < InstrumentConstants.QUADRANTS; q++) {
-            Octets.put16(b, offset + QUADRANT_OFFSET + 2 * q, reply.quadrant[q]);
+        for (int q = 0; q < InstrumentDescription.QUADRANTS; q++) {
+            BigEndian.putN(b, offset + QUADRANT_OFFSET + sampleOctets * q, reply.quadrant[q], sampleOctets);
         }
-        Octets.put16(b, offset + HV_MONITOR_OFFSET, reply.hvMonitorCode);
-        return LENGTH;
+        BigEndian.put16(b, offset + hvMonitorOffset, reply.hvMonitorCode);
+        return length;
     }
 
     /**
@@ -48,20 +95,20 @@ public final class SampleReplyCodec {
      * @return {@link LinkStatus#OK}, or {@link LinkStatus#WRONG_LENGTH} / {@link LinkStatus#UNKNOWN_TYPE}
      *         with {@code into} untouched
      */
-    public static int decode(byte[] b, int offset, int length, SampleReply into) {
-        if (length != LENGTH) {
+    public int decode(byte[] b, int offset, int length, SampleReply into) {
+        if (length != this.length) {
             return LinkStatus.WRONG_LENGTH;
         }
         if ((b[offset + TYPE_OFFSET] & 0xFF) != MessageType.SAMPLE_REPLY) {
             return LinkStatus.UNKNOWN_TYPE;
         }
-        into.sequence = Octets.get16(b, offset + SEQUENCE_OFFSET);
+        into.sequence = BigEndian.get16(b, offset + SEQUENCE_OFFSET);
         into.status = b[offset + STATUS_OFFSET] & 0xFF;
         into.gainRange = b[offset + GAIN_OFFSET] & 0xFF;
-        for (int q = 0; q < InstrumentConstants.QUADRANTS; q++) {
-            into.quadrant[q] = Octets.get16(b, offset + QUADRANT_OFFSET + 2 * q);
+        for (int q = 0; q < InstrumentDescription.QUADRANTS; q++) {
+            into.quadrant[q] = BigEndian.getN(b, offset + QUADRANT_OFFSET + sampleOctets * q, sampleOctets);
         }
-        into.hvMonitorCode = Octets.get16(b, offset + HV_MONITOR_OFFSET);
+        into.hvMonitorCode = BigEndian.get16(b, offset + hvMonitorOffset);
         return LinkStatus.OK;
     }
 }

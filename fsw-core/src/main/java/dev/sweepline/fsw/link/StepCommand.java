@@ -13,11 +13,11 @@ public final class StepCommand {
     public int sequence;
     /** Index of the window in the active table (for logs and telemetry; the electronics do not use it). */
     public int window;
-    /** Modulator low level, HV DAC code (0..65535). */
+    /** Modulator low level, HV DAC code (0..the DAC's top code). */
     public int dacLow;
-    /** Modulator high level, HV DAC code (0..65535), above {@code dacLow}. */
+    /** Modulator high level, HV DAC code (0..the DAC's top code), above {@code dacLow}. */
     public int dacHigh;
-    /** Preamplifier gain range, 0 (most sensitive) .. {@link InstrumentConstants#GAIN_RANGES} - 1. */
+    /** Preamplifier gain range, 0 (most sensitive) .. the instrument's gain ranges - 1. */
     public int gainRange;
     /** Time the electronics wait after setting the levels before they start to integrate. */
     public int settleMicros;
@@ -38,8 +38,11 @@ public final class StepCommand {
         hvEnabled = other.hvEnabled;
     }
 
-    /** Duration of the step in microseconds: settle time plus integration. */
-    public long durationMicros() {
-        return settleMicros + (long) integrationPeriods * InstrumentConstants.MODULATION_PERIOD_MICROS;
+    /**
+     * Duration of the step in microseconds: settle time plus integration, for a modulation of
+     * {@code modulationPeriodMicros} (InstrumentDescription#modulationPeriodMicros).
+     */
+    public long durationMicros(int modulationPeriodMicros) {
+        return settleMicros + (long) integrationPeriods * modulationPeriodMicros;
     }
 }

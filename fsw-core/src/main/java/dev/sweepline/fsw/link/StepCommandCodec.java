@@ -1,5 +1,7 @@
 package dev.sweepline.fsw.link;
 
+import dev.sweepline.fsw.octets.BigEndian;
+
 /**
  * Step command codec (hardware ICD §3.1), big-endian:
  * <pre>
@@ -39,13 +41,13 @@ public final class StepCommandCodec {
     /** Writes {@code step} at {@code offset}; returns {@link #LENGTH}. Fields are truncated to their widths. */
     public static int encode(StepCommand step, byte[] b, int offset) {
         b[offset + TYPE_OFFSET] = (byte) MessageType.STEP_COMMAND;
-        Octets.put16(b, offset + SEQUENCE_OFFSET, step.sequence);
-        Octets.put16(b, offset + DAC_LOW_OFFSET, step.dacLow);
-        Octets.put16(b, offset + DAC_HIGH_OFFSET, step.dacHigh);
+        BigEndian.put16(b, offset + SEQUENCE_OFFSET, step.sequence);
+        BigEndian.put16(b, offset + DAC_LOW_OFFSET, step.dacLow);
+        BigEndian.put16(b, offset + DAC_HIGH_OFFSET, step.dacHigh);
         b[offset + GAIN_OFFSET] = (byte) step.gainRange;
         b[offset + FLAGS_OFFSET] = (byte) (step.hvEnabled ? FLAG_HV_ENABLED : 0);
-        Octets.put32(b, offset + SETTLE_OFFSET, step.settleMicros);
-        Octets.put16(b, offset + PERIODS_OFFSET, step.integrationPeriods);
+        BigEndian.put32(b, offset + SETTLE_OFFSET, step.settleMicros);
+        BigEndian.put16(b, offset + PERIODS_OFFSET, step.integrationPeriods);
         return LENGTH;
     }
 
@@ -62,15 +64,15 @@ public final class StepCommandCodec {
         if ((b[offset + TYPE_OFFSET] & 0xFF) != MessageType.STEP_COMMAND) {
             return LinkStatus.UNKNOWN_TYPE;
         }
-        into.sequence = Octets.get16(b, offset + SEQUENCE_OFFSET);
+        into.sequence = BigEndian.get16(b, offset + SEQUENCE_OFFSET);
         into.window = 0;
-        into.dacLow = Octets.get16(b, offset + DAC_LOW_OFFSET);
-        into.dacHigh = Octets.get16(b, offset + DAC_HIGH_OFFSET);
+        into.dacLow = BigEndian.get16(b, offset + DAC_LOW_OFFSET);
+        into.dacHigh = BigEndian.get16(b, offset + DAC_HIGH_OFFSET);
         into.gainRange = b[offset + GAIN_OFFSET] & 0xFF;
         into.hvEnabled = (b[offset + FLAGS_OFFSET] & FLAG_HV_ENABLED) != 0;
         // settle is a signed 32-bit field on our side; the ICD's values stay far below 2^31
-        into.settleMicros = Octets.get32(b, offset + SETTLE_OFFSET);
-        into.integrationPeriods = Octets.get16(b, offset + PERIODS_OFFSET);
+        into.settleMicros = BigEndian.get32(b, offset + SETTLE_OFFSET);
+        into.integrationPeriods = BigEndian.get16(b, offset + PERIODS_OFFSET);
         return LinkStatus.OK;
     }
 }

@@ -1,5 +1,6 @@
 package dev.sweepline.fsw.sweep;
 
+import dev.sweepline.fsw.instrument.InstrumentDescription;
 import dev.sweepline.fsw.table.SweepParameters;
 import dev.sweepline.fsw.table.TableStatus;
 import dev.sweepline.fsw.table.WindowTable;
@@ -32,9 +33,16 @@ final class ActiveConfiguration {
     private boolean tablePending;
     private final SweepParameters pendingParams = new SweepParameters();
     private boolean paramsPending;
+    private final int dacTopCode;
+    private final int rangeRatioShift;
 
-    /** Starts with {@code table} and {@code initial} (already validated by the caller) in effect. */
-    ActiveConfiguration(WindowTable table, SweepParameters initial) {
+    /**
+     * Starts with {@code table} and {@code initial} (already validated by the caller) in effect; loads
+     * are checked against {@code instrument}'s DAC and range ratio.
+     */
+    ActiveConfiguration(WindowTable table, SweepParameters initial, InstrumentDescription instrument) {
+        dacTopCode = instrument.dacTopCode();
+        rangeRatioShift = instrument.rangeRatioShift();
         params.copyFrom(initial);
         loadTable(table);
         applyPending();
@@ -50,10 +58,15 @@ final class ActiveConfiguration {
         return tablePending;
     }
 
-    /** Queues a built (so valid) table. */
+    /** Queues a built (so well-formed) table whose codes lie within the DAC. */
     int loadTable(WindowTable table) {
         if (table == null) {
             return TableStatus.MISSING_DATA;
+        }
+        for (int w = 0; w < table.count(); w++) {
+            if (table.dacHigh(w) > dacTopCode) {
+                return TableStatus.OUT_OF_DAC_RANGE; // highs increase, so the lows are below this one
+            }
         }
         for (int w = 0; w < table.count(); w++) {
             pendingLow[w] = table.dacLow(w);
@@ -66,7 +79,7 @@ final class ActiveConfiguration {
 
     /** Validates and queues a table given as arrays. */
     int loadTable(int[] lows, int[] highs, int count) {
-        int status = WindowTable.validate(lows, highs, count);
+        int status = WindowTable.validate(lows, highs, count, dacTopCode);
         if (status != TableStatus.OK) {
             return status;
         }
@@ -82,7 +95,7 @@ final class ActiveConfiguration {
         if (p == null) {
             return TableStatus.MISSING_DATA;
         }
-        int status = p.validate();
+        int status = p.validate(rangeRatioShift);
         if (status != TableStatus.OK) {
             return status;
         }

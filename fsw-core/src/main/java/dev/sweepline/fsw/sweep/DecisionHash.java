@@ -22,6 +22,23 @@ final class DecisionHash {
         hash = h;
     }
 
+    /** Folds in a step's fields: window, codes, range, settle, periods, HV flag (sweep design note R16). */
+    void addStep(dev.sweepline.fsw.link.StepCommand s) {
+        add(s.window);
+        add(s.dacLow);
+        add(s.dacHigh);
+        add(s.gainRange);
+        add(s.settleMicros);
+        add(s.integrationPeriods);
+        add(s.hvEnabled ? 1 : 0);
+    }
+
+    /** Folds in a band chosen: its first and last windows. */
+    void addBand(int first, int last) {
+        add(first);
+        add(last);
+    }
+
     /** The hash so far. */
     long value() {
         return hash;

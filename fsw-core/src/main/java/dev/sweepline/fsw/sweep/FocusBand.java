@@ -18,7 +18,7 @@ final class FocusBand {
     private int first;
     private int last;
     private int referencePeakQ8;
-    private int referencePeakUnits;
+    private long referencePeakUnits;
     private boolean searching;
 
     /**
@@ -104,7 +104,7 @@ final class FocusBand {
             // before the collapse test: a peak that ran out of the band leaves only its flank inside
             return ModeChangeReason.PEAK_ON_EDGE;
         }
-        if ((long) s.peakCurrentUnits() * 256 < (long) referencePeakUnits * params.collapseFractionQ8) {
+        if (s.peakCurrentUnits() * 256 < referencePeakUnits * params.collapseFractionQ8) {
             return ModeChangeReason.CURRENT_COLLAPSE;
         }
         if (searching) {

@@ -1,6 +1,6 @@
 package dev.sweepline.fsw.sweep;
 
-import dev.sweepline.fsw.link.InstrumentConstants;
+import dev.sweepline.fsw.instrument.InstrumentDescription;
 import dev.sweepline.fsw.table.SweepParameters;
 import dev.sweepline.fsw.table.WindowTable;
 
@@ -14,20 +14,35 @@ import dev.sweepline.fsw.table.WindowTable;
  */
 final class GainPredictor {
     /** Highest (least sensitive) range. */
-    static final int TOP_RANGE = InstrumentConstants.GAIN_RANGES - 1;
-    /** Full scale of one quadrant above the pedestal in range 0, range-0 units = ADC counts. */
-    static final long FULL_SCALE_RANGE0_UNITS = InstrumentConstants.ADC_MAX_COUNTS - InstrumentConstants.ADC_PEDESTAL_COUNTS;
+    private final int topRange;
+    /** Full scale of one quadrant above the pedestal in range 0, range-0 units = ADC counts: top code − pedestal. */
+    private final long fullScaleRange0Units;
+    private final int rangeRatioShift;
 
     private static final int UNKNOWN = 0;
     private static final int MEASURED = 1;
     private static final int SATURATED = 2;
 
     private final int[] state = new int[WindowTable.CAPACITY];
-    private final int[] maxQuadrantUnits = new int[WindowTable.CAPACITY];
+    private final long[] maxQuadrantUnits = new long[WindowTable.CAPACITY];
     private final int[] lastRange = new int[WindowTable.CAPACITY];
-    private final long[] upUnits = new long[InstrumentConstants.GAIN_RANGES];
-    private final long[] downUnits = new long[InstrumentConstants.GAIN_RANGES];
+    private final long[] upUnits;
+    private final long[] downUnits;
     private int count;
+
+    /** A predictor for {@code instrument}'s gain ranges, ADC and pedestal. */
+    GainPredictor(InstrumentDescription instrument) {
+        topRange = instrument.gainRanges() - 1;
+        fullScaleRange0Units = instrument.adcTopCode() - instrument.pedestalCounts();
+        rangeRatioShift = instrument.rangeRatioShift();
+        upUnits = new long[instrument.gainRanges()];
+        downUnits = new long[instrument.gainRanges()];
+    }
+
+    /** Highest (least sensitive) range. */
+    int topRange() {
+        return topRange;
+    }
 
     /** Forgets every window (a new table): all windows become unknown. */
     void reset(int windowCount) {
@@ -35,21 +50,21 @@ final class GainPredictor {
         for (int w = 0; w < WindowTable.CAPACITY; w++) {
             state[w] = UNKNOWN;
             maxQuadrantUnits[w] = 0;
-            lastRange[w] = TOP_RANGE;
+            lastRange[w] = topRange;
         }
     }
 
     /** Recomputes the switch thresholds from the parameters, range-0 units per quadrant. */
     void configure(SweepParameters p) {
-        for (int r = 0; r < InstrumentConstants.GAIN_RANGES; r++) {
-            long fullScale = FULL_SCALE_RANGE0_UNITS << (InstrumentConstants.RANGE_RATIO_SHIFT * r);
+        for (int r = 0; r < upUnits.length; r++) {
+            long fullScale = fullScaleRange0Units << (rangeRatioShift * r);
             upUnits[r] = (fullScale * p.gainUpFractionQ16) >> 16;
             downUnits[r] = (fullScale * p.gainDownFractionQ16) >> 16;
         }
     }
 
     /** Records what window {@code w} read: its largest quadrant, range-0 units, and the range used. */
-    void record(int w, int maxQuadrant, boolean saturated, int range) {
+    void record(int w, long maxQuadrant, boolean saturated, int range) {
         state[w] = saturated ? SATURATED : MEASURED;
         maxQuadrantUnits[w] = Math.max(0, maxQuadrant);
         lastRange[w] = range;
@@ -58,7 +73,7 @@ final class GainPredictor {
     /** The range to read window {@code w} in. */
     int choose(int w) {
         if (state[w] != MEASURED) {
-            return TOP_RANGE;
+            return topRange;
         }
         long predicted = maxQuadrantUnits[w];
         // a saturated neighbour still counts with its (lower-bound) reading, which pushes the range up
@@ -70,7 +85,7 @@ final class GainPredictor {
         }
         int r = lastRange[w];
         if (predicted > upUnits[r]) {
-            while (r < TOP_RANGE && predicted > upUnits[r]) {
+            while (r < topRange && predicted > upUnits[r]) {
                 r++;
             }
         } else {

@@ -1,6 +1,5 @@
 package dev.sweepline.fsw.sweep;
 
-import dev.sweepline.fsw.link.InstrumentConstants;
 import dev.sweepline.fsw.table.SweepParameters;
 
 /**
@@ -12,15 +11,18 @@ import dev.sweepline.fsw.table.SweepParameters;
 final class PeakFinder {
     private final int[] centreCode;
     private final SweepParameters params;
+    private final int rangeRatioShift;
 
     /**
-     * @param centreCode the active table's window centre codes, (low + high) / 2, owned and kept
-     *                   current by the scheduler
-     * @param params     the active parameters, owned and kept current by the scheduler
+     * @param centreCode      the active table's window centre codes, (low + high) / 2, owned and kept
+     *                        current by the scheduler
+     * @param params          the active parameters, owned and kept current by the scheduler
+     * @param rangeRatioShift log2 of the gain ranges' ratio (InstrumentDescription#rangeRatioShift)
      */
-    PeakFinder(int[] centreCode, SweepParameters params) {
+    PeakFinder(int[] centreCode, SweepParameters params, int rangeRatioShift) {
         this.centreCode = centreCode;
         this.params = params;
+        this.rangeRatioShift = rangeRatioShift;
     }
 
     /** Analyses {@code s} and stores the result in its peak fields. */
@@ -68,16 +70,16 @@ final class PeakFinder {
             if (centre > target + tolerance) {
                 continue;
             }
-            int y = s.currentUnits(i);
+            long y = s.currentUnits(i);
             if (y <= s.currentUnits(i - 1) || y < s.currentUnits(i + 1)) {
                 continue;
             }
-            int dip = y;
+            long dip = y;
             for (int k = i + 1; k <= argmax; k++) {
                 dip = Math.min(dip, s.currentUnits(k));
             }
-            long prominence = (long) y - dip;
-            long needed = Math.max(noiseThreshold(s, i), ((long) y * params.prominenceFractionQ8) >> 8);
+            long prominence = y - dip;
+            long needed = Math.max(noiseThreshold(s, i), (y * params.prominenceFractionQ8) >> 8);
             if (prominence > needed && significant(s, i, y) && (best < 0 || y > s.currentUnits(best))) {
                 best = i;
             }
@@ -86,7 +88,7 @@ final class PeakFinder {
     }
 
     /** True when {@code y} is above the noise threshold of entry {@code i}. */
-    boolean significant(Spectrum s, int i, int y) {
+    boolean significant(Spectrum s, int i, long y) {
         return y > noiseThreshold(s, i);
     }
 
@@ -96,7 +98,7 @@ final class PeakFinder {
      */
     long noiseThreshold(Spectrum s, int i) {
         long sigmaCounts = 2L * params.noiseCountsPerQuadrant;
-        return (params.significanceSigmas * sigmaCounts) << (InstrumentConstants.RANGE_RATIO_SHIFT * s.gainRange(i));
+        return (params.significanceSigmas * sigmaCounts) << (rangeRatioShift * s.gainRange(i));
     }
 
     /** Vertex offset of the parabola through entries p-1, p, p+1, Q8 windows, clamped to +/-0.5 window. */

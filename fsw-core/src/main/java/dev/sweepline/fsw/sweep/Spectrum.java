@@ -1,6 +1,6 @@
 package dev.sweepline.fsw.sweep;
 
-import dev.sweepline.fsw.link.InstrumentConstants;
+import dev.sweepline.fsw.instrument.InstrumentDescription;
 import dev.sweepline.fsw.link.SampleReply;
 import dev.sweepline.fsw.table.WindowTable;
 
@@ -10,7 +10,10 @@ import dev.sweepline.fsw.table.WindowTable;
  * is window {@code firstWindow() + i}.
  *
  * <p>{@link #currentUnits(int)} is the sum of the four quadrants above the pedestal in range-0 LSB
- * units, {@code (counts - pedestal) << (5 * range)}, so windows read in different gain ranges compare.
+ * units, {@code (counts - pedestal) << (rangeRatioShift * range)} (a long: a 24-bit ADC's top range
+ * overflows an int), so windows read in different gain ranges compare. The pedestal, the range ratio
+ * and the quadrants come from the instrument description; the buffers hold {@link WindowTable#CAPACITY}
+ * windows of 4 quadrants.
  * The peak fields are filled by the scheduler's analysis when the sweep completes. Threading: owned
  * by the scheduler's thread; read it only during {@link SweepListener#onSweepComplete} or from the
  * same thread.
@@ -21,13 +24,17 @@ public final class Spectrum {
     /** Status bit: the reply's gain range was not a valid range; the commanded one was used. */
     public static final int STATUS_BAD_RANGE = 1 << 9;
 
-    private static final int Q = InstrumentConstants.QUADRANTS;
+    private static final int Q = InstrumentDescription.QUADRANTS;
+
+    private final int pedestalCounts;
+    private final int rangeRatioShift;
+    private final int adcTopCode;
 
     private final int[] gainRange = new int[WindowTable.CAPACITY];
     private final int[] quadrant = new int[WindowTable.CAPACITY * Q];
     private final int[] status = new int[WindowTable.CAPACITY];
-    private final int[] currentUnits = new int[WindowTable.CAPACITY];
-    private final int[] maxQuadrantUnits = new int[WindowTable.CAPACITY];
+    private final long[] currentUnits = new long[WindowTable.CAPACITY];
+    private final long[] maxQuadrantUnits = new long[WindowTable.CAPACITY];
 
     private long sweepNumber;
     private SweepMode mode = SweepMode.SURVEY;
@@ -42,6 +49,13 @@ public final class Spectrum {
     private int argmaxIndex = -1;
     private int peakWindowQ8;
     private int fwhmWindowsQ8;
+
+    /** An empty spectrum for sweeps of {@code instrument}. */
+    public Spectrum(InstrumentDescription instrument) {
+        this.pedestalCounts = instrument.pedestalCounts();
+        this.rangeRatioShift = instrument.rangeRatioShift();
+        this.adcTopCode = instrument.adcTopCode();
+    }
 
     /** Sweep number, counting completed sweeps from 1. */
     public long sweepNumber() {
@@ -93,18 +107,28 @@ public final class Spectrum {
         return quadrant[i * Q + q];
     }
 
+    /** True when a quadrant of entry {@code i} reads the ADC's top code (saturated, FORMAT.md derived values). */
+    public boolean anyAtTop(int i) {
+        for (int q = 0; q < Q; q++) {
+            if (quadrant[i * Q + q] >= adcTopCode) {
+                return true;
+            }
+        }
+        return false;
+    }
+
     /** Status bits of entry {@code i}: {@link SampleReply} {@code STATUS_*} and this class's. */
     public int status(int i) {
         return status[i];
     }
 
     /** Total current of entry {@code i}, range-0 LSB units (may be slightly negative from noise). */
-    public int currentUnits(int i) {
+    public long currentUnits(int i) {
         return currentUnits[i];
     }
 
     /** Largest single-quadrant current of entry {@code i}, range-0 LSB units. */
-    public int maxQuadrantUnits(int i) {
+    public long maxQuadrantUnits(int i) {
         return maxQuadrantUnits[i];
     }
 
@@ -134,7 +158,7 @@ public final class Spectrum {
     }
 
     /** Current of the proton peak entry, range-0 units (0 when no peak). */
-    public int peakCurrentUnits() {
+    public long peakCurrentUnits() {
         return peakIndex >= 0 ? currentUnits[peakIndex] : 0;
     }
 
@@ -153,7 +177,7 @@ public final class Spectrum {
             currentUnits[i] = 0;
             maxQuadrantUnits[i] = 0;
             for (int q = 0; q < Q; q++) {
-                quadrant[i * Q + q] = InstrumentConstants.ADC_PEDESTAL_COUNTS;
+                quadrant[i * Q + q] = pedestalCounts;
             }
         }
         clearPeak();
@@ -164,14 +188,14 @@ public final class Spectrum {
      * {@code extraStatus} is or-ed into the reply's status.
      */
     void store(int i, SampleReply reply, int range, int extraStatus) {
-        int shift = InstrumentConstants.RANGE_RATIO_SHIFT * range;
-        int total = 0;
-        int max = Integer.MIN_VALUE;
+        int shift = rangeRatioShift * range;
+        long total = 0;
+        long max = Long.MIN_VALUE;
         for (int q = 0; q < Q; q++) {
             int counts = reply.quadrant[q];
             quadrant[i * Q + q] = counts;
             // multiply, not shift: noise can leave counts slightly below the pedestal
-            int units = (counts - InstrumentConstants.ADC_PEDESTAL_COUNTS) * (1 << shift);
+            long units = (long) (counts - pedestalCounts) * (1L << shift);
             total += units;
             if (units > max) {
                 max = units;
@@ -184,7 +208,7 @@ public final class Spectrum {
     }
 
     /** Sets entry {@code i} directly (for analysis tests and replay): total current only. */
-    void setEntry(int i, int totalUnits, int range, int entryStatus) {
+    void setEntry(int i, long totalUnits, int range, int entryStatus) {
         currentUnits[i] = totalUnits;
         maxQuadrantUnits[i] = totalUnits / Q;
         gainRange[i] = range;

@@ -9,6 +9,11 @@ import dev.sweepline.fsw.link.StepCommand;
  * the call. Implementations must not allocate if the step path is to stay allocation-free.
  */
 public interface SweepListener {
+    /** {@link #onConfigurationApplied} bit: a new window table took effect. */
+    int APPLIED_TABLE = ActiveConfiguration.TABLE_CHANGED;
+    /** {@link #onConfigurationApplied} bit: new sweep parameters took effect. */
+    int APPLIED_PARAMETERS = ActiveConfiguration.PARAMETERS_CHANGED;
+
     /** A listener that ignores everything. */
     SweepListener NONE = new SweepListener() {
     };
@@ -27,6 +32,15 @@ public interface SweepListener {
 
     /** A focus band was chosen from the last spectrum: windows first..last, refined peak (window index, Q8). */
     default void onBandChosen(int firstWindow, int lastWindow, int peakWindowQ8, long nowMicros) {
+    }
+
+    /**
+     * A loaded configuration took effect at a sweep boundary, before the first step of the sweep that
+     * flies it: {@code applied} holds {@link #APPLIED_TABLE} and / or {@link #APPLIED_PARAMETERS};
+     * {@code generation} counts the configurations applied since start (1 for the first load after the
+     * start-up one). The sweep completed next is the first made with it.
+     */
+    default void onConfigurationApplied(int applied, int generation, long nowMicros) {
     }
 
     /** The mode changed; {@code reason} is a {@link ModeChangeReason} code. */

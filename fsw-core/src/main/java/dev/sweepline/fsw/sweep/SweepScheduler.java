@@ -1,8 +1,9 @@
 package dev.sweepline.fsw.sweep;
 
-import dev.sweepline.fsw.link.InstrumentConstants;
+import dev.sweepline.fsw.instrument.InstrumentDescription;
 import dev.sweepline.fsw.link.SampleReply;
 import dev.sweepline.fsw.link.StepCommand;
+import dev.sweepline.fsw.table.SettleTime;
 import dev.sweepline.fsw.table.SweepParameters;
 import dev.sweepline.fsw.table.TableStatus;
 import dev.sweepline.fsw.table.WindowTable;
@@ -20,21 +21,22 @@ public final class SweepScheduler {
     private static final int NO_WINDOW = -1;
     private static final int NONE = ModeChangeReason.NONE;
 
-    private final SweepListener listener;
+    private SweepListener listener;
 
     private final ActiveConfiguration config;
     private final int[] dacLow;
     private final int[] dacHigh;
     private final SweepParameters params;
 
-    private final GainPredictor gain = new GainPredictor();
+    private final InstrumentDescription instrument;
+    private final GainPredictor gain;
     private final PeakFinder peakFinder;
     private final FocusBand band;
     private final DecisionHash hash = new DecisionHash();
     private final StepCommand lastStep = new StepCommand();
 
-    private Spectrum building = new Spectrum();
-    private Spectrum completed = new Spectrum();
+    private Spectrum building;
+    private Spectrum completed;
 
     private SweepMode mode = SweepMode.SURVEY;
     private boolean startPending = true;
@@ -51,26 +53,42 @@ public final class SweepScheduler {
     private int hvHighCode;
     private long ignoredReplies;
     private boolean hvPermitted = true;
+    /** Configurations applied since start (the start-up one is 0). */
+    private int generation;
 
     /**
-     * Builds a scheduler that starts in SURVEY (reported as a START mode change at the first step).
+     * Builds a scheduler for {@code instrument} that starts in SURVEY (reported as a START mode change
+     * at the first step); every buffer is sized from the description and the table capacity here.
      *
      * @throws IllegalArgumentException if {@code params} does not validate (programmer misuse)
      */
-    public SweepScheduler(WindowTable table, SweepParameters params, SweepListener listener) {
-        int status = params.validate();
+    public SweepScheduler(InstrumentDescription instrument, WindowTable table, SweepParameters params,
+                          SweepListener listener) {
+        int status = params.validate(instrument.rangeRatioShift());
         if (status != TableStatus.OK) {
             throw new IllegalArgumentException("sweep parameters refused: " + TableStatus.name(status));
         }
+        this.instrument = instrument;
         this.listener = listener == null ? SweepListener.NONE : listener;
-        this.config = new ActiveConfiguration(table, params);
+        this.config = new ActiveConfiguration(table, params, instrument);
         this.dacLow = config.dacLow;
         this.dacHigh = config.dacHigh;
         this.params = config.params;
-        this.peakFinder = new PeakFinder(config.centreCode, this.params);
+        this.gain = new GainPredictor(instrument);
+        this.building = new Spectrum(instrument);
+        this.completed = new Spectrum(instrument);
+        this.peakFinder = new PeakFinder(config.centreCode, this.params, instrument.rangeRatioShift());
         this.band = new FocusBand(config.centreCode, this.params);
         gain.reset(config.windowCount());
         gain.configure(this.params);
+    }
+
+    /**
+     * Sets the listener of every callback (at start-up, before the first step, by whoever assembles the
+     * flight software around this scheduler); null for none.
+     */
+    public void listen(SweepListener l) {
+        listener = l == null ? SweepListener.NONE : l;
     }
 
     // ---------------------------------------------------------------- step path
@@ -100,8 +118,7 @@ public final class SweepScheduler {
         int range = gain.choose(window);
         int low = dacLow[window];
         int high = dacHigh[window];
-        int railChange = Math.max(Math.abs(low - hvLowCode), Math.abs(high - hvHighCode));
-        long settle = params.fixedSettleMicros + (((long) railChange * params.settleMicrosPerCodeQ8) >> 8);
+        long settle = SettleTime.micros(params, hvLowCode, hvHighCode, low, high);
         out.window = window;
         out.dacLow = low;
         out.dacHigh = high;
@@ -115,7 +132,7 @@ public final class SweepScheduler {
         stepsIssued++;
         awaitingWindow = window;
         awaitingRange = range;
-        hashStep(out);
+        hash.addStep(out);
         listener.onStep(out, nowMicros);
         return true;
     }
@@ -133,13 +150,13 @@ public final class SweepScheduler {
         awaitingWindow = NO_WINDOW;
         int range = reply.gainRange;
         int extra = 0;
-        if (range < 0 || range >= InstrumentConstants.GAIN_RANGES) {
+        if (range < 0 || range >= instrument.gainRanges()) {
             range = awaitingRange;
             extra = Spectrum.STATUS_BAD_RANGE;
         }
         int i = window - sweepFirst;
         building.store(i, reply, range, extra);
-        boolean saturated = (reply.status & SampleReply.STATUS_SATURATED) != 0 || anyAtTop(reply);
+        boolean saturated = (reply.status & SampleReply.STATUS_SATURATED) != 0 || building.anyAtTop(i);
         gain.record(window, building.maxQuadrantUnits(i), saturated, range);
         listener.onSample(lastStep, reply, nowMicros);
         if (stepsIssued == sweepSteps) {
@@ -147,32 +164,15 @@ public final class SweepScheduler {
         }
     }
 
-    private static boolean anyAtTop(SampleReply reply) {
-        for (int q = 0; q < InstrumentConstants.QUADRANTS; q++) {
-            if (reply.quadrant[q] >= InstrumentConstants.ADC_MAX_COUNTS) {
-                return true;
-            }
-        }
-        return false;
-    }
-
     private void beginSweep(long nowMicros) {
         applyPending(nowMicros);
-        int first;
-        int last;
-        switch (mode) {
-            case SURVEY:
-                first = 0;
-                last = config.windowCount() - 1;
-                break;
-            case FOCUS:
-                first = band.first();
-                last = band.last();
-                break;
-            case SAFE:
-            default:
-                throw new IllegalStateException("no sweep in mode " + mode);
-        }
+        boolean survey = switch (mode) {
+            case SURVEY -> true;
+            case FOCUS -> false;
+            case SAFE -> throw new IllegalStateException("no sweep in mode " + mode);
+        };
+        int first = survey ? 0 : band.first();
+        int last = survey ? config.windowCount() - 1 : band.last();
         // start from the end nearer the present HV level: consecutive surveys alternate direction
         int toFirst = Math.max(Math.abs(dacLow[first] - hvLowCode), Math.abs(dacHigh[first] - hvHighCode));
         int toLast = Math.max(Math.abs(dacLow[last] - hvLowCode), Math.abs(dacHigh[last] - hvHighCode));
@@ -194,40 +194,45 @@ public final class SweepScheduler {
         completed = done;
         sweepNumber++;
         listener.onSweepComplete(done, nowMicros);
-        switch (mode) {
-            case SURVEY:
-                if (done.peakValid() && params.focusEnabled != 0) {
-                    chooseBand(done, nowMicros);
-                    focusSweepsSinceSurvey = 0;
-                    changeMode(SweepMode.FOCUS, ModeChangeReason.LOCK_ACQUIRED, nowMicros);
-                }
-                break;
-            case FOCUS:
-                focusSweepsSinceSurvey++;
-                int lost = band.lossOfLock(done, config.windowCount());
-                if (lost == ModeChangeReason.PEAK_ON_EDGE && !band.searching() && params.edgeSearchWindows > 0) {
-                    band.searchBeyondEdge(done, config.windowCount());
-                    hash.add(band.first());
-                    hash.add(band.last());
-                    listener.onBandChosen(band.first(), band.last(), done.peakWindowQ8(), nowMicros);
-                } else if (lost != NONE) {
-                    changeMode(SweepMode.SURVEY, lost, nowMicros);
-                } else if (focusSweepsSinceSurvey >= params.resurveyEveryFocusSweeps) {
-                    changeMode(SweepMode.SURVEY, ModeChangeReason.RESURVEY, nowMicros);
-                } else {
-                    chooseBand(done, nowMicros);
-                }
-                break;
-            case SAFE:
-            default:
-                throw new IllegalStateException("sweep completed in mode " + mode);
+        boolean surveyed = switch (mode) {
+            case SURVEY -> true;
+            case FOCUS -> false;
+            case SAFE -> throw new IllegalStateException("sweep completed in mode " + mode);
+        };
+        if (surveyed) {
+            afterSurvey(done, nowMicros);
+        } else {
+            afterFocus(done, nowMicros);
+        }
+    }
+
+    private void afterSurvey(Spectrum done, long nowMicros) {
+        if (done.peakValid() && params.focusEnabled != 0) {
+            chooseBand(done, nowMicros);
+            focusSweepsSinceSurvey = 0;
+            changeMode(SweepMode.FOCUS, ModeChangeReason.LOCK_ACQUIRED, nowMicros);
+        }
+    }
+
+    private void afterFocus(Spectrum done, long nowMicros) {
+        focusSweepsSinceSurvey++;
+        int lost = band.lossOfLock(done, config.windowCount());
+        if (lost == ModeChangeReason.PEAK_ON_EDGE && !band.searching() && params.edgeSearchWindows > 0) {
+            band.searchBeyondEdge(done, config.windowCount());
+            hash.addBand(band.first(), band.last());
+            listener.onBandChosen(band.first(), band.last(), done.peakWindowQ8(), nowMicros);
+        } else if (lost != NONE) {
+            changeMode(SweepMode.SURVEY, lost, nowMicros);
+        } else if (focusSweepsSinceSurvey >= params.resurveyEveryFocusSweeps) {
+            changeMode(SweepMode.SURVEY, ModeChangeReason.RESURVEY, nowMicros);
+        } else {
+            chooseBand(done, nowMicros);
         }
     }
 
     private void chooseBand(Spectrum s, long nowMicros) {
         band.choose(s, config.windowCount());
-        hash.add(band.first());
-        hash.add(band.last());
+        hash.addBand(band.first(), band.last());
         listener.onBandChosen(band.first(), band.last(), s.peakWindowQ8(), nowMicros);
     }
 
@@ -262,26 +267,22 @@ public final class SweepScheduler {
         }
         sweepActive = false;
         awaitingWindow = NO_WINDOW;
-        switch (requested) {
-            case SAFE:
-                hvLowCode = 0;
-                hvHighCode = 0;
-                changeMode(SweepMode.SAFE, reason, nowMicros);
-                break;
-            case SURVEY:
-                changeMode(SweepMode.SURVEY, reason, nowMicros);
-                break;
-            case FOCUS:
-                if (band.valid() && !config.tablePending()) {
-                    focusSweepsSinceSurvey = 0;
-                    changeMode(SweepMode.FOCUS, reason, nowMicros);
-                } else if (mode != SweepMode.SURVEY) {
-                    changeMode(SweepMode.SURVEY, ModeChangeReason.NO_BAND, nowMicros);
-                }
-                break;
-            default:
-                throw new IllegalStateException("unknown mode " + requested);
+        SweepMode to = switch (requested) {
+            case SAFE -> SweepMode.SAFE;
+            case SURVEY -> SweepMode.SURVEY;
+            case FOCUS -> band.valid() && !config.tablePending() ? SweepMode.FOCUS : SweepMode.SURVEY;
+        };
+        int why = to == requested ? reason : ModeChangeReason.NO_BAND;
+        if (to == mode) {
+            return; // FOCUS without a band while surveying: nothing changes
         }
+        if (to == SweepMode.SAFE) {
+            hvLowCode = 0;
+            hvHighCode = 0;
+        } else if (to == SweepMode.FOCUS) {
+            focusSweepsSinceSurvey = 0;
+        }
+        changeMode(to, why, nowMicros);
     }
 
     /**
@@ -315,6 +316,10 @@ public final class SweepScheduler {
 
     private void applyPending(long nowMicros) {
         int changed = config.applyPending();
+        if (changed != 0) {
+            generation++;
+            listener.onConfigurationApplied(changed, generation, nowMicros);
+        }
         if ((changed & ActiveConfiguration.PARAMETERS_CHANGED) != 0) {
             gain.configure(params);
         }
@@ -338,16 +343,6 @@ public final class SweepScheduler {
         hash.add(to.ordinal());
         hash.add(reason);
         listener.onModeChange(from, to, reason, nowMicros);
-    }
-
-    private void hashStep(StepCommand s) {
-        hash.add(s.window);
-        hash.add(s.dacLow);
-        hash.add(s.dacHigh);
-        hash.add(s.gainRange);
-        hash.add(s.settleMicros);
-        hash.add(s.integrationPeriods);
-        hash.add(s.hvEnabled ? 1 : 0);
     }
 
     // ---------------------------------------------------------------- state
@@ -410,6 +405,11 @@ public final class SweepScheduler {
     /** Replies ingested when no step awaited one. */
     public long ignoredReplies() {
         return ignoredReplies;
+    }
+
+    /** The instrument this scheduler sweeps. */
+    public InstrumentDescription instrument() {
+        return instrument;
     }
 
     /** The active value of a parameter set (a copy into {@code into}, allocation-free). */

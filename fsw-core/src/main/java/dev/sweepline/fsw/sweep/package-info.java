@@ -38,17 +38,20 @@
  *
  * <h2>Requirements and how each is verified</h2>
  * <ol>
- * <li><b>R1 Modes.</b> SURVEY, FOCUS, SAFE as a switch over an enum whose default fails loudly; the
- *     scheduler starts in SURVEY and reports START at its first step.
+ * <li><b>R1 Modes.</b> SURVEY, FOCUS, SAFE, each with its ICD code ({@code SweepMode.icdCode()}, the one place
+ *     the codes are written); every switch over a mode is an exhaustive switch expression without a
+ *     default, so a new mode fails to compile where it matters; the scheduler starts in SURVEY and
+ *     reports START at its first step.
  *     <i>AcquisitionTest.shouldStartInSurveyAndReportStart.</i></li>
  * <li><b>R2 Steps stay legal.</b> Every step lies in the active table with that window's codes; a survey
  *     covers every window once; focus steps lie in the band; no window repeats within a sweep; mode
  *     changes form a chain of legal transitions. <i>SchedulerModelTest (rule-based random actions,
  *     five recorded seeds, 20k steps each).</i></li>
  * <li><b>R3 Comparable units.</b> Spectrum current = sum over quadrants of (counts - pedestal) &lt;&lt;
- *     (5 * range); entries in ascending window order whatever the step direction; a step with no reply
+ *     (rangeRatioShift * range), in a long (pedestal and range ratio from the instrument description; a
+ *     24-bit ADC's top range overflows an int); entries in ascending window order whatever the step direction; a step with no reply
  *     is marked {@code STATUS_MISSING}. <i>StepOrderingTest.shouldStoreSpectrumAscendingWhenSteppedDown,
- *     CommandTest.shouldRecordMissingReplyAndCarryOn.</i></li>
+ *     CommandTest.shouldRecordMissingReplyAndCarryOn, science WideSampleTest (24-bit full scale).</i></li>
  * <li><b>R4 Noise floor.</b> No lock on noise; the threshold scales with the range read.
  *     <i>PeakFinderTest.shouldRefuseNoiseOnlySpectrum, shouldScaleNoiseThresholdWithRange;
  *     AcquisitionTest.shouldStaySurveyWithoutSignificantPeak.</i></li>
@@ -83,19 +86,25 @@
  *     neighbours; so consecutive surveys alternate direction (up from HV off, then down, ...), and a
  *     focus sweep starts at the band end nearer the HV. <i>StepOrderingTest.</i></li>
  * <li><b>R13 Settle.</b> settleMicros = fixedSettleMicros + (max rail change in codes *
- *     settleMicrosPerCodeQ8 &gt;&gt; 8), rail change from the last commanded levels (0 after SAFE).
+ *     settleMicrosPerCodeQ8 &gt;&gt; 8), rail change from the last commanded levels (0 after SAFE); the
+ *     formula's one home is {@code table.SettleTime}, which hw-sim's link budget calls too.
  *     <i>StepOrderingTest.shouldAccountSettleForRailChange, CommandTest.shouldLeaveSafeOnlyByCommandAndSettleFromHvOff,
  *     SchedulerModelTest.</i></li>
  * <li><b>R14 Loads.</b> A table or parameter set is validated; a refusal returns the reason code and the
  *     old one stays; an accepted one is copied (no allocation) and applied at the next sweep boundary; a
- *     new table invalidates the band (FOCUS gives SURVEY, TABLE_LOADED) and the gain memory.
- *     <i>CommandTest, WindowTableTest, SweepParametersTest.</i></li>
+ *     new table invalidates the band (FOCUS gives SURVEY, TABLE_LOADED) and the gain memory. What takes
+ *     effect there is announced once, before the first step that flies it:
+ *     {@code SweepListener.onConfigurationApplied(applied, generation, now)}; the flight software stamps the
+ *     table id and the table-changed flag from it, the bench's recorder moves its window volts with it
+ *     (nobody compares window edges to guess). <i>CommandTest, WindowTableTest, SweepParametersTest,
+ *     exec TableChangedFlagTest; hw-sim CommandedRunTest.</i></li>
  * <li><b>R15 SAFE.</b> nextStep returns false; replies are ignored; only requestMode leaves SAFE (FOCUS
  *     without a band gives SURVEY, NO_BAND). <i>CommandTest.</i></li>
  * <li><b>R16 Determinism.</b> No clock: time is the argument. decisionHash is FNV-1a 64 over every step's
  *     fields (window, codes, range, settle, periods, HV flag), every band and every mode change;
  *     same inputs give the same hash. <i>CommandTest.shouldGiveSameHashForSameInputs.</i></li>
- * <li><b>R17 Resources.</b> Everything allocated in the constructor (arrays of WindowTable.CAPACITY);
+ * <li><b>R17 Resources.</b> Everything allocated in the constructor (arrays of WindowTable.CAPACITY windows
+ *     of the description's 4 quadrants, gain thresholds of its ranges); no instrument fact is a constant;
  *     the step path allocates nothing, uses no floating point, collections, boxing, threads or clocks;
  *     one step costs at most 1 us. <i>AllocationTest and ExecutiveTest.shouldAllocateNothingPerCycle
  *     (0 bytes in at least 8 of 10 windows of 10k steps, none over 1 kB: the test-side AllocationMeter
@@ -106,7 +115,8 @@
  *     (no jump or alpha-ratio check against the old peak on that sweep: the search band starts at the old
  *     peak, so the peak finder's in-spectrum alpha test still applies); a second edge, a collapse or
  *     no peak gives SURVEY. This holds a shock's new peak within 2 sweeps even when the front lands at
- *     the end of a survey. <i>EdgeSearchTest; hw-sim SweepPropertiesTest (1000 shocked winds).</i></li>
+ *     the end of a survey. <i>LockLossTest.shouldSearchBeyondTheEdgeAndHoldTheMovedPeak,
+ *     shouldSurveyWhenTheEdgeSearchFindsTheEdgeAgain; hw-sim SweepPropertiesTest (1000 shocked winds).</i></li>
  * </ol>
  *
  * <h2>Choices worth knowing</h2>

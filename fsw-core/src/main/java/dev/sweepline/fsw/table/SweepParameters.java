@@ -1,7 +1,5 @@
 package dev.sweepline.fsw.table;
 
-import dev.sweepline.fsw.link.InstrumentConstants;
-
 /**
  * The sweep scheduler's tunables, one parameter table (commands.md). Plain int fields whose names
  * carry the unit or the fixed-point scale ({@code Q8} = value * 256, {@code Q16} = value * 65536).
@@ -9,7 +7,7 @@ import dev.sweepline.fsw.link.InstrumentConstants;
  * a caller may reuse one instance. Check with {@link #validate()} before loading.
  */
 public final class SweepParameters {
-    /** Upper limit of {@link #integrationPeriods}: one second of 1 kHz modulation (design limit). */
+    /** Upper limit of {@link #integrationPeriods} (design limit; FORMAT.md cadence.integrationPeriods 1..1000). */
     public static final int MAX_INTEGRATION_PERIODS = 1000;
     /** Upper limit of {@link #fixedSettleMicros}: 100 ms (design limit). */
     public static final int MAX_FIXED_SETTLE_MICROS = 100_000;
@@ -18,13 +16,13 @@ public final class SweepParameters {
     /** V_alpha / V_p at equal speed = m_alpha / (2 m_p) = 1.986300 (physics.md, alpha particles), Q16. */
     public static final int ALPHA_RATIO_1_986300_Q16 = 130_174;
 
-    /** Modulation periods integrated per window (dwell); 8 periods = 8 ms at 1 kHz. */
+    /** Modulation periods integrated per window (dwell; the instrument description's cadence.integrationPeriods). */
     public int integrationPeriods;
-    /** Settle time after every level change, microseconds (HV first-order settling, tau 150 us, plus margin). */
+    /** Settle time after every level change, microseconds (the description's cadence.fixedSettleMicros, at least 5 tau). */
     public int fixedSettleMicros;
     /**
-     * Extra settle per DAC code of the larger rail change, microseconds, Q8. Default 1 us/code:
-     * the simulated HV slews 100 V/ms = 1000 codes/ms.
+     * Extra settle per DAC code of the larger rail change, microseconds, Q8 (the description's
+     * cadence.settleMicrosPerCode, at least the nominal scale over the slew limit).
      */
     public int settleMicrosPerCodeQ8;
     /** Smallest focus half-width, windows either side of the peak window. */
@@ -57,19 +55,22 @@ public final class SweepParameters {
     public int alphaRatioQ16;
     /** Relative tolerance on the alpha ratio, Q16 (6 %, about 1.5 default windows of 3.8 %). */
     public int alphaToleranceQ16;
-    /** Noise of one quadrant, ADC counts rms, in whichever range it is read (preamp + ADC design value). */
+    /** Noise of one quadrant, ADC counts rms, in whichever range it is read (the description's preamp.noiseCountsPerQuadrant). */
     public int noiseCountsPerQuadrant;
     /** A peak or a prominence is significant above this many noise sigmas. */
     public int significanceSigmas;
     /** A local maximum is a separate peak when its prominence exceeds this fraction of its height, Q8. */
     public int prominenceFractionQ8;
 
-    /** The default set (values and reasons in the field docs and the sweep package design note). */
-    public static SweepParameters defaults() {
+    /**
+     * The flight defaults of the tunables that are no instrument fact (values and reasons in the field
+     * docs and the sweep package design note). The cadence ({@link #integrationPeriods},
+     * {@link #fixedSettleMicros}, {@link #settleMicrosPerCodeQ8}) and {@link #noiseCountsPerQuadrant}
+     * are left 0: they come from the instrument description (InstrumentDescription#defaultParameters),
+     * so this set alone does not validate.
+     */
+    public static SweepParameters tunableDefaults() {
         SweepParameters p = new SweepParameters();
-        p.integrationPeriods = 8;
-        p.fixedSettleMicros = 1000;
-        p.settleMicrosPerCodeQ8 = 256;
         p.minHalfWidthWindows = 4;
         p.halfWidthPerFwhmQ8 = 384;
         p.maxBandWindows = 64;
@@ -83,7 +84,6 @@ public final class SweepParameters {
         p.gainDownFractionQ16 = 1_311;
         p.alphaRatioQ16 = ALPHA_RATIO_1_986300_Q16;
         p.alphaToleranceQ16 = 3_932;
-        p.noiseCountsPerQuadrant = 4;
         p.significanceSigmas = 5;
         p.prominenceFractionQ8 = 26;
         return p;
@@ -120,11 +120,13 @@ public final class SweepParameters {
     }
 
     /**
-     * Checks the set.
+     * Checks the set for an instrument whose gain ranges are {@code 2^rangeRatioShift} apart
+     * (InstrumentDescription#rangeRatioShift): the gain hysteresis needs a step down to land below
+     * the next range's up threshold.
      *
      * @return {@link TableStatus#OK}, or the reason code of the first group that is out of range
      */
-    public int validate() {
+    public int validate(int rangeRatioShift) {
         if (integrationPeriods < 1 || integrationPeriods > MAX_INTEGRATION_PERIODS) {
             return TableStatus.BAD_INTEGRATION;
         }
@@ -148,7 +150,7 @@ public final class SweepParameters {
         }
         // hysteresis: a step down must land below the next range's up threshold
         if (gainUpFractionQ16 <= 0 || gainUpFractionQ16 >= 65_536 || gainDownFractionQ16 <= 0
-            || (long) gainDownFractionQ16 * InstrumentConstants.RANGE_RATIO >= gainUpFractionQ16) {
+            || ((long) gainDownFractionQ16 << rangeRatioShift) >= gainUpFractionQ16) {
             return TableStatus.BAD_GAIN_THRESHOLDS;
         }
         if (alphaRatioQ16 <= 65_536 || alphaRatioQ16 > 4 * 65_536

@@ -12,7 +12,7 @@ public final class TableStatus {
     public static final int EMPTY = 1;
     /** More windows than {@link WindowTable#CAPACITY}. */
     public static final int TOO_MANY_WINDOWS = 2;
-    /** A DAC code lies outside 0..{@code InstrumentConstants.DAC_MAX_CODE}. */
+    /** A DAC code lies outside 0..the DAC's top code (InstrumentDescription#dacTopCode). */
     public static final int OUT_OF_DAC_RANGE = 3;
     /** Lows or highs are not strictly increasing, or a window has low &gt;= high. */
     public static final int NOT_MONOTONIC = 4;

@@ -1,14 +1,13 @@
 package dev.sweepline.fsw.table;
 
-import dev.sweepline.fsw.link.InstrumentConstants;
-
 import java.util.Arrays;
 
 /**
  * The energy-per-charge window table: window {@code w} makes the modulator alternate between DAC
  * codes {@code dacLow(w)} and {@code dacHigh(w)}. Immutable after it is built; primitive arrays.
  *
- * <p>A valid table has 1..{@link #CAPACITY} windows, every code in 0..DAC_MAX_CODE, lows strictly
+ * <p>A valid table has 1..{@link #CAPACITY} windows, every code in 0..the DAC's top code (at most
+ * {@link #MAX_CODE}), lows strictly
  * increasing, highs strictly increasing and low &lt; high in every window (windows may overlap or
  * leave gaps; the default table is contiguous). Commands check a table with
  * {@link #validate(int[], int[], int)} and get a {@link TableStatus} reason code; the factories
@@ -18,14 +17,10 @@ import java.util.Arrays;
  * per-step path.
  */
 public final class WindowTable {
-    /** Most windows a table may hold; every scheduler buffer is sized from it. */
+    /** Most windows a table may hold (telemetry ICD §4, window count 1..256); every scheduler buffer is sized from it. */
     public static final int CAPACITY = 256;
-    /** Windows in the default table (physics.md, the demo instrument). */
-    public static final int DEFAULT_WINDOWS = 128;
-    /** Low edge of the default table, millivolts: 50 V (physics.md, the demo instrument). */
-    public static final int DEFAULT_LOW_MILLIVOLTS = 50_000;
-    /** High edge of the default table, millivolts: 6000 V (physics.md, the demo instrument). */
-    public static final int DEFAULT_HIGH_MILLIVOLTS = 6_000_000;
+    /** Highest code the hardware ICD's step command can carry (§3.1: 16-bit levels); a DAC may reach less. */
+    public static final int MAX_CODE = 0xFFFF;
 
     private final int[] dacLow;
     private final int[] dacHigh;
@@ -36,39 +31,40 @@ public final class WindowTable {
     }
 
     /**
-     * The default table: 128 contiguous log-spaced windows from 50 V to 6000 V, edges
-     * E_k = 50 V * 120^(k/128), window k = [E_k, E_k+1], at the nominal 0.1 V per DAC code.
-     */
-    public static WindowTable defaultTable() {
-        return logSpaced(DEFAULT_WINDOWS, DEFAULT_LOW_MILLIVOLTS, DEFAULT_HIGH_MILLIVOLTS);
-    }
-
-    /**
      * {@code windows} contiguous log-spaced windows from {@code lowMillivolts} to
-     * {@code highMillivolts}, each edge rounded to the nearest DAC code of the nominal scale.
+     * {@code highMillivolts}, edges E_k = low × (high/low)^(k/windows), window k = [E_k, E_k+1], each
+     * edge rounded to the nearest DAC code of the nominal scale {@code millivoltsPerCode}
+     * (instrument description FORMAT.md, windows.spacing {@code log}).
      *
      * @throws IllegalArgumentException when the result is not a valid table (programmer misuse)
      */
-    public static WindowTable logSpaced(int windows, int lowMillivolts, int highMillivolts) {
-        if (windows < 1 || windows > CAPACITY || lowMillivolts <= 0 || highMillivolts <= lowMillivolts) {
+    public static WindowTable logSpaced(int windows, int lowMillivolts, int highMillivolts, int millivoltsPerCode) {
+        if (windows < 1 || windows > CAPACITY || lowMillivolts <= 0 || highMillivolts <= lowMillivolts
+            || millivoltsPerCode <= 0) {
             throw new IllegalArgumentException("bad log-spaced table: " + windows + " windows, "
-                + lowMillivolts + ".." + highMillivolts + " mV");
+                + lowMillivolts + ".." + highMillivolts + " mV at " + millivoltsPerCode + " mV per code");
         }
         int[] edges = new int[windows + 1];
         double ratio = (double) highMillivolts / lowMillivolts;
         for (int k = 0; k <= windows; k++) {
             double millivolts = lowMillivolts * Math.pow(ratio, (double) k / windows);
-            edges[k] = (int) Math.round(millivolts / InstrumentConstants.DAC_MILLIVOLTS_PER_CODE);
+            edges[k] = (int) Math.round(millivolts / millivoltsPerCode);
         }
         return of(Arrays.copyOf(edges, windows), Arrays.copyOfRange(edges, 1, windows + 1), windows);
     }
 
+    /** {@link #validate(int[], int[], int, int)} against the widest codes the hardware ICD carries. */
+    public static int validate(int[] dacLow, int[] dacHigh, int count) {
+        return validate(dacLow, dacHigh, count, MAX_CODE);
+    }
+
     /**
-     * Checks a candidate table without building it.
+     * Checks a candidate table without building it: codes within 0..{@code dacTopCode}, the DAC's
+     * highest code (InstrumentDescription#dacTopCode), strictly increasing.
      *
      * @return a {@link TableStatus} code; {@link TableStatus#OK} when the table is valid
      */
-    public static int validate(int[] dacLow, int[] dacHigh, int count) {
+    public static int validate(int[] dacLow, int[] dacHigh, int count, int dacTopCode) {
         if (count <= 0) {
             return TableStatus.EMPTY;
         }
@@ -80,7 +76,7 @@ public final class WindowTable {
         }
         for (int w = 0; w < count; w++) {
             if (dacLow[w] < 0 || dacHigh[w] < 0
-                || dacLow[w] > InstrumentConstants.DAC_MAX_CODE || dacHigh[w] > InstrumentConstants.DAC_MAX_CODE) {
+                || dacLow[w] > dacTopCode || dacHigh[w] > dacTopCode) {
                 return TableStatus.OUT_OF_DAC_RANGE;
             }
         }
@@ -121,5 +117,15 @@ public final class WindowTable {
     /** Modulator high level of window {@code w}, DAC code. */
     public int dacHigh(int w) {
         return dacHigh[w];
+    }
+
+    /** A copy of the low codes (start-up and ground tools; not for the step path). */
+    public int[] dacLows() {
+        return dacLow.clone();
+    }
+
+    /** A copy of the high codes (start-up and ground tools; not for the step path). */
+    public int[] dacHighs() {
+        return dacHigh.clone();
     }
 }

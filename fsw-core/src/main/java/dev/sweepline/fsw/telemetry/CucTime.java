@@ -1,5 +1,6 @@
 package dev.sweepline.fsw.telemetry;
 
+import dev.sweepline.fsw.octets.BigEndian;
 /**
  * CCSDS 301.0-B-4 §3.2 unsegmented time code (CUC), level 1 (TAI, epoch 1958-01-01), 4 coarse and
  * 2 fine octets: P-field {@code 0x1E}, not transmitted (telemetry ICD §3.2). Converts the flight
@@ -33,11 +34,7 @@ public final class CucTime {
 
     /** Writes a T-field from its two fields: coarse seconds (32 bits) and fine (16 bits). */
     public static void writeFields(byte[] buffer, int offset, long coarseSeconds, int fine) {
-        buffer[offset] = (byte) (coarseSeconds >>> 24);
-        buffer[offset + 1] = (byte) (coarseSeconds >>> 16);
-        buffer[offset + 2] = (byte) (coarseSeconds >>> 8);
-        buffer[offset + 3] = (byte) coarseSeconds;
-        buffer[offset + 4] = (byte) (fine >>> 8);
-        buffer[offset + 5] = (byte) fine;
+        BigEndian.put32(buffer, offset, coarseSeconds);
+        BigEndian.put16(buffer, offset + 4, fine);
     }
 }

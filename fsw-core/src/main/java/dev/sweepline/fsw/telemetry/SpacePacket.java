@@ -1,5 +1,6 @@
 package dev.sweepline.fsw.telemetry;
 
+import dev.sweepline.fsw.octets.BigEndian;
 /**
  * CCSDS 133.0-B-2 §4.1.3 space-packet primary header codec (telemetry ICD §3.1), over a byte array:
  *
@@ -40,21 +41,18 @@ public final class SpacePacket {
         int word0 = (type & 1) << 12 | (secondaryHeader ? 1 << 11 : 0) | (apid & MAX_APID);
         int word1 = (sequenceFlags & 0b11) << 14 | (sequenceCount & (SEQUENCE_MODULUS - 1));
         int word2 = (dataFieldLength - 1) & 0xFFFF;
-        buffer[offset] = (byte) (word0 >>> 8);
-        buffer[offset + 1] = (byte) word0;
-        buffer[offset + 2] = (byte) (word1 >>> 8);
-        buffer[offset + 3] = (byte) word1;
-        buffer[offset + 4] = (byte) (word2 >>> 8);
-        buffer[offset + 5] = (byte) word2;
+        BigEndian.put16(buffer, offset, word0);
+        BigEndian.put16(buffer, offset + 2, word1);
+        BigEndian.put16(buffer, offset + 4, word2);
     }
 
     /** APID of the header at {@code offset}. */
     public static int apid(byte[] buffer, int offset) {
-        return ((buffer[offset] & 0x07) << 8) | (buffer[offset + 1] & 0xFF);
+        return BigEndian.get16(buffer, offset) & MAX_APID;
     }
 
     /** Total packet length (header included) of the header at {@code offset}. */
     public static int totalLength(byte[] buffer, int offset) {
-        return PRIMARY_HEADER_LENGTH + 1 + (((buffer[offset + 4] & 0xFF) << 8) | (buffer[offset + 5] & 0xFF));
+        return PRIMARY_HEADER_LENGTH + 1 + BigEndian.get16(buffer, offset + 4);
     }
 }

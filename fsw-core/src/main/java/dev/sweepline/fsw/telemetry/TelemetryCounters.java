@@ -1,15 +1,13 @@
 package dev.sweepline.fsw.telemetry;
 
-import dev.sweepline.fsw.sweep.SweepMode;
-
 /**
- * Bandwidth accounting (telemetry ICD §7): packet octets generated per APID and per sweep mode, and
+ * Bandwidth accounting (telemetry ICD §7): packet octets generated per APID (the spectrum
+ * octets per sweep mode are the science package's), and
  * frame octets emitted (ASM included) per virtual channel. Plain counters, updated in place.
  */
 public final class TelemetryCounters {
     private final long[] packetOctetsByApid = new long[SpacePacket.MAX_APID + 1];
     private final long[] packetsByApid = new long[SpacePacket.MAX_APID + 1];
-    private final long[] spectrumOctetsByMode = new long[SweepMode.values().length];
     private final long[] frameOctetsByVc = new long[TransferFrameBuilder.VIRTUAL_CHANNELS];
     private long packetOctets;
 
@@ -17,10 +15,6 @@ public final class TelemetryCounters {
         packetOctetsByApid[apid] += octets;
         packetsByApid[apid]++;
         packetOctets += octets;
-    }
-
-    void countSpectrum(SweepMode mode, int octets) {
-        spectrumOctetsByMode[mode.ordinal()] += octets;
     }
 
     void countFrame(int vc, int octets) {
@@ -40,11 +34,6 @@ public final class TelemetryCounters {
     /** Packet octets generated on every APID (idle fill excluded). */
     public long packetOctets() {
         return packetOctets;
-    }
-
-    /** Spectrum packet octets generated in {@code mode}. */
-    public long spectrumOctets(SweepMode mode) {
-        return spectrumOctetsByMode[mode.ordinal()];
     }
 
     /** Frame octets (ASM included) emitted on {@code vc}. */

@@ -1,11 +1,11 @@
 package dev.sweepline.fsw.telemetry;
 
-import dev.sweepline.fsw.sweep.Spectrum;
-
 /**
- * The flight software's telemetry output: builds each packet (primary header, CUC secondary header,
- * user data) in one buffer allocated at start-up, counts it, and hands it to the frame builder of its
- * virtual channel (telemetry ICD). Threading: one thread, the executive's.
+ * The flight software's telemetry output, CCSDS only: the caller writes a packet's user data in place
+ * into one buffer allocated at start-up ({@link #buffer()} from {@link #userDataOffset()}), then this
+ * writer completes it (primary header, CUC secondary header), counts it, and hands it to the frame
+ * builder of its virtual channel (telemetry ICD §1-§3, §7). What the user data say is the science and
+ * report packages'. Threading: one thread, the executive's.
  */
 public final class TelemetryWriter {
     /** The demo probe's spacecraft id (telemetry ICD §1, invented). */
@@ -20,7 +20,6 @@ public final class TelemetryWriter {
 
     private final CucTime time;
     private final TransferFrameBuilder frames;
-    private final SpectrumPacker packer;
     private final TelemetryCounters counters = new TelemetryCounters();
     private final int[] sequenceByApid = new int[SpacePacket.MAX_APID + 1];
     private final byte[] packet;
@@ -29,31 +28,22 @@ public final class TelemetryWriter {
      * @param frameLength         octets per transfer frame
      * @param flushIntervalMicros longest time a partly filled frame waits
      * @param time                converts ticks to CUC time
-     * @param compress            CCSDS 121 coding of spectra (true) or raw samples
+     * @param maxUserDataOctets   the longest user data any packet will have (sizes the packet buffer)
      * @param sink                receives every frame with its ASM
      */
-    public TelemetryWriter(int frameLength, long flushIntervalMicros, CucTime time, boolean compress, FrameSink sink) {
+    public TelemetryWriter(int frameLength, long flushIntervalMicros, CucTime time, int maxUserDataOctets,
+                           FrameSink sink) {
         this.time = time;
-        this.packer = new SpectrumPacker(compress);
-        this.packet = new byte[DATA_AT + packer.maxUserDataLength()];
+        this.packet = new byte[DATA_AT + maxUserDataOctets];
         this.frames = new TransferFrameBuilder(SPACECRAFT_ID, frameLength, flushIntervalMicros, (f, off, len) -> {
             counters.countFrame((f[off + TransferFrameBuilder.ASM_LENGTH + 1] >> 1) & 7, len);
             sink.accept(f, off, len);
         });
     }
 
-    /** Writes a spectrum packet for a completed sweep (APID by its mode), stamped with its start time. */
-    public void writeSpectrum(Spectrum s, int integrationPeriods, int tableId, int flags, long nowMicros) {
-        int apid = s.mode() == dev.sweepline.fsw.sweep.SweepMode.FOCUS ? Apid.FOCUS_SPECTRUM : Apid.SURVEY_SPECTRUM;
-        int n = packer.write(s, integrationPeriods, tableId, flags, packet, DATA_AT);
-        int total = finish(apid, s.startMicros(), n);
-        counters.countSpectrum(s.mode(), total);
-        frames.writePacket(Apid.VC_SCIENCE, packet, 0, total, nowMicros);
-    }
-
     /**
-     * The user-data area of the packet buffer, for engineering packets written in place: fill
-     * {@code length} octets from {@link #userDataOffset()} then call {@link #sendEngineering}.
+     * The packet buffer, for user data written in place: fill {@code length} octets from
+     * {@link #userDataOffset()}, then call {@link #send} or {@link #sendEngineering}.
      */
     public byte[] buffer() {
         return packet;
@@ -64,10 +54,26 @@ public final class TelemetryWriter {
         return DATA_AT;
     }
 
+    /** Octets of user data the buffer holds. */
+    public int maxUserDataLength() {
+        return packet.length - DATA_AT;
+    }
+
+    /**
+     * Sends the packet whose user data is in the buffer on {@code apid} and virtual channel {@code vc},
+     * stamped {@code atMicros}.
+     *
+     * @return the packet's octets (headers included)
+     */
+    public int send(int apid, int vc, int userDataLength, long atMicros, long nowMicros) {
+        int total = finish(apid, atMicros, userDataLength);
+        frames.writePacket(vc, packet, 0, total, nowMicros);
+        return total;
+    }
+
     /** Sends the engineering packet whose user data is in the buffer (VC 1), stamped {@code atMicros}. */
     public void sendEngineering(int apid, int userDataLength, long atMicros, long nowMicros) {
-        int total = finish(apid, atMicros, userDataLength);
-        frames.writePacket(Apid.VC_ENGINEERING, packet, 0, total, nowMicros);
+        send(apid, Apid.VC_ENGINEERING, userDataLength, atMicros, nowMicros);
     }
 
     /** Flushes frames that have waited longer than the flush interval; returns how many. */

@@ -1,5 +1,7 @@
 package dev.sweepline.fsw.telemetry;
 
+import dev.sweepline.fsw.octets.BigEndian;
+import dev.sweepline.fsw.octets.Crc16;
 /**
  * Packs space packets into fixed-length CCSDS 132.0-B-3 TM transfer frames (telemetry ICD §2):
  * packets of a virtual channel go back to back and span frames; the first header pointer marks the
@@ -200,17 +202,13 @@ public final class TransferFrameBuilder {
         byte[] f = frames[vc];
         int h = ASM_LENGTH;
         int word0 = (spacecraftId << 4) | (vc << 1); // TFVN 00, OCF flag 0
-        f[h] = (byte) (word0 >>> 8);
-        f[h + 1] = (byte) word0;
+        BigEndian.put16(f, h, word0);
         f[h + 2] = (byte) masterCount;
         f[h + 3] = (byte) vcCount[vc];
         int status = 0b0001_1000_0000_0000 | firstHeaderPointer[vc]; // sec hdr 0, sync 0, order 0, SLI 11
-        f[h + 4] = (byte) (status >>> 8);
-        f[h + 5] = (byte) status;
+        BigEndian.put16(f, h + 4, status);
         int crcAt = ASM_LENGTH + frameLength - FECF_LENGTH;
-        int crc = Crc16.of(f, ASM_LENGTH, frameLength - FECF_LENGTH);
-        f[crcAt] = (byte) (crc >>> 8);
-        f[crcAt + 1] = (byte) crc;
+        BigEndian.put16(f, crcAt, Crc16.of(f, ASM_LENGTH, frameLength - FECF_LENGTH));
         masterCount = (masterCount + 1) & 0xFF;
         vcCount[vc] = (vcCount[vc] + 1) & 0xFF;
         framesEmitted[vc]++;
@@ -219,9 +217,6 @@ public final class TransferFrameBuilder {
     }
 
     private static void writeAsm(byte[] f) {
-        f[0] = (byte) (ASM >>> 24);
-        f[1] = (byte) (ASM >>> 16);
-        f[2] = (byte) (ASM >>> 8);
-        f[3] = (byte) ASM;
+        BigEndian.put32(f, 0, ASM);
     }
 }

@@ -1,18 +1,18 @@
 package dev.sweepline.fsw.command;
 
-import static org.junit.jupiter.api.Assertions.assertEquals;
-
+import dev.sweepline.fsw.DemoCup;
 import dev.sweepline.fsw.table.SweepParameters;
-import dev.sweepline.fsw.table.WindowTable;
 import java.lang.reflect.Field;
 import java.lang.reflect.Modifier;
 import org.junit.jupiter.api.Test;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
 
 /** Every sweep parameter survives the table image (commands.md §4.1), so a new field cannot be forgotten. */
 class TableImageFieldsTest {
     @Test
     void shouldCarryEverySweepParameterThroughTheImage() throws IllegalAccessException {
-        ParameterTable t = ParameterTable.of(WindowTable.defaultTable(), SweepParameters.defaults());
+        ParameterTable t = ParameterTable.of(DemoCup.table(), DemoCup.parameters());
         int k = 0;
         for (Field f : SweepParameters.class.getFields()) {
             if (!Modifier.isStatic(f.getModifiers())) {
@@ -22,7 +22,7 @@ class TableImageFieldsTest {
         byte[] image = new byte[TableImage.MAX_OCTETS];
         int n = TableImage.encode(t, image);
         ParameterTable back = new ParameterTable();
-        TableImage.decode(image, n, back, dev.sweepline.fsw.instrument.InstrumentLimits.demo());
+        TableImage.decode(image, n, back, DemoCup.INSTRUMENT.limits());
         for (Field f : SweepParameters.class.getFields()) {
             if (!Modifier.isStatic(f.getModifiers())) {
                 assertEquals(f.getInt(t.sweep), f.getInt(back.sweep), f.getName());

@@ -1,5 +1,6 @@
 package dev.sweepline.fsw.exec;
 
+import dev.sweepline.fsw.DemoCup;
 import dev.sweepline.fsw.link.InstrumentLink;
 import dev.sweepline.fsw.link.SampleReply;
 import dev.sweepline.fsw.link.StepCommand;
@@ -10,7 +11,6 @@ import dev.sweepline.fsw.sweep.RecordingListener;
 import dev.sweepline.fsw.sweep.SweepMode;
 import dev.sweepline.fsw.sweep.SweepScheduler;
 import dev.sweepline.fsw.sweep.SyntheticInstrument;
-import dev.sweepline.fsw.table.SweepParameters;
 import dev.sweepline.fsw.table.WindowTable;
 import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
@@ -26,9 +26,9 @@ import static org.mockito.Mockito.times;
 import static org.mockito.Mockito.verify;
 import static org.mockito.Mockito.when;
 
-/** The executive's sequence, timeout, retry and safe behaviour (exec design note R1-R7). */
+/** The executive's sequence, timeout, retry and safe behaviour (exec design note E1-E8). */
 class ExecutiveTest {
-    private static final WindowTable TABLE = WindowTable.defaultTable();
+    private static final WindowTable TABLE = DemoCup.table();
     /** First step from HV off: 1000 us + 519 codes * 1 us settle + 8 ms integration (issue 2 settle formula). */
     private static final long FIRST_STEP_MICROS = 1000 + 519 + 8 * 1000;
     private static final int MARGIN = 5000;
@@ -42,7 +42,7 @@ class ExecutiveTest {
     void setUp() {
         SyntheticInstrument plasma = new SyntheticInstrument(91);
         listener = new RecordingListener();
-        scheduler = new SweepScheduler(TABLE, SweepParameters.defaults(), listener);
+        scheduler = new SweepScheduler(DemoCup.INSTRUMENT, TABLE, DemoCup.parameters(), listener);
         link = new FakeLink(new CannedReplies(TABLE, plasma));
         exec = new Executive(link, scheduler, MARGIN, 2);
     }
@@ -52,7 +52,7 @@ class ExecutiveTest {
         assertTrue(exec.doWork(0) > 0);
         assertEquals(1, exec.stepsSent());
         assertTrue(exec.outstanding());
-        assertEquals(FIRST_STEP_MICROS, exec.currentStep().durationMicros());
+        assertEquals(FIRST_STEP_MICROS, exec.currentStep().durationMicros(DemoCup.MODULATION_PERIOD_MICROS));
         assertEquals(0, exec.doWork(1000)); // reply not due: nothing to do
         exec.doWork(FIRST_STEP_MICROS + 100); // due (latency 100 us): ingest, and send the next step
         assertEquals(1, exec.repliesAccepted());
@@ -184,7 +184,7 @@ class ExecutiveTest {
     @Test
     void shouldAllocateNothingPerCycle() {
         // architecture.md: the per-step path allocates nothing; executive + scheduler (AllocationMeter rule)
-        Executive quiet = new Executive(link, new SweepScheduler(TABLE, SweepParameters.defaults(), null), MARGIN, 2);
+        Executive quiet = new Executive(link, new SweepScheduler(DemoCup.INSTRUMENT, TABLE, DemoCup.parameters(), null), MARGIN, 2);
         long[] now = {0};
         AllocationMeter.assertAllocationFree(cycles -> {
             for (int k = 0; k < cycles; k++) {

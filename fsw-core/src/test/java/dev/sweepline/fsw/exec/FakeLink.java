@@ -1,5 +1,6 @@
 package dev.sweepline.fsw.exec;
 
+import dev.sweepline.fsw.DemoCup;
 import dev.sweepline.fsw.link.InstrumentLink;
 import dev.sweepline.fsw.link.SampleReply;
 import dev.sweepline.fsw.link.StepCommand;
@@ -49,7 +50,7 @@ final class FakeLink implements InstrumentLink {
         }
         canned.answer(step, pending);
         hasPending = true;
-        dueMicros = nowMicros + step.durationMicros() + latencyMicros;
+        dueMicros = nowMicros + step.durationMicros(DemoCup.MODULATION_PERIOD_MICROS) + latencyMicros;
         return true;
     }
 

@@ -1,16 +1,16 @@
 package dev.sweepline.fsw.exec;
 
+import dev.sweepline.fsw.DemoCup;
 import dev.sweepline.fsw.command.NonVolatileStore;
 import dev.sweepline.fsw.sweep.CannedReplies;
 import dev.sweepline.fsw.sweep.SweepListener;
 import dev.sweepline.fsw.sweep.SyntheticInstrument;
 import dev.sweepline.fsw.table.WindowTable;
-
 import java.util.Arrays;
 
 /** Flight software on a {@link FakeLink} with canned 1 AU replies, stepped like the bench loop. */
 final class FswRig {
-    static final WindowTable TABLE = WindowTable.defaultTable();
+    static final WindowTable TABLE = DemoCup.table();
     final FakeLink link;
     final FlightSoftware fsw;
     long nowMicros;
@@ -29,7 +29,7 @@ final class FswRig {
      * configures it explicitly (the flight default is OFF, commands.md §2.3).
      */
     static FlightConfig benchConfig() {
-        FlightConfig c = new FlightConfig();
+        FlightConfig c = DemoCup.config();
         c.hvEnabledAtStart = true;
         return c;
     }

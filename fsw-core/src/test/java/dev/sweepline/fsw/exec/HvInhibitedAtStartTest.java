@@ -1,9 +1,6 @@
 package dev.sweepline.fsw.exec;
 
-import static org.junit.jupiter.api.Assertions.assertEquals;
-import static org.junit.jupiter.api.Assertions.assertFalse;
-import static org.junit.jupiter.api.Assertions.assertTrue;
-
+import dev.sweepline.fsw.DemoCup;
 import dev.sweepline.fsw.command.CommandCode;
 import dev.sweepline.fsw.command.CommandReason;
 import dev.sweepline.fsw.command.HvState;
@@ -13,6 +10,10 @@ import dev.sweepline.fsw.link.SampleReply;
 import dev.sweepline.fsw.link.StepCommand;
 import dev.sweepline.fsw.sweep.SweepListener;
 import org.junit.jupiter.api.Test;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
 
 /**
  * Hazardous functions start inhibited (common practice for spacecraft high-voltage functions;
@@ -45,7 +46,7 @@ class HvInhibitedAtStartTest {
 
     private final FswRig rig = new FswRig();
     private final HvCountingLink link = new HvCountingLink(rig.link);
-    private final FlightSoftware fsw = new FlightSoftware(new FlightConfig(), link, (f, off, len) -> { },
+    private final FlightSoftware fsw = new FlightSoftware(DemoCup.config(), link, (f, off, len) -> { },
             SweepListener.NONE);
     private final TcBuilder tc = TcBuilder.demo();
     private long now;

@@ -1,10 +1,6 @@
 package dev.sweepline.fsw.exec;
 
-import static org.junit.jupiter.api.Assertions.assertEquals;
-import static org.junit.jupiter.api.Assertions.assertFalse;
-import static org.junit.jupiter.api.Assertions.assertThrows;
-import static org.junit.jupiter.api.Assertions.assertTrue;
-
+import dev.sweepline.fsw.DemoCup;
 import dev.sweepline.fsw.command.CommandCode;
 import dev.sweepline.fsw.command.CommandReason;
 import dev.sweepline.fsw.command.ParameterTable;
@@ -14,11 +10,15 @@ import dev.sweepline.fsw.command.TcBuilder;
 import dev.sweepline.fsw.fault.FaultMonitorId;
 import dev.sweepline.fsw.fault.FaultResponse;
 import dev.sweepline.fsw.instrument.InstrumentLimits;
-import dev.sweepline.fsw.table.SweepParameters;
 import dev.sweepline.fsw.table.TableStatus;
 import dev.sweepline.fsw.table.WindowTable;
 import java.util.Arrays;
 import org.junit.jupiter.api.Test;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
 
 /**
  * No table takes the instrument outside its own limits (commands.md §4.4, §6.1): the demo cup is
@@ -35,7 +35,7 @@ class InstrumentLimitsTableTest {
     }
 
     private static ParameterTable logSpaced(int highVolts) {
-        return ParameterTable.of(WindowTable.logSpaced(64, 100_000, highVolts * 1000), SweepParameters.defaults());
+        return ParameterTable.of(WindowTable.logSpaced(64, 100_000, highVolts * 1000, DemoCup.INSTRUMENT.millivoltsPerCode()), DemoCup.parameters());
     }
 
     private int verify(FswRig rig, byte[] image) {
@@ -63,7 +63,7 @@ class InstrumentLimitsTableTest {
 
     @Test
     void shouldAcceptTheLimitItselfAndRefuseOneCodeAbove() {
-        InstrumentLimits demo = InstrumentLimits.demo();
+        InstrumentLimits demo = DemoCup.INSTRUMENT.limits();
         assertEquals(60_000, demo.maxLevelCode); // 6000 V / 0.1 V per code
         int[] low = {59_000};
         assertEquals(TableStatus.OK, demo.checkLevels(low, new int[] {60_000}, 1));
@@ -82,7 +82,7 @@ class InstrumentLimitsTableTest {
     @Test
     void shouldRefuseAnUnsafeStartUpConfiguration() {
         FlightConfig c = FswRig.benchConfig();
-        c.table = WindowTable.logSpaced(64, 100_000, 6_400_000);
+        c.table = WindowTable.logSpaced(64, 100_000, 6_400_000, DemoCup.INSTRUMENT.millivoltsPerCode());
         assertThrows(IllegalArgumentException.class, () -> new FswRig(c));
     }
 

@@ -1,16 +1,16 @@
 package dev.sweepline.fsw.exec;
 
+import dev.sweepline.fsw.DemoCup;
 import dev.sweepline.fsw.command.CommandCode;
 import dev.sweepline.fsw.command.CommandReason;
 import dev.sweepline.fsw.command.ParameterTable;
 import dev.sweepline.fsw.command.TableImage;
 import dev.sweepline.fsw.command.TableManager;
 import dev.sweepline.fsw.command.TcBuilder;
-import dev.sweepline.fsw.table.SweepParameters;
+import dev.sweepline.fsw.octets.Crc16;
 import dev.sweepline.fsw.table.TableStatus;
 import dev.sweepline.fsw.table.WindowTable;
 import dev.sweepline.fsw.telemetry.Apid;
-import dev.sweepline.fsw.telemetry.Crc16;
 import org.junit.jupiter.api.Test;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
@@ -23,7 +23,7 @@ class TableCommandingTest {
 
     /** 64 log-spaced windows 100..3000 V, 4 integration periods: visibly different from the default. */
     static byte[] newImage() {
-        ParameterTable t = ParameterTable.of(WindowTable.logSpaced(64, 100_000, 3_000_000), SweepParameters.defaults());
+        ParameterTable t = ParameterTable.of(WindowTable.logSpaced(64, 100_000, 3_000_000, DemoCup.INSTRUMENT.millivoltsPerCode()), DemoCup.parameters());
         t.sweep.integrationPeriods = 4;
         byte[] image = new byte[TableImage.MAX_OCTETS];
         int n = TableImage.encode(t, image);
@@ -94,11 +94,11 @@ class TableCommandingTest {
 
     @Test
     void shouldRefuseInvalidImageWithItsTableStatus() {
-        ParameterTable t = ParameterTable.of(WindowTable.defaultTable(), SweepParameters.defaults());
+        ParameterTable t = ParameterTable.of(DemoCup.table(), DemoCup.parameters());
         t.dacLow[5] = t.dacLow[4]; // lows must rise strictly (TableStatus.NOT_MONOTONIC)
         byte[] buf = new byte[TableImage.MAX_OCTETS];
         int n = TableImage.encode(t, buf);
-        assertEquals(TableStatus.NOT_MONOTONIC, TableImage.decode(buf, n, new ParameterTable(), dev.sweepline.fsw.instrument.InstrumentLimits.demo()));
+        assertEquals(TableStatus.NOT_MONOTONIC, TableImage.decode(buf, n, new ParameterTable(), DemoCup.INSTRUMENT.limits()));
         FswRig rig = new FswRig();
         load(rig, java.util.Arrays.copyOf(buf, n));
         rig.send(tc.command(CommandCode.TABLE_VERIFY, TcBuilder.u16(n)));

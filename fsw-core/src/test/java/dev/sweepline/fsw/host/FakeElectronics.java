@@ -1,5 +1,6 @@
 package dev.sweepline.fsw.host;
 
+import dev.sweepline.fsw.DemoCup;
 import dev.sweepline.fsw.link.ByteTransport;
 import dev.sweepline.fsw.link.FrameReceiver;
 import dev.sweepline.fsw.link.FrameSender;
@@ -8,7 +9,6 @@ import dev.sweepline.fsw.link.HousekeepingReply;
 import dev.sweepline.fsw.link.LinkCounters;
 import dev.sweepline.fsw.link.MessageType;
 import dev.sweepline.fsw.link.SampleReply;
-import dev.sweepline.fsw.link.SampleReplyCodec;
 import dev.sweepline.fsw.link.StepCommand;
 import dev.sweepline.fsw.link.StepCommandCodec;
 
@@ -30,7 +30,7 @@ final class FakeElectronics {
 
     private final ByteTransport transport;
     private final LinkCounters counters = new LinkCounters();
-    private final FrameReceiver receiver = new FrameReceiver(counters);
+    private final FrameReceiver receiver = new FrameReceiver(counters, DemoCup.REPLIES);
     private final FrameSender sender;
     private final StepCommand step = new StepCommand();
     private final SampleReply reply = new SampleReply();
@@ -92,7 +92,7 @@ final class FakeElectronics {
             }
             reply.hvMonitorCode = hv ? step.dacHigh : offMonitorCode;
             if (!silent) {
-                sender.send(out, 0, SampleReplyCodec.encode(reply, out, 0));
+                sender.send(out, 0, DemoCup.REPLIES.encode(reply, out, 0));
             }
         } else if (type == MessageType.HOUSEKEEPING_REQUEST && !silent) {
             hk.sequence = HousekeepingCodec.decodeRequest(p, 0, receiver.payloadLength());

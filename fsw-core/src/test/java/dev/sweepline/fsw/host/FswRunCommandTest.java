@@ -63,6 +63,31 @@ class FswRunCommandTest {
     }
 
     @Test
+    void shouldStopWithTheFileLineAndFieldOfABrokenInstrumentDescription() throws IOException {
+        Path cup = dir.resolve("my-cup.yaml");
+        String demo = dev.sweepline.fsw.host.instrument.InstrumentFileReaderTest.demoText();
+        java.nio.file.Files.writeString(cup, demo.replace("  count: 128", "  count: 257"));
+        int exit = execute(command(), "--instrument", cup.toString(), "--link", "tcp:127.0.0.1:1",
+                "--tm", dir.resolve("run.tm").toString(), "--hv", "arm");
+        assertEquals(FswRunCommand.EXIT_BAD_INPUT, exit);
+        // instruments/FORMAT.md: a broken file fails with its file, line and field; windows.count is 1..256
+        assertOneLineNamingIt(cup + ":" + (demo.substring(0, demo.indexOf("  count: 128")).lines().count() + 1)
+                + ": windows.count: ");
+    }
+
+    @Test
+    void shouldListTheBuiltInInstruments() {
+        FswInstrumentsCommand c = new FswInstrumentsCommand();
+        c.out = new PrintStream(out, true, StandardCharsets.UTF_8);
+        assertEquals(FswRunCommand.EXIT_OK, new CommandLine(c).execute());
+        // instruments/index.txt: demo-cup (the default, id 1, 16-bit, 128 windows) and fine-cup (id 2, 20-bit, 256)
+        assertTrue(out().lines().anyMatch(l -> l.startsWith("demo-cup") && l.contains("id 1 ") && l.contains("16-bit")
+                && l.contains("128 windows") && l.contains("(default)")), out());
+        assertTrue(out().lines().anyMatch(l -> l.startsWith("fine-cup") && l.contains("20-bit")
+                && l.contains("256 windows")), out());
+    }
+
+    @Test
     void shouldStopWithOneLineAndNoPromptWhenTheSerialPortDoesNotOpen() {
         String tty = dir.resolve("no-such-tty").toString();
         int exit = execute(command(), "--link", tty, "--tm", dir.resolve("run.tm").toString(), "--hv", "arm");

@@ -1,11 +1,6 @@
 package dev.sweepline.fsw.host;
 
-import static org.junit.jupiter.api.Assertions.assertEquals;
-import static org.junit.jupiter.api.Assertions.assertFalse;
-import static org.junit.jupiter.api.Assertions.assertSame;
-import static org.junit.jupiter.api.Assertions.assertTrue;
-
-import dev.sweepline.fsw.exec.FlightConfig;
+import dev.sweepline.fsw.DemoCup;
 import dev.sweepline.fsw.exec.FlightSoftware;
 import dev.sweepline.fsw.link.FramedInstrumentLink;
 import dev.sweepline.fsw.link.PipeTransport;
@@ -15,6 +10,11 @@ import java.io.PrintStream;
 import java.nio.charset.StandardCharsets;
 import org.junit.jupiter.api.Test;
 
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertSame;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
 /**
  * The end of every run (hardware ICD §4.2): permission withdrawn, HV-off steps, the readback confirmed
  * below the threshold within the bound, or not. One thread and a fake clock: each pause advances the
@@ -23,9 +23,9 @@ import org.junit.jupiter.api.Test;
 class HvShutdownTest {
     private final PipeTransport[] ends = PipeTransport.pair(1 << 16);
     private final FakeElectronics electronics = new FakeElectronics(ends[1]);
-    private final FramedInstrumentLink link = new FramedInstrumentLink(ends[0]);
+    private final FramedInstrumentLink link = new FramedInstrumentLink(ends[0], DemoCup.INSTRUMENT);
     private final HvArming arming = new HvArming(HvArming.DEFAULT_TIMEOUT_MICROS);
-    private final FlightSoftware fsw = new FlightSoftware(new FlightConfig(), new HvGuardLink(link, arming),
+    private final FlightSoftware fsw = new FlightSoftware(DemoCup.config(), new HvGuardLink(link, arming),
             (b, off, len) -> { }, SweepListener.NONE);
     private final ByteArrayOutputStream printed = new ByteArrayOutputStream();
     private long nowMicros;

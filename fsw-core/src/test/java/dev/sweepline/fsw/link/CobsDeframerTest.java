@@ -84,7 +84,7 @@ class CobsDeframerTest {
         }
         for (int v = 1; ; v++) {
             f[0] = (byte) v;
-            int crc = dev.sweepline.fsw.telemetry.Crc16.of(f, 0, 252);
+            int crc = dev.sweepline.fsw.octets.Crc16.of(f, 0, 252);
             if ((crc >>> 8) != 0 && (crc & 0xFF) != 0) {
                 f[252] = (byte) (crc >>> 8);
                 f[253] = (byte) crc;

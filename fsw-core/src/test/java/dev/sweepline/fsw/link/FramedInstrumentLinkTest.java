@@ -1,25 +1,26 @@
 package dev.sweepline.fsw.link;
 
+import dev.sweepline.fsw.DemoCup;
+import dev.sweepline.fsw.sweep.AllocationMeter;
+import org.junit.jupiter.api.Test;
+
 import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import dev.sweepline.fsw.sweep.AllocationMeter;
-import org.junit.jupiter.api.Test;
-
 class FramedInstrumentLinkTest {
     @Test
     void shouldCarryAStepOutAndAReplyBackOverAPipe() {
         PipeTransport[] ends = PipeTransport.pair(256);
-        FramedInstrumentLink link = new FramedInstrumentLink(ends[0]);
+        FramedInstrumentLink link = new FramedInstrumentLink(ends[0], DemoCup.INSTRUMENT);
         StepCommand s = step(5);
         assertTrue(link.send(s, 1_000));
-        assertEquals(1_000 + s.durationMicros(), link.expectedReplyMicros());
+        assertEquals(1_000 + s.durationMicros(DemoCup.MODULATION_PERIOD_MICROS), link.expectedReplyMicros());
 
         // the far end: deframe the step, answer it
         LinkCounters far = new LinkCounters();
-        FrameReceiver rx = new FrameReceiver(far);
+        FrameReceiver rx = new FrameReceiver(far, DemoCup.REPLIES);
         byte[] b = new byte[64];
         int n = ends[1].read(b, 0, b.length);
         assertEquals(19, n); // hardware ICD §6
@@ -37,7 +38,7 @@ class FramedInstrumentLinkTest {
         r.quadrant[2] = 4242;
         FrameSender tx = new FrameSender(ends[1], far);
         byte[] p = new byte[15];
-        SampleReplyCodec.encode(r, p, 0);
+        DemoCup.REPLIES.encode(r, p, 0);
         tx.send(p, 0, 15);
 
         SampleReply into = new SampleReply();
@@ -51,7 +52,7 @@ class FramedInstrumentLinkTest {
     @Test
     void shouldRefuseASendWhileTheLastFrameIsStillGoingOut() {
         PipeTransport[] ends = PipeTransport.pair(32); // room for one 19-octet frame, not two
-        FramedInstrumentLink link = new FramedInstrumentLink(ends[0]);
+        FramedInstrumentLink link = new FramedInstrumentLink(ends[0], DemoCup.INSTRUMENT);
         assertTrue(link.send(step(1), 0));
         assertTrue(link.send(step(2), 0)); // 13 octets fit, 6 wait
         assertFalse(link.send(step(3), 0));
@@ -64,13 +65,13 @@ class FramedInstrumentLinkTest {
     @Test
     void shouldHoldOneReplyAndLeaveTheRestUnread() {
         PipeTransport[] ends = PipeTransport.pair(1024);
-        FramedInstrumentLink link = new FramedInstrumentLink(ends[0]);
+        FramedInstrumentLink link = new FramedInstrumentLink(ends[0], DemoCup.INSTRUMENT);
         FrameSender tx = new FrameSender(ends[1], new LinkCounters());
         byte[] p = new byte[15];
         SampleReply r = new SampleReply();
         for (int s = 0; s < 3; s++) {
             r.sequence = s;
-            SampleReplyCodec.encode(r, p, 0);
+            DemoCup.REPLIES.encode(r, p, 0);
             tx.send(p, 0, 15);
         }
         SampleReply into = new SampleReply();
@@ -84,7 +85,7 @@ class FramedInstrumentLinkTest {
     @Test
     void shouldAllocateNothingPerStep() {
         PipeTransport[] ends = PipeTransport.pair(1024);
-        FramedInstrumentLink link = new FramedInstrumentLink(ends[0]);
+        FramedInstrumentLink link = new FramedInstrumentLink(ends[0], DemoCup.INSTRUMENT);
         FrameSender tx = new FrameSender(ends[1], new LinkCounters());
         StepCommand s = step(0);
         SampleReply r = new SampleReply();
@@ -97,7 +98,7 @@ class FramedInstrumentLinkTest {
                 link.send(s, 0);
                 ends[1].read(sink, 0, sink.length);
                 r.sequence = s.sequence;
-                SampleReplyCodec.encode(r, p, 0);
+                DemoCup.REPLIES.encode(r, p, 0);
                 tx.send(p, 0, 15);
                 assertTrue(link.poll(r, 0));
             }

@@ -1,12 +1,13 @@
 package dev.sweepline.fsw.link;
 
-import static org.junit.jupiter.api.Assertions.assertArrayEquals;
-import static org.junit.jupiter.api.Assertions.assertEquals;
-import static org.junit.jupiter.api.Assertions.assertTrue;
-
+import dev.sweepline.fsw.DemoCup;
 import java.util.Arrays;
 import java.util.HexFormat;
 import org.junit.jupiter.api.Test;
+
+import static org.junit.jupiter.api.Assertions.assertArrayEquals;
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
 
 /**
  * Golden wire frames of the hardware ICD §2-3. The expected octets were made with python3 from the
@@ -47,38 +48,38 @@ class MessageCodecTest {
         assertTrue(back.hvEnabled);
         assertEquals(0x12345, back.settleMicros);
         assertEquals(8, back.integrationPeriods);
-        assertEquals(s.durationMicros(), back.durationMicros());
+        assertEquals(s.durationMicros(DemoCup.MODULATION_PERIOD_MICROS), back.durationMicros(DemoCup.MODULATION_PERIOD_MICROS));
     }
 
     @Test
     void shouldDeframeAndDecodeTheGoldenReply() {
         LinkCounters c = new LinkCounters();
-        FrameReceiver rx = new FrameReceiver(c);
+        FrameReceiver rx = new FrameReceiver(c, DemoCup.REPLIES);
         int type = FrameReceiver.NONE;
         for (byte b : HEX.parseHex(REPLY_FRAME)) {
             type = rx.accept(b);
         }
         assertEquals(MessageType.SAMPLE_REPLY, type);
         SampleReply r = new SampleReply();
-        assertEquals(LinkStatus.OK, SampleReplyCodec.decode(rx.payload(), 0, rx.payloadLength(), r));
+        assertEquals(LinkStatus.OK, DemoCup.REPLIES.decode(rx.payload(), 0, rx.payloadLength(), r));
         assertEquals(0x1234, r.sequence);
         assertEquals(SampleReply.STATUS_SATURATED | SampleReply.STATUS_HV_OFF, r.status);
         assertEquals(1, r.gainRange);
         assertArrayEquals(new int[] {0x0100, 0x0200, 0xFFFF, 0}, r.quadrant);
         assertEquals(0xA0B0, r.hvMonitorCode);
-        byte[] again = new byte[SampleReplyCodec.LENGTH];
-        SampleReplyCodec.encode(r, again, 0);
+        byte[] again = new byte[DemoCup.REPLIES.length()];
+        DemoCup.REPLIES.encode(r, again, 0);
         assertArrayEquals(Arrays.copyOf(rx.payload(), rx.payloadLength()), again);
         assertEquals(1, c.framesGood);
     }
 
     @Test
     void shouldRefuseUnknownTypesAndWrongLengths() {
-        assertEquals(LinkStatus.UNKNOWN_TYPE, MessageType.check(HEX.parseHex("7f0000"), 0, 3));
-        assertEquals(LinkStatus.WRONG_LENGTH, MessageType.check(HEX.parseHex("010000"), 0, 3)); // a step is 15
-        assertEquals(LinkStatus.OK, MessageType.check(HEX.parseHex("020001"), 0, 3)); // HK request is 3
+        assertEquals(LinkStatus.UNKNOWN_TYPE, MessageType.check(HEX.parseHex("7f0000"), 0, 3, DemoCup.REPLIES.length()));
+        assertEquals(LinkStatus.WRONG_LENGTH, MessageType.check(HEX.parseHex("010000"), 0, 3, DemoCup.REPLIES.length())); // a step is 15
+        assertEquals(LinkStatus.OK, MessageType.check(HEX.parseHex("020001"), 0, 3, DemoCup.REPLIES.length())); // HK request is 3
         assertEquals(LinkStatus.WRONG_LENGTH, StepCommandCodec.decode(new byte[14], 0, 14, new StepCommand()));
-        assertEquals(LinkStatus.UNKNOWN_TYPE, SampleReplyCodec.decode(new byte[15], 0, 15, new SampleReply()));
+        assertEquals(LinkStatus.UNKNOWN_TYPE, DemoCup.REPLIES.decode(new byte[15], 0, 15, new SampleReply()));
     }
 
     @Test

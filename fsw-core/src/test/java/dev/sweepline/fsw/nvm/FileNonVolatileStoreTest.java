@@ -1,10 +1,6 @@
 package dev.sweepline.fsw.nvm;
 
-import static org.junit.jupiter.api.Assertions.assertArrayEquals;
-import static org.junit.jupiter.api.Assertions.assertEquals;
-import static org.junit.jupiter.api.Assertions.assertFalse;
-import static org.junit.jupiter.api.Assertions.assertTrue;
-
+import dev.sweepline.fsw.DemoCup;
 import dev.sweepline.fsw.command.NonVolatileStore;
 import dev.sweepline.fsw.command.TableManager;
 import dev.sweepline.fsw.exec.FlightConfig;
@@ -22,6 +18,11 @@ import java.util.ArrayList;
 import java.util.List;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
+
+import static org.junit.jupiter.api.Assertions.assertArrayEquals;
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
 
 /**
  * The PC's non-volatile memory: durable writes (POSIX fsync(2) of the data before rename(2), then of
@@ -71,7 +72,7 @@ class FileNonVolatileStoreTest {
         Files.write(file, new byte[0]);
         FileNonVolatileStore store = new FileNonVolatileStore(file);
         assertEquals(NonVolatileStore.EMPTY, store.read(NonVolatileStore.RECORD_TABLE, new byte[64]));
-        FlightConfig c = new FlightConfig();
+        FlightConfig c = DemoCup.config();
         c.nonVolatileStore = store;
         FlightSoftware fsw = new FlightSoftware(c, IDLE, (f, off, len) -> { }, SweepListener.NONE);
         assertEquals(TableManager.RESTORE_REJECTED, fsw.restoreStatus());

@@ -1,6 +1,6 @@
 package dev.sweepline.fsw.sweep;
 
-import dev.sweepline.fsw.table.SweepParameters;
+import dev.sweepline.fsw.DemoCup;
 import org.junit.jupiter.api.Test;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
@@ -14,7 +14,7 @@ class AcquisitionTest {
     @Test
     void shouldStartInSurveyAndReportStart() {
         RecordingListener l = new RecordingListener();
-        ClosedLoop loop = Fixtures.loop(Fixtures.oneAu(11), SweepParameters.defaults(), l);
+        ClosedLoop loop = Fixtures.loop(Fixtures.oneAu(11), DemoCup.parameters(), l);
         assertEquals(SweepMode.SURVEY, loop.scheduler.mode());
         loop.step();
         assertEquals(new RecordingListener.Change(SweepMode.SAFE, SweepMode.SURVEY, ModeChangeReason.START, 0), l.changes.get(0));
@@ -23,12 +23,12 @@ class AcquisitionTest {
     @Test
     void shouldAcquireLockOnceGainsAreRanged() {
         RecordingListener l = new RecordingListener();
-        ClosedLoop loop = Fixtures.loop(Fixtures.oneAu(12), SweepParameters.defaults(), l);
+        ClosedLoop loop = Fixtures.loop(Fixtures.oneAu(12), DemoCup.parameters(), l);
         loop.runSweeps(1);
         // cold start: every window is read in the top range (issue 2: never-measured windows use the highest
         // range); the 1 AU peak (~5 counts per quadrant there) is below the 40-count significance threshold
         for (int i = 0; i < 128; i++) {
-            assertEquals(GainPredictor.TOP_RANGE, l.steps.get(i).gainRange());
+            assertEquals((DemoCup.INSTRUMENT.gainRanges() - 1), l.steps.get(i).gainRange());
         }
         assertEquals(SweepMode.SURVEY, loop.scheduler.mode());
         loop.runSweeps(1);
@@ -45,7 +45,7 @@ class AcquisitionTest {
     @Test
     void shouldAcquireLockAfterOneSurveyWhenSignalIsStrong() {
         RecordingListener l = new RecordingListener();
-        ClosedLoop loop = Fixtures.loop(Fixtures.nearSun(19), SweepParameters.defaults(), l);
+        ClosedLoop loop = Fixtures.loop(Fixtures.nearSun(19), DemoCup.parameters(), l);
         loop.runSweeps(1);
         // near the Sun (~10 nA/cm^2, physics.md) the top range reads the peak well above the noise
         assertEquals(SweepMode.FOCUS, loop.scheduler.mode());
@@ -55,7 +55,7 @@ class AcquisitionTest {
     void shouldCentreBandOnRefinedProtonPeak() {
         SyntheticInstrument plasma = Fixtures.oneAu(13);
         RecordingListener l = new RecordingListener();
-        ClosedLoop loop = Fixtures.loop(plasma, SweepParameters.defaults(), l);
+        ClosedLoop loop = Fixtures.loop(plasma, DemoCup.parameters(), l);
         loop.runSweeps(3);
         // reference: a floating-point 3-point parabola through the noise-free window currents (physics.md
         // window current); noise is 2 counts on ~1300 per quadrant and Q8 rounding is 1/256 window: 0.05 window
@@ -69,7 +69,7 @@ class AcquisitionTest {
     @Test
     void shouldSizeBandFromMeasuredWidth() {
         SyntheticInstrument plasma = Fixtures.oneAu(14);
-        ClosedLoop loop = Fixtures.loop(plasma, SweepParameters.defaults(), new RecordingListener());
+        ClosedLoop loop = Fixtures.loop(plasma, DemoCup.parameters(), new RecordingListener());
         loop.runSweeps(2);
         // physics.md: E = m v^2 / 2, so sigma(ln E) = 2 sigma_v / U with sigma_v = w / sqrt 2; the
         // window step is ln(120)/128; the v^2 flux factor and the log mapping skew the shape a little: 5 %
@@ -84,7 +84,7 @@ class AcquisitionTest {
 
     @Test
     void shouldCapBandAtMaxWindowsNearTheSun() {
-        ClosedLoop loop = Fixtures.loop(Fixtures.nearSun(15), SweepParameters.defaults(), new RecordingListener());
+        ClosedLoop loop = Fixtures.loop(Fixtures.nearSun(15), DemoCup.parameters(), new RecordingListener());
         loop.runSweeps(1);
         // U/w = 3: FWHM ~27 windows, 1.5 FWHM ~40 > (64 - 1) / 2 = 31 (default maxBandWindows 64)
         assertEquals(63, loop.scheduler.bandLast() - loop.scheduler.bandFirst() + 1);
@@ -95,7 +95,7 @@ class AcquisitionTest {
         SyntheticInstrument cold = Fixtures.oneAu(16);
         cold.protonThermalKmPerS = 10; // T ~ 6e3 K: FWHM ~2.2 windows, 1.5 FWHM ~3 < minimum 4
         cold.alphaPerProton = 0;
-        ClosedLoop loop = Fixtures.loop(cold, SweepParameters.defaults(), new RecordingListener());
+        ClosedLoop loop = Fixtures.loop(cold, DemoCup.parameters(), new RecordingListener());
         loop.runSweeps(2);
         assertEquals(9, loop.scheduler.bandLast() - loop.scheduler.bandFirst() + 1); // 2 * 4 + 1
     }
@@ -105,7 +105,7 @@ class AcquisitionTest {
         SyntheticInstrument slow = Fixtures.oneAu(17);
         slow.speedKmPerS = 110; // peak E/q ~63 V: window ~6
         slow.protonThermalKmPerS = 11; // w/U 0.1 as at 1 AU: FWHM ~9 windows, half-width ~14 > 6
-        ClosedLoop loop = Fixtures.loop(slow, SweepParameters.defaults(), new RecordingListener());
+        ClosedLoop loop = Fixtures.loop(slow, DemoCup.parameters(), new RecordingListener());
         loop.runSweeps(2);
         assertEquals(SweepMode.FOCUS, loop.scheduler.mode());
         Spectrum s = loop.scheduler.lastSpectrum();
@@ -124,7 +124,7 @@ class AcquisitionTest {
         SyntheticInstrument empty = Fixtures.oneAu(18);
         empty.protonDensityPerCm3 = 0; // noise only: 2 counts rms per quadrant, threshold 5 * 2 * 4 counts
         RecordingListener l = new RecordingListener();
-        ClosedLoop loop = Fixtures.loop(empty, SweepParameters.defaults(), l);
+        ClosedLoop loop = Fixtures.loop(empty, DemoCup.parameters(), l);
         loop.runSweeps(4);
         assertEquals(SweepMode.SURVEY, loop.scheduler.mode());
         assertEquals(4, loop.scheduler.sweepCount());

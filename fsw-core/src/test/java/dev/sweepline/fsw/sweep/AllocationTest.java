@@ -1,8 +1,8 @@
 package dev.sweepline.fsw.sweep;
 
+import dev.sweepline.fsw.DemoCup;
 import dev.sweepline.fsw.link.SampleReply;
 import dev.sweepline.fsw.link.StepCommand;
-import dev.sweepline.fsw.table.SweepParameters;
 import org.junit.jupiter.api.Test;
 
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -19,13 +19,13 @@ class AllocationTest {
     void shouldAllocateNothingPerStep() {
         SyntheticInstrument plasma = Fixtures.oneAu(81);
         CannedReplies canned = new CannedReplies(Fixtures.TABLE, plasma);
-        SweepScheduler scheduler = new SweepScheduler(Fixtures.TABLE, SweepParameters.defaults(), SweepListener.NONE);
+        SweepScheduler scheduler = new SweepScheduler(DemoCup.INSTRUMENT, Fixtures.TABLE, DemoCup.parameters(), SweepListener.NONE);
         StepCommand step = new StepCommand();
         SampleReply reply = new SampleReply();
         AllocationMeter.assertAllocationFree(steps -> {
             for (int k = 0; k < steps; k++) {
                 scheduler.nextStep(step, nowMicros);
-                nowMicros += step.durationMicros();
+                nowMicros += step.durationMicros(DemoCup.MODULATION_PERIOD_MICROS);
                 canned.answer(step, reply);
                 scheduler.ingest(reply, nowMicros);
             }

@@ -1,9 +1,10 @@
 package dev.sweepline.fsw.sweep;
 
+import dev.sweepline.fsw.DemoCup;
 import dev.sweepline.fsw.table.SweepParameters;
+import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.ValueSource;
-import org.junit.jupiter.api.Test;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
@@ -43,7 +44,7 @@ class AlphaDiscriminationTest {
     }
 
     private static SweepScheduler assertProtonLock(SyntheticInstrument plasma, int sweeps) {
-        ClosedLoop loop = Fixtures.loop(plasma, SweepParameters.defaults(), new RecordingListener());
+        ClosedLoop loop = Fixtures.loop(plasma, DemoCup.parameters(), new RecordingListener());
         loop.runSweeps(sweeps);
         assertEquals(SweepMode.FOCUS, loop.scheduler.mode());
         // truth: the argmax of the proton-only noise-free spectrum; +/- 1 window covers the alpha pulling
@@ -62,7 +63,7 @@ class AlphaDiscriminationTest {
     void shouldTakeLowerPeakAtAlphaRatioAsProtons() {
         // hand-built: a proton peak that reads lower than the alpha peak (e.g. clipped), at the alpha
         // ratio below it; Gaussian shapes of sigma 3.8 windows (1 AU width, AcquisitionTest)
-        Spectrum s = new Spectrum();
+        Spectrum s = new Spectrum(DemoCup.INSTRUMENT);
         s.begin(1, SweepMode.SURVEY, 0, 128, true, 0);
         int protonWindow = 50;
         int alphaWindow = protonWindow + 18; // 18.35 windows: the nearest whole window
@@ -78,7 +79,7 @@ class AlphaDiscriminationTest {
     @Test
     void shouldIgnoreMonotonicFlankAtAlphaRatio() {
         // a single broad peak (sigma 11 windows, U/w ~ 3): large but monotonic below, so not a proton partner
-        Spectrum s = new Spectrum();
+        Spectrum s = new Spectrum(DemoCup.INSTRUMENT);
         s.begin(1, SweepMode.SURVEY, 0, 128, true, 0);
         for (int i = 0; i < 128; i++) {
             s.setEntry(i, (int) Math.round(800_000 * gauss(i, 70, 11)), 1, 0);
@@ -90,7 +91,7 @@ class AlphaDiscriminationTest {
     @Test
     void shouldIgnoreNoiseBumpOnFlank() {
         // a 2 % bump on the flank at the alpha-ratio position is below the 10 % prominence fraction
-        Spectrum s = new Spectrum();
+        Spectrum s = new Spectrum(DemoCup.INSTRUMENT);
         s.begin(1, SweepMode.SURVEY, 0, 128, true, 0);
         for (int i = 0; i < 128; i++) {
             double y = 100_000 * gauss(i, 70, 11) + 2_000 * gauss(i, 52, 0.6);
@@ -102,7 +103,7 @@ class AlphaDiscriminationTest {
 
     @Test
     void shouldTreatFocusPeakAtAlphaRatioAsJump() {
-        SweepParameters p = SweepParameters.defaults();
+        SweepParameters p = DemoCup.parameters();
         p.jumpWindows = 40; // so that only the alpha-ratio rule can call it a jump
         p.halfWidthPerFwhmQ8 = 3 * 256; // band ~ +/-27 windows, holding a peak 18 windows up away from the edge
         SyntheticInstrument plasma = Fixtures.oneAu(23);
@@ -119,7 +120,7 @@ class AlphaDiscriminationTest {
 
     @Test
     void shouldKnowAlphaRatioFromTableCodes() {
-        SweepParameters p = SweepParameters.defaults();
+        SweepParameters p = DemoCup.parameters();
         int[] centre = new int[128];
         for (int w = 0; w < 128; w++) {
             centre[w] = (Fixtures.TABLE.dacLow(w) + Fixtures.TABLE.dacHigh(w)) / 2;
@@ -135,7 +136,7 @@ class AlphaDiscriminationTest {
         for (int w = 0; w < 128; w++) {
             centre[w] = (Fixtures.TABLE.dacLow(w) + Fixtures.TABLE.dacHigh(w)) / 2;
         }
-        return new PeakFinder(centre, SweepParameters.defaults());
+        return new PeakFinder(centre, DemoCup.parameters(), DemoCup.INSTRUMENT.rangeRatioShift());
     }
 
     static double gauss(double x, double mean, double sigma) {

@@ -1,5 +1,6 @@
 package dev.sweepline.fsw.sweep;
 
+import dev.sweepline.fsw.DemoCup;
 import dev.sweepline.fsw.link.SampleReply;
 import dev.sweepline.fsw.link.StepCommand;
 
@@ -32,7 +33,7 @@ public final class ClosedLoop {
             return false;
         }
         step.sequence = sequence++ & 0xFFFF;
-        nowMicros += step.durationMicros();
+        nowMicros += step.durationMicros(DemoCup.MODULATION_PERIOD_MICROS);
         if (instrument.answer(step, reply)) {
             scheduler.ingest(reply, nowMicros);
         }

@@ -1,5 +1,6 @@
 package dev.sweepline.fsw.sweep;
 
+import dev.sweepline.fsw.DemoCup;
 import dev.sweepline.fsw.link.SampleReply;
 import dev.sweepline.fsw.link.StepCommand;
 import dev.sweepline.fsw.table.SweepParameters;
@@ -18,7 +19,7 @@ class CommandTest {
     @Test
     void shouldRefuseBadTablesWithReasonAndKeepOldTable() {
         RecordingListener l = new RecordingListener();
-        ClosedLoop loop = Fixtures.loop(Fixtures.oneAu(61), SweepParameters.defaults(), l);
+        ClosedLoop loop = Fixtures.loop(Fixtures.oneAu(61), DemoCup.parameters(), l);
         SweepScheduler s = loop.scheduler;
         int[][] lows = {{}, new int[257], {100, 70_000}, {300, 200}, {100, 200}};
         int[][] highs = {{}, new int[257], {200, 70_100}, {400, 300}, {150}};
@@ -38,11 +39,11 @@ class CommandTest {
     @Test
     void shouldApplyNewTableAtSweepBoundary() {
         RecordingListener l = new RecordingListener();
-        ClosedLoop loop = Fixtures.loop(Fixtures.oneAu(62), SweepParameters.defaults(), l);
+        ClosedLoop loop = Fixtures.loop(Fixtures.oneAu(62), DemoCup.parameters(), l);
         loop.runSweeps(3);
         assertEquals(SweepMode.FOCUS, loop.scheduler.mode());
         loop.step(); // mid focus sweep
-        WindowTable coarse = WindowTable.logSpaced(64, 50_000, 6_000_000);
+        WindowTable coarse = WindowTable.logSpaced(64, 50_000, 6_000_000, DemoCup.INSTRUMENT.millivoltsPerCode());
         assertEquals(TableStatus.OK, loop.scheduler.loadTable(coarse));
         loop.step();
         assertEquals(Fixtures.TABLE.dacLow(l.steps.get(l.steps.size() - 1).window()), l.steps.get(l.steps.size() - 1).dacLow());
@@ -59,8 +60,8 @@ class CommandTest {
     @Test
     void shouldRefuseBadParametersAndKeepOld() {
         RecordingListener l = new RecordingListener();
-        ClosedLoop loop = Fixtures.loop(Fixtures.oneAu(63), SweepParameters.defaults(), l);
-        SweepParameters bad = SweepParameters.defaults();
+        ClosedLoop loop = Fixtures.loop(Fixtures.oneAu(63), DemoCup.parameters(), l);
+        SweepParameters bad = DemoCup.parameters();
         bad.integrationPeriods = 0;
         assertEquals(TableStatus.BAD_INTEGRATION, loop.scheduler.loadParameters(bad));
         assertEquals(TableStatus.MISSING_DATA, loop.scheduler.loadParameters(null));
@@ -71,9 +72,9 @@ class CommandTest {
     @Test
     void shouldApplyParametersAtSweepBoundary() {
         RecordingListener l = new RecordingListener();
-        ClosedLoop loop = Fixtures.loop(Fixtures.oneAu(64), SweepParameters.defaults(), l);
+        ClosedLoop loop = Fixtures.loop(Fixtures.oneAu(64), DemoCup.parameters(), l);
         loop.step();
-        SweepParameters p = SweepParameters.defaults();
+        SweepParameters p = DemoCup.parameters();
         p.integrationPeriods = 16;
         assertEquals(TableStatus.OK, loop.scheduler.loadParameters(p));
         p.integrationPeriods = 99; // the scheduler copied the set: later edits do not leak in
@@ -86,7 +87,7 @@ class CommandTest {
     @Test
     void shouldStepNothingInSafe() {
         RecordingListener l = new RecordingListener();
-        ClosedLoop loop = Fixtures.loop(Fixtures.oneAu(65), SweepParameters.defaults(), l);
+        ClosedLoop loop = Fixtures.loop(Fixtures.oneAu(65), DemoCup.parameters(), l);
         loop.runSweeps(3);
         loop.step();
         loop.scheduler.requestMode(SweepMode.SAFE, loop.nowMicros);
@@ -104,7 +105,7 @@ class CommandTest {
     @Test
     void shouldLeaveSafeOnlyByCommandAndSettleFromHvOff() {
         RecordingListener l = new RecordingListener();
-        ClosedLoop loop = Fixtures.loop(Fixtures.oneAu(66), SweepParameters.defaults(), l);
+        ClosedLoop loop = Fixtures.loop(Fixtures.oneAu(66), DemoCup.parameters(), l);
         loop.runSweeps(3);
         loop.scheduler.requestMode(SweepMode.SAFE, loop.nowMicros);
         loop.scheduler.requestMode(SweepMode.FOCUS, loop.nowMicros); // band still valid: FOCUS
@@ -118,7 +119,7 @@ class CommandTest {
     @Test
     void shouldSurveyWhenFocusCommandedWithoutBand() {
         RecordingListener l = new RecordingListener();
-        ClosedLoop loop = Fixtures.loop(Fixtures.oneAu(67), SweepParameters.defaults(), l);
+        ClosedLoop loop = Fixtures.loop(Fixtures.oneAu(67), DemoCup.parameters(), l);
         loop.step();
         loop.scheduler.requestMode(SweepMode.SAFE, loop.nowMicros);
         loop.scheduler.requestMode(SweepMode.FOCUS, loop.nowMicros);
@@ -137,15 +138,15 @@ class CommandTest {
 
     @Test
     void shouldRefuseInvalidConstructionParameters() {
-        SweepParameters p = SweepParameters.defaults();
+        SweepParameters p = DemoCup.parameters();
         p.resurveyEveryFocusSweeps = 0;
-        assertThrows(IllegalArgumentException.class, () -> new SweepScheduler(Fixtures.TABLE, p, null));
+        assertThrows(IllegalArgumentException.class, () -> new SweepScheduler(DemoCup.INSTRUMENT, Fixtures.TABLE, p, null));
     }
 
     @Test
     void shouldRecordMissingReplyAndCarryOn() {
         SyntheticInstrument plasma = Fixtures.oneAu(68);
-        ClosedLoop loop = Fixtures.loop(plasma, SweepParameters.defaults(), new RecordingListener());
+        ClosedLoop loop = Fixtures.loop(plasma, DemoCup.parameters(), new RecordingListener());
         loop.step();
         plasma.mute = true;
         loop.step(); // window 1: no reply
@@ -157,9 +158,9 @@ class CommandTest {
     }
 
     private static long run(long seed, int variant) {
-        ClosedLoop loop = Fixtures.loop(Fixtures.oneAu(seed), SweepParameters.defaults(), new RecordingListener());
+        ClosedLoop loop = Fixtures.loop(Fixtures.oneAu(seed), DemoCup.parameters(), new RecordingListener());
         if (variant == 1) {
-            loop.scheduler.loadTable(WindowTable.logSpaced(100, 50_000, 6_000_000));
+            loop.scheduler.loadTable(WindowTable.logSpaced(100, 50_000, 6_000_000, DemoCup.INSTRUMENT.millivoltsPerCode()));
         }
         loop.runSweeps(20);
         return loop.scheduler.decisionHash();

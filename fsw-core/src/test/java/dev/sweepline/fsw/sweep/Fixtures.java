@@ -1,12 +1,13 @@
 package dev.sweepline.fsw.sweep;
 
+import dev.sweepline.fsw.DemoCup;
 import dev.sweepline.fsw.table.SweepParameters;
 import dev.sweepline.fsw.table.WindowTable;
 
 /** Shared set-ups of the scheduler tests. */
 final class Fixtures {
     /** Default table (physics.md demo instrument). */
-    static final WindowTable TABLE = WindowTable.defaultTable();
+    static final WindowTable TABLE = DemoCup.table();
     /** Low edge of the default table, volts. */
     static final double LOW_VOLTS = 50;
     /** High edge of the default table, volts. */
@@ -40,14 +41,14 @@ final class Fixtures {
 
     /** A loop with a recording listener. */
     static ClosedLoop loop(SyntheticInstrument instrument, SweepParameters p, RecordingListener listener) {
-        SweepScheduler scheduler = new SweepScheduler(TABLE, p, listener);
+        SweepScheduler scheduler = new SweepScheduler(DemoCup.INSTRUMENT, TABLE, p, listener);
         listener.scheduler = scheduler;
         return new ClosedLoop(scheduler, instrument);
     }
 
     /** Fractional default-table window index (centre convention: window w is centred at w) of {@code volts}. */
     static double windowOf(double volts) {
-        return SyntheticInstrument.logWindow(volts, WindowTable.DEFAULT_WINDOWS, LOW_VOLTS, HIGH_VOLTS) - 0.5;
+        return SyntheticInstrument.logWindow(volts, DemoCup.INSTRUMENT.windowCount(), LOW_VOLTS, HIGH_VOLTS) - 0.5;
     }
 
     /** Noise-free total current of every window of the default table, amperes. */

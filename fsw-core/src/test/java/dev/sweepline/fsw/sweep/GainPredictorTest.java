@@ -1,6 +1,6 @@
 package dev.sweepline.fsw.sweep;
 
-import dev.sweepline.fsw.table.SweepParameters;
+import dev.sweepline.fsw.DemoCup;
 import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
 
@@ -10,7 +10,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 /**
  * Gain prediction and hysteresis (physics.md, noise and gain ranging: up above ~80 %, down below ~2 %
  * of full scale, ranges 32x apart). Full scale of one quadrant in range 0 is 65535 - 256 = 65279
- * counts above the pedestal (InstrumentConstants), so in range-0 units, with the Q16 fractions
+ * counts above the pedestal (instruments/demo-cup.yaml adc: 16 bits, pedestal 256), so in range-0 units, with the Q16 fractions
  * 52429 (0.80000) and 1311 (0.020004): up of range 0 = 65279 * 52429 >> 16 = 52223; down of range 1
  * = (65279 << 5) * 1311 >> 16 = 41787. The checks sit 2 units either side.
  */
@@ -21,9 +21,9 @@ class GainPredictorTest {
 
     @BeforeEach
     void setUp() {
-        g = new GainPredictor();
+        g = new GainPredictor(DemoCup.INSTRUMENT);
         g.reset(128);
-        g.configure(SweepParameters.defaults());
+        g.configure(DemoCup.parameters());
     }
 
     @Test
@@ -95,7 +95,7 @@ class GainPredictorTest {
     @Test
     void shouldNeverSaturateAfterFirstSurveyNearTheSun() {
         RecordingListener l = new RecordingListener();
-        ClosedLoop loop = Fixtures.loop(Fixtures.nearSun(41), SweepParameters.defaults(), l);
+        ClosedLoop loop = Fixtures.loop(Fixtures.nearSun(41), DemoCup.parameters(), l);
         loop.runSweeps(1);
         int saturatedInFirst = l.saturatedSamples;
         loop.runSweeps(20);
@@ -114,7 +114,7 @@ class GainPredictorTest {
         // prediction would have chosen a higher range); drift between sweeps is nil here
         SyntheticInstrument plasma = Fixtures.nearSun(42);
         plasma.protonDensityPerCm3 = 20_000; // ~0.7 nA per quadrant at the peak, near range 1's 80 %
-        ClosedLoop loop = Fixtures.loop(plasma, SweepParameters.defaults(), new RecordingListener());
+        ClosedLoop loop = Fixtures.loop(plasma, DemoCup.parameters(), new RecordingListener());
         loop.runSweeps(3);
         Spectrum s = loop.scheduler.lastSpectrum();
         for (int i = 0; i < s.count(); i++) {

@@ -1,5 +1,6 @@
 package dev.sweepline.fsw.sweep;
 
+import dev.sweepline.fsw.DemoCup;
 import dev.sweepline.fsw.table.SweepParameters;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
@@ -23,7 +24,7 @@ class LockLossTest {
     @Test
     void shouldHoldLockOnSteadyPlasma() {
         RecordingListener l = new RecordingListener();
-        SweepParameters p = SweepParameters.defaults();
+        SweepParameters p = DemoCup.parameters();
         ClosedLoop loop = locked(Fixtures.oneAu(31), p, l);
         loop.runSweeps(60);
         // steady plasma: the only mode changes are START, LOCK_ACQUIRED and the K-periodic re-surveys
@@ -35,7 +36,7 @@ class LockLossTest {
 
     @Test
     void shouldStayInSurveyWhenFocusIsDisabled() {
-        SweepParameters p = SweepParameters.defaults();
+        SweepParameters p = DemoCup.parameters();
         p.focusEnabled = 0; // survey-only phases of an orbit plan
         RecordingListener l = new RecordingListener();
         ClosedLoop loop = Fixtures.loop(Fixtures.oneAu(30), p, l);
@@ -48,7 +49,7 @@ class LockLossTest {
 
     @Test
     void shouldResurveyEveryKFocusSweeps() {
-        SweepParameters p = SweepParameters.defaults();
+        SweepParameters p = DemoCup.parameters();
         p.resurveyEveryFocusSweeps = 4;
         RecordingListener l = new RecordingListener();
         ClosedLoop loop = locked(Fixtures.oneAu(32), p, l);
@@ -67,7 +68,7 @@ class LockLossTest {
     void shouldDetectCurrentCollapse() {
         SyntheticInstrument plasma = Fixtures.oneAu(33);
         RecordingListener l = new RecordingListener();
-        ClosedLoop loop = locked(plasma, SweepParameters.defaults(), l);
+        ClosedLoop loop = locked(plasma, DemoCup.parameters(), l);
         plasma.protonDensityPerCm3 *= 0.1; // well below the 25 % collapse fraction, still significant
         loop.runSweeps(1);
         assertEquals(SweepMode.SURVEY, loop.scheduler.mode());
@@ -79,7 +80,7 @@ class LockLossTest {
     void shouldNotCallModestDensityDropACollapse() {
         SyntheticInstrument plasma = Fixtures.oneAu(34);
         RecordingListener l = new RecordingListener();
-        ClosedLoop loop = locked(plasma, SweepParameters.defaults(), l);
+        ClosedLoop loop = locked(plasma, DemoCup.parameters(), l);
         plasma.protonDensityPerCm3 *= 0.4; // above the 25 % collapse fraction
         loop.runSweeps(1);
         assertEquals(SweepMode.FOCUS, loop.scheduler.mode());
@@ -89,7 +90,7 @@ class LockLossTest {
     void shouldDetectNoPeak() {
         SyntheticInstrument plasma = Fixtures.oneAu(35);
         RecordingListener l = new RecordingListener();
-        ClosedLoop loop = locked(plasma, SweepParameters.defaults(), l);
+        ClosedLoop loop = locked(plasma, DemoCup.parameters(), l);
         plasma.protonDensityPerCm3 = 0;
         loop.runSweeps(1);
         assertEquals(ModeChangeReason.NO_PEAK, l.lastChange().reason());
@@ -100,7 +101,7 @@ class LockLossTest {
     void shouldDetectPeakOnEdge() {
         SyntheticInstrument plasma = Fixtures.oneAu(36);
         RecordingListener l = new RecordingListener();
-        SweepParameters p = SweepParameters.defaults();
+        SweepParameters p = DemoCup.parameters();
         p.edgeSearchWindows = 0; // no edge search: the edge drops to survey at once (R10)
         ClosedLoop loop = locked(plasma, p, l);
         int half = (loop.scheduler.bandLast() - loop.scheduler.bandFirst()) / 2;
@@ -116,7 +117,7 @@ class LockLossTest {
     void shouldSearchBeyondTheEdgeAndHoldTheMovedPeak() {
         SyntheticInstrument plasma = Fixtures.oneAu(36);
         RecordingListener l = new RecordingListener();
-        ClosedLoop loop = locked(plasma, SweepParameters.defaults(), l);
+        ClosedLoop loop = locked(plasma, DemoCup.parameters(), l);
         int changes = l.changes.size();
         int oldLast = loop.scheduler.bandLast();
         int half = (oldLast - loop.scheduler.bandFirst()) / 2;
@@ -126,7 +127,7 @@ class LockLossTest {
         // R18: still FOCUS, the band now reaches edgeSearchWindows (24) beyond the old upper edge
         assertEquals(SweepMode.FOCUS, loop.scheduler.mode());
         assertEquals(changes, l.changes.size());
-        assertEquals(oldLast + SweepParameters.defaults().edgeSearchWindows, loop.scheduler.bandLast());
+        assertEquals(oldLast + DemoCup.parameters().edgeSearchWindows, loop.scheduler.bandLast());
         loop.runSweeps(1);
         // the search sweep found the peak inside: a normal band is chosen around it, lock held
         int truth = Fixtures.argmax(Fixtures.trueCurrents(plasma));
@@ -138,7 +139,7 @@ class LockLossTest {
     void shouldSurveyWhenTheEdgeSearchFindsTheEdgeAgain() {
         SyntheticInstrument plasma = Fixtures.oneAu(36);
         RecordingListener l = new RecordingListener();
-        ClosedLoop loop = locked(plasma, SweepParameters.defaults(), l);
+        ClosedLoop loop = locked(plasma, DemoCup.parameters(), l);
         int half = (loop.scheduler.bandLast() - loop.scheduler.bandFirst()) / 2;
         plasma.speedKmPerS *= Math.sqrt(Math.pow(120, (half + 3) / 128.0));
         loop.runSweeps(1); // edge: search band
@@ -154,7 +155,7 @@ class LockLossTest {
 
     @Test
     void shouldDetectPeakJumpInsideWideBand() {
-        SweepParameters p = SweepParameters.defaults();
+        SweepParameters p = DemoCup.parameters();
         p.halfWidthPerFwhmQ8 = 3 * 256; // +/- 27 windows
         SyntheticInstrument plasma = Fixtures.oneAu(37);
         RecordingListener l = new RecordingListener();
@@ -169,7 +170,7 @@ class LockLossTest {
     void shouldTrackSlowDriftWithoutLosingLock() {
         SyntheticInstrument plasma = Fixtures.oneAu(38);
         RecordingListener l = new RecordingListener();
-        SweepParameters p = SweepParameters.defaults();
+        SweepParameters p = DemoCup.parameters();
         p.resurveyEveryFocusSweeps = 1000;
         ClosedLoop loop = locked(plasma, p, l);
         int changes = l.changes.size();
@@ -192,7 +193,7 @@ class LockLossTest {
     @ValueSource(ints = {0, 14, 28, 42, 56, 57, 70, 84, 98, 112, 126, 140, 154, 168, 184, 185})
     void shouldHoldShockedPeakWithinTwoSweeps(int frontStep) {
         SyntheticInstrument plasma = Fixtures.oneAu(39);
-        SweepParameters p = SweepParameters.defaults();
+        SweepParameters p = DemoCup.parameters();
         p.resurveyEveryFocusSweeps = 2; // a survey every third sweep, so fronts fall in both kinds
         RecordingListener l = new RecordingListener();
         ClosedLoop loop = locked(plasma, p, l);

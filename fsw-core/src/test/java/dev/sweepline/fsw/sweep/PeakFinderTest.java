@@ -1,6 +1,6 @@
 package dev.sweepline.fsw.sweep;
 
-import dev.sweepline.fsw.table.SweepParameters;
+import dev.sweepline.fsw.DemoCup;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.ValueSource;
@@ -30,7 +30,7 @@ class PeakFinderTest {
 
     @Test
     void shouldReportWindowIndexOfTheTableNotOfTheSpectrum() {
-        Spectrum s = new Spectrum();
+        Spectrum s = new Spectrum(DemoCup.INSTRUMENT);
         s.begin(1, SweepMode.FOCUS, 60, 29, true, 0);
         for (int i = 0; i < 29; i++) {
             s.setEntry(i, (int) Math.round(100_000 * AlphaDiscriminationTest.gauss(i, 14.25, 3.8)), 0, 0);
@@ -50,7 +50,7 @@ class PeakFinderTest {
 
     @Test
     void shouldMirrorFwhmWhenOneSideIsCut() {
-        Spectrum s = new Spectrum();
+        Spectrum s = new Spectrum(DemoCup.INSTRUMENT);
         s.begin(1, SweepMode.FOCUS, 0, 12, true, 0);
         for (int i = 0; i < 12; i++) {
             s.setEntry(i, (int) Math.round(100_000 * AlphaDiscriminationTest.gauss(i, 2.0, 3.8)), 0, 0);
@@ -82,7 +82,7 @@ class PeakFinderTest {
 
     @Test
     void shouldCentreTwoWindowPlateau() {
-        Spectrum s = new Spectrum();
+        Spectrum s = new Spectrum(DemoCup.INSTRUMENT);
         s.begin(1, SweepMode.SURVEY, 0, 5, true, 0);
         int[] y = {100, 5000, 5000, 100, 100};
         for (int i = 0; i < 5; i++) {
@@ -96,7 +96,7 @@ class PeakFinderTest {
     }
 
     static Spectrum gaussian(double centre, double sigma, double height, int range) {
-        Spectrum s = new Spectrum();
+        Spectrum s = new Spectrum(DemoCup.INSTRUMENT);
         s.begin(1, SweepMode.SURVEY, 0, 128, true, 0);
         for (int i = 0; i < 128; i++) {
             s.setEntry(i, (int) Math.round(height * AlphaDiscriminationTest.gauss(i, centre, sigma)), range, 0);
@@ -109,6 +109,6 @@ class PeakFinderTest {
         for (int w = 0; w < 128; w++) {
             centre[w] = (Fixtures.TABLE.dacLow(w) + Fixtures.TABLE.dacHigh(w)) / 2;
         }
-        return new PeakFinder(centre, SweepParameters.defaults());
+        return new PeakFinder(centre, DemoCup.parameters(), DemoCup.INSTRUMENT.rangeRatioShift());
     }
 }

@@ -1,13 +1,13 @@
 package dev.sweepline.fsw.sweep;
 
+import dev.sweepline.fsw.DemoCup;
 import dev.sweepline.fsw.link.StepCommand;
 import dev.sweepline.fsw.table.SweepParameters;
 import dev.sweepline.fsw.table.TableStatus;
 import dev.sweepline.fsw.table.WindowTable;
+import java.util.Random;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.ValueSource;
-
-import java.util.Random;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
@@ -32,7 +32,7 @@ class SchedulerModelTest {
         Random random = new Random(seed);
         SyntheticInstrument plasma = Fixtures.oneAu(seed);
         Model model = new Model();
-        SweepScheduler scheduler = new SweepScheduler(Fixtures.TABLE, SweepParameters.defaults(), model);
+        SweepScheduler scheduler = new SweepScheduler(DemoCup.INSTRUMENT, Fixtures.TABLE, DemoCup.parameters(), model);
         model.scheduler = scheduler;
         ClosedLoop loop = new ClosedLoop(scheduler, plasma);
         int focusSweepsSeen = 0;
@@ -88,7 +88,7 @@ class SchedulerModelTest {
         int count = s.windowCount();
         if (r.nextBoolean()) {
             int windows = 16 + r.nextInt(WindowTable.CAPACITY - 16 + 1);
-            assertEquals(TableStatus.OK, s.loadTable(WindowTable.logSpaced(windows, 50_000, 6_000_000)));
+            assertEquals(TableStatus.OK, s.loadTable(WindowTable.logSpaced(windows, 50_000, 6_000_000, DemoCup.INSTRUMENT.millivoltsPerCode())));
         } else {
             int[] lows = {100, 90};
             int[] highs = {150, 160};
@@ -98,7 +98,7 @@ class SchedulerModelTest {
     }
 
     private static void loadRandomParameters(SweepScheduler s, Random r) {
-        SweepParameters p = SweepParameters.defaults();
+        SweepParameters p = DemoCup.parameters();
         p.integrationPeriods = 1 + r.nextInt(16);
         p.resurveyEveryFocusSweeps = 1 + r.nextInt(20);
         p.halfWidthPerFwhmQ8 = r.nextInt(1024);

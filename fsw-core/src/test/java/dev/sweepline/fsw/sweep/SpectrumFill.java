@@ -1,6 +1,6 @@
 package dev.sweepline.fsw.sweep;
 
-import dev.sweepline.fsw.link.InstrumentConstants;
+import dev.sweepline.fsw.instrument.InstrumentDescription;
 import dev.sweepline.fsw.link.SampleReply;
 
 /**
@@ -10,7 +10,7 @@ import dev.sweepline.fsw.link.SampleReply;
  * itself but is only used at set-up.
  */
 public final class SpectrumFill {
-    private static final int Q = InstrumentConstants.QUADRANTS;
+    private static final int Q = InstrumentDescription.QUADRANTS;
 
     private SpectrumFill() {
     }

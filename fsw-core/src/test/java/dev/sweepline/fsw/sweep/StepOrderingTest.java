@@ -1,9 +1,9 @@
 package dev.sweepline.fsw.sweep;
 
+import dev.sweepline.fsw.DemoCup;
 import dev.sweepline.fsw.table.SweepParameters;
-import org.junit.jupiter.api.Test;
-
 import java.util.List;
+import org.junit.jupiter.api.Test;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -15,7 +15,7 @@ class StepOrderingTest {
         SyntheticInstrument empty = Fixtures.oneAu(51);
         empty.protonDensityPerCm3 = 0; // no peak: stays in survey
         RecordingListener l = new RecordingListener();
-        ClosedLoop loop = Fixtures.loop(empty, SweepParameters.defaults(), l);
+        ClosedLoop loop = Fixtures.loop(empty, DemoCup.parameters(), l);
         loop.runSweeps(4);
         // issue 2: up, then down, ...; starting from HV off the bottom is nearer
         for (int sweep = 0; sweep < 4; sweep++) {
@@ -32,7 +32,7 @@ class StepOrderingTest {
         SyntheticInstrument plasma = Fixtures.nearSun(52);
         plasma.noiseCounts = 0;
         RecordingListener l = new RecordingListener();
-        SweepParameters p = SweepParameters.defaults();
+        SweepParameters p = DemoCup.parameters();
         ClosedLoop loop = Fixtures.loop(plasma, p, l);
         loop.runSweeps(1);
         Spectrum s = loop.scheduler.lastSpectrum();
@@ -58,7 +58,7 @@ class StepOrderingTest {
     @Test
     void shouldStepNeighboursWithinEverySweep() {
         RecordingListener l = new RecordingListener();
-        ClosedLoop loop = Fixtures.loop(Fixtures.oneAu(53), SweepParameters.defaults(), l);
+        ClosedLoop loop = Fixtures.loop(Fixtures.oneAu(53), DemoCup.parameters(), l);
         loop.runSweeps(25);
         int index = 0;
         for (long[] sweep : l.sweeps) {
@@ -73,7 +73,7 @@ class StepOrderingTest {
     @Test
     void shouldStartFocusFromBandEndNearerHv() {
         RecordingListener l = new RecordingListener();
-        ClosedLoop loop = Fixtures.loop(Fixtures.oneAu(54), SweepParameters.defaults(), l);
+        ClosedLoop loop = Fixtures.loop(Fixtures.oneAu(54), DemoCup.parameters(), l);
         loop.runSweeps(2); // ranging survey (up), survey (down: ends at window 0) -> FOCUS
         int first = loop.scheduler.bandFirst();
         loop.step();
@@ -86,7 +86,7 @@ class StepOrderingTest {
 
     @Test
     void shouldAccountSettleForRailChange() {
-        SweepParameters p = SweepParameters.defaults();
+        SweepParameters p = DemoCup.parameters();
         RecordingListener l = new RecordingListener();
         ClosedLoop loop = Fixtures.loop(Fixtures.oneAu(55), p, l);
         loop.runSweeps(3);
@@ -107,7 +107,7 @@ class StepOrderingTest {
     @Test
     void shouldChargeLargeSlewWhenLeavingSurveyForBand() {
         RecordingListener l = new RecordingListener();
-        ClosedLoop loop = Fixtures.loop(Fixtures.oneAu(56), SweepParameters.defaults(), l);
+        ClosedLoop loop = Fixtures.loop(Fixtures.oneAu(56), DemoCup.parameters(), l);
         loop.runSweeps(2);
         loop.step();
         RecordingListener.Step firstFocus = l.steps.get(l.steps.size() - 1);

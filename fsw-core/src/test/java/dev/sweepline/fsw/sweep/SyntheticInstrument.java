@@ -1,9 +1,9 @@
 package dev.sweepline.fsw.sweep;
 
-import dev.sweepline.fsw.link.InstrumentConstants;
+import dev.sweepline.fsw.DemoCup;
+import dev.sweepline.fsw.instrument.InstrumentDescription;
 import dev.sweepline.fsw.link.SampleReply;
 import dev.sweepline.fsw.link.StepCommand;
-
 import java.util.Random;
 
 /**
@@ -85,8 +85,8 @@ public final class SyntheticInstrument {
 
     /** Total (protons + alphas) current of a window between two DAC codes, amperes. */
     public double currentAmps(int dacLow, int dacHigh) {
-        double lowVolts = dacLow * InstrumentConstants.DAC_MILLIVOLTS_PER_CODE / 1000.0;
-        double highVolts = dacHigh * InstrumentConstants.DAC_MILLIVOLTS_PER_CODE / 1000.0;
+        double lowVolts = dacLow * DemoCup.INSTRUMENT.millivoltsPerCode() / 1000.0;
+        double highVolts = dacHigh * DemoCup.INSTRUMENT.millivoltsPerCode() / 1000.0;
         double protons = windowCurrent(protonDensityPerCm3, speedKmPerS, protonThermalKmPerS, PROTON_MASS, 1,
             areaCm2, lowVolts, highVolts);
         double protonKelvin = protonThermalKmPerS * 1e3 * protonThermalKmPerS * 1e3 * PROTON_MASS / (2 * BOLTZMANN);
@@ -117,14 +117,14 @@ public final class SyntheticInstrument {
         out.hvMonitorCode = step.hvEnabled ? step.dacHigh : 0;
         out.status = step.hvEnabled ? 0 : SampleReply.STATUS_HV_OFF;
         double amps = step.hvEnabled ? currentAmps(step.dacLow, step.dacHigh) : 0;
-        double fullScaleAmps = InstrumentConstants.FULL_SCALE_RANGE0_FEMTOAMPS * 1e-15
-            * (1L << (InstrumentConstants.RANGE_RATIO_SHIFT * step.gainRange));
-        double countsPerAmp = (InstrumentConstants.ADC_MAX_COUNTS - InstrumentConstants.ADC_PEDESTAL_COUNTS) / fullScaleAmps;
-        for (int q = 0; q < InstrumentConstants.QUADRANTS; q++) {
-            long counts = Math.round(InstrumentConstants.ADC_PEDESTAL_COUNTS + amps / 4 * countsPerAmp
+        double fullScaleAmps = DemoCup.INSTRUMENT.fullScaleRange0Femtoamps() * 1e-15
+            * (1L << (DemoCup.INSTRUMENT.rangeRatioShift() * step.gainRange));
+        double countsPerAmp = (DemoCup.INSTRUMENT.adcTopCode() - DemoCup.INSTRUMENT.pedestalCounts()) / fullScaleAmps;
+        for (int q = 0; q < InstrumentDescription.QUADRANTS; q++) {
+            long counts = Math.round(DemoCup.INSTRUMENT.pedestalCounts() + amps / 4 * countsPerAmp
                 + noiseCounts * random.nextGaussian());
-            if (counts >= InstrumentConstants.ADC_MAX_COUNTS) {
-                counts = InstrumentConstants.ADC_MAX_COUNTS;
+            if (counts >= DemoCup.INSTRUMENT.adcTopCode()) {
+                counts = DemoCup.INSTRUMENT.adcTopCode();
                 out.status |= SampleReply.STATUS_SATURATED;
             }
             out.quadrant[q] = (int) Math.max(0, counts);

@@ -1,5 +1,6 @@
 package dev.sweepline.fsw.table;
 
+import dev.sweepline.fsw.DemoCup;
 import org.junit.jupiter.api.Test;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
@@ -8,8 +9,8 @@ import static org.junit.jupiter.api.Assertions.assertNotSame;
 class SweepParametersTest {
     @Test
     void shouldAcceptDefaults() {
-        SweepParameters p = SweepParameters.defaults();
-        assertEquals(TableStatus.OK, p.validate());
+        SweepParameters p = DemoCup.parameters();
+        assertEquals(TableStatus.OK, p.validate(DemoCup.INSTRUMENT.rangeRatioShift()));
         // issue 2: dwell 8 periods, settle 1000 us, 1 us/code = 256 in Q8, re-survey K = 16
         assertEquals(8, p.integrationPeriods);
         assertEquals(1000, p.fixedSettleMicros);
@@ -20,13 +21,13 @@ class SweepParametersTest {
     @Test
     void shouldCarryPhysicsAlphaRatioInQ16() {
         // physics.md: V_alpha / V_p = 1.986300; Q16 rounding error at most 0.5 / 65536
-        assertEquals(1.986300, SweepParameters.defaults().alphaRatioQ16 / 65536.0, 0.5 / 65536);
+        assertEquals(1.986300, DemoCup.parameters().alphaRatioQ16 / 65536.0, 0.5 / 65536);
     }
 
     @Test
     void shouldCarryGainThresholdsInQ16() {
         // physics.md, gain ranging: up above ~80 %, down below ~2 % of full scale; Q16 rounding 0.5 / 65536
-        SweepParameters p = SweepParameters.defaults();
+        SweepParameters p = DemoCup.parameters();
         assertEquals(0.80, p.gainUpFractionQ16 / 65536.0, 0.5 / 65536);
         assertEquals(0.02, p.gainDownFractionQ16 / 65536.0, 0.5 / 65536);
     }
@@ -49,7 +50,7 @@ class SweepParametersTest {
 
     @Test
     void shouldCopyEveryField() {
-        SweepParameters a = SweepParameters.defaults();
+        SweepParameters a = DemoCup.parameters();
         a.jumpWindows = 11;
         a.prominenceFractionQ8 = 77;
         SweepParameters b = a.copy();
@@ -65,8 +66,8 @@ class SweepParametersTest {
     }
 
     private static int with(Edit edit) {
-        SweepParameters p = SweepParameters.defaults();
+        SweepParameters p = DemoCup.parameters();
         edit.apply(p);
-        return p.validate();
+        return p.validate(DemoCup.INSTRUMENT.rangeRatioShift());
     }
 }

@@ -1,5 +1,6 @@
 package dev.sweepline.fsw.table;
 
+import dev.sweepline.fsw.DemoCup;
 import org.junit.jupiter.api.Test;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
@@ -9,10 +10,10 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 class WindowTableTest {
     @Test
     void shouldBuildDefaultTableFromPhysicsSpec() {
-        WindowTable t = WindowTable.defaultTable();
+        WindowTable t = DemoCup.table();
         // physics.md, the demo instrument: 128 contiguous log-spaced windows 50 V - 6000 V
         assertEquals(128, t.count());
-        // 50 V and 6000 V at the nominal 0.1 V/code (InstrumentConstants.DAC_MILLIVOLTS_PER_CODE): exact codes
+        // 50 V and 6000 V at the nominal 0.1 V/code (DemoCup.INSTRUMENT.millivoltsPerCode()): exact codes
         assertEquals(500, t.dacLow(0));
         assertEquals(60_000, t.dacHigh(127));
         for (int w = 0; w + 1 < t.count(); w++) {
@@ -25,7 +26,7 @@ class WindowTableTest {
 
     @Test
     void shouldSpaceDefaultWindowsAtAboutFourPercent() {
-        WindowTable t = WindowTable.defaultTable();
+        WindowTable t = DemoCup.table();
         // physics.md: Delta V / V about 3.8 % (120^(1/128) - 1 = 3.8100 %); the rounding of a code
         // moves a 19-code bottom window by up to 1/19, so allow 3.8 % +/- 0.3 % at the bottom, 0.05 % elsewhere
         for (int w = 0; w < t.count(); w++) {
@@ -38,7 +39,7 @@ class WindowTableTest {
     @Test
     void shouldBuildLogSpacedTable() {
         // 16 windows over a factor 16 (100 V .. 1600 V): each edge doubles every 4 windows, exact codes
-        WindowTable t = WindowTable.logSpaced(16, 100_000, 1_600_000);
+        WindowTable t = WindowTable.logSpaced(16, 100_000, 1_600_000, DemoCup.INSTRUMENT.millivoltsPerCode());
         assertEquals(16, t.count());
         assertEquals(1000, t.dacLow(0));
         assertEquals(2000, t.dacLow(4));
@@ -66,7 +67,7 @@ class WindowTableTest {
 
     @Test
     void shouldRefuseCodesOutsideDacRange() {
-        // 16-bit DAC: 0..65535 (InstrumentConstants.DAC_MAX_CODE)
+        // 16-bit DAC: 0..65535 (hardware ICD §3.1 16-bit codes; demo-cup.yaml modulator.dacBits 16)
         assertEquals(TableStatus.OUT_OF_DAC_RANGE, WindowTable.validate(new int[] {100, 60_000}, new int[] {200, 65_536}, 2));
         assertEquals(TableStatus.OUT_OF_DAC_RANGE, WindowTable.validate(new int[] {-1, 100}, new int[] {50, 200}, 2));
         assertEquals(TableStatus.OK, WindowTable.validate(new int[] {0, 60_000}, new int[] {200, 65_535}, 2));
@@ -92,7 +93,7 @@ class WindowTableTest {
         IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
             () -> WindowTable.of(new int[] {300, 100}, new int[] {400, 200}, 2));
         assertTrue(e.getMessage().contains("NOT_MONOTONIC"));
-        assertThrows(IllegalArgumentException.class, () -> WindowTable.logSpaced(0, 50_000, 6_000_000));
+        assertThrows(IllegalArgumentException.class, () -> WindowTable.logSpaced(0, 50_000, 6_000_000, DemoCup.INSTRUMENT.millivoltsPerCode()));
     }
 
     @Test

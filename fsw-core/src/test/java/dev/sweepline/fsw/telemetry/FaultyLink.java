@@ -1,5 +1,6 @@
 package dev.sweepline.fsw.telemetry;
 
+import dev.sweepline.fsw.DemoCup;
 import dev.sweepline.fsw.link.InstrumentLink;
 import dev.sweepline.fsw.link.SampleReply;
 import dev.sweepline.fsw.link.StepCommand;
@@ -11,7 +12,7 @@ import dev.sweepline.fsw.sweep.SyntheticInstrument;
  * sequence number of no step in flight (a sequence error), so that every housekeeping counter moves.
  * Replies arrive 100 µs after the step's duration.
  */
-final class FaultyLink implements InstrumentLink {
+public final class FaultyLink implements InstrumentLink {
     private static final long LATENCY_MICROS = 100;
 
     private final SyntheticInstrument instrument;
@@ -22,6 +23,11 @@ final class FaultyLink implements InstrumentLink {
     private boolean staleFirst;
     private long dueMicros;
     private long sends;
+
+    /** A link that loses nothing and delivers no stray reply: every step answered as commanded. */
+    public static FaultyLink faultless(SyntheticInstrument instrument) {
+        return new FaultyLink(instrument, Integer.MAX_VALUE, Integer.MAX_VALUE);
+    }
 
     FaultyLink(SyntheticInstrument instrument, int dropEvery, int staleEvery) {
         this.instrument = instrument;
@@ -34,7 +40,7 @@ final class FaultyLink implements InstrumentLink {
         sends++;
         hasPending = sends % dropEvery != 0 && instrument.answer(step, pending);
         staleFirst = hasPending && sends % staleEvery == 0;
-        dueMicros = nowMicros + step.durationMicros() + LATENCY_MICROS;
+        dueMicros = nowMicros + step.durationMicros(DemoCup.MODULATION_PERIOD_MICROS) + LATENCY_MICROS;
         return true;
     }
 

@@ -1,9 +1,6 @@
 package dev.sweepline.fsw.telemetry;
 
-import static org.junit.jupiter.api.Assertions.assertArrayEquals;
-import static org.junit.jupiter.api.Assertions.assertEquals;
-import static org.junit.jupiter.api.Assertions.assertTrue;
-
+import dev.sweepline.fsw.DemoCup;
 import dev.sweepline.fsw.exec.Executive;
 import dev.sweepline.fsw.exec.FlightConfig;
 import dev.sweepline.fsw.exec.FlightSoftware;
@@ -14,6 +11,10 @@ import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
 import org.junit.jupiter.api.Test;
+
+import static org.junit.jupiter.api.Assertions.assertArrayEquals;
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
 
 /**
  * The flight software's housekeeping packet carries the ICD §5 image of its own counters: the same
@@ -34,7 +35,7 @@ class FlightSoftwareHousekeepingTest {
     void shouldWriteTheIcdImageOfItsCountersInTheLastHousekeepingPacket() {
         SyntheticInstrument plasma = new SyntheticInstrument(SEED); // 1 AU slow wind, 400 km/s
         FaultyLink link = new FaultyLink(plasma, 97, 89);
-        FlightConfig config = new FlightConfig();
+        FlightConfig config = DemoCup.config();
         config.hvEnabledAtStart = true; // as the simulator bench configures it (flight default: OFF)
         config.frameLength = 256;
         FlightSoftware fsw = new FlightSoftware(config, link, (f, off, len) ->

@@ -1,9 +1,12 @@
 package dev.sweepline.fsw.telemetry;
 
-import static org.junit.jupiter.api.Assertions.assertArrayEquals;
-import static org.junit.jupiter.api.Assertions.assertEquals;
-
+import dev.sweepline.fsw.DemoCup;
+import dev.sweepline.fsw.host.instrument.Instruments;
+import dev.sweepline.fsw.instrument.InstrumentDescription;
 import dev.sweepline.fsw.link.SampleReply;
+import dev.sweepline.fsw.science.SpectrumLayout;
+import dev.sweepline.fsw.science.SpectrumPacker;
+import dev.sweepline.fsw.science.SpectrumTelemetry;
 import dev.sweepline.fsw.sweep.Spectrum;
 import dev.sweepline.fsw.sweep.SpectrumFill;
 import dev.sweepline.fsw.sweep.SweepMode;
@@ -14,11 +17,15 @@ import java.util.HexFormat;
 import java.util.List;
 import org.junit.jupiter.api.Test;
 
+import static org.junit.jupiter.api.Assertions.assertArrayEquals;
+import static org.junit.jupiter.api.Assertions.assertEquals;
+
 /**
  * fsw-core's own writers (TransferFrameBuilder, SpacePacket, CucTime, SpectrumPacker raw, the ICD §5
  * housekeeping image) reproduce the golden frames of the telemetry ICD octet for octet. The golden
- * frames come from make_golden_frames.py (see {@link GoldenFrames}); every field value below is the
- * one that script packs, and the expected octets are the script's, never this code's.
+ * frames come from make_golden_frames.py and, for the spectrum of layout 2, make_golden_frames_v2.py (see
+ * {@link GoldenFrames}); every field value below is the one those scripts pack, and the expected octets
+ * are the scripts', computed from the ICD in python, never this code's.
  */
 class GoldenFramesTest {
     private static final HexFormat HEX = HexFormat.of();
@@ -50,22 +57,49 @@ class GoldenFramesTest {
     @Test
     void shouldPackTheGoldenSpectrumPacketRaw() {
         byte[] packet = spectrumPacket(7);
-        assertEquals(GoldenFrames.SPECTRUM_PACKET, HEX.formatHex(packet)); // make_golden_frames.py spectrum()
+        assertEquals(GoldenFrames.SPECTRUM_PACKET, HEX.formatHex(packet)); // make_golden_frames_v2.py demo_spectrum()
+    }
+
+    @Test
+    void shouldPackTheFineCupsTwentyBitSpectrumInThreeOctets() {
+        InstrumentDescription fine = Instruments.builtIn("fine-cup").flight();
+        SpectrumPacker packer = new SpectrumPacker(false, fine);
+        byte[] buf = new byte[SpacePacket.PRIMARY_HEADER_LENGTH + CucTime.LENGTH + packer.maxUserDataLength()];
+        Spectrum s = new Spectrum(fine);
+        // make_golden_frames_v2.py fine_spectrum(): focus sweep 9 over windows 100..104, ascending
+        SpectrumFill.begin(s, 9, SweepMode.FOCUS, 100, 5, true, 20_250_000L);
+        int[] gains = {0, 1, 1, 0, 0};
+        int[] q1 = {1024, 0x0F_FFFF, 0x01_2345, 0x0A_BCDE, 1024 + 5};
+        for (int i = 0; i < 5; i++) {
+            SpectrumFill.store(s, i, gains[i], i == 1 ? SampleReply.STATUS_SATURATED : 0, q1[i], 1024 + 1 + i, i,
+                    0x0F_0000 - 0x01_0000 * i);
+        }
+        SpectrumFill.end(s, 20_400_000L);
+        int n = packer.write(s, 16, 0xBEEF, SpectrumLayout.FLAG_TABLE_CHANGED, buf,
+                SpacePacket.PRIMARY_HEADER_LENGTH + CucTime.LENGTH);
+        SpacePacket.writePrimaryHeader(buf, 0, SpacePacket.TYPE_TM, true, Apid.FOCUS_SPECTRUM, SpacePacket.UNSEGMENTED,
+                3, CucTime.LENGTH + n);
+        time.write(buf, SpacePacket.PRIMARY_HEADER_LENGTH, s.startMicros());
+        assertEquals(GoldenFrames.FINE_SPECTRUM_PACKET,
+                HEX.formatHex(buf, 0, SpacePacket.PRIMARY_HEADER_LENGTH + CucTime.LENGTH + n));
     }
 
     @Test
     void shouldPackTheGoldenSpectrumThroughTheTelemetryWriter() {
         // the writer's own path (APID by mode, CUC from the sweep's start, sequence per APID): the 8th
-        // spectrum it writes carries sequence count 7, the golden packet's (make_golden_frames.py)
-        TelemetryWriter w = new TelemetryWriter(GoldenFrames.FRAME_LENGTH, Long.MAX_VALUE, time, false, sink);
+        // spectrum it writes carries sequence count 7, the golden packet's (make_golden_frames_v2.py)
+        SpectrumPacker packer = new SpectrumPacker(false, DemoCup.INSTRUMENT);
+        TelemetryWriter w = new TelemetryWriter(GoldenFrames.FRAME_LENGTH, Long.MAX_VALUE, time,
+                packer.maxUserDataLength(), sink);
+        SpectrumTelemetry spectra = new SpectrumTelemetry(packer, w);
         Spectrum s = goldenSpectrum();
         for (int i = 0; i <= 7; i++) {
-            w.writeSpectrum(s, 4, 0, 0, 0);
+            spectra.write(s, 4, 0, 0, 0);
         }
         w.flush(0);
         byte[] stream = dataFields(frames, Apid.VC_SCIENCE);
         int packetLength = GoldenFrames.SPECTRUM_PACKET.length() / 2;
-        // every spectrum packet is the same length (169 octets), back to back from offset 0 (FHP 0 of the first frame)
+        // every spectrum packet is the same length (173 octets), back to back from offset 0 (FHP 0 of the first frame)
         assertEquals(GoldenFrames.SPECTRUM_PACKET,
                 HEX.formatHex(stream, 7 * packetLength, 8 * packetLength));
     }
@@ -95,7 +129,7 @@ class GoldenFramesTest {
         b.flush(Apid.VC_ENGINEERING, 0); // idle packet seq 0 fills the 82-octet tail
         byte[] spectrum = spectrumPacket(7);
         b.writePacket(Apid.VC_SCIENCE, spectrum, 0, spectrum.length, 0);
-        b.flush(Apid.VC_SCIENCE, 0); // idle packet seq 1 fills the 71-octet tail
+        b.flush(Apid.VC_SCIENCE, 0); // idle packet seq 1 fills the 67-octet tail
         b.emitIdleFrame(VC_IDLE);
         for (int k = 0; k < 3; k++) { // seq 43..45 at T0 + 4.25, 8.25, 12.25 s
             byte[] p = housekeepingPacket(43 + k, 4_250_000L + 4_000_000L * k);
@@ -117,7 +151,7 @@ class GoldenFramesTest {
 
     /** The golden spectrum packet: primary header, CUC, SpectrumPacker raw user data. */
     private byte[] spectrumPacket(int seq) {
-        SpectrumPacker packer = new SpectrumPacker(false);
+        SpectrumPacker packer = new SpectrumPacker(false, DemoCup.INSTRUMENT);
         byte[] buf = new byte[SpacePacket.PRIMARY_HEADER_LENGTH + CucTime.LENGTH + packer.maxUserDataLength()];
         Spectrum s = goldenSpectrum();
         int n = packer.write(s, 4, 0, 0, buf, SpacePacket.PRIMARY_HEADER_LENGTH + CucTime.LENGTH);
@@ -135,7 +169,7 @@ class GoldenFramesTest {
      */
     static Spectrum goldenSpectrum() {
         int[] gains = {0, 0, 0, 0, 0, 1, 1, 1, 2, 2, 1, 1, 0, 0, 0, 0};
-        Spectrum s = new Spectrum();
+        Spectrum s = new Spectrum(DemoCup.INSTRUMENT);
         SpectrumFill.begin(s, 0x0123, SweepMode.SURVEY, 40, 16, false, 10_500_000L);
         for (int i = 0; i < 16; i++) {
             boolean saturated = i == 8;

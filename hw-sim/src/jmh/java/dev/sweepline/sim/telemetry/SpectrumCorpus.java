@@ -1,5 +1,6 @@
 package dev.sweepline.sim.telemetry;
 
+import dev.sweepline.sim.instrument.InstrumentModel;
 import dev.sweepline.fsw.exec.FlightConfig;
 import dev.sweepline.sim.interop.FlightLoop;
 import dev.sweepline.sim.interop.RecordedSpectrum;
@@ -31,7 +32,7 @@ public final class SpectrumCorpus {
         SpectrumCorpus corpus = new SpectrumCorpus();
         for (String name : SCENARIOS) {
             var scenario = ScenarioLoader.builtIn(name);
-            FlightLoop loop = new FlightLoop(scenario, SEED, scenario.durationSeconds(), new FlightConfig(),
+            FlightLoop loop = new FlightLoop(scenario, SEED, scenario.durationSeconds(), FlightConfig.of(InstrumentModel.demo().flight()),
                     (f, off, len) -> { }).run();
             for (RecordedSpectrum s : loop.spectra()) {
                 corpus.add(name, s.adc());

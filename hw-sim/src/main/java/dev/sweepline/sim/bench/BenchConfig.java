@@ -34,7 +34,8 @@ public record BenchConfig(Scenario scenario, long seed, double durationSeconds, 
 
     /** The demo instrument and the flight software's default configuration, no allocation. */
     public static BenchConfig defaults(Scenario scenario, long seed, double durationSeconds) {
-        return new BenchConfig(scenario, seed, durationSeconds, new FlightConfig(), InstrumentModel.demo(), Double.NaN);
+        return new BenchConfig(scenario, seed, durationSeconds, FlightConfig.of(InstrumentModel.demo().flight()),
+                InstrumentModel.demo(), Double.NaN);
     }
 
     /** A copy of the flight software's start-up configuration; changing it changes nothing here. */

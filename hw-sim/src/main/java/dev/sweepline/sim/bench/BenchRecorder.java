@@ -110,20 +110,27 @@ public final class BenchRecorder implements SweepListener, InProcessLink.StepObs
     }
 
     /**
-     * Places the truth on the windows of the scheduler's active table from now on, so that a table
-     * commanded or restored from non-volatile memory is judged on its own windows.
+     * Places the truth on the windows of the scheduler's active table from now on (the table restored
+     * from non-volatile memory at start-up, and each table commanded later when the scheduler says it
+     * took effect), so that every sweep is judged on its own windows.
      */
     public void follow(dev.sweepline.fsw.sweep.SweepScheduler activeTable, dev.sweepline.sim.hv.HvCalibration hv) {
         this.scheduler = activeTable;
         this.calibration = hv;
+        this.windows = new WindowVolts(activeTable, hv);
+    }
+
+    @Override
+    public void onConfigurationApplied(int applied, int generation, long nowMicros) {
+        if (scheduler != null && (applied & SweepListener.APPLIED_TABLE) != 0) {
+            windows = new WindowVolts(scheduler, calibration);
+        }
+        next.onConfigurationApplied(applied, generation, nowMicros);
     }
 
     private void record(Spectrum spectrum) {
         if (spectrum.count() == 0) {
             return;
-        }
-        if (scheduler != null && !windows.matches(scheduler, calibration)) {
-            windows = new WindowVolts(scheduler, calibration);
         }
         int saturated = 0;
         for (int i = 0; i < spectrum.count(); i++) {

@@ -22,7 +22,7 @@ final class FlightConfigCopy {
 
     /** A copy of {@code source} that no change to it, or to the copy, can reach through the other. */
     static FlightConfig of(FlightConfig source) {
-        FlightConfig copy = new FlightConfig();
+        FlightConfig copy = FlightConfig.of(source.instrument); // the description is immutable: shared
         try {
             for (Field f : FlightConfig.class.getFields()) {
                 int m = f.getModifiers();

@@ -1,5 +1,6 @@
 package dev.sweepline.sim.bench;
 
+import dev.sweepline.sim.instrument.InstrumentModel;
 import dev.sweepline.fsw.exec.FlightConfig;
 import dev.sweepline.fsw.telemetry.FrameSink;
 import dev.sweepline.ground.decode.DecoderConfig;
@@ -28,7 +29,7 @@ import java.util.function.LongFunction;
 public final class GroundCheck {
     private final FitCollector fits = new FitCollector();
     private final TelemetryDecoder decoder;
-    private final long coarseAtTickZero = new FlightConfig().coarseTimeAtTickZero;
+    private final long coarseAtTickZero = FlightConfig.of(InstrumentModel.demo().flight()).coarseTimeAtTickZero;
 
     /** A check that knows the built-in window table. */
     public GroundCheck() {

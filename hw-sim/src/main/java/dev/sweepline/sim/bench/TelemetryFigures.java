@@ -38,7 +38,7 @@ public record TelemetryFigures(double frameBitsPerSecond, Map<String, Double> pa
         byApid.put("commandReport", 8.0 * c.packetOctets(Apid.COMMAND_REPORT) / seconds);
         Map<SweepMode, Double> byMode = new EnumMap<>(SweepMode.class);
         for (SweepMode m : SweepMode.values()) {
-            byMode.put(m, 8.0 * c.spectrumOctets(m) / seconds);
+            byMode.put(m, 8.0 * fsw.spectra().octets(m) / seconds);
         }
         return new TelemetryFigures(8.0 * c.frameOctets() / seconds, byApid, byMode,
                 config.allocationBitsPerSecond(), fsw.telemetry().framesEmitted());

@@ -1,10 +1,10 @@
 package dev.sweepline.sim.budget;
 
 import dev.sweepline.sim.scenario.ScenarioLoader;
-import dev.sweepline.sim.yaml.FileFormatException;
-import dev.sweepline.sim.yaml.Section;
-import dev.sweepline.sim.yaml.YamlNode;
-import dev.sweepline.sim.yaml.YamlTreeReader;
+import dev.sweepline.fsw.host.yaml.FileFormatException;
+import dev.sweepline.fsw.host.yaml.Section;
+import dev.sweepline.fsw.host.yaml.YamlNode;
+import dev.sweepline.fsw.host.yaml.YamlTreeReader;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.NoSuchFileException;

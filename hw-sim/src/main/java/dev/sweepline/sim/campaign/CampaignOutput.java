@@ -1,11 +1,11 @@
 package dev.sweepline.sim.campaign;
 
+import dev.sweepline.sim.instrument.InstrumentModel;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.SerializationFeature;
 import dev.sweepline.fsw.command.ParameterTable;
 import dev.sweepline.fsw.command.TableImage;
 import dev.sweepline.fsw.table.SweepParameters;
-import dev.sweepline.fsw.table.WindowTable;
 import java.io.IOException;
 import java.io.Writer;
 import java.nio.file.Files;
@@ -186,7 +186,8 @@ public final class CampaignOutput {
 
     /** The default windows with the set's sweep parameters, as the table image the table commands load. */
     public static byte[] recommendedImage(CampaignSpec spec, SetResult set) {
-        ParameterTable t = ParameterTable.of(WindowTable.defaultTable(), spec.parameters(set.set()));
+        ParameterTable t = ParameterTable.of(InstrumentModel.demo().flight().defaultTable(),
+                spec.parameters(set.set()));
         byte[] image = new byte[TableImage.MAX_OCTETS];
         int n = TableImage.encode(t, image);
         return java.util.Arrays.copyOf(image, n);

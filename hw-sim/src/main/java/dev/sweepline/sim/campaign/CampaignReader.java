@@ -1,17 +1,18 @@
 package dev.sweepline.sim.campaign;
 
+import dev.sweepline.fsw.instrument.InstrumentDescription;
+import dev.sweepline.sim.instrument.InstrumentModel;
 import dev.sweepline.fsw.command.ParameterTable;
 import dev.sweepline.fsw.command.TableImage;
 import dev.sweepline.fsw.instrument.InstrumentLimits;
 import dev.sweepline.fsw.table.TableStatus;
-import dev.sweepline.fsw.table.WindowTable;
 import dev.sweepline.sim.scenario.PlasmaParameter;
 import dev.sweepline.sim.scenario.Scenario;
 import dev.sweepline.sim.scenario.ScenarioLoader;
-import dev.sweepline.sim.yaml.FileFormatException;
-import dev.sweepline.sim.yaml.Section;
-import dev.sweepline.sim.yaml.YamlNode;
-import dev.sweepline.sim.yaml.YamlTreeReader;
+import dev.sweepline.fsw.host.yaml.FileFormatException;
+import dev.sweepline.fsw.host.yaml.Section;
+import dev.sweepline.fsw.host.yaml.YamlNode;
+import dev.sweepline.fsw.host.yaml.YamlTreeReader;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.NoSuchFileException;
@@ -72,9 +73,10 @@ public final class CampaignReader {
                     spec.setCount() + " sets x " + runs + " runs is more than " + MAX_RUNS + " runs");
         }
         // every set must be a parameter table the flight software accepts, within the instrument's limits
-        InstrumentLimits limits = InstrumentLimits.demo();
+        InstrumentDescription instrument = InstrumentModel.demo().flight();
+        InstrumentLimits limits = instrument.limits();
         for (int s = 0; s < spec.setCount(); s++) {
-            ParameterTable table = ParameterTable.of(WindowTable.defaultTable(), spec.parameters(s));
+            ParameterTable table = ParameterTable.of(instrument.defaultTable(), spec.parameters(s));
             int status = TableImage.validate(table, limits);
             if (status != 0) {
                 throw new FileFormatException(file, top.required("grid").line(), "grid",

@@ -2,7 +2,7 @@ package dev.sweepline.sim.campaign;
 
 import dev.sweepline.sim.report.Charts;
 import dev.sweepline.sim.report.HtmlReport;
-import dev.sweepline.sim.yaml.FileFormatException;
+import dev.sweepline.fsw.host.yaml.FileFormatException;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;

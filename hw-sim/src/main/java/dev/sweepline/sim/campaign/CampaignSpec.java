@@ -1,5 +1,6 @@
 package dev.sweepline.sim.campaign;
 
+import dev.sweepline.sim.instrument.InstrumentModel;
 import dev.sweepline.fsw.table.SweepParameters;
 import dev.sweepline.sim.scenario.PlasmaConditions;
 import dev.sweepline.sim.scenario.PlasmaParameter;
@@ -59,7 +60,7 @@ public record CampaignSpec(String name, String description, long seed, int runsP
 
     /** The flight software's parameters of set {@code index}: the defaults with the set's values applied. */
     public SweepParameters parameters(int index) {
-        SweepParameters p = SweepParameters.defaults();
+        SweepParameters p = InstrumentModel.demo().flight().defaultParameters();
         double[] v = setValues(index);
         for (int a = 0; a < grid.size(); a++) {
             grid.get(a).parameter().apply(p, v[a]);

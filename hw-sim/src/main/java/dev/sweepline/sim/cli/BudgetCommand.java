@@ -5,7 +5,7 @@ import dev.sweepline.sim.budget.BudgetResult;
 import dev.sweepline.sim.budget.BudgetRunner;
 import dev.sweepline.sim.budget.OrbitPlan;
 import dev.sweepline.sim.budget.PlanReader;
-import dev.sweepline.sim.yaml.FileFormatException;
+import dev.sweepline.fsw.host.yaml.FileFormatException;
 import java.nio.file.Path;
 import java.util.Locale;
 import java.util.concurrent.Callable;

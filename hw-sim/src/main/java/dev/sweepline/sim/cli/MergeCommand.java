@@ -4,7 +4,7 @@ import dev.sweepline.sim.campaign.CampaignOutput;
 import dev.sweepline.sim.campaign.CampaignReader;
 import dev.sweepline.sim.campaign.CampaignSpec;
 import dev.sweepline.sim.campaign.RunRow;
-import dev.sweepline.sim.yaml.FileFormatException;
+import dev.sweepline.fsw.host.yaml.FileFormatException;
 import java.io.IOException;
 import java.nio.file.Path;
 import java.util.List;

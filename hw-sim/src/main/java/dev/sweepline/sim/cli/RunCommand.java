@@ -1,5 +1,6 @@
 package dev.sweepline.sim.cli;
 
+import dev.sweepline.sim.instrument.InstrumentModel;
 import dev.sweepline.fsw.exec.FlightConfig;
 import dev.sweepline.ground.product.GroundProcessing;
 import dev.sweepline.ground.product.GroundProducts;
@@ -148,7 +149,7 @@ final class RunCommand implements Callable<Integer> {
                 allocation != null ? OptionalDouble.of(allocation) : OptionalDouble.empty(),
                 DecoderConfig.autoLength(), windows);
         GroundCheck.GroundFigures figures = GroundCheck.compare(ground.moments(), result.recorder().sweeps(),
-                result.recorder()::truthAt, new FlightConfig().coarseTimeAtTickZero);
+                result.recorder()::truthAt, FlightConfig.of(InstrumentModel.demo().flight()).coarseTimeAtTickZero);
         Files.copy(groundDir.resolve(GroundProcessing.REPORT), out.resolve("report.html"),
                 StandardCopyOption.REPLACE_EXISTING);
         extra.putAll(RunReportWriter.groundMap(figures));

@@ -7,7 +7,7 @@ import dev.sweepline.sim.campaign.CampaignSpec;
 import dev.sweepline.sim.campaign.RunRow;
 import dev.sweepline.sim.campaign.SetResult;
 import dev.sweepline.sim.campaign.Shard;
-import dev.sweepline.sim.yaml.FileFormatException;
+import dev.sweepline.fsw.host.yaml.FileFormatException;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.Locale;

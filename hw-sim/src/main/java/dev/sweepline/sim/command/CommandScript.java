@@ -1,10 +1,12 @@
 package dev.sweepline.sim.command;
 
+import dev.sweepline.fsw.instrument.InstrumentDescription;
+import dev.sweepline.sim.instrument.InstrumentModel;
 import dev.sweepline.fsw.command.CommandCode;
 import dev.sweepline.fsw.command.ParameterTable;
 import dev.sweepline.fsw.command.TableImage;
 import dev.sweepline.fsw.instrument.InstrumentLimits;
-import dev.sweepline.fsw.table.SweepParameters;
+import dev.sweepline.fsw.sweep.SweepMode;
 import dev.sweepline.fsw.table.WindowTable;
 import java.io.IOException;
 import java.nio.file.Files;
@@ -134,13 +136,8 @@ public final class CommandScript {
             case "AUTH_RECOVER" -> out.add(command(at, line, CommandCode.AUTH_RECOVER, t, 0));
             case "SET_MODE" -> {
                 need(t, 1, line);
-                int mode = switch (t[2].toUpperCase(Locale.ROOT)) {
-                    case "SAFE" -> 0;
-                    case "SURVEY" -> 1;
-                    case "FOCUS" -> 2;
-                    default -> throw new ScriptException(line, "mode must be SAFE, SURVEY or FOCUS");
-                };
-                out.add(new ScriptEntry(at, line, CommandCode.SET_MODE, new byte[] {(byte) mode}, null, null));
+                out.add(new ScriptEntry(at, line, CommandCode.SET_MODE, new byte[] {(byte) mode(t[2], line).icdCode()},
+                        null, null));
             }
             case "RESET_COUNTERS" -> out.add(new ScriptEntry(at, line, CommandCode.RESET_COUNTERS,
                     new byte[] {(byte) number(t, 2, line)}, null, null));
@@ -181,9 +178,19 @@ public final class CommandScript {
         }
     }
 
+    /** The mode a script names (its ICD code is the mode's own, {@code SweepMode.icdCode()}). */
+    private static SweepMode mode(String word, int line) throws ScriptException {
+        for (SweepMode m : SweepMode.values()) {
+            if (m.name().equalsIgnoreCase(word)) {
+                return m;
+            }
+        }
+        throw new ScriptException(line, "mode must be SAFE, SURVEY or FOCUS");
+    }
+
     /** Notes a log-spaced table whose top edge lies above the demo instrument's voltage limit. */
     private static void warnAboveLimit(int line, String[] t, List<String> warnings) throws ScriptException {
-        InstrumentLimits limits = InstrumentLimits.demo();
+        InstrumentLimits limits = InstrumentModel.demo().flight().limits();
         long highMillivolts = number(t, 4, line) * 1000L;
         if (highMillivolts > limits.maxModulatorMillivolts) {
             warnings.add("line " + line + ": TABLE_LOGSPACED reaches " + number(t, 4, line) + " V, above the instrument's "
@@ -199,8 +206,9 @@ public final class CommandScript {
         int highVolts = number(t, 4, line);
         ParameterTable p;
         try {
-            p = ParameterTable.of(WindowTable.logSpaced(windows, lowVolts * 1000, highVolts * 1000),
-                    SweepParameters.defaults());
+            InstrumentDescription instrument = InstrumentModel.demo().flight();
+            p = ParameterTable.of(WindowTable.logSpaced(windows, lowVolts * 1000, highVolts * 1000,
+                    instrument.millivoltsPerCode()), instrument.defaultParameters());
         } catch (IllegalArgumentException e) {
             throw new ScriptException(line, e.getMessage());
         }

@@ -1,6 +1,7 @@
 package dev.sweepline.sim.design;
 
-import dev.sweepline.fsw.link.InstrumentConstants;
+import dev.sweepline.fsw.instrument.InstrumentDescription;
+import dev.sweepline.fsw.host.instrument.Instruments;
 import dev.sweepline.sim.cup.FaradayCup;
 import dev.sweepline.sim.hv.WindowVolts;
 import dev.sweepline.sim.plasma.IonPopulation;
@@ -15,6 +16,8 @@ import dev.sweepline.sim.preamp.Preamplifier;
  * window's standardised variance tr(F⁻¹ M_j) exceeds the parameter count.
  */
 public final class DOptimalDesign {
+    /** The demo cup's flight description (instruments/demo-cup.yaml), the instrument this part models. */
+    private static final InstrumentDescription DEMO = Instruments.defaultSpec().flight();
     private static final int MAX_ITERATIONS = 5000;
     private static final double EQUIVALENCE_TOLERANCE = 1e-3;
 
@@ -92,12 +95,12 @@ public final class DOptimalDesign {
 
     /** The most sensitive range whose full scale holds the quadrant current below 80 % (physics.md). */
     static int rangeFor(double quadrantAmps) {
-        for (int r = 0; r < InstrumentConstants.GAIN_RANGES - 1; r++) {
+        for (int r = 0; r < DEMO.gainRanges() - 1; r++) {
             if (quadrantAmps < 0.8 * Preamplifier.fullScaleAmps(r)) {
                 return r;
             }
         }
-        return InstrumentConstants.GAIN_RANGES - 1;
+        return DEMO.gainRanges() - 1;
     }
 
     private static void combine(double[][][] m, double[] share, double[][] f) {

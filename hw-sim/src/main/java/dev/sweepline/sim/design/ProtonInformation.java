@@ -1,6 +1,6 @@
 package dev.sweepline.sim.design;
 
-import dev.sweepline.fsw.link.InstrumentConstants;
+import dev.sweepline.fsw.instrument.InstrumentDescription;
 import dev.sweepline.sim.cup.CupGeometry;
 import dev.sweepline.sim.physics.PhysicalConstants;
 import dev.sweepline.sim.plasma.ConvectedMaxwellian;
@@ -59,7 +59,7 @@ public final class ProtonInformation {
         double johnson = 4 * PhysicalConstants.BOLTZMANN_JOULE_PER_KELVIN * CHANNEL_TEMPERATURE_K * b
                 / Preamplifier.feedbackOhms(range);
         double lsb = Preamplifier.lsbAmps(range);
-        return shot + InstrumentConstants.QUADRANTS * (johnson + lsb * lsb / 12);
+        return shot + InstrumentDescription.QUADRANTS * (johnson + lsb * lsb / 12);
     }
 
     /** Adds {@code weight} g gᵀ / variance to the 3x3 matrix {@code f}. */

@@ -1,18 +1,21 @@
 package dev.sweepline.sim.hv;
 
-import dev.sweepline.fsw.link.InstrumentConstants;
+import dev.sweepline.fsw.instrument.InstrumentDescription;
+import dev.sweepline.fsw.host.instrument.Instruments;
 
 /**
  * Transfer function of the HV DAC and of the monitor ADC (which share one scale): volts = offset +
  * voltsPerCode * code. The real unit differs a little from the nominal
- * {@link InstrumentConstants#DAC_MILLIVOLTS_PER_CODE}; the flight software only knows the nominal one.
+ * {@link InstrumentDescription#millivoltsPerCode}; the flight software only knows the nominal one.
  *
  * @param voltsPerCode volts per DAC code
  * @param offsetVolts  output at code 0, volts
  */
 public record HvCalibration(double voltsPerCode, double offsetVolts) {
+    /** The demo cup's flight description (instruments/demo-cup.yaml), the instrument this part models. */
+    private static final InstrumentDescription DEMO = Instruments.defaultSpec().flight();
     /** Nominal scale, volts per code (hardware ICD: 0.1 V per code). */
-    public static final double NOMINAL_VOLTS_PER_CODE = InstrumentConstants.DAC_MILLIVOLTS_PER_CODE / 1000.0;
+    public static final double NOMINAL_VOLTS_PER_CODE = DEMO.millivoltsPerCode() / 1000.0;
     /** Demo gain error: +0.15 % (invented, the size of a resistor-divider tolerance: common practice). */
     public static final double DEMO_GAIN_ERROR = 0.0015;
     /** Demo offset, volts (invented). */
@@ -40,12 +43,12 @@ public record HvCalibration(double voltsPerCode, double offsetVolts) {
         return offsetVolts + voltsPerCode * code;
     }
 
-    /** Nearest code for a voltage, clamped to 0..{@link InstrumentConstants#DAC_MAX_CODE}. */
+    /** Nearest code for a voltage, clamped to 0..{@link InstrumentDescription#dacTopCode}. */
     public int code(double volts) {
         double c = Math.rint((volts - offsetVolts) / voltsPerCode);
         if (!(c > 0)) {
             return 0;
         }
-        return c >= InstrumentConstants.DAC_MAX_CODE ? InstrumentConstants.DAC_MAX_CODE : (int) c;
+        return c >= DEMO.dacTopCode() ? DEMO.dacTopCode() : (int) c;
     }
 }

@@ -1,6 +1,7 @@
 package dev.sweepline.sim.instrument;
 
-import dev.sweepline.fsw.link.InstrumentConstants;
+import dev.sweepline.fsw.instrument.InstrumentDescription;
+import dev.sweepline.fsw.host.instrument.Instruments;
 import dev.sweepline.fsw.link.SampleReply;
 
 /**
@@ -9,6 +10,8 @@ import dev.sweepline.fsw.link.SampleReply;
  * run without a fault stay exactly as they were. All off by default; set the fields between steps.
  */
 public final class InstrumentFaults {
+    /** The demo cup's flight description (instruments/demo-cup.yaml), the instrument this part models. */
+    private static final InstrumentDescription DEMO = Instruments.defaultSpec().flight();
     /** No stuck quadrant. */
     public static final int NONE = -1;
 
@@ -42,22 +45,22 @@ public final class InstrumentFaults {
     /** Applies the faults to a computed reply. */
     void apply(SampleReply reply) {
         if (hvReadbackOffsetCodes != 0) {
-            reply.hvMonitorCode = Math.max(0, Math.min(InstrumentConstants.DAC_MAX_CODE,
+            reply.hvMonitorCode = Math.max(0, Math.min(DEMO.dacTopCode(),
                     reply.hvMonitorCode + hvReadbackOffsetCodes));
         }
         if (deadCollector) {
-            for (int q = 0; q < InstrumentConstants.QUADRANTS; q++) {
-                reply.quadrant[q] = InstrumentConstants.ADC_PEDESTAL_COUNTS;
+            for (int q = 0; q < InstrumentDescription.QUADRANTS; q++) {
+                reply.quadrant[q] = DEMO.pedestalCounts();
             }
             reply.status &= ~SampleReply.STATUS_SATURATED;
         }
         if (saturateAdc) {
-            for (int q = 0; q < InstrumentConstants.QUADRANTS; q++) {
-                reply.quadrant[q] = InstrumentConstants.ADC_MAX_COUNTS;
+            for (int q = 0; q < InstrumentDescription.QUADRANTS; q++) {
+                reply.quadrant[q] = DEMO.adcTopCode();
             }
             reply.status |= SampleReply.STATUS_SATURATED;
         }
-        if (stuckQuadrant >= 0 && stuckQuadrant < InstrumentConstants.QUADRANTS) {
+        if (stuckQuadrant >= 0 && stuckQuadrant < InstrumentDescription.QUADRANTS) {
             reply.quadrant[stuckQuadrant] = stuckCode;
         }
         if (corruptSequence) {

@@ -1,5 +1,8 @@
 package dev.sweepline.sim.instrument;
 
+import dev.sweepline.fsw.instrument.InstrumentDescription;
+import dev.sweepline.fsw.host.instrument.Instruments;
+import dev.sweepline.fsw.host.instrument.InstrumentSpec;
 import dev.sweepline.sim.cup.CupGeometry;
 import dev.sweepline.sim.hv.HvCalibration;
 import dev.sweepline.sim.hv.HvSupplyParameters;
@@ -8,6 +11,8 @@ import dev.sweepline.sim.preamp.Preamplifier;
 /**
  * Parameter set of one simulated instrument (physics.md "The demo instrument"; the values are invented).
  *
+ * @param spec                       the instrument description file it models (the flight software is
+ *                                   configured from the same file: {@link #flight()})
  * @param cup                        cup geometry
  * @param calibration                the unit's HV DAC / monitor calibration
  * @param hv                         HV supply dynamics and monitor noise
@@ -15,7 +20,7 @@ import dev.sweepline.sim.preamp.Preamplifier;
  * @param hvUnsettledToleranceCodes  largest |monitor - commanded high code| at integration start that still
  *                                   counts as settled, DAC codes
  */
-public record InstrumentModel(CupGeometry cup, HvCalibration calibration, HvSupplyParameters hv,
+public record InstrumentModel(InstrumentSpec spec, CupGeometry cup, HvCalibration calibration, HvSupplyParameters hv,
                               double preampTemperatureK, int hvUnsettledToleranceCodes) {
     /**
      * Demo tolerance: 50 codes (5 V), ten times the 0.5 V rms monitor noise, so a settled rail
@@ -25,14 +30,19 @@ public record InstrumentModel(CupGeometry cup, HvCalibration calibration, HvSupp
 
     /** Checks the parts are present and the tolerance non-negative. */
     public InstrumentModel {
-        if (cup == null || calibration == null || hv == null || !(preampTemperatureK >= 0) || hvUnsettledToleranceCodes < 0) {
+        if (spec == null || cup == null || calibration == null || hv == null || !(preampTemperatureK >= 0) || hvUnsettledToleranceCodes < 0) {
             throw new IllegalArgumentException("incomplete instrument model");
         }
     }
 
-    /** The demo instrument: demo cup, calibration, HV supply, preamp at 300 K, 50-code settle tolerance. */
+    /** The flight software's description of this instrument (from {@link #spec()}). */
+    public InstrumentDescription flight() {
+        return spec.flight();
+    }
+
+    /** The demo instrument (instruments/demo-cup.yaml): demo cup, calibration, HV supply, preamp at 300 K, 50-code settle tolerance. */
     public static InstrumentModel demo() {
-        return new InstrumentModel(CupGeometry.demo(), HvCalibration.demo(), HvSupplyParameters.demo(),
+        return new InstrumentModel(Instruments.defaultSpec(), CupGeometry.demo(), HvCalibration.demo(), HvSupplyParameters.demo(),
                 Preamplifier.DEMO_TEMPERATURE_K, DEMO_HV_UNSETTLED_TOLERANCE_CODES);
     }
 }

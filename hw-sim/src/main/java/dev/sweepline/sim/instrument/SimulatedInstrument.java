@@ -1,6 +1,7 @@
 package dev.sweepline.sim.instrument;
 
-import dev.sweepline.fsw.link.InstrumentConstants;
+import dev.sweepline.fsw.instrument.InstrumentDescription;
+import dev.sweepline.fsw.host.instrument.Instruments;
 import dev.sweepline.fsw.link.SampleReply;
 import dev.sweepline.fsw.link.StepCommand;
 import dev.sweepline.sim.cup.FaradayCup;
@@ -30,6 +31,8 @@ import java.util.SplittableRandom;
  * {@code Erf}'s continued-fraction objects, 64 B per ion population (measured with JMH -prof gc).
  */
 public final class SimulatedInstrument {
+    /** The demo cup's flight description (instruments/demo-cup.yaml), the instrument this part models. */
+    private static final InstrumentDescription DEMO = Instruments.defaultSpec().flight();
     private final InstrumentModel model;
     private final FaradayCup cup;
     private final HvSupply hv;
@@ -83,8 +86,8 @@ public final class SimulatedInstrument {
         } else {
             hv.disable(startMicros);
         }
-        int range = Math.max(0, Math.min(InstrumentConstants.GAIN_RANGES - 1, cmd.gainRange));
-        long integrationMicros = (long) cmd.integrationPeriods * InstrumentConstants.MODULATION_PERIOD_MICROS;
+        int range = Math.max(0, Math.min(DEMO.gainRanges() - 1, cmd.gainRange));
+        long integrationMicros = (long) cmd.integrationPeriods * DEMO.modulationPeriodMicros();
         long integrationStart = startMicros + Math.max(0, cmd.settleMicros);
         long mid = integrationStart + integrationMicros / 2;
         double low = hv.lowVoltsAt(mid);
@@ -93,10 +96,10 @@ public final class SimulatedInstrument {
         boolean unsettled = cmd.hvEnabled && Math.abs(monitor - cmd.dacHigh) > model.hvUnsettledToleranceCodes();
 
         cup.quadrantCurrents(plasma, low, high, truth.quadrantAmps);
-        double integrationSeconds = Math.max(1, cmd.integrationPeriods) * InstrumentConstants.MODULATION_PERIOD_MICROS * 1e-6;
+        double integrationSeconds = Math.max(1, cmd.integrationPeriods) * DEMO.modulationPeriodMicros() * 1e-6;
         boolean saturated = false;
         double total = 0;
-        for (int q = 0; q < InstrumentConstants.QUADRANTS; q++) {
+        for (int q = 0; q < InstrumentDescription.QUADRANTS; q++) {
             double amps = truth.quadrantAmps[q];
             int counts = preamp.sample(amps, range, integrationSeconds, rng);
             reply.quadrant[q] = counts;
@@ -114,7 +117,7 @@ public final class SimulatedInstrument {
             faults.apply(reply);
         }
 
-        long end = startMicros + cmd.durationMicros();
+        long end = startMicros + cmd.durationMicros(DEMO.modulationPeriodMicros());
         truth.lowVolts = low;
         truth.highVolts = high;
         truth.totalAmps = total;

@@ -1,5 +1,7 @@
 package dev.sweepline.sim.link;
 
+import dev.sweepline.fsw.instrument.InstrumentDescription;
+import dev.sweepline.fsw.host.instrument.Instruments;
 import dev.sweepline.fsw.link.InstrumentLink;
 import dev.sweepline.fsw.link.SampleReply;
 import dev.sweepline.fsw.link.StepCommand;
@@ -15,6 +17,8 @@ import dev.sweepline.sim.plasma.PlasmaState;
  * <p>One step is in flight at a time (the hardware ICD's rule). Threading: one thread, the bench's.
  */
 public final class InProcessLink implements InstrumentLink {
+    /** The demo cup's flight description (instruments/demo-cup.yaml), the instrument this part models. */
+    private static final InstrumentDescription DEMO = Instruments.defaultSpec().flight();
     /** Where the plasma of a given time comes from (the scenario timeline, in the bench). */
     public interface PlasmaSource {
         /** The plasma at {@code micros} of simulated time. */
@@ -47,7 +51,7 @@ public final class InProcessLink implements InstrumentLink {
         if (replyPending) {
             return false;
         }
-        long midMicros = nowMicros + step.settleMicros + (step.durationMicros() - step.settleMicros) / 2;
+        long midMicros = nowMicros + step.settleMicros + (step.durationMicros(DEMO.modulationPeriodMicros()) - step.settleMicros) / 2;
         PlasmaState now = plasma.plasmaAt(midMicros);
         replyReadyMicros = instrument.execute(step, nowMicros, now, pending, truth);
         replyPending = true;

@@ -1,9 +1,11 @@
 package dev.sweepline.sim.link;
 
+import dev.sweepline.fsw.instrument.InstrumentDescription;
+import dev.sweepline.fsw.host.instrument.Instruments;
 import dev.sweepline.fsw.link.FrameEncoder;
-import dev.sweepline.fsw.link.InstrumentConstants;
 import dev.sweepline.fsw.link.SampleReplyCodec;
 import dev.sweepline.fsw.link.StepCommandCodec;
+import dev.sweepline.fsw.table.SettleTime;
 import dev.sweepline.fsw.table.SweepParameters;
 import dev.sweepline.fsw.table.WindowTable;
 
@@ -24,14 +26,16 @@ import dev.sweepline.fsw.table.WindowTable;
  * @param capacityPerSecond  what the baud rate carries, octets/s
  */
 public record LinkBudget(String mode, double stepsPerSecond, double octetsPerSecond, double capacityPerSecond) {
+    /** The demo cup's flight description (instruments/demo-cup.yaml), the instrument this part models. */
+    private static final InstrumentDescription DEMO = Instruments.defaultSpec().flight();
     /** Load above which a link is reported as tight (hardware ICD §6; common practice for serial links). */
     public static final double WARN_FRACTION = 0.80;
     /** Bits per octet on an 8N1 line: start + 8 data + stop. */
     public static final int BITS_PER_OCTET_8N1 = 10;
     /** Wire octets of a step frame: COBS(15 + CRC 2) + delimiter = 19 (hardware ICD §6). */
     public static final int STEP_FRAME_OCTETS = FrameEncoder.wireLength(StepCommandCodec.LENGTH);
-    /** Wire octets of a sample reply frame, 19. */
-    public static final int REPLY_FRAME_OCTETS = FrameEncoder.wireLength(SampleReplyCodec.LENGTH);
+    /** Wire octets of a sample reply frame of the demo cup's 2-octet samples, 19 (hardware ICD §3.2, §6). */
+    public static final int REPLY_FRAME_OCTETS = FrameEncoder.wireLength(SampleReplyCodec.length(DEMO.sampleOctets()));
 
     /** The budget of {@code stepsPerSecond} at {@code baud}. */
     public static LinkBudget of(String mode, double stepsPerSecond, int baud) {
@@ -62,9 +66,8 @@ public record LinkBudget(String mode, double stepsPerSecond, double octetsPerSec
         int lowBefore = table.dacLow(first);
         int highBefore = table.dacHigh(first);
         for (int w = first; w < first + count; w++) {
-            int change = Math.max(Math.abs(table.dacLow(w) - lowBefore), Math.abs(table.dacHigh(w) - highBefore));
-            micros += p.fixedSettleMicros + (((long) change * p.settleMicrosPerCodeQ8) >> 8)
-                    + (long) p.integrationPeriods * InstrumentConstants.MODULATION_PERIOD_MICROS;
+            micros += SettleTime.micros(p, lowBefore, highBefore, table.dacLow(w), table.dacHigh(w))
+                    + (long) p.integrationPeriods * DEMO.modulationPeriodMicros();
             lowBefore = table.dacLow(w);
             highBefore = table.dacHigh(w);
         }

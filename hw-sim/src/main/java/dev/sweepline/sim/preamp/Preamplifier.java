@@ -1,12 +1,13 @@
 package dev.sweepline.sim.preamp;
 
-import dev.sweepline.fsw.link.InstrumentConstants;
+import dev.sweepline.fsw.instrument.InstrumentDescription;
+import dev.sweepline.fsw.host.instrument.Instruments;
 import dev.sweepline.sim.physics.PhysicalConstants;
 import java.util.SplittableRandom;
 
 /**
  * Collector preamplifier, synchronous demodulator and 16-bit ADC of one quadrant, with three gain
- * ranges (physics.md "Noise and gain ranging"; {@link InstrumentConstants}).
+ * ranges (physics.md "Noise and gain ranging"; {@code instruments/demo-cup.yaml}).
  *
  * <p>Range r has full scale FS_r = 40 pA * 32^r (40 pA, 1.28 nA, 40.96 nA) and feedback resistor
  * R_f = 4 V / FS_r, so full scale is 4 V at the amplifier output. The ADC is unsigned 16-bit with a
@@ -26,12 +27,14 @@ import java.util.SplittableRandom;
  * <p>Threading: stateless apart from the caller's random stream; allocation-free.
  */
 public final class Preamplifier {
+    /** The demo cup's flight description (instruments/demo-cup.yaml), the instrument this part models. */
+    private static final InstrumentDescription DEMO = Instruments.defaultSpec().flight();
     /** Amplifier output at full scale, volts (invented demo value, see the class comment). */
     public static final double FULL_SCALE_VOLTS = 4.0;
     /** Feedback-resistor temperature of the demo unit, kelvin (room temperature: common practice). */
     public static final double DEMO_TEMPERATURE_K = 300.0;
     /** Codes above the pedestal up to the top of the ADC. */
-    private static final int SPAN_COUNTS = InstrumentConstants.ADC_MAX_COUNTS - InstrumentConstants.ADC_PEDESTAL_COUNTS;
+    private static final int SPAN_COUNTS = DEMO.adcTopCode() - DEMO.pedestalCounts();
 
     private final double temperatureK;
 
@@ -51,7 +54,7 @@ public final class Preamplifier {
     /** Full scale of {@code range}, amperes: 40 pA * 32^range. */
     public static double fullScaleAmps(int range) {
         checkRange(range);
-        return (InstrumentConstants.FULL_SCALE_RANGE0_FEMTOAMPS << (InstrumentConstants.RANGE_RATIO_SHIFT * range)) * 1e-15;
+        return (DEMO.fullScaleRange0Femtoamps() << (DEMO.rangeRatioShift() * range)) * 1e-15;
     }
 
     /** Feedback resistor of {@code range}: 4 V / full scale, ohms. */
@@ -98,18 +101,18 @@ public final class Preamplifier {
 
     /** Noise-free ADC code of a current: pedestal + round(I / LSB), clipped to 0..65535. */
     public static int countsFor(double amps, int range) {
-        double c = InstrumentConstants.ADC_PEDESTAL_COUNTS + Math.rint(amps / lsbAmps(range));
+        double c = DEMO.pedestalCounts() + Math.rint(amps / lsbAmps(range));
         if (!(c > 0)) {
             return 0;
         }
-        return c >= InstrumentConstants.ADC_MAX_COUNTS ? InstrumentConstants.ADC_MAX_COUNTS : (int) c;
+        return c >= DEMO.adcTopCode() ? DEMO.adcTopCode() : (int) c;
     }
 
     /**
      * One demodulated sample: the current plus Gaussian noise, quantised and clipped.
      *
      * @param amps               true window current on this quadrant, amperes
-     * @param range              gain range, 0..{@link InstrumentConstants#GAIN_RANGES} - 1
+     * @param range              gain range, 0..{@link InstrumentDescription#gainRanges} - 1
      * @param integrationSeconds integration time, seconds
      * @param rng                the caller's seeded random stream
      * @return ADC counts, 0..65535
@@ -120,16 +123,16 @@ public final class Preamplifier {
 
     /** Current of an ADC code in {@code range} (the inverse of the quantiser, for truth and tests), amperes. */
     public static double amps(int counts, int range) {
-        return (counts - InstrumentConstants.ADC_PEDESTAL_COUNTS) * lsbAmps(range);
+        return (counts - DEMO.pedestalCounts()) * lsbAmps(range);
     }
 
     /** True when a code sits at the top of the ADC range. */
     public static boolean isSaturated(int counts) {
-        return counts >= InstrumentConstants.ADC_MAX_COUNTS;
+        return counts >= DEMO.adcTopCode();
     }
 
     private static void checkRange(int range) {
-        if (range < 0 || range >= InstrumentConstants.GAIN_RANGES) {
+        if (range < 0 || range >= DEMO.gainRanges()) {
             throw new IllegalArgumentException("no gain range " + range);
         }
     }

@@ -10,7 +10,7 @@
  *
  * <h2>Requirements</h2>
  * <ol>
- *   <li>PRE-1: ranges, feedback resistors and LSBs follow InstrumentConstants (40 pA * 32^r, 4 V full scale).</li>
+ *   <li>PRE-1: ranges, feedback resistors and LSBs follow instruments/demo-cup.yaml (40 pA * 32^r, 4 V full scale).</li>
  *   <li>PRE-2: counts = pedestal + round(I/LSB); zero current reads the pedestal; full scale reads
  *       65535 and is flagged saturated; below 0 and above 65535 clip.</li>
  *   <li>PRE-3: the sample variance over many seeded samples equals 2eIB + 4kTB/R_f + LSB^2/12.</li>

@@ -1,6 +1,6 @@
 package dev.sweepline.sim.scenario;
 
-import dev.sweepline.sim.yaml.FileFormatException;
+import dev.sweepline.fsw.host.yaml.FileFormatException;
 
 /**
  * A scenario that cannot be used, with where the problem is: the file, the 1-based line (0 when the

@@ -1,15 +1,10 @@
 package dev.sweepline.sim.scenario;
 
-import dev.sweepline.sim.yaml.FileFormatException;
-import dev.sweepline.sim.yaml.YamlTreeReader;
-import java.io.IOException;
-import java.io.InputStream;
-import java.io.UncheckedIOException;
-import java.nio.charset.StandardCharsets;
+import dev.sweepline.fsw.host.yaml.BuiltIns;
+import dev.sweepline.fsw.host.yaml.FileFormatException;
+import dev.sweepline.fsw.host.yaml.YamlTreeReader;
 import java.nio.file.Files;
-import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
-import java.util.ArrayList;
 import java.util.List;
 
 /**
@@ -23,6 +18,8 @@ public final class ScenarioLoader {
     static final String INDEX = RESOURCE_DIR + "index.txt";
     /** The scenario a run uses when none is named. */
     static final String DEFAULT_NAME = "quiet-perihelion";
+    /** The built-ins and their index. */
+    private static final BuiltIns BUILT_INS = new BuiltIns(RESOURCE_DIR, "scenario");
 
     private ScenarioLoader() {
     }
@@ -33,16 +30,13 @@ public final class ScenarioLoader {
      * @throws ScenarioException if it cannot be read or is not a valid scenario
      */
     public static Scenario load(Path file) {
-        String display = file.toString();
         String text;
         try {
-            text = Files.readString(file, StandardCharsets.UTF_8);
-        } catch (NoSuchFileException e) {
-            throw new ScenarioException(display, 0, "", "no such file", e);
-        } catch (IOException e) {
-            throw new ScenarioException(display, 0, "", "cannot read: " + e, e);
+            text = BuiltIns.file(file);
+        } catch (FileFormatException e) {
+            throw ScenarioException.of(e);
         }
-        return parse(text, display);
+        return parse(text, file.toString());
     }
 
     /**
@@ -77,15 +71,7 @@ public final class ScenarioLoader {
 
     /** The names of the built-in scenarios, in index order. */
     public static List<String> builtInNames() {
-        List<String> names = new ArrayList<>();
-        for (String line : readResource(INDEX).split("\n")) {
-            int hash = line.indexOf('#');
-            String name = (hash < 0 ? line : line.substring(0, hash)).strip();
-            if (!name.isEmpty()) {
-                names.add(name);
-            }
-        }
-        return List.copyOf(names);
+        return BUILT_INS.names();
     }
 
     /** The name of the default scenario, a built-in. */
@@ -111,18 +97,14 @@ public final class ScenarioLoader {
     }
 
     private static ScenarioException unknown(String name) {
-        return new ScenarioException(name, 0, "", "no built-in scenario of that name and no such file; built-ins: "
-                + String.join(", ", builtInNames()));
+        return ScenarioException.of(BUILT_INS.unknown(name));
     }
 
     private static String readResource(String resource) {
-        try (InputStream in = ScenarioLoader.class.getClassLoader().getResourceAsStream(resource)) {
-            if (in == null) {
-                throw new ScenarioException(resource, 0, "", "built-in resource missing from the build");
-            }
-            return new String(in.readAllBytes(), StandardCharsets.UTF_8);
-        } catch (IOException e) {
-            throw new UncheckedIOException(e);
+        try {
+            return BUILT_INS.resource(resource);
+        } catch (FileFormatException e) {
+            throw ScenarioException.of(e);
         }
     }
 }

@@ -1,7 +1,7 @@
 package dev.sweepline.sim.scenario;
 
-import dev.sweepline.sim.yaml.Section;
-import dev.sweepline.sim.yaml.YamlNode;
+import dev.sweepline.fsw.host.yaml.Section;
+import dev.sweepline.fsw.host.yaml.YamlNode;
 import java.util.ArrayList;
 import java.util.EnumMap;
 import java.util.List;

@@ -1,11 +1,13 @@
 package dev.sweepline.sim.serve;
 
+import dev.sweepline.fsw.instrument.InstrumentDescription;
+import dev.sweepline.fsw.host.instrument.Instruments;
 import dev.sweepline.fsw.link.ByteTransport;
 import dev.sweepline.fsw.link.FrameReceiver;
 import dev.sweepline.fsw.link.FrameSender;
 import dev.sweepline.fsw.link.HousekeepingCodec;
 import dev.sweepline.fsw.link.HousekeepingReply;
-import dev.sweepline.fsw.link.InstrumentConstants;
+import dev.sweepline.fsw.link.LinkWatchdog;
 import dev.sweepline.fsw.link.LinkCounters;
 import dev.sweepline.fsw.link.MessageType;
 import dev.sweepline.fsw.link.SampleReply;
@@ -33,6 +35,8 @@ import java.util.concurrent.locks.LockSupport;
  * <p>Threading: one thread ({@link #doWork(long)} or {@link #run}); {@link #stop()} from any thread.
  */
 public final class InstrumentServer {
+    /** The demo cup's flight description (instruments/demo-cup.yaml), the instrument this part models. */
+    private static final InstrumentDescription DEMO = Instruments.defaultSpec().flight();
     /** Octets read from the transport per read at most: the size of the one receive buffer. */
     static final int READ_CHUNK = 256;
     /**
@@ -41,13 +45,15 @@ public final class InstrumentServer {
      */
     static final int MAX_READS_PER_CALL = 8;
     /** The link watchdog, wall nanoseconds (hardware ICD §4.1: 2 s). */
-    public static final long WATCHDOG_NANOS = InstrumentConstants.LINK_WATCHDOG_MICROS * 1_000;
+    public static final long WATCHDOG_NANOS = LinkWatchdog.TIMEOUT_MICROS * 1_000;
 
     private final StepExecutor executor;
     private final ByteTransport transport;
     private final double speed;
     private final LinkCounters counters = new LinkCounters();
-    private final FrameReceiver receiver = new FrameReceiver(counters);
+    /** The demo cup's sample replies (instruments/demo-cup.yaml: 16-bit ADC, 2-octet samples). */
+    private final SampleReplyCodec replies = SampleReplyCodec.of(DEMO);
+    private final FrameReceiver receiver = new FrameReceiver(counters, replies);
     private final FrameSender sender;
     private final StepCommand step = new StepCommand();
     private final SampleReply reply = new SampleReply();
@@ -110,7 +116,7 @@ public final class InstrumentServer {
             if (nowNanos - replyDueNanos < 0) {
                 return work;
             }
-            int n = SampleReplyCodec.encode(reply, out, 0);
+            int n = replies.encode(reply, out, 0);
             sender.send(out, 0, n);
             replyPending = false;
             quietSinceNanos = nowNanos;
@@ -199,7 +205,7 @@ public final class InstrumentServer {
     }
 
     private void executeStep(long nowNanos) {
-        long durationMicros = step.durationMicros();
+        long durationMicros = step.durationMicros(DEMO.modulationPeriodMicros());
         if (haveLast && step.sequence == lastSequence) {
             repeatsAnswered++; // a repeat: the stored reply again, no second execution
         } else {

@@ -1,5 +1,7 @@
 package dev.sweepline.sim.serve;
 
+import dev.sweepline.fsw.instrument.InstrumentDescription;
+import dev.sweepline.fsw.host.instrument.Instruments;
 import dev.sweepline.fsw.link.HousekeepingReply;
 import dev.sweepline.fsw.link.SampleReply;
 import dev.sweepline.fsw.link.StepCommand;
@@ -21,6 +23,8 @@ import dev.sweepline.sim.seed.SeedTree;
  * <p>Threading: one thread.
  */
 public final class ScenarioInstrument implements StepExecutor {
+    /** The demo cup's flight description (instruments/demo-cup.yaml), the instrument this part models. */
+    private static final InstrumentDescription DEMO = Instruments.defaultSpec().flight();
     /** Kelvin at 0 degC (definition of the Celsius scale). */
     private static final double ZERO_CELSIUS_K = 273.15;
 
@@ -45,7 +49,7 @@ public final class ScenarioInstrument implements StepExecutor {
 
     @Override
     public long execute(StepCommand cmd, long startMicros, SampleReply reply) {
-        long midMicros = startMicros + cmd.settleMicros + (cmd.durationMicros() - cmd.settleMicros) / 2;
+        long midMicros = startMicros + cmd.settleMicros + (cmd.durationMicros(DEMO.modulationPeriodMicros()) - cmd.settleMicros) / 2;
         long end = instrument.execute(cmd, startMicros, PlasmaStates.of(timeline.at(midMicros / 1e6), drift),
                 reply, truth);
         lastHvHighCode = reply.hvMonitorCode;

@@ -1,11 +1,12 @@
 package dev.sweepline.sim.bench;
 
+import dev.sweepline.fsw.instrument.InstrumentDescription;
+import dev.sweepline.fsw.host.instrument.Instruments;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
-import dev.sweepline.fsw.link.InstrumentConstants;
 import dev.sweepline.fsw.sweep.SweepMode;
 import dev.sweepline.sim.scenario.ScenarioLoader;
 import java.io.IOException;
@@ -15,6 +16,8 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
 class ClosedLoopBenchTest {
+    /** The demo cup's flight description (instruments/demo-cup.yaml), the instrument this part models. */
+    private static final InstrumentDescription DEMO = Instruments.defaultSpec().flight();
     @TempDir
     Path dir;
 
@@ -40,7 +43,7 @@ class ClosedLoopBenchTest {
                 ClosedLoopBench.Progress.NONE).summary();
         // integration time per step is 8 modulation periods of 1 ms (SweepParameters default dwell):
         // the integrating fraction is steps x 8 ms over the run, to within the last step in flight
-        double expected = s.steps() * 8.0 * InstrumentConstants.MODULATION_PERIOD_MICROS / 1e6 / 30.0;
+        double expected = s.steps() * 8.0 * DEMO.modulationPeriodMicros() / 1e6 / 30.0;
         assertEquals(expected, s.integratingFraction(), 0.01);
         assertTrue(s.integratingFraction() < 1.0);
         int sweeps = s.sweepsByMode().get(SweepMode.SURVEY) + s.sweepsByMode().get(SweepMode.FOCUS);

@@ -1,5 +1,6 @@
 package dev.sweepline.sim.bench;
 
+import dev.sweepline.sim.instrument.InstrumentModel;
 import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
@@ -19,7 +20,7 @@ import org.junit.jupiter.api.Test;
 class FlightConfigCopyTest {
     @Test
     void shouldCarryEveryPrimitiveOptionOfTheFlightConfiguration() throws IllegalAccessException {
-        FlightConfig source = new FlightConfig();
+        FlightConfig source = FlightConfig.of(InstrumentModel.demo().flight());
         int changed = 0;
         for (Field f : FlightConfig.class.getFields()) {
             if (Modifier.isStatic(f.getModifiers())) {
@@ -49,8 +50,8 @@ class FlightConfigCopyTest {
 
     @Test
     void shouldCopyTheMutableMembersAndShareTheImmutableOnes() {
-        FlightConfig source = new FlightConfig();
-        source.table = WindowTable.logSpaced(64, 100_000, 3_000_000);
+        FlightConfig source = FlightConfig.of(InstrumentModel.demo().flight());
+        source.table = WindowTable.logSpaced(64, 100_000, 3_000_000, InstrumentModel.demo().flight().millivoltsPerCode());
         source.parameters.integrationPeriods = 5;
         source.faults.threshold[1] = 9;
         source.commandKey[0] = 42;

@@ -1,9 +1,9 @@
 package dev.sweepline.sim.bench;
 
+import dev.sweepline.sim.instrument.InstrumentModel;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import dev.sweepline.fsw.sweep.SweepMode;
-import dev.sweepline.fsw.table.WindowTable;
 import dev.sweepline.sim.cup.CupGeometry;
 import dev.sweepline.sim.cup.FaradayCup;
 import dev.sweepline.sim.design.ProtonInformation;
@@ -26,7 +26,7 @@ import org.junit.jupiter.api.Test;
 class FocusBandInformationTest {
     @Test
     void shouldNeverChooseABandThatCannotPinDownTheProtons() {
-        WindowVolts windows = new WindowVolts(WindowTable.defaultTable(), HvCalibration.demo());
+        WindowVolts windows = new WindowVolts(InstrumentModel.demo().flight().defaultTable(), HvCalibration.demo());
         FaradayCup cup = new FaradayCup(CupGeometry.demo());
         ProtonInformation info = new ProtonInformation(CupGeometry.demo());
         List<String> bad = new ArrayList<>();

@@ -1,11 +1,11 @@
 package dev.sweepline.sim.command;
 
+import dev.sweepline.sim.instrument.InstrumentModel;
 import dev.sweepline.fsw.command.CommandCode;
 import dev.sweepline.fsw.command.CommandReason;
 import dev.sweepline.fsw.command.ParameterTable;
 import dev.sweepline.fsw.command.TableImage;
 import dev.sweepline.fsw.nvm.FileNonVolatileStore;
-import dev.sweepline.fsw.table.SweepParameters;
 import dev.sweepline.fsw.table.WindowTable;
 import dev.sweepline.ground.decode.CommandReport;
 import dev.sweepline.ground.decode.EventReport;
@@ -29,7 +29,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 class CommandedRunTest {
     /** The scripted table: 64 windows 100..3000 V, 4 integration periods. */
     private static byte[] expectedImage() {
-        ParameterTable t = ParameterTable.of(WindowTable.logSpaced(64, 100_000, 3_000_000), SweepParameters.defaults());
+        ParameterTable t = ParameterTable.of(WindowTable.logSpaced(64, 100_000, 3_000_000, InstrumentModel.demo().flight().millivoltsPerCode()), InstrumentModel.demo().flight().defaultParameters());
         t.sweep.integrationPeriods = 4;
         byte[] b = new byte[TableImage.MAX_OCTETS];
         return Arrays.copyOf(b, TableImage.encode(t, b));

@@ -63,7 +63,7 @@ class FaultInjectionRunTest {
         List<EventReport> f = run.faults(FaultMonitorId.ADC_SATURATION);
         assertAfterInjection(run, f);
         assertEquals(FaultResponse.GAIN, f.get(0).argumentB());
-        // the response halved the gain-up threshold (default 52429 = 80 % in Q16, SweepParameters.defaults)
+        // the response halved the gain-up threshold (default 52429 = 80 % in Q16, SweepParameters.tunableDefaults)
         dev.sweepline.fsw.table.SweepParameters p = new dev.sweepline.fsw.table.SweepParameters();
         run.fsw.scheduler().activeParameters(p);
         assertTrue(p.gainUpFractionQ16 <= 52_429 / 2, "gain up " + p.gainUpFractionQ16);

@@ -1,5 +1,6 @@
 package dev.sweepline.sim.design;
 
+import dev.sweepline.sim.instrument.InstrumentModel;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertNotNull;
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -24,7 +25,7 @@ class DOptimalDesignTest {
     private static final double STEP_SECONDS = 0.008;
 
     private final FaradayCup cup = new FaradayCup(CupGeometry.demo());
-    private final WindowVolts windows = new WindowVolts(WindowTable.defaultTable(), HvCalibration.nominal());
+    private final WindowVolts windows = new WindowVolts(InstrumentModel.demo().flight().defaultTable(), HvCalibration.nominal());
     private final ProtonInformation info = new ProtonInformation(CupGeometry.demo());
 
     @Test

@@ -1,11 +1,12 @@
 package dev.sweepline.sim.instrument;
 
+import dev.sweepline.fsw.instrument.InstrumentDescription;
+import dev.sweepline.fsw.host.instrument.Instruments;
 import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import dev.sweepline.fsw.link.InstrumentConstants;
 import dev.sweepline.fsw.link.SampleReply;
 import dev.sweepline.fsw.link.StepCommand;
 import dev.sweepline.sim.cup.FaradayCup;
@@ -19,6 +20,8 @@ import java.util.List;
 import org.junit.jupiter.api.Test;
 
 class SimulatedInstrumentTest {
+    /** The demo cup's flight description (instruments/demo-cup.yaml), the instrument this part models. */
+    private static final InstrumentDescription DEMO = Instruments.defaultSpec().flight();
     /** Recorded seeds. */
     private static final long SEED = 42L;
     private static final long OTHER_SEED = 43L;
@@ -93,7 +96,7 @@ class SimulatedInstrumentTest {
             assertEquals(0.0, truth.totalAmps, 0.0);
             assertEquals(0.0, truth.highVolts, 0.0);
             for (int q = 0; q < 4; q++) {
-                assertEquals(InstrumentConstants.ADC_PEDESTAL_COUNTS, reply.quadrant[q], 6 * sigmaCounts + 0.5);
+                assertEquals(DEMO.pedestalCounts(), reply.quadrant[q], 6 * sigmaCounts + 0.5);
             }
         }
     }
@@ -137,11 +140,11 @@ class SimulatedInstrumentTest {
         c.sequence = 0xBEEF;
         c.gainRange = 7;
         long end = instrument.execute(c, 1_000_000, PLASMA, reply, truth);
-        assertEquals(1_000_000 + c.durationMicros(), end);
+        assertEquals(1_000_000 + c.durationMicros(DEMO.modulationPeriodMicros()), end);
         assertEquals(end, truth.endMicros);
         assertEquals(1_000_000 + c.settleMicros, truth.integrationStartMicros);
         assertEquals(0xBEEF, reply.sequence);
-        assertEquals(InstrumentConstants.GAIN_RANGES - 1, reply.gainRange);
+        assertEquals(DEMO.gainRanges() - 1, reply.gainRange);
     }
 
     @Test

@@ -1,5 +1,6 @@
 package dev.sweepline.sim.interop;
 
+import dev.sweepline.sim.instrument.InstrumentModel;
 import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -8,7 +9,6 @@ import dev.sweepline.fsw.exec.Executive;
 import dev.sweepline.fsw.exec.FlightConfig;
 import dev.sweepline.fsw.exec.FlightSoftware;
 import dev.sweepline.fsw.sweep.SweepMode;
-import dev.sweepline.fsw.table.SweepParameters;
 import dev.sweepline.fsw.telemetry.Apid;
 import dev.sweepline.ground.decode.DecodeListener;
 import dev.sweepline.ground.decode.DecodeStats;
@@ -42,7 +42,7 @@ class FlightToGroundTest {
     @ParameterizedTest(name = "compress={0}")
     @ValueSource(booleans = {true, false})
     void shouldDecodeWhatTheFlightSoftwareMeasured(boolean compress) {
-        FlightConfig config = new FlightConfig();
+        FlightConfig config = FlightConfig.of(InstrumentModel.demo().flight());
         config.compressSpectra = compress;
         ByteArrayOutputStream wire = new ByteArrayOutputStream();
         FlightLoop loop = new FlightLoop(ScenarioLoader.builtIn("shock-sheath"), SEED, SECONDS, config,
@@ -96,7 +96,7 @@ class FlightToGroundTest {
         assertEquals(f.firstWindow(), g.firstWindow(), what);
         assertEquals(f.count(), g.windowCount(), what);
         assertEquals(f.peakValid() ? Math.min(f.peakQ8(), 0xFFFE) : DecodedSpectrum.NO_PEAK, g.peakQ8(), what);
-        assertEquals(SweepParameters.defaults().integrationPeriods, g.integrationPeriods(), what);
+        assertEquals(InstrumentModel.demo().flight().defaultParameters().integrationPeriods, g.integrationPeriods(), what);
         assertEquals(compress ? 0x01 : 0x00, g.compression(), what);
         assertArrayEquals(f.gainRange(), g.gainRange(), what);
         assertArrayEquals(f.saturated(), g.saturated(), what);
@@ -125,7 +125,7 @@ class FlightToGroundTest {
         assertTrue(e.stepsSent() > 0xFF, "steps sent " + e.stepsSent()); // both low octets of the 32-bit field used
         assertTrue(fsw.lockLosses() > 0, "no lock loss: the shock at 40 s should break the lock");
         // ICD §5 offset 22: packet octets generated before this housekeeping packet (6 + 6 + 38 octets)
-        assertEquals(fsw.telemetry().counters().packetOctets() - (12 + FlightSoftware.HOUSEKEEPING_OCTETS),
+        assertEquals(fsw.telemetry().counters().packetOctets() - (12 + dev.sweepline.fsw.report.HousekeepingWriter.LENGTH),
                 h.telemetryOctets());
     }
 }

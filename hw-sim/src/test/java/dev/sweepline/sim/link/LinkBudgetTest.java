@@ -1,5 +1,6 @@
 package dev.sweepline.sim.link;
 
+import dev.sweepline.sim.instrument.InstrumentModel;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -86,8 +87,8 @@ class LinkBudgetTest {
     void shouldGiveTheFiguresOfTheIcdForTheDefaultTable() {
         // hardware ICD §6, default table and parameters: survey 105.7 steps/s = 2 007 octets/s (17.4 %),
         // focus 110.2 steps/s = 2 093 octets/s (18.2 %); the ICD rounds to the digits shown
-        WindowTable t = WindowTable.defaultTable();
-        SweepParameters p = SweepParameters.defaults();
+        WindowTable t = InstrumentModel.demo().flight().defaultTable();
+        SweepParameters p = InstrumentModel.demo().flight().defaultParameters();
         LinkBudget survey = LinkBudget.survey(t, p, 115_200);
         LinkBudget focus = LinkBudget.focus(t, p, 115_200);
         assertEquals(105.7, survey.stepsPerSecond(), 0.05);
@@ -102,7 +103,7 @@ class LinkBudgetTest {
 
     /** The defaults with a settle slope of 1.5 us per code (384 in Q8), so that truncation shows. */
     private static SweepParameters parameters() {
-        SweepParameters p = SweepParameters.defaults();
+        SweepParameters p = InstrumentModel.demo().flight().defaultParameters();
         p.fixedSettleMicros = 1000;
         p.settleMicrosPerCodeQ8 = 384;
         p.integrationPeriods = 8;

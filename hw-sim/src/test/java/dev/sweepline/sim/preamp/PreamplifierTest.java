@@ -1,15 +1,18 @@
 package dev.sweepline.sim.preamp;
 
+import dev.sweepline.fsw.instrument.InstrumentDescription;
+import dev.sweepline.fsw.host.instrument.Instruments;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import dev.sweepline.fsw.link.InstrumentConstants;
 import java.util.SplittableRandom;
 import org.junit.jupiter.api.Test;
 
 class PreamplifierTest {
+    /** The demo cup's flight description (instruments/demo-cup.yaml), the instrument this part models. */
+    private static final InstrumentDescription DEMO = Instruments.defaultSpec().flight();
     /** Recorded seed of the noise tests. */
     private static final long SEED = 0xA11CE5EEDL;
     private static final double T_INT = 1e-3;
@@ -17,11 +20,11 @@ class PreamplifierTest {
 
     @Test
     void shouldHaveTheThreeRangesOfTheDemoInstrument() {
-        // physics.md "Noise and gain ranging" / InstrumentConstants: 40 pA, 1.28 nA, 40.96 nA; R_f = 4 V / FS
+        // physics.md "Noise and gain ranging" / instruments/demo-cup.yaml preamp: 40 pA, 1.28 nA, 40.96 nA; R_f = 4 V / FS
         // (issue 2); exact binary-decimal arithmetic, so 1e-12 relative
         double[] fullScale = {40e-12, 1.28e-9, 40.96e-9};
         double[] ohms = {1e11, 3.125e9, 9.765625e7};
-        for (int r = 0; r < InstrumentConstants.GAIN_RANGES; r++) {
+        for (int r = 0; r < DEMO.gainRanges(); r++) {
             assertEquals(fullScale[r], Preamplifier.fullScaleAmps(r), 1e-12 * fullScale[r]);
             assertEquals(ohms[r], Preamplifier.feedbackOhms(r), 1e-12 * ohms[r]);
             assertEquals(fullScale[r] / (65535 - 256), Preamplifier.lsbAmps(r), 1e-12 * fullScale[r] / 65279);
@@ -31,7 +34,7 @@ class PreamplifierTest {
 
     @Test
     void shouldQuantiseAboveThePedestalAndFlagFullScale() {
-        // hardware ICD / InstrumentConstants: pedestal 256, 16-bit unsigned; full scale lands on 65535 exactly
+        // hardware ICD / instruments/demo-cup.yaml adc: pedestal 256, 16-bit unsigned; full scale lands on 65535 exactly
         assertEquals(256, Preamplifier.countsFor(0, 0));
         assertEquals(0.0, Preamplifier.amps(256, 2), 0.0);
         assertEquals(65535, Preamplifier.countsFor(Preamplifier.fullScaleAmps(1), 1));

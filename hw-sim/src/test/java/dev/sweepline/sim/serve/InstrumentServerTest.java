@@ -1,5 +1,8 @@
 package dev.sweepline.sim.serve;
 
+import dev.sweepline.sim.instrument.InstrumentModel;
+import dev.sweepline.fsw.instrument.InstrumentDescription;
+import dev.sweepline.fsw.host.instrument.Instruments;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -14,6 +17,8 @@ import org.junit.jupiter.api.Test;
 
 /** The server's rules (serve design note S2, S5, S6; hardware ICD §4, §4.1, §5). */
 class InstrumentServerTest {
+    /** The demo cup's flight description (instruments/demo-cup.yaml), the instrument this part models. */
+    private static final InstrumentDescription DEMO = Instruments.defaultSpec().flight();
     /** Counts executions; the reply carries the execution number in Q1 and the start time in Q2. */
     private static final class CountingExecutor implements StepExecutor {
         int executions;
@@ -35,13 +40,13 @@ class InstrumentServerTest {
             reply.quadrant[0] = executions;
             reply.quadrant[1] = (int) (startMicros / 1000);
             reply.status = cmd.hvEnabled ? 0 : SampleReply.STATUS_HV_OFF;
-            return startMicros + cmd.durationMicros();
+            return startMicros + cmd.durationMicros(DEMO.modulationPeriodMicros());
         }
     }
 
     private final PipeTransport[] ends = PipeTransport.pair(1024);
     private final CountingExecutor executor = new CountingExecutor();
-    private final FramedInstrumentLink link = new FramedInstrumentLink(ends[0]);
+    private final FramedInstrumentLink link = new FramedInstrumentLink(ends[0], InstrumentModel.demo().flight());
     private final SampleReply reply = new SampleReply();
 
     @Test
@@ -65,7 +70,7 @@ class InstrumentServerTest {
         assertEquals(0, reply.quadrant[1]); // the first step starts at 0
         exchange(server, step(2, 100, 200));
         assertEquals(9, reply.quadrant[1]); // the second where the first ended, in ms
-        assertEquals(2 * s.durationMicros(), server.clockMicros());
+        assertEquals(2 * s.durationMicros(DEMO.modulationPeriodMicros()), server.clockMicros());
     }
 
     @Test
@@ -83,7 +88,7 @@ class InstrumentServerTest {
         StepCommand s = step(1, 100, 200);
         link.send(s, 0);
         server.doWork(0);
-        long dueNanos = s.durationMicros() * 1_000 / 2; // 4.5 ms of wall time
+        long dueNanos = s.durationMicros(DEMO.modulationPeriodMicros()) * 1_000 / 2; // 4.5 ms of wall time
         server.doWork(dueNanos - 1);
         assertFalse(link.poll(reply, 0)); // at T-1: not yet
         server.doWork(dueNanos);
@@ -143,7 +148,7 @@ class InstrumentServerTest {
         off.hvEnabled = false;
         link.send(off, 0);
         server.doWork(0);
-        server.doWork(off.durationMicros() * 1_000); // its reply is due after 9 ms
+        server.doWork(off.durationMicros(DEMO.modulationPeriodMicros()) * 1_000); // its reply is due after 9 ms
         assertTrue(link.poll(reply, 0));
         server.doWork(10 * InstrumentServer.WATCHDOG_NANOS);
         assertEquals(0, executor.hvSwitchedOff); // nothing to switch off

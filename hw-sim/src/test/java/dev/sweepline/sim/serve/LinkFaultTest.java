@@ -1,5 +1,6 @@
 package dev.sweepline.sim.serve;
 
+import dev.sweepline.sim.instrument.InstrumentModel;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
@@ -54,7 +55,7 @@ class LinkFaultTest {
         FaultyTransport faulty = new FaultyTransport(ends[1], plan, () -> wallMicros);
         RecordingExecutor instrument = new RecordingExecutor(new ScenarioInstrument(sc, seed));
         InstrumentServer server = new InstrumentServer(instrument, faulty, 0);
-        FramedInstrumentLink link = new FramedInstrumentLink(ends[0]);
+        FramedInstrumentLink link = new FramedInstrumentLink(ends[0], InstrumentModel.demo().flight());
         CheckingLink checking = new CheckingLink(link, instrument);
         // the link layer alone: the fault-protection monitor of link time-outs (which retries on its own)
         // is switched off, so every safe entry waits for the ground's command below (commands.md §6)

@@ -1,5 +1,6 @@
 package dev.sweepline.sim.serve;
 
+import dev.sweepline.sim.instrument.InstrumentModel;
 import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -62,7 +63,7 @@ class SerialHilTest {
                 serverThread.setDaemon(true);
                 serverThread.start();
 
-                FramedInstrumentLink link = new FramedInstrumentLink(fswEnd);
+                FramedInstrumentLink link = new FramedInstrumentLink(fswEnd, InstrumentModel.demo().flight());
                 Histogram roundTripNanos = new Histogram(1_000_000_000L, 3);
                 ByteArrayOutputStream tm = new ByteArrayOutputStream();
                 FlightSoftware fsw = HilRig.flightSoftware(config, new TimedLink(link, roundTripNanos), tm);

@@ -1,4 +1,4 @@
-package dev.sweepline.sim.yaml;
+package dev.sweepline.fsw.host.yaml;
 
 import com.fasterxml.jackson.core.JsonLocation;
 import com.fasterxml.jackson.core.JsonParser;

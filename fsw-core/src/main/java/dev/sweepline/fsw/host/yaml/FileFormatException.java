@@ -1,4 +1,4 @@
-package dev.sweepline.sim.yaml;
+package dev.sweepline.fsw.host.yaml;
 
 /**
  * An input file (scenario, campaign, orbit plan) that cannot be used, with where the problem is: the file, the 1-based line (0 when the

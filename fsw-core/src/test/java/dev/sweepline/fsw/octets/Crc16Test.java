@@ -1,4 +1,4 @@
-package dev.sweepline.fsw.telemetry;
+package dev.sweepline.fsw.octets;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 

@@ -1,4 +1,4 @@
-package dev.sweepline.sim.yaml;
+package dev.sweepline.fsw.host.yaml;
 
 import java.util.List;
 import java.util.Set;

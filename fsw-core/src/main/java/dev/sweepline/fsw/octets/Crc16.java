@@ -1,4 +1,4 @@
-package dev.sweepline.fsw.telemetry;
+package dev.sweepline.fsw.octets;
 
 /**
  * CRC-16/IBM-3740 (also known as CCITT-FALSE): polynomial 0x1021, initial value 0xFFFF, no

@@ -1,5 +1,6 @@
-package dev.sweepline.fsw.telemetry;
+package dev.sweepline.fsw.science;
 
+import dev.sweepline.fsw.DemoCup;
 import dev.sweepline.fsw.link.SampleReply;
 import dev.sweepline.fsw.link.StepCommand;
 import dev.sweepline.fsw.sweep.CannedReplies;
@@ -9,8 +10,9 @@ import dev.sweepline.fsw.sweep.SweepListener;
 import dev.sweepline.fsw.sweep.SweepMode;
 import dev.sweepline.fsw.sweep.SweepScheduler;
 import dev.sweepline.fsw.sweep.SyntheticInstrument;
-import dev.sweepline.fsw.table.SweepParameters;
 import dev.sweepline.fsw.table.WindowTable;
+import dev.sweepline.fsw.telemetry.CucTime;
+import dev.sweepline.fsw.telemetry.TelemetryWriter;
 import java.util.concurrent.TimeUnit;
 import org.openjdk.jmh.annotations.Benchmark;
 import org.openjdk.jmh.annotations.BenchmarkMode;
@@ -23,7 +25,7 @@ import org.openjdk.jmh.annotations.Setup;
 import org.openjdk.jmh.annotations.State;
 
 /**
- * Packing one realistic 128-window survey spectrum through {@link TelemetryWriter#writeSpectrum}: user data
+ * Packing one realistic 128-window survey spectrum through {@link SpectrumTelemetry#write}: user data
  * (header, gain tags, saturation flags, four quadrant streams CCSDS 121 coded or raw), primary and CUC
  * headers, counters, and transfer framing into a sink that discards the frames. The spectrum is the first
  * survey sweep the real scheduler makes of a 1 AU slow wind (physics.md worked case P1 plasma, canned
@@ -43,17 +45,18 @@ public class SpectrumPackingBenchmark {
     @Param({"true", "false"})
     public boolean compress;
 
-    private final Spectrum spectrum = new Spectrum();
+    private final Spectrum spectrum = new Spectrum(DemoCup.INSTRUMENT);
     private TelemetryWriter writer;
+    private SpectrumTelemetry spectra;
     private int integrationPeriods;
     private long nowMicros;
 
     /** Captures the first survey spectrum of the scheduler and builds the writer. */
     @Setup(Level.Trial)
     public void setUp() {
-        WindowTable table = WindowTable.defaultTable();
+        WindowTable table = DemoCup.table();
         CannedReplies canned = new CannedReplies(table, new SyntheticInstrument(SEED));
-        SweepScheduler scheduler = new SweepScheduler(table, SweepParameters.defaults(), new SweepListener() {
+        SweepScheduler scheduler = new SweepScheduler(DemoCup.INSTRUMENT, table, DemoCup.parameters(), new SweepListener() {
             @Override
             public void onSweepComplete(Spectrum s, long now) {
                 if (spectrum.count() == 0 && s.mode() == SweepMode.SURVEY && s.peakValid()) {
@@ -66,23 +69,25 @@ public class SpectrumPackingBenchmark {
         long now = 0;
         for (int i = 0; i < 100 * table.count() && spectrum.count() == 0; i++) {
             scheduler.nextStep(step, now);
-            now += step.durationMicros();
+            now += step.durationMicros(DemoCup.MODULATION_PERIOD_MICROS);
             canned.answer(step, reply);
             scheduler.ingest(reply, now);
         }
         if (spectrum.count() != table.count() || !spectrum.peakValid()) {
             throw new IllegalStateException("no full survey spectrum with a peak: " + spectrum.count());
         }
-        integrationPeriods = SweepParameters.defaults().integrationPeriods;
+        integrationPeriods = DemoCup.parameters().integrationPeriods;
+        SpectrumPacker packer = new SpectrumPacker(compress, DemoCup.INSTRUMENT);
         writer = new TelemetryWriter(TelemetryWriter.DEFAULT_FRAME_LENGTH, Long.MAX_VALUE, new CucTime(0, 0),
-                compress, (frame, offset, length) -> { });
+                packer.maxUserDataLength(), (frame, offset, length) -> { });
+        spectra = new SpectrumTelemetry(packer, writer);
     }
 
     /** Packs the spectrum once; returns the frames emitted so far so the work stays observable. */
     @Benchmark
     public long writeSpectrum() {
         nowMicros += SWEEP_MICROS;
-        writer.writeSpectrum(spectrum, integrationPeriods, 0, 0, nowMicros);
+        spectra.write(spectrum, integrationPeriods, 0, 0, nowMicros);
         return writer.framesEmitted();
     }
 }
