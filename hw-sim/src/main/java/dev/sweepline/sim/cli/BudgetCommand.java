@@ -35,11 +35,7 @@ final class BudgetCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws Exception {
-        dev.sweepline.fsw.host.instrument.InstrumentSpec given;
-        try {
-            given = instrument.given();
-        } catch (FileFormatException e) {
-            System.err.println(InstrumentOption.error(e));
+        if (!instrument.resolve()) {
             return 2;
         }
         if (threads < 1) {
@@ -48,7 +44,7 @@ final class BudgetCommand implements Callable<Integer> {
         }
         OrbitPlan p;
         try {
-            p = PlanReader.load(plan, given);
+            p = PlanReader.load(plan, instrument.given());
         } catch (FileFormatException e) {
             System.err.println("plan error: " + e.getMessage());
             return 2;

@@ -3,6 +3,7 @@ package dev.sweepline.sim.cli;
 import dev.sweepline.fsw.host.instrument.InstrumentSpec;
 import dev.sweepline.fsw.host.instrument.Instruments;
 import dev.sweepline.fsw.host.yaml.FileFormatException;
+import dev.sweepline.sim.instrument.InstrumentModel;
 import picocli.CommandLine.Option;
 
 /**
@@ -17,14 +18,30 @@ final class InstrumentOption {
                 + "demo-cup).")
     String instrument;
 
-    /** The instrument the option names, or null when it is not given. */
-    InstrumentSpec given() {
-        return instrument == null ? null : Instruments.resolve(instrument);
+    private InstrumentSpec resolved;
+
+    /**
+     * Reads the description the option names, once; false after printing the one line a broken or
+     * unknown description gives (file, line and field) on stderr: the command then exits 2.
+     */
+    boolean resolve() {
+        try {
+            resolved = instrument == null ? null : Instruments.resolve(instrument);
+            return true;
+        } catch (FileFormatException e) {
+            System.err.println(error(e));
+            return false;
+        }
     }
 
-    /** The instrument the option names, else the default. */
-    InstrumentSpec orDefault() {
-        return instrument == null ? Instruments.defaultSpec() : Instruments.resolve(instrument);
+    /** The instrument the option names, or null when it is not given (after {@link #resolve()}). */
+    InstrumentSpec given() {
+        return resolved;
+    }
+
+    /** The instrument the option names, else the default (after {@link #resolve()}). */
+    InstrumentModel model() {
+        return InstrumentModel.of(resolved != null ? resolved : Instruments.defaultSpec());
     }
 
     /** The one line a broken or unknown description gives (file, line, field), for stderr. */

@@ -32,17 +32,13 @@ final class MergeCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws IOException {
-        dev.sweepline.fsw.host.instrument.InstrumentSpec given;
-        try {
-            given = instrument.given();
-        } catch (FileFormatException e) {
-            System.err.println(InstrumentOption.error(e));
+        if (!instrument.resolve()) {
             return 2;
         }
         CampaignSpec spec;
         List<RunRow> rows;
         try {
-            spec = CampaignReader.load(campaign, given);
+            spec = CampaignReader.load(campaign, instrument.given());
             rows = CampaignOutput.readRuns(spec, shards);
         } catch (FileFormatException | IOException e) {
             System.err.println("merge error: " + e.getMessage());

@@ -1,7 +1,6 @@
 package dev.sweepline.sim.cli;
 
 import dev.sweepline.sim.instrument.InstrumentModel;
-import dev.sweepline.fsw.host.yaml.FileFormatException;
 import dev.sweepline.ground.product.GroundProcessing;
 import dev.sweepline.ground.product.GroundProducts;
 import dev.sweepline.sim.bench.BenchConfig;
@@ -90,13 +89,10 @@ final class RunCommand implements Callable<Integer> {
             System.err.println("scenario error: " + e.getMessage());
             return 2;
         }
-        InstrumentModel model;
-        try {
-            model = InstrumentModel.of(instrument.orDefault());
-        } catch (FileFormatException e) {
-            System.err.println(InstrumentOption.error(e));
+        if (!instrument.resolve()) {
             return 2;
         }
+        InstrumentModel model = instrument.model();
         double seconds = minutes != null ? minutes * 60.0 : sc.durationSeconds();
         if (!(seconds > 0)) {
             System.err.println("--minutes must be positive");

@@ -6,7 +6,6 @@ import dev.sweepline.fsw.host.LinkAddress;
 import dev.sweepline.fsw.host.SerialTransport;
 import dev.sweepline.fsw.host.TcpTransport;
 import dev.sweepline.fsw.link.ByteTransport;
-import dev.sweepline.fsw.host.yaml.FileFormatException;
 import dev.sweepline.fsw.link.LinkCounters;
 import dev.sweepline.sim.instrument.InstrumentModel;
 import dev.sweepline.sim.scenario.Scenario;
@@ -74,13 +73,10 @@ final class ServeCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws Exception {
-        InstrumentModel model;
-        try {
-            model = InstrumentModel.of(instrument.orDefault());
-        } catch (FileFormatException e) {
-            System.err.println(InstrumentOption.error(e));
+        if (!instrument.resolve()) {
             return 2;
         }
+        InstrumentModel model = instrument.model();
         Scenario sc;
         LinkAddress address;
         FaultPlan plan;

@@ -43,17 +43,13 @@ final class TuneCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws Exception {
-        dev.sweepline.fsw.host.instrument.InstrumentSpec given;
-        try {
-            given = instrument.given();
-        } catch (FileFormatException e) {
-            System.err.println(InstrumentOption.error(e));
+        if (!instrument.resolve()) {
             return 2;
         }
         CampaignSpec spec;
         Shard slice;
         try {
-            spec = CampaignReader.load(campaign, given);
+            spec = CampaignReader.load(campaign, instrument.given());
             slice = shard == null ? Shard.ALL : Shard.parse(shard);
         } catch (FileFormatException | IllegalArgumentException e) {
             System.err.println("campaign error: " + e.getMessage());

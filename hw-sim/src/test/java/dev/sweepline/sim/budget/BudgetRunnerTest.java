@@ -77,10 +77,12 @@ class BudgetRunnerTest {
             assertTrue(p.margin() > 0 && p.margin() < 1, p.name() + " margin " + p.margin());
         }
         // recorded from 'bench budget' (seed 1) before the points flew by telecommand, and unchanged since:
-        // the 12 command reports of a survey point (312 octets) ride in frames that go out anyway
+        // the 12 command reports of a survey point (312 octets) ride in frames that go out anyway; the
+        // outbound figure was 2445.5 before merge 15bf8e6 (fsw-core configured by the description), which
+        // already gives 2481.0 (the same with the simulator built from the description): re-recorded there
         assertEquals(1746.8, r.phases().get(0).generatedMegabits(), 0.05);
         assertEquals(1231.6, r.phases().get(1).generatedMegabits(), 0.05);
-        assertEquals(2445.5, r.phases().get(2).generatedMegabits(), 0.05);
+        assertEquals(2481.0, r.phases().get(2).generatedMegabits(), 0.05);
         BudgetOutput.write(dir, r);
         JsonNode json = new ObjectMapper().readTree(dir.resolve("budget.json").toFile());
         assertEquals("FITS", json.get("verdict").asText());
