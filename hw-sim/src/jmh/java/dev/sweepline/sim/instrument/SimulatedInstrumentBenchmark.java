@@ -41,7 +41,7 @@ public class SimulatedInstrumentBenchmark {
 
     @Setup
     public void setUp() {
-        instrument = new SimulatedInstrument(InstrumentModel.demo(), 1234L);
+        instrument = new SimulatedInstrument(TestInstruments.DEMO_CUP, 1234L);
         double vx = 400e3 * Math.sin(Math.toRadians(4));
         double vy = 400e3 * Math.sin(Math.toRadians(2));
         double vz = Math.sqrt(400e3 * 400e3 - vx * vx - vy * vy);

@@ -1,5 +1,6 @@
 package dev.sweepline.sim.telemetry;
 
+import dev.sweepline.sim.instrument.TestInstruments;
 import dev.sweepline.sim.instrument.InstrumentModel;
 import dev.sweepline.fsw.exec.FlightConfig;
 import dev.sweepline.sim.interop.FlightLoop;
@@ -32,7 +33,7 @@ public final class SpectrumCorpus {
         SpectrumCorpus corpus = new SpectrumCorpus();
         for (String name : SCENARIOS) {
             var scenario = ScenarioLoader.builtIn(name);
-            FlightLoop loop = new FlightLoop(scenario, SEED, scenario.durationSeconds(), FlightConfig.of(InstrumentModel.demo().flight()),
+            FlightLoop loop = new FlightLoop(scenario, SEED, scenario.durationSeconds(), FlightConfig.of(TestInstruments.DEMO_CUP.flight()),
                     (f, off, len) -> { }).run();
             for (RecordedSpectrum s : loop.spectra()) {
                 corpus.add(name, s.adc());

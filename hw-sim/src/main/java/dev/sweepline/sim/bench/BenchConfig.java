@@ -1,6 +1,7 @@
 package dev.sweepline.sim.bench;
 
 import dev.sweepline.fsw.exec.FlightConfig;
+import dev.sweepline.fsw.host.instrument.Instruments;
 import dev.sweepline.sim.instrument.InstrumentModel;
 import dev.sweepline.sim.scenario.Scenario;
 import java.util.Objects;
@@ -32,10 +33,15 @@ public record BenchConfig(Scenario scenario, long seed, double durationSeconds, 
         flight = FlightConfigCopy.of(Objects.requireNonNull(flight, "flight"));
     }
 
-    /** The demo instrument and the flight software's default configuration, no allocation. */
+    /** The default instrument (instruments/FORMAT.md: the demo cup) and its flight configuration, no allocation. */
     public static BenchConfig defaults(Scenario scenario, long seed, double durationSeconds) {
-        return new BenchConfig(scenario, seed, durationSeconds, FlightConfig.of(InstrumentModel.demo().flight()),
-                InstrumentModel.demo(), Double.NaN);
+        return defaults(scenario, seed, durationSeconds, InstrumentModel.of(Instruments.defaultSpec()));
+    }
+
+    /** {@code instrument} and the flight software's configuration for its description, no allocation. */
+    public static BenchConfig defaults(Scenario scenario, long seed, double durationSeconds, InstrumentModel instrument) {
+        return new BenchConfig(scenario, seed, durationSeconds, FlightConfig.of(instrument.flight()), instrument,
+                Double.NaN);
     }
 
     /** A copy of the flight software's start-up configuration; changing it changes nothing here. */

@@ -8,6 +8,7 @@ import dev.sweepline.fsw.sweep.SweepListener;
 import dev.sweepline.fsw.sweep.SweepMode;
 import dev.sweepline.sim.cup.FaradayCup;
 import dev.sweepline.sim.design.ProtonInformation;
+import dev.sweepline.sim.preamp.Preamplifier;
 import dev.sweepline.sim.hv.WindowVolts;
 import dev.sweepline.sim.instrument.StepTruth;
 import dev.sweepline.sim.link.InProcessLink;
@@ -47,14 +48,16 @@ public final class BenchRecorder implements SweepListener, InProcessLink.StepObs
     /**
      * @param windows the table's windows as the HV supply makes them
      * @param cup     the simulated cup, to place the true peaks where the instrument would see them
+     * @param preamp  the simulated preamplifier, for the noise of each step's information
      * @param truthAt the scenario's plasma at a simulated time (microseconds)
      * @param next    sees every scheduler callback after this recorder
      */
-    public BenchRecorder(WindowVolts windows, FaradayCup cup, LongFunction<PlasmaState> truthAt, SweepListener next) {
+    public BenchRecorder(WindowVolts windows, FaradayCup cup, Preamplifier preamp, LongFunction<PlasmaState> truthAt,
+            SweepListener next) {
         this.next = next;
         this.windows = windows;
         this.cup = cup;
-        this.information = new ProtonInformation(cup.geometry());
+        this.information = new ProtonInformation(cup.geometry(), preamp);
         this.truthAt = truthAt;
     }
 
@@ -83,7 +86,7 @@ public final class BenchRecorder implements SweepListener, InProcessLink.StepObs
         double seconds = (truth.endMicros - truth.integrationStartMicros) / 1e6;
         information.gradient(plasma, p, truth.lowVolts, truth.highVolts, gradient);
         ProtonInformation.accumulate(measuredInformation, gradient,
-                ProtonInformation.variance(truth.totalAmps, reply.gainRange, seconds), 1.0);
+                information.variance(truth.totalAmps, reply.gainRange, seconds), 1.0);
         informationSeconds += seconds;
         informationSteps++;
     }

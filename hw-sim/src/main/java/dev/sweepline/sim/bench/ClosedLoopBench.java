@@ -77,7 +77,8 @@ public final class ClosedLoopBench {
         }
         // the mean integration per step as flown (a commanded or restored table may differ from the config)
         double stepSeconds = recorder.informationSeconds() / recorder.informationSteps();
-        DOptimalDesign design = new DOptimalDesign(new FaradayCup(config.instrument().cup()), windows);
+        DOptimalDesign design = new DOptimalDesign(new FaradayCup(config.instrument().cup()), config.instrument().preamp(),
+                windows);
         return DOptimalDesign.efficiency(recorder.measuredInformation(),
                 design.optimalInformation(midRun, recorder.informationSeconds(), stepSeconds));
     }
@@ -153,8 +154,8 @@ public final class ClosedLoopBench {
         WindowVolts windows = new WindowVolts(flight.table, config.instrument().calibration());
         AlphaDriftDirection drift = config.scenario().alphaDriftDirection();
         LongFunction<PlasmaState> plasma = micros -> PlasmaStates.of(timeline.at(micros / 1e6), drift);
-        BenchRecorder recorder = new BenchRecorder(windows, new FaradayCup(config.instrument().cup()), plasma,
-                hooks.observer());
+        BenchRecorder recorder = new BenchRecorder(windows, new FaradayCup(config.instrument().cup()),
+                config.instrument().preamp(), plasma, hooks.observer());
         SimulatedInstrument instrument = new SimulatedInstrument(config.instrument(),
                 SeedTree.of(config.seed()).instrument());
         InProcessLink link = new InProcessLink(instrument, plasma::apply, recorder);

@@ -1,10 +1,10 @@
 package dev.sweepline.sim.bench;
 
-import dev.sweepline.sim.instrument.InstrumentModel;
 import dev.sweepline.fsw.exec.FlightConfig;
 import dev.sweepline.fsw.telemetry.FrameSink;
 import dev.sweepline.ground.decode.DecoderConfig;
 import dev.sweepline.ground.decode.TelemetryDecoder;
+import dev.sweepline.ground.instrument.InstrumentSet;
 import dev.sweepline.ground.product.FitCollector;
 import dev.sweepline.ground.product.MomentRecord;
 import dev.sweepline.ground.spectrum.Ccsds121QuadrantDecoder;
@@ -29,16 +29,18 @@ import java.util.function.LongFunction;
 public final class GroundCheck {
     private final FitCollector fits = new FitCollector();
     private final TelemetryDecoder decoder;
-    private final long coarseAtTickZero = FlightConfig.of(InstrumentModel.demo().flight()).coarseTimeAtTickZero;
+    private final long coarseAtTickZero;
 
-    /** A check that knows the built-in window table. */
-    public GroundCheck() {
-        this(new WindowCatalogue());
+    /** A check of a run of {@code flight} that knows the built-in window tables, decoding with {@code instruments}. */
+    public GroundCheck(FlightConfig flight, InstrumentSet instruments) {
+        this(flight, instruments, new WindowCatalogue());
     }
 
     /** A check that also knows the uplinked tables of {@code windows}. */
-    public GroundCheck(WindowCatalogue windows) {
-        decoder = new TelemetryDecoder(DecoderConfig.icdDefaults(), new Ccsds121QuadrantDecoder(), windows, fits);
+    public GroundCheck(FlightConfig flight, InstrumentSet instruments, WindowCatalogue windows) {
+        decoder = new TelemetryDecoder(DecoderConfig.icdDefaults().withInstruments(instruments),
+                new Ccsds121QuadrantDecoder(), windows, fits);
+        coarseAtTickZero = flight.coarseTimeAtTickZero;
     }
 
     /** Where the run's frames go. */

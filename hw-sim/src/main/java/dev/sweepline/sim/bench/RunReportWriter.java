@@ -29,6 +29,7 @@ public final class RunReportWriter {
     /** The summary as an ordered map (JSON numbers; NaN becomes null, as JSON has no NaN). */
     public static Map<String, Object> summaryMap(RunSummary s) {
         Map<String, Object> m = new LinkedHashMap<>();
+        m.put("instrument", s.instrument());
         m.put("scenario", s.scenario());
         m.put("seed", s.seed());
         m.put("simulatedSeconds", s.simulatedSeconds());
@@ -126,8 +127,9 @@ public final class RunReportWriter {
         m.put("baud", baud);
         boolean warning = false;
         FlightConfig flight = config.flight();
-        for (LinkBudget b : new LinkBudget[] {LinkBudget.survey(flight.table, flight.parameters, baud),
-            LinkBudget.focus(flight.table, flight.parameters, baud)}) {
+        for (LinkBudget b : new LinkBudget[] {
+            LinkBudget.survey(flight.instrument, flight.table, flight.parameters, baud),
+            LinkBudget.focus(flight.instrument, flight.table, flight.parameters, baud)}) {
             Map<String, Object> mode = new LinkedHashMap<>();
             mode.put("stepsPerSecond", round(b.stepsPerSecond(), 2));
             mode.put("octetsPerSecond", round(b.octetsPerSecond(), 1));
@@ -153,6 +155,7 @@ public final class RunReportWriter {
     public static void printTable(RunSummary s, PrintStream out) {
         String line = "-".repeat(52);
         out.println(line);
+        row(out, "instrument", s.instrument());
         row(out, "scenario", s.scenario() + " (seed " + s.seed() + ")");
         row(out, "simulated", String.format(Locale.ROOT, "%.1f s in %.2f s wall (x%.0f real time)",
                 s.simulatedSeconds(), s.wallSeconds(), s.realTimeFactor()));

@@ -9,6 +9,7 @@ import java.util.Map;
 /**
  * The figures of one closed-loop run, computed from the recorder after the run.
  *
+ * @param instrument          the instrument flown (its description's name)
  * @param scenario            scenario name
  * @param seed                run seed
  * @param simulatedSeconds    simulated duration
@@ -28,7 +29,7 @@ import java.util.Map;
  *                            D-optimal design over the same windows and integration time (NaN if undefined)
  * @param decisionHash        the flight software's running hash of its decisions (hex)
  */
-public record RunSummary(String scenario, long seed, double simulatedSeconds, double wallSeconds, long steps,
+public record RunSummary(String instrument, String scenario, long seed, double simulatedSeconds, double wallSeconds, long steps,
         Map<SweepMode, Integer> sweepsByMode, Map<SweepMode, Double> spectraPerSecond, double lockFraction,
         int alphaLocks, List<Reacquisition> reacquisitions, double integratingFraction, long saturatedSamples,
         long unsettledSamples, Map<String, Integer> modeChanges, TelemetryFigures telemetry, double informationEfficiency,
@@ -88,7 +89,7 @@ public record RunSummary(String scenario, long seed, double simulatedSeconds, do
         }
         List<Reacquisition> reacq = new ArrayList<>();
         config.scenario().jumps().forEach(j -> reacq.add(Reacquisition.after(j, recorder.sweeps())));
-        return new RunSummary(config.scenario().name(), config.seed(), seconds, wallSeconds, recorder.steps(),
+        return new RunSummary(config.instrument().name(), config.scenario().name(), config.seed(), seconds, wallSeconds, recorder.steps(),
                 byMode, perSecond, focus == 0 ? Double.NaN : (double) locked / focus, alpha, reacq,
                 recorder.integrationMicros() / (seconds * 1e6), recorder.saturatedSamples(),
                 recorder.unsettledSamples(), recorder.modeChanges(), telemetry, informationEfficiency, decisionHash);

@@ -42,6 +42,7 @@ public final class BudgetOutput {
     static Map<String, Object> summary(BudgetResult r) {
         Map<String, Object> m = new LinkedHashMap<>();
         m.put("plan", r.plan().name());
+        m.put("instrument", r.plan().instrument().name());
         m.put("scenario", r.plan().scenario().name());
         m.put("hours", r.plan().endHours());
         m.put("verdict", r.fits() ? "FITS" : "DOES NOT FIT");

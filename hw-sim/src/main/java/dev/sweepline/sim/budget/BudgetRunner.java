@@ -68,7 +68,7 @@ public final class BudgetRunner {
     static Flown fly(OrbitPlan plan, Phase phase, double distanceAu, long seed) {
         double seconds = plan.sampleMinutes() * 60;
         Scenario scaled = DistanceScaling.at(plan.scenario(), distanceAu, seconds);
-        BenchConfig config = BenchConfig.defaults(scaled, seed, seconds).withAllocation(phase.allocationBitsPerSecond());
+        BenchConfig config = BenchConfig.defaults(scaled, seed, seconds, plan.instrument()).withAllocation(phase.allocationBitsPerSecond());
         ScriptRunner commands = new ScriptRunner(PhaseCommands.of(phase.mode(), config.flight()), true, null);
         RunSummary s = ClosedLoopBench.run(config, ClosedLoopBench.Progress.NONE,
                 ClosedLoopBench.Hooks.NONE.withCycle(commands)).summary();

@@ -1,5 +1,6 @@
 package dev.sweepline.sim.budget;
 
+import dev.sweepline.sim.instrument.InstrumentModel;
 import dev.sweepline.sim.scenario.Scenario;
 import java.util.List;
 
@@ -15,9 +16,11 @@ import java.util.List;
  * @param storageMegabits   onboard store for science telemetry; NaN: no store, every hour must fit its allocation
  * @param phases            the phases, in time order
  * @param passes            downlink passes
+ * @param instrument       the instrument flown in every phase
  */
 public record OrbitPlan(String name, String description, Scenario scenario, double sampleMinutes,
-        double sampleEveryHours, double storageMegabits, List<Phase> phases, List<Pass> passes) {
+        double sampleEveryHours, double storageMegabits, List<Phase> phases, List<Pass> passes,
+        InstrumentModel instrument) {
 
     /**
      * A downlink pass.

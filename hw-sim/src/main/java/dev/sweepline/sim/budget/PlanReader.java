@@ -1,5 +1,8 @@
 package dev.sweepline.sim.budget;
 
+import dev.sweepline.fsw.host.instrument.InstrumentSpec;
+import dev.sweepline.sim.instrument.InstrumentKey;
+import dev.sweepline.sim.instrument.InstrumentModel;
 import dev.sweepline.sim.scenario.ScenarioLoader;
 import dev.sweepline.fsw.host.yaml.FileFormatException;
 import dev.sweepline.fsw.host.yaml.Section;
@@ -19,7 +22,7 @@ import java.util.List;
 public final class PlanReader {
     private static final String FORMAT = "sweepline-plan/1";
     private static final List<String> TOP = List.of("format", "name", "description", "scenario", "sampleMinutes",
-            "sampleEveryHours", "storageMegabits", "phases", "passes");
+            "sampleEveryHours", "storageMegabits", "phases", "passes", InstrumentKey.KEY);
     private static final List<String> PHASE = List.of("name", "startHours", "endHours", "distanceAu", "mode",
             "allocationBitsPerS");
     private static final List<String> PASS = List.of("startHours", "hours", "bitsPerS");
@@ -27,10 +30,16 @@ public final class PlanReader {
     private PlanReader() {
     }
 
-    /** Reads the plan at {@code path}. */
+    /** Reads the plan at {@code path} for the instrument it names (or the default). */
     public static OrbitPlan load(Path path) {
+        return load(path, null);
+    }
+
+    /** Reads the plan at {@code path}; {@code instrument} (the command line's, or null) must agree with its {@code instrument:}. */
+    public static OrbitPlan load(Path path, InstrumentSpec instrument) {
         try {
-            return parse(Files.readString(path), path.toString());
+            Path folder = path.toAbsolutePath().getParent();
+            return parse(Files.readString(path), path.toString(), folder, instrument);
         } catch (NoSuchFileException e) {
             throw new FileFormatException(path.toString(), 0, "", "no such file", e);
         } catch (IOException e) {
@@ -38,12 +47,18 @@ public final class PlanReader {
         }
     }
 
-    /** Parses plan text. */
+    /** Parses plan text for the instrument it names (or the default). */
     public static OrbitPlan parse(String text, String file) {
+        return parse(text, file, null, null);
+    }
+
+    /** Parses plan text; {@code folder} resolves a relative instrument path; {@code option} must agree with it. */
+    public static OrbitPlan parse(String text, String file, Path folder, InstrumentSpec option) {
         Section top = Section.of(file, YamlTreeReader.read(text, file), TOP);
         if (!FORMAT.equals(top.text("format"))) {
             throw new FileFormatException(file, top.required("format").line(), "format", "expected " + FORMAT);
         }
+        InstrumentModel instrument = InstrumentModel.of(InstrumentKey.choose(top, folder, option));
         var scenario = wrap(file, top, () -> ScenarioLoader.resolve(top.text("scenario")));
         double sampleMinutes = positive(top, "sampleMinutes", 2);
         double every = positive(top, "sampleEveryHours", 12);
@@ -51,7 +66,7 @@ public final class PlanReader {
         List<Phase> phases = phases(file, top.required("phases"));
         List<OrbitPlan.Pass> passes = top.has("passes") ? passes(file, top.required("passes")) : List.of();
         return new OrbitPlan(top.text("name"), top.text("description", ""), scenario, sampleMinutes, every, storage,
-                phases, passes);
+                phases, passes, instrument);
     }
 
     private static List<Phase> phases(String file, YamlNode node) {

@@ -1,6 +1,5 @@
 package dev.sweepline.sim.campaign;
 
-import dev.sweepline.sim.instrument.InstrumentModel;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.SerializationFeature;
 import dev.sweepline.fsw.command.ParameterTable;
@@ -186,7 +185,7 @@ public final class CampaignOutput {
 
     /** The default windows with the set's sweep parameters, as the table image the table commands load. */
     public static byte[] recommendedImage(CampaignSpec spec, SetResult set) {
-        ParameterTable t = ParameterTable.of(InstrumentModel.demo().flight().defaultTable(),
+        ParameterTable t = ParameterTable.of(spec.instrument().flight().defaultTable(),
                 spec.parameters(set.set()));
         byte[] image = new byte[TableImage.MAX_OCTETS];
         int n = TableImage.encode(t, image);

@@ -1,6 +1,8 @@
 package dev.sweepline.sim.campaign;
 
 import dev.sweepline.fsw.instrument.InstrumentDescription;
+import dev.sweepline.fsw.host.instrument.InstrumentSpec;
+import dev.sweepline.sim.instrument.InstrumentKey;
 import dev.sweepline.sim.instrument.InstrumentModel;
 import dev.sweepline.fsw.command.ParameterTable;
 import dev.sweepline.fsw.command.TableImage;
@@ -29,7 +31,7 @@ import java.util.Map;
 public final class CampaignReader {
     private static final String FORMAT = "sweepline-campaign/1";
     private static final List<String> TOP = List.of("format", "name", "description", "seed", "runsPerSet",
-            "durationS", "scenario", "allocationBitsPerS", "draws", "eventShiftS", "grid");
+            "durationS", "scenario", "allocationBitsPerS", "draws", "eventShiftS", "grid", InstrumentKey.KEY);
     private static final List<String> KINDS = List.of("fixed", "uniform", "logUniform", "normal");
     /** Largest campaign this reader accepts, runs: a guard against a typo exploding the grid. */
     static final int MAX_RUNS = 1_000_000;
@@ -37,8 +39,16 @@ public final class CampaignReader {
     private CampaignReader() {
     }
 
-    /** Reads the campaign file at {@code path}; a relative scenario path in it is taken from the file's folder. */
+    /** Reads the campaign file at {@code path} for the instrument it names (or the default). */
     public static CampaignSpec load(Path path) {
+        return load(path, null);
+    }
+
+    /**
+     * Reads the campaign file at {@code path}; a relative scenario or instrument path in it is taken from
+     * the file's folder; {@code instrument} (the command line's, or null) must agree with its {@code instrument:}.
+     */
+    public static CampaignSpec load(Path path, InstrumentSpec instrument) {
         String text;
         try {
             text = Files.readString(path);
@@ -48,15 +58,21 @@ public final class CampaignReader {
             throw new FileFormatException(path.toString(), 0, "", "cannot read: " + e, e);
         }
         Path folder = path.toAbsolutePath().getParent();
-        return parse(text, path.toString(), folder);
+        return parse(text, path.toString(), folder, instrument);
     }
 
-    /** Parses campaign text; {@code folder} resolves a scenario given as a relative path. */
+    /** Parses campaign text for the instrument it names (or the default). */
     public static CampaignSpec parse(String text, String file, Path folder) {
+        return parse(text, file, folder, null);
+    }
+
+    /** Parses campaign text; {@code folder} resolves a scenario or instrument given as a relative path. */
+    public static CampaignSpec parse(String text, String file, Path folder, InstrumentSpec option) {
         Section top = Section.of(file, YamlTreeReader.read(text, file), TOP);
         if (!FORMAT.equals(top.text("format"))) {
             throw new FileFormatException(file, top.required("format").line(), "format", "expected " + FORMAT);
         }
+        InstrumentModel model = InstrumentModel.of(InstrumentKey.choose(top, folder, option));
         long seed = (long) positive(top, "seed", true);
         int runs = (int) positive(top, "runsPerSet", false);
         double duration = positive(top, "durationS", false);
@@ -67,13 +83,13 @@ public final class CampaignReader {
         List<CampaignSpec.GridAxis> grid = grid(file, top.required("grid"));
         Distribution shift = top.has("eventShiftS") ? distribution(file, top.required("eventShiftS")) : null;
         CampaignSpec spec = new CampaignSpec(top.text("name"), top.text("description", ""), seed, runs, duration,
-                base, draws, grid, allocation, shift);
+                base, draws, grid, allocation, shift, model);
         if ((long) spec.setCount() * runs > MAX_RUNS) {
             throw new FileFormatException(file, top.required("grid").line(), "grid",
                     spec.setCount() + " sets x " + runs + " runs is more than " + MAX_RUNS + " runs");
         }
         // every set must be a parameter table the flight software accepts, within the instrument's limits
-        InstrumentDescription instrument = InstrumentModel.demo().flight();
+        InstrumentDescription instrument = model.flight();
         InstrumentLimits limits = instrument.limits();
         for (int s = 0; s < spec.setCount(); s++) {
             ParameterTable table = ParameterTable.of(instrument.defaultTable(), spec.parameters(s));

@@ -3,6 +3,7 @@ package dev.sweepline.sim.campaign;
 import dev.sweepline.sim.bench.BenchConfig;
 import dev.sweepline.sim.bench.ClosedLoopBench;
 import dev.sweepline.sim.bench.GroundCheck;
+import dev.sweepline.sim.bench.GroundInstruments;
 import dev.sweepline.sim.bench.RunPool;
 import java.util.ArrayList;
 import java.util.List;
@@ -34,14 +35,15 @@ public final class CampaignRunner {
 
     /** Set {@code set} on ensemble member {@code run}: the default flight software with the set's parameters. */
     static BenchConfig config(CampaignSpec spec, int set, int run) {
-        return BenchConfig.defaults(spec.member(run), spec.runSeed(run), spec.durationSeconds())
+        return BenchConfig.defaults(spec.member(run), spec.runSeed(run), spec.durationSeconds(), spec.instrument())
                 .withFlight(f -> f.parameters = spec.parameters(set)).withAllocation(spec.allocationBitsPerSecond());
     }
 
     /** One job: set {@code set} on ensemble member {@code run}. */
     static RunRow runOne(CampaignSpec spec, int set, int run) {
-        GroundCheck ground = new GroundCheck();
-        ClosedLoopBench.Result r = ClosedLoopBench.run(config(spec, set, run), ClosedLoopBench.Progress.NONE,
+        BenchConfig config = config(spec, set, run);
+        GroundCheck ground = new GroundCheck(config.flight(), GroundInstruments.of(spec.instrument().spec()));
+        ClosedLoopBench.Result r = ClosedLoopBench.run(config, ClosedLoopBench.Progress.NONE,
                 ClosedLoopBench.Hooks.NONE.withFrames(ground.frames()));
         return RunRow.of(set, run, r.summary(), ground.compare(r.recorder().sweeps(), r.recorder()::truthAt));
     }

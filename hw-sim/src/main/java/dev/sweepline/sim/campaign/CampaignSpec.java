@@ -28,10 +28,11 @@ import java.util.SplittableRandom;
  * @param allocationBitsPerSecond downlink allocation the sets are judged against; NaN for none
  * @param eventShift       distribution of the shift of the base scenario's events (when the shocks
  *                         come), seconds; null: the events stay where the scenario has them
+ * @param instrument       the instrument flown (the grid's window-unit values are in its table's windows)
  */
 public record CampaignSpec(String name, String description, long seed, int runsPerSet, double durationSeconds,
         Scenario base, Map<PlasmaParameter, Distribution> draws, List<GridAxis> grid,
-        double allocationBitsPerSecond, Distribution eventShift) {
+        double allocationBitsPerSecond, Distribution eventShift, InstrumentModel instrument) {
 
     /** One grid axis: a tunable parameter and the values it takes. */
     public record GridAxis(TunableParameter parameter, List<Double> values) {
@@ -60,7 +61,7 @@ public record CampaignSpec(String name, String description, long seed, int runsP
 
     /** The flight software's parameters of set {@code index}: the defaults with the set's values applied. */
     public SweepParameters parameters(int index) {
-        SweepParameters p = InstrumentModel.demo().flight().defaultParameters();
+        SweepParameters p = instrument.flight().defaultParameters();
         double[] v = setValues(index);
         for (int a = 0; a < grid.size(); a++) {
             grid.get(a).parameter().apply(p, v[a]);

@@ -9,6 +9,7 @@ import dev.sweepline.fsw.host.yaml.FileFormatException;
 import java.nio.file.Path;
 import java.util.Locale;
 import java.util.concurrent.Callable;
+import picocli.CommandLine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
@@ -29,15 +30,21 @@ final class BudgetCommand implements Callable<Integer> {
     @Option(names = "--threads", paramLabel = "N", description = "Worker threads (default: every core).")
     int threads = Runtime.getRuntime().availableProcessors();
 
+    @CommandLine.Mixin
+    InstrumentOption instrument = new InstrumentOption();
+
     @Override
     public Integer call() throws Exception {
+        if (!instrument.resolve()) {
+            return 2;
+        }
         if (threads < 1) {
             System.err.println("--threads must be at least 1, got " + threads);
             return 2;
         }
         OrbitPlan p;
         try {
-            p = PlanReader.load(plan);
+            p = PlanReader.load(plan, instrument.given());
         } catch (FileFormatException e) {
             System.err.println("plan error: " + e.getMessage());
             return 2;

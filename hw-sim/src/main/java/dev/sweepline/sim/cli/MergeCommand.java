@@ -9,6 +9,7 @@ import java.io.IOException;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.concurrent.Callable;
+import picocli.CommandLine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
@@ -26,12 +27,18 @@ final class MergeCommand implements Callable<Integer> {
     @Option(names = "--out", paramLabel = "DIR", required = true, description = "Output folder.")
     Path out;
 
+    @CommandLine.Mixin
+    InstrumentOption instrument = new InstrumentOption();
+
     @Override
     public Integer call() throws IOException {
+        if (!instrument.resolve()) {
+            return 2;
+        }
         CampaignSpec spec;
         List<RunRow> rows;
         try {
-            spec = CampaignReader.load(campaign);
+            spec = CampaignReader.load(campaign, instrument.given());
             rows = CampaignOutput.readRuns(spec, shards);
         } catch (FileFormatException | IOException e) {
             System.err.println("merge error: " + e.getMessage());

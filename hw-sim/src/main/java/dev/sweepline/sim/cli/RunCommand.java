@@ -1,11 +1,11 @@
 package dev.sweepline.sim.cli;
 
 import dev.sweepline.sim.instrument.InstrumentModel;
-import dev.sweepline.fsw.exec.FlightConfig;
 import dev.sweepline.ground.product.GroundProcessing;
 import dev.sweepline.ground.product.GroundProducts;
 import dev.sweepline.sim.bench.BenchConfig;
 import dev.sweepline.sim.bench.GroundCheck;
+import dev.sweepline.sim.bench.GroundInstruments;
 import dev.sweepline.ground.decode.DecoderConfig;
 import dev.sweepline.ground.spectrum.WindowCatalogue;
 import dev.sweepline.sim.command.CommandScript;
@@ -28,6 +28,7 @@ import java.util.LinkedHashMap;
 import java.util.Map;
 import java.util.OptionalDouble;
 import java.util.concurrent.Callable;
+import picocli.CommandLine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
 
@@ -42,6 +43,9 @@ final class RunCommand implements Callable<Integer> {
     @Option(names = "--minutes", paramLabel = "M",
             description = "Simulated minutes to run (default: the scenario's own duration).")
     Double minutes;
+
+    @CommandLine.Mixin
+    InstrumentOption instrument = new InstrumentOption();
 
     @Option(names = "--seed", paramLabel = "S", description = "Seed of all randomness (default: ${DEFAULT-VALUE}).")
     long seed = 1;
@@ -85,12 +89,16 @@ final class RunCommand implements Callable<Integer> {
             System.err.println("scenario error: " + e.getMessage());
             return 2;
         }
+        if (!instrument.resolve()) {
+            return 2;
+        }
+        InstrumentModel model = instrument.model();
         double seconds = minutes != null ? minutes * 60.0 : sc.durationSeconds();
         if (!(seconds > 0)) {
             System.err.println("--minutes must be positive");
             return 2;
         }
-        BenchConfig config = BenchConfig.defaults(sc, seed, seconds)
+        BenchConfig config = BenchConfig.defaults(sc, seed, seconds, model)
                 .withAllocation(allocation != null ? allocation : Double.NaN);
         if (commands != null && uplinkReplay != null) {
             System.err.println("--commands and --uplink-replay exclude each other: give one");
@@ -102,7 +110,8 @@ final class RunCommand implements Callable<Integer> {
             Path source = uplinkReplay != null ? uplinkReplay : commands;
             try {
                 parsed = uplinkReplay != null ? CommandScript.ofUplink(UplinkLog.read(uplinkReplay))
-                        : commands == null ? CommandScript.parse(List.of()) : CommandScript.read(commands);
+                        : commands == null ? CommandScript.parse(List.of(), model.flight())
+                        : CommandScript.read(commands, model.flight());
                 // the bench's sender keeps its authentication counter beside the NVM file (commands.md §7.3)
                 GroundCommandCounter counter = nvm == null ? GroundCommandCounter.inMemory()
                         : GroundCommandCounter.beside(nvm);
@@ -147,9 +156,9 @@ final class RunCommand implements Callable<Integer> {
         Path groundDir = out.resolve("ground");
         GroundProducts ground = GroundProcessing.process(out.resolve("telemetry.tm"), groundDir,
                 allocation != null ? OptionalDouble.of(allocation) : OptionalDouble.empty(),
-                DecoderConfig.autoLength(), windows);
+                DecoderConfig.autoLength().withInstruments(GroundInstruments.of(model.spec())), windows);
         GroundCheck.GroundFigures figures = GroundCheck.compare(ground.moments(), result.recorder().sweeps(),
-                result.recorder()::truthAt, FlightConfig.of(InstrumentModel.demo().flight()).coarseTimeAtTickZero);
+                result.recorder()::truthAt, config.flight().coarseTimeAtTickZero);
         Files.copy(groundDir.resolve(GroundProcessing.REPORT), out.resolve("report.html"),
                 StandardCopyOption.REPLACE_EXISTING);
         extra.putAll(RunReportWriter.groundMap(figures));

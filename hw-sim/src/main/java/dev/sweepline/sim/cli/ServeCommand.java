@@ -7,6 +7,7 @@ import dev.sweepline.fsw.host.SerialTransport;
 import dev.sweepline.fsw.host.TcpTransport;
 import dev.sweepline.fsw.link.ByteTransport;
 import dev.sweepline.fsw.link.LinkCounters;
+import dev.sweepline.sim.instrument.InstrumentModel;
 import dev.sweepline.sim.scenario.Scenario;
 import dev.sweepline.sim.scenario.ScenarioException;
 import dev.sweepline.sim.scenario.ScenarioLoader;
@@ -17,6 +18,7 @@ import dev.sweepline.sim.serve.InstrumentServer;
 import dev.sweepline.sim.serve.ScenarioInstrument;
 import java.nio.channels.ServerSocketChannel;
 import java.util.concurrent.Callable;
+import picocli.CommandLine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
 
@@ -66,8 +68,15 @@ final class ServeCommand implements Callable<Integer> {
     @Option(names = "--fault-seed", paramLabel = "S", description = "Seed of the faults (default: ${DEFAULT-VALUE}).")
     long faultSeed = 1;
 
+    @CommandLine.Mixin
+    InstrumentOption instrument = new InstrumentOption();
+
     @Override
     public Integer call() throws Exception {
+        if (!instrument.resolve()) {
+            return 2;
+        }
+        InstrumentModel model = instrument.model();
         Scenario sc;
         LinkAddress address;
         FaultPlan plan;
@@ -91,7 +100,7 @@ final class ServeCommand implements Callable<Integer> {
                 faulty = new FaultyTransport(transport, plan, () -> System.nanoTime() / 1_000);
                 wire = faulty;
             }
-            InstrumentServer server = new InstrumentServer(new ScenarioInstrument(sc, seed), wire, pace);
+            InstrumentServer server = new InstrumentServer(new ScenarioInstrument(sc, seed, model), wire, pace);
             Thread main = Thread.currentThread();
             Runtime.getRuntime().addShutdownHook(new Thread(() -> {
                 server.stop();
@@ -101,7 +110,7 @@ final class ServeCommand implements Callable<Integer> {
                     Thread.currentThread().interrupt();
                 }
             }));
-            System.out.println("serving " + sc.name() + " (seed " + seed + ") on " + address + ", speed "
+            System.out.println("serving " + model.name() + " in " + sc.name() + " (seed " + seed + ") on " + address + ", speed "
                     + (pace == 0 ? "as fast as possible" : pace));
             server.run();
             print(server, faulty);

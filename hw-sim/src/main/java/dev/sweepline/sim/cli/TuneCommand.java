@@ -15,6 +15,7 @@ import java.util.concurrent.Callable;
 import me.tongfei.progressbar.ProgressBar;
 import me.tongfei.progressbar.ProgressBarBuilder;
 import me.tongfei.progressbar.ProgressBarStyle;
+import picocli.CommandLine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
@@ -34,15 +35,21 @@ final class TuneCommand implements Callable<Integer> {
             description = "Worker threads (default: every core, ${DEFAULT-VALUE}).")
     int threads = Runtime.getRuntime().availableProcessors();
 
+    @CommandLine.Mixin
+    InstrumentOption instrument = new InstrumentOption();
+
     @Option(names = "--shard", paramLabel = "i/N", description = "Run only shard i of N (1-based).")
     String shard;
 
     @Override
     public Integer call() throws Exception {
+        if (!instrument.resolve()) {
+            return 2;
+        }
         CampaignSpec spec;
         Shard slice;
         try {
-            spec = CampaignReader.load(campaign);
+            spec = CampaignReader.load(campaign, instrument.given());
             slice = shard == null ? Shard.ALL : Shard.parse(shard);
         } catch (FileFormatException | IllegalArgumentException e) {
             System.err.println("campaign error: " + e.getMessage());

@@ -1,7 +1,7 @@
 package dev.sweepline.sim.command;
 
 import dev.sweepline.fsw.instrument.InstrumentDescription;
-import dev.sweepline.sim.instrument.InstrumentModel;
+import dev.sweepline.fsw.host.instrument.Instruments;
 import dev.sweepline.fsw.command.CommandCode;
 import dev.sweepline.fsw.command.ParameterTable;
 import dev.sweepline.fsw.command.TableImage;
@@ -84,13 +84,23 @@ public final class CommandScript {
         return entries;
     }
 
-    /** Reads a script file. */
+    /** Reads a script file for the default instrument (instruments/FORMAT.md: the demo cup). */
     public static CommandScript read(Path file) throws IOException, ScriptException {
-        return parse(Files.readAllLines(file));
+        return read(file, Instruments.defaultSpec().flight());
     }
 
-    /** Parses script lines. */
+    /** Reads a script file for {@code instrument} (its tables and their limits). */
+    public static CommandScript read(Path file, InstrumentDescription instrument) throws IOException, ScriptException {
+        return parse(Files.readAllLines(file), instrument);
+    }
+
+    /** Parses script lines for the default instrument. */
     public static CommandScript parse(List<String> lines) throws ScriptException {
+        return parse(lines, Instruments.defaultSpec().flight());
+    }
+
+    /** Parses script lines for {@code instrument}: its DAC scale and default parameters, its voltage limit. */
+    public static CommandScript parse(List<String> lines, InstrumentDescription instrument) throws ScriptException {
         List<ScriptEntry> out = new ArrayList<>();
         List<String> warnings = new ArrayList<>();
         long last = Long.MIN_VALUE;
@@ -119,15 +129,16 @@ public final class CommandScript {
                 throw new ScriptException(lineNo, "time goes backwards");
             }
             last = at;
-            parseLine(at, lineNo, t, out);
+            parseLine(at, lineNo, t, out, instrument);
             if ("TABLE_LOGSPACED".equalsIgnoreCase(t[1])) {
-                warnAboveLimit(lineNo, t, warnings);
+                warnAboveLimit(lineNo, t, warnings, instrument.limits());
             }
         }
         return new CommandScript(out, images(out), warnings);
     }
 
-    private static void parseLine(long at, int line, String[] t, List<ScriptEntry> out) throws ScriptException {
+    private static void parseLine(long at, int line, String[] t, List<ScriptEntry> out, InstrumentDescription instrument)
+            throws ScriptException {
         String verb = t[1].toUpperCase(Locale.ROOT);
         switch (verb) {
             case "NO_OP" -> out.add(command(at, line, CommandCode.NO_OP, t, 0));
@@ -147,7 +158,7 @@ public final class CommandScript {
                 out.add(new ScriptEntry(at, line, CommandCode.TABLE_DUMP, new byte[] {(byte) number(t, 2, line),
                     (byte) (off >>> 8), (byte) off, (byte) (len >>> 8), (byte) len}, null, null));
             }
-            case "TABLE_LOGSPACED" -> table(at, line, t, out);
+            case "TABLE_LOGSPACED" -> table(at, line, t, out, instrument);
             case "TABLE_IMAGE" -> tableFile(at, line, t, out);
             case "INJECT" -> {
                 need(t, 1, line);
@@ -188,9 +199,9 @@ public final class CommandScript {
         throw new ScriptException(line, "mode must be SAFE, SURVEY or FOCUS");
     }
 
-    /** Notes a log-spaced table whose top edge lies above the demo instrument's voltage limit. */
-    private static void warnAboveLimit(int line, String[] t, List<String> warnings) throws ScriptException {
-        InstrumentLimits limits = InstrumentModel.demo().flight().limits();
+    /** Notes a log-spaced table whose top edge lies above the flown instrument's voltage limit. */
+    private static void warnAboveLimit(int line, String[] t, List<String> warnings, InstrumentLimits limits)
+            throws ScriptException {
         long highMillivolts = number(t, 4, line) * 1000L;
         if (highMillivolts > limits.maxModulatorMillivolts) {
             warnings.add("line " + line + ": TABLE_LOGSPACED reaches " + number(t, 4, line) + " V, above the instrument's "
@@ -200,13 +211,13 @@ public final class CommandScript {
     }
 
     /** A log-spaced table as an image, then loads of 192 octets, a verify and a commit, all at {@code at}. */
-    private static void table(long at, int line, String[] t, List<ScriptEntry> out) throws ScriptException {
+    private static void table(long at, int line, String[] t, List<ScriptEntry> out, InstrumentDescription instrument)
+            throws ScriptException {
         int windows = number(t, 2, line);
         int lowVolts = number(t, 3, line);
         int highVolts = number(t, 4, line);
         ParameterTable p;
         try {
-            InstrumentDescription instrument = InstrumentModel.demo().flight();
             p = ParameterTable.of(WindowTable.logSpaced(windows, lowVolts * 1000, highVolts * 1000,
                     instrument.millivoltsPerCode()), instrument.defaultParameters());
         } catch (IllegalArgumentException e) {

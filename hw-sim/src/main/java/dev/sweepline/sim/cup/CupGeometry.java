@@ -16,17 +16,6 @@ package dev.sweepline.sim.cup;
 public record CupGeometry(double apertureRadiusM, double apertureToCollectorM, double collectorRadiusM,
                           int grids, double gridTransparency) {
 
-    /** Grids in the demo cup: ground, two modulator, suppressor (four is common practice). */
-    public static final int DEMO_GRIDS = 4;
-    /** Transparency of one demo grid: fine tungsten mesh, ~90 % (physics.md "The demo instrument", common practice). */
-    public static final double DEMO_GRID_TRANSPARENCY = 0.90;
-    /** Effective area of the demo cup (aperture area times grid transmission), square metres: 1 cm^2, as physics.md's worked cases. */
-    public static final double DEMO_EFFECTIVE_AREA_M2 = 1e-4;
-    /** Aperture-to-collector distance of the demo cup, metres (invented). */
-    public static final double DEMO_APERTURE_TO_COLLECTOR_M = 15e-3;
-    /** Collector radius of the demo cup, metres (invented): full acceptance to about 20 deg, none beyond about 52 deg. */
-    public static final double DEMO_COLLECTOR_RADIUS_M = 12.5e-3;
-
     /** Checks the geometry is physical. */
     public CupGeometry {
         if (!(apertureRadiusM > 0) || !(apertureToCollectorM > 0) || !(collectorRadiusM >= apertureRadiusM)
@@ -37,14 +26,14 @@ public record CupGeometry(double apertureRadiusM, double apertureToCollectorM, d
     }
 
     /**
-     * The demo cup: four grids of 0.90, aperture sized so that the effective area is exactly 1 cm^2
-     * (radius about 6.97 mm), collector 12.5 mm radius 15 mm behind the aperture.
+     * A cup whose aperture gives {@code effectiveAreaM2} at normal incidence behind its grids:
+     * R = sqrt(area / (pi transparency^grids)) (instruments/FORMAT.md, derived values).
      */
-    public static CupGeometry demo() {
-        double transmission = Math.pow(DEMO_GRID_TRANSPARENCY, DEMO_GRIDS);
-        double radius = Math.sqrt(DEMO_EFFECTIVE_AREA_M2 / (Math.PI * transmission));
-        return new CupGeometry(radius, DEMO_APERTURE_TO_COLLECTOR_M, DEMO_COLLECTOR_RADIUS_M, DEMO_GRIDS,
-                DEMO_GRID_TRANSPARENCY);
+    public static CupGeometry ofEffectiveArea(double effectiveAreaM2, double apertureToCollectorM, double collectorRadiusM,
+                                              int grids, double gridTransparency) {
+        double transmission = Math.pow(gridTransparency, grids);
+        double radius = Math.sqrt(effectiveAreaM2 / (Math.PI * transmission));
+        return new CupGeometry(radius, apertureToCollectorM, collectorRadiusM, grids, gridTransparency);
     }
 
     /** Transmission of the whole grid stack, transparency^grids. */

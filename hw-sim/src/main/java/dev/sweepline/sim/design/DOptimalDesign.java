@@ -1,7 +1,5 @@
 package dev.sweepline.sim.design;
 
-import dev.sweepline.fsw.instrument.InstrumentDescription;
-import dev.sweepline.fsw.host.instrument.Instruments;
 import dev.sweepline.sim.cup.FaradayCup;
 import dev.sweepline.sim.hv.WindowVolts;
 import dev.sweepline.sim.plasma.IonPopulation;
@@ -16,20 +14,20 @@ import dev.sweepline.sim.preamp.Preamplifier;
  * window's standardised variance tr(F⁻¹ M_j) exceeds the parameter count.
  */
 public final class DOptimalDesign {
-    /** The demo cup's flight description (instruments/demo-cup.yaml), the instrument this part models. */
-    private static final InstrumentDescription DEMO = Instruments.defaultSpec().flight();
     private static final int MAX_ITERATIONS = 5000;
     private static final double EQUIVALENCE_TOLERANCE = 1e-3;
 
     private final ProtonInformation information;
     private final FaradayCup cup;
     private final WindowVolts windows;
+    private final Preamplifier preamp;
 
-    /** A design over {@code windows} for {@code cup}. */
-    public DOptimalDesign(FaradayCup cup, WindowVolts windows) {
+    /** A design over {@code windows} for {@code cup} read through {@code preamp}. */
+    public DOptimalDesign(FaradayCup cup, Preamplifier preamp, WindowVolts windows) {
         this.cup = cup;
         this.windows = windows;
-        this.information = new ProtonInformation(cup.geometry());
+        this.preamp = preamp;
+        this.information = new ProtonInformation(cup.geometry(), preamp);
     }
 
     /**
@@ -52,10 +50,10 @@ public final class DOptimalDesign {
         for (int j = 0; j < n; j++) {
             cup.quadrantCurrents(plasma, windows.lowVolts(j), windows.highVolts(j), quadrants);
             double total = quadrants[0] + quadrants[1] + quadrants[2] + quadrants[3];
-            int range = rangeFor(Math.max(Math.max(quadrants[0], quadrants[1]), Math.max(quadrants[2], quadrants[3])));
+            int range = rangeFor(preamp, Math.max(Math.max(quadrants[0], quadrants[1]), Math.max(quadrants[2], quadrants[3])));
             information.gradient(plasma, p, windows.lowVolts(j), windows.highVolts(j), g);
             // information per second of window j, at the run's step length
-            double perSecond = 1.0 / (ProtonInformation.variance(total, range, stepSeconds) * stepSeconds);
+            double perSecond = 1.0 / (information.variance(total, range, stepSeconds) * stepSeconds);
             m[j] = new double[3][3];
             ProtonInformation.accumulate(m[j], g, 1.0 / perSecond, 1.0);
             if (g[0] != 0) {
@@ -94,13 +92,13 @@ public final class DOptimalDesign {
     }
 
     /** The most sensitive range whose full scale holds the quadrant current below 80 % (physics.md). */
-    static int rangeFor(double quadrantAmps) {
-        for (int r = 0; r < DEMO.gainRanges() - 1; r++) {
-            if (quadrantAmps < 0.8 * Preamplifier.fullScaleAmps(r)) {
+    static int rangeFor(Preamplifier preamp, double quadrantAmps) {
+        for (int r = 0; r < preamp.ranges() - 1; r++) {
+            if (quadrantAmps < 0.8 * preamp.fullScaleAmps(r)) {
                 return r;
             }
         }
-        return DEMO.gainRanges() - 1;
+        return preamp.ranges() - 1;
     }
 
     private static void combine(double[][][] m, double[] share, double[][] f) {

@@ -19,13 +19,13 @@ import dev.sweepline.sim.preamp.Preamplifier;
 public final class ProtonInformation {
     /** Parameters: relative density, bulk speed and thermal speed. */
     public static final int PARAMETERS = 3;
-    private static final double CHANNEL_TEMPERATURE_K = 300;
-
     private final double areaM2;
+    private final Preamplifier preamp;
 
-    /** Information for the cup's effective area. */
-    public ProtonInformation(CupGeometry cup) {
+    /** Information for the cup's effective area and the noise of its preamplifier channels. */
+    public ProtonInformation(CupGeometry cup, Preamplifier preamp) {
         this.areaM2 = cup.effectiveAreaM2();
+        this.preamp = preamp;
     }
 
     /** The protons of {@code plasma}, or null. */
@@ -53,12 +53,12 @@ public final class ProtonInformation {
     }
 
     /** Variance of the summed window current, A², for a total current, gain range and integration time. */
-    public static double variance(double totalAmps, int range, double integrationSeconds) {
-        double b = Preamplifier.noiseBandwidthHz(integrationSeconds);
+    public double variance(double totalAmps, int range, double integrationSeconds) {
+        double b = preamp.integrationBandwidthHz(integrationSeconds);
         double shot = 2 * PhysicalConstants.ELEMENTARY_CHARGE_COULOMB * Math.abs(totalAmps) * b;
-        double johnson = 4 * PhysicalConstants.BOLTZMANN_JOULE_PER_KELVIN * CHANNEL_TEMPERATURE_K * b
-                / Preamplifier.feedbackOhms(range);
-        double lsb = Preamplifier.lsbAmps(range);
+        double johnson = 4 * PhysicalConstants.BOLTZMANN_JOULE_PER_KELVIN * preamp.temperatureK() * b
+                / preamp.feedbackOhms(range);
+        double lsb = preamp.lsbAmps(range);
         return shot + InstrumentDescription.QUADRANTS * (johnson + lsb * lsb / 12);
     }
 

@@ -1,7 +1,6 @@
 package dev.sweepline.sim.instrument;
 
 import dev.sweepline.fsw.instrument.InstrumentDescription;
-import dev.sweepline.fsw.host.instrument.Instruments;
 import dev.sweepline.fsw.link.SampleReply;
 
 /**
@@ -10,8 +9,6 @@ import dev.sweepline.fsw.link.SampleReply;
  * run without a fault stay exactly as they were. All off by default; set the fields between steps.
  */
 public final class InstrumentFaults {
-    /** The demo cup's flight description (instruments/demo-cup.yaml), the instrument this part models. */
-    private static final InstrumentDescription DEMO = Instruments.defaultSpec().flight();
     /** No stuck quadrant. */
     public static final int NONE = -1;
 
@@ -27,6 +24,17 @@ public final class InstrumentFaults {
     public boolean deadCollector;
     /** Link fault: the reply carries a wrong sequence number (bit 15 flipped), so the executive drops it. */
     public boolean corruptSequence;
+
+    private final int dacTopCode;
+    private final int pedestalCounts;
+    private final int adcTopCode;
+
+    /** The faults of an instrument of description {@code d} (its DAC and ADC codes), all off. */
+    public InstrumentFaults(InstrumentDescription d) {
+        this.dacTopCode = d.dacTopCode();
+        this.pedestalCounts = d.pedestalCounts();
+        this.adcTopCode = d.adcTopCode();
+    }
 
     /** Clears every fault. */
     public void clear() {
@@ -45,18 +53,18 @@ public final class InstrumentFaults {
     /** Applies the faults to a computed reply. */
     void apply(SampleReply reply) {
         if (hvReadbackOffsetCodes != 0) {
-            reply.hvMonitorCode = Math.max(0, Math.min(DEMO.dacTopCode(),
+            reply.hvMonitorCode = Math.max(0, Math.min(dacTopCode,
                     reply.hvMonitorCode + hvReadbackOffsetCodes));
         }
         if (deadCollector) {
             for (int q = 0; q < InstrumentDescription.QUADRANTS; q++) {
-                reply.quadrant[q] = DEMO.pedestalCounts();
+                reply.quadrant[q] = pedestalCounts;
             }
             reply.status &= ~SampleReply.STATUS_SATURATED;
         }
         if (saturateAdc) {
             for (int q = 0; q < InstrumentDescription.QUADRANTS; q++) {
-                reply.quadrant[q] = DEMO.adcTopCode();
+                reply.quadrant[q] = adcTopCode;
             }
             reply.status |= SampleReply.STATUS_SATURATED;
         }

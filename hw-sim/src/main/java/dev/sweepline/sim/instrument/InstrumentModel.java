@@ -1,38 +1,52 @@
 package dev.sweepline.sim.instrument;
 
-import dev.sweepline.fsw.instrument.InstrumentDescription;
-import dev.sweepline.fsw.host.instrument.Instruments;
 import dev.sweepline.fsw.host.instrument.InstrumentSpec;
+import dev.sweepline.fsw.instrument.InstrumentDescription;
 import dev.sweepline.sim.cup.CupGeometry;
 import dev.sweepline.sim.hv.HvCalibration;
 import dev.sweepline.sim.hv.HvSupplyParameters;
 import dev.sweepline.sim.preamp.Preamplifier;
 
 /**
- * Parameter set of one simulated instrument (physics.md "The demo instrument"; the values are invented).
+ * Parameter set of one simulated instrument, built from its description file (instruments/FORMAT.md).
  *
  * @param spec                       the instrument description file it models (the flight software is
  *                                   configured from the same file: {@link #flight()})
  * @param cup                        cup geometry
  * @param calibration                the unit's HV DAC / monitor calibration
  * @param hv                         HV supply dynamics and monitor noise
- * @param preampTemperatureK         feedback-resistor temperature, kelvin
+ * @param preamp                     the preamplifier and ADC of every quadrant
  * @param hvUnsettledToleranceCodes  largest |monitor - commanded high code| at integration start that still
  *                                   counts as settled, DAC codes
  */
 public record InstrumentModel(InstrumentSpec spec, CupGeometry cup, HvCalibration calibration, HvSupplyParameters hv,
-                              double preampTemperatureK, int hvUnsettledToleranceCodes) {
-    /**
-     * Demo tolerance: 50 codes (5 V), ten times the 0.5 V rms monitor noise, so a settled rail
-     * raises a false alarm with probability ~1e-23 per step (Gaussian tail at 10 sigma).
-     */
-    public static final int DEMO_HV_UNSETTLED_TOLERANCE_CODES = 50;
-
+                              Preamplifier preamp, int hvUnsettledToleranceCodes) {
     /** Checks the parts are present and the tolerance non-negative. */
     public InstrumentModel {
-        if (spec == null || cup == null || calibration == null || hv == null || !(preampTemperatureK >= 0) || hvUnsettledToleranceCodes < 0) {
+        if (spec == null || cup == null || calibration == null || hv == null || preamp == null || hvUnsettledToleranceCodes < 0) {
             throw new IllegalArgumentException("incomplete instrument model");
         }
+    }
+
+    /**
+     * The instrument a description file describes: geometry from its area (cm² to m²) and lengths (mm
+     * to m); the HV unit's scale and offset, slew (V/ms to V/s), settling tau (µs to s), monitor noise
+     * and settled tolerance; the preamplifier's ranges, output full scale, temperature and bandwidth;
+     * the ADC's width and pedestal (through {@link InstrumentSpec#flight()}). Unit conversions divide
+     * by exact powers of ten, so a value written as 150 µs is the double 150e-6.
+     */
+    public static InstrumentModel of(InstrumentSpec spec) {
+        InstrumentDescription d = spec.flight();
+        InstrumentSpec.Geometry g = spec.geometry();
+        InstrumentSpec.Modulator m = spec.modulator();
+        InstrumentSpec.Preamp p = spec.preamp();
+        CupGeometry cup = CupGeometry.ofEffectiveArea(g.effectiveAreaCm2() / 1e4, g.apertureToCollectorMm() / 1e3,
+                g.collectorRadiusMm() / 1e3, g.grids(), g.gridTransparency());
+        HvSupplyParameters hv = new HvSupplyParameters(m.slewVoltsPerMs() * 1e3, m.settleTauMicros() / 1e6,
+                m.monitorNoiseVoltsRms());
+        return new InstrumentModel(spec, cup, HvCalibration.of(d, m.gainError(), m.offsetVolts()), hv,
+                new Preamplifier(d, p.outputFullScaleVolts(), p.temperatureK(), p.bandwidthHz()),
+                m.settledToleranceCodes());
     }
 
     /** The flight software's description of this instrument (from {@link #spec()}). */
@@ -40,9 +54,8 @@ public record InstrumentModel(InstrumentSpec spec, CupGeometry cup, HvCalibratio
         return spec.flight();
     }
 
-    /** The demo instrument (instruments/demo-cup.yaml): demo cup, calibration, HV supply, preamp at 300 K, 50-code settle tolerance. */
-    public static InstrumentModel demo() {
-        return new InstrumentModel(Instruments.defaultSpec(), CupGeometry.demo(), HvCalibration.demo(), HvSupplyParameters.demo(),
-                Preamplifier.DEMO_TEMPERATURE_K, DEMO_HV_UNSETTLED_TOLERANCE_CODES);
+    /** The instrument's name (its description's). */
+    public String name() {
+        return spec.name();
     }
 }

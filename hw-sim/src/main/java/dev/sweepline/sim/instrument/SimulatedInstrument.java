@@ -1,7 +1,6 @@
 package dev.sweepline.sim.instrument;
 
 import dev.sweepline.fsw.instrument.InstrumentDescription;
-import dev.sweepline.fsw.host.instrument.Instruments;
 import dev.sweepline.fsw.link.SampleReply;
 import dev.sweepline.fsw.link.StepCommand;
 import dev.sweepline.sim.cup.FaradayCup;
@@ -31,22 +30,26 @@ import java.util.SplittableRandom;
  * {@code Erf}'s continued-fraction objects, 64 B per ion population (measured with JMH -prof gc).
  */
 public final class SimulatedInstrument {
-    /** The demo cup's flight description (instruments/demo-cup.yaml), the instrument this part models. */
-    private static final InstrumentDescription DEMO = Instruments.defaultSpec().flight();
     private final InstrumentModel model;
     private final FaradayCup cup;
     private final HvSupply hv;
     private final Preamplifier preamp;
     private final SplittableRandom rng;
-    private final InstrumentFaults faults = new InstrumentFaults();
+    private final InstrumentFaults faults;
+    private final int gainRanges;
+    private final int modulationPeriodMicros;
 
     /** An instrument of {@code model}, its noise drawn from a stream seeded with {@code seed}; HV initially off. */
     public SimulatedInstrument(InstrumentModel model, long seed) {
         this.model = model;
         this.cup = new FaradayCup(model.cup());
         this.hv = new HvSupply(model.calibration(), model.hv());
-        this.preamp = new Preamplifier(model.preampTemperatureK());
+        this.preamp = model.preamp();
         this.rng = new SplittableRandom(seed);
+        InstrumentDescription d = model.flight();
+        this.faults = new InstrumentFaults(d);
+        this.gainRanges = d.gainRanges();
+        this.modulationPeriodMicros = d.modulationPeriodMicros();
     }
 
     /** The injectable faults of this instrument (all off at construction); applied to every later reply. */
@@ -86,8 +89,8 @@ public final class SimulatedInstrument {
         } else {
             hv.disable(startMicros);
         }
-        int range = Math.max(0, Math.min(DEMO.gainRanges() - 1, cmd.gainRange));
-        long integrationMicros = (long) cmd.integrationPeriods * DEMO.modulationPeriodMicros();
+        int range = Math.max(0, Math.min(gainRanges - 1, cmd.gainRange));
+        long integrationMicros = (long) cmd.integrationPeriods * modulationPeriodMicros;
         long integrationStart = startMicros + Math.max(0, cmd.settleMicros);
         long mid = integrationStart + integrationMicros / 2;
         double low = hv.lowVoltsAt(mid);
@@ -96,14 +99,14 @@ public final class SimulatedInstrument {
         boolean unsettled = cmd.hvEnabled && Math.abs(monitor - cmd.dacHigh) > model.hvUnsettledToleranceCodes();
 
         cup.quadrantCurrents(plasma, low, high, truth.quadrantAmps);
-        double integrationSeconds = Math.max(1, cmd.integrationPeriods) * DEMO.modulationPeriodMicros() * 1e-6;
+        double integrationSeconds = Math.max(1, cmd.integrationPeriods) * modulationPeriodMicros * 1e-6;
         boolean saturated = false;
         double total = 0;
         for (int q = 0; q < InstrumentDescription.QUADRANTS; q++) {
             double amps = truth.quadrantAmps[q];
             int counts = preamp.sample(amps, range, integrationSeconds, rng);
             reply.quadrant[q] = counts;
-            saturated |= Preamplifier.isSaturated(counts);
+            saturated |= preamp.isSaturated(counts);
             total += amps;
         }
 
@@ -117,7 +120,7 @@ public final class SimulatedInstrument {
             faults.apply(reply);
         }
 
-        long end = startMicros + cmd.durationMicros(DEMO.modulationPeriodMicros());
+        long end = startMicros + cmd.durationMicros(modulationPeriodMicros);
         truth.lowVolts = low;
         truth.highVolts = high;
         truth.totalAmps = total;

@@ -9,7 +9,10 @@
  * computes the noiseless quadrant currents ({@code FaradayCup}), adds preamplifier noise and
  * quantises in the commanded gain range, and fills a {@link dev.sweepline.fsw.link.SampleReply} and a
  * {@link dev.sweepline.sim.instrument.StepTruth}. {@link dev.sweepline.sim.instrument.InstrumentModel}
- * is the parameter set ({@code demo()}: the invented demo instrument of physics.md).
+ * is the parameter set, built from an instrument description file ({@code InstrumentModel.of(spec)}:
+ * geometry, HV calibration and dynamics, preamplifier and ADC, instruments/FORMAT.md); the demo cup is
+ * {@code InstrumentModel.of(Instruments.builtIn("demo-cup"))}. {@link dev.sweepline.sim.instrument.InstrumentKey}
+ * reads the {@code instrument:} key of campaign and plan files.
  *
  * <h2>Requirements</h2>
  * <ol>

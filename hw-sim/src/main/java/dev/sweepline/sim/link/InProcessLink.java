@@ -1,7 +1,5 @@
 package dev.sweepline.sim.link;
 
-import dev.sweepline.fsw.instrument.InstrumentDescription;
-import dev.sweepline.fsw.host.instrument.Instruments;
 import dev.sweepline.fsw.link.InstrumentLink;
 import dev.sweepline.fsw.link.SampleReply;
 import dev.sweepline.fsw.link.StepCommand;
@@ -17,8 +15,6 @@ import dev.sweepline.sim.plasma.PlasmaState;
  * <p>One step is in flight at a time (the hardware ICD's rule). Threading: one thread, the bench's.
  */
 public final class InProcessLink implements InstrumentLink {
-    /** The demo cup's flight description (instruments/demo-cup.yaml), the instrument this part models. */
-    private static final InstrumentDescription DEMO = Instruments.defaultSpec().flight();
     /** Where the plasma of a given time comes from (the scenario timeline, in the bench). */
     public interface PlasmaSource {
         /** The plasma at {@code micros} of simulated time. */
@@ -34,6 +30,7 @@ public final class InProcessLink implements InstrumentLink {
     private final SimulatedInstrument instrument;
     private final PlasmaSource plasma;
     private final StepObserver observer;
+    private final int modulationPeriodMicros;
     private final SampleReply pending = new SampleReply();
     private final StepTruth truth = new StepTruth();
     private boolean replyPending;
@@ -44,6 +41,7 @@ public final class InProcessLink implements InstrumentLink {
         this.instrument = instrument;
         this.plasma = plasma;
         this.observer = observer;
+        this.modulationPeriodMicros = instrument.model().flight().modulationPeriodMicros();
     }
 
     @Override
@@ -51,7 +49,7 @@ public final class InProcessLink implements InstrumentLink {
         if (replyPending) {
             return false;
         }
-        long midMicros = nowMicros + step.settleMicros + (step.durationMicros(DEMO.modulationPeriodMicros()) - step.settleMicros) / 2;
+        long midMicros = nowMicros + step.settleMicros + (step.durationMicros(modulationPeriodMicros) - step.settleMicros) / 2;
         PlasmaState now = plasma.plasmaAt(midMicros);
         replyReadyMicros = instrument.execute(step, nowMicros, now, pending, truth);
         replyPending = true;

@@ -1,7 +1,6 @@
 package dev.sweepline.sim.link;
 
 import dev.sweepline.fsw.instrument.InstrumentDescription;
-import dev.sweepline.fsw.host.instrument.Instruments;
 import dev.sweepline.fsw.link.FrameEncoder;
 import dev.sweepline.fsw.link.SampleReplyCodec;
 import dev.sweepline.fsw.link.StepCommandCodec;
@@ -26,40 +25,40 @@ import dev.sweepline.fsw.table.WindowTable;
  * @param capacityPerSecond  what the baud rate carries, octets/s
  */
 public record LinkBudget(String mode, double stepsPerSecond, double octetsPerSecond, double capacityPerSecond) {
-    /** The demo cup's flight description (instruments/demo-cup.yaml), the instrument this part models. */
-    private static final InstrumentDescription DEMO = Instruments.defaultSpec().flight();
     /** Load above which a link is reported as tight (hardware ICD §6; common practice for serial links). */
     public static final double WARN_FRACTION = 0.80;
     /** Bits per octet on an 8N1 line: start + 8 data + stop. */
     public static final int BITS_PER_OCTET_8N1 = 10;
     /** Wire octets of a step frame: COBS(15 + CRC 2) + delimiter = 19 (hardware ICD §6). */
     public static final int STEP_FRAME_OCTETS = FrameEncoder.wireLength(StepCommandCodec.LENGTH);
-    /** Wire octets of a sample reply frame of the demo cup's 2-octet samples, 19 (hardware ICD §3.2, §6). */
-    public static final int REPLY_FRAME_OCTETS = FrameEncoder.wireLength(SampleReplyCodec.length(DEMO.sampleOctets()));
+    /** Wire octets of a sample reply frame of the instrument's samples (hardware ICD §3.2, §6; 19 for 2-octet samples). */
+    public static int replyFrameOctets(InstrumentDescription d) {
+        return FrameEncoder.wireLength(SampleReplyCodec.length(d.sampleOctets()));
+    }
 
-    /** The budget of {@code stepsPerSecond} at {@code baud}. */
-    public static LinkBudget of(String mode, double stepsPerSecond, int baud) {
-        double octets = stepsPerSecond * Math.max(STEP_FRAME_OCTETS, REPLY_FRAME_OCTETS);
+    /** The budget of {@code stepsPerSecond} at {@code baud} for the frames of instrument {@code d}. */
+    public static LinkBudget of(String mode, double stepsPerSecond, int baud, InstrumentDescription d) {
+        double octets = stepsPerSecond * Math.max(STEP_FRAME_OCTETS, replyFrameOctets(d));
         return new LinkBudget(mode, stepsPerSecond, octets, (double) baud / BITS_PER_OCTET_8N1);
     }
 
     /** Survey: every window of {@code table} in order. */
-    public static LinkBudget survey(WindowTable table, SweepParameters p, int baud) {
-        return of("survey", stepsPerSecond(table, p, 0, table.count()), baud);
+    public static LinkBudget survey(InstrumentDescription d, WindowTable table, SweepParameters p, int baud) {
+        return of("survey", stepsPerSecond(d, table, p, 0, table.count()), baud, d);
     }
 
     /** Focus: the busiest run of the widest focus band along {@code table}. */
-    public static LinkBudget focus(WindowTable table, SweepParameters p, int baud) {
+    public static LinkBudget focus(InstrumentDescription d, WindowTable table, SweepParameters p, int baud) {
         int width = Math.min(table.count(), p.maxBandWindows);
         double best = 0;
         for (int first = 0; first + width <= table.count(); first++) {
-            best = Math.max(best, stepsPerSecond(table, p, first, width));
+            best = Math.max(best, stepsPerSecond(d, table, p, first, width));
         }
-        return of("focus", best, baud);
+        return of("focus", best, baud, d);
     }
 
     /** Steps per second of a sweep over {@code count} windows from {@code first}, repeated back to back. */
-    static double stepsPerSecond(WindowTable table, SweepParameters p, int first, int count) {
+    static double stepsPerSecond(InstrumentDescription d, WindowTable table, SweepParameters p, int first, int count) {
         long micros = 0;
         // consecutive sweeps alternate direction (scheduler R-sweep order): the first step of a sweep
         // sits where the last one ended, so it has no rail change
@@ -67,7 +66,7 @@ public record LinkBudget(String mode, double stepsPerSecond, double octetsPerSec
         int highBefore = table.dacHigh(first);
         for (int w = first; w < first + count; w++) {
             micros += SettleTime.micros(p, lowBefore, highBefore, table.dacLow(w), table.dacHigh(w))
-                    + (long) p.integrationPeriods * DEMO.modulationPeriodMicros();
+                    + (long) p.integrationPeriods * d.modulationPeriodMicros();
             lowBefore = table.dacLow(w);
             highBefore = table.dacHigh(w);
         }

@@ -1,18 +1,17 @@
 package dev.sweepline.sim.preamp;
 
 import dev.sweepline.fsw.instrument.InstrumentDescription;
-import dev.sweepline.fsw.host.instrument.Instruments;
 import dev.sweepline.sim.physics.PhysicalConstants;
 import java.util.SplittableRandom;
 
 /**
- * Collector preamplifier, synchronous demodulator and 16-bit ADC of one quadrant, with three gain
- * ranges (physics.md "Noise and gain ranging"; {@code instruments/demo-cup.yaml}).
+ * Collector preamplifier, synchronous demodulator and ADC of one quadrant, with the gain ranges of
+ * one instrument description (physics.md "Noise and gain ranging"; instruments/FORMAT.md, preamp and adc).
  *
- * <p>Range r has full scale FS_r = 40 pA * 32^r (40 pA, 1.28 nA, 40.96 nA) and feedback resistor
- * R_f = 4 V / FS_r, so full scale is 4 V at the amplifier output. The ADC is unsigned 16-bit with a
- * pedestal: counts = pedestal + round(I / LSB), LSB = FS / (65535 - pedestal), clipped to 0..65535;
- * a sample at the top code is saturated.
+ * <p>Range r has full scale FS_r = FS_0 * ratio^r and feedback resistor R_f = V_fs / FS_r, so full
+ * scale is V_fs ({@code outputFullScaleVolts}) at the amplifier output (demo cup: 40 pA * 32^r, 4 V).
+ * The ADC is unsigned with a pedestal: counts = pedestal + round(I / LSB), LSB = FS / (top - pedestal),
+ * clipped to 0..top (top = 2^bits - 1); a sample at the top code is saturated.
  *
  * <p>Calibration: the output is calibrated to the window current I. With square-wave modulation the
  * fundamental of the detected signal is (2/pi) I (physics.md); that factor is absorbed in the gain
@@ -20,51 +19,78 @@ import java.util.SplittableRandom;
  *
  * <p>Noise, added in amperes before quantisation: shot noise sqrt(2 e |I| B) and the feedback
  * resistor's Johnson noise sqrt(4 k T B / R_f), with the integration's equivalent noise bandwidth
- * B = 1/(2 T_int) (common practice); quantisation comes from the rounding. Simplifications: the
- * shot term uses the window current and the elementary charge; strictly the demodulated output
- * carries the shot noise of the whole collected current, and an alpha carries 2e.
+ * B = 1/(2 T_int) (common practice), capped at the analog bandwidth; quantisation comes from the
+ * rounding. Simplifications: the shot term uses the window current and the elementary charge;
+ * strictly the demodulated output carries the shot noise of the whole collected current, and an
+ * alpha carries 2e.
  *
- * <p>Threading: stateless apart from the caller's random stream; allocation-free.
+ * <p>Threading: immutable apart from the caller's random stream; allocation-free.
  */
 public final class Preamplifier {
-    /** The demo cup's flight description (instruments/demo-cup.yaml), the instrument this part models. */
-    private static final InstrumentDescription DEMO = Instruments.defaultSpec().flight();
-    /** Amplifier output at full scale, volts (invented demo value, see the class comment). */
-    public static final double FULL_SCALE_VOLTS = 4.0;
-    /** Feedback-resistor temperature of the demo unit, kelvin (room temperature: common practice). */
-    public static final double DEMO_TEMPERATURE_K = 300.0;
+    private final int ranges;
+    private final int rangeRatioShift;
+    private final long fullScaleRange0Femtoamps;
+    private final int pedestalCounts;
+    private final int topCode;
     /** Codes above the pedestal up to the top of the ADC. */
-    private static final int SPAN_COUNTS = DEMO.adcTopCode() - DEMO.pedestalCounts();
-
+    private final int spanCounts;
+    private final double outputFullScaleVolts;
     private final double temperatureK;
+    private final double bandwidthHz;
 
-    /** A preamplifier with its feedback resistors at {@link #DEMO_TEMPERATURE_K}. */
-    public Preamplifier() {
-        this(DEMO_TEMPERATURE_K);
-    }
-
-    /** A preamplifier with its feedback resistors at {@code temperatureK}. */
-    public Preamplifier(double temperatureK) {
-        if (!(temperatureK >= 0)) {
-            throw new IllegalArgumentException("temperature must be non-negative: " + temperatureK);
+    /**
+     * The preamplifier and ADC of an instrument.
+     *
+     * @param d                    its ranges, full scale and ADC (the flight description)
+     * @param outputFullScaleVolts amplifier output at full scale, volts (sets the feedback resistors)
+     * @param temperatureK         feedback-resistor temperature, kelvin
+     * @param bandwidthHz          analog bandwidth, hertz (caps the noise bandwidth)
+     */
+    public Preamplifier(InstrumentDescription d, double outputFullScaleVolts, double temperatureK, double bandwidthHz) {
+        if (!(temperatureK >= 0) || !(outputFullScaleVolts > 0) || !(bandwidthHz > 0)) {
+            throw new IllegalArgumentException("bad preamplifier: " + outputFullScaleVolts + " V full scale, "
+                    + temperatureK + " K, " + bandwidthHz + " Hz");
         }
+        this.ranges = d.gainRanges();
+        this.rangeRatioShift = d.rangeRatioShift();
+        this.fullScaleRange0Femtoamps = d.fullScaleRange0Femtoamps();
+        this.pedestalCounts = d.pedestalCounts();
+        this.topCode = d.adcTopCode();
+        this.spanCounts = topCode - pedestalCounts;
+        this.outputFullScaleVolts = outputFullScaleVolts;
         this.temperatureK = temperatureK;
+        this.bandwidthHz = bandwidthHz;
     }
 
-    /** Full scale of {@code range}, amperes: 40 pA * 32^range. */
-    public static double fullScaleAmps(int range) {
+    /** Gain ranges. */
+    public int ranges() {
+        return ranges;
+    }
+
+    /** Feedback-resistor temperature, kelvin. */
+    public double temperatureK() {
+        return temperatureK;
+    }
+
+    /** Full scale of {@code range}, amperes: FS_0 * ratio^range. */
+    public double fullScaleAmps(int range) {
         checkRange(range);
-        return (DEMO.fullScaleRange0Femtoamps() << (DEMO.rangeRatioShift() * range)) * 1e-15;
+        return (fullScaleRange0Femtoamps << (rangeRatioShift * range)) * 1e-15;
     }
 
-    /** Feedback resistor of {@code range}: 4 V / full scale, ohms. */
-    public static double feedbackOhms(int range) {
-        return FULL_SCALE_VOLTS / fullScaleAmps(range);
+    /** Feedback resistor of {@code range}: output full scale / full scale, ohms. */
+    public double feedbackOhms(int range) {
+        return outputFullScaleVolts / fullScaleAmps(range);
     }
 
     /** Current of one ADC count in {@code range}, amperes. */
-    public static double lsbAmps(int range) {
-        return fullScaleAmps(range) / SPAN_COUNTS;
+    public double lsbAmps(int range) {
+        return fullScaleAmps(range) / spanCounts;
+    }
+
+    /** Noise bandwidth of an integration of {@code integrationSeconds}: 1/(2 T), at most the analog bandwidth, hertz. */
+    public double integrationBandwidthHz(double integrationSeconds) {
+        return Math.min(noiseBandwidthHz(integrationSeconds), bandwidthHz);
     }
 
     /** Equivalent noise bandwidth of an integration of {@code integrationSeconds}: 1/(2 T), hertz. */
@@ -93,19 +119,19 @@ public final class Preamplifier {
 
     /** Total input-referred noise for a current, range and integration time, amperes rms. */
     public double noiseAmpsRms(double amps, int range, double integrationSeconds) {
-        double b = noiseBandwidthHz(integrationSeconds);
+        double b = integrationBandwidthHz(integrationSeconds);
         double shot = shotNoiseAmpsRms(amps, b);
         double johnson = johnsonNoiseAmpsRms(range, b);
         return Math.sqrt(shot * shot + johnson * johnson);
     }
 
-    /** Noise-free ADC code of a current: pedestal + round(I / LSB), clipped to 0..65535. */
-    public static int countsFor(double amps, int range) {
-        double c = DEMO.pedestalCounts() + Math.rint(amps / lsbAmps(range));
+    /** Noise-free ADC code of a current: pedestal + round(I / LSB), clipped to 0..top. */
+    public int countsFor(double amps, int range) {
+        double c = pedestalCounts + Math.rint(amps / lsbAmps(range));
         if (!(c > 0)) {
             return 0;
         }
-        return c >= DEMO.adcTopCode() ? DEMO.adcTopCode() : (int) c;
+        return c >= topCode ? topCode : (int) c;
     }
 
     /**
@@ -115,24 +141,24 @@ public final class Preamplifier {
      * @param range              gain range, 0..{@link InstrumentDescription#gainRanges} - 1
      * @param integrationSeconds integration time, seconds
      * @param rng                the caller's seeded random stream
-     * @return ADC counts, 0..65535
+     * @return ADC counts, 0..top
      */
     public int sample(double amps, int range, double integrationSeconds, SplittableRandom rng) {
         return countsFor(amps + noiseAmpsRms(amps, range, integrationSeconds) * rng.nextGaussian(), range);
     }
 
     /** Current of an ADC code in {@code range} (the inverse of the quantiser, for truth and tests), amperes. */
-    public static double amps(int counts, int range) {
-        return (counts - DEMO.pedestalCounts()) * lsbAmps(range);
+    public double amps(int counts, int range) {
+        return (counts - pedestalCounts) * lsbAmps(range);
     }
 
     /** True when a code sits at the top of the ADC range. */
-    public static boolean isSaturated(int counts) {
-        return counts >= DEMO.adcTopCode();
+    public boolean isSaturated(int counts) {
+        return counts >= topCode;
     }
 
-    private static void checkRange(int range) {
-        if (range < 0 || range >= DEMO.gainRanges()) {
+    private void checkRange(int range) {
+        if (range < 0 || range >= ranges) {
             throw new IllegalArgumentException("no gain range " + range);
         }
     }

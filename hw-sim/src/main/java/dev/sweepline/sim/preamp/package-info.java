@@ -2,15 +2,16 @@
  * The collector preamplifier, demodulator and ADC.
  *
  * <h2>What it does</h2>
- * {@link dev.sweepline.sim.preamp.Preamplifier} turns a quadrant's window current into a 16-bit
- * demodulated sample: three gain ranges (full scale 40 pA, 1.28 nA, 40.96 nA; R_f = 4 V / FS), shot and
- * feedback-resistor Johnson noise in the integration's noise bandwidth B = 1/(2 T_int), rounding to
+ * {@link dev.sweepline.sim.preamp.Preamplifier} turns a quadrant's window current into a demodulated
+ * sample of the instrument's ADC width: its gain ranges (demo cup: full scale 40 pA, 1.28 nA, 40.96 nA;
+ * R_f = 4 V / FS; every figure from the description file), shot and feedback-resistor Johnson noise in
+ * the integration's noise bandwidth B = 1/(2 T_int) (at most the analog bandwidth), rounding to
  * the ADC code above the pedestal, clipping and saturation. The output is calibrated to the window
  * current: the (2/pi) square-wave fundamental factor of physics.md is absorbed in the chain gain.
  *
  * <h2>Requirements</h2>
  * <ol>
- *   <li>PRE-1: ranges, feedback resistors and LSBs follow instruments/demo-cup.yaml (40 pA * 32^r, 4 V full scale).</li>
+ *   <li>PRE-1: ranges, feedback resistors and LSBs follow the description (demo-cup.yaml: 40 pA * 32^r, 4 V full scale).</li>
  *   <li>PRE-2: counts = pedestal + round(I/LSB); zero current reads the pedestal; full scale reads
  *       65535 and is flagged saturated; below 0 and above 65535 clip.</li>
  *   <li>PRE-3: the sample variance over many seeded samples equals 2eIB + 4kTB/R_f + LSB^2/12.</li>

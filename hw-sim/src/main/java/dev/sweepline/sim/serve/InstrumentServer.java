@@ -1,7 +1,6 @@
 package dev.sweepline.sim.serve;
 
 import dev.sweepline.fsw.instrument.InstrumentDescription;
-import dev.sweepline.fsw.host.instrument.Instruments;
 import dev.sweepline.fsw.link.ByteTransport;
 import dev.sweepline.fsw.link.FrameReceiver;
 import dev.sweepline.fsw.link.FrameSender;
@@ -35,8 +34,6 @@ import java.util.concurrent.locks.LockSupport;
  * <p>Threading: one thread ({@link #doWork(long)} or {@link #run}); {@link #stop()} from any thread.
  */
 public final class InstrumentServer {
-    /** The demo cup's flight description (instruments/demo-cup.yaml), the instrument this part models. */
-    private static final InstrumentDescription DEMO = Instruments.defaultSpec().flight();
     /** Octets read from the transport per read at most: the size of the one receive buffer. */
     static final int READ_CHUNK = 256;
     /**
@@ -51,9 +48,10 @@ public final class InstrumentServer {
     private final ByteTransport transport;
     private final double speed;
     private final LinkCounters counters = new LinkCounters();
-    /** The demo cup's sample replies (instruments/demo-cup.yaml: 16-bit ADC, 2-octet samples). */
-    private final SampleReplyCodec replies = SampleReplyCodec.of(DEMO);
-    private final FrameReceiver receiver = new FrameReceiver(counters, replies);
+    /** The instrument's sample replies (its ADC width sets the sample octets: hardware ICD §3.2). */
+    private final SampleReplyCodec replies;
+    private final FrameReceiver receiver;
+    private final int modulationPeriodMicros;
     private final FrameSender sender;
     private final StepCommand step = new StepCommand();
     private final SampleReply reply = new SampleReply();
@@ -94,6 +92,10 @@ public final class InstrumentServer {
         this.transport = transport;
         this.speed = speed;
         this.sender = new FrameSender(transport, counters);
+        InstrumentDescription d = executor.instrument();
+        this.replies = SampleReplyCodec.of(d);
+        this.receiver = new FrameReceiver(counters, replies);
+        this.modulationPeriodMicros = d.modulationPeriodMicros();
     }
 
     /**
@@ -205,7 +207,7 @@ public final class InstrumentServer {
     }
 
     private void executeStep(long nowNanos) {
-        long durationMicros = step.durationMicros(DEMO.modulationPeriodMicros());
+        long durationMicros = step.durationMicros(modulationPeriodMicros);
         if (haveLast && step.sequence == lastSequence) {
             repeatsAnswered++; // a repeat: the stored reply again, no second execution
         } else {

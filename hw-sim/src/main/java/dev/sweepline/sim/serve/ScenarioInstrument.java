@@ -1,7 +1,6 @@
 package dev.sweepline.sim.serve;
 
 import dev.sweepline.fsw.instrument.InstrumentDescription;
-import dev.sweepline.fsw.host.instrument.Instruments;
 import dev.sweepline.fsw.link.HousekeepingReply;
 import dev.sweepline.fsw.link.SampleReply;
 import dev.sweepline.fsw.link.StepCommand;
@@ -23,8 +22,6 @@ import dev.sweepline.sim.seed.SeedTree;
  * <p>Threading: one thread.
  */
 public final class ScenarioInstrument implements StepExecutor {
-    /** The demo cup's flight description (instruments/demo-cup.yaml), the instrument this part models. */
-    private static final InstrumentDescription DEMO = Instruments.defaultSpec().flight();
     /** Kelvin at 0 degC (definition of the Celsius scale). */
     private static final double ZERO_CELSIUS_K = 273.15;
 
@@ -34,22 +31,24 @@ public final class ScenarioInstrument implements StepExecutor {
     private final StepTruth truth = new StepTruth();
     private int lastHvHighCode;
     private int lastLowCode;
-
-    /** The demo instrument in {@code scenario} with run seed {@code seed}. */
-    public ScenarioInstrument(Scenario scenario, long seed) {
-        this(scenario, seed, InstrumentModel.demo());
-    }
+    private final int modulationPeriodMicros;
 
     /** Instrument {@code model} in {@code scenario} with run seed {@code seed}. */
     public ScenarioInstrument(Scenario scenario, long seed, InstrumentModel model) {
         this.instrument = new SimulatedInstrument(model, SeedTree.of(seed).instrument());
         this.timeline = scenario.timeline(seed);
         this.drift = scenario.alphaDriftDirection();
+        this.modulationPeriodMicros = model.flight().modulationPeriodMicros();
+    }
+
+    @Override
+    public InstrumentDescription instrument() {
+        return instrument.model().flight();
     }
 
     @Override
     public long execute(StepCommand cmd, long startMicros, SampleReply reply) {
-        long midMicros = startMicros + cmd.settleMicros + (cmd.durationMicros(DEMO.modulationPeriodMicros()) - cmd.settleMicros) / 2;
+        long midMicros = startMicros + cmd.settleMicros + (cmd.durationMicros(modulationPeriodMicros) - cmd.settleMicros) / 2;
         long end = instrument.execute(cmd, startMicros, PlasmaStates.of(timeline.at(midMicros / 1e6), drift),
                 reply, truth);
         lastHvHighCode = reply.hvMonitorCode;
@@ -72,6 +71,6 @@ public final class ScenarioInstrument implements StepExecutor {
     public void housekeeping(HousekeepingReply hk) {
         hk.hvMonitorHighCode = lastHvHighCode;
         hk.hvMonitorLowCode = lastLowCode; // the model has no low-rail monitor: report the commanded level
-        hk.temperatureCentiCelsius = (int) Math.round((instrument.model().preampTemperatureK() - ZERO_CELSIUS_K) * 100);
+        hk.temperatureCentiCelsius = (int) Math.round((instrument.model().preamp().temperatureK() - ZERO_CELSIUS_K) * 100);
     }
 }

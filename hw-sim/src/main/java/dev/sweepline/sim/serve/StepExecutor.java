@@ -1,11 +1,15 @@
 package dev.sweepline.sim.serve;
 
+import dev.sweepline.fsw.instrument.InstrumentDescription;
 import dev.sweepline.fsw.link.HousekeepingReply;
 import dev.sweepline.fsw.link.SampleReply;
 import dev.sweepline.fsw.link.StepCommand;
 
 /** What the instrument server executes each step with: the simulated electronics, or a test double. */
 public interface StepExecutor {
+    /** The instrument these steps run on: its sample width and modulation period. */
+    InstrumentDescription instrument();
+
     /**
      * Executes {@code cmd} starting at {@code startMicros} of the instrument's own clock.
      *

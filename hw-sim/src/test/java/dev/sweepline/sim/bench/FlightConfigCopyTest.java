@@ -1,5 +1,6 @@
 package dev.sweepline.sim.bench;
 
+import dev.sweepline.sim.instrument.TestInstruments;
 import dev.sweepline.sim.instrument.InstrumentModel;
 import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
@@ -20,7 +21,7 @@ import org.junit.jupiter.api.Test;
 class FlightConfigCopyTest {
     @Test
     void shouldCarryEveryPrimitiveOptionOfTheFlightConfiguration() throws IllegalAccessException {
-        FlightConfig source = FlightConfig.of(InstrumentModel.demo().flight());
+        FlightConfig source = FlightConfig.of(TestInstruments.DEMO_CUP.flight());
         int changed = 0;
         for (Field f : FlightConfig.class.getFields()) {
             if (Modifier.isStatic(f.getModifiers())) {
@@ -50,8 +51,8 @@ class FlightConfigCopyTest {
 
     @Test
     void shouldCopyTheMutableMembersAndShareTheImmutableOnes() {
-        FlightConfig source = FlightConfig.of(InstrumentModel.demo().flight());
-        source.table = WindowTable.logSpaced(64, 100_000, 3_000_000, InstrumentModel.demo().flight().millivoltsPerCode());
+        FlightConfig source = FlightConfig.of(TestInstruments.DEMO_CUP.flight());
+        source.table = WindowTable.logSpaced(64, 100_000, 3_000_000, TestInstruments.DEMO_CUP.flight().millivoltsPerCode());
         source.parameters.integrationPeriods = 5;
         source.faults.threshold[1] = 9;
         source.commandKey[0] = 42;

@@ -1,5 +1,6 @@
 package dev.sweepline.sim.bench;
 
+import dev.sweepline.sim.instrument.TestInstruments;
 import dev.sweepline.sim.instrument.InstrumentModel;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
@@ -26,9 +27,9 @@ import org.junit.jupiter.api.Test;
 class FocusBandInformationTest {
     @Test
     void shouldNeverChooseABandThatCannotPinDownTheProtons() {
-        WindowVolts windows = new WindowVolts(InstrumentModel.demo().flight().defaultTable(), HvCalibration.demo());
-        FaradayCup cup = new FaradayCup(CupGeometry.demo());
-        ProtonInformation info = new ProtonInformation(CupGeometry.demo());
+        WindowVolts windows = new WindowVolts(TestInstruments.DEMO_CUP.flight().defaultTable(), TestInstruments.DEMO_CUP.calibration());
+        FaradayCup cup = new FaradayCup(TestInstruments.DEMO_CUP.cup());
+        ProtonInformation info = new ProtonInformation(TestInstruments.DEMO_CUP.cup(), TestInstruments.DEMO_CUP.preamp());
         List<String> bad = new ArrayList<>();
         int bands = 0;
         double worst = Double.POSITIVE_INFINITY;
@@ -49,7 +50,7 @@ class FocusBandInformationTest {
                     cup.quadrantCurrents(plasma, windows.lowVolts(w), windows.highVolts(w), q);
                     double total = q[0] + q[1] + q[2] + q[3];
                     info.gradient(plasma, p, windows.lowVolts(w), windows.highVolts(w), g);
-                    ProtonInformation.accumulate(f, g, ProtonInformation.variance(total, 1, 0.008), 1.0);
+                    ProtonInformation.accumulate(f, g, info.variance(total, 1, 0.008), 1.0);
                 }
                 double trace = f[0][0] + f[1][1] + f[2][2];
                 double conditioning = ProtonInformation.det(f) / Math.pow(trace / 3, 3);

@@ -7,6 +7,7 @@ import dev.sweepline.ground.decode.DecoderConfig;
 import dev.sweepline.ground.decode.TelemetryDecoder;
 import dev.sweepline.ground.spectrum.Ccsds121QuadrantDecoder;
 import dev.sweepline.ground.spectrum.DecodedSpectrum;
+import dev.sweepline.sim.instrument.TestInstruments;
 import dev.sweepline.sim.scenario.ScenarioLoader;
 import java.io.ByteArrayOutputStream;
 import java.io.IOException;
@@ -41,6 +42,28 @@ class GoldenRunTest {
     static final String TELEMETRY_SHA256 = "e06d2dcc27a20426bee350b580a86d2a0f98a21eaa1889ab4918c629009ccc18";
     /** SHA-256 of the ground-decoded spectra: the same before and after. */
     static final String SPECTRA_SHA256 = "9c58b6d40c4d6bfb7470c41d3ead1dbaf691061c63b4b372a7f3cc98a0b64db8";
+
+    /**
+     * The fine cup (instruments/fine-cup.yaml) on the same run: quiet-perihelion, seed 1, 60 s, its own
+     * default table and sweep parameters. Obtained in a separate JVM with the command line,
+     * {@code sweepline-bench.jar run --instrument fine-cup --scenario quiet-perihelion --seed 1 --minutes 1
+     * --no-ground}: the decision hash it prints and {@code sha256sum telemetry.tm}; this test repeats the run
+     * in the test JVM (the same figures from the demo cup's run by the same command confirm the two paths agree).
+     */
+    static final String FINE_CUP_DECISION_HASH = "d312858eb5ee4458";
+    /** SHA-256 of the fine cup's telemetry frames (see {@link #FINE_CUP_DECISION_HASH}). */
+    static final String FINE_CUP_TELEMETRY_SHA256 = "a6a0d8d1c6ded7b727aa51d91fd1eee170186cbdf62fee10059c40061d8c27a4";
+
+    @Test
+    void shouldRepeatThePinnedFineCupRunByteForByte() throws NoSuchAlgorithmException {
+        BenchConfig config = BenchConfig.defaults(ScenarioLoader.builtIn("quiet-perihelion"), 1, 60,
+                TestInstruments.FINE_CUP);
+        ByteArrayOutputStream frames = new ByteArrayOutputStream();
+        ClosedLoopBench.Result r = ClosedLoopBench.run(config, ClosedLoopBench.Progress.NONE,
+                (f, off, len) -> frames.write(f, off, len));
+        assertEquals(FINE_CUP_DECISION_HASH, r.summary().decisionHash());
+        assertEquals(FINE_CUP_TELEMETRY_SHA256, sha256(frames.toByteArray()));
+    }
 
     @Test
     void shouldRepeatThePinnedRunByteForByte() throws IOException, NoSuchAlgorithmException {

@@ -1,5 +1,8 @@
 package dev.sweepline.sim.bench;
 
+import dev.sweepline.fsw.exec.FlightConfig;
+import dev.sweepline.sim.instrument.TestInstruments;
+import dev.sweepline.ground.instrument.InstrumentSet;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
@@ -14,7 +17,7 @@ import org.junit.jupiter.api.Test;
 class GroundCheckTest {
     @Test
     void shouldRecoverMomentsAtTheCramerRaoBoundOnCalmPlasma() {
-        GroundCheck ground = new GroundCheck();
+        GroundCheck ground = new GroundCheck(FlightConfig.of(TestInstruments.DEMO_CUP.flight()), InstrumentSet.builtIns());
         ClosedLoopBench.Result r = ClosedLoopBench.run(BenchConfig.defaults(ScenarioLoader.builtIn("calm-perihelion"),
                 3, 60), ClosedLoopBench.Progress.NONE, ClosedLoopBench.Hooks.NONE.withFrames(ground.frames()));
         GroundCheck.GroundFigures g = ground.compare(r.recorder().sweeps(), r.recorder()::truthAt);

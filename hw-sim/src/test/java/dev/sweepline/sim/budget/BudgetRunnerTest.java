@@ -1,5 +1,6 @@
 package dev.sweepline.sim.budget;
 
+import dev.sweepline.sim.instrument.TestInstruments;
 import dev.sweepline.sim.instrument.InstrumentModel;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
@@ -142,7 +143,7 @@ class BudgetRunnerTest {
         // the same command into a run watched from outside: the scheduler is in SAFE and the interlock off
         // (commands.md §2.3), which the direct scheduler call the budget used to make left enabled
         FlightSoftware[] flown = new FlightSoftware[1];
-        ScriptRunner script = new ScriptRunner(PhaseCommands.of(Phase.Mode.SAFE, FlightConfig.of(InstrumentModel.demo().flight())), true, null);
+        ScriptRunner script = new ScriptRunner(PhaseCommands.of(Phase.Mode.SAFE, FlightConfig.of(TestInstruments.DEMO_CUP.flight())), true, null);
         ClosedLoopBench.run(BenchConfig.defaults(ScenarioLoader.builtIn("quiet-perihelion"), 1, 2),
                 ClosedLoopBench.Progress.NONE, ClosedLoopBench.Hooks.NONE.withCycle(new ClosedLoopBench.CycleHook() {
                     @Override

@@ -1,5 +1,6 @@
 package dev.sweepline.sim.campaign;
 
+import dev.sweepline.ground.instrument.InstrumentSet;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertNotNull;
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -64,7 +65,7 @@ class RecommendedTableTest {
             // the ground learns the uplinked table's windows from the same image file (by its table id)
             WindowCatalogue windows = new WindowCatalogue();
             assertEquals(TableImage.tableId(bytes, bytes.length), windows.add(bytes));
-            GroundCheck ground = new GroundCheck(windows);
+            GroundCheck ground = new GroundCheck(config.flight(), InstrumentSet.builtIns(), windows);
             ClosedLoopBench.Result r = ClosedLoopBench.run(config, ClosedLoopBench.Progress.NONE,
                     ClosedLoopBench.Hooks.NONE.withFrames(ground.frames()).withCycle(restore));
             flown.add(RunRow.of(best.set(), run, r.summary(), ground.compare(r.recorder().sweeps(),

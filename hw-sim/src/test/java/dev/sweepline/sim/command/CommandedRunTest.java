@@ -1,5 +1,6 @@
 package dev.sweepline.sim.command;
 
+import dev.sweepline.sim.instrument.TestInstruments;
 import dev.sweepline.sim.instrument.InstrumentModel;
 import dev.sweepline.fsw.command.CommandCode;
 import dev.sweepline.fsw.command.CommandReason;
@@ -29,7 +30,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 class CommandedRunTest {
     /** The scripted table: 64 windows 100..3000 V, 4 integration periods. */
     private static byte[] expectedImage() {
-        ParameterTable t = ParameterTable.of(WindowTable.logSpaced(64, 100_000, 3_000_000, InstrumentModel.demo().flight().millivoltsPerCode()), InstrumentModel.demo().flight().defaultParameters());
+        ParameterTable t = ParameterTable.of(WindowTable.logSpaced(64, 100_000, 3_000_000, TestInstruments.DEMO_CUP.flight().millivoltsPerCode()), TestInstruments.DEMO_CUP.flight().defaultParameters());
         t.sweep.integrationPeriods = 4;
         byte[] b = new byte[TableImage.MAX_OCTETS];
         return Arrays.copyOf(b, TableImage.encode(t, b));

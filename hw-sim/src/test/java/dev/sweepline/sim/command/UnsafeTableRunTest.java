@@ -1,5 +1,6 @@
 package dev.sweepline.sim.command;
 
+import dev.sweepline.sim.instrument.TestInstruments;
 import dev.sweepline.sim.instrument.InstrumentModel;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -42,7 +43,7 @@ class UnsafeTableRunTest {
         CommandScript parsed = CommandScript.parse(List.of("3.0 TABLE_LOGSPACED 64 100 6400 4"));
         assertEquals(1, parsed.warnings().size(), "the script says the table is above the limit");
         int max = maxLevel("3.0 TABLE_LOGSPACED 64 100 6400 4", sent);
-        assertTrue(max <= InstrumentModel.demo().flight().limits().maxLevelCode, "highest level flown: code " + max);
+        assertTrue(max <= TestInstruments.DEMO_CUP.flight().limits().maxLevelCode, "highest level flown: code " + max);
         ScriptRunner.Sent commit = sent.get(sent.size() - 1);
         assertEquals(CommandCode.TABLE_COMMIT, commit.code());
         assertEquals(CommandReason.TABLE_NOT_VERIFIED, commit.reason());
@@ -55,6 +56,6 @@ class UnsafeTableRunTest {
         assertEquals(CommandCode.TABLE_COMMIT, sent.get(sent.size() - 1).code());
         assertEquals(CommandReason.OK, sent.get(sent.size() - 1).reason());
         // the default table (to 6000 V = code 60000) flies until the commit, then the new one (to 3000 V)
-        assertTrue(max <= InstrumentModel.demo().flight().limits().maxLevelCode, "highest level flown: code " + max);
+        assertTrue(max <= TestInstruments.DEMO_CUP.flight().limits().maxLevelCode, "highest level flown: code " + max);
     }
 }

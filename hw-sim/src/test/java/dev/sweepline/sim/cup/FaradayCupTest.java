@@ -1,5 +1,6 @@
 package dev.sweepline.sim.cup;
 
+import dev.sweepline.sim.instrument.TestInstruments;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
@@ -15,7 +16,7 @@ class FaradayCupTest {
     private static final double U = 400e3;
     private static final double W_P = IonPopulation.thermalSpeed(1e5, IonSpecies.PROTON.massKg());
     private static final double W_A = IonPopulation.thermalSpeed(4e5, IonSpecies.ALPHA.massKg());
-    private final FaradayCup cup = new FaradayCup(CupGeometry.demo());
+    private final FaradayCup cup = new FaradayCup(TestInstruments.DEMO_CUP.cup());
 
     private static PlasmaState protonsAt(double thetaDeg, double phiDeg) {
         double t = Math.toRadians(thetaDeg);
@@ -28,7 +29,7 @@ class FaradayCupTest {
     void shouldHaveTheWorkedCaseAreaInTheDemoCup() {
         // cup design note: the demo's 1 cm^2 is the area of physics.md's worked cases, behind four grids of 0.90
         // (physics.md: ~90 % each, common practice); exact by design
-        CupGeometry demo = CupGeometry.demo();
+        CupGeometry demo = TestInstruments.DEMO_CUP.cup();
         assertEquals(1e-4, demo.effectiveAreaM2(), 1e-18);
         assertEquals(0.6561, demo.gridTransmission(), 1e-15);
     }
@@ -59,7 +60,7 @@ class FaradayCupTest {
     void shouldLoseCurrentBeyondFullAcceptanceAndNoneBeyondCutoff() {
         // physics.md "Finite acceptance: multiply by A(theta)/A(0)": at 35 deg the image is partly off the
         // collector; the closed-form disc overlap gives the ratio (rounding only, 1e-12 relative)
-        CupGeometry g = CupGeometry.demo();
+        CupGeometry g = TestInstruments.DEMO_CUP.cup();
         double theta = Math.toRadians(35);
         double v1 = ConvectedMaxwellian.speedForVoltage(500, IonSpecies.PROTON.massKg(), IonSpecies.PROTON.chargeCoulomb());
         double v2 = ConvectedMaxwellian.speedForVoltage(700, IonSpecies.PROTON.massKg(), IonSpecies.PROTON.chargeCoulomb());

@@ -1,5 +1,6 @@
 package dev.sweepline.sim.cup;
 
+import dev.sweepline.sim.instrument.TestInstruments;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
@@ -9,7 +10,7 @@ import org.hipparchus.analysis.integration.IterativeLegendreGaussIntegrator;
 import org.junit.jupiter.api.Test;
 
 class SplitCollectorTest {
-    private static final CupGeometry DEMO = CupGeometry.demo();
+    private static final CupGeometry DEMO = TestInstruments.DEMO_CUP.cup();
     private static final double R = DEMO.apertureRadiusM();
     private static final double RC = DEMO.collectorRadiusM();
     private static final double D = DEMO.apertureToCollectorM();

@@ -1,5 +1,6 @@
 package dev.sweepline.sim.design;
 
+import dev.sweepline.sim.instrument.TestInstruments;
 import dev.sweepline.sim.instrument.InstrumentModel;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertNotNull;
@@ -24,13 +25,13 @@ class DOptimalDesignTest {
             IonPopulation.thermalSpeed(1e5, IonSpecies.PROTON.massKg()))), 0, 0, 1);
     private static final double STEP_SECONDS = 0.008;
 
-    private final FaradayCup cup = new FaradayCup(CupGeometry.demo());
-    private final WindowVolts windows = new WindowVolts(InstrumentModel.demo().flight().defaultTable(), HvCalibration.nominal());
-    private final ProtonInformation info = new ProtonInformation(CupGeometry.demo());
+    private final FaradayCup cup = new FaradayCup(TestInstruments.DEMO_CUP.cup());
+    private final WindowVolts windows = new WindowVolts(TestInstruments.DEMO_CUP.flight().defaultTable(), HvCalibration.nominal(TestInstruments.DEMO_CUP.flight()));
+    private final ProtonInformation info = new ProtonInformation(TestInstruments.DEMO_CUP.cup(), TestInstruments.DEMO_CUP.preamp());
 
     @Test
     void shouldBeatEveryOtherAllocationOfTheSameTime() {
-        double[][] optimal = new DOptimalDesign(cup, windows).optimalInformation(REFERENCE, 1.0, STEP_SECONDS);
+        double[][] optimal = new DOptimalDesign(cup, TestInstruments.DEMO_CUP.preamp(), windows).optimalInformation(REFERENCE, 1.0, STEP_SECONDS);
         assertNotNull(optimal);
         // Kiefer-Wolfowitz (1960): the D-optimal design maximises det F over all designs of the same
         // total time; 2000 random allocations (seeded) must not exceed it (1e-6: the algorithm's tolerance)
@@ -55,7 +56,7 @@ class DOptimalDesignTest {
 
     @Test
     void shouldRateAFullSurveyWellBelowTheOptimum() {
-        double[][] optimal = new DOptimalDesign(cup, windows).optimalInformation(REFERENCE, 1.0, STEP_SECONDS);
+        double[][] optimal = new DOptimalDesign(cup, TestInstruments.DEMO_CUP.preamp(), windows).optimalInformation(REFERENCE, 1.0, STEP_SECONDS);
         double[] uniform = new double[windows.count()];
         java.util.Arrays.fill(uniform, 1.0);
         double e = DOptimalDesign.efficiency(allocate(uniform, windows.count(), 1.0), optimal);
@@ -66,7 +67,7 @@ class DOptimalDesignTest {
 
     @Test
     void shouldScaleInformationWithTime() {
-        DOptimalDesign d = new DOptimalDesign(cup, windows);
+        DOptimalDesign d = new DOptimalDesign(cup, TestInstruments.DEMO_CUP.preamp(), windows);
         double[][] one = d.optimalInformation(REFERENCE, 1.0, STEP_SECONDS);
         double[][] two = d.optimalInformation(REFERENCE, 2.0, STEP_SECONDS);
         // Fisher information adds over independent measurements: twice the time, twice F, det x8
@@ -103,7 +104,7 @@ class DOptimalDesignTest {
             double maxQ = Math.max(Math.max(quadrants[0], quadrants[1]), Math.max(quadrants[2], quadrants[3]));
             info.gradient(REFERENCE, p, windows.lowVolts(w), windows.highVolts(w), g);
             double steps = seconds * share[w] / sum / STEP_SECONDS;
-            ProtonInformation.accumulate(f, g, ProtonInformation.variance(total, DOptimalDesign.rangeFor(maxQ), STEP_SECONDS),
+            ProtonInformation.accumulate(f, g, info.variance(total, DOptimalDesign.rangeFor(TestInstruments.DEMO_CUP.preamp(), maxQ), STEP_SECONDS),
                     steps);
         }
         return f;

@@ -1,5 +1,6 @@
 package dev.sweepline.sim.hv;
 
+import dev.sweepline.sim.instrument.TestInstruments;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
@@ -7,8 +8,8 @@ import java.util.SplittableRandom;
 import org.junit.jupiter.api.Test;
 
 class HvSupplyTest {
-    private static final HvSupplyParameters DEMO = HvSupplyParameters.demo();
-    private static final HvCalibration CAL = HvCalibration.demo();
+    private static final HvSupplyParameters DEMO = TestInstruments.DEMO_CUP.hv();
+    private static final HvCalibration CAL = TestInstruments.DEMO_CUP.calibration();
     /** Recorded seed of the monitor-noise test. */
     private static final long SEED = 20261201L;
     private static final long T0 = 1_000_000L;

@@ -25,7 +25,7 @@ class SimulatedInstrumentTest {
     /** Recorded seeds. */
     private static final long SEED = 42L;
     private static final long OTHER_SEED = 43L;
-    private static final InstrumentModel MODEL = InstrumentModel.demo();
+    private static final InstrumentModel MODEL = TestInstruments.DEMO_CUP;
     private static final HvCalibration CAL = MODEL.calibration();
     /** physics.md P1 protons (5 cm^-3, 400 km/s, 1e5 K) with A1 alphas, flowing 4 deg off the normal. */
     private static final PlasmaState PLASMA = PlasmaState.alongNormal(List.of(
@@ -89,7 +89,7 @@ class SimulatedInstrumentTest {
         c.hvEnabled = false;
         SampleReply reply = new SampleReply();
         StepTruth truth = new StepTruth();
-        double sigmaCounts = new Preamplifier().noiseAmpsRms(0, 0, 10e-3) / Preamplifier.lsbAmps(0);
+        double sigmaCounts = TestInstruments.DEMO_CUP.preamp().noiseAmpsRms(0, 0, 10e-3) / TestInstruments.DEMO_CUP.preamp().lsbAmps(0);
         for (int i = 0; i < 200; i++) {
             instrument.execute(c, i * 20_000L, PLASMA, reply, truth);
             assertEquals(SampleReply.STATUS_HV_OFF, reply.status);
@@ -173,7 +173,7 @@ class SimulatedInstrumentTest {
         // recover each quadrant current within 5 sigma of the preamp noise plus one LSB
         SimulatedInstrument instrument = new SimulatedInstrument(MODEL, SEED);
         FaradayCup cup = new FaradayCup(MODEL.cup());
-        Preamplifier preamp = new Preamplifier();
+        Preamplifier preamp = TestInstruments.DEMO_CUP.preamp();
         SampleReply reply = new SampleReply();
         StepTruth truth = new StepTruth();
         double[] expected = new double[4];
@@ -184,8 +184,8 @@ class SimulatedInstrumentTest {
             assertArrayEquals(expected, truth.quadrantAmps, 0.0);
             for (int q = 0; q < 4; q++) {
                 double sigma = preamp.noiseAmpsRms(expected[q], 0, 10e-3);
-                assertEquals(expected[q], Preamplifier.amps(reply.quadrant[q], reply.gainRange),
-                        5 * sigma + Preamplifier.lsbAmps(0), "window " + c.window);
+                assertEquals(expected[q], TestInstruments.DEMO_CUP.preamp().amps(reply.quadrant[q], reply.gainRange),
+                        5 * sigma + TestInstruments.DEMO_CUP.preamp().lsbAmps(0), "window " + c.window);
             }
         }
     }

@@ -1,5 +1,6 @@
 package dev.sweepline.sim.interop;
 
+import dev.sweepline.sim.instrument.TestInstruments;
 import dev.sweepline.fsw.exec.FlightConfig;
 import dev.sweepline.fsw.exec.FlightSoftware;
 import dev.sweepline.fsw.sweep.Spectrum;
@@ -30,7 +31,7 @@ public final class FlightLoop {
      * @param frames receives every frame, ASM first
      */
     public FlightLoop(Scenario scenario, long seed, double seconds, FlightConfig flight, FrameSink frames) {
-        this.config = new BenchConfig(scenario, seed, seconds, flight, InstrumentModel.demo(), Double.NaN);
+        this.config = new BenchConfig(scenario, seed, seconds, flight, TestInstruments.DEMO_CUP, Double.NaN);
         this.frames = frames;
     }
 

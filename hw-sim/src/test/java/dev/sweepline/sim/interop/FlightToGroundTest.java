@@ -1,5 +1,6 @@
 package dev.sweepline.sim.interop;
 
+import dev.sweepline.sim.instrument.TestInstruments;
 import dev.sweepline.sim.instrument.InstrumentModel;
 import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
@@ -42,7 +43,7 @@ class FlightToGroundTest {
     @ParameterizedTest(name = "compress={0}")
     @ValueSource(booleans = {true, false})
     void shouldDecodeWhatTheFlightSoftwareMeasured(boolean compress) {
-        FlightConfig config = FlightConfig.of(InstrumentModel.demo().flight());
+        FlightConfig config = FlightConfig.of(TestInstruments.DEMO_CUP.flight());
         config.compressSpectra = compress;
         ByteArrayOutputStream wire = new ByteArrayOutputStream();
         FlightLoop loop = new FlightLoop(ScenarioLoader.builtIn("shock-sheath"), SEED, SECONDS, config,
@@ -96,7 +97,7 @@ class FlightToGroundTest {
         assertEquals(f.firstWindow(), g.firstWindow(), what);
         assertEquals(f.count(), g.windowCount(), what);
         assertEquals(f.peakValid() ? Math.min(f.peakQ8(), 0xFFFE) : DecodedSpectrum.NO_PEAK, g.peakQ8(), what);
-        assertEquals(InstrumentModel.demo().flight().defaultParameters().integrationPeriods, g.integrationPeriods(), what);
+        assertEquals(TestInstruments.DEMO_CUP.flight().defaultParameters().integrationPeriods, g.integrationPeriods(), what);
         assertEquals(compress ? 0x01 : 0x00, g.compression(), what);
         assertArrayEquals(f.gainRange(), g.gainRange(), what);
         assertArrayEquals(f.saturated(), g.saturated(), what);

@@ -1,5 +1,6 @@
 package dev.sweepline.sim.interop;
 
+import dev.sweepline.sim.instrument.TestInstruments;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
@@ -41,7 +42,7 @@ class WideSpectrumRoundTripTest {
                 .modulator(16, 100, 50_000, 6_000_000, 1000)
                 .settleLimits(750, 256)
                 .windows(256, 50_000, 6_000_000)
-                .defaultParameters(InstrumentModel.demo().flight().defaultParameters())
+                .defaultParameters(TestInstruments.DEMO_CUP.flight().defaultParameters())
                 .build();
     }
 

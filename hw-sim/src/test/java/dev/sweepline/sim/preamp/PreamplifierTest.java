@@ -1,5 +1,6 @@
 package dev.sweepline.sim.preamp;
 
+import dev.sweepline.sim.instrument.TestInstruments;
 import dev.sweepline.fsw.instrument.InstrumentDescription;
 import dev.sweepline.fsw.host.instrument.Instruments;
 import static org.junit.jupiter.api.Assertions.assertEquals;
@@ -16,7 +17,7 @@ class PreamplifierTest {
     /** Recorded seed of the noise tests. */
     private static final long SEED = 0xA11CE5EEDL;
     private static final double T_INT = 1e-3;
-    private final Preamplifier preamp = new Preamplifier();
+    private final Preamplifier preamp = TestInstruments.DEMO_CUP.preamp();
 
     @Test
     void shouldHaveTheThreeRangesOfTheDemoInstrument() {
@@ -25,29 +26,29 @@ class PreamplifierTest {
         double[] fullScale = {40e-12, 1.28e-9, 40.96e-9};
         double[] ohms = {1e11, 3.125e9, 9.765625e7};
         for (int r = 0; r < DEMO.gainRanges(); r++) {
-            assertEquals(fullScale[r], Preamplifier.fullScaleAmps(r), 1e-12 * fullScale[r]);
-            assertEquals(ohms[r], Preamplifier.feedbackOhms(r), 1e-12 * ohms[r]);
-            assertEquals(fullScale[r] / (65535 - 256), Preamplifier.lsbAmps(r), 1e-12 * fullScale[r] / 65279);
+            assertEquals(fullScale[r], TestInstruments.DEMO_CUP.preamp().fullScaleAmps(r), 1e-12 * fullScale[r]);
+            assertEquals(ohms[r], TestInstruments.DEMO_CUP.preamp().feedbackOhms(r), 1e-12 * ohms[r]);
+            assertEquals(fullScale[r] / (65535 - 256), TestInstruments.DEMO_CUP.preamp().lsbAmps(r), 1e-12 * fullScale[r] / 65279);
         }
-        assertThrows(IllegalArgumentException.class, () -> Preamplifier.fullScaleAmps(3));
+        assertThrows(IllegalArgumentException.class, () -> TestInstruments.DEMO_CUP.preamp().fullScaleAmps(3));
     }
 
     @Test
     void shouldQuantiseAboveThePedestalAndFlagFullScale() {
         // hardware ICD / instruments/demo-cup.yaml adc: pedestal 256, 16-bit unsigned; full scale lands on 65535 exactly
-        assertEquals(256, Preamplifier.countsFor(0, 0));
-        assertEquals(0.0, Preamplifier.amps(256, 2), 0.0);
-        assertEquals(65535, Preamplifier.countsFor(Preamplifier.fullScaleAmps(1), 1));
-        assertTrue(Preamplifier.isSaturated(Preamplifier.countsFor(Preamplifier.fullScaleAmps(1), 1)));
-        assertFalse(Preamplifier.isSaturated(Preamplifier.countsFor(0.99 * Preamplifier.fullScaleAmps(1), 1)));
-        assertEquals(65535, Preamplifier.countsFor(1e-6, 0)); // clipped above
-        assertEquals(0, Preamplifier.countsFor(-1e-6, 0)); // clipped below
-        assertEquals(256 + 100, Preamplifier.countsFor(100.4 * Preamplifier.lsbAmps(0), 0)); // rounding
-        assertEquals(256 + 101, Preamplifier.countsFor(100.6 * Preamplifier.lsbAmps(0), 0));
+        assertEquals(256, TestInstruments.DEMO_CUP.preamp().countsFor(0, 0));
+        assertEquals(0.0, TestInstruments.DEMO_CUP.preamp().amps(256, 2), 0.0);
+        assertEquals(65535, TestInstruments.DEMO_CUP.preamp().countsFor(TestInstruments.DEMO_CUP.preamp().fullScaleAmps(1), 1));
+        assertTrue(TestInstruments.DEMO_CUP.preamp().isSaturated(TestInstruments.DEMO_CUP.preamp().countsFor(TestInstruments.DEMO_CUP.preamp().fullScaleAmps(1), 1)));
+        assertFalse(TestInstruments.DEMO_CUP.preamp().isSaturated(TestInstruments.DEMO_CUP.preamp().countsFor(0.99 * TestInstruments.DEMO_CUP.preamp().fullScaleAmps(1), 1)));
+        assertEquals(65535, TestInstruments.DEMO_CUP.preamp().countsFor(1e-6, 0)); // clipped above
+        assertEquals(0, TestInstruments.DEMO_CUP.preamp().countsFor(-1e-6, 0)); // clipped below
+        assertEquals(256 + 100, TestInstruments.DEMO_CUP.preamp().countsFor(100.4 * TestInstruments.DEMO_CUP.preamp().lsbAmps(0), 0)); // rounding
+        assertEquals(256 + 101, TestInstruments.DEMO_CUP.preamp().countsFor(100.6 * TestInstruments.DEMO_CUP.preamp().lsbAmps(0), 0));
         // noisy samples 5 % above full scale saturate (noise at 40 pA, 1 ms: ~130 LSB = 0.2 % of full scale)
         SplittableRandom rng = new SplittableRandom(SEED);
         for (int i = 0; i < 1000; i++) {
-            assertTrue(Preamplifier.isSaturated(preamp.sample(1.05 * Preamplifier.fullScaleAmps(0), 0, T_INT, rng)));
+            assertTrue(TestInstruments.DEMO_CUP.preamp().isSaturated(preamp.sample(1.05 * TestInstruments.DEMO_CUP.preamp().fullScaleAmps(0), 0, T_INT, rng)));
         }
     }
 
@@ -62,18 +63,18 @@ class PreamplifierTest {
         for (double[] c : cases) {
             double amps = c[0];
             int range = (int) c[1];
-            double lsb = Preamplifier.lsbAmps(range);
+            double lsb = TestInstruments.DEMO_CUP.preamp().lsbAmps(range);
             double sum = 0;
             double sumSq = 0;
             for (int i = 0; i < n; i++) {
-                double a = Preamplifier.amps(preamp.sample(amps, range, T_INT, rng), range);
+                double a = TestInstruments.DEMO_CUP.preamp().amps(preamp.sample(amps, range, T_INT, rng), range);
                 sum += a;
                 sumSq += a * a;
             }
             double mean = sum / n;
             double variance = (sumSq - n * mean * mean) / (n - 1);
             double b = 1 / (2 * T_INT);
-            double expected = 2 * 1.602176634e-19 * amps * b + 4 * 1.380649e-23 * 300 * b / Preamplifier.feedbackOhms(range)
+            double expected = 2 * 1.602176634e-19 * amps * b + 4 * 1.380649e-23 * 300 * b / TestInstruments.DEMO_CUP.preamp().feedbackOhms(range)
                     + lsb * lsb / 12;
             assertEquals(expected, variance, 0.035 * expected, "I " + amps + " range " + range);
             assertEquals(amps, mean, 5 * Math.sqrt(expected / n), "I " + amps + " range " + range);
@@ -97,9 +98,9 @@ class PreamplifierTest {
         SplittableRandom rng = new SplittableRandom(SEED + 1);
         for (int range = 1; range < 3; range++) {
             int counts = preamp.sample(1e-9, range, T_INT, rng);
-            double sigma = preamp.noiseAmpsRms(1e-9, range, T_INT) + Preamplifier.lsbAmps(range);
-            assertEquals(1e-9, Preamplifier.amps(counts, range), 5 * sigma);
-            assertEquals(32.0, Preamplifier.amps(counts, range) / Preamplifier.amps(counts, range - 1), 1e-12);
+            double sigma = preamp.noiseAmpsRms(1e-9, range, T_INT) + TestInstruments.DEMO_CUP.preamp().lsbAmps(range);
+            assertEquals(1e-9, TestInstruments.DEMO_CUP.preamp().amps(counts, range), 5 * sigma);
+            assertEquals(32.0, TestInstruments.DEMO_CUP.preamp().amps(counts, range) / TestInstruments.DEMO_CUP.preamp().amps(counts, range - 1), 1e-12);
         }
     }
 

@@ -1,5 +1,6 @@
 package dev.sweepline.sim.serve;
 
+import dev.sweepline.sim.instrument.TestInstruments;
 import dev.sweepline.sim.instrument.InstrumentModel;
 import dev.sweepline.fsw.instrument.InstrumentDescription;
 import dev.sweepline.fsw.host.instrument.Instruments;
@@ -21,6 +22,11 @@ class InstrumentServerTest {
     private static final InstrumentDescription DEMO = Instruments.defaultSpec().flight();
     /** Counts executions; the reply carries the execution number in Q1 and the start time in Q2. */
     private static final class CountingExecutor implements StepExecutor {
+        @Override
+        public InstrumentDescription instrument() {
+            return DEMO;
+        }
+
         int executions;
         boolean lastHvEnabled;
         int hvSwitchedOff;
@@ -46,7 +52,7 @@ class InstrumentServerTest {
 
     private final PipeTransport[] ends = PipeTransport.pair(1024);
     private final CountingExecutor executor = new CountingExecutor();
-    private final FramedInstrumentLink link = new FramedInstrumentLink(ends[0], InstrumentModel.demo().flight());
+    private final FramedInstrumentLink link = new FramedInstrumentLink(ends[0], TestInstruments.DEMO_CUP.flight());
     private final SampleReply reply = new SampleReply();
 
     @Test

@@ -1,5 +1,6 @@
 package dev.sweepline.sim.serve;
 
+import dev.sweepline.sim.instrument.TestInstruments;
 import dev.sweepline.sim.instrument.InstrumentModel;
 import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
@@ -30,8 +31,8 @@ class LinkClockEquivalenceTest {
         byte[] reference = HilRig.inProcessTelemetry(config);
 
         PipeTransport[] ends = PipeTransport.pair(4096);
-        InstrumentServer server = new InstrumentServer(new ScenarioInstrument(sc, seed), ends[1], 0);
-        FramedInstrumentLink link = new FramedInstrumentLink(ends[0], InstrumentModel.demo().flight());
+        InstrumentServer server = new InstrumentServer(new ScenarioInstrument(sc, seed, TestInstruments.DEMO_CUP), ends[1], 0);
+        FramedInstrumentLink link = new FramedInstrumentLink(ends[0], TestInstruments.DEMO_CUP.flight());
         ByteArrayOutputStream tm = new ByteArrayOutputStream();
         FlightSoftware fsw = HilRig.flightSoftware(config, link, tm);
         LinkClockLoop loop = new LinkClockLoop(fsw, link, l -> {

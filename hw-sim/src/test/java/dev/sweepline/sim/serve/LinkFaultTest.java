@@ -1,5 +1,7 @@
 package dev.sweepline.sim.serve;
 
+import dev.sweepline.fsw.instrument.InstrumentDescription;
+import dev.sweepline.sim.instrument.TestInstruments;
 import dev.sweepline.sim.instrument.InstrumentModel;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -53,9 +55,9 @@ class LinkFaultTest {
         PipeTransport[] ends = PipeTransport.pair(4096);
         FaultPlan plan = new FaultPlan(BER, DROP, DUP, STALL, STALL_MICROS, 20_261_201L); // recorded fault seed
         FaultyTransport faulty = new FaultyTransport(ends[1], plan, () -> wallMicros);
-        RecordingExecutor instrument = new RecordingExecutor(new ScenarioInstrument(sc, seed));
+        RecordingExecutor instrument = new RecordingExecutor(new ScenarioInstrument(sc, seed, TestInstruments.DEMO_CUP));
         InstrumentServer server = new InstrumentServer(instrument, faulty, 0);
-        FramedInstrumentLink link = new FramedInstrumentLink(ends[0], InstrumentModel.demo().flight());
+        FramedInstrumentLink link = new FramedInstrumentLink(ends[0], TestInstruments.DEMO_CUP.flight());
         CheckingLink checking = new CheckingLink(link, instrument);
         // the link layer alone: the fault-protection monitor of link time-outs (which retries on its own)
         // is switched off, so every safe entry waits for the ground's command below (commands.md §6)
@@ -173,6 +175,11 @@ class LinkFaultTest {
     private static final class RecordingExecutor implements StepExecutor {
         private final StepExecutor inner;
         private final SampleReply[] sent = new SampleReply[65_536];
+
+        @Override
+        public InstrumentDescription instrument() {
+            return inner.instrument();
+        }
 
         RecordingExecutor(StepExecutor inner) {
             this.inner = inner;

@@ -1,5 +1,7 @@
 package dev.sweepline.sim.serve;
 
+import dev.sweepline.fsw.instrument.InstrumentDescription;
+import dev.sweepline.sim.instrument.TestInstruments;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -66,7 +68,7 @@ class RunHvShutdownHilTest {
             Thread.sleep(20);
         }
         hwEnd = SerialTransport.open(cup.toString(), SerialTransport.DEFAULT_BAUD);
-        electronics = new Recording(new ScenarioInstrument(ScenarioLoader.resolve("quiet-perihelion"), 7));
+        electronics = new Recording(new ScenarioInstrument(ScenarioLoader.resolve("quiet-perihelion"), 7, TestInstruments.DEMO_CUP));
     }
 
     @AfterEach
@@ -227,6 +229,11 @@ class RunHvShutdownHilTest {
     private static final class Recording implements StepExecutor {
         private final ScenarioInstrument inner;
         volatile int highestMonitor;
+
+        @Override
+        public InstrumentDescription instrument() {
+            return inner.instrument();
+        }
 
         Recording(ScenarioInstrument inner) {
             this.inner = inner;

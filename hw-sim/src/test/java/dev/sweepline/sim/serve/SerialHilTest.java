@@ -1,5 +1,6 @@
 package dev.sweepline.sim.serve;
 
+import dev.sweepline.sim.instrument.TestInstruments;
 import dev.sweepline.sim.instrument.InstrumentModel;
 import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
@@ -58,12 +59,12 @@ class SerialHilTest {
             Thread serverThread;
             try (SerialTransport hwEnd = SerialTransport.open(b.toString(), 115_200);
                     SerialTransport fswEnd = SerialTransport.open(a.toString(), 115_200)) {
-                server = new InstrumentServer(new ScenarioInstrument(sc, seed), hwEnd, 0);
+                server = new InstrumentServer(new ScenarioInstrument(sc, seed, TestInstruments.DEMO_CUP), hwEnd, 0);
                 serverThread = new Thread(server::run, "instrument-server");
                 serverThread.setDaemon(true);
                 serverThread.start();
 
-                FramedInstrumentLink link = new FramedInstrumentLink(fswEnd, InstrumentModel.demo().flight());
+                FramedInstrumentLink link = new FramedInstrumentLink(fswEnd, TestInstruments.DEMO_CUP.flight());
                 Histogram roundTripNanos = new Histogram(1_000_000_000L, 3);
                 ByteArrayOutputStream tm = new ByteArrayOutputStream();
                 FlightSoftware fsw = HilRig.flightSoftware(config, new TimedLink(link, roundTripNanos), tm);
