@@ -29,6 +29,9 @@ public final class SpectrumFitter {
     /** T_α/T_p at the start of the joint fit: T_α ≈ 4 T_p (physics.md [memory]). */
     public static final double START_ALPHA_TEMPERATURE_RATIO = 4.0;
 
+    /** The test that admits the joint model: the 3 alpha parameters (n_α, U_α, w_α) free, α = 1 %. */
+    private static final AlphaSelection FREE_ALPHAS = new AlphaSelection(3);
+
     private final CupGeometry cup;
 
     /** A fitter for a cup of geometry {@code cup}. */
@@ -143,7 +146,7 @@ public final class SpectrumFitter {
         double alphaRatio = q[3] / q[0];
         double alphaPeakVolts = Species.ALPHA.voltsAtSpeed(q[4]);
         boolean sane = alphaRatio > 0 && alphaRatio < MAX_ALPHA_RATIO && q[4] > 0.7 * q[1] && q[4] < 1.5 * q[1]
-                && alphaPeakVolts < max(in.highVolts()) && o.chiSquare() <= protons.chiSquare();
+                && alphaPeakVolts < max(in.highVolts()) && FREE_ALPHAS.accepts(protons.chiSquare(), o.chiSquare());
         return sane ? o : null;
     }
 
