@@ -26,7 +26,13 @@ public enum FitFlag {
      * A difference ratio reached ±1 or the image left the collector (beyond the cup's full acceptance:
      * 20.25° for the demo cup, ICD §8).
      */
-    ANGLE_OUT_OF_RANGE(false);
+    ANGLE_OUT_OF_RANGE(false),
+    /**
+     * A difference ratio is saturated (±1): the aperture image lies wholly on one collector half, beyond the
+     * split's reach (24.96° for the demo cup: tan θ = R/d). The angle is then the middle of the interval
+     * from the reach to the cut-off with its uniform 1σ ({@link FlowAngleEstimator}): finite but large.
+     */
+    BEYOND_SPLIT_REACH(false);
 
     private final boolean failure;
 

@@ -86,7 +86,15 @@ public final class SpectrumFitter {
                 || Math.hypot(angles.tanX(), angles.tanY()) > cup.fullAcceptanceTan()) {
             flags.add(FitFlag.ANGLE_OUT_OF_RANGE);
         }
+        if (FlowAngleEstimator.beyondReach(angles, cup)) {
+            flags.add(FitFlag.BEYOND_SPLIT_REACH);
+        }
         double area = cup.effectiveAreaM2() * cup.transmission(angles.tanX(), angles.tanY());
+        if (!(area > 0)) {
+            // the estimated image lies off the collector: nothing to scale the current by
+            flags.add(FitFlag.NO_SIGNAL);
+            return PlasmaFit.failed(flags, m, angles, cup.effectiveAreaM2());
+        }
         PlasmaModel protonModel = new PlasmaModel(in.lowVolts(), in.highVolts(), area, false);
         double[] guess = InitialGuess.protons(protonModel, in.totalAmps(), area);
         if (guess == null) {
@@ -94,7 +102,8 @@ public final class SpectrumFitter {
             return PlasmaFit.failed(flags, m, angles, cup.effectiveAreaM2());
         }
         LeastSquaresRun.Outcome best = LeastSquaresRun.fit(protonModel, in.totalAmps(), in.sigmaAmps(), guess);
-        if (best == null || !physical(best.parameters(), in)) {
+        // no covariance means no errors: a product without errors is not a product
+        if (best == null || !physical(best.parameters(), in) || !finiteErrors(best.covariance())) {
             flags.add(FitFlag.NO_CONVERGENCE);
             return PlasmaFit.failed(flags, m, angles, cup.effectiveAreaM2());
         }
@@ -147,7 +156,20 @@ public final class SpectrumFitter {
         double alphaPeakVolts = Species.ALPHA.voltsAtSpeed(q[4]);
         boolean sane = alphaRatio > 0 && alphaRatio < MAX_ALPHA_RATIO && q[4] > 0.7 * q[1] && q[4] < 1.5 * q[1]
                 && alphaPeakVolts < max(in.highVolts()) && FREE_ALPHAS.accepts(protons.chiSquare(), o.chiSquare());
-        return sane ? o : null;
+        return sane && finiteErrors(o.covariance()) ? o : null;
+    }
+
+    /** True when the covariance exists and every diagonal is positive and finite (errors can be reported). */
+    private static boolean finiteErrors(double[][] cov) {
+        if (cov == null) {
+            return false;
+        }
+        for (int a = 0; a < cov.length; a++) {
+            if (!(cov[a][a] > 0) || !Double.isFinite(cov[a][a])) {
+                return false;
+            }
+        }
+        return true;
     }
 
     private static double max(double[] a) {
