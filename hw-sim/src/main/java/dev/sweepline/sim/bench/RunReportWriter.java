@@ -44,17 +44,12 @@ public final class RunReportWriter {
         m.put("alphaLocks", s.alphaLocks());
         m.put("reacquireSweepsMax", s.reacquireSweepsMax());
         m.put("reacquireSecondsMax", finite(s.reacquireSecondsMax()));
-        List<Map<String, Object>> jumps = new ArrayList<>();
-        for (Reacquisition r : s.reacquisitions()) {
-            Map<String, Object> j = new LinkedHashMap<>();
-            j.put("label", r.label());
-            j.put("frontSeconds", r.frontMicros() / 1e6);
-            j.put("reacquired", r.reacquired());
-            j.put("sweeps", r.sweeps());
-            j.put("seconds", finite(r.seconds()));
-            jumps.add(j);
-        }
-        m.put("jumps", jumps);
+        m.put("jumps", jumpList(s.reacquisitions()));
+        m.put("tracking", trackingMap(s.tracking()));
+        m.put("strictReacquireSweepsMax", s.strictReacquireSweepsMax());
+        m.put("strictReacquireSecondsMax", finite(s.strictReacquireSecondsMax()));
+        m.put("strictCentreWindows", Reacquisition.STRICT_CENTRE_WINDOWS);
+        m.put("strictJumps", jumpList(s.strictReacquisitions()));
         m.put("integratingFraction", round(s.integratingFraction(), 4));
         m.put("informationEfficiency", finite(round(s.informationEfficiency(), 4)));
         m.put("saturatedSamples", s.saturatedSamples());
@@ -74,6 +69,38 @@ public final class RunReportWriter {
         m.put("allocationMargin", finite(round(t.margin(), 4)));
         m.put("frames", t.frames());
         m.put("decisionHash", s.decisionHash());
+        return m;
+    }
+
+    private static List<Map<String, Object>> jumpList(List<Reacquisition> reacquisitions) {
+        List<Map<String, Object>> jumps = new ArrayList<>();
+        for (Reacquisition r : reacquisitions) {
+            Map<String, Object> j = new LinkedHashMap<>();
+            j.put("label", r.label());
+            j.put("frontSeconds", r.frontMicros() / 1e6);
+            j.put("reacquired", r.reacquired());
+            j.put("sweeps", r.sweeps());
+            j.put("seconds", finite(r.seconds()));
+            jumps.add(j);
+        }
+        return jumps;
+    }
+
+    /** Tracking error in windows: band centre (focus sweeps) and found peak (all sweeps), median/p95/max. */
+    private static Map<String, Object> trackingMap(TrackingError t) {
+        Map<String, Object> centre = new LinkedHashMap<>();
+        centre.put("sweeps", t.centreSweeps());
+        centre.put("median", finite(round(t.centreMedian(), 3)));
+        centre.put("p95", finite(round(t.centreP95(), 3)));
+        centre.put("max", finite(round(t.centreMax(), 3)));
+        Map<String, Object> peak = new LinkedHashMap<>();
+        peak.put("sweeps", t.peakSweeps());
+        peak.put("median", finite(round(t.peakMedian(), 3)));
+        peak.put("p95", finite(round(t.peakP95(), 3)));
+        peak.put("max", finite(round(t.peakMax(), 3)));
+        Map<String, Object> m = new LinkedHashMap<>();
+        m.put("bandCentreWindows", centre);
+        m.put("foundPeakWindows", peak);
         return m;
     }
 
@@ -169,6 +196,15 @@ public final class RunReportWriter {
         row(out, "alpha locks", Integer.toString(s.alphaLocks()));
         row(out, "reacquire (max)", s.reacquisitions().isEmpty() ? "no jumps in scenario"
                 : String.format(Locale.ROOT, "%d sweeps, %.3f s", s.reacquireSweepsMax(), s.reacquireSecondsMax()));
+        TrackingError te = s.tracking();
+        row(out, "centre error", String.format(Locale.ROOT, "median %.2f, p95 %.2f, max %.2f windows",
+                te.centreMedian(), te.centreP95(), te.centreMax()));
+        row(out, "peak error", String.format(Locale.ROOT, "median %.2f, p95 %.2f, max %.2f windows",
+                te.peakMedian(), te.peakP95(), te.peakMax()));
+        if (!s.strictReacquisitions().isEmpty()) {
+            row(out, "centred again (max)", String.format(Locale.ROOT, "%d sweeps, %.3f s (within %.0f windows)",
+                    s.strictReacquireSweepsMax(), s.strictReacquireSecondsMax(), Reacquisition.STRICT_CENTRE_WINDOWS));
+        }
         row(out, "integrating", String.format(Locale.ROOT, "%.1f %% of the time", 100 * s.integratingFraction()));
         row(out, "saturated samples", Long.toString(s.saturatedSamples()));
         row(out, "D-efficiency", String.format(Locale.ROOT, "%.3f of the D-optimal design", s.informationEfficiency()));

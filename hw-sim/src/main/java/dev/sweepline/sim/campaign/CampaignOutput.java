@@ -135,6 +135,13 @@ public final class CampaignOutput {
         }
         m.put("momentErrorMedian", err);
         m.put("crlbRatio", crlb);
+        Map<String, Object> centre = new LinkedHashMap<>();
+        centre.put("medianMean", finite(s.centreErrorMedian()));
+        centre.put("p95Mean", finite(s.centreErrorP95()));
+        centre.put("max", finite(s.centreErrorMax()));
+        m.put("centreErrorWindows", centre);
+        m.put("strictReacquireSweepsMax", s.strictReacquireSweepsMax());
+        m.put("strictReacquireSecondsMax", finite(s.strictReacquireSecondsMax()));
         m.put("accuracy", finite(s.accuracy()));
         m.put("paretoFront", onFront);
         return m;
@@ -146,17 +153,19 @@ public final class CampaignOutput {
             w.write("set," + String.join(",", spec.axisKeys()) + ",runs,lockFractionMean,lockFractionMin,alphaLocks,"
                     + "reacquireSweepsMax,reacquireSecondsMax,spectraPerSecond,bitsPerSecondMean,bitsPerSecondMax,"
                     + "integratingFraction,informationEfficiency,errorN,errorU,errorT,crlbRatioN,crlbRatioU,crlbRatioT,"
+                    + "centreErrorMedian,centreErrorP95,centreErrorMax,strictReacquireSweepsMax,strictReacquireSecondsMax,"
                     + "paretoFront\n");
             for (SetResult s : sets) {
                 StringBuilder b = new StringBuilder().append(s.set());
                 for (double v : s.values()) {
                     b.append(',').append(v);
                 }
-                b.append(String.format(Locale.ROOT, ",%d,%s,%s,%d,%d,%s,%s,%s,%s,%s,%s,%s,%s,%s,%s,%s,%s,%b%n", s.runs(),
+                b.append(String.format(Locale.ROOT, ",%d,%s,%s,%d,%d,%s,%s,%s,%s,%s,%s,%s,%s,%s,%s,%s,%s,%s,%s,%s,%d,%s,%b%n", s.runs(),
                         s.lockFractionMean(), s.lockFractionMin(), s.alphaLocks(), s.reacquireSweepsMax(),
                         s.reacquireSecondsMax(), s.spectraPerSecond(), s.bitsPerSecondMean(), s.bitsPerSecondMax(),
                         s.integratingFraction(), s.informationEfficiency(), s.momentError()[0], s.momentError()[1],
-                        s.momentError()[2], s.crlbRatio()[0], s.crlbRatio()[1], s.crlbRatio()[2], front.contains(s)));
+                        s.momentError()[2], s.crlbRatio()[0], s.crlbRatio()[1], s.crlbRatio()[2], s.centreErrorMedian(), s.centreErrorP95(),
+                        s.centreErrorMax(), s.strictReacquireSweepsMax(), s.strictReacquireSecondsMax(), front.contains(s)));
                 w.write(b.toString());
             }
         }
