@@ -117,14 +117,17 @@ public final class RunReportWriter {
         JSON.writeValue(dir.resolve("summary.json").toFile(), summary);
         try (Writer w = Files.newBufferedWriter(dir.resolve("decisions.csv"))) {
             w.write("sweep,mode,startSeconds,endSeconds,firstWindow,lastWindow,peakWindow,bandCentre,"
-                    + "trueProtonWindow,trueAlphaWindow,locked,alphaLock,saturatedSamples\n");
+                    + "trueProtonWindow,trueAlphaWindow,locked,alphaLock,saturatedSamples,"
+                    + "truthChangeN,truthChangeU,truthChangeT\n");
             for (SweepRecord r : result.recorder().sweeps()) {
-                w.write(String.format(Locale.ROOT, "%d,%s,%.6f,%.6f,%d,%d,%.3f,%s,%d,%d,%b,%b,%d%n", r.sweep(),
+                double[] change = TruthChange.of(r, result.recorder()::truthAt);
+                w.write(String.format(Locale.ROOT, "%d,%s,%.6f,%.6f,%d,%d,%.3f,%s,%d,%d,%b,%b,%d,%s,%s,%s%n", r.sweep(),
                         r.mode().name().toLowerCase(Locale.ROOT), r.startMicros() / 1e6, r.endMicros() / 1e6,
                         r.firstWindow(), r.lastWindow(), r.peakWindow(),
                         Double.isNaN(r.bandCentre()) ? "" : String.format(Locale.ROOT, "%.3f", r.bandCentre()),
                         r.trueProtonWindow(),
-                        r.trueAlphaWindow(), r.locked(), r.alphaLock(), r.saturatedSamples()));
+                        r.trueAlphaWindow(), r.locked(), r.alphaLock(), r.saturatedSamples(), cell(change[0]),
+                        cell(change[1]), cell(change[2])));
             }
         }
     }
@@ -143,8 +146,28 @@ public final class RunReportWriter {
         Map<String, Object> m = new LinkedHashMap<>();
         m.put("groundSpectra", g.spectra());
         m.put("groundFits", g.fitted());
+        m.put("groundTruthAt", "mid-sweep");
         m.put("momentErrors", errors);
         m.put("crlbRatio", ratio);
+        m.put("crlbRatioRobust", perMoment(g.robustCrlbRatio(), 3));
+        m.put("nonStationaryFits", g.nonStationary());
+        m.put("nonStationaryQuantile", NonStationarity.QUANTILE);
+        MomentErrors st = g.stationary();
+        Map<String, Object> without = new LinkedHashMap<>();
+        without.put("compared", st.compared());
+        without.put("momentErrorMedian", perMoment(st.medianRelative(), 6));
+        without.put("momentErrorP95", perMoment(st.p95Relative(), 6));
+        without.put("crlbRatio", perMoment(st.crlbRatio(), 3));
+        without.put("crlbRatioRobust", perMoment(st.robustCrlbRatio(), 3));
+        m.put("withoutNonStationary", without);
+        return m;
+    }
+
+    private static Map<String, Object> perMoment(double[] v, int digits) {
+        Map<String, Object> m = new LinkedHashMap<>();
+        for (int k = 0; k < 3; k++) {
+            m.put(GroundCheck.GroundFigures.MOMENTS[k], finite(round(v[k], digits)));
+        }
         return m;
     }
 
@@ -176,6 +199,14 @@ public final class RunReportWriter {
                     "median %.4f %%, p95 %.4f %%, %.2f x the Cramer-Rao bound", 100 * g.medianRelative()[k],
                     100 * g.p95Relative()[k], g.crlbRatio()[k]));
         }
+        MomentErrors st = g.stationary();
+        for (int k = 0; k < 3; k++) {
+            row(out, "CRLB ratio " + GroundCheck.GroundFigures.MOMENTS[k], String.format(Locale.ROOT,
+                    "rms %.2f, robust %.2f; without non-stationary: rms %.2f, robust %.2f",
+                    g.crlbRatio()[k], g.robustCrlbRatio()[k], st.crlbRatio()[k], st.robustCrlbRatio()[k]));
+        }
+        row(out, "non-stationary", String.format(Locale.ROOT, "%d of %d fits (reduced chi-square above the %.3f "
+                + "quantile); truth taken at mid-sweep", g.nonStationary(), g.compared(), NonStationarity.QUANTILE));
     }
 
     /** Prints the summary as a two-column table. */
@@ -226,6 +257,11 @@ public final class RunReportWriter {
         Map<String, Integer> m = new LinkedHashMap<>();
         byMode.forEach((mode, v) -> m.put(mode.name().toLowerCase(Locale.ROOT), v));
         return m;
+    }
+
+    /** A relative change as a CSV cell: six significant digits, empty when undefined. */
+    private static String cell(double v) {
+        return Double.isFinite(v) ? String.format(Locale.ROOT, "%.6g", v) : "";
     }
 
     private static Object finite(double v) {

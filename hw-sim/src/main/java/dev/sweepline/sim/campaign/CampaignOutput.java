@@ -135,6 +135,11 @@ public final class CampaignOutput {
         }
         m.put("momentErrorMedian", err);
         m.put("crlbRatio", crlb);
+        Map<String, Object> robust = new LinkedHashMap<>();
+        for (int k = 0; k < 3; k++) {
+            robust.put(MOMENTS[k], finite(s.crlbRobust()[k]));
+        }
+        m.put("crlbRatioRobust", robust);
         Map<String, Object> centre = new LinkedHashMap<>();
         centre.put("medianMean", finite(s.centreErrorMedian()));
         centre.put("p95Mean", finite(s.centreErrorP95()));
@@ -154,18 +159,19 @@ public final class CampaignOutput {
                     + "reacquireSweepsMax,reacquireSecondsMax,spectraPerSecond,bitsPerSecondMean,bitsPerSecondMax,"
                     + "integratingFraction,informationEfficiency,errorN,errorU,errorT,crlbRatioN,crlbRatioU,crlbRatioT,"
                     + "centreErrorMedian,centreErrorP95,centreErrorMax,strictReacquireSweepsMax,strictReacquireSecondsMax,"
-                    + "paretoFront\n");
+                    + "crlbRobustN,crlbRobustU,crlbRobustT,paretoFront\n");
             for (SetResult s : sets) {
                 StringBuilder b = new StringBuilder().append(s.set());
                 for (double v : s.values()) {
                     b.append(',').append(v);
                 }
-                b.append(String.format(Locale.ROOT, ",%d,%s,%s,%d,%d,%s,%s,%s,%s,%s,%s,%s,%s,%s,%s,%s,%s,%s,%s,%s,%d,%s,%b%n", s.runs(),
+                b.append(String.format(Locale.ROOT, ",%d,%s,%s,%d,%d,%s,%s,%s,%s,%s,%s,%s,%s,%s,%s,%s,%s,%s,%s,%s,%d,%s,%s,%s,%s,%b%n", s.runs(),
                         s.lockFractionMean(), s.lockFractionMin(), s.alphaLocks(), s.reacquireSweepsMax(),
                         s.reacquireSecondsMax(), s.spectraPerSecond(), s.bitsPerSecondMean(), s.bitsPerSecondMax(),
                         s.integratingFraction(), s.informationEfficiency(), s.momentError()[0], s.momentError()[1],
                         s.momentError()[2], s.crlbRatio()[0], s.crlbRatio()[1], s.crlbRatio()[2], s.centreErrorMedian(), s.centreErrorP95(),
-                        s.centreErrorMax(), s.strictReacquireSweepsMax(), s.strictReacquireSecondsMax(), front.contains(s)));
+                        s.centreErrorMax(), s.strictReacquireSweepsMax(), s.strictReacquireSecondsMax(), s.crlbRobust()[0], s.crlbRobust()[1],
+                        s.crlbRobust()[2], front.contains(s)));
                 w.write(b.toString());
             }
         }

@@ -26,12 +26,14 @@ import java.util.List;
  * @param centreErrorMax      worst run's largest band-centre error, windows
  * @param strictReacquireSweepsMax worst strict reacquisition, sweeps (-1 if a jump was never centred again)
  * @param strictReacquireSecondsMax worst strict reacquisition, seconds
+ * @param crlbRobust          mean over runs of the robust CRLB ratios (1.4826 x median |z|) of n, U, T
  */
 public record SetResult(int set, double[] values, int runs, double lockFractionMean, double lockFractionMin,
         int alphaLocks, int reacquireSweepsMax, double reacquireSecondsMax, double spectraPerSecond,
         double bitsPerSecondMean, double bitsPerSecondMax, double integratingFraction, double informationEfficiency,
         double[] momentError, double[] crlbRatio, double centreErrorMedian, double centreErrorP95,
-        double centreErrorMax, int strictReacquireSweepsMax, double strictReacquireSecondsMax) {
+        double centreErrorMax, int strictReacquireSweepsMax, double strictReacquireSecondsMax,
+        double[] crlbRobust) {
 
     /** Fraction of focus sweeps that missed the proton peak. */
     public double missFraction() {
@@ -78,6 +80,8 @@ public record SetResult(int set, double[] values, int runs, double lockFractionM
         double[] ratio = new double[3];
         int[] errorRuns = new int[3];
         int[] ratioRuns = new int[3];
+        double[] robust = new double[3];
+        int[] robustRuns = new int[3];
         double[] centre = new double[3]; // sums of median and p95, then the largest max
         int[] centreRuns = new int[3];
         int strictSweeps = 0;
@@ -101,6 +105,10 @@ public record SetResult(int set, double[] values, int runs, double lockFractionM
                 if (Double.isFinite(r.momentError()[k])) {
                     error[k] += r.momentError()[k];
                     errorRuns[k]++;
+                }
+                if (Double.isFinite(r.crlbRobust()[k])) {
+                    robust[k] += r.crlbRobust()[k];
+                    robustRuns[k]++;
                 }
                 if (Double.isFinite(r.crlbRatio()[k])) {
                     ratio[k] += r.crlbRatio()[k];
@@ -130,7 +138,7 @@ public record SetResult(int set, double[] values, int runs, double lockFractionM
                 efficiencyRuns == 0 ? Double.NaN : efficiency / efficiencyRuns, mean(error, errorRuns),
                 mean(ratio, ratioRuns), centreRuns[0] == 0 ? Double.NaN : centre[0] / centreRuns[0],
                 centreRuns[1] == 0 ? Double.NaN : centre[1] / centreRuns[1], centreRuns[2] == 0 ? Double.NaN : centre[2],
-                strictSweeps, strictSeconds);
+                strictSweeps, strictSeconds, mean(robust, robustRuns));
     }
 
     private static double[] mean(double[] sum, int[] count) {
