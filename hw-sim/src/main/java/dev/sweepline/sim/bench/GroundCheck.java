@@ -14,7 +14,6 @@ import dev.sweepline.sim.plasma.IonPopulation;
 import dev.sweepline.sim.plasma.PlasmaState;
 import dev.sweepline.sim.design.ProtonInformation;
 import java.util.ArrayList;
-import java.util.Arrays;
 import java.util.List;
 import java.util.Map;
 import java.util.TreeMap;
@@ -25,6 +24,9 @@ import java.util.function.LongFunction;
  * independent ground decoder and its fitter, and every fitted spectrum is compared with the
  * scenario's protons at the sweep's mid-time. The truth is what the cup can measure: the density, the
  * bulk speed, and the temperature along the cup normal (from the thermal speed along the normal).
+ * The truth is taken at the sweep's mid-time: a sweep during which the plasma moves is scored against
+ * the plasma at its middle ({@link TruthChange} says how much it moved). Sweeps whose fit is
+ * non-stationary ({@link NonStationarity}) are counted, and the errors are given with and without them.
  */
 public final class GroundCheck {
     private final FitCollector fits = new FitCollector();
@@ -66,6 +68,8 @@ public final class GroundCheck {
         }
         List<double[]> rel = new ArrayList<>(); // |fit - truth| / truth for n, U, T
         List<double[]> z = new ArrayList<>(); // (fit - truth) / bound for n, U, T
+        List<double[]> relStationary = new ArrayList<>();
+        List<double[]> zStationary = new ArrayList<>();
         int fitted = 0;
         for (MomentRecord m : records) {
             if (!m.ok()) {
@@ -90,8 +94,16 @@ public final class GroundCheck {
             }
             rel.add(r);
             z.add(zz);
+            int dof = m.fit().windowsUsed() - m.fit().normalParameters().length;
+            if (!NonStationarity.flagged(m.fit().reducedChiSquare(), dof)) {
+                relStationary.add(r);
+                zStationary.add(zz);
+            }
         }
-        return GroundFigures.of(records.size(), fitted, rel, z);
+        MomentErrors all = MomentErrors.of(rel, z);
+        MomentErrors stationary = MomentErrors.of(relStationary, zStationary);
+        return new GroundFigures(records.size(), fitted, all.medianRelative(), all.p95Relative(), all.crlbRatio(),
+                all.compared(), all.robustCrlbRatio(), rel.size() - relStationary.size(), stationary);
     }
 
     /** n (cm^-3), |U| (km/s), T along the normal (K) of the protons. */
@@ -112,41 +124,13 @@ public final class GroundCheck {
      * @param p95Relative     95th-percentile relative error of n, U, T
      * @param crlbRatio       rms of (fit - truth) / Cramér-Rao bound of n, U, T: 1 is as good as the measurement allows
      * @param compared        fits compared with the truth
+     * @param robustCrlbRatio {@link MomentErrors#MAD_SCALE} x median |(fit - truth) / bound| of n, U, T
+     * @param nonStationary   compared fits flagged non-stationary ({@link NonStationarity})
+     * @param stationary      the errors without the flagged fits
      */
     public record GroundFigures(int spectra, int fitted, double[] medianRelative, double[] p95Relative,
-            double[] crlbRatio, int compared) {
+            double[] crlbRatio, int compared, double[] robustCrlbRatio, int nonStationary, MomentErrors stationary) {
         /** Names of the three moments, in order. */
         public static final String[] MOMENTS = {"n", "U", "T"};
-
-        static GroundFigures of(int spectra, int fitted, List<double[]> rel, List<double[]> z) {
-            double[] median = new double[3];
-            double[] p95 = new double[3];
-            double[] ratio = new double[3];
-            for (int k = 0; k < 3; k++) {
-                double[] r = new double[rel.size()];
-                double sum = 0;
-                int finite = 0;
-                for (int i = 0; i < rel.size(); i++) {
-                    r[i] = rel.get(i)[k];
-                    double zz = z.get(i)[k];
-                    if (Double.isFinite(zz)) {
-                        sum += zz * zz;
-                        finite++;
-                    }
-                }
-                Arrays.sort(r);
-                median[k] = quantile(r, 0.5);
-                p95[k] = quantile(r, 0.95);
-                ratio[k] = finite == 0 ? Double.NaN : Math.sqrt(sum / finite);
-            }
-            return new GroundFigures(spectra, fitted, median, p95, ratio, rel.size());
-        }
-
-        private static double quantile(double[] sorted, double q) {
-            if (sorted.length == 0) {
-                return Double.NaN;
-            }
-            return sorted[(int) Math.min(sorted.length - 1, Math.floor(q * sorted.length))];
-        }
     }
 }

@@ -14,6 +14,9 @@ import java.util.List;
  * @param frontMicros end of the jump's ramp, simulated time
  * @param sweeps    sweeps until and including the first locked focus sweep; -1 if never within the run
  * @param seconds   from the front to the start of that sweep; NaN if never
+ *
+ * <p>{@link #after} counts until the band merely contains the new peak; {@link #strictAfter} until
+ * the band is centred within {@link #STRICT_CENTRE_WINDOWS} windows of it.
  */
 public record Reacquisition(String label, long frontMicros, int sweeps, double seconds) {
 
@@ -22,8 +25,34 @@ public record Reacquisition(String label, long frontMicros, int sweeps, double s
         return sweeps > 0;
     }
 
-    /** The reacquisition after {@code jump}, from the recorded sweeps. */
+    /**
+     * Tolerance of the strict reacquisition: the band centre within this many windows of the true
+     * proton peak. A bench choice, the width of a few windows against bands of 15-63.
+     */
+    public static final double STRICT_CENTRE_WINDOWS = 2.0;
+
+    /** The reacquisition after {@code jump}, from the recorded sweeps: the band contains the peak. */
     public static Reacquisition after(Jump jump, List<SweepRecord> records) {
+        return after(jump, records, SweepRecord::locked);
+    }
+
+    /**
+     * The strict reacquisition after {@code jump}: until a focus sweep whose band centre lies within
+     * {@link #STRICT_CENTRE_WINDOWS} of the true proton peak.
+     */
+    public static Reacquisition strictAfter(Jump jump, List<SweepRecord> records) {
+        return after(jump, records, Reacquisition::centred);
+    }
+
+    /** True when a focus sweep's band is centred within {@link #STRICT_CENTRE_WINDOWS} of the true peak. */
+    static boolean centred(SweepRecord r) {
+        return r.mode() == dev.sweepline.fsw.sweep.SweepMode.FOCUS && r.trueProtonWindow() >= 0
+                && !Double.isNaN(r.bandCentre())
+                && Math.abs(r.bandCentre() - r.trueProtonWindow()) <= STRICT_CENTRE_WINDOWS;
+    }
+
+    private static Reacquisition after(Jump jump, List<SweepRecord> records,
+            java.util.function.Predicate<SweepRecord> held) {
         long front = Math.round((jump.atSeconds() + jump.rampSeconds()) * 1e6);
         int counted = 0;
         for (SweepRecord r : records) {
@@ -31,7 +60,7 @@ public record Reacquisition(String label, long frontMicros, int sweeps, double s
                 continue;
             }
             counted++;
-            if (r.locked()) {
+            if (held.test(r)) {
                 return new Reacquisition(jump.label(), front, counted, (r.startMicros() - front) / 1e6);
             }
         }

@@ -44,17 +44,12 @@ public final class RunReportWriter {
         m.put("alphaLocks", s.alphaLocks());
         m.put("reacquireSweepsMax", s.reacquireSweepsMax());
         m.put("reacquireSecondsMax", finite(s.reacquireSecondsMax()));
-        List<Map<String, Object>> jumps = new ArrayList<>();
-        for (Reacquisition r : s.reacquisitions()) {
-            Map<String, Object> j = new LinkedHashMap<>();
-            j.put("label", r.label());
-            j.put("frontSeconds", r.frontMicros() / 1e6);
-            j.put("reacquired", r.reacquired());
-            j.put("sweeps", r.sweeps());
-            j.put("seconds", finite(r.seconds()));
-            jumps.add(j);
-        }
-        m.put("jumps", jumps);
+        m.put("jumps", jumpList(s.reacquisitions()));
+        m.put("tracking", trackingMap(s.tracking()));
+        m.put("strictReacquireSweepsMax", s.strictReacquireSweepsMax());
+        m.put("strictReacquireSecondsMax", finite(s.strictReacquireSecondsMax()));
+        m.put("strictCentreWindows", Reacquisition.STRICT_CENTRE_WINDOWS);
+        m.put("strictJumps", jumpList(s.strictReacquisitions()));
         m.put("integratingFraction", round(s.integratingFraction(), 4));
         m.put("informationEfficiency", finite(round(s.informationEfficiency(), 4)));
         m.put("saturatedSamples", s.saturatedSamples());
@@ -77,6 +72,38 @@ public final class RunReportWriter {
         return m;
     }
 
+    private static List<Map<String, Object>> jumpList(List<Reacquisition> reacquisitions) {
+        List<Map<String, Object>> jumps = new ArrayList<>();
+        for (Reacquisition r : reacquisitions) {
+            Map<String, Object> j = new LinkedHashMap<>();
+            j.put("label", r.label());
+            j.put("frontSeconds", r.frontMicros() / 1e6);
+            j.put("reacquired", r.reacquired());
+            j.put("sweeps", r.sweeps());
+            j.put("seconds", finite(r.seconds()));
+            jumps.add(j);
+        }
+        return jumps;
+    }
+
+    /** Tracking error in windows: band centre (focus sweeps) and found peak (all sweeps), median/p95/max. */
+    private static Map<String, Object> trackingMap(TrackingError t) {
+        Map<String, Object> centre = new LinkedHashMap<>();
+        centre.put("sweeps", t.centreSweeps());
+        centre.put("median", finite(round(t.centreMedian(), 3)));
+        centre.put("p95", finite(round(t.centreP95(), 3)));
+        centre.put("max", finite(round(t.centreMax(), 3)));
+        Map<String, Object> peak = new LinkedHashMap<>();
+        peak.put("sweeps", t.peakSweeps());
+        peak.put("median", finite(round(t.peakMedian(), 3)));
+        peak.put("p95", finite(round(t.peakP95(), 3)));
+        peak.put("max", finite(round(t.peakMax(), 3)));
+        Map<String, Object> m = new LinkedHashMap<>();
+        m.put("bandCentreWindows", centre);
+        m.put("foundPeakWindows", peak);
+        return m;
+    }
+
     /** Writes {@code summary.json} and {@code decisions.csv} into {@code dir}, creating it. */
     public static void write(Path dir, ClosedLoopBench.Result result) throws IOException {
         write(dir, result, Map.of());
@@ -90,14 +117,17 @@ public final class RunReportWriter {
         JSON.writeValue(dir.resolve("summary.json").toFile(), summary);
         try (Writer w = Files.newBufferedWriter(dir.resolve("decisions.csv"))) {
             w.write("sweep,mode,startSeconds,endSeconds,firstWindow,lastWindow,peakWindow,bandCentre,"
-                    + "trueProtonWindow,trueAlphaWindow,locked,alphaLock,saturatedSamples\n");
+                    + "trueProtonWindow,trueAlphaWindow,locked,alphaLock,saturatedSamples,"
+                    + "truthChangeN,truthChangeU,truthChangeT\n");
             for (SweepRecord r : result.recorder().sweeps()) {
-                w.write(String.format(Locale.ROOT, "%d,%s,%.6f,%.6f,%d,%d,%.3f,%s,%d,%d,%b,%b,%d%n", r.sweep(),
+                double[] change = TruthChange.of(r, result.recorder()::truthAt);
+                w.write(String.format(Locale.ROOT, "%d,%s,%.6f,%.6f,%d,%d,%.3f,%s,%d,%d,%b,%b,%d,%s,%s,%s%n", r.sweep(),
                         r.mode().name().toLowerCase(Locale.ROOT), r.startMicros() / 1e6, r.endMicros() / 1e6,
                         r.firstWindow(), r.lastWindow(), r.peakWindow(),
                         Double.isNaN(r.bandCentre()) ? "" : String.format(Locale.ROOT, "%.3f", r.bandCentre()),
                         r.trueProtonWindow(),
-                        r.trueAlphaWindow(), r.locked(), r.alphaLock(), r.saturatedSamples()));
+                        r.trueAlphaWindow(), r.locked(), r.alphaLock(), r.saturatedSamples(), cell(change[0]),
+                        cell(change[1]), cell(change[2])));
             }
         }
     }
@@ -116,8 +146,28 @@ public final class RunReportWriter {
         Map<String, Object> m = new LinkedHashMap<>();
         m.put("groundSpectra", g.spectra());
         m.put("groundFits", g.fitted());
+        m.put("groundTruthAt", "mid-sweep");
         m.put("momentErrors", errors);
         m.put("crlbRatio", ratio);
+        m.put("crlbRatioRobust", perMoment(g.robustCrlbRatio(), 3));
+        m.put("nonStationaryFits", g.nonStationary());
+        m.put("nonStationaryQuantile", NonStationarity.QUANTILE);
+        MomentErrors st = g.stationary();
+        Map<String, Object> without = new LinkedHashMap<>();
+        without.put("compared", st.compared());
+        without.put("momentErrorMedian", perMoment(st.medianRelative(), 6));
+        without.put("momentErrorP95", perMoment(st.p95Relative(), 6));
+        without.put("crlbRatio", perMoment(st.crlbRatio(), 3));
+        without.put("crlbRatioRobust", perMoment(st.robustCrlbRatio(), 3));
+        m.put("withoutNonStationary", without);
+        return m;
+    }
+
+    private static Map<String, Object> perMoment(double[] v, int digits) {
+        Map<String, Object> m = new LinkedHashMap<>();
+        for (int k = 0; k < 3; k++) {
+            m.put(GroundCheck.GroundFigures.MOMENTS[k], finite(round(v[k], digits)));
+        }
         return m;
     }
 
@@ -149,6 +199,14 @@ public final class RunReportWriter {
                     "median %.4f %%, p95 %.4f %%, %.2f x the Cramer-Rao bound", 100 * g.medianRelative()[k],
                     100 * g.p95Relative()[k], g.crlbRatio()[k]));
         }
+        MomentErrors st = g.stationary();
+        for (int k = 0; k < 3; k++) {
+            row(out, "CRLB ratio " + GroundCheck.GroundFigures.MOMENTS[k], String.format(Locale.ROOT,
+                    "rms %.2f, robust %.2f; without non-stationary: rms %.2f, robust %.2f",
+                    g.crlbRatio()[k], g.robustCrlbRatio()[k], st.crlbRatio()[k], st.robustCrlbRatio()[k]));
+        }
+        row(out, "non-stationary", String.format(Locale.ROOT, "%d of %d fits (reduced chi-square above the %.3f "
+                + "quantile); truth taken at mid-sweep", g.nonStationary(), g.compared(), NonStationarity.QUANTILE));
     }
 
     /** Prints the summary as a two-column table. */
@@ -169,6 +227,15 @@ public final class RunReportWriter {
         row(out, "alpha locks", Integer.toString(s.alphaLocks()));
         row(out, "reacquire (max)", s.reacquisitions().isEmpty() ? "no jumps in scenario"
                 : String.format(Locale.ROOT, "%d sweeps, %.3f s", s.reacquireSweepsMax(), s.reacquireSecondsMax()));
+        TrackingError te = s.tracking();
+        row(out, "centre error", String.format(Locale.ROOT, "median %.2f, p95 %.2f, max %.2f windows",
+                te.centreMedian(), te.centreP95(), te.centreMax()));
+        row(out, "peak error", String.format(Locale.ROOT, "median %.2f, p95 %.2f, max %.2f windows",
+                te.peakMedian(), te.peakP95(), te.peakMax()));
+        if (!s.strictReacquisitions().isEmpty()) {
+            row(out, "centred again (max)", String.format(Locale.ROOT, "%d sweeps, %.3f s (within %.0f windows)",
+                    s.strictReacquireSweepsMax(), s.strictReacquireSecondsMax(), Reacquisition.STRICT_CENTRE_WINDOWS));
+        }
         row(out, "integrating", String.format(Locale.ROOT, "%.1f %% of the time", 100 * s.integratingFraction()));
         row(out, "saturated samples", Long.toString(s.saturatedSamples()));
         row(out, "D-efficiency", String.format(Locale.ROOT, "%.3f of the D-optimal design", s.informationEfficiency()));
@@ -190,6 +257,11 @@ public final class RunReportWriter {
         Map<String, Integer> m = new LinkedHashMap<>();
         byMode.forEach((mode, v) -> m.put(mode.name().toLowerCase(Locale.ROOT), v));
         return m;
+    }
+
+    /** A relative change as a CSV cell: six significant digits, empty when undefined. */
+    private static String cell(double v) {
+        return Double.isFinite(v) ? String.format(Locale.ROOT, "%.6g", v) : "";
     }
 
     private static Object finite(double v) {

@@ -28,15 +28,32 @@ import java.util.Map;
  * @param informationEfficiency D-efficiency of the run's measurements of the protons' (n, U, w) against the
  *                            D-optimal design over the same windows and integration time (NaN if undefined)
  * @param decisionHash        the flight software's running hash of its decisions (hex)
+ * @param tracking            band centre and found peak against the true proton peak, windows
+ * @param strictReacquisitions one per scenario jump, until the band is centred within
+ *                            {@link Reacquisition#STRICT_CENTRE_WINDOWS} of the new peak
  */
 public record RunSummary(String instrument, String scenario, long seed, double simulatedSeconds, double wallSeconds, long steps,
         Map<SweepMode, Integer> sweepsByMode, Map<SweepMode, Double> spectraPerSecond, double lockFraction,
         int alphaLocks, List<Reacquisition> reacquisitions, double integratingFraction, long saturatedSamples,
         long unsettledSamples, Map<String, Integer> modeChanges, TelemetryFigures telemetry, double informationEfficiency,
-        String decisionHash) {
+        String decisionHash, TrackingError tracking, List<Reacquisition> strictReacquisitions) {
 
     /** Largest sweep count to reacquire over all jumps (0 when the scenario has none; -1 if one never was). */
     public int reacquireSweepsMax() {
+        return sweepsMax(reacquisitions);
+    }
+
+    /** As {@link #reacquireSweepsMax()}, for the strict reacquisitions. */
+    public int strictReacquireSweepsMax() {
+        return sweepsMax(strictReacquisitions);
+    }
+
+    /** As {@link #reacquireSecondsMax()}, for the strict reacquisitions. */
+    public double strictReacquireSecondsMax() {
+        return secondsMax(strictReacquisitions);
+    }
+
+    private static int sweepsMax(List<Reacquisition> reacquisitions) {
         int max = 0;
         for (Reacquisition r : reacquisitions) {
             if (!r.reacquired()) {
@@ -49,6 +66,10 @@ public record RunSummary(String instrument, String scenario, long seed, double s
 
     /** Longest time to reacquire over all jumps, seconds (0 without jumps; NaN if one never was). */
     public double reacquireSecondsMax() {
+        return secondsMax(reacquisitions);
+    }
+
+    private static double secondsMax(List<Reacquisition> reacquisitions) {
         double max = 0;
         for (Reacquisition r : reacquisitions) {
             if (!r.reacquired()) {
@@ -88,10 +109,13 @@ public record RunSummary(String instrument, String scenario, long seed, double s
             perSecond.put(m, byMode.get(m) / seconds);
         }
         List<Reacquisition> reacq = new ArrayList<>();
+        List<Reacquisition> strict = new ArrayList<>();
         config.scenario().jumps().forEach(j -> reacq.add(Reacquisition.after(j, recorder.sweeps())));
+        config.scenario().jumps().forEach(j -> strict.add(Reacquisition.strictAfter(j, recorder.sweeps())));
         return new RunSummary(config.instrument().name(), config.scenario().name(), config.seed(), seconds, wallSeconds, recorder.steps(),
                 byMode, perSecond, focus == 0 ? Double.NaN : (double) locked / focus, alpha, reacq,
                 recorder.integrationMicros() / (seconds * 1e6), recorder.saturatedSamples(),
-                recorder.unsettledSamples(), recorder.modeChanges(), telemetry, informationEfficiency, decisionHash);
+                recorder.unsettledSamples(), recorder.modeChanges(), telemetry, informationEfficiency, decisionHash,
+                TrackingError.of(recorder.sweeps()), strict);
     }
 }

@@ -79,8 +79,9 @@ public final class CampaignOutput {
         Files.createDirectories(dir);
         List<SetResult> sets = SetResult.aggregate(spec, rows);
         List<SetResult> front = ParetoFront.of(sets);
-        SetResult best = ParetoFront.recommend(front, spec.allocationBitsPerSecond());
-        writeSets(dir.resolve("sets.csv"), spec, sets, front);
+        Recommendation rec = Recommendation.of(spec, sets, front, rows);
+        SetResult best = rec.chosen();
+        writeSets(dir.resolve("sets.csv"), spec, sets, front, rec);
         Map<String, Object> summary = new LinkedHashMap<>();
         summary.put("campaign", spec.name());
         summary.put("seed", spec.seed());
@@ -92,19 +93,29 @@ public final class CampaignOutput {
         summary.put("axes", spec.axisKeys());
         List<Map<String, Object>> setMaps = new ArrayList<>();
         for (SetResult s : sets) {
-            setMaps.add(setMap(spec, s, front.contains(s)));
+            Map<String, Object> sm = setMap(spec, s, front.contains(s));
+            Recommendation.Versus v = rec.versusLeader().get(s.set());
+            if (v != null) {
+                sm.put("versusLeader", versusMap(v));
+            }
+            setMaps.add(sm);
         }
         summary.put("results", setMaps);
         List<Integer> frontIds = new ArrayList<>();
         front.forEach(s -> frontIds.add(s.set()));
         summary.put("paretoFront", frontIds);
         summary.put("recommendedSet", best == null ? null : best.set());
+        summary.put("leaderSet", rec.leader() == null ? null : rec.leader().set());
+        List<Integer> tied = new ArrayList<>();
+        rec.indistinguishable().forEach(s -> tied.add(s.set()));
+        summary.put("indistinguishableFromLeader", tied);
+        summary.put("recommendationNote", note(rec));
         JSON.writeValue(dir.resolve("summary.json").toFile(), summary);
         if (best != null) {
             writeRecommended(dir.resolve("recommended.yaml"), spec, best);
             Files.write(dir.resolve(RECOMMENDED_IMAGE), recommendedImage(spec, best));
         }
-        CampaignReport.write(dir, spec, sets, front, best);
+        CampaignReport.write(dir, spec, sets, front, best, note(rec));
         return best;
     }
 
@@ -135,28 +146,81 @@ public final class CampaignOutput {
         }
         m.put("momentErrorMedian", err);
         m.put("crlbRatio", crlb);
+        Map<String, Object> robust = new LinkedHashMap<>();
+        for (int k = 0; k < 3; k++) {
+            robust.put(MOMENTS[k], finite(s.crlbRobust()[k]));
+        }
+        m.put("crlbRatioRobust", robust);
+        Map<String, Object> centre = new LinkedHashMap<>();
+        centre.put("medianMean", finite(s.centreErrorMedian()));
+        centre.put("p95Mean", finite(s.centreErrorP95()));
+        centre.put("max", finite(s.centreErrorMax()));
+        m.put("centreErrorWindows", centre);
+        m.put("strictReacquireSweepsMax", s.strictReacquireSweepsMax());
+        m.put("strictReacquireSecondsMax", finite(s.strictReacquireSecondsMax()));
         m.put("accuracy", finite(s.accuracy()));
         m.put("paretoFront", onFront);
         return m;
     }
 
-    private static void writeSets(Path file, CampaignSpec spec, List<SetResult> sets, List<SetResult> front)
-            throws IOException {
+    /** What the recommendation rests on, in one sentence (campaigns/FORMAT.md, "How a set is recommended"). */
+    static String note(Recommendation rec) {
+        if (rec.leader() == null) {
+            return "no set met the recommendation rules";
+        }
+        if (!rec.withinNoise()) {
+            return "set " + rec.leader().set() + " is distinguishably better than every other qualifying set "
+                    + "on at least one objective (95 % paired intervals)";
+        }
+        return rec.indistinguishable().size() + " sets cannot be told apart from the leader (set " + rec.leader().set()
+                + ") within the ensemble's noise (95 % paired intervals); recommended: set " + rec.chosen().set()
+                + ", the one of them closest to the default table";
+    }
+
+    private static Map<String, Object> versusMap(Recommendation.Versus v) {
+        Map<String, Object> m = new LinkedHashMap<>();
+        m.put("accuracy", intervalMap(v.accuracy()));
+        m.put("bitsPerSecond", intervalMap(v.bits()));
+        m.put("spectraPerSecond", intervalMap(v.cadence()));
+        m.put("indistinguishable", v.tied());
+        return m;
+    }
+
+    private static Map<String, Object> intervalMap(PairedInterval i) {
+        Map<String, Object> m = new LinkedHashMap<>();
+        m.put("meanDifference", finite(i.mean()));
+        m.put("low95", finite(i.low()));
+        m.put("high95", finite(i.high()));
+        m.put("members", i.members());
+        return m;
+    }
+
+    private static void writeSets(Path file, CampaignSpec spec, List<SetResult> sets, List<SetResult> front,
+            Recommendation rec) throws IOException {
         try (Writer w = Files.newBufferedWriter(file)) {
             w.write("set," + String.join(",", spec.axisKeys()) + ",runs,lockFractionMean,lockFractionMin,alphaLocks,"
                     + "reacquireSweepsMax,reacquireSecondsMax,spectraPerSecond,bitsPerSecondMean,bitsPerSecondMax,"
                     + "integratingFraction,informationEfficiency,errorN,errorU,errorT,crlbRatioN,crlbRatioU,crlbRatioT,"
-                    + "paretoFront\n");
+                    + "centreErrorMedian,centreErrorP95,centreErrorMax,strictReacquireSweepsMax,strictReacquireSecondsMax,"
+                    + "crlbRobustN,crlbRobustU,crlbRobustT,accuracyDiffLow95,accuracyDiffHigh95,bitsDiffLow95,"
+                    + "bitsDiffHigh95,cadenceDiffLow95,cadenceDiffHigh95,indistinguishableFromLeader,paretoFront\n");
             for (SetResult s : sets) {
                 StringBuilder b = new StringBuilder().append(s.set());
                 for (double v : s.values()) {
                     b.append(',').append(v);
                 }
-                b.append(String.format(Locale.ROOT, ",%d,%s,%s,%d,%d,%s,%s,%s,%s,%s,%s,%s,%s,%s,%s,%s,%s,%b%n", s.runs(),
+                b.append(String.format(Locale.ROOT, ",%d,%s,%s,%d,%d,%s,%s,%s,%s,%s,%s,%s,%s,%s,%s,%s,%s,%s,%s,%s,%d,%s,%s,%s,%s,%b%n", s.runs(),
                         s.lockFractionMean(), s.lockFractionMin(), s.alphaLocks(), s.reacquireSweepsMax(),
                         s.reacquireSecondsMax(), s.spectraPerSecond(), s.bitsPerSecondMean(), s.bitsPerSecondMax(),
                         s.integratingFraction(), s.informationEfficiency(), s.momentError()[0], s.momentError()[1],
-                        s.momentError()[2], s.crlbRatio()[0], s.crlbRatio()[1], s.crlbRatio()[2], front.contains(s)));
+                        s.momentError()[2], s.crlbRatio()[0], s.crlbRatio()[1], s.crlbRatio()[2], s.centreErrorMedian(), s.centreErrorP95(),
+                        s.centreErrorMax(), s.strictReacquireSweepsMax(), s.strictReacquireSecondsMax(), s.crlbRobust()[0], s.crlbRobust()[1],
+                        s.crlbRobust()[2], front.contains(s)));
+                Recommendation.Versus v = rec.versusLeader().get(s.set());
+                String paired = v == null ? ",,,,,,false" : String.format(Locale.ROOT, ",%s,%s,%s,%s,%s,%s,%b",
+                        v.accuracy().low(), v.accuracy().high(), v.bits().low(), v.bits().high(), v.cadence().low(),
+                        v.cadence().high(), v.tied());
+                b.insert(b.lastIndexOf(","), paired);
                 w.write(b.toString());
             }
         }

@@ -18,8 +18,8 @@ final class CampaignReport {
     private CampaignReport() {
     }
 
-    static void write(Path dir, CampaignSpec spec, List<SetResult> sets, List<SetResult> front, SetResult best)
-            throws IOException {
+    static void write(Path dir, CampaignSpec spec, List<SetResult> sets, List<SetResult> front, SetResult best,
+            String recommendationNote) throws IOException {
         byte[] rate = chart(sets, front, true);
         byte[] cadence = chart(sets, front, false);
         Files.write(dir.resolve("pareto.png"), rate);
@@ -37,6 +37,7 @@ final class CampaignReport {
                 describe(spec, best), 100 * best.momentError()[0], 100 * best.momentError()[1],
                 100 * best.momentError()[2], best.spectraPerSecond(), best.bitsPerSecondMean(),
                 best.informationEfficiency()), true);
+        h.paragraph("Within the noise: " + recommendationNote + ".", false);
         h.heading("Pareto front");
         h.image(rate, "accuracy against telemetry rate, Pareto front marked");
         h.image(cadence, "accuracy against cadence, Pareto front marked");

@@ -40,17 +40,24 @@ public final class ParetoFront {
     }
 
     /**
-     * The recommended set: on the front, no alpha lock, every jump reacquired, the worst run's lock
-     * fraction at least 0.99 and the worst run within the allocation (when one is given); among those
-     * the best accuracy, then the fewest bits. Null when no set qualifies.
+     * True when {@code s} may be recommended: no alpha lock, every jump reacquired, the worst run's lock
+     * fraction at least 0.99, and the worst run within the allocation (when one is given).
+     */
+    public static boolean qualifies(SetResult s, double allocationBitsPerSecond) {
+        boolean fits = Double.isNaN(allocationBitsPerSecond) || s.bitsPerSecondMax() <= allocationBitsPerSecond;
+        boolean sound = s.alphaLocks() == 0 && s.reacquireSweepsMax() >= 0
+                && !Double.isNaN(s.lockFractionMin()) && s.lockFractionMin() >= 0.99;
+        return fits && sound;
+    }
+
+    /**
+     * The leader: among the sets on the front that {@link #qualifies qualify}, the best accuracy, then
+     * the fewest bits. Null when no set qualifies. {@link Recommendation} then weighs the ensemble's noise.
      */
     public static SetResult recommend(List<SetResult> front, double allocationBitsPerSecond) {
         SetResult best = null;
         for (SetResult s : front) {
-            boolean fits = Double.isNaN(allocationBitsPerSecond) || s.bitsPerSecondMax() <= allocationBitsPerSecond;
-            boolean sound = s.alphaLocks() == 0 && s.reacquireSweepsMax() >= 0
-                    && !Double.isNaN(s.lockFractionMin()) && s.lockFractionMin() >= 0.99;
-            if (!fits || !sound) {
+            if (!qualifies(s, allocationBitsPerSecond)) {
                 continue;
             }
             if (best == null || s.accuracy() < best.accuracy()

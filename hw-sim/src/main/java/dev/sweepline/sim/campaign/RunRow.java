@@ -22,16 +22,24 @@ import java.util.Locale;
  * @param informationEfficiency D-efficiency against the D-optimal design (NaN if undefined)
  * @param momentError         median relative errors of the ground's n, U, T against the truth
  * @param crlbRatio           rms of (fit - truth) / Cramér-Rao bound of n, U, T
+ * @param trackingCentre      band centre against the true proton peak, windows: median, p95, max
+ * @param strictReacquireSweeps worst strict reacquisition (band centred within 2 windows), sweeps (0 without jumps, -1 never)
+ * @param strictReacquireSeconds worst strict reacquisition, seconds (NaN if never)
+ * @param crlbRobust          1.4826 x median |(fit - truth) / Cramér-Rao bound| of n, U, T
+ * @param nonStationary       ground fits flagged non-stationary (reduced chi-square above its 0.999 quantile)
  */
 public record RunRow(int set, int run, double lockFraction, int alphaLocks, int reacquireSweeps,
         double reacquireSeconds, double spectraPerSecond, double bitsPerSecond, double integratingFraction,
-        double informationEfficiency, double[] momentError, double[] crlbRatio) {
+        double informationEfficiency, double[] momentError, double[] crlbRatio,
+        double[] trackingCentre, int strictReacquireSweeps, double strictReacquireSeconds,
+        double[] crlbRobust, int nonStationary) {
 
     /** CSV header, matching {@link #toCsv()}. */
     public static final String HEADER = "set,run,lockFraction,alphaLocks,reacquireSweeps,reacquireSeconds,"
             + "spectraPerSecond,bitsPerSecond,integratingFraction,informationEfficiency,errorN,errorU,errorT,"
-            + "crlbRatioN,crlbRatioU,crlbRatioT";
-    private static final int FIELDS = 16;
+            + "crlbRatioN,crlbRatioU,crlbRatioT,centreErrorMedian,centreErrorP95,centreErrorMax,"
+            + "strictReacquireSweeps,strictReacquireSeconds,crlbRobustN,crlbRobustU,crlbRobustT,nonStationary";
+    private static final int FIELDS = 25;
 
     /** Mean of the three median relative moment errors: the accuracy objective (lower is better). */
     public double accuracy() {
@@ -58,15 +66,19 @@ public record RunRow(int set, int run, double lockFraction, int alphaLocks, int 
         double cadence = s.spectraPerSecond().get(SweepMode.SURVEY) + s.spectraPerSecond().get(SweepMode.FOCUS);
         return new RunRow(set, run, s.lockFraction(), s.alphaLocks(), s.reacquireSweepsMax(),
                 s.reacquireSecondsMax(), cadence, s.telemetry().frameBitsPerSecond(), s.integratingFraction(),
-                s.informationEfficiency(), g.medianRelative().clone(), g.crlbRatio().clone());
+                s.informationEfficiency(), g.medianRelative().clone(), g.crlbRatio().clone(),
+                new double[] {s.tracking().centreMedian(), s.tracking().centreP95(), s.tracking().centreMax()},
+                s.strictReacquireSweepsMax(), s.strictReacquireSecondsMax(), g.robustCrlbRatio().clone(),
+                g.nonStationary());
     }
 
     /** One CSV line (no newline). */
     public String toCsv() {
-        return String.format(Locale.ROOT, "%d,%d,%s,%d,%d,%s,%s,%s,%s,%s,%s,%s,%s,%s,%s,%s", set, run, lockFraction,
+        return String.format(Locale.ROOT, "%d,%d,%s,%d,%d,%s,%s,%s,%s,%s,%s,%s,%s,%s,%s,%s,%s,%s,%s,%d,%s,%s,%s,%s,%d", set, run, lockFraction,
                 alphaLocks, reacquireSweeps, reacquireSeconds, spectraPerSecond, bitsPerSecond, integratingFraction,
                 informationEfficiency, momentError[0], momentError[1], momentError[2], crlbRatio[0], crlbRatio[1],
-                crlbRatio[2]);
+                crlbRatio[2], trackingCentre[0], trackingCentre[1], trackingCentre[2], strictReacquireSweeps,
+                strictReacquireSeconds, crlbRobust[0], crlbRobust[1], crlbRobust[2], nonStationary);
     }
 
     /** Parses a line written by {@link #toCsv()}. */
@@ -79,6 +91,10 @@ public record RunRow(int set, int run, double lockFraction, int alphaLocks, int 
                 Integer.parseInt(f[3]), Integer.parseInt(f[4]), Double.parseDouble(f[5]), Double.parseDouble(f[6]),
                 Double.parseDouble(f[7]), Double.parseDouble(f[8]), Double.parseDouble(f[9]),
                 new double[] {Double.parseDouble(f[10]), Double.parseDouble(f[11]), Double.parseDouble(f[12])},
-                new double[] {Double.parseDouble(f[13]), Double.parseDouble(f[14]), Double.parseDouble(f[15])});
+                new double[] {Double.parseDouble(f[13]), Double.parseDouble(f[14]), Double.parseDouble(f[15])},
+                new double[] {Double.parseDouble(f[16]), Double.parseDouble(f[17]), Double.parseDouble(f[18])},
+                Integer.parseInt(f[19]), Double.parseDouble(f[20]),
+                new double[] {Double.parseDouble(f[21]), Double.parseDouble(f[22]), Double.parseDouble(f[23])},
+                Integer.parseInt(f[24]));
     }
 }

@@ -21,11 +21,19 @@ import java.util.List;
  * @param informationEfficiency mean D-efficiency against the D-optimal design, over runs where it is defined
  * @param momentError         mean over runs of the median relative errors of n, U, T
  * @param crlbRatio           mean over runs of the CRLB ratios of n, U, T
+ * @param centreErrorMedian   mean over runs of the median band-centre error, windows
+ * @param centreErrorP95      mean over runs of the 95th-percentile band-centre error, windows
+ * @param centreErrorMax      worst run's largest band-centre error, windows
+ * @param strictReacquireSweepsMax worst strict reacquisition, sweeps (-1 if a jump was never centred again)
+ * @param strictReacquireSecondsMax worst strict reacquisition, seconds
+ * @param crlbRobust          mean over runs of the robust CRLB ratios (1.4826 x median |z|) of n, U, T
  */
 public record SetResult(int set, double[] values, int runs, double lockFractionMean, double lockFractionMin,
         int alphaLocks, int reacquireSweepsMax, double reacquireSecondsMax, double spectraPerSecond,
         double bitsPerSecondMean, double bitsPerSecondMax, double integratingFraction, double informationEfficiency,
-        double[] momentError, double[] crlbRatio) {
+        double[] momentError, double[] crlbRatio, double centreErrorMedian, double centreErrorP95,
+        double centreErrorMax, int strictReacquireSweepsMax, double strictReacquireSecondsMax,
+        double[] crlbRobust) {
 
     /** Fraction of focus sweeps that missed the proton peak. */
     public double missFraction() {
@@ -72,11 +80,35 @@ public record SetResult(int set, double[] values, int runs, double lockFractionM
         double[] ratio = new double[3];
         int[] errorRuns = new int[3];
         int[] ratioRuns = new int[3];
+        double[] robust = new double[3];
+        int[] robustRuns = new int[3];
+        double[] centre = new double[3]; // sums of median and p95, then the largest max
+        int[] centreRuns = new int[3];
+        int strictSweeps = 0;
+        double strictSeconds = 0;
         for (RunRow r : runs) {
+            for (int k = 0; k < 2; k++) {
+                if (Double.isFinite(r.trackingCentre()[k])) {
+                    centre[k] += r.trackingCentre()[k];
+                    centreRuns[k]++;
+                }
+            }
+            if (Double.isFinite(r.trackingCentre()[2])) {
+                centre[2] = Math.max(centre[2], r.trackingCentre()[2]);
+                centreRuns[2] = 1;
+            }
+            strictSweeps = strictSweeps < 0 || r.strictReacquireSweeps() < 0 ? -1
+                    : Math.max(strictSweeps, r.strictReacquireSweeps());
+            strictSeconds = Double.isNaN(r.strictReacquireSeconds()) ? Double.NaN
+                    : Math.max(strictSeconds, r.strictReacquireSeconds());
             for (int k = 0; k < 3; k++) {
                 if (Double.isFinite(r.momentError()[k])) {
                     error[k] += r.momentError()[k];
                     errorRuns[k]++;
+                }
+                if (Double.isFinite(r.crlbRobust()[k])) {
+                    robust[k] += r.crlbRobust()[k];
+                    robustRuns[k]++;
                 }
                 if (Double.isFinite(r.crlbRatio()[k])) {
                     ratio[k] += r.crlbRatio()[k];
@@ -104,7 +136,9 @@ public record SetResult(int set, double[] values, int runs, double lockFractionM
         return new SetResult(set, values, runs.size(), lockRuns == 0 ? Double.NaN : lockSum / lockRuns, lockMin,
                 alpha, reacqSweeps, reacqSeconds, cadence / n, bits / n, bitsMax, integrating / n,
                 efficiencyRuns == 0 ? Double.NaN : efficiency / efficiencyRuns, mean(error, errorRuns),
-                mean(ratio, ratioRuns));
+                mean(ratio, ratioRuns), centreRuns[0] == 0 ? Double.NaN : centre[0] / centreRuns[0],
+                centreRuns[1] == 0 ? Double.NaN : centre[1] / centreRuns[1], centreRuns[2] == 0 ? Double.NaN : centre[2],
+                strictSweeps, strictSeconds, mean(robust, robustRuns));
     }
 
     private static double[] mean(double[] sum, int[] count) {

@@ -9,34 +9,42 @@ import java.util.function.ObjIntConsumer;
  */
 public enum TunableParameter {
     /** Dwell: modulation periods integrated per window. */
-    INTEGRATION_PERIODS("integrationPeriods", 1, (p, v) -> p.integrationPeriods = v),
+    INTEGRATION_PERIODS("integrationPeriods", 1, (p, v) -> p.integrationPeriods = v, p -> p.integrationPeriods),
     /** Focus band half-width per measured FWHM (a factor; Q8 in the flight software). */
-    HALF_WIDTH_PER_FWHM("halfWidthPerFwhm", 256, (p, v) -> p.halfWidthPerFwhmQ8 = v),
+    HALF_WIDTH_PER_FWHM("halfWidthPerFwhm", 256, (p, v) -> p.halfWidthPerFwhmQ8 = v, p -> p.halfWidthPerFwhmQ8),
     /** Smallest focus band half-width, windows. */
-    MIN_HALF_WIDTH_WINDOWS("minHalfWidthWindows", 1, (p, v) -> p.minHalfWidthWindows = v),
+    MIN_HALF_WIDTH_WINDOWS("minHalfWidthWindows", 1, (p, v) -> p.minHalfWidthWindows = v, p -> p.minHalfWidthWindows),
     /** Widest focus band, windows. */
-    MAX_BAND_WINDOWS("maxBandWindows", 1, (p, v) -> p.maxBandWindows = v),
+    MAX_BAND_WINDOWS("maxBandWindows", 1, (p, v) -> p.maxBandWindows = v, p -> p.maxBandWindows),
     /** Focus sweeps between forced surveys (K). */
-    RESURVEY_EVERY("resurveyEvery", 1, (p, v) -> p.resurveyEveryFocusSweeps = v),
+    RESURVEY_EVERY("resurveyEvery", 1, (p, v) -> p.resurveyEveryFocusSweeps = v, p -> p.resurveyEveryFocusSweeps),
     /** Lock lost below this fraction of the reference peak current (Q8 in the flight software). */
-    COLLAPSE_FRACTION("collapseFraction", 256, (p, v) -> p.collapseFractionQ8 = v),
+    COLLAPSE_FRACTION("collapseFraction", 256, (p, v) -> p.collapseFractionQ8 = v, p -> p.collapseFractionQ8),
     /** Lock lost when the peak moves by more than this many windows. */
-    JUMP_WINDOWS("jumpWindows", 1, (p, v) -> p.jumpWindows = v),
+    JUMP_WINDOWS("jumpWindows", 1, (p, v) -> p.jumpWindows = v, p -> p.jumpWindows),
     /** Edge search reach beyond a band edge, windows (0: survey at once). */
-    EDGE_SEARCH_WINDOWS("edgeSearchWindows", 1, (p, v) -> p.edgeSearchWindows = v),
+    EDGE_SEARCH_WINDOWS("edgeSearchWindows", 1, (p, v) -> p.edgeSearchWindows = v, p -> p.edgeSearchWindows),
     /** Settle after every level change, microseconds (at least the HV supply's settling). */
-    FIXED_SETTLE_MICROS("fixedSettleMicros", 1, (p, v) -> p.fixedSettleMicros = v),
+    FIXED_SETTLE_MICROS("fixedSettleMicros", 1, (p, v) -> p.fixedSettleMicros = v, p -> p.fixedSettleMicros),
     /** Extra settle per DAC code of rail change, microseconds (Q8 in the flight software; at least the slew limit's). */
-    SETTLE_MICROS_PER_CODE("settleMicrosPerCode", 256, (p, v) -> p.settleMicrosPerCodeQ8 = v);
+    SETTLE_MICROS_PER_CODE("settleMicrosPerCode", 256, (p, v) -> p.settleMicrosPerCodeQ8 = v, p -> p.settleMicrosPerCodeQ8);
 
     private final String key;
     private final int scale;
     private final ObjIntConsumer<SweepParameters> setter;
+    private final java.util.function.ToIntFunction<SweepParameters> getter;
 
-    TunableParameter(String key, int scale, ObjIntConsumer<SweepParameters> setter) {
+    TunableParameter(String key, int scale, ObjIntConsumer<SweepParameters> setter,
+            java.util.function.ToIntFunction<SweepParameters> getter) {
         this.key = key;
         this.scale = scale;
         this.setter = setter;
+        this.getter = getter;
+    }
+
+    /** This parameter of {@code p} in plain units (the flight software's value over its scale). */
+    double read(SweepParameters p) {
+        return getter.applyAsInt(p) / (double) scale;
     }
 
     /** Key in the campaign file. */

@@ -1,0 +1,33 @@
+package dev.sweepline.sim.bench;
+
+import org.hipparchus.distribution.continuous.ChiSquaredDistribution;
+
+/**
+ * Flags a fitted spectrum the ground finds non-stationary: the plasma changed within the sweep, so no
+ * single Maxwellian fits it and its reduced chi-square lies far above its expectation of 1.
+ *
+ * <p>Rule: flagged when chi-square / nu exceeds the {@link #QUANTILE} quantile of chi-square(nu) / nu,
+ * nu = windows used - fitted parameters. For a stationary sweep fitted by the right model this fires
+ * once in a thousand sweeps (the false-alarm rate is 1 - {@link #QUANTILE}, by construction).
+ */
+public final class NonStationarity {
+    /** Quantile of chi-square(nu) / nu above which a sweep is flagged: a one-in-a-thousand false alarm. */
+    public static final double QUANTILE = 0.999;
+
+    private NonStationarity() {
+    }
+
+    /** The reduced chi-square above which a fit with {@code dof} degrees of freedom is flagged; NaN if dof < 1. */
+    public static double threshold(int dof) {
+        if (dof < 1) {
+            return Double.NaN;
+        }
+        return new ChiSquaredDistribution(dof).inverseCumulativeProbability(QUANTILE) / dof;
+    }
+
+    /** True when {@code reducedChiSquare} of a fit with {@code dof} degrees of freedom is above the threshold. */
+    public static boolean flagged(double reducedChiSquare, int dof) {
+        double t = threshold(dof);
+        return Double.isFinite(reducedChiSquare) && Double.isFinite(t) && reducedChiSquare > t;
+    }
+}
