@@ -78,13 +78,42 @@ public final class FlightConfig {
     }
 
     /**
+     * A copy that no change to this configuration, or to the copy, reaches through the other: the
+     * mutable members (sweep parameters, fault settings, command key) are copied; the immutable ones
+     * (description, window table) and the non-volatile store (a service both share) are shared. A new
+     * field must be added here (hw-sim's FlightConfigCopyTest checks every public field is carried).
+     */
+    public FlightConfig copy() {
+        FlightConfig c = new FlightConfig(instrument);
+        c.table = table;
+        c.parameters = parameters == null ? null : parameters.copy();
+        c.frameLength = frameLength;
+        c.flushIntervalMicros = flushIntervalMicros;
+        c.housekeepingPeriodMicros = housekeepingPeriodMicros;
+        c.compressSpectra = compressSpectra;
+        c.coarseTimeAtTickZero = coarseTimeAtTickZero;
+        c.timeoutMarginMicros = timeoutMarginMicros;
+        c.maxRetries = maxRetries;
+        c.faults = new FaultSettings();
+        c.faults.copyFrom(faults);
+        c.commandKey = commandKey == null ? null : commandKey.clone();
+        c.authenticateCommands = authenticateCommands;
+        c.hvArmTimeoutMicros = hvArmTimeoutMicros;
+        c.nonVolatileStore = nonVolatileStore;
+        c.bootChallenge = bootChallenge;
+        c.hvPermitted = hvPermitted;
+        c.hvEnabledAtStart = hvEnabledAtStart;
+        return c;
+    }
+
+    /**
      * The parameter table this configuration starts with: its table and parameters, held to the
      * instrument's limits, then its housekeeping period and its fault settings (the build's own, not held
      * to a table's safe ranges, commands.md §6.1).
      *
      * @throws IllegalArgumentException for a table or parameters outside the limits (a configuration error)
      */
-    ParameterTable startUpTable() {
+    public ParameterTable startUpTable() {
         ParameterTable startUp = ParameterTable.of(table, parameters);
         int status = TableImage.validate(startUp, instrument.limits());
         if (status != 0) {

@@ -13,7 +13,7 @@ import java.util.function.Consumer;
  * compression, fault settings, and whatever the flight software gains), so a flight option needs no
  * field here.
  *
- * <p>A value: the flight configuration is copied in and copied out ({@code FlightConfigCopy}), so
+ * <p>A value: the flight configuration is copied in and copied out ({@code FlightConfig.copy()}), so
  * neither a run, nor a hook completing one run's configuration, nor a caller changes a config once made.
  * Change it with {@link #withFlight}.
  *
@@ -30,7 +30,7 @@ public record BenchConfig(Scenario scenario, long seed, double durationSeconds, 
 
     /** Keeps a copy of {@code flight}. */
     public BenchConfig {
-        flight = FlightConfigCopy.of(Objects.requireNonNull(flight, "flight"));
+        flight = Objects.requireNonNull(flight, "flight").copy();
     }
 
     /** The default instrument (instruments/FORMAT.md: the demo cup) and its flight configuration, no allocation. */
@@ -47,7 +47,7 @@ public record BenchConfig(Scenario scenario, long seed, double durationSeconds, 
     /** A copy of the flight software's start-up configuration; changing it changes nothing here. */
     @Override
     public FlightConfig flight() {
-        return FlightConfigCopy.of(flight);
+        return flight.copy();
     }
 
     /** This config with the flight configuration changed by {@code change} (on a copy). */

@@ -34,15 +34,9 @@ final class PhaseCommands {
         }
     }
 
-    /**
-     * The table {@code flight} starts with (as FlightSoftware builds its start-up table: windows,
-     * sweep parameters, housekeeping period in whole seconds, fault settings), with focus disabled.
-     */
+    /** The table {@code flight} starts with ({@link FlightConfig#startUpTable()}), with focus disabled. */
     static ParameterTable surveyOnly(FlightConfig flight) {
-        ParameterTable t = ParameterTable.of(flight.table, flight.parameters);
-        t.housekeepingSeconds = (int) Math.max(ParameterTable.MIN_HOUSEKEEPING_SECONDS,
-                Math.min(ParameterTable.MAX_HOUSEKEEPING_SECONDS, flight.housekeepingPeriodMicros / 1_000_000L));
-        t.faults.copyFrom(flight.faults);
+        ParameterTable t = flight.startUpTable();
         t.sweep.focusEnabled = 0;
         return t;
     }

@@ -32,21 +32,6 @@ public final class WindowVolts {
         }
     }
 
-    /** True when these are the windows of the scheduler's active table (every edge compared). */
-    public boolean matches(SweepScheduler scheduler, HvCalibration calibration) {
-        int n = scheduler.windowCount();
-        if (n != lowVolts.length) {
-            return false;
-        }
-        for (int w = 0; w < n; w++) {
-            if (lowVolts[w] != calibration.volts(scheduler.dacLow(w))
-                    || highVolts[w] != calibration.volts(scheduler.dacHigh(w))) {
-                return false;
-            }
-        }
-        return true;
-    }
-
     /** Number of windows. */
     public int count() {
         return lowVolts.length;

@@ -41,7 +41,7 @@ class FlightConfigCopyTest {
         }
         // FlightConfig has a dozen primitive options (frame length, periods, switches, the epoch, ...)
         assertTrue(changed >= 10, "primitive options found: " + changed);
-        FlightConfig copy = FlightConfigCopy.of(source);
+        FlightConfig copy = source.copy();
         for (Field f : FlightConfig.class.getFields()) {
             if (!Modifier.isStatic(f.getModifiers()) && f.getType().isPrimitive()) {
                 assertEquals(f.get(source), f.get(copy), f.getName());
@@ -57,7 +57,7 @@ class FlightConfigCopyTest {
         source.faults.threshold[1] = 9;
         source.commandKey[0] = 42;
         NonVolatileStore store = source.nonVolatileStore;
-        FlightConfig copy = FlightConfigCopy.of(source);
+        FlightConfig copy = source.copy();
 
         assertSame(source.table, copy.table); // WindowTable is immutable
         assertSame(store, copy.nonVolatileStore); // a service: the copy must reach the same memory
