@@ -1,5 +1,7 @@
 package dev.sweepline.ground.bound;
 
+import dev.sweepline.ground.fit.FlowAngles;
+
 /**
  * The Cramér–Rao bound of a window set: the square roots of the diagonal of F⁻¹ (physics.md,
  * "Cramér–Rao bound"). Parameter order follows the model: n, U, w per species (SI units).
@@ -22,6 +24,19 @@ public record CramerRaoBound(double[] sigma, boolean singular, double conditionN
     /** Bound of U_p, m/s. */
     public double sigmaSpeed() {
         return sigma[1];
+    }
+
+    /**
+     * Bound of the proton bulk speed |U| = U_n / cos θ: the normal speed's bound with the angles' 1σ
+     * propagated, σ_U² = S² σ_Un² + [U_n tx (1+tx²)/S]² σθx² + [U_n ty (1+ty²)/S]² σθy², S = 1/cos θ
+     * (derivation in {@link FlowAngles#sigmaBulkSpeed} and physics.md "Bulk speed from the normal speed and
+     * the angles"). The angles' 1σ are the bound of the quadrant differences for the fitted species shares
+     * ({@code SpeciesFlowAngles}).
+     *
+     * @param normalSpeedMPerS the fitted U_n, m/s
+     */
+    public double sigmaBulkSpeed(FlowAngles angles, double normalSpeedMPerS) {
+        return angles.sigmaBulkSpeed(normalSpeedMPerS, sigmaSpeed());
     }
 
     /** Bound of w_p, m/s. */

@@ -1,5 +1,6 @@
 package dev.sweepline.ground.bound;
 
+import dev.sweepline.ground.fit.AlphaPrior;
 import dev.sweepline.ground.fit.PlasmaModel;
 import java.util.Arrays;
 import org.hipparchus.linear.Array2DRowRealMatrix;
@@ -74,6 +75,29 @@ public final class FisherMatrix {
         double[][] jac = new double[model.windows()][model.parameters()];
         model.evaluate(parameters, cur, jac);
         return bound(information(jac, sigma));
+    }
+
+    /**
+     * The bound of the joint model with a constrained alpha component: F of the windows plus the prior's
+     * information Σ g gᵀ ({@link AlphaPrior#information}); the Bayesian form of the bound, the inverse of
+     * the data's and the prior's information together (Van Trees 1968, Detection, Estimation and Modulation
+     * Theory Part I §2.4 [memory]). {@code prior} null gives {@link #bound(PlasmaModel, double[], double[])}.
+     */
+    public static CramerRaoBound bound(PlasmaModel model, double[] parameters, double[] sigma, AlphaPrior prior) {
+        if (prior == null) {
+            return bound(model, parameters, sigma);
+        }
+        double[] cur = new double[model.windows()];
+        double[][] jac = new double[model.windows()][model.parameters()];
+        model.evaluate(parameters, cur, jac);
+        double[][] f = information(jac, sigma);
+        double[][] fp = prior.information(parameters);
+        for (int a = 0; a < f.length; a++) {
+            for (int b = 0; b < f.length; b++) {
+                f[a][b] += fp[a][b];
+            }
+        }
+        return bound(f);
     }
 
     /**

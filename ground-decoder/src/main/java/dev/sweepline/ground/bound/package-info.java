@@ -6,7 +6,8 @@
  * analytic Jacobian of the fit's own model and inverts it after scaling to a unit diagonal (SVD,
  * Hipparchus); a zero diagonal or a scaled condition number above 1e12 marks it singular (the window set
  * cannot pin the parameters down, physics.md). The ground reports the bound of the fitted model (3 or 6
- * parameters) at the fitted values beside each fit ({@code crlb_*} columns of moments.csv).
+ * parameters, with the prior's information for a constrained alpha component) at the fitted values beside
+ * each fit ({@code crlb_*} columns of moments.csv; {@code crlb_u_kms} with the angles' 1σ propagated).
  *
  * <p>The reference window set. physics.md gives σ_n 0.0861 %, σ_U 0.0073 %, σ_w 0.1028 % for "14 log-spaced
  * windows around the peak". What was tried (python3/numpy scan of the bound, then this code):
@@ -28,6 +29,12 @@
  *   <li>B2 a rank-deficient window set is flagged singular with NaN bounds.</li>
  *   <li>B3 the bound scales as σ.</li>
  *   <li>B4 the fit reaches it (fit package, {@code ReferenceTrialsTest}).</li>
+ *   <li>B5 the bound of the bulk speed carries the angles' 1σ ({@link
+ *       dev.sweepline.ground.bound.CramerRaoBound#sigmaBulkSpeed}, physics.md "Bulk speed from the normal speed
+ *       and the angles"): against central differences of U = U_n/cos θ ({@code BulkSpeedBoundTest}).</li>
+ *   <li>B6 a constrained alpha component's bound adds the prior's information to the windows' ({@link
+ *       dev.sweepline.ground.bound.FisherMatrix#bound(dev.sweepline.ground.fit.PlasmaModel, double[], double[],
+ *       dev.sweepline.ground.fit.AlphaPrior)}; {@code PartialAlphaTest}).</li>
  * </ol>
  */
 package dev.sweepline.ground.bound;

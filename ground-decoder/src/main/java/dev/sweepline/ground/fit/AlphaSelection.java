@@ -10,23 +10,29 @@ import org.hipparchus.distribution.continuous.ChiSquaredDistribution;
  * Signal Processing Vol. 2, generalised likelihood-ratio test [memory]). The alphas are accepted when the
  * drop exceeds the χ²(k) quantile at 1 − α. Under H0 the true n_α = 0 lies on the boundary n_α ≥ 0, where
  * the drop is a mixture of χ²(0) and χ²(k) (a chi-bar-squared): the test is then conservative, its actual
- * false-alarm rate at or below α. Measured on {@code AlphaSelectionTest}. Immutable.
+ * false-alarm rate at or below α. Measured on {@code AlphaSelectionTest}.
+ *
+ * <p>For the constrained alpha component ({@link AlphaPrior}) the drop is taken between the proton χ² and
+ * the joint fit's minimised χ² including the prior rows, and k is the effective number of extra free
+ * parameters, 3 less what the prior pins down (tr F_prior·Cov, {@link AlphaPrior#leverage}): between 1
+ * (only n_α free, the prior fixing U_α and w_α) and 3; the χ² distribution is taken at that real k
+ * (Hipparchus accepts any positive degrees of freedom). Measured on {@code PartialAlphaTest}. Immutable.
  */
 final class AlphaSelection {
     /** False-alarm rate α: the fraction of alpha-free spectra allowed to show alphas (common practice: 1 %). */
     static final double FALSE_ALARM_RATE = 0.01;
 
-    private final int extraParameters;
+    private final double extraParameters;
     private final double threshold;
 
-    /** A test for {@code extraParameters} free parameters the alpha component adds. */
-    AlphaSelection(int extraParameters) {
+    /** A test for {@code extraParameters} (&gt; 0) free parameters the alpha component adds. */
+    AlphaSelection(double extraParameters) {
         this.extraParameters = extraParameters;
         this.threshold = new ChiSquaredDistribution(extraParameters).inverseCumulativeProbability(1 - FALSE_ALARM_RATE);
     }
 
     /** Extra free parameters k. */
-    int extraParameters() {
+    double extraParameters() {
         return extraParameters;
     }
 

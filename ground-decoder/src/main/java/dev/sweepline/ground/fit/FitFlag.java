@@ -32,7 +32,13 @@ public enum FitFlag {
      * split's reach (24.96° for the demo cup: tan θ = R/d). The angle is then the middle of the interval
      * from the reach to the cut-off with its uniform 1σ ({@link FlowAngleEstimator}): finite but large.
      */
-    BEYOND_SPLIT_REACH(false);
+    BEYOND_SPLIT_REACH(false),
+    /**
+     * The windows hold part of the alpha distribution but not its peak: the alphas were fitted as a
+     * constrained component (speed and temperature tied to the protons' by {@link AlphaPrior}) and kept by
+     * the model-selection test of {@link AlphaSelection}.
+     */
+    ALPHAS_CONSTRAINED(false);
 
     private final boolean failure;
 

@@ -97,14 +97,16 @@ public final class FlowAngleEstimator {
         return Math.atan(cup.fullAcceptanceTan() + 2 * cup.tanOfShift(1.0));
     }
 
-    private static double angle(CupGeometry cup, double ratio) {
+    /** θ of a half-difference ratio on {@code cup}; the beyond-reach middle when saturated. */
+    static double angle(CupGeometry cup, double ratio) {
         if (saturated(ratio)) {
             return beyondReachAngle(cup, ratio);
         }
         return Math.atan(cup.tanOfShift(CupGeometry.inverseHalfDifference(ratio)));
     }
 
-    private static double sigma(CupGeometry cup, double ratio, double sigmaRatio) {
+    /** 1σ of θ from the 1σ of its ratio (linear propagation through D⁻¹ and atan). */
+    static double sigma(CupGeometry cup, double ratio, double sigmaRatio) {
         if (saturated(ratio)) {
             return beyondReachSigma(cup);
         }

@@ -30,4 +30,32 @@ public record FlowAngles(double thetaXRad, double thetaYRad, double sigmaThetaXR
     public double tanY() {
         return measured() ? Math.tan(thetaYRad) : 0.0;
     }
+
+    /**
+     * 1σ of the bulk speed U = U_n / cos θ from the 1σ of the normal speed U_n and of the two angles
+     * (physics.md, "Bulk speed from the normal speed and the angles"). With S = 1/cos θ = √(1 + tx² + ty²),
+     * tx = tan θx, ty = tan θy (ICD §8 convention):
+     * <pre>
+     *   U = U_n S,   ∂U/∂U_n = S,   ∂U/∂θx = U_n (tx / S)(1 + tx²),   ∂U/∂θy = U_n (ty / S)(1 + ty²)
+     *   σ_U² = S² σ_Un² + [U_n tx (1 + tx²)/S]² σθx² + [U_n ty (1 + ty²)/S]² σθy²
+     * </pre>
+     * U_n comes from the summed current and the angles from the quadrant differences, whose noises are
+     * uncorrelated for equal quadrant variances, so no cross term. Without measured angles only the first
+     * term (θ taken as 0).
+     *
+     * @param normalSpeedMPerS      U_n, m/s
+     * @param sigmaNormalSpeedMPerS 1σ of U_n, m/s
+     */
+    public double sigmaBulkSpeed(double normalSpeedMPerS, double sigmaNormalSpeedMPerS) {
+        double tx = tanX();
+        double ty = tanY();
+        double s = Math.sqrt(1 + tx * tx + ty * ty);
+        double var = s * s * sigmaNormalSpeedMPerS * sigmaNormalSpeedMPerS;
+        if (measured()) {
+            double gx = normalSpeedMPerS * tx / s * (1 + tx * tx);
+            double gy = normalSpeedMPerS * ty / s * (1 + ty * ty);
+            var += gx * gx * sigmaThetaXRad * sigmaThetaXRad + gy * gy * sigmaThetaYRad * sigmaThetaYRad;
+        }
+        return Math.sqrt(var);
+    }
 }

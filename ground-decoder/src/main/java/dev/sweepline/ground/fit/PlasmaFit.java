@@ -17,14 +17,17 @@ import java.util.Set;
  * @param normalParameters physical parameters of the model along the normal (n_p, U_p cos θ, w_p[, n_α,
  *                         U_α cos θ, w_α]), for the bound and the plots; empty on failure
  * @param areaM2           effective area times acceptance used by the model, m²
+ * @param alphaPrior       the prior rows of a constrained alpha component ({@link FitFlag#ALPHAS_CONSTRAINED}),
+ *                         null otherwise; the bound of the fit adds their information
  */
 public record PlasmaFit(SpeciesMoments protons, SpeciesMoments alphas, FlowAngles angles, double reducedChiSquare,
-        int windowsUsed, int iterations, Set<FitFlag> flags, double[] normalParameters, double areaM2) {
+        int windowsUsed, int iterations, Set<FitFlag> flags, double[] normalParameters, double areaM2,
+        AlphaPrior alphaPrior) {
 
     /** A failed fit with these flags on a cup of effective area {@code areaM2}. */
     public static PlasmaFit failed(EnumSet<FitFlag> flags, int windows, FlowAngles angles, double areaM2) {
         return new PlasmaFit(SpeciesMoments.NONE, SpeciesMoments.NONE, angles, Double.NaN, windows, 0,
-                Collections.unmodifiableSet(flags), new double[0], areaM2);
+                Collections.unmodifiableSet(flags), new double[0], areaM2, null);
     }
 
     /** A failed fit with these flags and no cup (area NaN): nothing was fitted, so no model is drawn. */
@@ -37,7 +40,7 @@ public record PlasmaFit(SpeciesMoments protons, SpeciesMoments alphas, FlowAngle
         EnumSet<FitFlag> f = flags.isEmpty() ? EnumSet.noneOf(FitFlag.class) : EnumSet.copyOf(flags);
         f.add(flag);
         return new PlasmaFit(protons, alphas, angles, reducedChiSquare, windowsUsed, iterations,
-                Collections.unmodifiableSet(f), normalParameters, areaM2);
+                Collections.unmodifiableSet(f), normalParameters, areaM2, alphaPrior);
     }
 
     /** True unless a failure flag is set. */

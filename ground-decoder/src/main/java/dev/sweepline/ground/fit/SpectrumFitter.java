@@ -79,7 +79,63 @@ public final class SpectrumFitter {
             flags.add(FitFlag.NO_SIGNAL);
             return PlasmaFit.failed(flags, m, FlowAngles.NONE, cup.effectiveAreaM2());
         }
-        FlowAngles angles = FlowAngleEstimator.estimate(in, cup);
+        FlowAngles preliminary = FlowAngleEstimator.estimate(in, cup);
+        double area = cup.effectiveAreaM2() * cup.transmission(preliminary.tanX(), preliminary.tanY());
+        if (!(area > 0)) {
+            // the estimated image lies off the collector: nothing to scale the current by
+            flags.add(FitFlag.NO_SIGNAL);
+            angleFlags(preliminary, flags);
+            return PlasmaFit.failed(flags, m, preliminary, cup.effectiveAreaM2());
+        }
+        PlasmaModel protonModel = new PlasmaModel(in.lowVolts(), in.highVolts(), area, false);
+        double[] guess = InitialGuess.protons(protonModel, in.totalAmps(), area);
+        if (guess == null) {
+            flags.add(FitFlag.NO_SIGNAL);
+            angleFlags(preliminary, flags);
+            return PlasmaFit.failed(flags, m, preliminary, cup.effectiveAreaM2());
+        }
+        LeastSquaresRun.Outcome best = LeastSquaresRun.fit(protonModel, in.totalAmps(), in.sigmaAmps(), guess);
+        // no covariance means no errors: a product without errors is not a product
+        if (best == null || !physical(best.parameters(), in) || !finiteErrors(best.covariance())) {
+            flags.add(FitFlag.NO_CONVERGENCE);
+            angleFlags(preliminary, flags);
+            return PlasmaFit.failed(flags, m, preliminary, cup.effectiveAreaM2());
+        }
+        AlphaPrior prior = null;
+        LeastSquaresRun.Outcome joint = null;
+        if (m >= MIN_WINDOWS_JOINT) {
+            switch (AlphaCoverage.of(protonModel, best.parameters())) {
+                case PEAK -> joint = jointFit(in, area, protonModel, best);
+                case PART -> {
+                    prior = AlphaPrior.forProtonSpeed(best.parameters()[1]);
+                    joint = constrainedFit(in, area, protonModel, best, prior);
+                }
+                case NONE -> joint = null;
+            }
+        }
+        if (joint != null) {
+            best = joint;
+            if (prior != null) {
+                flags.add(FitFlag.ALPHAS_CONSTRAINED);
+            }
+        } else {
+            prior = null;
+            flags.add(FitFlag.ALPHAS_NOT_FITTED);
+        }
+        FlowAngles angles = speciesAngles(in, preliminary, joint != null ? new PlasmaModel(in.lowVolts(), in.highVolts(),
+                area, true) : protonModel, best.parameters());
+        double acceptance = cup.transmission(angles.tanX(), angles.tanY());
+        if (acceptance > 0 && acceptance != area / cup.effectiveAreaM2()) {
+            // beyond full acceptance the refined angle changes A(θ)/A(0), and n with it (I ∝ n A)
+            best = best.withDensityScale(area / (cup.effectiveAreaM2() * acceptance));
+            area = cup.effectiveAreaM2() * acceptance;
+        }
+        angleFlags(angles, flags);
+        return compose(in, angles, area, best, flags, prior);
+    }
+
+    /** The angle flags of {@code angles}. */
+    private void angleFlags(FlowAngles angles, EnumSet<FitFlag> flags) {
         if (!angles.measured()) {
             flags.add(FitFlag.ANGLES_NOT_FITTED);
         } else if (Math.abs(angles.ratioX()) >= 1 || Math.abs(angles.ratioY()) >= 1
@@ -89,45 +145,30 @@ public final class SpectrumFitter {
         if (FlowAngleEstimator.beyondReach(angles, cup)) {
             flags.add(FitFlag.BEYOND_SPLIT_REACH);
         }
-        double area = cup.effectiveAreaM2() * cup.transmission(angles.tanX(), angles.tanY());
-        if (!(area > 0)) {
-            // the estimated image lies off the collector: nothing to scale the current by
-            flags.add(FitFlag.NO_SIGNAL);
-            return PlasmaFit.failed(flags, m, angles, cup.effectiveAreaM2());
+    }
+
+    /**
+     * The proton angles from each species' share of the quadrant differences ({@link SpeciesFlowAngles}),
+     * with the fitted model's proton and alpha currents per window.
+     */
+    private FlowAngles speciesAngles(SpectrumInput in, FlowAngles preliminary, PlasmaModel model, double[] p) {
+        if (!preliminary.measured()) {
+            return preliminary;
         }
-        PlasmaModel protonModel = new PlasmaModel(in.lowVolts(), in.highVolts(), area, false);
-        double[] guess = InitialGuess.protons(protonModel, in.totalAmps(), area);
-        if (guess == null) {
-            flags.add(FitFlag.NO_SIGNAL);
-            return PlasmaFit.failed(flags, m, angles, cup.effectiveAreaM2());
+        int m = in.windows();
+        double[] protons = new double[m];
+        double[] alphas = model.withAlphas() ? new double[m] : null;
+        for (int j = 0; j < m; j++) {
+            protons[j] = model.speciesCurrent(Species.PROTON, j, p[0], p[1], p[2]);
+            if (alphas != null) {
+                alphas[j] = model.speciesCurrent(Species.ALPHA, j, p[3], p[4], p[5]);
+            }
         }
-        LeastSquaresRun.Outcome best = LeastSquaresRun.fit(protonModel, in.totalAmps(), in.sigmaAmps(), guess);
-        // no covariance means no errors: a product without errors is not a product
-        if (best == null || !physical(best.parameters(), in) || !finiteErrors(best.covariance())) {
-            flags.add(FitFlag.NO_CONVERGENCE);
-            return PlasmaFit.failed(flags, m, angles, cup.effectiveAreaM2());
-        }
-        LeastSquaresRun.Outcome joint = alphasCovered(protonModel, best.parameters()) && m >= MIN_WINDOWS_JOINT
-                ? jointFit(in, area, protonModel, best) : null;
-        if (joint != null) {
-            best = joint;
-        } else {
-            flags.add(FitFlag.ALPHAS_NOT_FITTED);
-        }
-        return compose(in, angles, area, best, flags);
+        return SpeciesFlowAngles.refine(in, cup, preliminary, protons, alphas);
     }
 
     private static boolean physical(double[] p, SpectrumInput in) {
         return p[0] > 0 && p[2] > 0 && p[1] > LeastSquaresRun.MIN_SPEED && p[1] < LeastSquaresRun.MAX_SPEED;
-    }
-
-    /** The alpha peak (alpha threshold speed = U_p) lies below the top edge. */
-    private static boolean alphasCovered(PlasmaModel m, double[] p) {
-        double top = 0;
-        for (int j = 0; j < m.windows(); j++) {
-            top = Math.max(top, m.alphaThreshold(j, true));
-        }
-        return top > p[1];
     }
 
     private static LeastSquaresRun.Outcome jointFit(SpectrumInput in, double area, PlasmaModel protonModel,
@@ -157,6 +198,43 @@ public final class SpectrumFitter {
         boolean sane = alphaRatio > 0 && alphaRatio < MAX_ALPHA_RATIO && q[4] > 0.7 * q[1] && q[4] < 1.5 * q[1]
                 && alphaPeakVolts < max(in.highVolts()) && FREE_ALPHAS.accepts(protons.chiSquare(), o.chiSquare());
         return sane && finiteErrors(o.covariance()) ? o : null;
+    }
+
+    /**
+     * The constrained alpha component for windows that hold part of the alphas but not their peak: the
+     * joint model with the {@code prior} rows, started from the proton fit and an alpha density that
+     * explains the proton fit's positive residuals in the windows the alphas reach (alphas at U_p with
+     * T_α = 4 T_p). Kept when physical and when the χ² drop passes {@link AlphaSelection} with k the
+     * effective number of extra free parameters (3 less the prior's leverage).
+     */
+    private static LeastSquaresRun.Outcome constrainedFit(SpectrumInput in, double area, PlasmaModel protonModel,
+            LeastSquaresRun.Outcome protons, AlphaPrior prior) {
+        double[] p = protons.parameters();
+        double wAlpha = AlphaCoverage.startThermalSpeed(p[2]);
+        double residual = 0;
+        double unit = 0;
+        for (int j = 0; j < in.windows(); j++) {
+            if (protonModel.alphaThreshold(j, true) > p[1] - AlphaCoverage.REACH_THERMAL * wAlpha) {
+                residual += Math.max(0, in.totalAmps()[j] - protonModel.speciesCurrent(Species.PROTON, j, p[0], p[1], p[2]));
+                unit += protonModel.speciesCurrent(Species.ALPHA, j, p[0], p[1], wAlpha);
+            }
+        }
+        double ratio = unit > 0 ? residual / unit : DEFAULT_ALPHA_RATIO;
+        if (!(ratio > 0.005 && ratio < MAX_ALPHA_RATIO)) {
+            ratio = DEFAULT_ALPHA_RATIO;
+        }
+        double[] start = {p[0], p[1], p[2], ratio * p[0], p[1], wAlpha};
+        PlasmaModel joint = new PlasmaModel(in.lowVolts(), in.highVolts(), area, true);
+        LeastSquaresRun.Outcome o = LeastSquaresRun.fit(joint, in.totalAmps(), in.sigmaAmps(), start, prior);
+        if (o == null || !physical(o.parameters(), in) || !finiteErrors(o.covariance())) {
+            return null;
+        }
+        double[] q = o.parameters();
+        double alphaRatio = q[3] / q[0];
+        double extra = PlasmaModel.JOINT_PARAMETERS - PlasmaModel.PROTON_PARAMETERS - o.leverage();
+        boolean sane = alphaRatio > 0 && alphaRatio < MAX_ALPHA_RATIO && q[4] > 0.7 * q[1] && q[4] < 1.5 * q[1]
+                && extra > 0 && new AlphaSelection(extra).accepts(protons.chiSquare(), o.totalChiSquare());
+        return sane ? o : null;
     }
 
     /** True when the covariance exists and every diagonal is positive and finite (errors can be reported). */
@@ -189,10 +267,11 @@ public final class SpectrumFitter {
     }
 
     private static PlasmaFit compose(SpectrumInput in, FlowAngles angles, double area, LeastSquaresRun.Outcome o,
-            EnumSet<FitFlag> flags) {
+            EnumSet<FitFlag> flags, AlphaPrior prior) {
         double[] p = o.parameters();
         int np = p.length;
-        int dof = in.windows() - np;
+        // the data's degrees of freedom: windows less the parameters in effect (a prior pins some down)
+        double dof = in.windows() - o.effectiveParameters();
         double chi2 = dof > 0 ? o.chiSquare() / dof : Double.NaN;
         if (chi2 > POOR_FIT_REDUCED_CHI2) {
             flags.add(FitFlag.POOR_FIT);
@@ -205,7 +284,7 @@ public final class SpectrumFitter {
         SpeciesMoments alphas = np == PlasmaModel.JOINT_PARAMETERS
                 ? moments(Species.ALPHA, p, o.covariance(), 3, angles) : SpeciesMoments.NONE;
         return new PlasmaFit(protons, alphas, angles, chi2, in.windows(), o.iterations(),
-                Collections.unmodifiableSet(flags), p.clone(), area);
+                Collections.unmodifiableSet(flags), p.clone(), area, prior);
     }
 
     private static SpeciesMoments moments(Species s, double[] p, double[][] cov, int k, FlowAngles angles) {
@@ -222,12 +301,6 @@ public final class SpectrumFitter {
         double sn = Math.sqrt(cov[k][k]);
         double sun = Math.sqrt(cov[k + 1][k + 1]);
         double sw = Math.sqrt(cov[k + 2][k + 2]);
-        double su2 = sun * sun * sec * sec;
-        if (angles.measured()) {
-            double stx = angles.sigmaThetaXRad() * (1 + tx * tx);
-            double sty = angles.sigmaThetaYRad() * (1 + ty * ty);
-            su2 += Math.pow(un * tx / sec * stx, 2) + Math.pow(un * ty / sec * sty, 2);
-        }
-        return new SpeciesMoments(n, un * sec, w, t, sn, Math.sqrt(su2), sw, 2 * t * sw / w);
+        return new SpeciesMoments(n, un * sec, w, t, sn, angles.sigmaBulkSpeed(un, sun), sw, 2 * t * sw / w);
     }
 }

@@ -50,7 +50,7 @@ public final class FitCollector implements DecodeListener {
         CramerRaoBound bound = null;
         if (fit.ok()) {
             PlasmaModel m = new PlasmaModel(in.lowVolts(), in.highVolts(), fit.areaM2(), fit.alphasFitted());
-            bound = FisherMatrix.bound(m, fit.normalParameters(), in.sigmaAmps());
+            bound = FisherMatrix.bound(m, fit.normalParameters(), in.sigmaAmps(), fit.alphaPrior());
             if (bound.singular()) {
                 fit = fit.withFlag(FitFlag.SINGULAR_BOUND);
             }

@@ -1,7 +1,6 @@
 package dev.sweepline.ground.product;
 
 import dev.sweepline.ground.bound.CramerRaoBound;
-import dev.sweepline.ground.fit.CupGeometry;
 import dev.sweepline.ground.fit.PlasmaFit;
 
 /**
@@ -58,13 +57,12 @@ public record MomentRecord(double taiSeconds, String isoTai, int apid, String mo
         return bound == null ? Double.NaN : bound.sigmaDensity() * PER_CC;
     }
 
-    /** Bound of |U_p|, km/s: the bound of U along the normal over cos θ. */
+    /** Bound of |U_p|, km/s: the bound of U along the normal over cos θ, with the angles' 1σ propagated. */
     public double crlbSpeedKmPerS() {
         if (bound == null) {
             return Double.NaN;
         }
-        double cos = CupGeometry.cosOfFlow(fit.angles().tanX(), fit.angles().tanY());
-        return bound.sigmaSpeed() / cos * KM;
+        return bound.sigmaBulkSpeed(fit.angles(), fit.normalParameters()[1]) * KM;
     }
 
     /** Bound of T_p, K: 2 T σ_w / w (physics.md). */

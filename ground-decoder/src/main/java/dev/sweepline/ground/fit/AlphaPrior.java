@@ -1,0 +1,102 @@
+package dev.sweepline.ground.fit;
+
+/**
+ * The prior of the constrained alpha component, for windows that hold part of the alpha distribution but
+ * not its peak: two Gaussian pseudo-observations appended to the window rows of the joint model (physical
+ * parameters n_p, U_p, w_p, n_α, U_α, w_α along the normal).
+ * <ol>
+ *   <li>Drift: U_α − U_p = {@link #driftMeanMPerS} ± {@link #driftSigmaMPerS}. In the fast wind the alphas
+ *       stream ahead of the protons by up to about the local Alfvén speed, along the field; in the slow wind
+ *       the drift is near 0 (Marsch et al. 1982, JGR 87, 52; Kasper et al. 2008, PRL 101, 261103
+ *       [memory]). The ground knows no field strength, so the scale is taken from the wind itself:
+ *       0 ± {@link #DRIFT_FRACTION} U_p (about 70 km/s in a 700 km/s wind, of the order of the Alfvén speed
+ *       at 1 AU [memory]).</li>
+ *   <li>Temperature ratio: T_α/T_p = m_α w_α² / (m_p w_p²) = {@link #TEMPERATURE_RATIO} ±
+ *       {@link #TEMPERATURE_RATIO_SIGMA}: about 4 (mass-proportional temperatures) in the fast wind, lower
+ *       in collisional slow wind (physics.md "alpha temperature" [memory]; Kasper et al. 2008 [memory]), so
+ *       ± 2 covers 2 to 6 at 1σ.</li>
+ * </ol>
+ * Each row adds ((value − mean)/σ)² to χ² and g gᵀ/σ² to the information, g the row's gradient; the
+ * same rows give the fit ({@link LeastSquaresRun}), its effective number of free parameters and the bound.
+ *
+ * @param driftMeanMPerS  mean of U_α − U_p, m/s
+ * @param driftSigmaMPerS 1σ of U_α − U_p, m/s
+ */
+public record AlphaPrior(double driftMeanMPerS, double driftSigmaMPerS) {
+    /** Rows the prior adds. */
+    public static final int ROWS = 2;
+    /** Drift 1σ in units of the proton speed (see the class note; [memory]). */
+    public static final double DRIFT_FRACTION = 0.1;
+    /** Mean T_α/T_p (physics.md "alpha temperature", [memory]). */
+    public static final double TEMPERATURE_RATIO = 4.0;
+    /** 1σ of T_α/T_p (see the class note; [memory]). */
+    public static final double TEMPERATURE_RATIO_SIGMA = 2.0;
+    private static final double MASS_RATIO = Species.ALPHA.massKg() / Species.PROTON.massKg();
+
+    /** The prior of a wind whose proton normal speed is {@code protonSpeedMPerS}: drift 0 ± 0.1 U_p. */
+    public static AlphaPrior forProtonSpeed(double protonSpeedMPerS) {
+        return new AlphaPrior(0.0, DRIFT_FRACTION * protonSpeedMPerS);
+    }
+
+    /**
+     * Whitened residuals r_i = (value_i − mean_i)/σ_i into {@code residual[0..1]} and their gradients in the
+     * physical parameters into {@code gradient[i][0..5]}.
+     */
+    public void rows(double[] p, double[] residual, double[][] gradient) {
+        double ratio = MASS_RATIO * p[5] * p[5] / (p[2] * p[2]);
+        residual[0] = (p[4] - p[1] - driftMeanMPerS) / driftSigmaMPerS;
+        residual[1] = (ratio - TEMPERATURE_RATIO) / TEMPERATURE_RATIO_SIGMA;
+        for (int i = 0; i < ROWS; i++) {
+            java.util.Arrays.fill(gradient[i], 0.0);
+        }
+        gradient[0][1] = -1 / driftSigmaMPerS;
+        gradient[0][4] = 1 / driftSigmaMPerS;
+        gradient[1][2] = -2 * ratio / p[2] / TEMPERATURE_RATIO_SIGMA;
+        gradient[1][5] = 2 * ratio / p[5] / TEMPERATURE_RATIO_SIGMA;
+    }
+
+    /** Σ r_i²: the prior's part of χ² at {@code p}. */
+    public double chiSquare(double[] p) {
+        double[] r = new double[ROWS];
+        rows(p, r, new double[ROWS][PlasmaModel.JOINT_PARAMETERS]);
+        return r[0] * r[0] + r[1] * r[1];
+    }
+
+    /** The prior's information Σ g gᵀ at {@code p}, 6 × 6, physical parameters. */
+    public double[][] information(double[] p) {
+        double[][] g = new double[ROWS][PlasmaModel.JOINT_PARAMETERS];
+        rows(p, new double[ROWS], g);
+        int np = PlasmaModel.JOINT_PARAMETERS;
+        double[][] f = new double[np][np];
+        for (double[] row : g) {
+            for (int a = 0; a < np; a++) {
+                for (int b = 0; b < np; b++) {
+                    f[a][b] += row[a] * row[b];
+                }
+            }
+        }
+        return f;
+    }
+
+    /**
+     * How many parameters the prior pins down: tr(F_prior · Cov) = Σ_i g_iᵀ Cov g_i, between 0 (data alone
+     * fix the alphas) and {@link #ROWS} (the prior alone does). The model's effective number of free
+     * parameters is its parameter count less this (the trace of the hat matrix of a penalised fit: Hastie &amp;
+     * Tibshirani 1990, Generalized Additive Models §3.5 [memory]).
+     *
+     * @param cov the fit's covariance (F_data + F_prior)⁻¹, physical parameters
+     */
+    public double leverage(double[] p, double[][] cov) {
+        double[][] g = new double[ROWS][PlasmaModel.JOINT_PARAMETERS];
+        rows(p, new double[ROWS], g);
+        double sum = 0;
+        for (double[] row : g) {
+            for (int a = 0; a < row.length; a++) {
+                for (int b = 0; b < row.length; b++) {
+                    sum += row[a] * cov[a][b] * row[b];
+                }
+            }
+        }
+        return sum;
+    }
+}
