@@ -16,10 +16,13 @@ import org.openjdk.jmh.annotations.Warmup;
 
 /**
  * Fit rate, spectra per second on one thread (one core): the score is ops/s, one op one spectrum fitted.
- * Three shapes: the physics.md reference case (14 windows, protons only), a near-Sun survey spectrum
- * (128 windows of the default table, joint protons + alphas, NearSunCase) and a near-Sun focus-like band
- * (the 64 windows around the proton and alpha peaks, joint). Each draws from a pool of 64 noisy spectra
- * made once from a recorded seed, so that no two consecutive fits see the same data.
+ * Four shapes: the physics.md reference case (14 windows, protons only), the same plasma on a 32-window
+ * focus band of the default table centred on its peak (protons only: the band stops below the alphas'
+ * reach), a near-Sun survey spectrum (128 windows of the default table, joint protons + alphas,
+ * NearSunCase) and a near-Sun focus-like band (the 64 windows around the proton and alpha peaks, joint).
+ * Each draws from a pool of 64 noisy spectra made once from a recorded seed, so that no two consecutive
+ * fits see the same data. Every fit is checked ({@link #checked}): a fit that fails, or that should carry
+ * alphas and does not, throws, so a broken fitter cannot post a fast score.
  *
  * <p>Run: {@code mvn -q -o -pl ground-decoder -Pjmh verify -DskipTests -Djmh.includes=FitBenchmark
  * -Djmh.args="-f 1 -wi 3 -w 2 -i 5 -r 2"} (with {@code -am} the parent module's exec finds no benchmark
@@ -37,6 +40,7 @@ public class FitBenchmark {
     static final long SEED = 31337L;
 
     SpectrumInput[] reference = new SpectrumInput[POOL];
+    SpectrumInput[] focus32 = new SpectrumInput[POOL];
     SpectrumInput[] survey = new SpectrumInput[POOL];
     SpectrumInput[] focus = new SpectrumInput[POOL];
     final SpectrumFitter fitter = new SpectrumFitter();
@@ -51,12 +55,27 @@ public class FitBenchmark {
         double[] nearSigma = NearSunCase.sigma(near);
         int from = 52;
         int to = from + 64;
+        int peak = peakWindow(Species.PROTON.voltsAtSpeed(ReferenceCase.SPEED));
+        double[] lo32 = new double[32];
+        double[] hi32 = new double[32];
+        for (int j = 0; j < 32; j++) {
+            lo32[j] = DemoCup.TABLE.lowVolts(peak - 16 + j);
+            hi32[j] = DemoCup.TABLE.highVolts(peak - 16 + j);
+        }
+        double[] ref32 = new double[32];
+        new PlasmaModel(lo32, hi32, ReferenceCase.AREA, false).evaluate(new double[] {ReferenceCase.DENSITY,
+            ReferenceCase.SPEED, ReferenceCase.thermalSpeed()}, ref32, null);
         for (int k = 0; k < POOL; k++) {
             double[] r = new double[ref.length];
             for (int j = 0; j < r.length; j++) {
                 r[j] = ref[j] + ReferenceCase.SIGMA * rng.nextGaussian();
             }
             reference[k] = SpectrumInput.summed(ReferenceCase.low(), ReferenceCase.high(), r, ReferenceCase.SIGMA);
+            double[] r32 = new double[32];
+            for (int j = 0; j < 32; j++) {
+                r32[j] = ref32[j] + ReferenceCase.SIGMA * rng.nextGaussian();
+            }
+            focus32[k] = SpectrumInput.summed(lo32, hi32, r32, ReferenceCase.SIGMA);
             double[] s = new double[near.length];
             for (int j = 0; j < s.length; j++) {
                 s[j] = near[j] + nearSigma[j] * rng.nextGaussian();
@@ -68,6 +87,24 @@ public class FitBenchmark {
         }
     }
 
+    /** The default-table window holding {@code volts}. */
+    static int peakWindow(double volts) {
+        for (int w = 0; w < DemoCup.TABLE.windows(); w++) {
+            if (DemoCup.TABLE.lowVolts(w) <= volts && volts < DemoCup.TABLE.highVolts(w)) {
+                return w;
+            }
+        }
+        throw new IllegalStateException(volts + " V lies outside the default table");
+    }
+
+    /** {@code f}, or an exception when it failed or lacks the alphas it should have. */
+    static PlasmaFit checked(PlasmaFit f, boolean alphas) {
+        if (!f.ok() || alphas && !f.alphasFitted()) {
+            throw new IllegalStateException("benchmark fit is wrong: " + f.flagText() + " " + f.protons());
+        }
+        return f;
+    }
+
     private int index() {
         next = (next + 1) & (POOL - 1);
         return next;
@@ -76,18 +113,24 @@ public class FitBenchmark {
     /** 14 windows, protons only. */
     @Benchmark
     public PlasmaFit referenceProtons() {
-        return fitter.fit(reference[index()]);
+        return checked(fitter.fit(reference[index()]), false);
+    }
+
+    /** 32 windows, protons only. */
+    @Benchmark
+    public PlasmaFit focus32Protons() {
+        return checked(fitter.fit(focus32[index()]), false);
     }
 
     /** 128 windows, protons + alphas. */
     @Benchmark
     public PlasmaFit nearSunSurveyJoint() {
-        return fitter.fit(survey[index()]);
+        return checked(fitter.fit(survey[index()]), true);
     }
 
     /** 64 windows, protons + alphas. */
     @Benchmark
     public PlasmaFit nearSunFocusJoint() {
-        return fitter.fit(focus[index()]);
+        return checked(fitter.fit(focus[index()]), true);
     }
 }
