@@ -28,10 +28,10 @@ final class FswInstrumentsCommand implements Callable<Integer> {
                         s.windows().count(), name.equals(Instruments.defaultName()) ? " (default)" : "",
                         s.description());
             }
-            return FswRunCommand.EXIT_OK;
+            return ExitStatus.OK;
         } catch (FileFormatException e) {
             err.println(e.getMessage());
-            return FswRunCommand.EXIT_BAD_INPUT;
+            return ExitStatus.INPUT;
         }
     }
 }

@@ -4,7 +4,7 @@ import picocli.CommandLine.Command;
 import picocli.CommandLine;
 
 /** {@code sweepline-fsw.jar}: the flight software on a PC, talking to real or simulated electronics. */
-@Command(name = "sweepline-fsw", mixinStandardHelpOptions = true, version = "sweepline-fsw 0.1",
+@Command(name = "sweepline-fsw", mixinStandardHelpOptions = true, versionProvider = FswMain.Version.class,
         description = {"The Faraday-cup flight software on a PC, on a serial or TCP link to the electronics.",
             "",
             HvText.CAUTION},
@@ -20,7 +20,15 @@ public final class FswMain implements Runnable {
 
     /** The command line, for tests that run it in process. */
     public static CommandLine commandLine() {
-        return new CommandLine(new FswMain());
+        return CommandLines.configure(new CommandLine(new FswMain()), "run");
+    }
+
+    /** The version line: the Maven build's project version. */
+    static final class Version implements CommandLine.IVersionProvider {
+        @Override
+        public String[] getVersion() {
+            return new String[] {"sweepline-fsw " + CommandLines.version(FswMain.class)};
+        }
     }
 
     @Override

@@ -1,18 +1,22 @@
 package dev.sweepline.fsw.host;
 
+import dev.sweepline.fsw.command.CommandReason;
+import dev.sweepline.fsw.exec.Executive;
 import dev.sweepline.fsw.exec.FlightConfig;
 import dev.sweepline.fsw.exec.FlightSoftware;
 import dev.sweepline.fsw.host.instrument.Instruments;
+import dev.sweepline.fsw.host.script.CommandScript;
+import dev.sweepline.fsw.host.script.GroundCommandCounter;
+import dev.sweepline.fsw.host.script.ScriptException;
+import dev.sweepline.fsw.host.script.ScriptPlayer;
 import dev.sweepline.fsw.host.yaml.FileFormatException;
 import dev.sweepline.fsw.instrument.InstrumentDescription;
 import dev.sweepline.fsw.link.FramedInstrumentLink;
 import dev.sweepline.fsw.link.LinkWatchdog;
+import dev.sweepline.fsw.nvm.FileNonVolatileStore;
 import dev.sweepline.fsw.sweep.SweepListener;
 import java.io.IOException;
 import java.io.PrintStream;
-import java.nio.file.AccessDeniedException;
-import java.nio.file.FileSystemException;
-import java.nio.file.NoSuchFileException;
 import java.util.concurrent.Callable;
 import java.util.concurrent.CountDownLatch;
 import java.util.concurrent.TimeUnit;
@@ -31,23 +35,18 @@ import picocli.CommandLine.Option;
             "",
             HvText.CAUTION,
             "",
-            HvText.END_OF_RUN},
-        exitCodeListHeading = "Exit status:%n",
-        exitCodeList = {"0:planned end, HV off confirmed", "1:run failed (exception, link lost, SAFE), HV off confirmed",
-            "2:bad input (options, link or telemetry output that cannot be opened)", "3:HV off NOT confirmed"})
+            HvText.END_OF_RUN})
 final class FswRunCommand implements Callable<Integer> {
-    /** Planned end reached and the HV off confirmed. */
-    static final int EXIT_OK = 0;
-    /** The run ended early (exception, link lost, SAFE); the HV off was confirmed. */
-    static final int EXIT_RUN_FAILED = 1;
-    /** Bad input: an option, or a link or telemetry output that cannot be opened. */
-    static final int EXIT_BAD_INPUT = 2;
-    /** The HV off could not be confirmed (hardware ICD §4.2). */
-    static final int EXIT_HV_NOT_CONFIRMED = 3;
     /** Time the shutdown hook leaves the run's thread to start the HV shutdown itself, milliseconds (design value). */
     static final long HOOK_GRACE_MILLIS = 1_000;
     /** Time the shutdown hook then leaves the run's thread to print its summary, milliseconds (design value). */
     static final long HOOK_SUMMARY_MILLIS = 1_000;
+
+    /**
+     * Largest {@code --timeout-margin}, ms: the electronics' 2 s link watchdog (hardware ICD §4.1); a
+     * longer wait for a reply would let the watchdog switch the HV off before the retry.
+     */
+    static final long MAX_TIMEOUT_MARGIN_MILLIS = LinkWatchdog.TIMEOUT_MICROS / 1_000;
 
     /** HV choices. */
     enum Hv { off, arm }
@@ -63,17 +62,20 @@ final class FswRunCommand implements Callable<Integer> {
             description = "Where the telemetry frames go: a file, or a ground listener to connect to.")
     String tm;
 
+    @Option(names = "--force", description = "Overwrite an existing --tm file (without it, an existing file is refused).")
+    boolean force;
+
     @Option(names = "--instrument", paramLabel = "NAME|FILE",
             description = "The instrument description: a built-in name or a file (default: ${DEFAULT-VALUE}; "
                 + "instruments/FORMAT.md).")
     String instrument = Instruments.defaultName();
 
-    @Option(names = "--minutes", paramLabel = "M",
+    @Option(names = "--minutes", paramLabel = "M", converter = Ranges.Positive.class,
             description = "Minutes to run, counted from the start of the run, after the HV prompt "
                 + "(default: until interrupted).")
     Double minutes;
 
-    @Option(names = "--baud", paramLabel = "B", description = "Serial line rate (default: ${DEFAULT-VALUE}).")
+    @Option(names = "--baud", paramLabel = "B", converter = Ranges.PositiveInt.class, description = "Serial line rate (default: ${DEFAULT-VALUE}).")
     int baud = SerialTransport.DEFAULT_BAUD;
 
     @Option(names = "--clock", paramLabel = "realtime|link",
@@ -81,7 +83,7 @@ final class FswRunCommand implements Callable<Integer> {
                 + "events, for a simulator serving as fast as possible (same time line as the in-process bench).")
     Clock clock = Clock.realtime;
 
-    @Option(names = "--reply-wait-ms", paramLabel = "MS",
+    @Option(names = "--reply-wait-ms", paramLabel = "MS", converter = Ranges.PositiveLong.class,
             description = "With --clock link: wall-clock wait for a reply before letting its time-out run "
                 + "(default: ${DEFAULT-VALUE}; keep two of them below the electronics' 2 s link watchdog).")
     long replyWaitMillis = 500;
@@ -95,8 +97,26 @@ final class FswRunCommand implements Callable<Integer> {
             description = "Second flag that fires an armed HV without the prompt: must be FIRE (ignored without --hv arm).")
     String hvConfirm;
 
-    @Option(names = "--hv-timeout-s", paramLabel = "S", description = "Arm-to-fire time-out (default: ${DEFAULT-VALUE} s).")
+    @Option(names = "--hv-timeout-s", paramLabel = "S", converter = Ranges.PositiveLong.class, description = "Arm-to-fire time-out (default: ${DEFAULT-VALUE} s).")
     long hvTimeoutSeconds = HvArming.DEFAULT_TIMEOUT_MICROS / 1_000_000L;
+
+    @Option(names = "--commands", paramLabel = "SCRIPT",
+            description = "Time-tagged telecommands to send during the run, signed with the flight key (commands.md §7; "
+                + "TABLE_IMAGE uplinks a campaign's recommended.table). Times count from the start of the run.")
+    java.nio.file.Path commands;
+
+    @Option(names = "--nvm", paramLabel = "FILE",
+            description = "File standing for the flight software's non-volatile memory: a committed table survives "
+                + "restarts, and the command counter is kept beside it (commands.md §4.3, §7.3).")
+    java.nio.file.Path nvm;
+
+    @Option(names = "--timeout-margin", paramLabel = "MS", converter = Ranges.NonNegativeLong.class,
+            description = "Reply time-out margin beyond each step's own duration, milliseconds (default: "
+                + "${DEFAULT-VALUE}; hardware ICD §4; at most " + MAX_TIMEOUT_MARGIN_MILLIS + ").")
+    long timeoutMarginMillis = Executive.DEFAULT_TIMEOUT_MARGIN_MICROS / 1_000;
+
+    /** The sender's command counter of {@code --commands} (set once the script is read). */
+    private GroundCommandCounter counter;
 
     /** Where the operator types FIRE (tests give their own). */
     HvPrompt.Console console = HvPrompt.stdin(System.in);
@@ -114,14 +134,37 @@ final class FswRunCommand implements Callable<Integer> {
             address = LinkAddress.parse(link);
         } catch (IllegalArgumentException e) {
             err.println("--link: " + e.getMessage());
-            return EXIT_BAD_INPUT;
+            return ExitStatus.USAGE;
         }
         InstrumentDescription described;
         try {
             described = Instruments.resolve(instrument).flight();
         } catch (FileFormatException e) {
             err.println("--instrument: " + e.getMessage());
-            return EXIT_BAD_INPUT;
+            return ExitStatus.INPUT;
+        }
+        if (timeoutMarginMillis > MAX_TIMEOUT_MARGIN_MILLIS) {
+            err.println("--timeout-margin: must be at most " + MAX_TIMEOUT_MARGIN_MILLIS + " ms (the electronics' link "
+                    + "watchdog, hardware ICD §4.1), got " + timeoutMarginMillis);
+            return ExitStatus.USAGE;
+        }
+        CommandScript script = null;
+        if (commands != null) {
+            try {
+                script = CommandScript.read(commands, described);
+                ScriptPlayer.refuseInjections(script);
+                // the sender's counter is kept beside the NVM file, as the bench keeps it (commands.md §7.3)
+                counter = nvm == null ? GroundCommandCounter.inMemory() : GroundCommandCounter.beside(nvm);
+            } catch (ScriptException e) {
+                err.println("--commands " + commands + ":" + e.getMessage());
+                return ExitStatus.INPUT;
+            } catch (IOException e) {
+                err.println("--commands " + commands + ": " + CommandLines.reason(e));
+                return ExitStatus.INPUT;
+            }
+            for (String w : script.warnings()) {
+                out.println("warning: " + commands + ": " + w);
+            }
         }
         if (hvConfirm != null && hv != Hv.arm) {
             out.println("--hv-confirm ignored: it confirms only an armed HV (--hv arm); running with HV off");
@@ -134,19 +177,23 @@ final class FswRunCommand implements Callable<Integer> {
         try {
             transport = address.open(baud);
         } catch (IOException | RuntimeException e) {
-            err.println("--link " + address + ": cannot open the link (" + reason(e) + ")");
-            return EXIT_BAD_INPUT;
+            err.println("--link " + address + ": cannot open the link (" + CommandLines.reason(e) + ")");
+            return ExitStatus.IO;
         }
         StreamFrameSink sink;
         try {
-            sink = StreamFrameSink.open(tm);
+            sink = StreamFrameSink.open(tm, force);
+        } catch (java.nio.file.FileAlreadyExistsException e) {
+            transport.close();
+            err.println("--tm " + tm + ": exists; give --force to overwrite it");
+            return ExitStatus.IO;
         } catch (IOException | RuntimeException e) {
             transport.close();
-            err.println("--tm " + tm + ": cannot open the telemetry output (" + reason(e) + ")");
-            return EXIT_BAD_INPUT;
+            err.println("--tm " + tm + ": cannot open the telemetry output (" + CommandLines.reason(e) + ")");
+            return ExitStatus.IO;
         }
         try {
-            return run(described, address, transport, sink);
+            return run(described, address, transport, sink, script);
         } finally {
             try {
                 sink.close();
@@ -159,7 +206,7 @@ final class FswRunCommand implements Callable<Integer> {
 
     /** The run on an open link and telemetry output: prompt, then the flight software on its loop. */
     private int run(InstrumentDescription described, LinkAddress address, HostTransport transport,
-            StreamFrameSink sink) {
+            StreamFrameSink sink, CommandScript script) {
         HvArming arming = new HvArming(hvTimeoutSeconds * 1_000_000L);
         boolean fired = hv == Hv.arm && fire(arming);
         FramedInstrumentLink framed = new FramedInstrumentLink(transport, described);
@@ -168,6 +215,10 @@ final class FswRunCommand implements Callable<Integer> {
         flight.hvPermitted = false; // the core interlock starts OFF too; the operator's fire below enables both
         // this boot's authentication-recovery challenge (commands.md §1.4): unpredictable to an eavesdropper
         flight.bootChallenge = new java.security.SecureRandom().nextInt() & 0xFFFF_FFFFL;
+        flight.timeoutMarginMicros = (int) (timeoutMarginMillis * 1_000);
+        if (nvm != null) {
+            flight.nonVolatileStore = new FileNonVolatileStore(nvm);
+        }
         FlightSoftware fsw = new FlightSoftware(flight, guard, sink, SweepListener.NONE);
         // the run's time starts here, after the prompt: --minutes is run time, whenever FIRE was typed
         MonotonicClock runClock = new MonotonicClock();
@@ -177,6 +228,13 @@ final class FswRunCommand implements Callable<Integer> {
         if (fired) {
             fsw.operatorFireHv(clock == Clock.link ? 0 : runClock.nowMicros());
         }
+        ScriptPlayer player = null;
+        if (script != null) {
+            player = new ScriptPlayer(script, flight.commandKey, counter);
+            ScriptPlayer playing = player;
+            long startMicros = clock == Clock.link ? 0 : runClock.nowMicros();
+            loop.beforeEachCycle(now -> playing.play(fsw, now - startMicros, e -> { }));
+        }
         MonotonicClock wall = new MonotonicClock();
         HvShutdown shutdown = new HvShutdown(fsw, arming, framed, wall::nowMicros, HvShutdown.parking(), out);
         out.println("link " + address + ", HV " + arming.state() + ", clock " + clock + ", run "
@@ -184,11 +242,25 @@ final class FswRunCommand implements Callable<Integer> {
         CountDownLatch reported = new CountDownLatch(1);
         Runnable removeHook = transport.onShutdown(shutdownHook(loop, shutdown, reported));
         try {
-            return fly(fsw, loop, shutdown, guard, framed, sink);
+            int status = fly(fsw, loop, shutdown, guard, framed, sink);
+            if (player != null) {
+                printCommandOutcome(player);
+            }
+            return status;
         } finally {
             reported.countDown();
             removeHook.run();
         }
+    }
+
+    /** Commands sent and refused, with the count of each refusal reason. */
+    private void printCommandOutcome(ScriptPlayer player) {
+        java.util.Map<String, Long> refusals = new java.util.TreeMap<>();
+        player.sent().stream().filter(x -> x.reason() != 0)
+                .forEach(x -> refusals.merge(CommandReason.name(x.reason()), 1L, Long::sum));
+        long refused = refusals.values().stream().mapToLong(Long::longValue).sum();
+        out.println("commands: " + player.sent().size() + " sent, " + refused + " refused"
+                + (refusals.isEmpty() ? "" : " " + refusals));
     }
 
     /** The operator's arm-then-fire; says why when the HV was not fired. */
@@ -219,10 +291,10 @@ final class FswRunCommand implements Callable<Integer> {
         RunReport.print(fsw, framed, guard, sink, out);
         RunReport.printElectronics(framed, out);
         if (!off.confirmed()) {
-            return EXIT_HV_NOT_CONFIRMED;
+            return ExitStatus.HV_NOT_CONFIRMED;
         }
         boolean planned = loop.end() == LoopEnd.END_TIME || loop.end() == LoopEnd.STOPPED;
-        return failure == null && planned ? EXIT_OK : EXIT_RUN_FAILED;
+        return failure == null && planned ? ExitStatus.OK : ExitStatus.FAILED;
     }
 
     /**
@@ -239,20 +311,6 @@ final class FswRunCommand implements Callable<Integer> {
                 Thread.currentThread().interrupt();
             }
         };
-    }
-
-    /** What went wrong opening a port, socket or file, in words (the exception's class is no help to an operator). */
-    static String reason(Exception e) {
-        if (e instanceof NoSuchFileException) {
-            return "no such file or directory";
-        }
-        if (e instanceof AccessDeniedException) {
-            return "permission denied";
-        }
-        if (e instanceof FileSystemException f && f.getReason() != null) {
-            return f.getReason();
-        }
-        return e.getMessage() != null ? e.getMessage() : e.getClass().getSimpleName();
     }
 
     /** Ends the telemetry (last housekeeping, open frames flushed); a failing output is one line. */

@@ -15,6 +15,23 @@ public abstract class HostLoop {
     protected LoopEnd end = LoopEnd.RUNNING;
     /** The loop's time at its last cycle, microseconds of run time. */
     protected long lastMicros;
+    /** Called before every cycle with the cycle's time (a command script's due telecommands). */
+    protected BeforeCycle beforeCycle = BeforeCycle.NONE;
+
+    /** Work a loop does before each cycle of the flight software, on the loop's thread. */
+    public interface BeforeCycle {
+        /** Called with the time of the cycle about to run, microseconds of run time. */
+        void at(long nowMicros);
+
+        /** Does nothing. */
+        BeforeCycle NONE = nowMicros -> { };
+    }
+
+    /** Calls {@code hook} before every cycle from now on. */
+    public final HostLoop beforeEachCycle(BeforeCycle hook) {
+        this.beforeCycle = hook;
+        return this;
+    }
 
     /** Runs until {@code endMicros} of run time, a stop or a link loss; returns the last time. */
     public abstract long run(long endMicros);

@@ -71,6 +71,7 @@ public final class LinkClockLoop extends HostLoop {
         long safeAtStart = exec.safeEntries();
         while ((end = LoopEnd.check(now, endMicros, stopped, link, fsw, safeAtStart)) == LoopEnd.RUNNING) {
             lastMicros = now;
+            beforeCycle.at(now);
             int work = fsw.doWork(now);
             if (exec.outstanding()) {
                 if (wait.await(link)) {

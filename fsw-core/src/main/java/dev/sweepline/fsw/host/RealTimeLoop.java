@@ -36,6 +36,7 @@ public final class RealTimeLoop extends HostLoop {
         long now = clock.nowMicros();
         while ((end = LoopEnd.check(now, endMicros, stopped, link, fsw, safeAtStart)) == LoopEnd.RUNNING) {
             lastMicros = now;
+            beforeCycle.at(now);
             int work = fsw.doWork(now);
             cycles++;
             if (work == 0 && !link.pump()) {

@@ -8,6 +8,7 @@ import java.io.UncheckedIOException;
 import java.net.Socket;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.nio.file.StandardOpenOption;
 
 /**
  * Writes telemetry frames (ASM first) to a file or a TCP socket, as {@code sweepline-ground.jar
@@ -23,15 +24,21 @@ public final class StreamFrameSink implements FrameSink, AutoCloseable {
         this.flushEachFrame = flushEachFrame;
     }
 
-    /** Opens {@code spec}: {@code tcp:HOST:PORT} connects to a ground listener; anything else is a file path. */
-    public static StreamFrameSink open(String spec) throws IOException {
+    /**
+     * Opens {@code spec}: {@code tcp:HOST:PORT} connects to a ground listener; anything else is a file path,
+     * created new unless {@code overwrite}.
+     *
+     * @throws java.nio.file.FileAlreadyExistsException for an existing file without {@code overwrite}
+     */
+    public static StreamFrameSink open(String spec, boolean overwrite) throws IOException {
         if (spec.startsWith("tcp:")) {
             LinkAddress a = LinkAddress.parse(spec);
             Socket socket = new Socket(a.host(), a.port());
             socket.setTcpNoDelay(true);
             return new StreamFrameSink(new BufferedOutputStream(socket.getOutputStream(), 1 << 16), true);
         }
-        return new StreamFrameSink(new BufferedOutputStream(Files.newOutputStream(Path.of(spec)), 1 << 16), false);
+        return new StreamFrameSink(new BufferedOutputStream(overwrite ? Files.newOutputStream(Path.of(spec))
+                : Files.newOutputStream(Path.of(spec), StandardOpenOption.CREATE_NEW, StandardOpenOption.WRITE), 1 << 16), false);
     }
 
     @Override

@@ -144,9 +144,11 @@ public final class SweepParameters {
             return TableStatus.BAD_RESURVEY;
         }
         if (collapseFractionQ8 < 0 || collapseFractionQ8 > 256 || jumpWindows < 1
-            || edgeWindows < 0 || jumpWindows > WindowTable.CAPACITY
-            || edgeSearchWindows < 0 || edgeSearchWindows > WindowTable.CAPACITY) {
+            || edgeWindows < 0 || jumpWindows > WindowTable.CAPACITY) {
             return TableStatus.BAD_LOCK_LOSS;
+        }
+        if (edgeSearchWindows < 0 || edgeSearchWindows > WindowTable.CAPACITY) {
+            return TableStatus.BAD_EDGE_SEARCH;
         }
         // hysteresis: a step down must land below the next range's up threshold
         if (gainUpFractionQ16 <= 0 || gainUpFractionQ16 >= 65_536 || gainDownFractionQ16 <= 0

@@ -42,6 +42,10 @@ class SweepParametersTest {
         assertEquals(TableStatus.BAD_RESURVEY, with(p -> p.resurveyEveryFocusSweeps = 0));
         assertEquals(TableStatus.BAD_LOCK_LOSS, with(p -> p.collapseFractionQ8 = 257));
         assertEquals(TableStatus.BAD_LOCK_LOSS, with(p -> p.jumpWindows = 0));
+        // commands.md §4.1: the edge search's reach has its own code, 0..WindowTable.CAPACITY (256) windows
+        assertEquals(TableStatus.BAD_EDGE_SEARCH, with(p -> p.edgeSearchWindows = 9999));
+        assertEquals(TableStatus.BAD_EDGE_SEARCH, with(p -> p.edgeSearchWindows = -1));
+        assertEquals(TableStatus.OK, with(p -> p.edgeSearchWindows = 256));
         // down * 32 must stay below up, or a step down would land above the next range's up threshold
         assertEquals(TableStatus.BAD_GAIN_THRESHOLDS, with(p -> p.gainDownFractionQ16 = p.gainUpFractionQ16 / 32 + 1));
         assertEquals(TableStatus.BAD_ALPHA, with(p -> p.alphaRatioQ16 = 65_536));

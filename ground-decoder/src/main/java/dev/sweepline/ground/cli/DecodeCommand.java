@@ -39,7 +39,7 @@ final class DecodeCommand implements Callable<Integer> {
             description = "An uplinked table image (commands.md §4.1), so its spectra get window edges; repeatable.")
     List<Path> tables = new ArrayList<>();
 
-    @Option(names = "--allocation", paramLabel = "BITS_PER_S",
+    @Option(names = "--allocation", paramLabel = "BITS_PER_S", converter = OptionValues.Positive.class,
             description = "Downlink allocation to compare the frame bit rate with in report.html.")
     Double allocation;
 
@@ -51,38 +51,31 @@ final class DecodeCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        if (!Files.isReadable(input) || Files.isDirectory(input)) {
-            spec.commandLine().getErr().println("cannot read " + input);
-            return ExitCodes.UNREADABLE_INPUT;
+        Inputs.readable(input);
+        DecoderConfig config = options.config();
+        WindowCatalogue windows = new WindowCatalogue();
+        for (Path t : tables) {
+            if (windows.add(Inputs.read("--table", t)) < 0) {
+                throw new GroundFailure(ExitCodes.INPUT, "--table " + t + ": not an intact table image (CRC or length)");
+            }
         }
-        DecoderConfig config = options.configOrNull(spec.commandLine().getErr());
-        if (config == null) {
-            return ExitCodes.UNREADABLE_INPUT;
+        if (Files.exists(out) && !Files.isDirectory(out)) {
+            throw new GroundFailure(ExitCodes.IO, "--out " + out + ": exists and is not a folder");
         }
         try {
             Files.createDirectories(out);
         } catch (IOException e) {
-            spec.commandLine().getErr().println("cannot create " + out + ": " + e.getMessage());
-            return ExitCodes.OUTPUT_FAILED;
+            throw new GroundFailure(ExitCodes.IO, "--out " + out + ": cannot create the folder (" + Inputs.reason(e) + ")");
         }
         GroundProducts p;
         try {
-            WindowCatalogue windows = new WindowCatalogue();
-            for (Path t : tables) {
-                if (windows.add(Files.readAllBytes(t)) < 0) {
-                    spec.commandLine().getErr().println(t + ": not an intact table image");
-                    return ExitCodes.UNREADABLE_INPUT;
-                }
-            }
             p = GroundProcessing.process(input, out,
                     allocation == null ? OptionalDouble.empty() : OptionalDouble.of(allocation), config,
                     windows);
         } catch (NoSuchFileException e) {
-            spec.commandLine().getErr().println("cannot read " + input + ": " + e.getMessage());
-            return ExitCodes.UNREADABLE_INPUT;
+            throw new GroundFailure(ExitCodes.INPUT, input + ": " + Inputs.reason(e));
         } catch (IOException e) {
-            spec.commandLine().getErr().println("cannot write the products: " + e.getMessage());
-            return ExitCodes.OUTPUT_FAILED;
+            throw new GroundFailure(ExitCodes.IO, "--out " + out + ": cannot write the products (" + Inputs.reason(e) + ")");
         }
         spec.commandLine().getOut().printf("%d good frames, %d bad, %d survey + %d focus spectra, %d fitted -> %s%n",
                 p.stats().framesGood(),

@@ -6,7 +6,6 @@ import dev.sweepline.ground.decode.TelemetryDecoder;
 import dev.sweepline.ground.spectrum.Ccsds121QuadrantDecoder;
 import java.io.IOException;
 import java.io.PrintWriter;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.concurrent.Callable;
 import picocli.CommandLine.Command;
@@ -34,20 +33,13 @@ final class InspectCommand implements Callable<Integer> {
     @Override
     public Integer call() {
         PrintWriter out = spec.commandLine().getOut();
-        if (!Files.isReadable(input) || Files.isDirectory(input)) {
-            spec.commandLine().getErr().println("cannot read " + input);
-            return ExitCodes.UNREADABLE_INPUT;
-        }
-        DecoderConfig config = options.configOrNull(spec.commandLine().getErr());
-        if (config == null) {
-            return ExitCodes.UNREADABLE_INPUT;
-        }
+        Inputs.readable(input);
+        DecoderConfig config = options.config();
         TelemetryDecoder d = new TelemetryDecoder(config, new Ccsds121QuadrantDecoder(), new InspectListing(out));
         try {
             StreamReader.feed(input, d);
         } catch (IOException e) {
-            spec.commandLine().getErr().println("cannot read " + input + ": " + e.getMessage());
-            return ExitCodes.UNREADABLE_INPUT;
+            throw new GroundFailure(ExitCodes.INPUT, input + ": cannot read it (" + Inputs.reason(e) + ")");
         }
         DecodeStats s = d.stats();
         out.printf("frame length %d%s; %d good frames (%d idle), bad %s, dropped %s, %d VC restarts, "

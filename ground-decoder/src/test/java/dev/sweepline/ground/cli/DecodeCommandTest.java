@@ -119,9 +119,10 @@ class DecodeCommandTest {
 
     @Test
     void shouldExitNonZeroOnlyForUnreadableInput() throws IOException {
-        // exit 2 for a missing file (GroundMain doc), no exception
-        assertEquals(2, GroundMain.run("decode", dir.resolve("missing.tm").toString(), "--out", dir.toString()));
-        assertEquals(2, GroundMain.run("inspect", dir.toString()));
+        // exit 4, an input error, for a missing file (ExitCodes), no exception
+        assertEquals(ExitCodes.INPUT, GroundMain.run("decode", dir.resolve("missing.tm").toString(), "--out",
+                dir.toString()));
+        assertEquals(ExitCodes.INPUT, GroundMain.run("inspect", dir.toString()));
         // an empty or all-garbage file is readable: exit 0, counted as garbage
         Path junk = Files.write(dir.resolve("junk.tm"), new byte[] {1, 2, 3, 4, 5});
         assertEquals(0, GroundMain.run("decode", junk.toString(), "--out", dir.resolve("j").toString()));

@@ -24,7 +24,7 @@ class InspectCommandTest {
         s[4 + 60] ^= 0x04; // damage the first frame
         Path in = Files.write(dir.resolve("g.tm"), s);
         StringWriter text = new StringWriter();
-        int rc = new CommandLine(new GroundMain()).setOut(new PrintWriter(text)).execute("inspect", in.toString());
+        int rc = GroundMain.commandLine().setOut(new PrintWriter(text)).execute("inspect", in.toString());
         String out = text.toString();
         assertEquals(0, rc);
         // 5 good frame lines, one BAD_CRC line (six golden frames, the first damaged)
@@ -43,7 +43,7 @@ class InspectCommandTest {
         frames.add(3, frames.get(2)); // the third golden frame twice (ICD §10: a repeat)
         Path in = Files.write(dir.resolve("r.tm"), Hex.stream(frames.toArray(new String[0])));
         StringWriter text = new StringWriter();
-        int rc = new CommandLine(new GroundMain()).setOut(new PrintWriter(text)).execute("inspect", in.toString());
+        int rc = GroundMain.commandLine().setOut(new PrintWriter(text)).execute("inspect", in.toString());
         String out = text.toString();
         assertEquals(0, rc);
         int vcc = dev.sweepline.ground.frame.TmFrameHeader.vcCount(Hex.bytes(frames.get(2)), 0);

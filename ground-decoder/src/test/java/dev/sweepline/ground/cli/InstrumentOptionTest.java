@@ -36,7 +36,7 @@ class InstrumentOptionTest {
     private static Run run(String... args) {
         StringWriter out = new StringWriter();
         StringWriter err = new StringWriter();
-        int rc = new CommandLine(new GroundMain()).setOut(new PrintWriter(out)).setErr(new PrintWriter(err)).execute(args);
+        int rc = GroundMain.commandLine().setOut(new PrintWriter(out)).setErr(new PrintWriter(err)).execute(args);
         return new Run(rc, out.toString(), err.toString());
     }
 
@@ -90,13 +90,14 @@ class InstrumentOptionTest {
             Run r = cmd.equals("decode")
                     ? run(cmd, in.toString(), "--out", dir.resolve("o").toString(), "--instrument", broken.toString())
                     : run(cmd, in.toString(), "--instrument", broken.toString());
-            // exit 2: unreadable input (GroundMain doc); FORMAT.md windows.count 1..256
-            assertEquals(2, r.status(), cmd);
-            assertTrue(r.err().startsWith(broken + ":" + line + ": windows.count: must be a whole number 1..256, got 300"),
-                    r.err());
+            // exit 4: an input error (ExitCodes), one line; FORMAT.md windows.count 1..256
+            assertEquals(ExitCodes.INPUT, r.status(), cmd);
+            assertEquals(1, r.err().lines().count(), r.err());
+            assertTrue(r.err().startsWith("sweepline-ground " + cmd + ": --instrument: " + broken + ":" + line
+                    + ": windows.count: must be a whole number 1..256, got 300"), r.err());
         }
         Run r = run("inspect", in.toString(), "--instrument", "no-such-cup");
-        assertEquals(2, r.status());
+        assertEquals(ExitCodes.INPUT, r.status());
         assertTrue(r.err().contains("neither a built-in instrument (demo-cup, fine-cup) nor a readable description file"),
                 r.err());
     }

@@ -28,7 +28,7 @@ public final class BudgetRunner {
     }
 
     /** What one point's closed loop gave, and what the flight software answered to its commands. */
-    record Flown(RunSummary summary, List<ScriptRunner.Sent> commands) {
+    record Flown(RunSummary summary, List<dev.sweepline.fsw.host.script.ScriptPlayer.Sent> commands) {
     }
 
     private BudgetRunner() {
@@ -72,7 +72,7 @@ public final class BudgetRunner {
         ScriptRunner commands = new ScriptRunner(PhaseCommands.of(phase.mode(), config.flight()), true, null);
         RunSummary s = ClosedLoopBench.run(config, ClosedLoopBench.Progress.NONE,
                 ClosedLoopBench.Hooks.NONE.withCycle(commands)).summary();
-        for (ScriptRunner.Sent sent : commands.sent()) {
+        for (dev.sweepline.fsw.host.script.ScriptPlayer.Sent sent : commands.sent()) {
             if (sent.reason() != CommandReason.OK) {
                 throw new IllegalStateException("phase '" + phase.name() + "': the flight software refused command 0x"
                         + Integer.toHexString(sent.code()) + " (" + CommandReason.name(sent.reason()) + ")");
@@ -143,6 +143,10 @@ public final class BudgetRunner {
             double worstRatio = 0;
             int over = 0;
             int firstOver = -1;
+            int overfull = 0;
+            int firstOverfull = -1;
+            double fullest = 0;
+            int fullestHour = -1;
             for (BudgetResult.Hour h : hours) {
                 if (!h.phase().equals(phase.name())) {
                     continue;
@@ -159,9 +163,19 @@ public final class BudgetRunner {
                     firstOver = firstOver < 0 ? h.hour() : firstOver;
                 }
                 if (!Double.isNaN(plan.storageMegabits()) && h.storeMegabits() > plan.storageMegabits()) {
-                    violations.add(String.format(Locale.ROOT, "phase '%s', hour %d: the store holds %.1f Mbit, more than "
-                            + "its %.1f Mbit", phase.name(), h.hour(), h.storeMegabits(), plan.storageMegabits()));
+                    overfull++;
+                    firstOverfull = firstOverfull < 0 ? h.hour() : firstOverfull;
+                    if (h.storeMegabits() > fullest) {
+                        fullest = h.storeMegabits();
+                        fullestHour = h.hour();
+                    }
                 }
+            }
+            if (overfull > 0) {
+                // one line per phase, however many hours overflow (a small store overflows for days)
+                violations.add(String.format(Locale.ROOT, "phase '%s', hour %d: the store holds more than its %.1f Mbit "
+                        + "(%d hours over; fullest hour %d at %.1f Mbit)", phase.name(), firstOverfull,
+                        plan.storageMegabits(), overfull, fullestHour, fullest));
             }
             if (over > 0) {
                 violations.add(String.format(Locale.ROOT, "phase '%s', hour %d: %.0f bit/s exceeds the allocation of "

@@ -2,8 +2,8 @@ package dev.sweepline.sim.budget;
 
 import dev.sweepline.fsw.command.ParameterTable;
 import dev.sweepline.fsw.exec.FlightConfig;
-import dev.sweepline.sim.command.CommandScript;
-import dev.sweepline.sim.command.ScriptException;
+import dev.sweepline.fsw.host.script.CommandScript;
+import dev.sweepline.fsw.host.script.ScriptException;
 import java.util.List;
 
 /**

@@ -8,6 +8,7 @@ import dev.sweepline.fsw.command.ParameterTable;
 import dev.sweepline.fsw.command.TableImage;
 import dev.sweepline.fsw.instrument.InstrumentLimits;
 import dev.sweepline.fsw.table.TableStatus;
+import dev.sweepline.fsw.table.WindowTable;
 import dev.sweepline.sim.scenario.PlasmaParameter;
 import dev.sweepline.sim.scenario.Scenario;
 import dev.sweepline.sim.scenario.ScenarioLoader;
@@ -110,6 +111,7 @@ public final class CampaignReader {
                     + limits.minSettleMicrosPerCodeQ8 / 256.0 + ")";
             case TableStatus.SETTLE_TOO_SHORT -> " (the HV supply's settling needs fixedSettleMicros >= "
                     + limits.minFixedSettleMicros + ")";
+            case TableStatus.BAD_EDGE_SEARCH -> " (edgeSearchWindows must be 0.." + WindowTable.CAPACITY + ")";
             case TableStatus.ABOVE_VOLTAGE_LIMIT -> " (the instrument is rated to "
                     + limits.maxModulatorMillivolts / 1000 + " V)";
             default -> "";

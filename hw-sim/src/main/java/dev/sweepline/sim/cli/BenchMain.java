@@ -1,10 +1,11 @@
 package dev.sweepline.sim.cli;
 
+import dev.sweepline.fsw.host.CommandLines;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
 
 /** {@code sweepline-bench.jar}: the closed-loop bench and its tools. */
-@Command(name = "sweepline-bench", mixinStandardHelpOptions = true, version = "sweepline-bench 0.1",
+@Command(name = "sweepline-bench", mixinStandardHelpOptions = true, versionProvider = BenchMain.Version.class,
         description = {"Closed-loop bench for the Faraday-cup flight software: runs, scenarios, the simulated",
             "instrument server, tuning campaigns, bandwidth budgets."},
         subcommands = {RunCommand.class, ScenariosCommand.class, ServeCommand.class, TuneCommand.class,
@@ -20,7 +21,15 @@ public final class BenchMain implements Runnable {
 
     /** The command line, for tests that run it in process. */
     public static CommandLine commandLine() {
-        return new CommandLine(new BenchMain());
+        return CommandLines.configure(new CommandLine(new BenchMain()));
+    }
+
+    /** The version line: the Maven build's project version. */
+    static final class Version implements CommandLine.IVersionProvider {
+        @Override
+        public String[] getVersion() {
+            return new String[] {"sweepline-bench " + CommandLines.version(BenchMain.class)};
+        }
     }
 
     @Override

@@ -5,6 +5,9 @@ import dev.sweepline.sim.budget.BudgetResult;
 import dev.sweepline.sim.budget.BudgetRunner;
 import dev.sweepline.sim.budget.OrbitPlan;
 import dev.sweepline.sim.budget.PlanReader;
+import dev.sweepline.fsw.host.CliException;
+import dev.sweepline.fsw.host.ExitStatus;
+import dev.sweepline.fsw.host.Ranges;
 import dev.sweepline.fsw.host.yaml.FileFormatException;
 import java.nio.file.Path;
 import java.util.Locale;
@@ -27,7 +30,7 @@ final class BudgetCommand implements Callable<Integer> {
     @Option(names = "--seed", paramLabel = "S", description = "Seed of all randomness (default: ${DEFAULT-VALUE}).")
     long seed = 1;
 
-    @Option(names = "--threads", paramLabel = "N", description = "Worker threads (default: every core).")
+    @Option(names = "--threads", paramLabel = "N", converter = Ranges.PositiveInt.class, description = "Worker threads (default: every core).")
     int threads = Runtime.getRuntime().availableProcessors();
 
     @CommandLine.Mixin
@@ -35,20 +38,14 @@ final class BudgetCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws Exception {
-        if (!instrument.resolve()) {
-            return 2;
-        }
-        if (threads < 1) {
-            System.err.println("--threads must be at least 1, got " + threads);
-            return 2;
-        }
+        instrument.resolve();
         OrbitPlan p;
         try {
             p = PlanReader.load(plan, instrument.given());
         } catch (FileFormatException e) {
-            System.err.println("plan error: " + e.getMessage());
-            return 2;
+            throw CliException.input("plan error: " + e.getMessage());
         }
+        OutputFolder.create(out);
         BudgetResult r = BudgetRunner.run(p, seed, threads);
         BudgetOutput.write(out, r);
         for (BudgetResult.PhaseBudget b : r.phases()) {
@@ -59,6 +56,6 @@ final class BudgetCommand implements Callable<Integer> {
         System.out.println(r.fits() ? "verdict: the plan fits its allocations" : "verdict: the plan DOES NOT FIT");
         r.violations().forEach(v -> System.out.println("  " + v));
         System.out.println("wrote " + out.resolve("budget.json") + ", hours.csv, volume.png and report.html");
-        return r.fits() ? 0 : 1;
+        return r.fits() ? ExitStatus.OK : ExitStatus.WARNINGS;
     }
 }

@@ -1,5 +1,6 @@
 package dev.sweepline.sim.cli;
 
+import dev.sweepline.fsw.host.CliException;
 import dev.sweepline.fsw.host.instrument.InstrumentSpec;
 import dev.sweepline.fsw.host.instrument.Instruments;
 import dev.sweepline.fsw.host.yaml.FileFormatException;
@@ -21,16 +22,16 @@ final class InstrumentOption {
     private InstrumentSpec resolved;
 
     /**
-     * Reads the description the option names, once; false after printing the one line a broken or
-     * unknown description gives (file, line and field) on stderr: the command then exits 2.
+     * Reads the description the option names, once.
+     *
+     * @throws CliException (an input error) with the one line a broken or unknown description gives
+     *                      (file, line and field)
      */
-    boolean resolve() {
+    void resolve() {
         try {
             resolved = instrument == null ? null : Instruments.resolve(instrument);
-            return true;
         } catch (FileFormatException e) {
-            System.err.println(error(e));
-            return false;
+            throw CliException.input(error(e));
         }
     }
 

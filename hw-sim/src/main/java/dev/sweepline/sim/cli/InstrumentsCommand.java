@@ -22,8 +22,7 @@ final class InstrumentsCommand implements Callable<Integer> {
             }
             return 0;
         } catch (FileFormatException e) {
-            System.err.println(InstrumentOption.error(e));
-            return 2;
+            throw dev.sweepline.fsw.host.CliException.input(InstrumentOption.error(e));
         }
     }
 

@@ -4,6 +4,8 @@ import dev.sweepline.sim.campaign.CampaignOutput;
 import dev.sweepline.sim.campaign.CampaignReader;
 import dev.sweepline.sim.campaign.CampaignSpec;
 import dev.sweepline.sim.campaign.RunRow;
+import dev.sweepline.fsw.host.CliException;
+import dev.sweepline.fsw.host.CommandLines;
 import dev.sweepline.fsw.host.yaml.FileFormatException;
 import java.io.IOException;
 import java.nio.file.Path;
@@ -21,7 +23,7 @@ final class MergeCommand implements Callable<Integer> {
     @Parameters(index = "0", paramLabel = "CAMPAIGN.yaml", description = "The campaign file the shards ran.")
     Path campaign;
 
-    @Parameters(index = "1..*", paramLabel = "SHARD_DIR", description = "The shards' output folders.")
+    @Parameters(index = "1..*", arity = "1..*", paramLabel = "SHARD_DIR", description = "The shards' output folders.")
     List<Path> shards;
 
     @Option(names = "--out", paramLabel = "DIR", required = true, description = "Output folder.")
@@ -32,18 +34,18 @@ final class MergeCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws IOException {
-        if (!instrument.resolve()) {
-            return 2;
-        }
+        instrument.resolve();
         CampaignSpec spec;
         List<RunRow> rows;
         try {
             spec = CampaignReader.load(campaign, instrument.given());
             rows = CampaignOutput.readRuns(spec, shards);
-        } catch (FileFormatException | IOException e) {
-            System.err.println("merge error: " + e.getMessage());
-            return 2;
+        } catch (FileFormatException e) {
+            throw CliException.input("merge error: " + e.getMessage());
+        } catch (IOException e) {
+            throw CliException.input("merge error: " + CommandLines.located(e));
         }
+        OutputFolder.create(out);
         CampaignOutput.writeRuns(out, rows);
         TuneCommand.report(CampaignOutput.writeResults(out, spec, rows), out);
         return 0;

@@ -8,13 +8,17 @@ import dev.sweepline.sim.bench.GroundCheck;
 import dev.sweepline.sim.bench.GroundInstruments;
 import dev.sweepline.ground.decode.DecoderConfig;
 import dev.sweepline.ground.spectrum.WindowCatalogue;
-import dev.sweepline.sim.command.CommandScript;
-import dev.sweepline.sim.command.ScriptException;
+import dev.sweepline.fsw.host.script.CommandScript;
+import dev.sweepline.fsw.host.script.ScriptException;
 import dev.sweepline.sim.command.ScriptRunner;
-import dev.sweepline.sim.command.GroundCommandCounter;
-import dev.sweepline.sim.command.UplinkLog;
+import dev.sweepline.fsw.host.script.GroundCommandCounter;
+import dev.sweepline.fsw.host.script.UplinkLog;
 import dev.sweepline.fsw.command.CommandReason;
 import dev.sweepline.fsw.nvm.FileNonVolatileStore;
+import dev.sweepline.fsw.host.CliException;
+import dev.sweepline.fsw.host.CommandLines;
+import dev.sweepline.fsw.host.ExitStatus;
+import dev.sweepline.fsw.host.Ranges;
 import java.util.List;
 import dev.sweepline.sim.bench.ClosedLoopBench;
 import dev.sweepline.sim.bench.RunReportWriter;
@@ -40,7 +44,7 @@ final class RunCommand implements Callable<Integer> {
             description = "Built-in scenario name or a scenario file (default: ${DEFAULT-VALUE}).")
     String scenario = ScenarioLoader.defaultName();
 
-    @Option(names = "--minutes", paramLabel = "M",
+    @Option(names = "--minutes", paramLabel = "M", converter = Ranges.Positive.class,
             description = "Simulated minutes to run (default: the scenario's own duration).")
     Double minutes;
 
@@ -72,42 +76,30 @@ final class RunCommand implements Callable<Integer> {
     @Option(names = "--no-ground", description = "Skip the ground's decoding and fitting of the run (long runs).")
     boolean noGround;
 
-    @Option(names = "--baud", paramLabel = "BAUD",
+    @Option(names = "--baud", paramLabel = "BAUD", converter = Ranges.PositiveInt.class,
             description = "Serial line rate the link load is checked against (default: ${DEFAULT-VALUE}).")
     int baud = 115_200;
 
-    @Option(names = "--allocation", paramLabel = "BITS_PER_S",
+    @Option(names = "--allocation", paramLabel = "BITS_PER_S", converter = Ranges.Positive.class,
             description = "Downlink allocation to check the telemetry against, bit/s (default: none).")
     Double allocation;
 
     @Override
     public Integer call() throws Exception {
-        Scenario sc;
-        try {
-            sc = ScenarioLoader.resolve(scenario);
-        } catch (ScenarioException e) {
-            System.err.println("scenario error: " + e.getMessage());
-            return 2;
-        }
-        if (!instrument.resolve()) {
-            return 2;
-        }
+        Scenario sc = scenario(scenario);
+        instrument.resolve();
         InstrumentModel model = instrument.model();
         double seconds = minutes != null ? minutes * 60.0 : sc.durationSeconds();
-        if (!(seconds > 0)) {
-            System.err.println("--minutes must be positive");
-            return 2;
-        }
         BenchConfig config = BenchConfig.defaults(sc, seed, seconds, model)
                 .withAllocation(allocation != null ? allocation : Double.NaN);
         if (commands != null && uplinkReplay != null) {
-            System.err.println("--commands and --uplink-replay exclude each other: give one");
-            return 2;
+            throw new CliException(ExitStatus.USAGE, "--commands and --uplink-replay exclude each other: give one");
         }
         ScriptRunner script = null;
         CommandScript parsed = null;
         if (commands != null || nvm != null || uplinkReplay != null) {
             Path source = uplinkReplay != null ? uplinkReplay : commands;
+            String option = uplinkReplay != null ? "--uplink-replay " : "--commands ";
             try {
                 parsed = uplinkReplay != null ? CommandScript.ofUplink(UplinkLog.read(uplinkReplay))
                         : commands == null ? CommandScript.parse(List.of(), model.flight())
@@ -117,14 +109,13 @@ final class RunCommand implements Callable<Integer> {
                         : GroundCommandCounter.beside(nvm);
                 script = new ScriptRunner(parsed, !noAuth, nvm == null ? null : new FileNonVolatileStore(nvm), counter);
             } catch (ScriptException e) {
-                System.err.println("command script error: " + source + ":" + e.getMessage());
-                return 2;
-            } catch (java.nio.file.NoSuchFileException e) {
-                System.err.println("command script error: no such file " + source);
-                return 2;
+                throw CliException.input(option + source + ":" + e.getMessage());
+            } catch (java.io.IOException e) {
+                throw CliException.input(option + source + ": " + CommandLines.reason(e));
             }
             parsed.warnings().forEach(w -> System.out.println("warning: " + source + ": " + w));
         }
+        OutputFolder.create(out);
         // the ground knows the built-in table, the one restored from the NVM file and those the script uplinks
         WindowCatalogue windows = new WindowCatalogue();
         if (nvm != null && Files.isRegularFile(nvm)) {
@@ -133,7 +124,6 @@ final class RunCommand implements Callable<Integer> {
         if (commands != null) {
             parsed.images().forEach(windows::add);
         }
-        Files.createDirectories(out);
         ClosedLoopBench.Result result;
         try (ConsoleProgress progress = new ConsoleProgress("run " + sc.name());
                 FrameFile frames = new FrameFile(out.resolve("telemetry.tm"));
@@ -146,11 +136,13 @@ final class RunCommand implements Callable<Integer> {
         }
         RunReportWriter.printTable(result.summary(), System.out);
         Map<String, Object> extra = new LinkedHashMap<>();
-        extra.put("linkLoad", RunReportWriter.linkMap(config, baud));
+        Map<String, Object> link = RunReportWriter.linkMap(config, baud);
+        extra.put("linkLoad", link);
+        List<String> warnings = RunWarnings.of(config, baud, result.summary().telemetry());
         if (noGround) {
             RunReportWriter.write(out, result, extra);
             System.out.println("wrote " + out.resolve("summary.json") + ", decisions.csv and telemetry.tm (no ground products)");
-            return 0;
+            return RunWarnings.print(warnings, System.out);
         }
         // the ground's view: decode and fit what the flight software sent, compare with the truth
         Path groundDir = out.resolve("ground");
@@ -166,7 +158,16 @@ final class RunCommand implements Callable<Integer> {
         RunReportWriter.write(out, result, extra);
         System.out.println("wrote " + out.resolve("summary.json") + ", decisions.csv, telemetry.tm, report.html"
                 + " and the ground products in " + groundDir);
-        return 0;
+        return RunWarnings.print(warnings, System.out);
+    }
+
+    /** The scenario {@code --scenario} names (a built-in or a file). */
+    static Scenario scenario(String nameOrFile) {
+        try {
+            return ScenarioLoader.resolve(nameOrFile);
+        } catch (ScenarioException e) {
+            throw CliException.input("--scenario " + e.getMessage());
+        }
     }
 
     /** Commands sent and refused, with the count of each refusal reason. */

@@ -7,14 +7,14 @@ import dev.sweepline.sim.campaign.CampaignSpec;
 import dev.sweepline.sim.campaign.RunRow;
 import dev.sweepline.sim.campaign.SetResult;
 import dev.sweepline.sim.campaign.Shard;
+import dev.sweepline.fsw.host.CliException;
+import dev.sweepline.fsw.host.ExitStatus;
+import dev.sweepline.fsw.host.Ranges;
 import dev.sweepline.fsw.host.yaml.FileFormatException;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.Locale;
 import java.util.concurrent.Callable;
-import me.tongfei.progressbar.ProgressBar;
-import me.tongfei.progressbar.ProgressBarBuilder;
-import me.tongfei.progressbar.ProgressBarStyle;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
@@ -31,7 +31,7 @@ final class TuneCommand implements Callable<Integer> {
     @Option(names = "--out", paramLabel = "DIR", required = true, description = "Output folder.")
     Path out;
 
-    @Option(names = "--threads", paramLabel = "N",
+    @Option(names = "--threads", paramLabel = "N", converter = Ranges.PositiveInt.class,
             description = "Worker threads (default: every core, ${DEFAULT-VALUE}).")
     int threads = Runtime.getRuntime().availableProcessors();
 
@@ -43,33 +43,25 @@ final class TuneCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws Exception {
-        if (!instrument.resolve()) {
-            return 2;
-        }
+        instrument.resolve();
         CampaignSpec spec;
         Shard slice;
         try {
             spec = CampaignReader.load(campaign, instrument.given());
             slice = shard == null ? Shard.ALL : Shard.parse(shard);
-        } catch (FileFormatException | IllegalArgumentException e) {
-            System.err.println("campaign error: " + e.getMessage());
-            return 2;
+        } catch (FileFormatException e) {
+            throw CliException.input("campaign error: " + e.getMessage());
+        } catch (IllegalArgumentException e) {
+            throw new CliException(ExitStatus.USAGE, "--shard " + shard + ": " + e.getMessage());
         }
-        if (threads < 1) {
-            System.err.println("--threads must be at least 1, got " + threads);
-            return 2;
-        }
+        OutputFolder.create(out);
         long jobs = (long) spec.setCount() * spec.runsPerSet();
         System.out.printf(Locale.ROOT, "campaign %s: %d sets x %d runs of %.0f s, shard %s, %d threads%n",
                 spec.name(), spec.setCount(), spec.runsPerSet(), spec.durationSeconds(), slice, threads);
         long start = System.nanoTime();
         List<RunRow> rows;
-        try (ProgressBar bar = new ProgressBarBuilder().setTaskName("tune").setInitialMax(jobs / slice.count())
-                .setStyle(ProgressBarStyle.ASCII).setUpdateIntervalMillis(500).build()) {
-            rows = CampaignRunner.run(spec, threads, slice, (done, total) -> {
-                bar.maxHint(total);
-                bar.stepTo(done);
-            });
+        try (ConsoleProgress bar = ConsoleProgress.ofRuns("tune")) {
+            rows = CampaignRunner.run(spec, threads, slice, bar::step);
         }
         double wall = (System.nanoTime() - start) / 1e9;
         CampaignOutput.writeRuns(out, rows);

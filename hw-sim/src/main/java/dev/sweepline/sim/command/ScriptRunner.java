@@ -1,13 +1,16 @@
 package dev.sweepline.sim.command;
 
-import dev.sweepline.fsw.command.CommandCode;
+import dev.sweepline.fsw.host.script.UplinkLog;
+import dev.sweepline.fsw.host.script.GroundCommandCounter;
+import dev.sweepline.fsw.host.script.ScriptPlayer;
+import dev.sweepline.fsw.host.script.ScriptEntry;
+import dev.sweepline.fsw.host.script.CommandScript;
 import dev.sweepline.fsw.command.NonVolatileStore;
 import dev.sweepline.fsw.exec.FlightConfig;
 import dev.sweepline.fsw.exec.FlightSoftware;
 import dev.sweepline.sim.bench.ClosedLoopBench;
 import dev.sweepline.sim.instrument.InstrumentFaults;
 import dev.sweepline.sim.instrument.SimulatedInstrument;
-import java.util.ArrayList;
 import java.util.List;
 
 /**
@@ -18,20 +21,14 @@ import java.util.List;
  * non-volatile store, and records every packet it sends to an optional {@link UplinkLog}.
  */
 public final class ScriptRunner implements ClosedLoopBench.CycleHook {
-    /** What the flight software answered to one telecommand of the script. */
-    public record Sent(long atMicros, int line, int code, int reason) {
-    }
-
-    private final List<ScriptEntry> entries;
+    private final CommandScript script;
     private final boolean authenticate;
     private final NonVolatileStore store;
     private final GroundCommandCounter counter;
-    private final List<Sent> sent = new ArrayList<>();
     private UplinkLog log;
-    private TelecommandEncoder encoder;
+    private ScriptPlayer player;
     private InstrumentFaults faults;
     private long overrunTicks;
-    private int next;
 
     /**
      * A runner numbering its commands from 1 (a ground counter kept in memory).
@@ -47,7 +44,7 @@ public final class ScriptRunner implements ClosedLoopBench.CycleHook {
     /** As above, numbering its commands from {@code counter} (kept across runs beside the NVM file). */
     public ScriptRunner(CommandScript script, boolean authenticate, NonVolatileStore store,
             GroundCommandCounter counter) {
-        this.entries = script.entries();
+        this.script = script;
         this.authenticate = authenticate;
         this.store = store;
         this.counter = counter;
@@ -65,40 +62,19 @@ public final class ScriptRunner implements ClosedLoopBench.CycleHook {
         if (store != null) {
             flight.nonVolatileStore = store;
         }
-        encoder = new TelecommandEncoder(flight.commandKey, counter);
+        player = new ScriptPlayer(script, flight.commandKey, counter);
+        if (log != null) {
+            player.recordingTo(log);
+        }
         faults = instrument.faults();
     }
 
     @Override
     public void beforeCycle(FlightSoftware fsw, long nowMicros) {
-        while (next < entries.size() && entries.get(next).atMicros() <= nowMicros) {
-            ScriptEntry e = entries.get(next++);
-            if (e.isCommand()) {
-                byte[] packet = e.isRecorded() ? e.packet() : encoder.encode(e.code(), arguments(e, fsw));
-                if (log != null) {
-                    log.record(nowMicros, packet);
-                }
-                sent.add(new Sent(nowMicros, e.line(), e.code(), fsw.acceptTelecommand(packet, 0, packet.length, nowMicros)));
-            } else {
-                inject(e);
-            }
-        }
+        player.play(fsw, nowMicros, this::inject);
         if (overrunTicks > 0) {
             fsw.reportCycleWork(overrunTicks);
         }
-    }
-
-    /**
-     * The arguments to sign. AUTH_RECOVER names this boot's challenge, which the ground reads from
-     * the AUTH_LOCKED event (telemetry ICD §6, event 7); the bench takes it from the flight software
-     * directly, which is the same number.
-     */
-    private static byte[] arguments(ScriptEntry e, FlightSoftware fsw) {
-        if (e.code() != CommandCode.AUTH_RECOVER) {
-            return e.args();
-        }
-        long c = fsw.authenticator().bootChallenge();
-        return new byte[] {(byte) (c >>> 24), (byte) (c >>> 16), (byte) (c >>> 8), (byte) c};
     }
 
     private void inject(ScriptEntry e) {
@@ -107,7 +83,7 @@ public final class ScriptRunner implements ClosedLoopBench.CycleHook {
             case "HV_READBACK" -> faults.hvReadbackOffsetCodes = v[0];
             case "SATURATE" -> faults.saturateAdc = v[0] != 0;
             case "STUCK" -> {
-                faults.stuckQuadrant = v[0];
+                faults.stuckQuadrant = v[0] - 1; // the script counts quadrants 1..4 (commands.md §7)
                 faults.stuckCode = v[1];
             }
             case "DEAD" -> faults.deadCollector = v[0] != 0;
@@ -122,7 +98,7 @@ public final class ScriptRunner implements ClosedLoopBench.CycleHook {
     }
 
     /** The telecommands sent so far, with the acceptance reason of each. */
-    public List<Sent> sent() {
-        return List.copyOf(sent);
+    public List<ScriptPlayer.Sent> sent() {
+        return player == null ? List.of() : player.sent();
     }
 }

@@ -2,10 +2,10 @@
  * Command scripts for the closed-loop bench: design note.
  *
  * <h2>What it does</h2>
- * {@link dev.sweepline.sim.command.CommandScript} reads time-tagged telecommands and fault injections
+ * {@link dev.sweepline.fsw.host.script.CommandScript} reads time-tagged telecommands and fault injections
  * (format in its class comment and fsw-core/docs/commands.md §7); {@link dev.sweepline.sim.command.ScriptRunner}
  * is a {@code ClosedLoopBench.CycleHook} that encodes each due command as a signed TC packet
- * ({@link dev.sweepline.sim.command.TelecommandEncoder}) and hands it to the flight software, and sets
+ * ({@link dev.sweepline.fsw.host.script.TelecommandEncoder}) and hands it to the flight software, and sets
  * each due fault in the simulated instrument.
  *
  * <h2>Requirements and how each is verified</h2>

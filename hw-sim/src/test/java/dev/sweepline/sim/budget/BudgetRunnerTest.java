@@ -108,7 +108,7 @@ class BudgetRunnerTest {
         BudgetRunner.Flown f = BudgetRunner.fly(plan, plan.phases().get(0), 0.2, 1);
         // commands.md §4.2: the 650-octet default image (§4.1) in loads of at most 192 octets (4 loads),
         // then a verify and a commit; every one accepted (the runner fails on a refusal)
-        List<Integer> codes = f.commands().stream().map(ScriptRunner.Sent::code).toList();
+        List<Integer> codes = f.commands().stream().map(dev.sweepline.fsw.host.script.ScriptPlayer.Sent::code).toList();
         assertEquals(List.of(CommandCode.TABLE_LOAD, CommandCode.TABLE_LOAD, CommandCode.TABLE_LOAD,
                 CommandCode.TABLE_LOAD, CommandCode.TABLE_VERIFY, CommandCode.TABLE_COMMIT), codes);
         assertTrue(f.commands().stream().allMatch(c -> c.reason() == CommandReason.OK));

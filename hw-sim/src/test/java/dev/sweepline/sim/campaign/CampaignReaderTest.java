@@ -29,6 +29,8 @@ class CampaignReaderTest {
         "draws: {alphaAbundance: {uniform: [0.1, 0.9]}}|5|draws.alphaAbundance|draws must lie in",
         "draws: {protonSpeed: {uniform: [400, 300]}}|5|draws.protonSpeed|upper bound",
         "grid: {resurveyEvery: [0]}|5|grid|refused by the flight software",
+        // commands.md §4.1: the edge search has its own reason code, not BAD_LOCK_LOSS
+        "grid: {edgeSearchWindows: [9999]}|5|grid|refused by the flight software: BAD_EDGE_SEARCH (edgeSearchWindows must be 0..256)",
         // the demo cup's HV supply slews 1 code per us and settles with tau 150 us (its description):
         // 0.5 us per code and 300 us fixed settle are below what it needs (commands.md §4.4)
         "grid: {settleMicrosPerCode: [1, 0.5]}|5|grid|SETTLE_BELOW_SLEW (the HV supply's slew limit",

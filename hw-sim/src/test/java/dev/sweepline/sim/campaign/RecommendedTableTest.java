@@ -14,7 +14,7 @@ import dev.sweepline.sim.bench.ClosedLoopBench;
 import dev.sweepline.ground.spectrum.WindowCatalogue;
 import dev.sweepline.sim.bench.GroundCheck;
 import dev.sweepline.sim.bench.RunPool;
-import dev.sweepline.sim.command.CommandScript;
+import dev.sweepline.fsw.host.script.CommandScript;
 import dev.sweepline.sim.command.ScriptRunner;
 import dev.sweepline.sim.instrument.SimulatedInstrument;
 import java.nio.file.Files;

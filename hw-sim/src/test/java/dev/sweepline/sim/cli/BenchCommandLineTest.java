@@ -39,13 +39,13 @@ class BenchCommandLineTest {
         Path bad = dir.resolve("bad.yaml");
         Files.writeString(bad, Files.readString(Path.of("src/test/resources/scenarios-bad/negative-density.yaml")));
         int status = BenchMain.commandLine().execute("run", "--scenario", bad.toString(), "--out", dir.toString());
-        assertEquals(2, status); // a usage error, not a crash
+        assertEquals(dev.sweepline.fsw.host.ExitStatus.INPUT, status); // an input error, not a crash
         assertTrue(Files.notExists(dir.resolve("summary.json")));
     }
 
     @Test
     void shouldRefuseFewerThanOneThreadForCampaignsAndBudgets() {
-        // cli design note: exit status 2 for a usage error; the run pool needs at least one thread
+        // ExitStatus: 2 for a usage error; the run pool needs at least one thread
         Path plan = Path.of("src/main/resources/plans/cinder-orbit.yaml");
         assertEquals(2, BenchMain.commandLine().execute("budget", plan.toString(), "--threads", "0", "--out",
                 dir.resolve("budget").toString()));

@@ -22,8 +22,8 @@ class FineCupCommandLineTest {
 
     @Test
     void shouldRefuseAnInstrumentThatDisagreesWithTheCampaign(@TempDir Path dir) {
-        // campaigns/FORMAT.md, instrument: --instrument must name the campaign's instrument, else exit 2
-        assertEquals(2, BenchMain.commandLine().execute("tune", CAMPAIGN, "--instrument", "demo-cup", "--out",
+        // campaigns/FORMAT.md, instrument: --instrument must name the campaign's instrument, else an input error
+        assertEquals(dev.sweepline.fsw.host.ExitStatus.INPUT, BenchMain.commandLine().execute("tune", CAMPAIGN, "--instrument", "demo-cup", "--out",
                 dir.toString()));
         assertTrue(Files.notExists(dir.resolve("runs.csv")));
     }
@@ -38,11 +38,11 @@ class FineCupCommandLineTest {
     }
 
     @Test
-    void shouldRefuseABrokenDescriptionWithExitTwo(@TempDir Path dir) throws Exception {
+    void shouldRefuseABrokenDescriptionAsAnInputError(@TempDir Path dir) throws Exception {
         Path bad = dir.resolve("bad-cup.yaml");
         Files.writeString(bad, "format: sweepline-instrument/0\n");
-        // instruments/FORMAT.md: a broken file fails with its file, line and field; README: exit status 2
-        assertEquals(2, BenchMain.commandLine().execute("run", "--instrument", bad.toString(), "--out",
+        // instruments/FORMAT.md: a broken file fails with its file, line and field; ExitStatus: an input error
+        assertEquals(dev.sweepline.fsw.host.ExitStatus.INPUT, BenchMain.commandLine().execute("run", "--instrument", bad.toString(), "--out",
                 dir.resolve("run").toString()));
         assertTrue(Files.notExists(dir.resolve("run")));
     }

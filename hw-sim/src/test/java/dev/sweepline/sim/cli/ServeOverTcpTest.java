@@ -35,6 +35,38 @@ import org.junit.jupiter.api.io.TempDir;
 class ServeOverTcpTest {
     @Test
     @Timeout(value = 60, unit = TimeUnit.SECONDS)
+    void shouldServeTheNextClientAfterOneLeaves(@TempDir Path dir) throws Exception {
+        int port;
+        try (ServerSocket probe = new ServerSocket(0)) {
+            port = probe.getLocalPort();
+        }
+        String address = "tcp:127.0.0.1:" + port;
+        int[] serveExit = {-1};
+        Thread serve = new Thread(() -> serveExit[0] = BenchMain.commandLine().execute("serve", "--port", address,
+                "--scenario", "quiet-perihelion", "--seed", "5", "--as-fast-as-possible", "--clients", "2"), "serve");
+        serve.start();
+        List<byte[]> runs = new ArrayList<>();
+        for (int client = 0; client < 2; client++) {
+            Path tm = dir.resolve("run-" + client + ".tm");
+            int fswExit = 1;
+            for (int attempt = 0; attempt < 50 && fswExit != 0; attempt++) { // until the server listens
+                Thread.sleep(100);
+                fswExit = FswMain.commandLine().execute("run", "--link", address, "--tm", tm.toString(), "--minutes",
+                        "0.05", "--clock", "link");
+            }
+            assertEquals(0, fswExit, "client " + client);
+            runs.add(Files.readAllBytes(tm));
+        }
+        serve.join(10_000);
+        assertFalse(serve.isAlive());
+        assertEquals(0, serveExit[0]);
+        // each client gets the instrument fresh from the scenario and seed: the second run is the first again
+        assertTrue(runs.get(0).length > 0);
+        assertArrayEquals(runs.get(0), runs.get(1));
+    }
+
+    @Test
+    @Timeout(value = 60, unit = TimeUnit.SECONDS)
     void shouldRunTheFlightSoftwareAgainstTheServedInstrumentOverTcp(@TempDir Path dir) throws Exception {
         int port;
         try (ServerSocket probe = new ServerSocket(0)) {
@@ -43,7 +75,7 @@ class ServeOverTcpTest {
         String address = "tcp:127.0.0.1:" + port;
         int[] serveExit = {-1};
         Thread serve = new Thread(() -> serveExit[0] = BenchMain.commandLine().execute("serve", "--port", address,
-                "--scenario", "quiet-perihelion", "--seed", "5", "--as-fast-as-possible"), "serve");
+                "--scenario", "quiet-perihelion", "--seed", "5", "--as-fast-as-possible", "--clients", "1"), "serve");
         serve.start();
         Path tm = dir.resolve("telemetry.tm");
         int fswExit = 1;
@@ -54,7 +86,7 @@ class ServeOverTcpTest {
         }
         serve.join(10_000);
         assertEquals(0, fswExit);
-        assertEquals(0, serveExit[0]); // the server ends when the flight software hangs up
+        assertEquals(0, serveExit[0]); // --clients 1: the server ends when its one client hangs up
 
         ByteArrayOutputStream reference = new ByteArrayOutputStream();
         ClosedLoopBench.run(BenchConfig.defaults(ScenarioLoader.resolve("quiet-perihelion"), 5, 12),

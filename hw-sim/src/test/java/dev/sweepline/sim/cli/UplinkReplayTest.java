@@ -5,9 +5,9 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
-import dev.sweepline.sim.command.GroundCommandCounter;
-import dev.sweepline.sim.command.ScriptException;
-import dev.sweepline.sim.command.UplinkLog;
+import dev.sweepline.fsw.host.script.GroundCommandCounter;
+import dev.sweepline.fsw.host.script.ScriptException;
+import dev.sweepline.fsw.host.script.UplinkLog;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;

@@ -1,5 +1,7 @@
 package dev.sweepline.sim.command;
 
+import dev.sweepline.fsw.host.script.ScriptException;
+import dev.sweepline.fsw.host.script.CommandScript;
 import dev.sweepline.fsw.command.CommandCode;
 import java.util.List;
 import org.junit.jupiter.api.Test;
@@ -39,5 +41,21 @@ class CommandScriptTest {
         assertThrows(ScriptException.class, () -> CommandScript.parse(List.of("2 NO_OP", "1 NO_OP")));
         assertThrows(ScriptException.class, () -> CommandScript.parse(List.of("1 LAUNCH")));
         assertThrows(ScriptException.class, () -> CommandScript.parse(List.of("x NO_OP")));
+    }
+
+    @Test
+    void shouldCountStuckQuadrantsOneToFourAndRefuseOthersWithTheLine() throws Exception {
+        // commands.md §7: STUCK q code, q counted 1..4 as the STUCK_CHANNEL event reports it (§6)
+        assertEquals(4, CommandScript.parse(List.of("1 INJECT STUCK 4 100")).entries().get(0).values()[0]);
+        for (String bad : new String[] {"0", "5"}) {
+            ScriptException e = assertThrows(ScriptException.class,
+                    () -> CommandScript.parse(List.of("# c", "1 INJECT STUCK " + bad + " 100")));
+            assertEquals("line 2: STUCK quadrant must be 1..4 (as the STUCK_CHANNEL event counts them), got " + bad,
+                    e.getMessage());
+        }
+        // the demo cup's ADC is 16 bits (instruments/demo-cup.yaml): codes 0..65535
+        ScriptException e = assertThrows(ScriptException.class,
+                () -> CommandScript.parse(List.of("1 INJECT STUCK 1 65536")));
+        assertEquals("line 1: STUCK code must be 0..65535 (a 16-bit ADC), got 65536", e.getMessage());
     }
 }

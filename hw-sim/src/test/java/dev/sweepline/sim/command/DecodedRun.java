@@ -1,5 +1,7 @@
 package dev.sweepline.sim.command;
 
+import dev.sweepline.fsw.host.script.ScriptException;
+import dev.sweepline.fsw.host.script.CommandScript;
 import dev.sweepline.fsw.command.NonVolatileStore;
 import dev.sweepline.fsw.exec.FlightConfig;
 import dev.sweepline.fsw.exec.FlightSoftware;

@@ -71,11 +71,11 @@ class FaultInjectionRunTest {
 
     @Test
     void shouldReportStuckQuadrant() throws Exception {
-        DecodedRun run = DecodedRun.of(List.of("3.0 INJECT STUCK 1 1000"), 12, null, f -> { });
+        DecodedRun run = DecodedRun.of(List.of("3.0 INJECT STUCK 2 1000"), 12, null, f -> { });
         List<EventReport> f = run.faults(FaultMonitorId.STUCK_CHANNEL);
         assertAfterInjection(run, f);
         assertEquals(FaultResponse.SURVEY, f.get(0).argumentB());
-        assertEquals(2, f.get(0).reasonCode()); // detail = quadrant number 1..4: index 1 is Q2
+        assertEquals(2, f.get(0).reasonCode()); // detail = quadrant number 1..4, as the script counts them
     }
 
     @Test

@@ -1,5 +1,7 @@
 package dev.sweepline.sim.command;
 
+import dev.sweepline.fsw.host.script.ScriptException;
+import dev.sweepline.fsw.host.script.CommandScript;
 import dev.sweepline.sim.instrument.TestInstruments;
 import dev.sweepline.sim.instrument.InstrumentModel;
 import static org.junit.jupiter.api.Assertions.assertEquals;
@@ -21,7 +23,7 @@ import org.junit.jupiter.api.Test;
  * reports, and no step of the run commands a level above the limit; the same table to 3000 V flies.
  */
 class UnsafeTableRunTest {
-    private static int maxLevel(String tableLine, List<ScriptRunner.Sent> sent) throws ScriptException {
+    private static int maxLevel(String tableLine, List<dev.sweepline.fsw.host.script.ScriptPlayer.Sent> sent) throws ScriptException {
         CommandScript script = CommandScript.parse(List.of(tableLine));
         ScriptRunner runner = new ScriptRunner(script, true, null);
         int[] max = {0};
@@ -39,19 +41,19 @@ class UnsafeTableRunTest {
 
     @Test
     void shouldRefuseTheTableAndFlyNoStepAboveTheLimit() throws ScriptException {
-        List<ScriptRunner.Sent> sent = new java.util.ArrayList<>();
+        List<dev.sweepline.fsw.host.script.ScriptPlayer.Sent> sent = new java.util.ArrayList<>();
         CommandScript parsed = CommandScript.parse(List.of("3.0 TABLE_LOGSPACED 64 100 6400 4"));
         assertEquals(1, parsed.warnings().size(), "the script says the table is above the limit");
         int max = maxLevel("3.0 TABLE_LOGSPACED 64 100 6400 4", sent);
         assertTrue(max <= TestInstruments.DEMO_CUP.flight().limits().maxLevelCode, "highest level flown: code " + max);
-        ScriptRunner.Sent commit = sent.get(sent.size() - 1);
+        dev.sweepline.fsw.host.script.ScriptPlayer.Sent commit = sent.get(sent.size() - 1);
         assertEquals(CommandCode.TABLE_COMMIT, commit.code());
         assertEquals(CommandReason.TABLE_NOT_VERIFIED, commit.reason());
     }
 
     @Test
     void shouldCommitAndFlyTheTableBelowTheLimit() throws ScriptException {
-        List<ScriptRunner.Sent> sent = new java.util.ArrayList<>();
+        List<dev.sweepline.fsw.host.script.ScriptPlayer.Sent> sent = new java.util.ArrayList<>();
         int max = maxLevel("3.0 TABLE_LOGSPACED 64 100 3000 4", sent);
         assertEquals(CommandCode.TABLE_COMMIT, sent.get(sent.size() - 1).code());
         assertEquals(CommandReason.OK, sent.get(sent.size() - 1).reason());

@@ -59,6 +59,9 @@ public record BuiltIns(String folder, String what) {
      * @throws FileFormatException when it does not exist or cannot be read
      */
     public static String file(Path path) {
+        if (Files.isDirectory(path)) {
+            throw new FileFormatException(path.toString(), 0, "", "is a folder, not a file");
+        }
         try {
             return Files.readString(path, StandardCharsets.UTF_8);
         } catch (NoSuchFileException e) {
@@ -70,6 +73,10 @@ public record BuiltIns(String folder, String what) {
 
     /** The error for a name that is neither a built-in nor a file: it lists the built-ins. */
     public FileFormatException unknown(String name) {
+        if (Files.isDirectory(Path.of(name))) {
+            return new FileFormatException(name, 0, "", "is a folder, not a " + what + " file (nor a built-in "
+                    + what + "; built-ins: " + String.join(", ", names()) + ")");
+        }
         return new FileFormatException(name, 0, "", "no built-in " + what + " of that name and no such file; built-ins: "
                 + String.join(", ", names()));
     }

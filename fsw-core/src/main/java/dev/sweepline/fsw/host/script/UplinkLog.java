@@ -1,4 +1,4 @@
-package dev.sweepline.sim.command;
+package dev.sweepline.fsw.host.script;
 
 import java.io.BufferedOutputStream;
 import java.io.Closeable;

@@ -1,4 +1,4 @@
-package dev.sweepline.sim.command;
+package dev.sweepline.fsw.host.script;
 
 /**
  * One time-tagged line of a command script, resolved: a telecommand (code and arguments, signed

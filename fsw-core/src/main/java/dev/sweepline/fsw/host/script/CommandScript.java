@@ -1,4 +1,4 @@
-package dev.sweepline.sim.command;
+package dev.sweepline.fsw.host.script;
 
 import dev.sweepline.fsw.instrument.InstrumentDescription;
 import dev.sweepline.fsw.host.instrument.Instruments;
@@ -29,7 +29,7 @@ import java.util.Locale;
  *   5.2  HV_ENABLE
  *   6.0  RESET_COUNTERS 7
  *   7.0  TABLE_DUMP 0 0 64                 # copy (0 active, 1 pending), offset, length
- *   8.0  INJECT HV_READBACK 500            # also SATURATE on|off, STUCK q code, DEAD on|off,
+ *   8.0  INJECT HV_READBACK 500            # also SATURATE on|off, STUCK q(1..4) code, DEAD on|off,
  *                                          #      SEQUENCE on|off, OVERRUN ticks, CLEAR
  *   9.0  AUTH_RECOVER                      # names this boot's challenge (commands.md §1.4)
  * </pre>
@@ -89,9 +89,13 @@ public final class CommandScript {
         return read(file, Instruments.defaultSpec().flight());
     }
 
-    /** Reads a script file for {@code instrument} (its tables and their limits). */
+    /**
+     * Reads a script file for {@code instrument} (its tables and their limits); a {@code TABLE_IMAGE}
+     * path is relative to the script's folder.
+     */
     public static CommandScript read(Path file, InstrumentDescription instrument) throws IOException, ScriptException {
-        return parse(Files.readAllLines(file), instrument);
+        Path folder = file.toAbsolutePath().getParent();
+        return parse(Files.readAllLines(file), instrument, folder != null ? folder : Path.of(""));
     }
 
     /** Parses script lines for the default instrument. */
@@ -99,8 +103,17 @@ public final class CommandScript {
         return parse(lines, Instruments.defaultSpec().flight());
     }
 
-    /** Parses script lines for {@code instrument}: its DAC scale and default parameters, its voltage limit. */
+    /**
+     * Parses script lines for {@code instrument}: its DAC scale and default parameters, its voltage
+     * limit; a {@code TABLE_IMAGE} path is relative to the working directory.
+     */
     public static CommandScript parse(List<String> lines, InstrumentDescription instrument) throws ScriptException {
+        return parse(lines, instrument, Path.of(""));
+    }
+
+    /** As {@link #parse(List, InstrumentDescription)}, a {@code TABLE_IMAGE} path relative to {@code folder}. */
+    public static CommandScript parse(List<String> lines, InstrumentDescription instrument, Path folder)
+            throws ScriptException {
         List<ScriptEntry> out = new ArrayList<>();
         List<String> warnings = new ArrayList<>();
         long last = Long.MIN_VALUE;
@@ -129,7 +142,7 @@ public final class CommandScript {
                 throw new ScriptException(lineNo, "time goes backwards");
             }
             last = at;
-            parseLine(at, lineNo, t, out, instrument);
+            parseLine(at, lineNo, t, out, instrument, folder);
             if ("TABLE_LOGSPACED".equalsIgnoreCase(t[1])) {
                 warnAboveLimit(lineNo, t, warnings, instrument.limits());
             }
@@ -137,8 +150,8 @@ public final class CommandScript {
         return new CommandScript(out, images(out), warnings);
     }
 
-    private static void parseLine(long at, int line, String[] t, List<ScriptEntry> out, InstrumentDescription instrument)
-            throws ScriptException {
+    private static void parseLine(long at, int line, String[] t, List<ScriptEntry> out, InstrumentDescription instrument,
+            Path folder) throws ScriptException {
         String verb = t[1].toUpperCase(Locale.ROOT);
         switch (verb) {
             case "NO_OP" -> out.add(command(at, line, CommandCode.NO_OP, t, 0));
@@ -159,7 +172,7 @@ public final class CommandScript {
                     (byte) (off >>> 8), (byte) off, (byte) (len >>> 8), (byte) len}, null, null));
             }
             case "TABLE_LOGSPACED" -> table(at, line, t, out, instrument);
-            case "TABLE_IMAGE" -> tableFile(at, line, t, out);
+            case "TABLE_IMAGE" -> tableFile(at, line, t, out, folder);
             case "INJECT" -> {
                 need(t, 1, line);
                 String what = t[2].toUpperCase(Locale.ROOT);
@@ -174,11 +187,7 @@ public final class CommandScript {
                             throw new ScriptException(line, what + " takes one value");
                         }
                     }
-                    case "STUCK" -> {
-                        if (values.length != 2) {
-                            throw new ScriptException(line, "STUCK takes a quadrant 0..3 and a code");
-                        }
-                    }
+                    case "STUCK" -> stuck(values, line, instrument);
                     case "CLEAR" -> {
                     }
                     default -> throw new ScriptException(line, "unknown injection '" + t[2] + "'");
@@ -186,6 +195,25 @@ public final class CommandScript {
                 out.add(new ScriptEntry(at, line, -1, new byte[0], what, values));
             }
             default -> throw new ScriptException(line, "unknown verb '" + t[1] + "'");
+        }
+    }
+
+    /**
+     * Checks {@code STUCK q code}: the quadrant counted 1..4, as the STUCK_CHANNEL event reports it
+     * (commands.md §6), and a code the instrument's ADC can give.
+     */
+    private static void stuck(int[] values, int line, InstrumentDescription instrument) throws ScriptException {
+        if (values.length != 2) {
+            throw new ScriptException(line, "STUCK takes a quadrant 1.." + InstrumentDescription.QUADRANTS + " and a code");
+        }
+        if (values[0] < 1 || values[0] > InstrumentDescription.QUADRANTS) {
+            throw new ScriptException(line, "STUCK quadrant must be 1.." + InstrumentDescription.QUADRANTS
+                    + " (as the STUCK_CHANNEL event counts them), got " + values[0]);
+        }
+        long top = (1L << instrument.adcBits()) - 1;
+        if (values[1] < 0 || values[1] > top) {
+            throw new ScriptException(line, "STUCK code must be 0.." + top + " (a " + instrument.adcBits()
+                    + "-bit ADC), got " + values[1]);
         }
     }
 
@@ -231,14 +259,21 @@ public final class CommandScript {
         loadImage(at, line, image, n, out);
     }
 
-    /** An image file (as {@code bench tune} writes recommended.table): its loads, verify and commit. */
-    private static void tableFile(long at, int line, String[] t, List<ScriptEntry> out) throws ScriptException {
+    /**
+     * An image file (as {@code bench tune} writes recommended.table), relative to {@code folder}: its
+     * loads, verify and commit.
+     */
+    private static void tableFile(long at, int line, String[] t, List<ScriptEntry> out, Path folder)
+            throws ScriptException {
         need(t, 1, line);
         byte[] image;
+        Path file = folder.resolve(t[2]);
         try {
-            image = Files.readAllBytes(Path.of(t[2]));
+            image = Files.readAllBytes(file);
+        } catch (java.nio.file.NoSuchFileException e) {
+            throw new ScriptException(line, "TABLE_IMAGE " + file + ": no such file");
         } catch (IOException e) {
-            throw new ScriptException(line, "cannot read table image " + t[2] + ": " + e.getMessage());
+            throw new ScriptException(line, "TABLE_IMAGE " + file + ": cannot read it (" + e.getMessage() + ")");
         }
         if (!TableImage.intact(image, image.length)) {
             throw new ScriptException(line, t[2] + " is not an intact table image (CRC or length)");

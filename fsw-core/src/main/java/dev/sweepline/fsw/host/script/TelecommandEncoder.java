@@ -1,4 +1,4 @@
-package dev.sweepline.sim.command;
+package dev.sweepline.fsw.host.script;
 
 import dev.sweepline.fsw.command.CommandAuthenticator;
 import dev.sweepline.fsw.command.HmacSha256;

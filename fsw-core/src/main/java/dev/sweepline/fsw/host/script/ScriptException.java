@@ -1,4 +1,4 @@
-package dev.sweepline.sim.command;
+package dev.sweepline.fsw.host.script;
 
 /** A command script that cannot be read, with the line named. */
 public final class ScriptException extends Exception {
