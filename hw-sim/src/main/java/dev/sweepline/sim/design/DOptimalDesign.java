@@ -5,17 +5,18 @@ import dev.sweepline.sim.hv.WindowVolts;
 import dev.sweepline.sim.plasma.IonPopulation;
 import dev.sweepline.sim.plasma.PlasmaState;
 import dev.sweepline.sim.preamp.Preamplifier;
+import java.util.List;
 
 /**
- * The yardstick: how much could the same integration time, spent on the same windows, have told
- * about the protons' (n, U, w)? The D-optimal approximate design maximises det F over the share of
- * time each window gets; it is found with the multiplicative algorithm (Silvey, Titterington and
- * Torsney 1978 [memory]) and checked by the Kiefer-Wolfowitz equivalence theorem: at the optimum no
- * window's standardised variance tr(F⁻¹ M_j) exceeds the parameter count.
+ * The yardstick: how much could the same integration time, spent on the same windows over the same
+ * plasmas, have told about the protons' (n, U, w)? A candidate window's information per second is
+ * its information averaged over the run's plasmas (a design that gives window j the share s_j of the
+ * time throughout the run collects T Σ_j s_j M̄_j); the D-optimal approximate design maximises
+ * det Σ_j s_j M̄_j over the shares, found by {@link DesignSolver}.
  */
 public final class DOptimalDesign {
-    private static final int MAX_ITERATIONS = 5000;
-    private static final double EQUIVALENCE_TOLERANCE = 1e-3;
+    /** Convergence of the yardstick: max_j d_j ≤ p (1 + 1e-6), so its det is within 3e-6 of the optimum's (DesignSolver). */
+    public static final double TOLERANCE = 1e-6;
 
     private final ProtonInformation information;
     private final FaradayCup cup;
@@ -30,65 +31,80 @@ public final class DOptimalDesign {
         this.information = new ProtonInformation(cup.geometry(), preamp);
     }
 
+    /** As {@link #optimalInformation(List, double, double)} for the one plasma {@code plasma}. */
+    public double[][] optimalInformation(PlasmaState plasma, double totalSeconds, double stepSeconds) {
+        return optimalInformation(List.of(plasma), totalSeconds, stepSeconds);
+    }
+
     /**
-     * The information matrix of the D-optimal design for {@code plasma}: {@code totalSeconds} of
-     * integration shared among the windows in steps of {@code stepSeconds}, each window read in the
-     * most sensitive gain range that does not saturate.
+     * The information matrix of the D-optimal design over {@code plasmas} (a sampling of the run, each
+     * the same weight): {@code totalSeconds} of integration shared among the windows in steps of
+     * {@code stepSeconds}, each window read in the most sensitive gain range that does not saturate at
+     * each plasma.
      *
      * @return the 3x3 information matrix, or null when the protons are absent or unmeasurable
      */
-    public double[][] optimalInformation(PlasmaState plasma, double totalSeconds, double stepSeconds) {
-        IonPopulation p = ProtonInformation.protons(plasma);
-        if (p == null) {
+    public double[][] optimalInformation(List<PlasmaState> plasmas, double totalSeconds, double stepSeconds) {
+        DesignSolver.Solution s = solve(plasmas, stepSeconds);
+        if (s == null) {
             return null;
         }
-        int n = windows.count();
-        double[][][] m = new double[n][][];
-        double[] g = new double[3];
-        double[] quadrants = new double[4];
-        int usable = 0;
-        for (int j = 0; j < n; j++) {
-            cup.quadrantCurrents(plasma, windows.lowVolts(j), windows.highVolts(j), quadrants);
-            double total = quadrants[0] + quadrants[1] + quadrants[2] + quadrants[3];
-            int range = rangeFor(preamp, Math.max(Math.max(quadrants[0], quadrants[1]), Math.max(quadrants[2], quadrants[3])));
-            information.gradient(plasma, p, windows.lowVolts(j), windows.highVolts(j), g);
-            // information per second of window j, at the run's step length
-            double perSecond = 1.0 / (information.variance(total, range, stepSeconds) * stepSeconds);
-            m[j] = new double[3][3];
-            ProtonInformation.accumulate(m[j], g, 1.0 / perSecond, 1.0);
-            if (g[0] != 0) {
-                usable++;
-            }
-        }
-        if (usable < ProtonInformation.PARAMETERS) {
-            return null;
-        }
-        double[] share = new double[n];
-        java.util.Arrays.fill(share, 1.0 / n);
-        double[][] f = new double[3][3];
-        for (int it = 0; it < MAX_ITERATIONS; it++) {
-            combine(m, share, f);
-            double[][] inv = ProtonInformation.inverse(f);
-            if (inv == null) {
-                return null;
-            }
-            double worst = 0;
-            for (int j = 0; j < n; j++) {
-                double d = trace(inv, m[j]);
-                share[j] *= d / ProtonInformation.PARAMETERS;
-                worst = Math.max(worst, d);
-            }
-            if (worst <= ProtonInformation.PARAMETERS * (1 + EQUIVALENCE_TOLERANCE)) {
-                break;
-            }
-        }
-        combine(m, share, f);
+        double[][] f = s.information();
         for (double[] row : f) {
             for (int b = 0; b < 3; b++) {
                 row[b] *= totalSeconds;
             }
         }
         return f;
+    }
+
+    /** The D-optimal design per second over {@code plasmas}, with its equivalence-theorem figures; null as above. */
+    public DesignSolver.Solution solve(List<PlasmaState> plasmas, double stepSeconds) {
+        double[][][] m = windowInformation(plasmas, stepSeconds);
+        return m == null ? null : DesignSolver.solve(m, TOLERANCE);
+    }
+
+    /**
+     * Each window's information per second, averaged over the {@code plasmas} that hold protons; null
+     * when none does or fewer windows than parameters carry information.
+     */
+    public double[][][] windowInformation(List<PlasmaState> plasmas, double stepSeconds) {
+        int n = windows.count();
+        double[][][] m = new double[n][3][3];
+        double[] g = new double[3];
+        double[] quadrants = new double[4];
+        int sampled = 0;
+        for (PlasmaState plasma : plasmas) {
+            IonPopulation p = ProtonInformation.protons(plasma);
+            if (p == null) {
+                continue;
+            }
+            sampled++;
+            for (int j = 0; j < n; j++) {
+                cup.quadrantCurrents(plasma, windows.lowVolts(j), windows.highVolts(j), quadrants);
+                double total = quadrants[0] + quadrants[1] + quadrants[2] + quadrants[3];
+                int range = rangeFor(preamp, Math.max(Math.max(quadrants[0], quadrants[1]),
+                        Math.max(quadrants[2], quadrants[3])));
+                information.gradient(plasma, p, windows.lowVolts(j), windows.highVolts(j), g);
+                // information per second of window j, at the run's step length
+                ProtonInformation.accumulate(m[j], g, information.variance(total, range, stepSeconds) * stepSeconds, 1.0);
+            }
+        }
+        if (sampled == 0) {
+            return null;
+        }
+        int usable = 0;
+        for (double[][] mj : m) {
+            for (double[] row : mj) {
+                for (int b = 0; b < 3; b++) {
+                    row[b] /= sampled;
+                }
+            }
+            if (mj[0][0] > 0) {
+                usable++;
+            }
+        }
+        return usable < ProtonInformation.PARAMETERS ? null : m;
     }
 
     /** The most sensitive range whose full scale holds the quadrant current below 80 % (physics.md). */
@@ -99,29 +115,6 @@ public final class DOptimalDesign {
             }
         }
         return preamp.ranges() - 1;
-    }
-
-    private static void combine(double[][][] m, double[] share, double[][] f) {
-        for (double[] row : f) {
-            java.util.Arrays.fill(row, 0);
-        }
-        for (int j = 0; j < m.length; j++) {
-            for (int a = 0; a < 3; a++) {
-                for (int b = 0; b < 3; b++) {
-                    f[a][b] += share[j] * m[j][a][b];
-                }
-            }
-        }
-    }
-
-    private static double trace(double[][] inv, double[][] mj) {
-        double t = 0;
-        for (int a = 0; a < 3; a++) {
-            for (int b = 0; b < 3; b++) {
-                t += inv[a][b] * mj[b][a];
-            }
-        }
-        return t;
     }
 
     /** D-efficiency (det measured / det optimal)^(1/3); NaN when either is singular. */
