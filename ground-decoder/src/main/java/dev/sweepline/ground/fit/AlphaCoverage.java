@@ -6,7 +6,9 @@ package dev.sweepline.ground.fit;
  * thermal speed is then w_α = w_p √(4 m_p/m_α) ≈ w_p. The top window's alpha threshold v_top decides
  * (physics.md "Alpha particles": the alpha peak sits at the proton-equivalent speed 1.409 U):
  * <ul>
- *   <li>{@link #PEAK}: v_top &gt; U_p, the alpha peak is inside: the free joint fit.</li>
+ *   <li>{@link #PEAK}: v_top &gt; U_p, the alpha peak is inside: the free joint fit; when that fit is not
+ *       physical (a drifting alpha peak just above the top window, which the proton-only U_p cannot see),
+ *       the constrained component.</li>
  *   <li>{@link #PART}: U_p − {@link #REACH_THERMAL} w_α &lt; v_top ≤ U_p: part of the alphas (from
  *       ½ erfc(3) = 1e-5 up to half of them) is in the band, the peak is not: the constrained component.</li>
  *   <li>{@link #NONE}: no alpha current to speak of: protons alone.</li>

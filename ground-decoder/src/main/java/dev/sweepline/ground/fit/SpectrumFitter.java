@@ -104,13 +104,16 @@ public final class SpectrumFitter {
         AlphaPrior prior = null;
         LeastSquaresRun.Outcome joint = null;
         if (m >= MIN_WINDOWS_JOINT) {
-            switch (AlphaCoverage.of(protonModel, best.parameters())) {
-                case PEAK -> joint = jointFit(in, area, protonModel, best);
-                case PART -> {
-                    prior = AlphaPrior.forProtonSpeed(best.parameters()[1]);
-                    joint = constrainedFit(in, area, protonModel, best, prior);
-                }
-                case NONE -> joint = null;
+            AlphaCoverage coverage = AlphaCoverage.of(protonModel, best.parameters());
+            LeastSquaresRun.Outcome free = coverage == AlphaCoverage.PEAK ? jointFit(in, area, protonModel, best) : null;
+            if (free != null) {
+                // a physical free fit: the test alone decides, no second try
+                joint = FREE_ALPHAS.accepts(best.chiSquare(), free.chiSquare()) ? free : null;
+            } else if (coverage != AlphaCoverage.NONE) {
+                // part of the alphas in the band, or a free fit that put the alpha peak outside it (a drifting
+                // alpha peak just above the top window): the constrained component
+                prior = AlphaPrior.forProtonSpeed(best.parameters()[1]);
+                joint = constrainedFit(in, area, protonModel, best, prior);
             }
         }
         if (joint != null) {
@@ -171,6 +174,10 @@ public final class SpectrumFitter {
         return p[0] > 0 && p[2] > 0 && p[1] > LeastSquaresRun.MIN_SPEED && p[1] < LeastSquaresRun.MAX_SPEED;
     }
 
+    /**
+     * The free joint fit (n_α, U_α, w_α free), or null when it does not converge to physical values with the
+     * alpha peak inside the windows; the selection test is the caller's.
+     */
     private static LeastSquaresRun.Outcome jointFit(SpectrumInput in, double area, PlasmaModel protonModel,
             LeastSquaresRun.Outcome protons) {
         double[] p = protons.parameters();
@@ -196,7 +203,7 @@ public final class SpectrumFitter {
         double alphaRatio = q[3] / q[0];
         double alphaPeakVolts = Species.ALPHA.voltsAtSpeed(q[4]);
         boolean sane = alphaRatio > 0 && alphaRatio < MAX_ALPHA_RATIO && q[4] > 0.7 * q[1] && q[4] < 1.5 * q[1]
-                && alphaPeakVolts < max(in.highVolts()) && FREE_ALPHAS.accepts(protons.chiSquare(), o.chiSquare());
+                && alphaPeakVolts < max(in.highVolts());
         return sane && finiteErrors(o.covariance()) ? o : null;
     }
 

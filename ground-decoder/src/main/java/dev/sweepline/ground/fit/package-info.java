@@ -25,8 +25,8 @@
  * free, so an alpha drift is allowed). The joint fit replaces the proton fit only when the χ² drop passes
  * the likelihood-ratio test of {@link dev.sweepline.ground.fit.AlphaSelection} and the fit is physical
  * (0 < n_α/n_p < 0.5, 0.7 U_p < U_α < 1.5 U_p, alpha peak inside the windows). Where the windows hold part
- * of the alphas but not their peak ({@link dev.sweepline.ground.fit.AlphaCoverage}), the alphas are a
- * constrained component instead: the joint model with the prior rows of {@link
+ * of the alphas but not their peak ({@link dev.sweepline.ground.fit.AlphaCoverage}), or the free fit is not
+ * physical, the alphas are a constrained component instead: the joint model with the prior rows of {@link
  * dev.sweepline.ground.fit.AlphaPrior} (drift 0 ± 0.1 U_p, T_α/T_p = 4 ± 2), kept by the same test with k
  * the effective number of extra free parameters. (3) The proton angles again, from each species' share of
  * the quadrant differences ({@link dev.sweepline.ground.fit.SpeciesFlowAngles}), so that drifting alphas
