@@ -67,4 +67,19 @@ class StartUpTest {
         // and they are right: the first survey's density within 5 of its bounds (z, Cramér-Rao)
         assertTrue(Math.abs(survey.z()[0]) < 5, "z of n " + survey.z()[0]);
     }
+
+    @org.junit.jupiter.api.Test
+    void shouldLeaveThePeakEmptyWhenTheSweepFindsNone() throws java.io.IOException {
+        // P1 at 1e-4 of its density: ~0.3 fA per quadrant at the peak, below range 0's Johnson noise
+        // sqrt(4kTB/R_f) = 1.0 fA (closed form; instruments/demo-cup.yaml: R_f = 4 V / 40 pA, 300 K,
+        // B = 1/(2 x 8 ms)): no sweep finds a peak, and the products say so instead of a peak at window 0
+        ClosedLoopBench.Result r = ClosedLoopBench.run(BenchConfig.defaults(plasma("empty", 5e-4, 1.0e5), 7, 3),
+                ClosedLoopBench.Progress.NONE);
+        assertTrue(r.recorder().sweeps().stream().allMatch(s -> Double.isNaN(s.peakWindow())));
+        assertEquals(0, r.summary().tracking().peakSweeps()); // no peak error from a peak never found
+        java.nio.file.Path dir = java.nio.file.Files.createTempDirectory("start-up");
+        RunReportWriter.write(dir, r);
+        String row = java.nio.file.Files.readAllLines(dir.resolve("decisions.csv")).get(1);
+        assertEquals("", row.split(",", -1)[6], row); // peakWindow, the 7th column
+    }
 }
