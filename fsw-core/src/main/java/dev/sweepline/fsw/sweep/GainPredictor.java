@@ -9,8 +9,19 @@ import dev.sweepline.fsw.table.WindowTable;
  * read last time (sweep design note, R9). The predicted current is the largest single-quadrant
  * current of the three (the peak drifts between sweeps); the range goes up when the prediction is
  * above the up fraction of full scale, down when it is below the down fraction, and otherwise
- * stays where this window was last read (hysteresis). Windows never read, or saturated last time,
- * get the least sensitive range. One range per step: the electronics never switch mid-integration.
+ * stays where this window was last read (hysteresis). A window saturated last time gets the least
+ * sensitive range. A window never read (the first survey of a run or of a new table) follows its
+ * neighbour read just before it in the same sweep: that reading times {@link #UNREAD_HEADROOM_SHIFT}'s
+ * factor 8 (the growth of a cold beam's flank from one window to the next, below) is the prediction,
+ * from the top range down, so that a weak or cold plasma's first survey is read in a range that shows
+ * it (the top range alone reads a weak plasma as noise); a window with no neighbour read yet gets the
+ * top range. One range per step: the electronics never switch mid-integration.
+ *
+ * <p>The factor 8: on the flank of a drifting Maxwellian, one window of a log table of ratio q moves the
+ * speed by (q^(1/2) - 1) U; for the demo cup (q = 1.0384) at U/w = 16.5 (2e4 K at 300 km/s, a cold
+ * beam) that is 0.31 w, and the current grows by exp(9 - 7.24) = 5.8 between 3 w and 2.69 w below the
+ * peak (physics.md, convected Maxwellian; closed form): 8 covers it, and a faster rise only saturates
+ * the one window, after which the saturated reading lifts its neighbour to the top range.
  */
 final class GainPredictor {
     /** Highest (least sensitive) range. */
@@ -18,6 +29,9 @@ final class GainPredictor {
     /** Full scale of one quadrant above the pedestal in range 0, range-0 units = ADC counts: top code − pedestal. */
     private final long fullScaleRange0Units;
     private final int rangeRatioShift;
+
+    /** A never-read window's prediction: its read neighbour's reading shifted left by this (x 8). */
+    static final int UNREAD_HEADROOM_SHIFT = 3;
 
     private static final int UNKNOWN = 0;
     private static final int MEASURED = 1;
@@ -72,6 +86,9 @@ final class GainPredictor {
 
     /** The range to read window {@code w} in. */
     int choose(int w) {
+        if (state[w] == UNKNOWN) {
+            return chooseUnread(w);
+        }
         if (state[w] != MEASURED) {
             return topRange;
         }
@@ -89,9 +106,29 @@ final class GainPredictor {
                 r++;
             }
         } else {
-            while (r > 0 && predicted < downUnits[r]) {
-                r--;
-            }
+            r = down(r, predicted);
+        }
+        return r;
+    }
+
+    /** A never-read window: from the top range down, on its read neighbours' readings times 8. */
+    private int chooseUnread(int w) {
+        boolean left = w > 0 && state[w - 1] != UNKNOWN;
+        boolean right = w + 1 < count && state[w + 1] != UNKNOWN;
+        if (!left && !right) {
+            return topRange;
+        }
+        if ((left && state[w - 1] == SATURATED) || (right && state[w + 1] == SATURATED)) {
+            return topRange;
+        }
+        long predicted = Math.max(left ? maxQuadrantUnits[w - 1] : 0, right ? maxQuadrantUnits[w + 1] : 0);
+        return down(topRange, predicted << UNREAD_HEADROOM_SHIFT);
+    }
+
+    private int down(int range, long predicted) {
+        int r = range;
+        while (r > 0 && predicted < downUnits[r]) {
+            r--;
         }
         return r;
     }

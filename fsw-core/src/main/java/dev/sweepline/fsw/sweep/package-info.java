@@ -72,9 +72,12 @@
  *     shouldAcquireLockAfterOneSurveyWhenSignalIsStrong.</i></li>
  * <li><b>R9 Gain ranging.</b> Predicted per-quadrant current = max over the window and its two neighbours
  *     at their last reading; up above 80 %, down below 2 % of the full scale of the range this window was
- *     last read in (hysteresis); never-read or saturated windows use the top range; one range per step.
- *     <i>GainPredictorTest (thresholds at +/- 2 units, hysteresis, neighbours, reset, no saturation after
- *     the first survey near the Sun).</i></li>
+ *     last read in (hysteresis); saturated windows use the top range; a never-read window (first survey)
+ *     follows its neighbour read before it, that reading x 8, from the top range down (the top range when
+ *     no neighbour is read, or one saturated), so a weak or cold plasma is seen in the first survey; one
+ *     range per step. <i>GainPredictorTest (thresholds at +/- 2 units, hysteresis, neighbours, reset, an
+ *     unread window's thresholds at +/- 1 unit, a weak and a cold plasma's peak in the first survey, no
+ *     saturation after the first survey near the Sun).</i></li>
  * <li><b>R10 Loss of lock.</b> Each reason (NO_PEAK, CURRENT_COLLAPSE, PEAK_ON_EDGE, PEAK_JUMP) is raised
  *     by the condition it names and not by steady plasma or slow drift; after a x1.82 E/q shock the band
  *     holds the new peak within two complete sweeps after the sweep the front fell in.

@@ -25,15 +25,14 @@ class AcquisitionTest {
         RecordingListener l = new RecordingListener();
         ClosedLoop loop = Fixtures.loop(Fixtures.oneAu(12), DemoCup.parameters(), l);
         loop.runSweeps(1);
-        // cold start: every window is read in the top range (issue 2: never-measured windows use the highest
-        // range); the 1 AU peak (~5 counts per quadrant there) is below the 40-count significance threshold
-        for (int i = 0; i < 128; i++) {
-            assertEquals((DemoCup.INSTRUMENT.gainRanges() - 1), l.steps.get(i).gainRange());
-        }
-        assertEquals(SweepMode.SURVEY, loop.scheduler.mode());
-        loop.runSweeps(1);
-        // the second survey, ranged from the first, finds the peak: FOCUS with LOCK_ACQUIRED (issue 2)
-        assertEquals(128, l.sweeps.get(1)[2]);
+        // cold start: the first window is read in the top range (never read, no neighbour read), every next
+        // one from its neighbour just read (sweep design note R9): the 1 AU peak (~5 counts per quadrant in
+        // the top range, below the 40-count significance threshold there) is read in range 0
+        assertEquals(DemoCup.INSTRUMENT.gainRanges() - 1, l.steps.get(0).gainRange());
+        int peak = Fixtures.argmax(Fixtures.trueCurrents(Fixtures.oneAu(12)));
+        assertEquals(0, l.steps.get(peak).gainRange());
+        // so the first survey finds the peak: FOCUS with LOCK_ACQUIRED
+        assertEquals(128, l.sweeps.get(0)[2]);
         assertEquals(SweepMode.FOCUS, loop.scheduler.mode());
         assertEquals(ModeChangeReason.LOCK_ACQUIRED, l.lastChange().reason());
         loop.runSweeps(1);

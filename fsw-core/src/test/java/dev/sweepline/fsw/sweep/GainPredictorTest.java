@@ -86,6 +86,52 @@ class GainPredictorTest {
     }
 
     @Test
+    void shouldFollowTheReadNeighbourInAnUnreadWindow() {
+        // never read, neighbour 9 read: prediction = its reading x 8 (GainPredictor.UNREAD_HEADROOM_SHIFT),
+        // from the top range down: range 0 below DOWN_1 / 8 = 5223.4 units, range 1 above (class comment)
+        g.record(9, 5_223, false, 2);
+        assertEquals(0, g.choose(10));
+        g.record(9, 5_224, false, 2);
+        assertEquals(1, g.choose(10));
+        g.record(11, 5_223, false, 0); // the larger neighbour counts
+        assertEquals(1, g.choose(10));
+    }
+
+    @Test
+    void shouldUseTopRangeBesideASaturatedNeighbourInAnUnreadWindow() {
+        g.record(9, 100, true, 0); // saturated in range 0: the next window's current is unknown, upwards
+        assertEquals(2, g.choose(10));
+    }
+
+    @Test
+    void shouldFindAWeakPeakInTheFirstSurvey() {
+        // physics.md worked case P1 at a fifth of its density (n 1 cm^-3, U 400 km/s, T 1e5 K): the peak
+        // current per quadrant is about 1 pA, a few codes of the top range; ranged down it is found
+        // in the first survey, where the noise-free currents peak
+        SyntheticInstrument weak = Fixtures.oneAu(43);
+        weak.protonDensityPerCm3 = 1;
+        assertFirstSurveyPeak(weak);
+    }
+
+    @Test
+    void shouldFindAColdBeamInTheFirstSurvey() {
+        // worked case P1 with the protons at 2e4 K (U/w = 22): a few windows wide, found in the first survey
+        SyntheticInstrument cold = Fixtures.oneAu(44);
+        cold.protonThermalKmPerS = SyntheticInstrument.thermalKmPerS(2e4, SyntheticInstrument.PROTON_MASS);
+        assertFirstSurveyPeak(cold);
+    }
+
+    private static void assertFirstSurveyPeak(SyntheticInstrument plasma) {
+        ClosedLoop loop = Fixtures.loop(plasma, DemoCup.parameters(), new RecordingListener());
+        loop.runSweeps(1);
+        Spectrum s = loop.scheduler.lastSpectrum();
+        assertTrue(s.peakValid(), "no peak in the first survey");
+        // the reference: the 3-point parabola vertex of the noise-free window currents (Fixtures, the
+        // reference of the Q8 refinement); half a window for the noise of one survey (common practice)
+        assertEquals(Fixtures.parabolaPeak(Fixtures.trueCurrents(plasma)), s.peakWindowQ8() / 256.0, 0.5);
+    }
+
+    @Test
     void shouldForgetEverythingOnReset() {
         g.record(10, 1000, false, 0);
         g.reset(128);

@@ -108,10 +108,11 @@ class StepOrderingTest {
     void shouldChargeLargeSlewWhenLeavingSurveyForBand() {
         RecordingListener l = new RecordingListener();
         ClosedLoop loop = Fixtures.loop(Fixtures.oneAu(56), DemoCup.parameters(), l);
-        loop.runSweeps(2);
+        loop.runSweeps(1); // the first survey finds the 1 AU peak (AcquisitionTest): focus next
         loop.step();
         RecordingListener.Step firstFocus = l.steps.get(l.steps.size() - 1);
-        // from window 0 (519 codes) to the band's first window: 1 us per code of the high rail's change
-        assertEquals(1000 + firstFocus.dacHigh() - Fixtures.TABLE.dacHigh(0), firstFocus.settleMicros());
+        // the first survey ascends: from window 127 down to the band's first window, 1 us per code of the
+        // high rail's change
+        assertEquals(1000 + Fixtures.TABLE.dacHigh(127) - firstFocus.dacHigh(), firstFocus.settleMicros());
     }
 }

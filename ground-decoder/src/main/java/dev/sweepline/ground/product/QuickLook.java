@@ -145,6 +145,9 @@ final class QuickLook {
         fr.add(row("fit time", num(fits.fitSeconds(), "%.3f") + " s (" + num(fits.spectraPerSecond(), "%.0f")
                 + " spectra/s, one thread)"));
         q.heading("Fits").table(row("item", "value"), fr);
+        q.paragraph("Each spectrum's moments are fitted to the whole sweep, whose packet time is that of its first "
+                + "step; the plasma moves during a sweep, so a truth to score them against is taken at mid-sweep "
+                + "(the bench does so: groundTruthAt mid-sweep in its summary.json).", null);
         q.table(row("median of fitted", "n (cm^-3)", "U (km/s)", "T (K)", "theta_x (deg)", "theta_y (deg)", "n_a/n_p (%)"),
                 List.of(medians(collector.records())));
         q.heading("Plots");

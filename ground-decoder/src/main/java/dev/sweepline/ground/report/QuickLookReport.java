@@ -78,6 +78,25 @@ public final class QuickLookReport {
         return this;
     }
 
+    /**
+     * {@code document} (a report of this class, UTF-8) with the sections of {@code more} added at its end,
+     * before {@code </body>}: a caller's own sections on the ground's report (the bench's truth comparison).
+     *
+     * @throws IllegalArgumentException when {@code document} has no {@code </body>}
+     */
+    public static byte[] withSections(byte[] document, QuickLookReport more) {
+        String text = new String(document, StandardCharsets.UTF_8);
+        int end = text.lastIndexOf("</body>");
+        if (end < 0) {
+            throw new IllegalArgumentException("not a quick-look report: no </body>");
+        }
+        StringBuilder b = new StringBuilder(text.substring(0, end));
+        for (String s : more.body) {
+            b.append(s).append('\n');
+        }
+        return b.append(text.substring(end)).toString().getBytes(StandardCharsets.UTF_8);
+    }
+
     /** The document, UTF-8. */
     public byte[] toBytes() {
         StringBuilder b = new StringBuilder();

@@ -145,7 +145,7 @@ public final class BenchRecorder implements SweepListener, InProcessLink.StepObs
         PlasmaState truth = truthAt.apply(mid);
         sweeps.add(new SweepRecord((int) spectrum.sweepNumber(), spectrum.mode(), spectrum.startMicros(),
                 spectrum.endMicros(), spectrum.window(0), spectrum.window(spectrum.count() - 1),
-                spectrum.peakWindowQ8() / 256.0, spectrum.mode() == SweepMode.FOCUS ? chosenCentre : Double.NaN,
+                spectrum.peakValid() ? spectrum.peakWindowQ8() / 256.0 : Double.NaN, spectrum.mode() == SweepMode.FOCUS ? chosenCentre : Double.NaN,
                 trueWindow(truth, IonSpecies.PROTON), trueWindow(truth, IonSpecies.ALPHA), saturated));
     }
 

@@ -10,7 +10,9 @@ import dev.sweepline.ground.product.MomentRecord;
 import dev.sweepline.ground.spectrum.Ccsds121QuadrantDecoder;
 import dev.sweepline.ground.spectrum.WindowCatalogue;
 import dev.sweepline.sim.physics.PhysicalConstants;
+import dev.sweepline.fsw.sweep.SweepMode;
 import dev.sweepline.sim.plasma.IonPopulation;
+import dev.sweepline.sim.plasma.IonSpecies;
 import dev.sweepline.sim.plasma.PlasmaState;
 import dev.sweepline.sim.design.ProtonInformation;
 import java.util.ArrayList;
@@ -56,29 +58,53 @@ public final class GroundCheck {
         return compare(fits.records(), sweeps, truthAt, coarseAtTickZero);
     }
 
+    /** Every fit of the run against its truth ({@link #compared(List, List, LongFunction, long)}; call after the run). */
+    public List<ComparedFit> compared(List<SweepRecord> sweeps, LongFunction<PlasmaState> truthAt) {
+        decoder.finish();
+        return compared(fits.records(), sweeps, truthAt, coarseAtTickZero);
+    }
+
     /**
      * Moment errors of {@code records} (the ground's fits, from either the streaming check or the
      * ground's file processing) against the truth of the sweeps they came from.
      */
     public static GroundFigures compare(List<MomentRecord> records, List<SweepRecord> sweeps,
             LongFunction<PlasmaState> truthAt, long coarseAtTickZero) {
+        return figures(records.size(), compared(records, sweeps, truthAt, coarseAtTickZero));
+    }
+
+    /**
+     * One fitted spectrum against the truth of its sweep (at mid-sweep).
+     *
+     * @param relative       |fit - truth| / truth of n, U, T
+     * @param z              (fit - truth) / bound of n, U, T
+     * @param flagged        the fit is non-stationary ({@link NonStationarity})
+     * @param reducedChiSquare the fit's chi-square / nu
+     * @param dof            nu: windows used - fitted parameters
+     * @param alphasReported the ground fitted (reported) alphas
+     * @param truthHasAlphas the plasma had alphas at mid-sweep
+     * @param mode           the sweep's mode
+     */
+    public record ComparedFit(double[] relative, double[] z, boolean flagged, double reducedChiSquare, int dof,
+            boolean alphasReported, boolean truthHasAlphas, SweepMode mode) {
+    }
+
+    /** The fits of {@code records} that have moments and a recorded sweep, each against its truth. */
+    public static List<ComparedFit> compared(List<MomentRecord> records, List<SweepRecord> sweeps,
+            LongFunction<PlasmaState> truthAt, long coarseAtTickZero) {
         TreeMap<Long, SweepRecord> byStart = new TreeMap<>();
         for (SweepRecord r : sweeps) {
             byStart.put(r.startMicros(), r);
         }
-        List<double[]> rel = new ArrayList<>(); // |fit - truth| / truth for n, U, T
-        List<double[]> z = new ArrayList<>(); // (fit - truth) / bound for n, U, T
-        List<double[]> relStationary = new ArrayList<>();
-        List<double[]> zStationary = new ArrayList<>();
-        int fitted = 0;
+        List<ComparedFit> out = new ArrayList<>();
         for (MomentRecord m : records) {
             if (!m.ok()) {
                 continue;
             }
-            fitted++;
             long start = Math.round((m.taiSeconds() - coarseAtTickZero) * 1e6);
             Map.Entry<Long, SweepRecord> e = byStart.floorEntry(start + 20); // CUC fine: 2^-16 s, truncated
             if (e == null || start - e.getKey() > 100) {
+                out.add(null); // fitted, but no sweep of the run to compare it with
                 continue;
             }
             PlasmaState plasma = truthAt.apply(e.getValue().midMicros());
@@ -92,18 +118,44 @@ public final class GroundCheck {
                 r[k] = Math.abs(fit[k] - truth[k]) / truth[k];
                 zz[k] = (fit[k] - truth[k]) / bound[k];
             }
-            rel.add(r);
-            z.add(zz);
             int dof = m.fit().windowsUsed() - m.fit().normalParameters().length;
-            if (!NonStationarity.flagged(m.fit().reducedChiSquare(), dof)) {
-                relStationary.add(r);
-                zStationary.add(zz);
+            double chi2 = m.fit().reducedChiSquare();
+            out.add(new ComparedFit(r, zz, NonStationarity.flagged(chi2, dof), chi2, dof, m.fit().alphasFitted(),
+                    hasAlphas(plasma), e.getValue().mode()));
+        }
+        return out;
+    }
+
+    /** The figures of {@code compared} (nulls: fitted spectra without a sweep) out of {@code spectra} decoded. */
+    public static GroundFigures figures(int spectra, List<ComparedFit> compared) {
+        List<double[]> rel = new ArrayList<>();
+        List<double[]> z = new ArrayList<>();
+        List<double[]> relStationary = new ArrayList<>();
+        List<double[]> zStationary = new ArrayList<>();
+        for (ComparedFit c : compared) {
+            if (c == null) {
+                continue;
+            }
+            rel.add(c.relative());
+            z.add(c.z());
+            if (!c.flagged()) {
+                relStationary.add(c.relative());
+                zStationary.add(c.z());
             }
         }
         MomentErrors all = MomentErrors.of(rel, z);
         MomentErrors stationary = MomentErrors.of(relStationary, zStationary);
-        return new GroundFigures(records.size(), fitted, all.medianRelative(), all.p95Relative(), all.crlbRatio(),
+        return new GroundFigures(spectra, compared.size(), all.medianRelative(), all.p95Relative(), all.crlbRatio(),
                 all.compared(), all.robustCrlbRatio(), rel.size() - relStationary.size(), stationary);
+    }
+
+    private static boolean hasAlphas(PlasmaState plasma) {
+        for (IonPopulation p : plasma.populations()) {
+            if (p.species().equals(IonSpecies.ALPHA) && p.densityPerM3() > 0) {
+                return true;
+            }
+        }
+        return false;
     }
 
     /** n (cm^-3), |U| (km/s), T along the normal (K) of the protons. */

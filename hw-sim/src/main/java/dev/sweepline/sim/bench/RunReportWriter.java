@@ -121,9 +121,10 @@ public final class RunReportWriter {
                     + "truthChangeN,truthChangeU,truthChangeT\n");
             for (SweepRecord r : result.recorder().sweeps()) {
                 double[] change = TruthChange.of(r, result.recorder()::truthAt);
-                w.write(String.format(Locale.ROOT, "%d,%s,%.6f,%.6f,%d,%d,%.3f,%s,%d,%d,%b,%b,%d,%s,%s,%s%n", r.sweep(),
+                w.write(String.format(Locale.ROOT, "%d,%s,%.6f,%.6f,%d,%d,%s,%s,%d,%d,%b,%b,%d,%s,%s,%s%n", r.sweep(),
                         r.mode().name().toLowerCase(Locale.ROOT), r.startMicros() / 1e6, r.endMicros() / 1e6,
-                        r.firstWindow(), r.lastWindow(), r.peakWindow(),
+                        r.firstWindow(), r.lastWindow(), Double.isNaN(r.peakWindow()) ? ""
+                            : String.format(Locale.ROOT, "%.3f", r.peakWindow()),
                         Double.isNaN(r.bandCentre()) ? "" : String.format(Locale.ROOT, "%.3f", r.bandCentre()),
                         r.trueProtonWindow(),
                         r.trueAlphaWindow(), r.locked(), r.alphaLock(), r.saturatedSamples(), cell(change[0]),

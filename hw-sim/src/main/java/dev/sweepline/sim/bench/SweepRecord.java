@@ -12,7 +12,8 @@ import dev.sweepline.fsw.sweep.SweepMode;
  * @param endMicros        last reply's arrival, simulated time
  * @param firstWindow      lowest window stepped
  * @param lastWindow       highest window stepped
- * @param peakWindow       the flight software's refined proton peak from this sweep (window units)
+ * @param peakWindow       the flight software's refined proton peak from this sweep (window units); NaN when it found no
+ *                         significant peak (decisions.csv: an empty cell)
  * @param bandCentre       for a focus sweep, the peak the band was centred on (window units); NaN otherwise
  * @param trueProtonWindow window of the true proton peak (-1 below the table, count above)
  * @param trueAlphaWindow  window of the true alpha peak

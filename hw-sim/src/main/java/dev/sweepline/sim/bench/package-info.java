@@ -23,6 +23,12 @@
  * <li>B6 A run's configuration carries the flight software's start-up configuration whole, as a value:
  *     every option reaches the flight software, and no run or hook changes the config it came from.
  *     Verified: FlightConfigCopyTest.</li>
+ * <li>B7 The evaluation table ({@code Evaluation}, {@code bench evaluate}) flies every built-in and every
+ *     evaluation case on seeds 1..K with the ground on and gives per case the median and p95 errors, the
+ *     bias (median z), the rms and robust CRLB ratios, the flagged count and the errors without them, the
+ *     spurious-alpha rate, the tracking error, the strict reacquisition and the mean reduced chi-square
+ *     per mode; on a steady plasma without alphas that mean is 1 within 4 of its standard errors
+ *     sqrt(sum 2/nu)/N. Verified: EvaluationTest.</li>
  * </ol>
  * Truth conventions: the true peak of a species is the window where its noise-free current peaks
  * (for a hot wind well above the bulk-speed E/q); a focus sweep is locked when its band holds the

@@ -50,7 +50,9 @@ public final class CampaignOutput {
         for (Path dir : dirs) {
             List<String> lines = Files.readAllLines(dir.resolve(RUNS));
             if (lines.isEmpty() || !lines.get(0).equals(RunRow.HEADER)) {
-                throw new IOException(dir.resolve(RUNS) + ": not a campaign run file (header differs)");
+                throw new IOException(dir.resolve(RUNS) + ": not a campaign run file of this bench (header differs: "
+                        + (lines.isEmpty() ? "empty file" : lines.get(0).split(",", -1).length + " columns, expected "
+                        + RunRow.HEADER.split(",").length) + "); a shard written by another version must be run again");
             }
             for (int i = 1; i < lines.size(); i++) {
                 try {
@@ -151,6 +153,12 @@ public final class CampaignOutput {
             robust.put(MOMENTS[k], finite(s.crlbRobust()[k]));
         }
         m.put("crlbRatioRobust", robust);
+        Map<String, Object> unflagged = new LinkedHashMap<>();
+        for (int k = 0; k < 3; k++) {
+            unflagged.put(MOMENTS[k], finite(s.momentErrorUnflagged()[k]));
+        }
+        m.put("momentErrorMedianUnflagged", unflagged);
+        m.put("nonStationaryFits", s.nonStationary());
         Map<String, Object> centre = new LinkedHashMap<>();
         centre.put("medianMean", finite(s.centreErrorMedian()));
         centre.put("p95Mean", finite(s.centreErrorP95()));
@@ -202,20 +210,22 @@ public final class CampaignOutput {
                     + "reacquireSweepsMax,reacquireSecondsMax,spectraPerSecond,bitsPerSecondMean,bitsPerSecondMax,"
                     + "integratingFraction,informationEfficiency,errorN,errorU,errorT,crlbRatioN,crlbRatioU,crlbRatioT,"
                     + "centreErrorMedian,centreErrorP95,centreErrorMax,strictReacquireSweepsMax,strictReacquireSecondsMax,"
-                    + "crlbRobustN,crlbRobustU,crlbRobustT,accuracyDiffLow95,accuracyDiffHigh95,bitsDiffLow95,"
+                    + "crlbRobustN,crlbRobustU,crlbRobustT,errorUnflaggedN,errorUnflaggedU,errorUnflaggedT,nonStationary,"
+                    + "accuracyDiffLow95,accuracyDiffHigh95,bitsDiffLow95,"
                     + "bitsDiffHigh95,cadenceDiffLow95,cadenceDiffHigh95,indistinguishableFromLeader,paretoFront\n");
             for (SetResult s : sets) {
                 StringBuilder b = new StringBuilder().append(s.set());
                 for (double v : s.values()) {
                     b.append(',').append(v);
                 }
-                b.append(String.format(Locale.ROOT, ",%d,%s,%s,%d,%d,%s,%s,%s,%s,%s,%s,%s,%s,%s,%s,%s,%s,%s,%s,%s,%d,%s,%s,%s,%s,%b%n", s.runs(),
+                b.append(String.format(Locale.ROOT, ",%d,%s,%s,%d,%d,%s,%s,%s,%s,%s,%s,%s,%s,%s,%s,%s,%s,%s,%s,%s,%d,%s,%s,%s,%s,%s,%s,%s,%d,%b%n", s.runs(),
                         s.lockFractionMean(), s.lockFractionMin(), s.alphaLocks(), s.reacquireSweepsMax(),
                         s.reacquireSecondsMax(), s.spectraPerSecond(), s.bitsPerSecondMean(), s.bitsPerSecondMax(),
                         s.integratingFraction(), s.informationEfficiency(), s.momentError()[0], s.momentError()[1],
                         s.momentError()[2], s.crlbRatio()[0], s.crlbRatio()[1], s.crlbRatio()[2], s.centreErrorMedian(), s.centreErrorP95(),
                         s.centreErrorMax(), s.strictReacquireSweepsMax(), s.strictReacquireSecondsMax(), s.crlbRobust()[0], s.crlbRobust()[1],
-                        s.crlbRobust()[2], front.contains(s)));
+                        s.crlbRobust()[2], s.momentErrorUnflagged()[0], s.momentErrorUnflagged()[1],
+                        s.momentErrorUnflagged()[2], s.nonStationary(), front.contains(s)));
                 Recommendation.Versus v = rec.versusLeader().get(s.set());
                 String paired = v == null ? ",,,,,,false" : String.format(Locale.ROOT, ",%s,%s,%s,%s,%s,%s,%b",
                         v.accuracy().low(), v.accuracy().high(), v.bits().low(), v.bits().high(), v.cadence().low(),

@@ -27,19 +27,22 @@ import java.util.Locale;
  * @param strictReacquireSeconds worst strict reacquisition, seconds (NaN if never)
  * @param crlbRobust          1.4826 x median |(fit - truth) / Cramér-Rao bound| of n, U, T
  * @param nonStationary       ground fits flagged non-stationary (reduced chi-square above its 0.999 quantile)
+ * @param errorUnflagged      median relative errors of n, U, T without the flagged fits
+ * @param crlbUnflagged       rms CRLB ratios of n, U, T without the flagged fits
  */
 public record RunRow(int set, int run, double lockFraction, int alphaLocks, int reacquireSweeps,
         double reacquireSeconds, double spectraPerSecond, double bitsPerSecond, double integratingFraction,
         double informationEfficiency, double[] momentError, double[] crlbRatio,
         double[] trackingCentre, int strictReacquireSweeps, double strictReacquireSeconds,
-        double[] crlbRobust, int nonStationary) {
+        double[] crlbRobust, int nonStationary, double[] errorUnflagged, double[] crlbUnflagged) {
 
     /** CSV header, matching {@link #toCsv()}. */
     public static final String HEADER = "set,run,lockFraction,alphaLocks,reacquireSweeps,reacquireSeconds,"
             + "spectraPerSecond,bitsPerSecond,integratingFraction,informationEfficiency,errorN,errorU,errorT,"
             + "crlbRatioN,crlbRatioU,crlbRatioT,centreErrorMedian,centreErrorP95,centreErrorMax,"
-            + "strictReacquireSweeps,strictReacquireSeconds,crlbRobustN,crlbRobustU,crlbRobustT,nonStationary";
-    private static final int FIELDS = 25;
+            + "strictReacquireSweeps,strictReacquireSeconds,crlbRobustN,crlbRobustU,crlbRobustT,nonStationary,"
+            + "errorUnflaggedN,errorUnflaggedU,errorUnflaggedT,crlbRatioUnflaggedN,crlbRatioUnflaggedU,crlbRatioUnflaggedT";
+    private static final int FIELDS = 31;
 
     /** Mean of the three median relative moment errors: the accuracy objective (lower is better). */
     public double accuracy() {
@@ -69,16 +72,18 @@ public record RunRow(int set, int run, double lockFraction, int alphaLocks, int 
                 s.informationEfficiency(), g.medianRelative().clone(), g.crlbRatio().clone(),
                 new double[] {s.tracking().centreMedian(), s.tracking().centreP95(), s.tracking().centreMax()},
                 s.strictReacquireSweepsMax(), s.strictReacquireSecondsMax(), g.robustCrlbRatio().clone(),
-                g.nonStationary());
+                g.nonStationary(), g.stationary().medianRelative().clone(), g.stationary().crlbRatio().clone());
     }
 
     /** One CSV line (no newline). */
     public String toCsv() {
-        return String.format(Locale.ROOT, "%d,%d,%s,%d,%d,%s,%s,%s,%s,%s,%s,%s,%s,%s,%s,%s,%s,%s,%s,%d,%s,%s,%s,%s,%d", set, run, lockFraction,
+        return String.format(Locale.ROOT, "%d,%d,%s,%d,%d,%s,%s,%s,%s,%s,%s,%s,%s,%s,%s,%s,%s,%s,%s,%d,%s,%s,%s,%s,%d,%s,%s,%s,%s,%s,%s", set, run, lockFraction,
                 alphaLocks, reacquireSweeps, reacquireSeconds, spectraPerSecond, bitsPerSecond, integratingFraction,
                 informationEfficiency, momentError[0], momentError[1], momentError[2], crlbRatio[0], crlbRatio[1],
                 crlbRatio[2], trackingCentre[0], trackingCentre[1], trackingCentre[2], strictReacquireSweeps,
-                strictReacquireSeconds, crlbRobust[0], crlbRobust[1], crlbRobust[2], nonStationary);
+                strictReacquireSeconds, crlbRobust[0], crlbRobust[1], crlbRobust[2], nonStationary,
+                errorUnflagged[0], errorUnflagged[1], errorUnflagged[2], crlbUnflagged[0], crlbUnflagged[1],
+                crlbUnflagged[2]);
     }
 
     /** Parses a line written by {@link #toCsv()}. */
@@ -95,6 +100,8 @@ public record RunRow(int set, int run, double lockFraction, int alphaLocks, int 
                 new double[] {Double.parseDouble(f[16]), Double.parseDouble(f[17]), Double.parseDouble(f[18])},
                 Integer.parseInt(f[19]), Double.parseDouble(f[20]),
                 new double[] {Double.parseDouble(f[21]), Double.parseDouble(f[22]), Double.parseDouble(f[23])},
-                Integer.parseInt(f[24]));
+                Integer.parseInt(f[24]),
+                new double[] {Double.parseDouble(f[25]), Double.parseDouble(f[26]), Double.parseDouble(f[27])},
+                new double[] {Double.parseDouble(f[28]), Double.parseDouble(f[29]), Double.parseDouble(f[30])});
     }
 }

@@ -27,13 +27,15 @@ import java.util.List;
  * @param strictReacquireSweepsMax worst strict reacquisition, sweeps (-1 if a jump was never centred again)
  * @param strictReacquireSecondsMax worst strict reacquisition, seconds
  * @param crlbRobust          mean over runs of the robust CRLB ratios (1.4826 x median |z|) of n, U, T
+ * @param momentErrorUnflagged mean over runs of the median relative errors of n, U, T without the flagged fits
+ * @param nonStationary       ground fits flagged non-stationary, summed over runs
  */
 public record SetResult(int set, double[] values, int runs, double lockFractionMean, double lockFractionMin,
         int alphaLocks, int reacquireSweepsMax, double reacquireSecondsMax, double spectraPerSecond,
         double bitsPerSecondMean, double bitsPerSecondMax, double integratingFraction, double informationEfficiency,
         double[] momentError, double[] crlbRatio, double centreErrorMedian, double centreErrorP95,
         double centreErrorMax, int strictReacquireSweepsMax, double strictReacquireSecondsMax,
-        double[] crlbRobust) {
+        double[] crlbRobust, double[] momentErrorUnflagged, int nonStationary) {
 
     /** Fraction of focus sweeps that missed the proton peak. */
     public double missFraction() {
@@ -82,6 +84,9 @@ public record SetResult(int set, double[] values, int runs, double lockFractionM
         int[] ratioRuns = new int[3];
         double[] robust = new double[3];
         int[] robustRuns = new int[3];
+        double[] unflagged = new double[3];
+        int[] unflaggedRuns = new int[3];
+        int flagged = 0;
         double[] centre = new double[3]; // sums of median and p95, then the largest max
         int[] centreRuns = new int[3];
         int strictSweeps = 0;
@@ -101,7 +106,12 @@ public record SetResult(int set, double[] values, int runs, double lockFractionM
                     : Math.max(strictSweeps, r.strictReacquireSweeps());
             strictSeconds = Double.isNaN(r.strictReacquireSeconds()) ? Double.NaN
                     : Math.max(strictSeconds, r.strictReacquireSeconds());
+            flagged += r.nonStationary();
             for (int k = 0; k < 3; k++) {
+                if (Double.isFinite(r.errorUnflagged()[k])) {
+                    unflagged[k] += r.errorUnflagged()[k];
+                    unflaggedRuns[k]++;
+                }
                 if (Double.isFinite(r.momentError()[k])) {
                     error[k] += r.momentError()[k];
                     errorRuns[k]++;
@@ -138,7 +148,7 @@ public record SetResult(int set, double[] values, int runs, double lockFractionM
                 efficiencyRuns == 0 ? Double.NaN : efficiency / efficiencyRuns, mean(error, errorRuns),
                 mean(ratio, ratioRuns), centreRuns[0] == 0 ? Double.NaN : centre[0] / centreRuns[0],
                 centreRuns[1] == 0 ? Double.NaN : centre[1] / centreRuns[1], centreRuns[2] == 0 ? Double.NaN : centre[2],
-                strictSweeps, strictSeconds, mean(robust, robustRuns));
+                strictSweeps, strictSeconds, mean(robust, robustRuns), mean(unflagged, unflaggedRuns), flagged);
     }
 
     private static double[] mean(double[] sum, int[] count) {

@@ -9,7 +9,7 @@ import picocli.CommandLine.Command;
         description = {"Closed-loop bench for the Faraday-cup flight software: runs, scenarios, the simulated",
             "instrument server, tuning campaigns, bandwidth budgets."},
         subcommands = {RunCommand.class, ScenariosCommand.class, ServeCommand.class, TuneCommand.class,
-            MergeCommand.class, BudgetCommand.class, InstrumentsCommand.class, CommandLine.HelpCommand.class})
+            MergeCommand.class, BudgetCommand.class, InstrumentsCommand.class, EvaluateCommand.class, CommandLine.HelpCommand.class})
 public final class BenchMain implements Runnable {
     @CommandLine.Spec
     private CommandLine.Model.CommandSpec spec;

@@ -6,6 +6,8 @@ import dev.sweepline.ground.product.GroundProducts;
 import dev.sweepline.sim.bench.BenchConfig;
 import dev.sweepline.sim.bench.GroundCheck;
 import dev.sweepline.sim.bench.GroundInstruments;
+import dev.sweepline.sim.bench.TruthSections;
+import dev.sweepline.ground.report.QuickLookReport;
 import dev.sweepline.ground.decode.DecoderConfig;
 import dev.sweepline.ground.spectrum.WindowCatalogue;
 import dev.sweepline.fsw.host.script.CommandScript;
@@ -27,7 +29,6 @@ import dev.sweepline.sim.scenario.ScenarioException;
 import dev.sweepline.sim.scenario.ScenarioLoader;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.nio.file.StandardCopyOption;
 import java.util.LinkedHashMap;
 import java.util.Map;
 import java.util.OptionalDouble;
@@ -151,8 +152,9 @@ final class RunCommand implements Callable<Integer> {
                 DecoderConfig.autoLength().withInstruments(GroundInstruments.of(model.spec())), windows);
         GroundCheck.GroundFigures figures = GroundCheck.compare(ground.moments(), result.recorder().sweeps(),
                 result.recorder()::truthAt, config.flight().coarseTimeAtTickZero);
-        Files.copy(groundDir.resolve(GroundProcessing.REPORT), out.resolve("report.html"),
-                StandardCopyOption.REPLACE_EXISTING);
+        // the ground's quick-look with the bench's comparison against the truth after it
+        Files.write(out.resolve("report.html"), QuickLookReport.withSections(
+                Files.readAllBytes(groundDir.resolve(GroundProcessing.REPORT)), TruthSections.of(figures)));
         extra.putAll(RunReportWriter.groundMap(figures));
         RunReportWriter.printGround(figures, System.out);
         RunReportWriter.write(out, result, extra);

@@ -87,6 +87,16 @@ public final class Scenario {
                 moved);
     }
 
+    /**
+     * The calm variant of this scenario: the same starting plasma held still (no fluctuations, no
+     * events), named {@code NAME-calm}: the steady wind in which the ground's scatter is the
+     * measurement's alone.
+     */
+    public Scenario calm() {
+        return new Scenario(name + "-calm", description, distanceAu, durationSeconds, start, alphaDriftDirection,
+                Fluctuations.NONE, List.of());
+    }
+
     /** Short name, e.g. {@code quiet-perihelion}. */
     public String name() {
         return name;

@@ -20,6 +20,8 @@ public final class ScenarioLoader {
     static final String DEFAULT_NAME = "quiet-perihelion";
     /** The built-ins and their index. */
     private static final BuiltIns BUILT_INS = new BuiltIns(RESOURCE_DIR, "scenario");
+    /** The evaluation cases (invented demo data beside the built-ins, for the evaluation table) and their index. */
+    private static final BuiltIns EVALUATION = new BuiltIns(RESOURCE_DIR + "evaluation/", "evaluation scenario");
 
     private ScenarioLoader() {
     }
@@ -72,6 +74,32 @@ public final class ScenarioLoader {
     /** The names of the built-in scenarios, in index order. */
     public static List<String> builtInNames() {
         return BUILT_INS.names();
+    }
+
+    /**
+     * The evaluation cases under {@code scenarios/evaluation/}, in index order: scenarios that are not
+     * built-ins but exercise the ground's fit where it is weakest (alpha peak above the table, alpha-rich
+     * ejecta, flow near the split collector's reach, a strong shock inside a sweep).
+     *
+     * @throws ScenarioException if one is invalid or its name does not match its file
+     */
+    public static List<Scenario> evaluationCases() {
+        List<Scenario> cases = new java.util.ArrayList<>();
+        for (String name : EVALUATION.names()) {
+            String resource = EVALUATION.resourceOf(name);
+            Scenario s;
+            try {
+                s = parse(EVALUATION.resource(resource), resource);
+            } catch (FileFormatException e) {
+                throw ScenarioException.of(e);
+            }
+            if (!s.name().equals(name)) {
+                throw new ScenarioException(resource, 0, "name", "an evaluation case's name must match its file, got '"
+                        + s.name() + "'");
+            }
+            cases.add(s);
+        }
+        return List.copyOf(cases);
     }
 
     /** The name of the default scenario, a built-in. */

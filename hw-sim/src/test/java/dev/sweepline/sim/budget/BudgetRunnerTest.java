@@ -80,10 +80,13 @@ class BudgetRunnerTest {
         // the 12 command reports of a survey point (312 octets) ride in frames that go out anyway. The
         // outbound phase went from 2445.5 to 2481.0 Mbit with spectrum layout 2 (telemetry ICD §4: 4 more
         // octets per spectrum): 35.5 Mbit over its 96 h is 103 bit/s, three quarters of one 1028-octet
-        // frame per 60-s point (137 bit/s), as the budget counts whole frames
-        assertEquals(1746.8, r.phases().get(0).generatedMegabits(), 0.05);
-        assertEquals(1231.6, r.phases().get(1).generatedMegabits(), 0.05);
-        assertEquals(2481.0, r.phases().get(2).generatedMegabits(), 0.05);
+        // frame per 60-s point (137 bit/s), as the budget counts whole frames. With the first survey ranged
+        // window by window (sweep design note R9) every point, a cold start, locks one survey earlier and
+        // sends more focus spectra: 1746.8, 1231.6, 2481.0 went to 1758.6, 1249.4, 2492.9 Mbit (+0.7, +1.4,
+        // +0.5 %), recorded from 'bench budget' (seed 1)
+        assertEquals(1758.6, r.phases().get(0).generatedMegabits(), 0.05);
+        assertEquals(1249.4, r.phases().get(1).generatedMegabits(), 0.05);
+        assertEquals(2492.9, r.phases().get(2).generatedMegabits(), 0.05);
         BudgetOutput.write(dir, r);
         JsonNode json = new ObjectMapper().readTree(dir.resolve("budget.json").toFile());
         assertEquals("FITS", json.get("verdict").asText());

@@ -35,7 +35,7 @@ class RecommendationTest {
     private static RunRow row(int set, int run, double accuracy, double bits) {
         double[] e = {accuracy, accuracy, accuracy}; // accuracy() is the mean of the three
         return new RunRow(set, run, 1.0, 0, 1, 0.5, 1.5, bits, 0.85, 0.7, e, new double[] {1, 1, 1},
-                new double[] {0.2, 0.5, 0.7}, 1, 0.5, new double[] {1, 1, 1}, 0);
+                new double[] {0.2, 0.5, 0.7}, 1, 0.5, new double[] {1, 1, 1}, 0, e, new double[] {1, 1, 1});
     }
 
     private static List<RunRow> rows(double[] set1) {
