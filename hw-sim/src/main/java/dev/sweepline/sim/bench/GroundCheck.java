@@ -62,10 +62,7 @@ public final class GroundCheck {
      */
     public static GroundFigures compare(List<MomentRecord> records, List<SweepRecord> sweeps,
             LongFunction<PlasmaState> truthAt, long coarseAtTickZero) {
-        TreeMap<Long, SweepRecord> byStart = new TreeMap<>();
-        for (SweepRecord r : sweeps) {
-            byStart.put(r.startMicros(), r);
-        }
+        TreeMap<Long, SweepRecord> byStart = byStart(sweeps);
         List<double[]> rel = new ArrayList<>(); // |fit - truth| / truth for n, U, T
         List<double[]> z = new ArrayList<>(); // (fit - truth) / bound for n, U, T
         List<double[]> relStationary = new ArrayList<>();
@@ -76,12 +73,11 @@ public final class GroundCheck {
                 continue;
             }
             fitted++;
-            long start = Math.round((m.taiSeconds() - coarseAtTickZero) * 1e6);
-            Map.Entry<Long, SweepRecord> e = byStart.floorEntry(start + 20); // CUC fine: 2^-16 s, truncated
-            if (e == null || start - e.getKey() > 100) {
+            SweepRecord sweep = sweepAt(byStart, m.taiSeconds(), coarseAtTickZero);
+            if (sweep == null) {
                 continue;
             }
-            PlasmaState plasma = truthAt.apply(e.getValue().midMicros());
+            PlasmaState plasma = truthAt.apply(sweep.midMicros());
             IonPopulation p = ProtonInformation.protons(plasma);
             double[] truth = truth(plasma, p);
             double[] fit = {m.densityPerCc(), m.speedKmPerS(), m.temperatureK()};
@@ -104,6 +100,22 @@ public final class GroundCheck {
         MomentErrors stationary = MomentErrors.of(relStationary, zStationary);
         return new GroundFigures(records.size(), fitted, all.medianRelative(), all.p95Relative(), all.crlbRatio(),
                 all.compared(), all.robustCrlbRatio(), rel.size() - relStationary.size(), stationary);
+    }
+
+    /** The sweeps by start time, microseconds. */
+    static TreeMap<Long, SweepRecord> byStart(List<SweepRecord> sweeps) {
+        TreeMap<Long, SweepRecord> byStart = new TreeMap<>();
+        for (SweepRecord r : sweeps) {
+            byStart.put(r.startMicros(), r);
+        }
+        return byStart;
+    }
+
+    /** The sweep a spectrum time-tagged {@code taiSeconds} came from, or null. */
+    static SweepRecord sweepAt(TreeMap<Long, SweepRecord> byStart, double taiSeconds, long coarseAtTickZero) {
+        long start = Math.round((taiSeconds - coarseAtTickZero) * 1e6);
+        Map.Entry<Long, SweepRecord> e = byStart.floorEntry(start + 20); // CUC fine: 2^-16 s, truncated
+        return e == null || start - e.getKey() > 100 ? null : e.getValue();
     }
 
     /** n (cm^-3), |U| (km/s), T along the normal (K) of the protons. */

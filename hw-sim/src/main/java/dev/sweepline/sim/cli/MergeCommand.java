@@ -45,7 +45,7 @@ final class MergeCommand implements Callable<Integer> {
             return 2;
         }
         CampaignOutput.writeRuns(out, rows);
-        TuneCommand.report(CampaignOutput.writeResults(out, spec, rows), out);
+        TuneCommand.report(CampaignOutput.writeResults(out, spec, rows), out, CampaignOutput.inertAxes(spec, rows));
         return 0;
     }
 }

@@ -18,6 +18,8 @@ import dev.sweepline.fsw.nvm.FileNonVolatileStore;
 import java.util.List;
 import dev.sweepline.sim.bench.ClosedLoopBench;
 import dev.sweepline.sim.bench.RunReportWriter;
+import dev.sweepline.sim.bench.RunFigures;
+import dev.sweepline.sim.report.DecisionChart;
 import dev.sweepline.sim.scenario.Scenario;
 import dev.sweepline.sim.scenario.ScenarioException;
 import dev.sweepline.sim.scenario.ScenarioLoader;
@@ -154,9 +156,12 @@ final class RunCommand implements Callable<Integer> {
         }
         // the ground's view: decode and fit what the flight software sent, compare with the truth
         Path groundDir = out.resolve("ground");
+        byte[] decisions = RunFigures.decisionChart(config, result, commandMarkers(script));
+        Files.write(out.resolve(RunFigures.DECISIONS_PNG), decisions);
         GroundProducts ground = GroundProcessing.process(out.resolve("telemetry.tm"), groundDir,
                 allocation != null ? OptionalDouble.of(allocation) : OptionalDouble.empty(),
-                DecoderConfig.autoLength().withInstruments(GroundInstruments.of(model.spec())), windows);
+                DecoderConfig.autoLength().withInstruments(GroundInstruments.of(model.spec())), windows,
+                RunFigures.additions(result, config.flight().coarseTimeAtTickZero, decisions));
         GroundCheck.GroundFigures figures = GroundCheck.compare(ground.moments(), result.recorder().sweeps(),
                 result.recorder()::truthAt, config.flight().coarseTimeAtTickZero);
         Files.copy(groundDir.resolve(GroundProcessing.REPORT), out.resolve("report.html"),
@@ -164,9 +169,22 @@ final class RunCommand implements Callable<Integer> {
         extra.putAll(RunReportWriter.groundMap(figures));
         RunReportWriter.printGround(figures, System.out);
         RunReportWriter.write(out, result, extra);
-        System.out.println("wrote " + out.resolve("summary.json") + ", decisions.csv, telemetry.tm, report.html"
+        System.out.println("wrote " + out.resolve("summary.json") + ", decisions.csv, decisions.png, telemetry.tm, "
+                + "report.html"
                 + " and the ground products in " + groundDir);
         return 0;
+    }
+
+    /** The telecommands sent, as event markers of the sweep-decision chart ("TC line N", refusals named). */
+    private static List<DecisionChart.Marker> commandMarkers(ScriptRunner script) {
+        List<DecisionChart.Marker> markers = new java.util.ArrayList<>();
+        if (script != null) {
+            for (ScriptRunner.Sent x : script.sent()) {
+                markers.add(new DecisionChart.Marker(x.atMicros() / 1e6, "TC line " + x.line()
+                        + (x.reason() == 0 ? "" : " " + CommandReason.name(x.reason())), true));
+            }
+        }
+        return markers;
     }
 
     /** Commands sent and refused, with the count of each refusal reason. */
