@@ -149,15 +149,16 @@ final class RunCommand implements Callable<Integer> {
         RunReportWriter.printTable(result.summary(), System.out);
         Map<String, Object> extra = new LinkedHashMap<>();
         extra.put("linkLoad", RunReportWriter.linkMap(config, baud));
+        byte[] decisions = RunFigures.decisionChart(config, result, commandMarkers(script));
+        Files.write(out.resolve(RunFigures.DECISIONS_PNG), decisions);
         if (noGround) {
             RunReportWriter.write(out, result, extra);
-            System.out.println("wrote " + out.resolve("summary.json") + ", decisions.csv and telemetry.tm (no ground products)");
+            System.out.println("wrote " + out.resolve("summary.json") + ", decisions.csv, decisions.png and telemetry.tm"
+                    + " (no ground products)");
             return 0;
         }
         // the ground's view: decode and fit what the flight software sent, compare with the truth
         Path groundDir = out.resolve("ground");
-        byte[] decisions = RunFigures.decisionChart(config, result, commandMarkers(script));
-        Files.write(out.resolve(RunFigures.DECISIONS_PNG), decisions);
         GroundProducts ground = GroundProcessing.process(out.resolve("telemetry.tm"), groundDir,
                 allocation != null ? OptionalDouble.of(allocation) : OptionalDouble.empty(),
                 DecoderConfig.autoLength().withInstruments(GroundInstruments.of(model.spec())), windows,

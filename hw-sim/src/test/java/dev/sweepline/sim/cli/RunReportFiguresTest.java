@@ -45,6 +45,13 @@ class RunReportFiguresTest {
     }
 
     @Test
+    void shouldDrawTheSweepDecisionsWithoutTheGroundToo(@TempDir Path quick) throws Exception {
+        assertEquals(0, BenchMain.commandLine().execute("run", "--minutes", "0.2", "--no-ground", "--no-auth", "--out",
+                quick.toString()));
+        assertEquals(1000, XhtmlImages.decode(Files.readAllBytes(quick.resolve("decisions.png"))).getWidth());
+    }
+
+    @Test
     void shouldDrawTheTruthUnderTheMomentsAndNameTheFitsQuality() throws Exception {
         String captions = String.join("\n", XhtmlImages.texts(report, "p"));
         assertTrue(captions.contains("the grey line is the truth"), captions);
