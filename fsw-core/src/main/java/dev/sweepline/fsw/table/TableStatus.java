@@ -40,12 +40,14 @@ public final class TableStatus {
     public static final int SETTLE_BELOW_SLEW = 15;
     /** The fixed settle is shorter than the HV supply's first-order settling needs. */
     public static final int SETTLE_TOO_SHORT = 16;
+    /** Parameter: focus style, sweep-time budget, robustness margin or survey dwell outside its range. */
+    public static final int BAD_STYLE = 17;
 
     private static final String[] NAMES = {
         "OK", "EMPTY", "TOO_MANY_WINDOWS", "OUT_OF_DAC_RANGE", "NOT_MONOTONIC", "MISSING_DATA",
         "BAD_INTEGRATION", "BAD_SETTLE", "BAD_BAND", "BAD_RESURVEY", "BAD_LOCK_LOSS",
         "BAD_GAIN_THRESHOLDS", "BAD_ALPHA", "BAD_NOISE", "ABOVE_VOLTAGE_LIMIT", "SETTLE_BELOW_SLEW",
-        "SETTLE_TOO_SHORT",
+        "SETTLE_TOO_SHORT", "BAD_STYLE",
     };
 
     private TableStatus() {
