@@ -182,7 +182,7 @@ final class RunCommand implements Callable<Integer> {
     private static List<DecisionChart.Marker> commandMarkers(ScriptRunner script) {
         List<DecisionChart.Marker> markers = new java.util.ArrayList<>();
         if (script != null) {
-            for (ScriptRunner.Sent x : script.sent()) {
+            for (dev.sweepline.fsw.host.script.ScriptPlayer.Sent x : script.sent()) {
                 markers.add(new DecisionChart.Marker(x.atMicros() / 1e6, "TC line " + x.line()
                         + (x.reason() == 0 ? "" : " " + CommandReason.name(x.reason())), true));
             }

@@ -38,7 +38,8 @@ class CampaignReportTest {
                 double bits = 7000 + 4000.0 / v[2] + 3 * run;
                 rows.add(new RunRow(set, run, 1.0, 0, 3, 1.5, 1.7, bits, 0.8, 0.6,
                         new double[] {error, error / 10, error}, new double[] {5, 4, 6}, new double[] {0.3, 0.9, 1.4},
-                        4, 2.5, new double[] {5, 4, 6}, 0));
+                        4, 2.5, new double[] {5, 4, 6}, 0, new double[] {error, error / 10, error},
+                        new double[] {5, 4, 6}));
             }
         }
         CampaignOutput.writeResults(dir, spec, rows);
