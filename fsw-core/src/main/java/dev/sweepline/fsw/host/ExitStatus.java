@@ -41,7 +41,8 @@ public final class ExitStatus {
         if (withHv) {
             m.put(Integer.toString(HV_NOT_CONFIRMED), "HV off NOT confirmed (hardware ICD §4.2)");
         }
-        m.put(Integer.toString(INPUT), "input error: an input file, name or address missing or malformed");
+        m.put(Integer.toString(INPUT), "input error: an input file or a named input (scenario, instrument) missing "
+                + "or malformed");
         m.put(Integer.toString(IO), "I/O error: an output, port or socket that cannot be opened or written");
         m.put(Integer.toString(WARNINGS), "did not fit / warnings: results written, but over an allocation or "
                 + "the line rate");

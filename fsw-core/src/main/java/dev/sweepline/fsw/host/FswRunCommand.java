@@ -37,6 +37,8 @@ import picocli.CommandLine.Option;
             "",
             HvText.END_OF_RUN})
 final class FswRunCommand implements Callable<Integer> {
+    /** What every error line of the command starts with: the command it comes from. */
+    static final String PREFIX = "sweepline-fsw run: ";
     /** Time the shutdown hook leaves the run's thread to start the HV shutdown itself, milliseconds (design value). */
     static final long HOOK_GRACE_MILLIS = 1_000;
     /** Time the shutdown hook then leaves the run's thread to print its summary, milliseconds (design value). */
@@ -62,7 +64,8 @@ final class FswRunCommand implements Callable<Integer> {
             description = "Where the telemetry frames go: a file, or a ground listener to connect to.")
     String tm;
 
-    @Option(names = "--force", description = "Overwrite an existing --tm file (without it, an existing file is refused).")
+    @Option(names = "--force",
+            description = "Overwrite an existing --tm file (without it, an existing file is refused).")
     boolean force;
 
     @Option(names = "--instrument", paramLabel = "NAME|FILE",
@@ -75,7 +78,8 @@ final class FswRunCommand implements Callable<Integer> {
                 + "(default: until interrupted).")
     Double minutes;
 
-    @Option(names = "--baud", paramLabel = "B", converter = Ranges.PositiveInt.class, description = "Serial line rate (default: ${DEFAULT-VALUE}).")
+    @Option(names = "--baud", paramLabel = "B", converter = Ranges.PositiveInt.class,
+            description = "Serial line rate (default: ${DEFAULT-VALUE}).")
     int baud = SerialTransport.DEFAULT_BAUD;
 
     @Option(names = "--clock", paramLabel = "realtime|link",
@@ -97,12 +101,13 @@ final class FswRunCommand implements Callable<Integer> {
             description = "Second flag that fires an armed HV without the prompt: must be FIRE (ignored without --hv arm).")
     String hvConfirm;
 
-    @Option(names = "--hv-timeout-s", paramLabel = "S", converter = Ranges.PositiveLong.class, description = "Arm-to-fire time-out (default: ${DEFAULT-VALUE} s).")
+    @Option(names = "--hv-timeout-s", paramLabel = "S", converter = Ranges.PositiveLong.class,
+            description = "Arm-to-fire time-out (default: ${DEFAULT-VALUE} s).")
     long hvTimeoutSeconds = HvArming.DEFAULT_TIMEOUT_MICROS / 1_000_000L;
 
     @Option(names = "--commands", paramLabel = "SCRIPT",
-            description = "Time-tagged telecommands to send during the run, signed with the flight key (commands.md §7; "
-                + "TABLE_IMAGE uplinks a campaign's recommended.table). Times count from the start of the run.")
+            description = "Time-tagged telecommands to send during the run, signed with the flight key "
+                + "(commands.md §7; TABLE_IMAGE uplinks a campaign's recommended.table). Times count from the start of the run.")
     java.nio.file.Path commands;
 
     @Option(names = "--nvm", paramLabel = "FILE",
@@ -133,18 +138,19 @@ final class FswRunCommand implements Callable<Integer> {
         try {
             address = LinkAddress.parse(link);
         } catch (IllegalArgumentException e) {
-            err.println("--link: " + e.getMessage());
+            err.println(PREFIX + "--link: " + e.getMessage());
             return ExitStatus.USAGE;
         }
         InstrumentDescription described;
         try {
             described = Instruments.resolve(instrument).flight();
         } catch (FileFormatException e) {
-            err.println("--instrument: " + e.getMessage());
+            err.println(PREFIX + "--instrument: " + e.getMessage());
             return ExitStatus.INPUT;
         }
         if (timeoutMarginMillis > MAX_TIMEOUT_MARGIN_MILLIS) {
-            err.println("--timeout-margin: must be at most " + MAX_TIMEOUT_MARGIN_MILLIS + " ms (the electronics' link "
+            err.println(PREFIX + "--timeout-margin: must be at most " + MAX_TIMEOUT_MARGIN_MILLIS
+                    + " ms (the electronics' link "
                     + "watchdog, hardware ICD §4.1), got " + timeoutMarginMillis);
             return ExitStatus.USAGE;
         }
@@ -156,10 +162,10 @@ final class FswRunCommand implements Callable<Integer> {
                 // the sender's counter is kept beside the NVM file, as the bench keeps it (commands.md §7.3)
                 counter = nvm == null ? GroundCommandCounter.inMemory() : GroundCommandCounter.beside(nvm);
             } catch (ScriptException e) {
-                err.println("--commands " + commands + ":" + e.getMessage());
+                err.println(PREFIX + "--commands " + commands + ":" + e.getMessage());
                 return ExitStatus.INPUT;
             } catch (IOException e) {
-                err.println("--commands " + commands + ": " + CommandLines.reason(e));
+                err.println(PREFIX + "--commands " + commands + ": " + CommandLines.reason(e));
                 return ExitStatus.INPUT;
             }
             for (String w : script.warnings()) {
@@ -177,7 +183,7 @@ final class FswRunCommand implements Callable<Integer> {
         try {
             transport = address.open(baud);
         } catch (IOException | RuntimeException e) {
-            err.println("--link " + address + ": cannot open the link (" + CommandLines.reason(e) + ")");
+            err.println(PREFIX + "--link " + address + ": cannot open the link (" + CommandLines.reason(e) + ")");
             return ExitStatus.IO;
         }
         StreamFrameSink sink;
@@ -185,11 +191,11 @@ final class FswRunCommand implements Callable<Integer> {
             sink = StreamFrameSink.open(tm, force);
         } catch (java.nio.file.FileAlreadyExistsException e) {
             transport.close();
-            err.println("--tm " + tm + ": exists; give --force to overwrite it");
+            err.println(PREFIX + "--tm " + tm + ": exists; give --force to overwrite it");
             return ExitStatus.IO;
         } catch (IOException | RuntimeException e) {
             transport.close();
-            err.println("--tm " + tm + ": cannot open the telemetry output (" + CommandLines.reason(e) + ")");
+            err.println(PREFIX + "--tm " + tm + ": cannot open the telemetry output (" + CommandLines.reason(e) + ")");
             return ExitStatus.IO;
         }
         try {

@@ -20,7 +20,12 @@
  *     with the monitor below 300 codes; it runs once, whoever calls it; not confirmed is exit status 3.
  *     <i>HvShutdownTest; hw-sim RunHvShutdownHilTest (the four ways out against the simulator).</i></li>
  * <li><b>H3</b> The link and the telemetry output open before the prompt; one that does not is one
- *     line naming the option, the address and the reason, exit status 2. <i>FswRunCommandTest.</i></li>
+ *     line naming the option, the address and the reason, exit status 5 ({@link dev.sweepline.fsw.host.ExitStatus});
+ *     an existing {@code --tm} file is refused without {@code --force}; an option out of range is a usage
+ *     error (2) before anything opens. <i>FswRunCommandTest.</i></li>
+ * <li><b>H6</b> {@code --commands SCRIPT} sends the script's telecommands (signed, at their times after
+ *     the start of the run) and {@code --nvm FILE} keeps the committed table across runs; a script with a
+ *     fault injection is refused (the bench's only). <i>FswRunCommandTest; hw-sim RecommendedTableHilTest.</i></li>
  * <li><b>H4</b> {@code --minutes} is run time, counted after the prompt. <i>FswRunCommandTest.</i></li>
  * <li><b>H5</b> Same seed, same telemetry as the in-process bench on the link-event clock, but for the
  *     closing housekeeping's HV fields. <i>hw-sim SerialHilTest, ServeOverTcpTest.</i></li>

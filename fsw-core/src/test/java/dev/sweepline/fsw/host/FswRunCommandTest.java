@@ -58,7 +58,7 @@ class FswRunCommandTest {
 
     private void assertOneLineNamingIt(String where) {
         assertEquals(1, err().lines().count(), err());
-        assertTrue(err().contains(where), err());
+        assertTrue(err().startsWith(FswRunCommand.PREFIX) && err().contains(where), err());
         assertFalse(err().contains("Exception") || err().contains("\tat "), "no stack trace: " + err());
         assertFalse(out().contains("HV ARMED") || out().contains("HIGH VOLTAGE"), "no prompt before the link: " + out());
     }

@@ -31,7 +31,8 @@ final class ExitCodes {
         m.put(Integer.toString(OK), "done");
         m.put(Integer.toString(FAILED), "failed: the run stopped early or an unexpected error");
         m.put(Integer.toString(USAGE), "usage error: unknown option, missing or malformed value, value out of range");
-        m.put(Integer.toString(INPUT), "input error: an input file, name or address missing or malformed");
+        m.put(Integer.toString(INPUT), "input error: an input file or a named input (scenario, instrument) missing "
+                + "or malformed");
         m.put(Integer.toString(IO), "I/O error: an output, port or socket that cannot be opened or written");
         m.put(Integer.toString(WARNINGS), "did not fit / warnings: results written, but over an allocation or "
                 + "the line rate");

@@ -5,7 +5,7 @@
  * {@code moments.json}, three PNG plots and {@code report.html} through
  * {@link dev.sweepline.ground.product.GroundProcessing}; {@code inspect FILE} lists frames and packets (spectra
  * with their layout, instrument id and sample width); both take {@code --instrument NAME|FILE} (repeatable;
- * default: every built-in). {@code instruments} lists the built-in descriptions. {@code decode --follow}
+ * default: every built-in). {@code instruments} lists the built-in descriptions; {@code help COMMAND}. {@code decode --follow}
  * ({@link dev.sweepline.ground.cli.FollowLoop}) follows a growing file or {@code tcp://HOST:PORT} and rewrites
  * the products, with a self-reloading report, every two seconds while octets arrive.
  *
@@ -14,9 +14,12 @@
  * <ol>
  *   <li>C1 a good stream gives one CSV row per window with the currents of ICD §4.</li>
  *   <li>C2 bad frames are counted by reason in summary.json and do not change the exit status (0).</li>
- *   <li>C3 an unreadable input gives exit status 2 and no exception.</li>
+ *   <li>C3 every error is one line on stderr naming the option or file, with a status of {@link
+ *       dev.sweepline.ground.cli.ExitCodes} (the other two jars' numbers): 2 a bad option value
+ *       ({@code --frame-length}, {@code --scid}, {@code --allocation}), 4 an unreadable telemetry file or
+ *       table image, 5 products that cannot be written; no exception ({@code GroundCommandLineErrorTest}).</li>
  *   <li>C4 decode writes the moments, plots and report ({@code GroundProcessingTest}).</li>
- *   <li>C5 {@code --instrument} takes a built-in or a file; a broken file stops the command with exit status 2
+ *   <li>C5 {@code --instrument} takes a built-in or a file; a broken file stops the command with exit status 4
  *       and its file, line and field; spectra of an instrument not given are refused and counted;
  *       {@code instruments} lists the built-ins ({@code InstrumentOptionTest}).</li>
  *   <li>C6 {@code --follow} rewrites the report while a file grows and while a TCP stream sends, a
