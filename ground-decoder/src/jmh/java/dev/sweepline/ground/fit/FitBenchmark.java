@@ -19,7 +19,8 @@ import org.openjdk.jmh.annotations.Warmup;
  * Three shapes: the physics.md reference case (14 windows, protons only), a near-Sun survey spectrum
  * (128 windows of the default table, joint protons + alphas, NearSunCase) and a near-Sun focus-like band
  * (the 64 windows around the proton and alpha peaks, joint). Each draws from a pool of 64 noisy spectra
- * made once from a recorded seed, so that no two consecutive fits see the same data.
+ * made once from a recorded seed, so that no two consecutive fits see the same data. Every fit is
+ * checked ({@link #checked}): a fit that is not ok throws, which fails the run.
  *
  * <p>Run: {@code mvn -q -o -pl ground-decoder -Pjmh verify -DskipTests -Djmh.includes=FitBenchmark
  * -Djmh.args="-f 1 -wi 3 -w 2 -i 5 -r 2"} (with {@code -am} the parent module's exec finds no benchmark
@@ -73,21 +74,29 @@ public class FitBenchmark {
         return next;
     }
 
+    /** {@code fit}, or an exception when it is not ok (a benchmark of failed fits measures nothing). */
+    static PlasmaFit checked(PlasmaFit fit) {
+        if (!fit.ok()) {
+            throw new IllegalStateException("fit failed: " + fit.flagText());
+        }
+        return fit;
+    }
+
     /** 14 windows, protons only. */
     @Benchmark
     public PlasmaFit referenceProtons() {
-        return fitter.fit(reference[index()]);
+        return checked(fitter.fit(reference[index()]));
     }
 
     /** 128 windows, protons + alphas. */
     @Benchmark
     public PlasmaFit nearSunSurveyJoint() {
-        return fitter.fit(survey[index()]);
+        return checked(fitter.fit(survey[index()]));
     }
 
     /** 64 windows, protons + alphas. */
     @Benchmark
     public PlasmaFit nearSunFocusJoint() {
-        return fitter.fit(focus[index()]);
+        return checked(fitter.fit(focus[index()]));
     }
 }
