@@ -38,7 +38,7 @@ public class RiceEncoderBenchmark {
     /** Fixed seed so every run codes the same spectrum. */
     private static final long SEED = 42L;
 
-    private final int[] spectrum = new int[SAMPLES];
+    final int[] spectrum = new int[SAMPLES];
     private RiceEncoder encoder;
     private byte[] out;
 
@@ -56,14 +56,26 @@ public class RiceEncoderBenchmark {
                 spectrum[window * QUADRANTS + quadrant] = (int) Math.max(0, Math.min(65_535, value));
             }
         }
-        encoder = new RiceEncoder(RiceParameters.of(16, 16, 32, true, false, false), SAMPLES);
+        // the ICD's parameters (telemetry ICD §4: n = 16, J = 8, r = 32 blocks, preprocessor on, basic options)
+        encoder = new RiceEncoder(RiceParameters.of(16, 8, 32, true, false, false), SAMPLES);
         out = new byte[(int) encoder.maxEncodedBytes(SAMPLES)];
     }
 
-    /** Encodes the spectrum; returns the compressed size so the work stays observable. */
+    /** Encodes the spectrum; returns the compressed size, checked ({@link #check}). */
     @Benchmark
     @OperationsPerInvocation(RAW_BYTES)
     public int encodeSpectrum() {
-        return encoder.encode(spectrum, 0, SAMPLES, out, 0);
+        return check(encoder.encode(spectrum, 0, SAMPLES, out, 0));
+    }
+
+    /**
+     * {@code coded}, or an exception when it is an encoder status (negative) or no smaller than the raw
+     * samples: a smooth peak over a floor must compress (the run would otherwise time a failure).
+     */
+    static int check(int coded) {
+        if (coded <= 0 || coded >= RAW_BYTES) {
+            throw new IllegalStateException("encoder returned " + coded + " for " + RAW_BYTES + " raw octets");
+        }
+        return coded;
     }
 }

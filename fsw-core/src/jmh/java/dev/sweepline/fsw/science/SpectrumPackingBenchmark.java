@@ -23,6 +23,7 @@ import org.openjdk.jmh.annotations.Param;
 import org.openjdk.jmh.annotations.Scope;
 import org.openjdk.jmh.annotations.Setup;
 import org.openjdk.jmh.annotations.State;
+import org.openjdk.jmh.annotations.TearDown;
 
 /**
  * Packing one realistic 128-window survey spectrum through {@link SpectrumTelemetry#write}: user data
@@ -30,11 +31,12 @@ import org.openjdk.jmh.annotations.State;
  * headers, counters, and transfer framing into a sink that discards the frames. The spectrum is the first
  * survey sweep the real scheduler makes of a 1 AU slow wind (physics.md worked case P1 plasma, canned
  * replies with 2 counts of noise, recorded seed), copied out of the scheduler.
- * Target (issue 3): 0 B/op under {@code -prof gc}.
+ * The score is spectra per second. Each iteration is checked ({@link #check}): every write one packet
+ * of the same size, CCSDS 121 smaller than raw. Target (issue 3): 0 B/op under {@code -prof gc}.
  */
 @State(Scope.Thread)
-@BenchmarkMode(Mode.AverageTime)
-@OutputTimeUnit(TimeUnit.NANOSECONDS)
+@BenchmarkMode(Mode.Throughput)
+@OutputTimeUnit(TimeUnit.SECONDS)
 public class SpectrumPackingBenchmark {
     /** Recorded seed of the synthetic instrument's noise. */
     private static final long SEED = 20261201L;
@@ -50,6 +52,10 @@ public class SpectrumPackingBenchmark {
     private SpectrumTelemetry spectra;
     private int integrationPeriods;
     private long nowMicros;
+    private long writes;
+    private long packetOctets;
+    private int userOctets;
+    private int rawUserOctets;
 
     /** Captures the first survey spectrum of the scheduler and builds the writer. */
     @Setup(Level.Trial)
@@ -81,12 +87,32 @@ public class SpectrumPackingBenchmark {
         writer = new TelemetryWriter(TelemetryWriter.DEFAULT_FRAME_LENGTH, Long.MAX_VALUE, new CucTime(0, 0),
                 packer.maxUserDataLength(), (frame, offset, length) -> { });
         spectra = new SpectrumTelemetry(packer, writer);
+        spectra.write(spectrum, integrationPeriods, 0, 0, nowMicros);
+        packetOctets = spectra.octets(SweepMode.SURVEY);
+        SpectrumPacker raw = new SpectrumPacker(false, DemoCup.INSTRUMENT);
+        rawUserOctets = raw.write(spectrum, integrationPeriods, 0, 0, new byte[raw.maxUserDataLength()], 0);
+        userOctets = packer.write(spectrum, integrationPeriods, 0, 0, new byte[packer.maxUserDataLength()], 0);
+        writes = 1;
+    }
+
+    /**
+     * Fails the run unless every write produced one packet of the first write's size (the same spectrum
+     * packs to the same octets) and CCSDS 121 coding made it smaller than raw samples would.
+     */
+    @TearDown(Level.Iteration)
+    public void check() {
+        long octets = spectra.octets(SweepMode.SURVEY);
+        if (packetOctets <= userOctets || octets != writes * packetOctets || (compress && userOctets >= rawUserOctets)) {
+            throw new IllegalStateException(writes + " writes gave " + octets + " octets, " + packetOctets
+                    + " per packet; user data " + userOctets + ", raw " + rawUserOctets);
+        }
     }
 
     /** Packs the spectrum once; returns the frames emitted so far so the work stays observable. */
     @Benchmark
     public long writeSpectrum() {
         nowMicros += SWEEP_MICROS;
+        writes++;
         spectra.write(spectrum, integrationPeriods, 0, 0, nowMicros);
         return writer.framesEmitted();
     }

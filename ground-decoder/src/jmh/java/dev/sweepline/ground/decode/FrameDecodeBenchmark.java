@@ -1,6 +1,6 @@
 package dev.sweepline.ground.decode;
 
-import dev.sweepline.ground.spectrum.DecodedSpectrum;
+import dev.sweepline.ground.spectrum.SpectrumView;
 import dev.sweepline.ground.spectrum.QuadrantDecompressor;
 import java.util.Random;
 import java.util.concurrent.TimeUnit;
@@ -10,6 +10,7 @@ import org.openjdk.jmh.annotations.Fork;
 import org.openjdk.jmh.annotations.Level;
 import org.openjdk.jmh.annotations.Measurement;
 import org.openjdk.jmh.annotations.Mode;
+import org.openjdk.jmh.annotations.OperationsPerInvocation;
 import org.openjdk.jmh.annotations.OutputTimeUnit;
 import org.openjdk.jmh.annotations.Scope;
 import org.openjdk.jmh.annotations.Setup;
@@ -20,12 +21,14 @@ import org.openjdk.jmh.infra.Blackhole;
 /**
  * Whole-chain decode throughput: a stream of 1024-octet frames (ICD §1 default) carrying survey spectra
  * of 128 windows with raw compression (1107-octet packets, so most packets span two frames), fed in
- * 64 KiB chunks as the CLI reads a file; each spectrum is fully decoded (currents, edges).
- * MB/s of frames = {@link #STREAM_OCTETS} / (seconds per op) / 1e6; the score is in ms/op.
+ * 64 KiB chunks as the CLI reads a file; each spectrum is fully decoded (currents, edges). The score is
+ * octets of frames per microsecond, i.e. MB/s (one operation per stream octet). Each invocation checks
+ * its result ({@link #check}): every frame good, every spectrum decoded without error, none lost; a
+ * wrong result throws, which fails the run.
  */
 @State(Scope.Benchmark)
-@BenchmarkMode(Mode.AverageTime)
-@OutputTimeUnit(TimeUnit.MILLISECONDS)
+@BenchmarkMode(Mode.Throughput)
+@OutputTimeUnit(TimeUnit.MICROSECONDS)
 @Warmup(iterations = 3, time = 2)
 @Measurement(iterations = 5, time = 2)
 @Fork(1)
@@ -37,6 +40,8 @@ public class FrameDecodeBenchmark {
     static final int CHUNK = 64 * 1024;
 
     byte[] stream;
+    /** Spectrum packets whose last octet lies in the stream: the spectra a correct decode yields. */
+    long expectedSpectra;
 
     /** Builds the stream once, from a recorded seed. */
     @Setup(Level.Trial)
@@ -44,6 +49,7 @@ public class FrameDecodeBenchmark {
         Random rnd = new Random(20261201L);
         FrameStreamBuilder b = new FrameStreamBuilder(1024);
         int seq = 0;
+        int packetOctets = 0;
         while (b.frames().size() < FRAMES) {
             int c = 128;
             int[][] adc = new int[4][c];
@@ -54,22 +60,33 @@ public class FrameDecodeBenchmark {
                     adc[q][i] = 256 + rnd.nextInt(60000);
                 }
             }
-            b.add(0, TestPackets.spectrum(0x100, seq & 0x3FFF, 0x7FE81780L + seq, 0, seq, 0, gains, new boolean[c], adc));
+            byte[] packet = TestPackets.spectrum(0x100, seq & 0x3FFF, 0x7FE81780L + seq, 0, seq, 0, gains, new boolean[c], adc);
+            packetOctets = packet.length;
+            b.add(0, packet);
             seq++;
         }
         byte[] all = b.stream();
         stream = java.util.Arrays.copyOf(all, STREAM_OCTETS);
+        // packets of one length fill the frames' data fields back to back (1024 - 6 header - 2 FECF = 1016
+        // octets each, ICD §1): those wholly inside the kept frames must decode
+        expectedSpectra = (long) FRAMES * (1024 - 8) / packetOctets;
     }
 
     /** Decodes the whole stream; returns the spectra decoded. */
     @Benchmark
+    @OperationsPerInvocation(STREAM_OCTETS)
     public long decodeStream(Blackhole bh) {
-        long[] spectra = {0};
+        DecodeStats stats = decode(stream, bh);
+        check(stats, expectedSpectra);
+        return stats.spectraSurvey();
+    }
+
+    /** The whole chain over {@code stream} in 64 KiB chunks; every spectrum goes to {@code bh}. */
+    static DecodeStats decode(byte[] stream, Blackhole bh) {
         DecodeListener sink = new DecodeListener() {
             @Override
-            public void onSpectrum(DecodedSpectrum s) {
-                spectra[0]++;
-                bh.consume(s);
+            public void onSpectrumView(SpectrumView s) {
+                bh.consume(s.totalAmps(s.windowCount() - 1)); // the reused spectrum: nothing allocated
             }
         };
         TelemetryDecoder d = new TelemetryDecoder(DecoderConfig.icdDefaults(), QuadrantDecompressor.UNAVAILABLE, sink);
@@ -77,9 +94,17 @@ public class FrameDecodeBenchmark {
             d.accept(stream, p, Math.min(CHUNK, stream.length - p));
         }
         d.finish();
-        if (d.stats().framesGood() != FRAMES) {
-            throw new IllegalStateException("decoded " + d.stats().framesGood() + " of " + FRAMES + " frames");
+        return d.stats();
+    }
+
+    /** Throws unless every frame was good and every expected spectrum decoded without error. */
+    static void check(DecodeStats stats, long expectedSpectra) {
+        long bad = stats.framesBad().values().stream().mapToLong(Long::longValue).sum();
+        long errors = stats.spectrumErrors().values().stream().mapToLong(Long::longValue).sum();
+        if (stats.framesGood() != FRAMES || bad != 0 || errors != 0 || stats.spectraSurvey() != expectedSpectra) {
+            throw new IllegalStateException("decoded " + stats.framesGood() + " of " + FRAMES + " frames good, " + bad
+                    + " bad, " + stats.spectraSurvey() + " of " + expectedSpectra + " spectra, " + errors
+                    + " spectrum errors");
         }
-        return spectra[0];
     }
 }

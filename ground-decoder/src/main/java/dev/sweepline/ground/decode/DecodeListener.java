@@ -5,6 +5,7 @@ import dev.sweepline.ground.packet.FrameDrop;
 import dev.sweepline.ground.packet.PacketAnomaly;
 import dev.sweepline.ground.spectrum.DecodedSpectrum;
 import dev.sweepline.ground.spectrum.SpectrumError;
+import dev.sweepline.ground.spectrum.SpectrumView;
 
 /**
  * Everything the {@link TelemetryDecoder} finds, in stream order, on the feeding thread. Every method
@@ -49,6 +50,15 @@ public interface DecodeListener {
 
     /** A decoded spectrum. */
     default void onSpectrum(DecodedSpectrum spectrum) {
+    }
+
+    /**
+     * A spectrum decoded into the decoder's reused buffers, valid during the call only: override this to
+     * read spectra without the decoder allocating anything per spectrum. By default it hands an owned copy
+     * to {@link #onSpectrum(DecodedSpectrum)}.
+     */
+    default void onSpectrumView(SpectrumView view) {
+        onSpectrum(view.toDecoded());
     }
 
     /** A spectrum packet that could not be decoded. */

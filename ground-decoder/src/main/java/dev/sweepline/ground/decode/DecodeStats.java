@@ -42,14 +42,19 @@ public final class DecodeStats {
     long spectraSurvey;
     long spectraFocus;
     final EnumMap<SpectrumError, Long> spectrumErrors = new EnumMap<>(SpectrumError.class);
-    final Map<String, Long> spectraByInstrument = new java.util.TreeMap<>();
+    /** Spectra per instrument name, one mutable counter each (no boxing per spectrum). */
+    private final Map<String, long[]> spectraByInstrument = new java.util.TreeMap<>();
     long housekeeping;
     long events;
     final Map<String, Long> eventsByKind = new java.util.TreeMap<>();
     final Map<String, Long> commandReports = new java.util.TreeMap<>();
     long recordErrors;
-    CucTime firstTime;
-    CucTime lastTime;
+    /** Earliest and latest packet time, CUC coarse and fine; valid when {@link #timed}. */
+    private boolean timed;
+    private long firstCoarse;
+    private int firstFine;
+    private long lastCoarse;
+    private int lastFine;
 
     DecodeStats() {
     }
@@ -78,17 +83,28 @@ public final class DecodeStats {
     }
 
     void time(CucTime t) {
-        if (firstTime == null || compare(t, firstTime) < 0) {
-            firstTime = t;
-        }
-        if (lastTime == null || compare(t, lastTime) > 0) {
-            lastTime = t;
-        }
+        time(t.coarseSeconds(), t.fine());
     }
 
-    private static int compare(CucTime a, CucTime b) {
-        int c = Long.compare(a.coarseSeconds(), b.coarseSeconds());
-        return c != 0 ? c : Integer.compare(a.fine(), b.fine());
+    void time(long coarse, int fine) {
+        if (!timed || coarse < firstCoarse || (coarse == firstCoarse && fine < firstFine)) {
+            firstCoarse = coarse;
+            firstFine = fine;
+        }
+        if (!timed || coarse > lastCoarse || (coarse == lastCoarse && fine > lastFine)) {
+            lastCoarse = coarse;
+            lastFine = fine;
+        }
+        timed = true;
+    }
+
+    void countSpectrum(String instrument) {
+        long[] n = spectraByInstrument.get(instrument);
+        if (n == null) {
+            n = new long[1];
+            spectraByInstrument.put(instrument, n);
+        }
+        n[0]++;
     }
 
     /**
@@ -211,7 +227,9 @@ public final class DecodeStats {
 
     /** Spectra decoded, by instrument name (sorted). */
     public Map<String, Long> spectraByInstrument() {
-        return Collections.unmodifiableMap(spectraByInstrument);
+        Map<String, Long> counts = new java.util.TreeMap<>();
+        spectraByInstrument.forEach((name, n) -> counts.put(name, n[0]));
+        return Collections.unmodifiableMap(counts);
     }
 
     /** Spectrum packets rejected, by error. */
@@ -236,12 +254,12 @@ public final class DecodeStats {
 
     /** Earliest time of a decoded packet, or null. */
     public CucTime firstTime() {
-        return firstTime;
+        return timed ? new CucTime(firstCoarse, firstFine) : null;
     }
 
     /** Latest time of a decoded packet, or null. */
     public CucTime lastTime() {
-        return lastTime;
+        return timed ? new CucTime(lastCoarse, lastFine) : null;
     }
 
     /** Counts an event under its kind (mode change, or fault monitor and response taken). */

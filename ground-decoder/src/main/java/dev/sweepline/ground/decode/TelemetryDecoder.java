@@ -15,7 +15,8 @@ import dev.sweepline.ground.packet.VirtualChannelDemux;
 import dev.sweepline.ground.spectrum.DecodedSpectrum;
 import dev.sweepline.ground.spectrum.QuadrantDecompressor;
 import dev.sweepline.ground.spectrum.SpectrumPacketDecoder;
-import dev.sweepline.ground.spectrum.SpectrumResult;
+import dev.sweepline.ground.spectrum.SpectrumError;
+import dev.sweepline.ground.spectrum.SpectrumView;
 import dev.sweepline.ground.spectrum.WindowCatalogue;
 
 /**
@@ -32,6 +33,8 @@ public final class TelemetryDecoder {
     /** VC of each APID's last packet, -1 before its first: a VC restart restarts its APIDs' counts. */
     private final int[] vcOfApid = new int[SpacePacketHeader.IDLE_APID + 1];
     private final SpectrumPacketDecoder spectra;
+    /** The one spectrum the decoder fills and hands to the listener, packet after packet. */
+    private final SpectrumView view = new SpectrumView();
     private final InstrumentSet instruments;
 
     /**
@@ -164,20 +167,19 @@ public final class TelemetryDecoder {
 
     private void dispatch(int apid, int seq, byte[] buf, int off, int octets) {
         if (SpectrumPacketDecoder.isSpectrumApid(apid)) {
-            SpectrumResult r = spectra.decode(buf, off, octets);
-            if (r.isOk()) {
-                DecodedSpectrum s = r.spectrum();
-                if (s.mode() == DecodedSpectrum.MODE_SURVEY) {
+            SpectrumError error = spectra.decodeInto(buf, off, octets, view);
+            if (error == null) {
+                if (view.mode() == DecodedSpectrum.MODE_SURVEY) {
                     stats.spectraSurvey++;
                 } else {
                     stats.spectraFocus++;
                 }
-                stats.spectraByInstrument.merge(s.instrument().name(), 1L, Long::sum);
-                stats.time(s.time());
-                listener.onSpectrum(s);
+                stats.countSpectrum(view.instrument().name());
+                stats.time(view.coarseSeconds(), view.fine());
+                listener.onSpectrumView(view);
             } else {
-                stats.spectrumErrors.merge(r.error(), 1L, Long::sum);
-                listener.onSpectrumError(apid, seq, r.error(), r.detail());
+                stats.spectrumErrors.merge(error, 1L, Long::sum);
+                listener.onSpectrumError(apid, seq, error, spectra.lastDetail());
             }
         } else if (apid == HousekeepingReport.APID) {
             HousekeepingReport h = RecordPacketDecoder.housekeeping(buf, off, octets);

@@ -1,6 +1,6 @@
 package dev.sweepline.ground.fit;
 
-import org.hipparchus.special.Erf;
+import dev.sweepline.ground.special.ErrorFunction;
 
 /**
  * Window current of a convected Maxwellian along the cup normal and its derivatives (physics.md,
@@ -11,8 +11,8 @@ import org.hipparchus.special.Erf;
  *   ∂I/∂U = q n A [ ½(erf x2 − erf x1) + (v1 e1 − v2 e2)/(w√π) ]
  *   ∂I/∂w = q n A [ (x1 v1 e1 − x2 v2 e2)/(w√π) + (e1 − e2)/(2√π) ]
  * </pre>
- * The erf difference uses {@link Erf#erf(double, double)}, which keeps its precision where both
- * arguments lie deep in one tail (far windows).
+ * The erf difference uses {@link ErrorFunction#difference(double, double)}, which keeps its precision
+ * where both arguments lie deep in one tail (far windows) and allocates nothing.
  */
 public final class WindowCurrent {
     /** Index of I in the output of {@link #evaluate}. */
@@ -38,7 +38,7 @@ public final class WindowCurrent {
         double x2 = (v2 - speedMPerS) / thermalSpeedMPerS;
         double e1 = Math.exp(-x1 * x1);
         double e2 = Math.exp(-x2 * x2);
-        return chargeAreaC * densityPerM3 * (0.5 * speedMPerS * Erf.erf(x1, x2)
+        return chargeAreaC * densityPerM3 * (0.5 * speedMPerS * ErrorFunction.difference(x1, x2)
                 + thermalSpeedMPerS / (2 * PlasmaConstants.SQRT_PI) * (e1 - e2));
     }
 
@@ -50,7 +50,7 @@ public final class WindowCurrent {
         double x2 = (v2 - speedMPerS) / w;
         double e1 = Math.exp(-x1 * x1);
         double e2 = Math.exp(-x2 * x2);
-        double derf = Erf.erf(x1, x2);
+        double derf = ErrorFunction.difference(x1, x2);
         double qnA = chargeAreaC * densityPerM3;
         double bracket = 0.5 * speedMPerS * derf + w / (2 * PlasmaConstants.SQRT_PI) * (e1 - e2);
         out[VALUE] = qnA * bracket;

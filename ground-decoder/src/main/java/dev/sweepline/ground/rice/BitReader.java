@@ -10,15 +10,22 @@ final class BitReader {
     /** Result of a fundamental-sequence read with more zeros than its limit. */
     static final long TOO_LONG = -2;
 
-    private final byte[] data;
-    private final int offset;
-    private final long endBit;
+    private byte[] data;
+    private int offset;
+    private long endBit;
     private long position;
 
     BitReader(byte[] data, int offset, int length) {
+        wrap(data, offset, length);
+    }
+
+    /** Reads {@code length} octets of {@code data} from {@code offset} from their first bit: one reader, reused. */
+    BitReader wrap(byte[] data, int offset, int length) {
         this.data = data;
         this.offset = offset;
         this.endBit = (long) length * 8;
+        this.position = 0;
+        return this;
     }
 
     /** Bit position from the start of the region. */

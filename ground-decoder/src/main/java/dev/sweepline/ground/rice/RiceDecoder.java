@@ -38,13 +38,14 @@ public final class RiceDecoder {
     private final boolean padIntervals;
     private final long[] mapped;
 
-    private BitReader reader;
+    private final BitReader reader = new BitReader(new byte[0], 0, 0);
     private int[] out;
     private int wanted;
     private int produced;
     private long previous;
     private DecodeStatus failure;
     private long failurePosition;
+    private long endPosition;
 
     /** A decoder for streams coded with {@code settings}. */
     public RiceDecoder(RiceSettings settings) {
@@ -70,11 +71,22 @@ public final class RiceDecoder {
      * padded intervals the fill between intervals must be zero ({@link DecodeStatus#INTERVAL_FILL_NOT_ZERO}).
      */
     public DecodeResult decode(byte[] in, int offset, int length, int sampleCount, int[] out) {
+        DecodeStatus status = decodeInPlace(in, offset, length, sampleCount, out);
+        return new DecodeResult(status, samplesDecoded(), bitPosition());
+    }
+
+    /**
+     * As {@link #decode} without the result object: the status, with {@link #samplesDecoded()} and
+     * {@link #bitPosition()} telling the rest until the next call. Allocates nothing.
+     */
+    public DecodeStatus decodeInPlace(byte[] in, int offset, int length, int sampleCount, int[] out) {
         if (in == null || out == null || offset < 0 || length < 0 || offset > in.length - length
                 || sampleCount < 0 || sampleCount > out.length) {
-            return new DecodeResult(DecodeStatus.BAD_ARGUMENTS, 0, 0);
+            this.produced = 0;
+            this.endPosition = 0;
+            return DecodeStatus.BAD_ARGUMENTS;
         }
-        this.reader = new BitReader(in, offset, length);
+        reader.wrap(in, offset, length);
         this.out = out;
         this.wanted = sampleCount;
         this.produced = 0;
@@ -90,12 +102,19 @@ public final class RiceDecoder {
                 skipIntervalFill();
             }
         }
-        DecodeResult result = failure == null
-                ? new DecodeResult(DecodeStatus.OK, produced, reader.position())
-                : new DecodeResult(failure, produced, failurePosition);
-        this.reader = null;
         this.out = null;
-        return result;
+        this.endPosition = failure == null ? reader.position() : failurePosition;
+        return failure == null ? DecodeStatus.OK : failure;
+    }
+
+    /** Samples the last {@link #decodeInPlace} wrote. */
+    public int samplesDecoded() {
+        return produced;
+    }
+
+    /** Where the last {@link #decodeInPlace} stopped: after its last coded bit, or where it failed (bits). */
+    public long bitPosition() {
+        return endPosition;
     }
 
     /** Decodes one coded data set starting at {@code block}; returns the blocks it covered. */

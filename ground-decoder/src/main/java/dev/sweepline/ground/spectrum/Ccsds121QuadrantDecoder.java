@@ -1,6 +1,5 @@
 package dev.sweepline.ground.spectrum;
 
-import dev.sweepline.ground.rice.DecodeResult;
 import dev.sweepline.ground.rice.DecodeStatus;
 import dev.sweepline.ground.rice.RiceDecoder;
 import dev.sweepline.ground.rice.RiceSettings;
@@ -28,11 +27,11 @@ public final class Ccsds121QuadrantDecoder implements QuadrantDecompressor {
             decoder = new RiceDecoder(RiceSettings.basic(sampleBits, BLOCK_SAMPLES, REFERENCE_INTERVAL_BLOCKS));
             byWidth[sampleBits] = decoder;
         }
-        DecodeResult r = decoder.decode(in, off, len, sampleCount, out);
-        if (r.ok()) {
+        DecodeStatus status = decoder.decodeInPlace(in, off, len, sampleCount, out);
+        if (status == DecodeStatus.OK) {
             // fill reaches only the next octet boundary (ICD §4), so the last coded bit lies in octet Lq
-            return (r.bitPosition() + 7) / 8 < len ? ERROR_UNUSED_OCTETS : r.samplesDecoded();
+            return (decoder.bitPosition() + 7) / 8 < len ? ERROR_UNUSED_OCTETS : decoder.samplesDecoded();
         }
-        return r.status() == DecodeStatus.TRUNCATED ? ERROR_SHORT_INPUT : ERROR_CORRUPT;
+        return status == DecodeStatus.TRUNCATED ? ERROR_SHORT_INPUT : ERROR_CORRUPT;
     }
 }

@@ -5,7 +5,6 @@ import dev.sweepline.ground.instrument.GroundInstrument;
 import dev.sweepline.ground.instrument.InstrumentSet;
 import dev.sweepline.ground.packet.CucTime;
 import dev.sweepline.ground.packet.SpacePacketHeader;
-import java.util.Arrays;
 
 /**
  * Decodes a spectrum packet (APIDs 0x100, 0x101) per ICD §4, layout 2 or layout 1 ({@link
@@ -21,7 +20,8 @@ import java.util.Arrays;
  * The instrument is the one whose description has the packet's instrument id (layout 2), or the demo
  * cup (layout 1); a packet of an instrument the ground has no description for, or whose sample width
  * is not its description's ADC width, is refused. Currents and window edges come from that
- * instrument's description. Not thread-safe (one scratch buffer per instance).
+ * instrument's description. {@link #decodeInto} fills a reused {@link SpectrumView} and allocates nothing
+ * on success; {@link #decode} returns an owned {@link DecodedSpectrum}. Not thread-safe.
  */
 public final class SpectrumPacketDecoder {
     /** APID of survey spectra (ICD §3.3). */
@@ -38,7 +38,8 @@ public final class SpectrumPacketDecoder {
     private final QuadrantDecompressor ccsds121;
     private final WindowCatalogue windows;
     private final InstrumentSet instruments;
-    private final int[] scratch = new int[QuadrantDecompressor.paddedCount(MAX_WINDOWS)];
+    private final SpectrumView own = new SpectrumView();
+    private String detail = "";
 
     /**
      * A decoder for every built-in instrument.
@@ -68,63 +69,97 @@ public final class SpectrumPacketDecoder {
 
     /** Decodes the whole packet (primary header first) of {@code len} octets at {@code off}. */
     public SpectrumResult decode(byte[] pkt, int off, int len) {
+        SpectrumError e = decodeInto(pkt, off, len, own);
+        return e == null ? SpectrumResult.ok(own.toDecoded()) : SpectrumResult.fail(e, detail);
+    }
+
+    /** What was wrong with the last packet {@link #decodeInto} refused, for listings. */
+    public String lastDetail() {
+        return detail;
+    }
+
+    /**
+     * Decodes the whole packet (primary header first) of {@code len} octets at {@code off} into {@code v}.
+     *
+     * @return null on success ({@code v} then holds the spectrum), else the error ({@link #lastDetail()}
+     *         says more; {@code v} is then partly overwritten)
+     */
+    public SpectrumError decodeInto(byte[] pkt, int off, int len, SpectrumView v) {
         final int end = off + len;
         final int u = off + SpacePacketHeader.OCTETS + CucTime.OCTETS;
         if (len < u - off + 1) {
-            return SpectrumResult.fail(SpectrumError.LENGTH_BEYOND_DATA, "packet of " + len + " octets");
+            return fail(SpectrumError.LENGTH_BEYOND_DATA, "packet of " + len + " octets");
         }
         int apid = SpacePacketHeader.apid(pkt, off);
         if (!isSpectrumApid(apid)) {
-            return SpectrumResult.fail(SpectrumError.NOT_A_SPECTRUM, "APID " + Integer.toHexString(apid));
+            return fail(SpectrumError.NOT_A_SPECTRUM, "APID " + Integer.toHexString(apid));
         }
         if (!SpacePacketHeader.secondaryHeaderFlag(pkt, off)) {
-            return SpectrumResult.fail(SpectrumError.NO_SECONDARY_HEADER, "");
+            return fail(SpectrumError.NO_SECONDARY_HEADER, "");
         }
         int fixed = SpectrumHeader.octetsOf(pkt[u] & 0xFF);
         if (fixed < 0) {
-            return SpectrumResult.fail(SpectrumError.UNKNOWN_LAYOUT,
-                    String.format("first octet 0x%02X", pkt[u] & 0xFF));
+            return fail(SpectrumError.UNKNOWN_LAYOUT, String.format("first octet 0x%02X", pkt[u] & 0xFF));
         }
         if (end - u < fixed) {
-            return SpectrumResult.fail(SpectrumError.LENGTH_BEYOND_DATA, "packet of " + len + " octets");
+            return fail(SpectrumError.LENGTH_BEYOND_DATA, "packet of " + len + " octets");
         }
         SpectrumHeader h = SpectrumHeader.read(pkt, u);
         GroundInstrument instrument = h.layout() == 1 ? instruments.layoutOne() : instruments.byId(h.instrumentId());
         if (instrument == null) {
-            return SpectrumResult.fail(SpectrumError.UNKNOWN_INSTRUMENT, h.layout() == 1
+            return fail(SpectrumError.UNKNOWN_INSTRUMENT, h.layout() == 1
                     ? "layout 1 is the demo cup's and the ground has no demo-cup description (it has "
                             + instruments.labels() + ")"
                     : "instrument id " + h.instrumentId() + ": no description (the ground has "
                             + instruments.labels() + ")");
         }
         if (h.sampleBits() != instrument.sampleBits()) {
-            return SpectrumResult.fail(SpectrumError.SAMPLE_WIDTH_MISMATCH, "instrument " + instrument.label()
+            return fail(SpectrumError.SAMPLE_WIDTH_MISMATCH, "instrument " + instrument.label()
                     + ": samples of " + h.sampleBits() + " bits, its description's ADC has " + instrument.sampleBits());
         }
         if (h.mode() != (apid == APID_SURVEY ? DecodedSpectrum.MODE_SURVEY : DecodedSpectrum.MODE_FOCUS)) {
-            return SpectrumResult.fail(SpectrumError.BAD_MODE, "mode " + h.mode() + " on APID "
-                    + Integer.toHexString(apid));
+            return fail(SpectrumError.BAD_MODE, "mode " + h.mode() + " on APID " + Integer.toHexString(apid));
         }
         if (h.windowCount() < 1 || h.windowCount() > MAX_WINDOWS) {
-            return SpectrumResult.fail(SpectrumError.BAD_WINDOW_COUNT, "c = " + h.windowCount());
+            return fail(SpectrumError.BAD_WINDOW_COUNT, "c = " + h.windowCount());
         }
-        return body(pkt, off, end, u + h.octets(), h, instrument);
+        v.apid = apid;
+        v.sequenceCount = SpacePacketHeader.sequenceCount(pkt, off);
+        v.coarseSeconds = BigEndian.u32(pkt, off + SpacePacketHeader.OCTETS);
+        v.fine = BigEndian.u16(pkt, off + SpacePacketHeader.OCTETS + 4);
+        v.layoutVersion = h.layout();
+        v.mode = h.mode();
+        v.flags = h.flags();
+        v.sweep = h.sweep();
+        v.tableId = h.tableId();
+        v.firstWindow = h.firstWindow();
+        v.windowCount = h.windowCount();
+        v.peakQ8 = h.peakQ8();
+        v.integrationPeriods = h.integrationPeriods();
+        v.instrument = instrument;
+        return body(pkt, end, u + h.octets(), h.sampleBits(), v);
+    }
+
+    private SpectrumError fail(SpectrumError e, String why) {
+        detail = why;
+        return e;
     }
 
     /** The tags, flags and quadrant streams from {@code p} to the packet's {@code end}. */
-    private SpectrumResult body(byte[] pkt, int off, int end, int p, SpectrumHeader h, GroundInstrument instrument) {
-        int c = h.windowCount();
+    private SpectrumError body(byte[] pkt, int end, int p, int sampleBits, SpectrumView v) {
+        int c = v.windowCount;
+        GroundInstrument instrument = v.instrument;
         int gainOctets = (c + 3) / 4;
         int satOctets = (c + 7) / 8;
         if (end - p < gainOctets + satOctets + 1) {
-            return SpectrumResult.fail(SpectrumError.LENGTH_BEYOND_DATA, "tags of " + c + " windows");
+            return fail(SpectrumError.LENGTH_BEYOND_DATA, "tags of " + c + " windows");
         }
-        int[] gain = new int[c];
-        boolean[] sat = new boolean[c];
+        int[] gain = v.gainRange;
+        boolean[] sat = v.saturated;
         for (int i = 0; i < c; i++) {
             gain[i] = (pkt[p + i / 4] >>> (6 - 2 * (i % 4))) & 3;
             if (!instrument.gains().hasRange(gain[i])) {
-                return SpectrumResult.fail(SpectrumError.BAD_GAIN_RANGE, "window " + (h.firstWindow() + i) + " tag "
+                return fail(SpectrumError.BAD_GAIN_RANGE, "window " + (v.firstWindow + i) + " tag "
                         + gain[i] + ": " + instrument.label() + " has ranges 0.." + (instrument.gains().ranges() - 1));
             }
             sat[i] = ((pkt[p + gainOctets + i / 8] >>> (7 - i % 8)) & 1) != 0;
@@ -137,35 +172,34 @@ public final class SpectrumPacketDecoder {
         } else if (compression == COMPRESSION_CCSDS121) {
             qd = ccsds121;
         } else {
-            return SpectrumResult.fail(SpectrumError.UNKNOWN_COMPRESSION, "0x" + Integer.toHexString(compression));
+            return fail(SpectrumError.UNKNOWN_COMPRESSION, "0x" + Integer.toHexString(compression));
         }
-        int[][] adc = new int[DecodedSpectrum.QUADRANTS][];
+        v.compression = compression;
         for (int q = 0; q < DecodedSpectrum.QUADRANTS; q++) {
             if (end - p < 2) {
-                return SpectrumResult.fail(SpectrumError.LENGTH_BEYOND_DATA, "Lq of quadrant " + (q + 1));
+                return fail(SpectrumError.LENGTH_BEYOND_DATA, "Lq of quadrant " + (q + 1));
             }
             int lq = BigEndian.u16(pkt, p);
             p += 2;
             if (end - p < lq) {
-                return SpectrumResult.fail(SpectrumError.LENGTH_BEYOND_DATA,
+                return fail(SpectrumError.LENGTH_BEYOND_DATA,
                         "quadrant " + (q + 1) + " Lq " + lq + " > " + (end - p) + " left");
             }
-            int got = qd.decode(pkt, p, lq, c, h.sampleBits(), scratch);
+            int got = qd.decode(pkt, p, lq, c, sampleBits, v.adcCounts[q]);
             if (got != c) {
-                return SpectrumResult.fail(quadrantError(got), "quadrant " + (q + 1) + " returned " + got);
+                return fail(quadrantError(got), "quadrant " + (q + 1) + " returned " + got);
             }
-            adc[q] = Arrays.copyOf(scratch, c);
             p += lq;
         }
         if (p != end) {
-            return SpectrumResult.fail(SpectrumError.TRAILING_OCTETS, (end - p) + " octets");
+            return fail(SpectrumError.TRAILING_OCTETS, (end - p) + " octets");
         }
-        return SpectrumResult.ok(build(CucTime.read(pkt, off + SpacePacketHeader.OCTETS),
-                SpacePacketHeader.apid(pkt, off), SpacePacketHeader.sequenceCount(pkt, off), h, instrument, compression,
-                gain, sat, adc));
+        currents(v);
+        windows.edges(instrument, v.tableId, v.firstWindow, c, v.lowVolts, v.highVolts);
+        return null;
     }
 
-    /** The spectrum error of a quadrant decoder's error code. */
+    /** The error of a quadrant decoder's error code. */
     private static SpectrumError quadrantError(int code) {
         return switch (code) {
             case QuadrantDecompressor.ERROR_UNAVAILABLE -> SpectrumError.DECOMPRESSOR_UNAVAILABLE;
@@ -174,30 +208,29 @@ public final class SpectrumPacketDecoder {
         };
     }
 
-    private DecodedSpectrum build(CucTime time, int apid, int seq, SpectrumHeader h, GroundInstrument instrument,
-            int compression, int[] gain, boolean[] sat, int[][] adc) {
-        int c = h.windowCount();
-        double[][] amps = new double[DecodedSpectrum.QUADRANTS][c];
-        double[] total = new double[c];
-        double[] low = new double[c];
-        double[] high = new double[c];
-        double[] lsb = new double[instrument.gains().ranges()];
-        for (int r = 0; r < lsb.length; r++) {
-            lsb[r] = instrument.lsbAmps(r); // GroundInstrument.amps, one LSB per range and spectrum
-        }
+    /** Quadrant and total currents from the ADC samples: (count − pedestal) × the LSB of the window's range. */
+    private static void currents(SpectrumView v) {
+        GroundInstrument instrument = v.instrument;
         int pedestal = instrument.adc().pedestalCounts();
-        for (int i = 0; i < c; i++) {
-            double sum = 0;
-            for (int q = 0; q < DecodedSpectrum.QUADRANTS; q++) {
-                double a = (adc[q][i] - pedestal) * lsb[gain[i]];
-                amps[q][i] = a;
-                sum += a;
-            }
-            total[i] = sum;
+        int[] gain = v.gainRange;
+        int[][] adc = v.adcCounts;
+        double[][] amps = v.currentAmps;
+        double lsb0 = instrument.lsbAmps(0); // GroundInstrument.amps: one LSB per range, looked up once per spectrum
+        double lsb1 = instrument.gains().ranges() > 1 ? instrument.lsbAmps(1) : Double.NaN;
+        double lsb2 = instrument.gains().ranges() > 2 ? instrument.lsbAmps(2) : Double.NaN;
+        double lsb3 = instrument.gains().ranges() > 3 ? instrument.lsbAmps(3) : Double.NaN;
+        for (int i = 0, c = v.windowCount; i < c; i++) {
+            int g = gain[i];
+            double lsb = g == 0 ? lsb0 : g == 1 ? lsb1 : g == 2 ? lsb2 : lsb3;
+            double a0 = (adc[0][i] - pedestal) * lsb;
+            double a1 = (adc[1][i] - pedestal) * lsb;
+            double a2 = (adc[2][i] - pedestal) * lsb;
+            double a3 = (adc[3][i] - pedestal) * lsb;
+            amps[0][i] = a0;
+            amps[1][i] = a1;
+            amps[2][i] = a2;
+            amps[3][i] = a3;
+            v.totalAmps[i] = a0 + a1 + a2 + a3;
         }
-        windows.edges(instrument, h.tableId(), h.firstWindow(), c, low, high);
-        return new DecodedSpectrum(time, apid, seq, h.mode(), h.steppedDown(), h.tableChanged(), h.sweep(),
-                h.tableId(), h.firstWindow(), c, h.peakQ8(), h.integrationPeriods(), compression, gain, sat, adc, amps,
-                total, low, high, h.layout(), instrument);
     }
 }

@@ -45,6 +45,11 @@
  *       {@code UNKNOWN_INSTRUMENT}, one whose w is not its description's ADC width as
  *       {@code SAMPLE_WIDTH_MISMATCH}, a first octet with bit 7 set other than 0x82 as {@code UNKNOWN_LAYOUT},
  *       each with a detail naming the id or the instrument ({@code SpectrumLayoutTwoTest}).</li>
+ *   <li>S7 the telemetry decoder's hot path fills one reused {@link dev.sweepline.ground.spectrum.SpectrumView}
+ *       (buffers for 256 windows, the decompressor writing into them) and allocates nothing per sample or
+ *       per window; a listener gets an owned {@code DecodedSpectrum} unless it reads the view
+ *       ({@code SpectrumViewTest}; the golden tests go through the same path; JMH
+ *       {@code FlightTelemetryDecodeBenchmark -prof gc}).</li>
  * </ol>
  *
  * <p>Choices: the window edges reported are the calibrated voltages of the DAC-rounded codes the table

@@ -10,19 +10,22 @@ import java.util.concurrent.TimeUnit;
 import org.openjdk.jmh.annotations.Benchmark;
 import org.openjdk.jmh.annotations.BenchmarkMode;
 import org.openjdk.jmh.annotations.Fork;
+import org.openjdk.jmh.annotations.Level;
 import org.openjdk.jmh.annotations.Measurement;
 import org.openjdk.jmh.annotations.Mode;
 import org.openjdk.jmh.annotations.OutputTimeUnit;
 import org.openjdk.jmh.annotations.Scope;
 import org.openjdk.jmh.annotations.Setup;
 import org.openjdk.jmh.annotations.State;
+import org.openjdk.jmh.annotations.TearDown;
 import org.openjdk.jmh.annotations.Warmup;
 
 /**
  * Cost of one simulated step: a survey of 128 log-spaced windows over a proton + alpha wind flowing
  * 4 deg and 2 deg off the normal (two populations, so the split collector's cache hits on the second).
  * Run: {@code mvn -q -pl hw-sim -am -Pjmh verify -DskipTests -Djmh.includes=SimulatedInstrumentBenchmark
- * -Djmh.args="-f 1 -wi 3 -i 5 -prof gc"}.
+ * -Djmh.args="-f 1 -wi 3 -i 5 -prof gc"}. Each step's reply and truth are checked; an iteration in which
+ * no window saw the wind fails.
  */
 @State(Scope.Thread)
 @BenchmarkMode(Mode.AverageTime)
@@ -38,6 +41,7 @@ public class SimulatedInstrumentBenchmark {
     private PlasmaState plasma;
     private int next;
     private long nowMicros;
+    private double peakTruthAmps;
 
     @Setup
     public void setUp() {
@@ -62,11 +66,31 @@ public class SimulatedInstrumentBenchmark {
         }
     }
 
+    /** One step of the survey, checked ({@link #check}). */
     @Benchmark
     public int executeStep() {
         StepCommand c = survey[next];
         next = (next + 1) & 127;
         nowMicros = instrument.execute(c, nowMicros, plasma, reply, truth);
+        check(c);
+        peakTruthAmps = Math.max(peakTruthAmps, truth.totalAmps);
         return reply.quadrant[0] + reply.quadrant[3];
+    }
+
+    /** Throws unless the reply answers {@code c} with the HV on and the truth current is a current. */
+    void check(StepCommand c) {
+        if (reply.sequence != c.sequence || (reply.status & SampleReply.STATUS_HV_OFF) != 0
+                || !(truth.totalAmps >= 0) || Double.isInfinite(truth.totalAmps)) {
+            throw new IllegalStateException("step " + c.sequence + ": reply " + reply.sequence + " status "
+                    + reply.status + ", truth " + truth.totalAmps + " A");
+        }
+    }
+
+    /** Fails the run if no window of the survey saw the wind (its proton peak carries about 1e-10 A). */
+    @TearDown(Level.Iteration)
+    public void sawTheWind() {
+        if (!(peakTruthAmps > 1e-12)) {
+            throw new IllegalStateException("largest truth current of the survey " + peakTruthAmps + " A");
+        }
     }
 }

@@ -17,7 +17,8 @@ import org.openjdk.jmh.annotations.State;
  * simulated corpus ({@link SpectrumCorpus}: closed-loop runs of quiet-perihelion, fast-wind, shock-sheath),
  * one call per spectrum as the packet layer needs. The {@code inputOctets} aux counter is raw input octets
  * (2 per 16-bit sample) per microsecond, i.e. MB/s. Bits per sample are not a JMH score: {@link #setUp}
- * prints them (and, for the Rice coder, the whole {@link CompressionStudy} table).
+ * prints them (and, for the Rice coder, the whole {@link CompressionStudy} table, with the Rice size over
+ * the entropy bound per scenario). Each invocation checks its coded size against a fresh coder's.
  *
  * <p>Targets (ours: the acceptance targets of the onboard coder; no standard sets them): Rice encode at
  * least 5x the speed of deflate level 1, no larger than deflate level 9,
@@ -34,6 +35,7 @@ public class CompressionStudyBenchmark {
     private static SpectrumCorpus corpus;
     private SpectrumCodec coder;
     private long rawOctets;
+    private long expectedOctets;
 
     /** Input octets coded, counted per invocation: JMH reports them per microsecond (MB/s). */
     @State(Scope.Thread)
@@ -58,6 +60,11 @@ public class CompressionStudyBenchmark {
         }
         coder = SpectrumCodec.named(codec);
         rawOctets = 2 * corpus.samples();
+        SpectrumCodec reference = SpectrumCodec.named(codec);
+        expectedOctets = 0;
+        for (int k = 0; k < corpus.size(); k++) {
+            expectedOctets += reference.compress(corpus.quadrants(k), corpus.raw(k));
+        }
         System.out.printf("%n%s: %.3f bits/sample on %d spectra%n", codec,
                 CompressionStudy.bitsPerSample(corpus, codec, null), corpus.size());
     }
@@ -70,6 +77,18 @@ public class CompressionStudyBenchmark {
             coded += coder.compress(corpus.quadrants(k), corpus.raw(k));
         }
         octets.inputOctets += rawOctets;
+        return check(coded, expectedOctets, rawOctets);
+    }
+
+    /**
+     * {@code coded}, or an exception unless it is what a fresh coder of the same kind gave for the corpus
+     * (a coder's output depends on its input alone) and smaller than the raw octets.
+     */
+    static long check(long coded, long expectedOctets, long rawOctets) {
+        if (coded != expectedOctets || coded <= 0 || coded >= rawOctets) {
+            throw new IllegalStateException("coded " + coded + " octets, expected " + expectedOctets + " of "
+                    + rawOctets + " raw");
+        }
         return coded;
     }
 }

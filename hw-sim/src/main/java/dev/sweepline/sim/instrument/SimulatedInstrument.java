@@ -26,8 +26,7 @@ import java.util.SplittableRandom;
  *
  * <p>Determinism: all randomness comes from one {@link SplittableRandom} seeded at construction, so
  * the same seed and the same calls give the same replies. Threading: not thread-safe; one instance
- * per simulated instrument. Allocates nothing itself; the only garbage per step is Hipparchus
- * {@code Erf}'s continued-fraction objects, 64 B per ion population (measured with JMH -prof gc).
+ * per simulated instrument. Allocates nothing per step (measured with JMH -prof gc).
  */
 public final class SimulatedInstrument {
     private final InstrumentModel model;

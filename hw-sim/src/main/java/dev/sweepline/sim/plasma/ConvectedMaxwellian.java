@@ -1,7 +1,5 @@
 package dev.sweepline.sim.plasma;
 
-import org.hipparchus.special.Erf;
-
 /**
  * Closed-form Faraday-cup window current of a convected (drifting) Maxwellian along the cup normal,
  * and its derivatives (physics.md "Window current of a convected Maxwellian").
@@ -10,13 +8,12 @@ import org.hipparchus.special.Erf;
  * current of ions whose normal speed lies in [v1, v2] is
  * {@code I = q n A [ (U/2)(erf x2 - erf x1) + (w/(2 sqrt(pi)))(e1 - e2) ]}.
  *
- * <p>Numerics: the erf difference uses {@link Erf#erf(double, double)}, which switches to erfc
- * differences when both arguments lie in the same tail, and e1 - e2 is formed as
+ * <p>Numerics: the erf difference uses {@link ErrorFunction#difference(double, double)}, which switches
+ * to erfc differences when both arguments lie in the same tail, and e1 - e2 is formed as
  * {@code e_max * expm1(...)}; so a window far in the upper tail keeps full relative precision. In the
  * far lower tail (v well below U) the two terms have opposite signs and the result loses about
  * log10(U / v2) digits; the current there is clamped at zero, which it can only reach through
- * rounding. Stateless; every method is thread-safe. Nothing is allocated here, but Hipparchus
- * {@code Erf} allocates a small continued-fraction object per erfc evaluation (32 B, measured).
+ * rounding. Stateless; every method is thread-safe; nothing is allocated.
  */
 public final class ConvectedMaxwellian {
     private static final double SQRT_PI = Math.sqrt(Math.PI);
@@ -40,7 +37,7 @@ public final class ConvectedMaxwellian {
                                        double v1, double v2) {
         double x1 = (v1 - uNormal) / w;
         double x2 = (v2 - uNormal) / w;
-        double erfDiff = Erf.erf(x1, x2);
+        double erfDiff = ErrorFunction.difference(x1, x2);
         double expDiff = expDifference(x1, x2, (v2 - v1) / w, (v1 + v2 - 2 * uNormal) / w);
         double current = q * nPerM3 * areaM2 * (0.5 * uNormal * erfDiff + w / (2 * SQRT_PI) * expDiff);
         if (v2 >= v1 && v1 >= 0 && current < 0) {
@@ -63,7 +60,7 @@ public final class ConvectedMaxwellian {
         double x2 = (v2 - uNormal) / w;
         double e1 = Math.exp(-x1 * x1);
         double e2 = Math.exp(-x2 * x2);
-        return q * nPerM3 * areaM2 * (0.5 * Erf.erf(x1, x2) + (times(v1, e1) - times(v2, e2)) / (w * SQRT_PI));
+        return q * nPerM3 * areaM2 * (0.5 * ErrorFunction.difference(x1, x2) + (times(v1, e1) - times(v2, e2)) / (w * SQRT_PI));
     }
 
     /** dI/dw = qnA[(x1 v1 e1 - x2 v2 e2)/(w sqrt(pi)) + (e1 - e2)/(2 sqrt(pi))], amperes per (metre per second). */

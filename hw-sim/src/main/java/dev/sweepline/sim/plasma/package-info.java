@@ -19,16 +19,19 @@
  *   <li>PLA-4: the thermal speed w = sqrt(2kT/m) and the bi-Maxwellian normal projection
  *       w_n^2 = w_par^2 cos^2 psi + w_perp^2 sin^2 psi.</li>
  *   <li>PLA-5: v = sqrt(2qV/m) and its inverse; alphas (charge 2e) sit at V_alpha/V_p = 1.986300.</li>
- *   <li>PLA-6: stateless closed forms, cheap enough to call per simulated step. They allocate nothing
- *       themselves; Hipparchus {@code Erf} allocates one small continued-fraction object per erfc
- *       evaluation (32 B, measured), the only garbage on the step path.</li>
+ *   <li>PLA-6: stateless closed forms, cheap enough to call per simulated step, allocating nothing.</li>
+ *   <li>PLA-7: {@link dev.sweepline.sim.plasma.ErrorFunction} (Cody's rational Chebyshev
+ *       approximations, Math. Comp. 23, 1969) gives erf and erfc within 1e-15 relative on the whole
+ *       range the model uses, −40 ≤ x ≤ 26.5, and erf differences far in a tail from erfc.</li>
  * </ol>
  *
  * <h2>How verified</h2>
  * PLA-1 by {@code ConvectedMaxwellianTest} against Hipparchus {@code IterativeLegendreGaussIntegrator}
  * over a grid of (n, U, w, window) cases; PLA-2, PLA-5 by the same test (physics.md rows, Abramowitz
  * &amp; Stegun Table 7.1 for erf); PLA-3 by central differences; PLA-4 by {@code PlasmaStateTest};
- * PLA-6 by {@code SimulatedInstrumentBenchmark} (time and gc profile).
+ * PLA-6 by {@code SimulatedInstrumentBenchmark} (time and gc profile); PLA-7 by {@code ErrorFunctionTest}
+ * against a BigDecimal series reference (A&amp;S 7.1.6) and A&amp;S Table 7.1, with the thread's
+ * allocation counter.
  *
  * <h2>Limits</h2>
  * In the far lower tail (v much below U) about log10(U/v) digits are lost to cancellation between the
