@@ -19,9 +19,9 @@ import org.hipparchus.distribution.continuous.ChiSquaredDistribution;
  * quantile at the calibrated nominal level {@link #TEST_LEVEL} = {@link #FALSE_ALARM_RATE} /
  * {@link #TRIALS_FACTOR}. The factor is bounded by Monte Carlo on alpha-free spectra: at a nominal 1 % the
  * measured rates were 0.5 % near the Sun, 1.0 % at 1 AU and 1.75 % (10 of 573 fits) on the bench's steady
- * alpha-free case, a trials factor up to 1.75; at the threshold's u ≈ 16 it grows by (16.3/11.3)^{3/2} ≈ 1.7
+ * alpha-free case, a trials factor up to 1.75; at the threshold's u ≈ 16 it grows by about 16.3/11.3 = 1.44
  * for a two-dimensional nuisance field (Gross &amp; Vitells 2010, Euler-characteristic density ∝ u^{d/2}
- * times the χ² tail [memory]), to about 3, so a factor 10 leaves a margin of about three. The measured
+ * times the χ² tail, d = 2 [memory]), to about 2.5, so a factor 10 leaves a margin of about four. The measured
  * rates at the calibrated level are {@code AlphaSelectionTest} (near the Sun, 1 AU), {@code PartialAlphaTest}
  * (constrained component) and the bench's {@code eval-steady-no-alphas} case (docs/physics.md
  * "Alpha selection"); rerunning those tests regenerates the calibration. The boundary n_α ≥ 0 (a
@@ -38,7 +38,7 @@ final class AlphaSelection {
     static final double FALSE_ALARM_RATE = 0.01;
     /**
      * Ratio of the actual to the nominal χ²(k) false-alarm rate allowed for: the measured trials factor (up to
-     * 1.75 at a nominal 1 %, about 3 extrapolated to the threshold, see the class note) with a margin of three.
+     * 1.75 at a nominal 1 %, about 2.5 extrapolated to the threshold, see the class note) with a margin of four.
      */
     static final double TRIALS_FACTOR = 10.0;
     /** Nominal level at which the χ²(k) quantile is taken: {@link #FALSE_ALARM_RATE} / {@link #TRIALS_FACTOR}. */
