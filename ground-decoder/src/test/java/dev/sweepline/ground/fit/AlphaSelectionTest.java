@@ -4,6 +4,7 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.Random;
+import org.hipparchus.distribution.continuous.BetaDistribution;
 import org.junit.jupiter.api.Test;
 
 class AlphaSelectionTest {
@@ -14,9 +15,16 @@ class AlphaSelectionTest {
     /** Recorded seed. */
     static final long SEED = 1938L;
 
-    /** Binomial upper tolerance on a 1 % rate over {@link #TRIALS}: α + 3√(α(1−α)/N) = 1.94 % (common practice: 3σ). */
-    static final double FALSE_ALARM_LIMIT = AlphaSelection.FALSE_ALARM_RATE
-            + 3 * Math.sqrt(AlphaSelection.FALSE_ALARM_RATE * (1 - AlphaSelection.FALSE_ALARM_RATE) / TRIALS);
+    /**
+     * One-sided 95 % upper bound of a binomial rate after {@code found} of {@code trials}: the Clopper–Pearson
+     * bound, the 0.95 quantile of Beta(found + 1, trials − found) (Clopper &amp; Pearson 1934, Biometrika 26,
+     * 404 [memory]); 1 − 0.05^(1/N) for none found.
+     */
+    static double upperBound95(double rate, int trials) {
+        int found = (int) Math.round(rate * trials);
+        return found == trials ? 1.0
+                : new BetaDistribution(found + 1, trials - found).inverseCumulativeProbability(0.95);
+    }
 
     static double alphaRate(AlphaScenario s, int trials, long seed) {
         double[] clean = s.currents();
@@ -33,38 +41,50 @@ class AlphaSelectionTest {
     }
 
     @Test
-    void shouldUseTheChiSquaredQuantileOfThreeDegreesAtOnePercent() {
-        // χ²(3) at 0.99: 11.345 (Abramowitz & Stegun Table 26.8 [memory]; Hipparchus computes it)
-        assertEquals(11.345, new AlphaSelection(3).threshold(), 1e-3);
+    void shouldUseTheChiSquaredQuantileOfThreeDegreesAtTheCalibratedLevel() {
+        // χ²(3) at 0.999: 16.266 (Abramowitz & Stegun Table 26.8 [memory]; Hipparchus computes it); the nominal
+        // level is the 1 % target over the trials factor 10 (AlphaSelection class note)
+        assertEquals(0.001, AlphaSelection.TEST_LEVEL, 1e-15);
+        assertEquals(16.266, new AlphaSelection(3).threshold(), 1e-3);
+    }
+
+    @Test
+    void shouldBoundTheRateOfNoneInAThousandByTheClosedForm() {
+        // closed form: 1 − 0.05^(1/1000) = 2.991e-3 (the 0.95 quantile of Beta(1, 1000))
+        assertEquals(1 - Math.pow(0.05, 1e-3), upperBound95(0, TRIALS), 1e-9);
     }
 
     @Test
     void shouldFindAlphasInAtMostOnePercentOfAlphaFreeSpectraNearTheSun() {
         double rate = alphaRate(AlphaScenario.nearSun(0).focus(), TRIALS, SEED);
-        System.out.printf("false alarms near the Sun: %.2f %%%n", 100 * rate);
-        assertTrue(rate <= FALSE_ALARM_LIMIT, "false-alarm rate " + rate);
+        double upper = upperBound95(rate, TRIALS);
+        System.out.printf("false alarms near the Sun: %.2f %% (95 %% upper bound %.2f %%)%n", 100 * rate, 100 * upper);
+        // measured 0.3 % (3 of 1000), upper bound 0.77 % (before the calibration: 0.5 % at a nominal 1 %)
+        assertTrue(upper <= AlphaSelection.FALSE_ALARM_RATE, "false-alarm rate " + rate + ", upper bound " + upper);
     }
 
     @Test
     void shouldFindAlphasInAtMostOnePercentOfAlphaFreeSpectraAtOneAu() {
         double rate = alphaRate(AlphaScenario.oneAu(0).focus(), TRIALS, SEED + 1);
-        System.out.printf("false alarms at 1 AU: %.2f %%%n", 100 * rate);
-        assertTrue(rate <= FALSE_ALARM_LIMIT, "false-alarm rate " + rate);
+        double upper = upperBound95(rate, TRIALS);
+        System.out.printf("false alarms at 1 AU: %.2f %% (95 %% upper bound %.2f %%)%n", 100 * rate, 100 * upper);
+        // measured 0 of 1000, upper bound 0.30 % (before the calibration: 1.0 % at a nominal 1 %)
+        assertTrue(upper <= AlphaSelection.FALSE_ALARM_RATE, "false-alarm rate " + rate + ", upper bound " + upper);
     }
 
     @Test
-    void shouldDetectAlphasAtFourPercentNearTheSun() {
-        // He/H 1, 2, 4 % (physics.md: 2–4.5 % slow wind, Aellig et al. 2001 [read]); rates reported, only the
-        // robust one asserted
+    void shouldDetectAlphasFromOnePercentNearTheSunAndAtOneAu() {
+        // He/H 1, 2, 4 % (physics.md: 2–4.5 % slow wind, Aellig et al. 2001 [read]). The χ² drop of these
+        // spectra is far above any threshold (about 1.5e3 at He/H 1 % at 1 AU, 2.8e4 near the Sun: measured),
+        // so the calibrated level must not cost detections: at least 95 of 100 at every ratio
         double[] ratios = {0.01, 0.02, 0.04};
-        double nearSun4 = 0;
         for (double r : ratios) {
             double near = alphaRate(AlphaScenario.nearSun(r).focus(), DETECTION_TRIALS, SEED + 2);
             double au = alphaRate(AlphaScenario.oneAu(r).focus(), DETECTION_TRIALS, SEED + 3);
             System.out.printf("detection at He/H %.0f %%: near the Sun %.1f %%, at 1 AU %.1f %%%n", 100 * r,
                     100 * near, 100 * au);
-            nearSun4 = near;
+            assertTrue(near >= 0.95, "detection at " + r + " near the Sun " + near);
+            assertTrue(au >= 0.95, "detection at " + r + " at 1 AU " + au);
         }
-        assertTrue(nearSun4 >= 0.9, "detection at 4 % near the Sun " + nearSun4);
     }
 }
