@@ -44,9 +44,7 @@ final class EvaluateCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        if (!instrument.resolve()) {
-            return 2;
-        }
+        instrument.resolve();
         if (!(seconds > 0) || seeds < 1 || threads < 1) {
             System.err.println("--seconds must be positive, --seeds and --threads at least 1");
             return 2;
