@@ -3,6 +3,7 @@ package dev.sweepline.fsw.sweep;
 import dev.sweepline.fsw.DemoCup;
 import dev.sweepline.fsw.link.SampleReply;
 import dev.sweepline.fsw.link.StepCommand;
+import dev.sweepline.fsw.table.SweepParameters;
 import dev.sweepline.fsw.table.WindowTable;
 import java.util.concurrent.TimeUnit;
 import org.openjdk.jmh.annotations.Benchmark;
@@ -10,6 +11,7 @@ import org.openjdk.jmh.annotations.BenchmarkMode;
 import org.openjdk.jmh.annotations.Level;
 import org.openjdk.jmh.annotations.Mode;
 import org.openjdk.jmh.annotations.OutputTimeUnit;
+import org.openjdk.jmh.annotations.Param;
 import org.openjdk.jmh.annotations.Scope;
 import org.openjdk.jmh.annotations.Setup;
 import org.openjdk.jmh.annotations.State;
@@ -20,7 +22,8 @@ import org.openjdk.jmh.annotations.TearDown;
  * replies of a 1 AU slow-wind spectrum (physics.md worked case P1 plasma, He/H 4 %, 2 counts of
  * noise baked in at set-up). The loop runs survey -&gt; focus -&gt; re-survey every K, so the cost of
  * the sweep analysis at every sweep end is amortised in the mean as it is in flight.
- * Target (issue 2): mean &lt;= 1 us, 0 B/op under {@code -prof gc}.
+ * Target (issue 2): mean &lt;= 1 us, 0 B/op under {@code -prof gc}; in both focus styles
+ * ({@code focusStyle} 1: the design style of sweep design note R21, with a budget and a quick survey).
  */
 @State(Scope.Thread)
 @BenchmarkMode(Mode.AverageTime)
@@ -32,6 +35,10 @@ public class SchedulerStepBenchmark {
     private final SampleReply reply = new SampleReply();
     private long nowMicros;
     private final SweepCounter counter = new SweepCounter();
+
+    /** Focus style (SweepParameters.FOCUS_STYLE_BAND or FOCUS_STYLE_DESIGN). */
+    @Param({"0", "1"})
+    public int focusStyle;
 
     /** Counts sweeps per mode without allocating (the benchmark checks that it measured both modes). */
     static final class SweepCounter implements SweepListener {
@@ -54,8 +61,13 @@ public class SchedulerStepBenchmark {
         WindowTable table = DemoCup.table();
         SyntheticInstrument plasma = new SyntheticInstrument(20261201L);
         canned = new CannedReplies(table, plasma);
-        scheduler = new SweepScheduler(DemoCup.INSTRUMENT, table, DemoCup.parameters(), counter);
+        scheduler = new SweepScheduler(DemoCup.INSTRUMENT, table, parameters(focusStyle), counter);
         scheduler.nextStep(step, nowMicros);
+    }
+
+    /** The demo cup's parameters in {@code style}; the design style of the tests' Fixtures (400 ms budget, margin 1, quick survey). */
+    static SweepParameters parameters(int style) {
+        return style == SweepParameters.FOCUS_STYLE_DESIGN ? Fixtures.designStyle() : DemoCup.parameters();
     }
 
     /** Fails the run if the loop did not go survey -&gt; focus (a benchmark that checks its result). */

@@ -13,33 +13,40 @@ import dev.sweepline.fsw.table.WindowTable;
  *
  * <pre>
  *   0   2  marker 0x5354 ("ST")
- *   2   1  format version 1
+ *   2   1  format version v: 1 or 2
  *   3   1  reserved, 0
- *   4   2  image length L = 138 + 4 n, octets, CRC included
+ *   4   2  image length L = 138 + 4 n (v 1) or 154 + 4 n (v 2), octets, CRC included
  *   6   2  window count n (1..256)
  *   8  76  sweep parameters, 19 signed 32-bit values (order in commands.md §4.1)
  *  84   2  housekeeping period, seconds (1..3600)
  *  86   2  spectrum decimation (1..256)
  *  88  48  fault settings, monitors 1..6: response (1), retries (1), threshold (2), limit (4)
  * 136  4n  windows: low code (2), high code (2)
+ * 136+4n 16  v 2 only: focusStyle, focusBudgetMicros, robustnessMarginWindows, surveyIntegrationPeriods (signed 32-bit)
  * L-2   2  CRC-16/IBM-3740 over octets 0 .. L-3
  * </pre>
  *
- * The table id is the CRC. Decoding is allocation-free and never throws on bad bytes.
+ * The table id is the CRC. An image is written in version 1 when its styles are the defaults (so
+ * every version-1 table keeps its bytes and its id) and in version 2 otherwise; a version-1 image
+ * decodes with the default styles. Decoding is allocation-free and never throws on bad bytes.
  */
 public final class TableImage {
     /** Marker "ST". */
     public static final int MARKER = 0x5354;
-    /** Format version. */
+    /** Format version of an image with the default styles. */
     public static final int VERSION = 1;
+    /** Format version of an image that carries the styles (the extension after the windows). */
+    public static final int VERSION_STYLES = 2;
     /** Octets before the windows. */
     public static final int WINDOWS_AT = 136;
-    /** Octets of the image besides the windows (header, values, CRC). */
+    /** Octets of a version-1 image besides the windows (header, values, CRC). */
     public static final int FIXED_OCTETS = WINDOWS_AT + 2;
-    /** Shortest image (one window). */
+    /** Octets of the version-2 extension: four signed 32-bit style values. */
+    public static final int STYLE_OCTETS = 16;
+    /** Shortest image (one window, version 1). */
     public static final int MIN_OCTETS = FIXED_OCTETS + 4;
-    /** Longest image ({@link WindowTable#CAPACITY} windows). */
-    public static final int MAX_OCTETS = FIXED_OCTETS + 4 * WindowTable.CAPACITY;
+    /** Longest image ({@link WindowTable#CAPACITY} windows, version 2). */
+    public static final int MAX_OCTETS = FIXED_OCTETS + STYLE_OCTETS + 4 * WindowTable.CAPACITY;
     /** {@link #decode} result: the image is not intact (marker, version, length or CRC). */
     public static final int CORRUPT = -1;
 
@@ -52,9 +59,14 @@ public final class TableImage {
     private TableImage() {
     }
 
-    /** Image length for {@code windows} windows. */
+    /** Image length for {@code windows} windows in version 1. */
     public static int length(int windows) {
         return FIXED_OCTETS + 4 * windows;
+    }
+
+    /** Image length for {@code windows} windows in format {@code version} (1 or 2). */
+    public static int length(int windows, int version) {
+        return length(windows) + (version == VERSION_STYLES ? STYLE_OCTETS : 0);
     }
 
     /** The table id (CRC) of an image of {@code length} octets, as stored in its last two octets. */
@@ -73,8 +85,10 @@ public final class TableImage {
             return false;
         }
         int n = Telecommand.u16(b, 6);
-        return Telecommand.u16(b, 0) == MARKER && (b[2] & 0xFF) == VERSION && Telecommand.u16(b, 4) == length
-            && n >= 1 && n <= WindowTable.CAPACITY && length(n) == length
+        int version = b[2] & 0xFF;
+        return Telecommand.u16(b, 0) == MARKER && (version == VERSION || version == VERSION_STYLES)
+            && Telecommand.u16(b, 4) == length
+            && n >= 1 && n <= WindowTable.CAPACITY && length(n, version) == length
             && Crc16.of(b, 0, length - 2) == Telecommand.u16(b, length - 2);
     }
 
@@ -97,6 +111,7 @@ public final class TableImage {
             into.dacHigh[w] = Telecommand.u16(b, WINDOWS_AT + 4 * w + 2);
         }
         readParameters(b, into.sweep);
+        readStyles(b, (b[2] & 0xFF) == VERSION_STYLES ? WINDOWS_AT + 4 * n : -1, into.sweep);
         into.housekeepingSeconds = Telecommand.u16(b, HOUSEKEEPING_AT);
         into.spectrumDecimation = Telecommand.u16(b, DECIMATION_AT);
         for (int m = 1; m <= FaultMonitorId.COUNT; m++) {
@@ -137,9 +152,10 @@ public final class TableImage {
      * @return the image length
      */
     public static int encode(ParameterTable t, byte[] b) {
-        int length = length(t.windowCount);
+        int version = t.sweep.defaultStyles() ? VERSION : VERSION_STYLES;
+        int length = length(t.windowCount, version);
         put16(b, 0, MARKER);
-        b[2] = VERSION;
+        b[2] = (byte) version;
         b[3] = 0;
         put16(b, 4, length);
         put16(b, 6, t.windowCount);
@@ -156,6 +172,13 @@ public final class TableImage {
         for (int w = 0; w < t.windowCount; w++) {
             put16(b, WINDOWS_AT + 4 * w, t.dacLow[w]);
             put16(b, WINDOWS_AT + 4 * w + 2, t.dacHigh[w]);
+        }
+        if (version == VERSION_STYLES) {
+            int i = WINDOWS_AT + 4 * t.windowCount;
+            put32(b, i, t.sweep.focusStyle);
+            put32(b, i + 4, t.sweep.focusBudgetMicros);
+            put32(b, i + 8, t.sweep.robustnessMarginWindows);
+            put32(b, i + 12, t.sweep.surveyIntegrationPeriods);
         }
         put16(b, length - 2, Crc16.of(b, 0, length - 2));
         return length;
@@ -182,6 +205,14 @@ public final class TableImage {
         p.significanceSigmas = s32(b, i + 64);
         p.prominenceFractionQ8 = s32(b, i + 68);
         p.focusEnabled = s32(b, i + 72);
+    }
+
+    /** The styles from the extension at {@code at}, or the defaults when {@code at} is negative (version 1). */
+    private static void readStyles(byte[] b, int at, SweepParameters p) {
+        p.focusStyle = at < 0 ? SweepParameters.FOCUS_STYLE_BAND : s32(b, at);
+        p.focusBudgetMicros = at < 0 ? 0 : s32(b, at + 4);
+        p.robustnessMarginWindows = at < 0 ? 0 : s32(b, at + 8);
+        p.surveyIntegrationPeriods = at < 0 ? 0 : s32(b, at + 12);
     }
 
     private static void writeParameters(SweepParameters p, byte[] b) {

@@ -11,7 +11,6 @@ import dev.sweepline.fsw.sweep.Spectrum;
 import dev.sweepline.fsw.sweep.SweepListener;
 import dev.sweepline.fsw.sweep.SweepMode;
 import dev.sweepline.fsw.sweep.SweepScheduler;
-import dev.sweepline.fsw.table.SweepParameters;
 
 /**
  * Where the scheduler's callbacks go in the flight software: fault protection sees every sample and
@@ -27,7 +26,6 @@ final class SweepRouting implements SweepListener {
     private final SpectrumTelemetry spectra;
     private final EventWriter events;
     private final SweepListener observer;
-    private final SweepParameters active = new SweepParameters();
     private int spectrumDecimation;
     /** Id of the table the scheduler sweeps with now. */
     private int sweepTableId;
@@ -89,8 +87,7 @@ final class SweepRouting implements SweepListener {
             int flags = tableChangedFlag ? SpectrumLayout.FLAG_TABLE_CHANGED : 0;
             tableChangedFlag = false;
             if (ofMode % spectrumDecimation == 0) {
-                scheduler.activeParameters(active);
-                spectra.write(spectrum, active.integrationPeriods, sweepTableId, flags, nowMicros);
+                spectra.write(spectrum, spectrum.integrationPeriods(), sweepTableId, flags, nowMicros);
             }
         }
         faults.onSweepComplete(spectrum);

@@ -6,13 +6,15 @@ import dev.sweepline.fsw.table.WindowTable;
 /**
  * The focus band and the reference peak it was chosen from (sweep design note, R6 and R10).
  * Band = refined peak window +/- max(minHalfWidth, FWHM * halfWidthPerFwhm), at most maxBandWindows
- * wide, clipped (not shifted) to the table. Loss of lock compares each focus spectrum with the
+ * wide, clipped (not shifted) to the table; in the design style the half-width is the design table's
+ * for the measured FWHM plus the robustness margin (R21, {@link FocusDesign}). Loss of lock compares each focus spectrum with the
  * reference peak: no peak, current collapse, peak on an unclipped edge, peak jump (including a jump
  * to about the alpha ratio). A peak on an edge first turns the band into an edge search (R18).
  */
 final class FocusBand {
     private final int[] centreCode;
     private final SweepParameters params;
+    private final FocusDesign design;
 
     private boolean valid;
     private int first;
@@ -24,10 +26,12 @@ final class FocusBand {
     /**
      * @param centreCode the active table's centre codes (owned and kept current by the scheduler)
      * @param params     the active parameters (owned and kept current by the scheduler)
+     * @param design     the design table of the active parameters (kept current by the scheduler)
      */
-    FocusBand(int[] centreCode, SweepParameters params) {
+    FocusBand(int[] centreCode, SweepParameters params, FocusDesign design) {
         this.centreCode = centreCode;
         this.params = params;
+        this.design = design;
     }
 
     /** Forgets the band (new table, or no lock). */
@@ -53,15 +57,21 @@ final class FocusBand {
     /** Chooses the band from an analysed spectrum with a valid peak, in a table of {@code windowCount}. */
     void choose(Spectrum s, int windowCount) {
         int centre = (s.peakWindowQ8() + 128) >> 8;
-        long fromFwhm = ((long) s.fwhmWindowsQ8() * params.halfWidthPerFwhmQ8 + (1 << 15)) >> 16;
-        int half = (int) Math.max(params.minHalfWidthWindows, Math.min(fromFwhm, WindowTable.CAPACITY));
-        half = Math.min(half, (params.maxBandWindows - 1) / 2);
+        int half = params.focusStyle == SweepParameters.FOCUS_STYLE_DESIGN ? design.halfWidth(s.fwhmWindowsQ8(), params)
+                : bandHalfWidth(s.fwhmWindowsQ8());
         first = Math.max(0, centre - half);
         last = Math.min(windowCount - 1, centre + half);
         referencePeakQ8 = s.peakWindowQ8();
         referencePeakUnits = s.peakCurrentUnits();
         valid = true;
         searching = false;
+    }
+
+    /** The band style's half-width: FWHM * halfWidthPerFwhm, within the band limits. */
+    private int bandHalfWidth(int fwhmWindowsQ8) {
+        long fromFwhm = ((long) fwhmWindowsQ8 * params.halfWidthPerFwhmQ8 + (1 << 15)) >> 16;
+        int half = (int) Math.max(params.minHalfWidthWindows, Math.min(fromFwhm, WindowTable.CAPACITY));
+        return Math.min(half, (params.maxBandWindows - 1) / 2);
     }
 
     /** True while the band is an edge search (the peak ran out of the last band). */

@@ -49,6 +49,7 @@ public final class Spectrum {
     private int argmaxIndex = -1;
     private int peakWindowQ8;
     private int fwhmWindowsQ8;
+    private int integrationPeriods;
 
     /** An empty spectrum for sweeps of {@code instrument}. */
     public Spectrum(InstrumentDescription instrument) {
@@ -160,6 +161,16 @@ public final class Spectrum {
     /** Current of the proton peak entry, range-0 units (0 when no peak). */
     public long peakCurrentUnits() {
         return peakIndex >= 0 ? currentUnits[peakIndex] : 0;
+    }
+
+    /** Modulation periods integrated per window in this sweep (every step of a sweep has the same dwell). */
+    public int integrationPeriods() {
+        return integrationPeriods;
+    }
+
+    /** Sets the sweep's dwell (by the scheduler, after {@link #begin}). */
+    void integrationPeriods(int periods) {
+        integrationPeriods = periods;
     }
 
     /** Starts a new sweep over windows first..first+count-1; every entry starts as missing. */

@@ -32,6 +32,7 @@ public final class SweepScheduler {
     private final GainPredictor gain;
     private final PeakFinder peakFinder;
     private final FocusBand band;
+    private final FocusDesign design;
     private final DecisionHash hash = new DecisionHash();
     private final StepCommand lastStep = new StepCommand();
 
@@ -43,6 +44,7 @@ public final class SweepScheduler {
     private boolean sweepActive;
     private int sweepFirst;
     private int sweepSteps;
+    private int sweepPeriods;
     private boolean sweepAscending;
     private int stepsIssued;
     private int awaitingWindow = NO_WINDOW;
@@ -78,9 +80,11 @@ public final class SweepScheduler {
         this.building = new Spectrum(instrument);
         this.completed = new Spectrum(instrument);
         this.peakFinder = new PeakFinder(config.centreCode, this.params, instrument.rangeRatioShift());
-        this.band = new FocusBand(config.centreCode, this.params);
+        this.design = new FocusDesign(instrument);
+        this.band = new FocusBand(config.centreCode, this.params, design);
         gain.reset(config.windowCount());
         gain.configure(this.params);
+        design.configure(this.params);
     }
 
     /**
@@ -124,7 +128,7 @@ public final class SweepScheduler {
         out.dacHigh = high;
         out.gainRange = range;
         out.settleMicros = (int) Math.min(Integer.MAX_VALUE, settle);
-        out.integrationPeriods = params.integrationPeriods;
+        out.integrationPeriods = sweepPeriods;
         out.hvEnabled = hvPermitted; // the host's HV permission (arm-then-fire on a real bench)
         lastStep.copyFrom(out);
         hvLowCode = low;
@@ -177,11 +181,17 @@ public final class SweepScheduler {
         int toFirst = Math.max(Math.abs(dacLow[first] - hvLowCode), Math.abs(dacHigh[first] - hvHighCode));
         int toLast = Math.max(Math.abs(dacLow[last] - hvLowCode), Math.abs(dacHigh[last] - hvHighCode));
         sweepAscending = toFirst <= toLast;
+        int start = sweepAscending ? first : last;
         sweepFirst = first;
         sweepSteps = last - first + 1;
+        sweepPeriods = survey ? FocusDesign.surveyPeriods(params)
+                : params.focusStyle == SweepParameters.FOCUS_STYLE_DESIGN ? design.focusPeriods(params, dacLow, dacHigh,
+                        first, last, SettleTime.micros(params, hvLowCode, hvHighCode, dacLow[start], dacHigh[start]))
+                : params.integrationPeriods;
         stepsIssued = 0;
         awaitingWindow = NO_WINDOW;
         building.begin(sweepNumber + 1, mode, first, sweepSteps, sweepAscending, nowMicros);
+        building.integrationPeriods(sweepPeriods);
         sweepActive = true;
     }
 
@@ -322,6 +332,7 @@ public final class SweepScheduler {
         }
         if ((changed & ActiveConfiguration.PARAMETERS_CHANGED) != 0) {
             gain.configure(params);
+            design.configure(params);
         }
         if ((changed & ActiveConfiguration.TABLE_CHANGED) != 0) {
             gain.reset(config.windowCount());
@@ -415,6 +426,11 @@ public final class SweepScheduler {
     /** The active value of a parameter set (a copy into {@code into}, allocation-free). */
     public void activeParameters(SweepParameters into) {
         into.copyFrom(params);
+    }
+
+    /** True when the last step of a sweep was issued: its reply completes the sweep (benchmarks, tests). */
+    boolean lastStepOfSweepIssued() {
+        return sweepActive && stepsIssued == sweepSteps;
     }
 
     /** True when a step has been issued and its reply not yet ingested. */

@@ -13,6 +13,14 @@ public final class SweepParameters {
     public static final int MAX_FIXED_SETTLE_MICROS = 100_000;
     /** Upper limit of {@link #settleMicrosPerCodeQ8}: 16 us per code (design limit). */
     public static final int MAX_SETTLE_MICROS_PER_CODE_Q8 = 16 * 256;
+    /** {@link #focusStyle}: the band of {@link #halfWidthPerFwhmQ8} FWHM either side of the peak at the table's dwell. */
+    public static final int FOCUS_STYLE_BAND = 0;
+    /** {@link #focusStyle}: the band of the D-optimal design table (FocusDesign) and a dwell from {@link #focusBudgetMicros}. */
+    public static final int FOCUS_STYLE_DESIGN = 1;
+    /** Upper limit of {@link #focusBudgetMicros}: 10 s (design limit: a focus sweep far longer than the wind's changes teaches little). */
+    public static final int MAX_FOCUS_BUDGET_MICROS = 10_000_000;
+    /** Upper limit of {@link #robustnessMarginWindows} (design limit: a quarter of the table capacity). */
+    public static final int MAX_ROBUSTNESS_MARGIN_WINDOWS = 64;
     /** V_alpha / V_p at equal speed = m_alpha / (2 m_p) = 1.986300 (physics.md, alpha particles), Q16. */
     public static final int ALPHA_RATIO_1_986300_Q16 = 130_174;
 
@@ -61,6 +69,21 @@ public final class SweepParameters {
     public int significanceSigmas;
     /** A local maximum is a separate peak when its prominence exceeds this fraction of its height, Q8. */
     public int prominenceFractionQ8;
+    /** How focus bands are chosen: {@link #FOCUS_STYLE_BAND} (the default) or {@link #FOCUS_STYLE_DESIGN}. */
+    public int focusStyle;
+    /**
+     * Design style: the sweep-time budget of a focus sweep, microseconds; the dwell of each window is
+     * the most whole modulation periods that fit it, never fewer than {@link #integrationPeriods}
+     * (0: always {@link #integrationPeriods}). Ignored in band style.
+     */
+    public int focusBudgetMicros;
+    /** Design style: windows added on each side of the design's half-width, for the peak's motion between sweeps. */
+    public int robustnessMarginWindows;
+    /**
+     * Survey style: 0 surveys at {@link #integrationPeriods}; else a quick survey at this dwell,
+     * 1..{@link #integrationPeriods} modulation periods per window.
+     */
+    public int surveyIntegrationPeriods;
 
     /**
      * The flight defaults of the tunables that are no instrument fact (values and reasons in the field
@@ -117,6 +140,16 @@ public final class SweepParameters {
         noiseCountsPerQuadrant = other.noiseCountsPerQuadrant;
         significanceSigmas = other.significanceSigmas;
         prominenceFractionQ8 = other.prominenceFractionQ8;
+        focusStyle = other.focusStyle;
+        focusBudgetMicros = other.focusBudgetMicros;
+        robustnessMarginWindows = other.robustnessMarginWindows;
+        surveyIntegrationPeriods = other.surveyIntegrationPeriods;
+    }
+
+    /** True when the focus and survey styles are today's (table image version 1 holds this set). */
+    public boolean defaultStyles() {
+        return focusStyle == FOCUS_STYLE_BAND && focusBudgetMicros == 0 && robustnessMarginWindows == 0
+            && surveyIntegrationPeriods == 0;
     }
 
     /**
@@ -162,6 +195,12 @@ public final class SweepParameters {
         if (noiseCountsPerQuadrant < 0 || noiseCountsPerQuadrant > 4096 || significanceSigmas < 1
             || significanceSigmas > 100 || prominenceFractionQ8 < 0 || prominenceFractionQ8 > 256) {
             return TableStatus.BAD_NOISE;
+        }
+        if ((focusStyle != FOCUS_STYLE_BAND && focusStyle != FOCUS_STYLE_DESIGN)
+            || focusBudgetMicros < 0 || focusBudgetMicros > MAX_FOCUS_BUDGET_MICROS
+            || robustnessMarginWindows < 0 || robustnessMarginWindows > MAX_ROBUSTNESS_MARGIN_WINDOWS
+            || surveyIntegrationPeriods < 0 || surveyIntegrationPeriods > integrationPeriods) {
+            return TableStatus.BAD_STYLE;
         }
         return TableStatus.OK;
     }

@@ -3,23 +3,28 @@ package dev.sweepline.fsw.sweep;
 import dev.sweepline.fsw.DemoCup;
 import dev.sweepline.fsw.link.SampleReply;
 import dev.sweepline.fsw.link.StepCommand;
-import org.junit.jupiter.api.Test;
+import dev.sweepline.fsw.table.SweepParameters;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.ValueSource;
 
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 /**
  * Zero allocation on the step path (architecture.md, determinism: the per-step path allocates
  * nothing): nextStep + ingest + sweep analysis over 10 windows of 10k steps after a 100k warm-up,
- * with the rule of {@link AllocationMeter}. Not timed.
+ * with the rule of {@link AllocationMeter}, in the band style and in the design style with a budget, a
+ * margin and a quick survey (sweep design note R21). Not timed.
  */
 class AllocationTest {
     private long nowMicros;
 
-    @Test
-    void shouldAllocateNothingPerStep() {
+    @ParameterizedTest
+    @ValueSource(ints = {SweepParameters.FOCUS_STYLE_BAND, SweepParameters.FOCUS_STYLE_DESIGN})
+    void shouldAllocateNothingPerStep(int focusStyle) {
         SyntheticInstrument plasma = Fixtures.oneAu(81);
         CannedReplies canned = new CannedReplies(Fixtures.TABLE, plasma);
-        SweepScheduler scheduler = new SweepScheduler(DemoCup.INSTRUMENT, Fixtures.TABLE, DemoCup.parameters(), SweepListener.NONE);
+        SweepParameters p = focusStyle == SweepParameters.FOCUS_STYLE_DESIGN ? Fixtures.designStyle() : DemoCup.parameters();
+        SweepScheduler scheduler = new SweepScheduler(DemoCup.INSTRUMENT, Fixtures.TABLE, p, SweepListener.NONE);
         StepCommand step = new StepCommand();
         SampleReply reply = new SampleReply();
         AllocationMeter.assertAllocationFree(steps -> {

@@ -40,6 +40,16 @@ final class Fixtures {
     }
 
     /** A loop with a recording listener. */
+    /** The demo cup's parameters in the design style (R21): 400 ms focus budget, margin 1, quick survey at 2 periods. */
+    static SweepParameters designStyle() {
+        SweepParameters p = DemoCup.parameters();
+        p.focusStyle = SweepParameters.FOCUS_STYLE_DESIGN;
+        p.focusBudgetMicros = 400_000;
+        p.robustnessMarginWindows = 1;
+        p.surveyIntegrationPeriods = 2;
+        return p;
+    }
+
     static ClosedLoop loop(SyntheticInstrument instrument, SweepParameters p, RecordingListener listener) {
         SweepScheduler scheduler = new SweepScheduler(DemoCup.INSTRUMENT, TABLE, p, listener);
         listener.scheduler = scheduler;

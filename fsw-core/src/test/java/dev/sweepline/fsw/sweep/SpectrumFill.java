@@ -47,6 +47,7 @@ public final class SpectrumFill {
     public static void copy(Spectrum from, Spectrum to) {
         to.begin(from.sweepNumber(), from.mode(), from.firstWindow(), from.count(), from.ascending(),
                 from.startMicros());
+        to.integrationPeriods(from.integrationPeriods());
         SampleReply r = new SampleReply();
         for (int i = 0; i < from.count(); i++) {
             for (int q = 0; q < Q; q++) {

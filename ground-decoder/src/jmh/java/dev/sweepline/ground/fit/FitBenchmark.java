@@ -26,8 +26,13 @@ import org.openjdk.jmh.annotations.Warmup;
  *
  * <p>Run: {@code mvn -q -o -pl ground-decoder -Pjmh verify -DskipTests -Djmh.includes=FitBenchmark
  * -Djmh.args="-f 1 -wi 3 -w 2 -i 5 -r 2"} (with {@code -am} the parent module's exec finds no benchmark
- * list here). Measured on the shared 2-core machine: 14 windows 7.5e3 ± 1.4e4 ops/s (contended), 64
- * windows joint 1109 ± 199 ops/s, 128 windows joint 562 ± 77 ops/s.
+ * list here; offline the exec plugin may be missing: then {@code java -cp <test classpath> org.openjdk.jmh.Main
+ * FitBenchmark}). Measured on the shared 2-core machine: 14 windows 7.5e3 ± 1.4e4 ops/s (contended), 64
+ * windows joint 1109 ± 199 ops/s, 128 windows joint 562 ± 77 ops/s. Measured again at a load average of
+ * 18–25 ({@code -f 1 -wi 2 -w 1 -i 3 -r 1 -prof gc}, figures only good for the allocation): 14 windows 428
+ * ops/s and 54 KB/op (34 KB/op before the constrained alpha component, whose score-screened attempts these
+ * proton spectra pay for), 32 windows 103 ops/s and 104 KB/op, 64 windows joint 49 ops/s and 509 KB/op,
+ * 128 windows joint 32 ops/s and 884 KB/op.
  */
 @State(Scope.Thread)
 @BenchmarkMode(Mode.Throughput)

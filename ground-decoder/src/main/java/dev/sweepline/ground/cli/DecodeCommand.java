@@ -43,6 +43,11 @@ final class DecodeCommand implements Callable<Integer> {
             description = "Downlink allocation to compare the frame bit rate with in report.html.")
     Double allocation;
 
+    @Option(names = "--follow", description = "Follow a growing FILE, or a TCP stream given as FILE = tcp://HOST:PORT, "
+            + "rewriting the products and a self-reloading report.html every " + FollowLoop.REFRESH_SECONDS
+            + " s as frames arrive (a file is followed until Ctrl-C; a TCP stream until the server closes it).")
+    boolean follow;
+
     @Mixin
     StreamOptions options = new StreamOptions();
 
@@ -51,6 +56,10 @@ final class DecodeCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
+        if (follow) {
+            return FollowCommand.follow(spec.positionalParameters().get(0).originalStringValues().get(0), out, tables,
+                    allocation, options, spec.commandLine());
+        }
         Inputs.readable(input);
         DecoderConfig config = options.config();
         WindowCatalogue windows = new WindowCatalogue();

@@ -1,5 +1,6 @@
 package dev.sweepline.ground.cli;
 
+import dev.sweepline.ground.decode.CommandReport;
 import dev.sweepline.ground.decode.DecodeListener;
 import dev.sweepline.ground.decode.EventReport;
 import dev.sweepline.ground.decode.HousekeepingReport;
@@ -89,9 +90,12 @@ final class InspectListing implements DecodeListener {
 
     @Override
     public void onHousekeeping(HousekeepingReport h) {
-        out.printf("    housekeeping mode=%s hv=%s steps=%d replies=%d seqErr=%d timeouts=%d retries=%d%n",
-                ModeNames.of(h.mode()), h.hvEnabled() ? "on" : "off", h.stepsSent(), h.repliesAccepted(),
-                h.sequenceErrors(), h.replyTimeouts(), h.retries());
+        out.printf("    housekeeping mode=%s hv=%s interlock=%s table=0x%04X steps=%d replies=%d seqErr=%d timeouts=%d "
+                + "retries=%d commands accepted=%d rejected=%d failed=%d lastRejection=%s faultTrips=%d%n",
+                ModeNames.of(h.mode()), h.hvEnabled() ? "on" : "off", ModeNames.interlock(h.hvState()), h.tableId(),
+                h.stepsSent(), h.repliesAccepted(), h.sequenceErrors(), h.replyTimeouts(), h.retries(),
+                h.commandsAccepted(), h.commandsRejected(), h.commandFailures(),
+                h.lastRejection() == 0 ? "none" : CommandReport.reasonName(h.lastRejection()), h.faultTrips());
     }
 
     @Override

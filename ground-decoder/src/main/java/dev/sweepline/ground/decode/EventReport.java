@@ -62,7 +62,7 @@ public record EventReport(CucTime time, int sequenceCount, int eventId, int argu
     /** A one-line description for listings. */
     public String describe() {
         if (eventId == MODE_CHANGE) {
-            return "mode change " + ModeNames.of(argumentA) + " -> " + ModeNames.of(argumentB) + " reason " + reasonCode;
+            return "mode change " + ModeNames.of(argumentA) + " -> " + ModeNames.of(argumentB) + " reason " + ModeNames.reason(reasonCode);
         }
         if (eventId == FAULT) {
             return "fault " + monitorName(argumentA) + " response " + responseName(argumentB) + " detail " + reasonCode;

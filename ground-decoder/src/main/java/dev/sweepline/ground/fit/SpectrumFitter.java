@@ -29,6 +29,15 @@ public final class SpectrumFitter {
     /** T_α/T_p at the start of the joint fit: T_α ≈ 4 T_p (physics.md [memory]). */
     public static final double START_ALPHA_TEMPERATURE_RATIO = 4.0;
 
+    /**
+     * Score (Rao) statistic below which the constrained fit is not tried: z = (∂χ²/∂n_α)/(2√F) at n_α = 0,
+     * i.e. how many σ the proton fit's residuals lean toward an alpha component of the prior's shape. Under
+     * H0 z is standard normal, so z ≤ 1 skips 84 % of alpha-free spectra (only lowering the false-alarm
+     * rate) while any alpha current the likelihood-ratio test could accept leaves z well above 1 (common
+     * practice: the score test screens before the likelihood-ratio fit; Rao 1948 [memory]).
+     */
+    static final double MIN_ALPHA_SCORE = 1.0;
+
     /** The test that admits the joint model: the 3 alpha parameters (n_α, U_α, w_α) free, α = 1 %. */
     private static final AlphaSelection FREE_ALPHAS = new AlphaSelection(3);
 
@@ -117,7 +126,7 @@ public final class SpectrumFitter {
             if (free != null) {
                 // a physical free fit: the test alone decides, no second try
                 joint = FREE_ALPHAS.accepts(best.chiSquare(), free.chiSquare()) ? free : null;
-            } else if (coverage != AlphaCoverage.NONE) {
+            } else if (coverage != AlphaCoverage.NONE && alphaScore(in, protonModel, best.parameters()) > MIN_ALPHA_SCORE) {
                 // part of the alphas in the band, or a free fit that put the alpha peak outside it (a drifting
                 // alpha peak just above the top window): the constrained component
                 prior = AlphaPrior.forProtonSpeed(best.parameters()[1]);
@@ -224,6 +233,25 @@ public final class SpectrumFitter {
         boolean sane = alphaRatio > 0 && alphaRatio < MAX_ALPHA_RATIO && q[4] > 0.7 * q[1] && q[4] < 1.5 * q[1]
                 && alphaPeakVolts < max(in.highVolts());
         return sane && finiteErrors(o.covariance()) ? o : null;
+    }
+
+    /**
+     * The score statistic z of an alpha component at the prior's shape (U_α = U_p, T_α = 4 T_p) on the proton
+     * fit's residuals: Σ a_j r_j/σ_j² / √(Σ a_j²/σ_j²), a_j the alpha current per unit density ratio.
+     */
+    private static double alphaScore(SpectrumInput in, PlasmaModel protonModel, double[] p) {
+        double wAlpha = AlphaCoverage.startThermalSpeed(p[2]);
+        double lean = 0;
+        double info = 0;
+        for (int j = 0; j < in.windows(); j++) {
+            double s2 = Math.max(in.sigmaAmps()[j], LeastSquaresRun.MIN_SIGMA_AMPS);
+            s2 *= s2;
+            double a = protonModel.speciesCurrent(Species.ALPHA, j, p[0], p[1], wAlpha);
+            double r = in.totalAmps()[j] - protonModel.speciesCurrent(Species.PROTON, j, p[0], p[1], p[2]);
+            lean += a * r / s2;
+            info += a * a / s2;
+        }
+        return info > 0 ? lean / Math.sqrt(info) : 0;
     }
 
     /**

@@ -27,8 +27,9 @@
  * (0 < n_α/n_p < 0.5, 0.7 U_p < U_α < 1.5 U_p, alpha peak inside the windows). Where the windows hold part
  * of the alphas but not their peak ({@link dev.sweepline.ground.fit.AlphaCoverage}), or the free fit is not
  * physical, the alphas are a constrained component instead: the joint model with the prior rows of {@link
- * dev.sweepline.ground.fit.AlphaPrior} (drift 0 ± 0.1 U_p, T_α/T_p = 4 ± 2), kept by the same test with k
- * the effective number of extra free parameters. (3) The proton angles again, from each species' share of
+ * dev.sweepline.ground.fit.AlphaPrior} (drift 0 ± 0.1 U_p, T_α/T_p = 4 ± 2), tried only when the proton
+ * fit's residuals lean toward such alphas by more than 1σ (a score test), and kept by the same
+ * likelihood-ratio test with k the effective number of extra free parameters. (3) The proton angles again, from each species' share of
  * the quadrant differences ({@link dev.sweepline.ground.fit.SpeciesFlowAngles}), so that drifting alphas
  * do not pull them toward the field. The bulk speed is U_n / cos θ, its 1σ with the angles' 1σ
  * propagated ({@link dev.sweepline.ground.fit.FlowAngles#sigmaBulkSpeed}). Parameters are (ln n, U, ln w)

@@ -28,6 +28,19 @@ final class Png {
         }
     }
 
+    /**
+     * Marks {@code chart} as having no data: an invisible series spans the unit square (XChart draws no
+     * axes without one) and a note in the middle says why it is empty, so no point is drawn at (0, 0).
+     */
+    static void empty(org.knowm.xchart.XYChart chart, String note) {
+        org.knowm.xchart.XYSeries s = chart.addSeries("none", new double[] {0, 1}, new double[] {0, 1});
+        s.setMarker(org.knowm.xchart.style.markers.SeriesMarkers.NONE);
+        s.setLineColor(new java.awt.Color(0, 0, 0, 0));
+        s.setShowInLegend(false);
+        chart.getStyler().setLegendVisible(false);
+        chart.addAnnotation(new org.knowm.xchart.AnnotationText(note, 0.5, 0.5, false));
+    }
+
     /** Finite values only, so that XChart never sees NaN. */
     static boolean finite(double... v) {
         for (double x : v) {

@@ -7,7 +7,7 @@ package dev.sweepline.ground.plot;
  * @param seconds time since start, s
  * @param values  values
  * @param sigma   1σ error bars (NaN: no bar)
- * @param truth   a reference value drawn as a line, NaN for none
+ * @param truth   reference values at the same times, drawn as a line (NaN where none); null for none
  */
-public record TimeSeries(String name, double[] seconds, double[] values, double[] sigma, double truth) {
+public record TimeSeries(String name, double[] seconds, double[] values, double[] sigma, double[] truth) {
 }

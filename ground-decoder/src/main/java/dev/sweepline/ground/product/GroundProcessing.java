@@ -1,18 +1,9 @@
 package dev.sweepline.ground.product;
 
-import com.fasterxml.jackson.databind.ObjectMapper;
-import com.fasterxml.jackson.databind.SerializationFeature;
-import com.fasterxml.jackson.databind.node.ObjectNode;
-import dev.sweepline.ground.decode.DecodeListener;
 import dev.sweepline.ground.decode.DecoderConfig;
-import dev.sweepline.ground.decode.TelemetryDecoder;
-import dev.sweepline.ground.spectrum.Ccsds121QuadrantDecoder;
 import dev.sweepline.ground.spectrum.WindowCatalogue;
-import dev.sweepline.ground.spectrum.DecodedSpectrum;
 import java.io.IOException;
 import java.io.InputStream;
-import java.io.Writer;
-import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.OptionalDouble;
@@ -74,47 +65,22 @@ public final class GroundProcessing {
     /** As above, with the window tables of {@code windows} (uplinked table images, by table id). */
     public static GroundProducts process(Path telemetryFile, Path outDir, OptionalDouble allocationBitsPerS,
             DecoderConfig config, WindowCatalogue windows) throws IOException {
-        Files.createDirectories(outDir);
-        FitCollector fits = new FitCollector();
-        TelemetryDecoder decoder;
-        long octets = 0;
-        try (Writer w = Files.newBufferedWriter(outDir.resolve(SPECTRA), StandardCharsets.UTF_8);
-                SpectraCsvWriter csv = new SpectraCsvWriter(w)) {
-            decoder = new TelemetryDecoder(config, new Ccsds121QuadrantDecoder(), windows, new Both(csv, fits));
+        return process(telemetryFile, outDir, allocationBitsPerS, config, windows, ReportAdditions.NONE);
+    }
+
+    /** As above, with a reference for the moment plots and figures of the caller's own in report.html. */
+    public static GroundProducts process(Path telemetryFile, Path outDir, OptionalDouble allocationBitsPerS,
+            DecoderConfig config, WindowCatalogue windows, ReportAdditions additions) throws IOException {
+        try (GroundSession session = new GroundSession(telemetryFile.toString(), outDir, allocationBitsPerS, config,
+                windows, additions)) {
             byte[] chunk = new byte[CHUNK_OCTETS];
             try (InputStream in = Files.newInputStream(telemetryFile)) {
                 for (int n = in.read(chunk); n >= 0; n = in.read(chunk)) {
-                    decoder.accept(chunk, 0, n);
-                    octets += n;
+                    session.accept(chunk, 0, n);
                 }
             }
-            decoder.finish();
-        }
-        FitSummary summary = FitSummary.of(fits.records(), fits.fitSeconds());
-        BitRates rates = BitRates.of(decoder.stats(), decoder.frameOctets(), allocationBitsPerS.orElse(Double.NaN));
-        ObjectMapper m = new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT);
-        ObjectNode s = SummaryJson.build(m, telemetryFile.toString(), octets, decoder);
-        s.set("fits", MomentsJson.fits(m, summary));
-        m.writeValue(outDir.resolve(SUMMARY).toFile(), s);
-        try (Writer w = Files.newBufferedWriter(outDir.resolve(MOMENTS_CSV), StandardCharsets.UTF_8)) {
-            MomentsCsv.write(w, fits.records());
-        }
-        m.writeValue(outDir.resolve(MOMENTS_JSON).toFile(), MomentsJson.build(m, summary, fits.records()));
-        QuickLook.Plots plots = QuickLook.plots(fits);
-        Files.write(outDir.resolve(SPECTROGRAM_PNG), plots.spectrogram());
-        Files.write(outDir.resolve(MOMENTS_PNG), plots.moments());
-        Files.write(outDir.resolve(SPECTRUM_FIT_PNG), plots.spectrumFit());
-        Files.write(outDir.resolve(REPORT),
-                QuickLook.report(telemetryFile.toString(), octets, decoder, summary, rates, fits, plots));
-        return new GroundProducts(fits.records(), decoder.stats(), summary, rates, outDir);
-    }
-
-    /** Sends spectra to both the CSV writer and the fits. */
-    private record Both(DecodeListener csv, DecodeListener fits) implements DecodeListener {
-        @Override
-        public void onSpectrum(DecodedSpectrum s) {
-            csv.onSpectrum(s);
-            fits.onSpectrum(s);
+            session.finish();
+            return session.write(0);
         }
     }
 }

@@ -4,6 +4,7 @@ import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import dev.sweepline.ground.fit.FitFlag;
+import dev.sweepline.ground.fit.SpeciesMoments;
 import java.util.List;
 
 /**
@@ -48,10 +49,23 @@ public final class MomentsJson {
             num(o, "tK", r.temperatureK());
             num(o, "thetaXDeg", r.thetaXDeg());
             num(o, "thetaYDeg", r.thetaYDeg());
-            num(o, "alphaNPerCc", r.fit().alphas().densityPerM3() * 1e-6);
+            SpeciesMoments p = r.fit().protons();
+            SpeciesMoments al = r.fit().alphas();
+            num(o, "alphaNPerCc", al.densityPerM3() * 1e-6);
+            num(o, "alphaUKmPerS", al.speedMPerS() * 1e-3);
+            num(o, "alphaTK", al.temperatureK());
+            num(o, "sigmaNPerCc", p.sigmaDensityPerM3() * 1e-6);
+            num(o, "sigmaUKmPerS", p.sigmaSpeedMPerS() * 1e-3);
+            num(o, "sigmaTK", p.sigmaTemperatureK());
+            num(o, "sigmaThetaXDeg", Math.toDegrees(r.fit().angles().sigmaThetaXRad()));
+            num(o, "sigmaThetaYDeg", Math.toDegrees(r.fit().angles().sigmaThetaYRad()));
+            num(o, "sigmaAlphaNPerCc", al.sigmaDensityPerM3() * 1e-6);
+            num(o, "sigmaAlphaUKmPerS", al.sigmaSpeedMPerS() * 1e-3);
+            num(o, "sigmaAlphaTK", al.sigmaTemperatureK());
             num(o, "crlbNPerCc", r.crlbDensityPerCc());
             num(o, "crlbUKmPerS", r.crlbSpeedKmPerS());
             num(o, "crlbTK", r.crlbTemperatureK());
+            num(o, "crlbAlphaNPerCc", r.crlbAlphaDensityPerCc());
             num(o, "chi2Reduced", r.fit().reducedChiSquare());
             o.put("flags", r.fit().flagText());
         }

@@ -36,7 +36,7 @@ final class QuickLook {
         return instrument.lsbAmps(0) / 10;
     }
 
-    static Plots plots(FitCollector fits) {
+    static Plots plots(FitCollector fits, ReportAdditions additions) {
         // before any spectrum there is nothing to draw: the demo cup's axes frame the empty plots
         GroundInstrument si = fits.spectrogramInstrument() == null ? BuiltInInstruments.demoCup()
                 : fits.spectrogramInstrument();
@@ -65,8 +65,15 @@ final class QuickLook {
         String[] names = {"proton density n (cm^-3)", "proton speed U (km/s)", "proton temperature T (K)",
             "flow angle theta_x (deg)", "alpha abundance n_a/n_p (%)"};
         List<TimeSeries> series = new ArrayList<>();
+        double[][] truth = additions.truthAtTai() == null ? null : new double[names.length][n];
+        for (int i = 0; truth != null && i < n; i++) {
+            double[] at = additions.truthAtTai().apply(r.get(i).taiSeconds());
+            for (int k = 0; k < names.length; k++) {
+                truth[k][i] = k < at.length ? at[k] : Double.NaN;
+            }
+        }
         for (int k = 0; k < names.length; k++) {
-            series.add(new TimeSeries(names[k], t, v[k], s[k], Double.NaN));
+            series.add(new TimeSeries(names[k], t, v[k], s[k], truth == null ? null : truth[k]));
         }
         byte[] moments = MomentsPlot.render(series, WIDTH, PANEL_HEIGHT);
         byte[] fit = fits.exampleInput() == null
@@ -88,10 +95,24 @@ final class QuickLook {
         return Arrays.asList(c);
     }
 
+    /** A map as "none" when empty, else "key n, key n". */
+    static String counts(Map<?, ?> m) {
+        if (m.isEmpty()) {
+            return "none";
+        }
+        StringBuilder b = new StringBuilder();
+        m.forEach((k, v) -> b.append(b.length() == 0 ? "" : ", ").append(k).append(' ').append(v));
+        return b.toString();
+    }
+
     static byte[] report(String input, long octets, TelemetryDecoder d, FitSummary fits, BitRates rates,
-            FitCollector collector, Plots plots) {
+            FitCollector collector, Plots plots, ReportAdditions additions, int refreshSeconds) {
         DecodeStats s = d.stats();
-        QuickLookReport q = new QuickLookReport("Ground quick-look: " + input);
+        QuickLookReport q = new QuickLookReport("Ground quick-look: " + input).refreshEvery(refreshSeconds);
+        if (refreshSeconds > 0) {
+            q.paragraph("Live: following the stream; this page reloads every " + refreshSeconds + " s ("
+                    + (s.spectraSurvey() + s.spectraFocus()) + " spectra so far).", "ok");
+        }
         long bad = s.framesBad().values().stream().mapToLong(Long::longValue).sum();
         q.heading("Run summary").table(row("item", "value"), List.of(
                 row("input", input + " (" + octets + " octets)"),
@@ -101,17 +122,17 @@ final class QuickLook {
                         + num(rates.spanSeconds(), "%.1f") + " s)"),
                 row("spectra", s.spectraSurvey() + " survey, " + s.spectraFocus() + " focus"),
                 row("spectra by instrument",
-                        s.spectraByInstrument().isEmpty() ? "none" : s.spectraByInstrument().toString()),
+                        counts(s.spectraByInstrument())),
                 row("housekeeping / events", s.housekeeping() + " / " + s.events())));
         List<List<String>> frames = new ArrayList<>();
         frames.add(row("good frames", Long.toString(s.framesGood()) + " (" + s.framesIdle() + " idle)"));
-        frames.add(row("bad frames", Long.toString(bad) + " " + s.framesBad()));
-        frames.add(row("frames dropped by VC count", s.framesDropped().toString()));
+        frames.add(row("bad frames", Long.toString(bad) + " (" + counts(s.framesBad()) + ")"));
+        frames.add(row("frames dropped by VC count", counts(s.framesDropped())));
         frames.add(row("VC count restarts", Long.toString(s.vcRestarts())));
         frames.add(row("VC frame gaps", s.frameGapCount() + " gaps, " + s.vcFramesMissing() + " frames missing"));
         frames.add(row("master-channel frames missing", Long.toString(s.mcFramesMissing())));
         frames.add(row("packet sequence gaps", s.sequenceGapCount() + " gaps, " + s.packetsMissing() + " packets missing"));
-        frames.add(row("spectrum packets rejected", s.spectrumErrors().toString()));
+        frames.add(row("spectrum packets rejected", counts(s.spectrumErrors())));
         q.heading("Frames and gaps").table(row("item", "value"), frames);
         List<List<String>> bits = new ArrayList<>();
         for (Map.Entry<String, Double> e : rates.byApid().entrySet()) {
@@ -120,13 +141,6 @@ final class QuickLook {
         bits.add(row("all packets", num(rates.packets(), "%.1f")));
         bits.add(row("frames incl. ASM (downlink)", num(rates.frames(), "%.1f")));
         q.heading("Bits per second").table(row("stream", "bit/s"), bits);
-        List<List<String>> ops = new ArrayList<>();
-        s.eventsByKind().forEach((kind, n) -> ops.add(row("event " + kind, Long.toString(n))));
-        s.commandReports().forEach((kind, n) -> ops.add(row("command report " + kind, Long.toString(n))));
-        if (ops.isEmpty()) {
-            ops.add(row("events and command reports", "none"));
-        }
-        q.heading("Events and commands").table(row("item", "count"), ops);
         if (Double.isFinite(rates.allocation())) {
             boolean ok = rates.withinAllocation();
             q.paragraph(String.format("Allocation %.1f bit/s: frames use %s bit/s (%s %% of it) - %s.",
@@ -135,6 +149,13 @@ final class QuickLook {
         } else {
             q.paragraph("No allocation given (--allocation BITS_PER_S).", null);
         }
+        List<List<String>> ops = new ArrayList<>();
+        s.eventsByKind().forEach((kind, n) -> ops.add(row("event " + kind, Long.toString(n))));
+        s.commandReports().forEach((kind, n) -> ops.add(row("command report " + kind, Long.toString(n))));
+        if (ops.isEmpty()) {
+            ops.add(row("events and command reports", "none"));
+        }
+        q.heading("Events and commands").table(row("item", "count"), ops);
         List<List<String>> fr = new ArrayList<>();
         fr.add(row("spectra", Integer.toString(fits.spectra())));
         fr.add(row("fitted", fits.fitted() + " (" + num(100 * fits.fitFraction(), "%.1f") + " %)"));
@@ -156,8 +177,15 @@ final class QuickLook {
         q.image("spectrogram", plots.spectrogram(), "Spectrogram: time x E/q window, colour = log10 summed current"
                 + (si == null ? "." : ", on the windows of " + si.label()
                         + (others == 0 ? "." : "; " + others + " spectra of other instruments not shown.")));
-        q.image("moments", plots.moments(), "Proton moments, flow angle and alpha abundance with 1-sigma fit errors.");
-        q.image("spectrum fit", plots.spectrumFit(), "One spectrum with its fit (protons, alphas) and residuals.");
+        q.image("moments", plots.moments(), "Proton moments, flow angle and alpha abundance with 1-sigma fit errors"
+                + (additions.truthAtTai() == null ? "." : "; the grey line is the truth (the simulated plasma)."));
+        q.image("spectrum fit", plots.spectrumFit(), "One spectrum with its fit (protons, alphas) and residuals"
+                + (collector.exampleFit() == null ? "." : "; " + SpectrumFitPlot.fitNote(collector.exampleFit())
+                        + ". Currents below the plot floor are drawn at it; the x-axis title counts those windows."));
+        for (ReportAdditions.Figure f : additions.figures()) {
+            q.heading(f.heading());
+            q.image(f.alt(), f.png(), f.caption());
+        }
         return q.toBytes();
     }
 

@@ -4,7 +4,10 @@
  * java.util.OptionalDouble)} returns {@link dev.sweepline.ground.product.GroundProducts} (the
  * {@link dev.sweepline.ground.product.MomentRecord}s, decode stats, fit counts, bit rates) and writes
  * spectra.csv, summary.json (with a {@code fits} section), moments.csv, moments.json, three PNGs and
- * report.html.
+ * report.html. {@link dev.sweepline.ground.product.GroundSession} is the same processing fed as octets
+ * arrive, writing the products of what has come so far (each file replaced whole); a caller that knows
+ * the truth (the bench) hands {@link dev.sweepline.ground.product.ReportAdditions}: a reference line for
+ * the moment plots and figures of its own.
  *
  * <h2>Design note</h2>
  * <p>{@link dev.sweepline.ground.product.FitCollector} listens to the decoder and fits each spectrum as it
@@ -26,6 +29,9 @@
  *   <li>P4 the report is well-formed XHTML, self-contained, its images decode, Chromium renders it.</li>
  *   <li>P5 layout-2 telemetry of the fine cup is processed with its own description: moments near the truth,
  *       its 256 windows in spectra.csv, its spectrogram ({@code FineCupProcessingTest}).</li>
+ *   <li>P6 empty maps read "none", the allocation sentence follows the bit rates, moments.json carries the
+ *       sigma and alpha fields of moments.csv ({@code ReportContentTest}); plot labels fall on 1-2-5 values
+ *       and an empty series draws no point ({@code PlotLabelsTest}).</li>
  * </ol>
  */
 package dev.sweepline.ground.product;

@@ -19,6 +19,7 @@ public final class QuickLookReport {
 
     private final String title;
     private final List<String> body = new ArrayList<>();
+    private int refreshSeconds;
 
     /** A report with this title. */
     public QuickLookReport(String title) {
@@ -39,6 +40,15 @@ public final class QuickLookReport {
             }
         }
         return b.toString();
+    }
+
+    /**
+     * Asks the browser to reload the page every {@code seconds} (an HTML meta refresh, no script); 0 or
+     * less: never (the default).
+     */
+    public QuickLookReport refreshEvery(int seconds) {
+        refreshSeconds = Math.max(0, seconds);
+        return this;
     }
 
     /** A section heading. */
@@ -101,7 +111,9 @@ public final class QuickLookReport {
     public byte[] toBytes() {
         StringBuilder b = new StringBuilder();
         b.append("<!DOCTYPE html>\n<html xmlns=\"http://www.w3.org/1999/xhtml\" lang=\"en\">\n<head>\n")
-                .append("<meta charset=\"utf-8\" />\n<title>").append(escape(title)).append("</title>\n")
+                .append("<meta charset=\"utf-8\" />\n")
+                .append(refreshSeconds > 0 ? "<meta http-equiv=\"refresh\" content=\"" + refreshSeconds + "\" />\n" : "")
+                .append("<title>").append(escape(title)).append("</title>\n")
                 .append("<style>").append(CSS).append("</style>\n</head>\n<body>\n<h1>").append(escape(title))
                 .append("</h1>\n");
         for (String s : body) {

@@ -11,6 +11,7 @@
  *   <li>R2 well-formed XHTML: parsed with the JDK's XML parser; every image decodes with ImageIO.</li>
  *   <li>R3 it renders: where {@code /usr/bin/chromium} exists, a headless screenshot is not blank
  *       (skipped with a message elsewhere).</li>
+ *   <li>R4 a live report reloads itself by an HTML meta refresh, never a script ({@code FollowTest}).</li>
  * </ol>
  */
 package dev.sweepline.ground.report;

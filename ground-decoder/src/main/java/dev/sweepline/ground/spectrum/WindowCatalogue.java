@@ -12,8 +12,9 @@ import java.util.Map;
 /**
  * The window tables the ground knows, by table id: the built-in table (id 0), which is each
  * instrument's own default table (FORMAT.md {@code windows}), and any uplinked table image registered
- * from its file (commands.md §4.1: marker "ST", length L at offset 4, window count n at offset 6,
- * windows from offset 136 as low/high DAC codes, CRC-16/IBM-3740 of octets 0..L-3 at L-2, which is also
+ * from its file (commands.md §4.1: marker "ST", format version 1 or 2 at offset 2, length L at offset 4
+ * (138 + 4 n in version 1, 154 + 4 n in version 2, whose 16 octets of sweep styles follow the windows),
+ * window count n at offset 6, windows from offset 136 as low/high DAC codes, CRC-16/IBM-3740 of octets 0..L-3 at L-2, which is also
  * the table id). An image holds DAC codes and names no instrument, so its edges are the codes put
  * through the calibration of the instrument whose spectrum asks (telemetry ICD §8). Edges are
  * calibrated volts. Not thread-safe while tables are added.
@@ -22,6 +23,8 @@ public final class WindowCatalogue {
     private static final int MARKER = 0x5354;
     private static final int WINDOWS_AT = 136;
     private static final int MAX_WINDOWS = 256;
+    /** Octets of the version-2 style extension after the windows (commands.md §4.1). */
+    private static final int STYLE_OCTETS = 16;
 
     /** Uplinked tables by id: [0] low codes, [1] high codes. */
     private final Map<Integer, int[][]> uplinked = new HashMap<>();
@@ -41,7 +44,10 @@ public final class WindowCatalogue {
         }
         int length = BigEndian.u16(image, 4);
         int n = BigEndian.u16(image, 6);
-        if (length != image.length || n < 1 || n > MAX_WINDOWS || length != WINDOWS_AT + 2 + 4 * n) {
+        int version = image[2] & 0xFF;
+        int extension = version == 2 ? STYLE_OCTETS : 0;
+        if (length != image.length || n < 1 || n > MAX_WINDOWS || (version != 1 && version != 2)
+            || length != WINDOWS_AT + 2 + 4 * n + extension) {
             return -1;
         }
         int crc = BigEndian.u16(image, length - 2);

@@ -35,6 +35,18 @@ class InspectCommandTest {
         assertTrue(out.contains("spectrum survey sweep=291 windows 40..55 peak=47.500 compression=0 instrument=1 "
                 + "(demo-cup) w=16 layout=1 table=0x0000\n"), out);
         assertTrue(out.contains("packet vc=1 apid=0x110 seq=   45"), out);
+        // housekeeping names the interlock state, the table in force and the command counters (ICD §5)
+        String hk = out.lines().filter(l -> l.contains("housekeeping mode=")).findFirst().orElseThrow();
+        assertTrue(hk.contains(" interlock=") && hk.contains(" table=0x") && hk.contains(" commands accepted="), hk);
+    }
+
+    @Test
+    void shouldNameModeChangeReasonsAndInterlockStatesAsTheIcdDoes() {
+        // telemetry ICD §6, event 1: reason 5 peak jump, 12 fault response; §5: interlock 1 armed
+        assertEquals("PEAK_JUMP", dev.sweepline.ground.decode.ModeNames.reason(5));
+        assertEquals("FAULT_RESPONSE", dev.sweepline.ground.decode.ModeNames.reason(12));
+        assertEquals("reason 99", dev.sweepline.ground.decode.ModeNames.reason(99));
+        assertEquals("armed", dev.sweepline.ground.decode.ModeNames.interlock(1));
     }
 
     @Test

@@ -14,14 +14,31 @@ import org.junit.jupiter.api.Test;
 class WindowCatalogueTest {
     /** A two-window image built from commands.md §4.1 (marker, length, n, windows at 136, CRC last). */
     private static byte[] image() {
+        return image(1);
+    }
+
+    /** As {@link #image()} in format {@code version}: version 2 has 16 octets of styles after the windows (§4.1). */
+    private static byte[] image(int version) {
         int n = 2;
-        int length = 136 + 4 * n + 2;
+        int length = 136 + 4 * n + 2 + (version == 2 ? 16 : 0);
         ByteBuffer b = ByteBuffer.allocate(length);
-        b.putShort(0, (short) 0x5354).put(2, (byte) 1).putShort(4, (short) length).putShort(6, (short) n);
+        b.putShort(0, (short) 0x5354).put(2, (byte) version).putShort(4, (short) length).putShort(6, (short) n);
+        if (version == 2) {
+            b.putInt(144, 1).putInt(148, 400_000); // focusStyle design, budget 0.4 s (values the catalogue ignores)
+        }
         b.putShort(136, (short) 1000).putShort(138, (short) 1100).putShort(140, (short) 1100).putShort(142, (short) 1200);
         byte[] a = b.array();
         b.putShort(length - 2, (short) Crc16Ibm3740.compute(a, 0, length - 2));
         return a;
+    }
+
+    @Test
+    void shouldLearnTheWindowsOfAVersionTwoImageAndRefuseAnUnknownVersion() {
+        WindowCatalogue c = new WindowCatalogue();
+        int id = c.add(image(2));
+        assertTrue(c.knows(id));
+        assertEquals(0.100150 * 1100 - 0.8, c.lowVolts(id, 1), 1e-12); // ICD §8, the same windows as version 1
+        assertEquals(-1, c.add(image(3))); // commands.md §4.1: versions 1 and 2 only
     }
 
     @Test

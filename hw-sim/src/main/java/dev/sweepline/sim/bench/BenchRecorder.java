@@ -34,6 +34,7 @@ public final class BenchRecorder implements SweepListener, InProcessLink.StepObs
     private final SweepListener next;
     private final List<SweepRecord> sweeps = new ArrayList<>();
     private final Map<String, Integer> modeChanges = new TreeMap<>();
+    private final List<ModeChange> modeChangeLog = new ArrayList<>();
     private long steps;
     private long integrationMicros;
     private long saturatedSamples;
@@ -168,6 +169,7 @@ public final class BenchRecorder implements SweepListener, InProcessLink.StepObs
     @Override
     public void onModeChange(SweepMode from, SweepMode to, int reason, long nowMicros) {
         modeChanges.merge(ModeChangeReason.name(reason), 1, Integer::sum);
+        modeChangeLog.add(new ModeChange(nowMicros, from, to, reason));
         next.onModeChange(from, to, reason, nowMicros);
     }
 
@@ -203,6 +205,15 @@ public final class BenchRecorder implements SweepListener, InProcessLink.StepObs
     /** Sweeps recorded so far, in order. */
     public List<SweepRecord> sweeps() {
         return sweeps;
+    }
+
+    /** A mode change as the scheduler reported it. */
+    public record ModeChange(long atMicros, SweepMode from, SweepMode to, int reason) {
+    }
+
+    /** Every mode change, in order. */
+    public List<ModeChange> modeChangeLog() {
+        return modeChangeLog;
     }
 
     /** Mode changes counted by reason name. */

@@ -92,22 +92,18 @@ public final class GroundCheck {
     /** The fits of {@code records} that have moments and a recorded sweep, each against its truth. */
     public static List<ComparedFit> compared(List<MomentRecord> records, List<SweepRecord> sweeps,
             LongFunction<PlasmaState> truthAt, long coarseAtTickZero) {
-        TreeMap<Long, SweepRecord> byStart = new TreeMap<>();
-        for (SweepRecord r : sweeps) {
-            byStart.put(r.startMicros(), r);
-        }
+        TreeMap<Long, SweepRecord> byStart = byStart(sweeps);
         List<ComparedFit> out = new ArrayList<>();
         for (MomentRecord m : records) {
             if (!m.ok()) {
                 continue;
             }
-            long start = Math.round((m.taiSeconds() - coarseAtTickZero) * 1e6);
-            Map.Entry<Long, SweepRecord> e = byStart.floorEntry(start + 20); // CUC fine: 2^-16 s, truncated
-            if (e == null || start - e.getKey() > 100) {
+            SweepRecord sweep = sweepAt(byStart, m.taiSeconds(), coarseAtTickZero);
+            if (sweep == null) {
                 out.add(null); // fitted, but no sweep of the run to compare it with
                 continue;
             }
-            PlasmaState plasma = truthAt.apply(e.getValue().midMicros());
+            PlasmaState plasma = truthAt.apply(sweep.midMicros());
             IonPopulation p = ProtonInformation.protons(plasma);
             double[] truth = truth(plasma, p);
             double[] fit = {m.densityPerCc(), m.speedKmPerS(), m.temperatureK()};
@@ -121,7 +117,7 @@ public final class GroundCheck {
             int dof = m.fit().windowsUsed() - m.fit().normalParameters().length;
             double chi2 = m.fit().reducedChiSquare();
             out.add(new ComparedFit(r, zz, NonStationarity.flagged(chi2, dof), chi2, dof, m.fit().alphasFitted(),
-                    hasAlphas(plasma), e.getValue().mode()));
+                    hasAlphas(plasma), sweep.mode()));
         }
         return out;
     }
@@ -156,6 +152,22 @@ public final class GroundCheck {
             }
         }
         return false;
+    }
+
+    /** The sweeps by start time, microseconds. */
+    static TreeMap<Long, SweepRecord> byStart(List<SweepRecord> sweeps) {
+        TreeMap<Long, SweepRecord> byStart = new TreeMap<>();
+        for (SweepRecord r : sweeps) {
+            byStart.put(r.startMicros(), r);
+        }
+        return byStart;
+    }
+
+    /** The sweep a spectrum time-tagged {@code taiSeconds} came from, or null. */
+    static SweepRecord sweepAt(TreeMap<Long, SweepRecord> byStart, double taiSeconds, long coarseAtTickZero) {
+        long start = Math.round((taiSeconds - coarseAtTickZero) * 1e6);
+        Map.Entry<Long, SweepRecord> e = byStart.floorEntry(start + 20); // CUC fine: 2^-16 s, truncated
+        return e == null || start - e.getKey() > 100 ? null : e.getValue();
     }
 
     /** n (cm^-3), |U| (km/s), T along the normal (K) of the protons. */

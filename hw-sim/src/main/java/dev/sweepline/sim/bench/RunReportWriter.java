@@ -65,11 +65,32 @@ public final class RunReportWriter {
         t.spectrumBitsPerSecond().forEach((k, v) -> byMode.put(k.name().toLowerCase(Locale.ROOT), round(v, 1)));
         bps.put("spectraByMode", byMode);
         m.put("bitsPerSecond", bps);
+        m.put("virtualChannels", vcMap(t));
         m.put("allocationBitsPerSecond", finite(t.allocationBitsPerSecond()));
         m.put("allocationMargin", finite(round(t.margin(), 4)));
         m.put("frames", t.frames());
         m.put("decisionHash", s.decisionHash());
         return m;
+    }
+
+    /** Per virtual channel: frame and packet bit rates and the fill; with the flush interval. */
+    public static Map<String, Object> vcMap(TelemetryFigures t) {
+        Map<String, Object> m = new LinkedHashMap<>();
+        m.put("flushIntervalSeconds", t.flushIntervalSeconds());
+        t.virtualChannels().forEach((name, v) -> {
+            Map<String, Object> vc = new LinkedHashMap<>();
+            vc.put("frameBitsPerSecond", round(v.frameBitsPerSecond(), 1));
+            vc.put("packetBitsPerSecond", round(v.packetBitsPerSecond(), 1));
+            vc.put("fill", finite(round(v.fill(), 4)));
+            m.put(name, vc);
+        });
+        return m;
+    }
+
+    /** One virtual channel's cost as a sentence: "822 bit/s of frames carry 57 bit/s of packets (7 % full)". */
+    public static String vcLine(TelemetryFigures.VcFill v) {
+        return String.format(Locale.ROOT, "%.0f bit/s of frames carry %.0f bit/s of packets (%.0f %% full)",
+                v.frameBitsPerSecond(), v.packetBitsPerSecond(), 100 * v.fill());
     }
 
     private static List<Map<String, Object>> jumpList(List<Reacquisition> reacquisitions) {
@@ -242,6 +263,9 @@ public final class RunReportWriter {
         row(out, "D-efficiency", String.format(Locale.ROOT, "%.3f of the D-optimal design", s.informationEfficiency()));
         TelemetryFigures t = s.telemetry();
         row(out, "telemetry", String.format(Locale.ROOT, "%.0f bit/s in %d frames", t.frameBitsPerSecond(), t.frames()));
+        t.virtualChannels().forEach((name, v) -> row(out, "  VC " + name, vcLine(v)
+                + (name.equals("engineering") ? String.format(Locale.ROOT, "; %.0f s flush", t.flushIntervalSeconds())
+                        : "")));
         if (!Double.isNaN(t.allocationBitsPerSecond())) {
             row(out, "allocation", String.format(Locale.ROOT, "%.0f bit/s, margin %+.1f %%%s",
                     t.allocationBitsPerSecond(), 100 * t.margin(), t.margin() < 0 ? "  OVER BUDGET" : ""));

@@ -17,9 +17,26 @@ import java.util.Map;
  * @param spectrumBitsPerSecond   spectrum packet bits per second by mode
  * @param allocationBitsPerSecond the allocation; NaN when none was given
  * @param frames                  frames emitted
+ * @param virtualChannels         per virtual channel by name (science, engineering; telemetry ICD §3.3): the
+ *                                frames it sent against the packets they carried
+ * @param flushIntervalSeconds    a frame holding data longer than this is sent part-filled (idle fill)
  */
 public record TelemetryFigures(double frameBitsPerSecond, Map<String, Double> packetBitsPerSecond,
-        Map<SweepMode, Double> spectrumBitsPerSecond, double allocationBitsPerSecond, long frames) {
+        Map<SweepMode, Double> spectrumBitsPerSecond, double allocationBitsPerSecond, long frames,
+        Map<String, VcFill> virtualChannels, double flushIntervalSeconds) {
+
+    /**
+     * How full one virtual channel's frames are.
+     *
+     * @param frameBitsPerSecond  frames of the channel, ASM included: what it costs the downlink
+     * @param packetBitsPerSecond space packets it carried: what it delivers
+     */
+    public record VcFill(double frameBitsPerSecond, double packetBitsPerSecond) {
+        /** Packets over frames: 1 for frames full of packets; NaN without frames. */
+        public double fill() {
+            return frameBitsPerSecond > 0 ? packetBitsPerSecond / frameBitsPerSecond : Double.NaN;
+        }
+    }
 
     /** Allocation minus use, as a fraction of the allocation (negative: over budget); NaN without one. */
     public double margin() {
@@ -40,7 +57,14 @@ public record TelemetryFigures(double frameBitsPerSecond, Map<String, Double> pa
         for (SweepMode m : SweepMode.values()) {
             byMode.put(m, 8.0 * fsw.spectra().octets(m) / seconds);
         }
+        Map<String, VcFill> vcs = new LinkedHashMap<>();
+        vcs.put("science", new VcFill(8.0 * c.frameOctets(Apid.VC_SCIENCE) / seconds,
+                8.0 * (c.packetOctets(Apid.SURVEY_SPECTRUM) + c.packetOctets(Apid.FOCUS_SPECTRUM)) / seconds));
+        vcs.put("engineering", new VcFill(8.0 * c.frameOctets(Apid.VC_ENGINEERING) / seconds,
+                8.0 * (c.packetOctets(Apid.HOUSEKEEPING) + c.packetOctets(Apid.EVENT)
+                        + c.packetOctets(Apid.COMMAND_REPORT)) / seconds));
         return new TelemetryFigures(8.0 * c.frameOctets() / seconds, byApid, byMode,
-                config.allocationBitsPerSecond(), fsw.telemetry().framesEmitted());
+                config.allocationBitsPerSecond(), fsw.telemetry().framesEmitted(), vcs,
+                config.flight().flushIntervalMicros / 1e6);
     }
 }

@@ -2,6 +2,7 @@ package dev.sweepline.sim.budget;
 
 import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.SerializationFeature;
+import dev.sweepline.sim.report.BudgetChart;
 import dev.sweepline.sim.report.Charts;
 import dev.sweepline.sim.report.HtmlReport;
 import java.io.IOException;
@@ -14,7 +15,12 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 
-/** Writes a budget check: {@code budget.json}, {@code hours.csv}, {@code volume.png} and {@code report.html}. */
+/**
+ * Writes a budget check: {@code budget.json}, {@code hours.csv}, {@code volume.png} (cumulative volume),
+ * {@code budget.png} ({@link BudgetChart}: rate against allocation with the phase boundaries and margins,
+ * the store level with the downlink passes) and {@code report.html}, which also says how full each
+ * virtual channel's frames are per phase.
+ */
 public final class BudgetOutput {
     private static final ObjectMapper JSON = new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT);
 
@@ -35,7 +41,9 @@ public final class BudgetOutput {
         }
         byte[] png = volumeChart(r);
         Files.write(dir.resolve("volume.png"), png);
-        report(r, png).write(dir.resolve("report.html"));
+        byte[] budget = budgetChart(r);
+        Files.write(dir.resolve("budget.png"), budget);
+        report(r, png, budget).write(dir.resolve("report.html"));
     }
 
     /** The summary as an ordered map. */
@@ -67,6 +75,16 @@ public final class BudgetOutput {
             sm.put("distanceAu", round(s.distanceAu()));
             sm.put("bitsPerSecond", round(s.bitsPerSecond()));
             sm.put("spectraPerSecond", round(s.spectraPerSecond()));
+            Map<String, Object> vcs = new LinkedHashMap<>();
+            s.virtualChannels().forEach((name, v) -> {
+                Map<String, Object> vc = new LinkedHashMap<>();
+                vc.put("frameBitsPerSecond", round(v.frameBitsPerSecond()));
+                vc.put("packetBitsPerSecond", round(v.packetBitsPerSecond()));
+                vc.put("fill", Double.isFinite(v.fill()) ? round(v.fill()) : null);
+                vcs.put(name, vc);
+            });
+            sm.put("virtualChannels", vcs);
+            sm.put("flushIntervalSeconds", s.flushIntervalSeconds());
             samples.add(sm);
         }
         m.put("samples", samples);
@@ -88,7 +106,52 @@ public final class BudgetOutput {
                 new Charts.Series("generated", t, generated, true), new Charts.Series("allocated", t, allocated, true)));
     }
 
-    private static HtmlReport report(BudgetResult r, byte[] png) {
+    private static byte[] budgetChart(BudgetResult r) throws IOException {
+        List<BudgetChart.Hour> hours = new ArrayList<>();
+        for (BudgetResult.Hour h : r.hours()) {
+            hours.add(new BudgetChart.Hour(h.hour(), h.bitsPerSecond(), h.allocationBitsPerSecond(), h.storeMegabits()));
+        }
+        List<BudgetChart.Phase> phases = new ArrayList<>();
+        for (int i = 0; i < r.phases().size(); i++) {
+            phases.add(new BudgetChart.Phase(r.phases().get(i).name(), r.plan().phases().get(i).startHours(),
+                    r.phases().get(i).margin()));
+        }
+        List<BudgetChart.Pass> passes = new ArrayList<>();
+        r.plan().passes().forEach(p -> passes.add(new BudgetChart.Pass(p.startHours(), p.hours())));
+        return BudgetChart.render(hours, phases, passes, r.plan().storageMegabits());
+    }
+
+    /** Per phase and virtual channel: frames against packets, the mean over the phase's samples. */
+    private static List<List<String>> vcRows(BudgetResult r) {
+        List<List<String>> rows = new ArrayList<>();
+        for (BudgetResult.PhaseBudget p : r.phases()) {
+            Map<String, double[]> sums = new LinkedHashMap<>();
+            int n = 0;
+            double flush = Double.NaN;
+            for (BudgetResult.Sample s : r.samples()) {
+                if (s.phase().equals(p.name())) {
+                    n++;
+                    flush = s.flushIntervalSeconds();
+                    s.virtualChannels().forEach((name, v) -> {
+                        double[] sum = sums.computeIfAbsent(name, k -> new double[2]);
+                        sum[0] += v.frameBitsPerSecond();
+                        sum[1] += v.packetBitsPerSecond();
+                    });
+                }
+            }
+            for (Map.Entry<String, double[]> e : sums.entrySet()) {
+                double frames = e.getValue()[0] / n;
+                double packets = e.getValue()[1] / n;
+                rows.add(List.of(p.name(), e.getKey(), String.format(Locale.ROOT, "%.0f", frames),
+                        String.format(Locale.ROOT, "%.0f", packets),
+                        frames > 0 ? String.format(Locale.ROOT, "%.0f %%", 100 * packets / frames) : "",
+                        String.format(Locale.ROOT, "%.0f s", flush)));
+            }
+        }
+        return rows;
+    }
+
+    private static HtmlReport report(BudgetResult r, byte[] png, byte[] budget) {
         HtmlReport h = new HtmlReport("Bandwidth budget: " + r.plan().name());
         h.paragraph(r.plan().description(), false);
         h.paragraph("Verdict: " + (r.fits() ? "the plan fits its allocations" : "the plan DOES NOT FIT"), true);
@@ -105,6 +168,17 @@ public final class BudgetOutput {
         h.heading("Phases");
         h.table(List.of("phase", "generated Mbit", "allocated Mbit", "margin", "worst hour", "worst rate / allocation"),
                 rows);
+        h.heading("Rate, allocation and store over time");
+        h.image(budget, "telemetry rate against the allocation per phase, and the store level with the downlink passes");
+        h.paragraph("Top: the telemetry rate hour by hour (blue) against each phase's allocation (red, dashed); grey "
+                + "lines mark where each phase starts, labelled with its margin. Bottom: the onboard store's level "
+                + "(blue) against its capacity (red, dashed), the downlink passes shaded green.", false);
+        h.heading("Frame fill per virtual channel");
+        h.table(List.of("phase", "virtual channel", "frames bit/s", "packets bit/s", "full", "flush interval"),
+                vcRows(r));
+        h.paragraph("A frame is sent when it is full or when it has held data for the flush interval, whichever comes "
+                + "first; a channel whose packets trickle in (housekeeping and events on the engineering channel) "
+                + "sends mostly idle fill, and the downlink pays for the whole frame.", false);
         h.heading("Volume over time");
         h.image(png, "cumulative telemetry volume against the allocation");
         h.paragraph("Plasma: scenario '" + r.plan().scenario().name() + "' scaled to each distance (n as r^-2, "

@@ -14,8 +14,15 @@ import java.util.List;
 public record BudgetResult(OrbitPlan plan, List<Sample> samples, List<Hour> hours, List<PhaseBudget> phases,
         List<String> violations) {
 
-    /** One representative closed loop. */
-    public record Sample(String phase, double hours, double distanceAu, double bitsPerSecond, double spectraPerSecond) {
+    /**
+     * One representative closed loop.
+     *
+     * @param virtualChannels      per virtual channel: frames sent against packets carried
+     * @param flushIntervalSeconds the flight software's frame flush interval of the loop
+     */
+    public record Sample(String phase, double hours, double distanceAu, double bitsPerSecond, double spectraPerSecond,
+            java.util.Map<String, dev.sweepline.sim.bench.TelemetryFigures.VcFill> virtualChannels,
+            double flushIntervalSeconds) {
     }
 
     /** One hour of the plan. */

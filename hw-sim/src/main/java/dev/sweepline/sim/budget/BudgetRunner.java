@@ -61,7 +61,8 @@ public final class BudgetRunner {
         RunSummary s = fly(plan, point.phase(), point.distanceAu(), seed).summary();
         double cadence = s.spectraPerSecond().get(SweepMode.SURVEY) + s.spectraPerSecond().get(SweepMode.FOCUS);
         return new BudgetResult.Sample(point.phase().name(), point.hours(), point.distanceAu(),
-                s.telemetry().frameBitsPerSecond(), cadence);
+                s.telemetry().frameBitsPerSecond(), cadence, s.telemetry().virtualChannels(),
+                s.telemetry().flushIntervalSeconds());
     }
 
     /** The closed loop of one point: the default flight software, commanded into the phase's mode at its start. */
@@ -178,15 +179,31 @@ public final class BudgetRunner {
                         plan.storageMegabits(), overfull, fullestHour, fullest));
             }
             if (over > 0) {
-                violations.add(String.format(Locale.ROOT, "phase '%s', hour %d: %.0f bit/s exceeds the allocation of "
-                        + "%.0f bit/s (%d of %.0f hours over; worst hour %d at %.2f x)", phase.name(), firstOver,
-                        rateAt(hours, firstOver), phase.allocationBitsPerSecond(), over, Math.ceil(phase.hours()), worst,
-                        worstRatio));
+                String[] rates = distinct(rateAt(hours, firstOver), phase.allocationBitsPerSecond());
+                violations.add(String.format(Locale.ROOT, "phase '%s', hour %d: %s bit/s exceeds the allocation of "
+                        + "%s bit/s (%d of %.0f hours over; worst hour %d at %.4f x)", phase.name(), firstOver,
+                        rates[0], rates[1], over, Math.ceil(phase.hours()), worst, worstRatio));
             }
             result.add(new BudgetResult.PhaseBudget(phase.name(), generated,
                     phase.allocationBitsPerSecond() * phase.hours() * 3600 / 1e6, worst, worstRatio));
         }
         return result;
+    }
+
+    /**
+     * Two rates with as few decimals (0 to 3) as keep them apart, so that a rate just over its allocation
+     * never reads as equal to it ("7262.4 bit/s exceeds the allocation of 7262.0 bit/s"); closer than
+     * that, every digit (Double.toString).
+     */
+    static String[] distinct(double a, double b) {
+        for (int digits = 0; digits <= 3; digits++) {
+            String x = String.format(Locale.ROOT, "%." + digits + "f", a);
+            String y = String.format(Locale.ROOT, "%." + digits + "f", b);
+            if (!x.equals(y)) {
+                return new String[] {x, y};
+            }
+        }
+        return new String[] {Double.toString(a), Double.toString(b)};
     }
 
     private static double rateAt(List<BudgetResult.Hour> hours, int hour) {

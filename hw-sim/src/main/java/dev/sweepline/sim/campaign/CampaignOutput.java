@@ -112,13 +112,43 @@ public final class CampaignOutput {
         rec.indistinguishable().forEach(s -> tied.add(s.set()));
         summary.put("indistinguishableFromLeader", tied);
         summary.put("recommendationNote", note(rec));
+        List<String> inert = InertAxes.of(spec, rows);
+        summary.put("inertAxes", inert);
         JSON.writeValue(dir.resolve("summary.json").toFile(), summary);
         if (best != null) {
             writeRecommended(dir.resolve("recommended.yaml"), spec, best);
             Files.write(dir.resolve(RECOMMENDED_IMAGE), recommendedImage(spec, best));
         }
-        CampaignReport.write(dir, spec, sets, front, best, note(rec));
+        CampaignReport.write(dir, spec, sets, front, best, note(rec), inert, comparedWith(rec, sets, front));
         return best;
+    }
+
+    /** The grid axes of {@code spec} that changed nothing in {@code rows} ({@link InertAxes}). */
+    public static List<String> inertAxes(CampaignSpec spec, List<RunRow> rows) {
+        return InertAxes.of(spec, rows);
+    }
+
+    /**
+     * The set the report puts beside the recommended one: the leader when the recommendation moved off it
+     * (to a set closer to the default within the noise), else the most accurate other set on the front,
+     * else the most accurate other set; null without a recommendation.
+     */
+    static SetResult comparedWith(Recommendation rec, List<SetResult> sets, List<SetResult> front) {
+        SetResult best = rec.chosen();
+        if (best == null) {
+            return null;
+        }
+        if (rec.leader() != best) {
+            return rec.leader();
+        }
+        for (List<SetResult> pool : List.of(front, sets)) {
+            SetResult other = pool.stream().filter(s -> s != best && Double.isFinite(s.accuracy()))
+                    .min(java.util.Comparator.comparingDouble(SetResult::accuracy)).orElse(null);
+            if (other != null) {
+                return other;
+            }
+        }
+        return null;
     }
 
     private static Map<String, Object> setMap(CampaignSpec spec, SetResult s, boolean onFront) {

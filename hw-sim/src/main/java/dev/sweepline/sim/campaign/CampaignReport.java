@@ -1,7 +1,7 @@
 package dev.sweepline.sim.campaign;
 
-import dev.sweepline.sim.report.Charts;
 import dev.sweepline.sim.report.HtmlReport;
+import dev.sweepline.sim.report.ParetoChart;
 import dev.sweepline.fsw.host.yaml.FileFormatException;
 import java.io.IOException;
 import java.nio.file.Files;
@@ -12,16 +12,20 @@ import java.util.Locale;
 
 /**
  * The campaign's one-file report and its plots: the Pareto front of accuracy against telemetry rate
- * and against cadence ({@code pareto.png}), the table of sets and the recommendation.
+ * (with the allocation) and against cadence ({@code pareto.png}, {@code pareto-cadence.png}), every
+ * point labelled with its set and the recommended set marked; the recommendation; a warning naming
+ * any grid axis that changed nothing ({@link InertAxes}); the recommended set side by side with the
+ * one it is compared with; the table of sets, with the reacquisition after jumps when the scenario has
+ * any.
  */
 final class CampaignReport {
     private CampaignReport() {
     }
 
     static void write(Path dir, CampaignSpec spec, List<SetResult> sets, List<SetResult> front, SetResult best,
-            String recommendationNote) throws IOException {
-        byte[] rate = chart(sets, front, true);
-        byte[] cadence = chart(sets, front, false);
+            String recommendationNote, List<String> inertAxes, SetResult compared) throws IOException {
+        byte[] rate = chart(spec, sets, front, best, true);
+        byte[] cadence = chart(spec, sets, front, best, false);
         Files.write(dir.resolve("pareto.png"), rate);
         Files.write(dir.resolve("pareto-cadence.png"), cadence);
         HtmlReport h = new HtmlReport("Tuning campaign: " + spec.name());
@@ -38,52 +42,59 @@ final class CampaignReport {
                 100 * best.momentError()[2], best.spectraPerSecond(), best.bitsPerSecondMean(),
                 best.informationEfficiency()), true);
         h.paragraph("Within the noise: " + recommendationNote + ".", false);
+        for (String axis : inertAxes) {
+            h.paragraph("Warning: the grid axis " + axis + " changed nothing: every one of its values gave the same "
+                    + "runs (every metric alike for each ensemble member and each combination of the other axes). "
+                    + "The parameter never came into play on this scenario; change its values or the scenario, or "
+                    + "drop the axis.", true);
+        }
         h.heading("Pareto front");
         h.image(rate, "accuracy against telemetry rate, Pareto front marked");
         h.image(cadence, "accuracy against cadence, Pareto front marked");
+        if (best != null && compared != null && compared != best) {
+            h.heading("Side by side: set " + best.set() + " and set " + compared.set());
+            h.table(List.of("", "set " + best.set() + " (recommended)", "set " + compared.set()),
+                    SideBySide.rows(spec, best, compared));
+        }
+        boolean jumps = !spec.base().jumps().isEmpty();
         h.heading("Parameter sets");
         List<List<String>> rows = new ArrayList<>();
         for (SetResult s : sets) {
-            rows.add(List.of(Integer.toString(s.set()), describe(spec, s), pct(s.momentError()[0]),
-                    pct(s.momentError()[1]), pct(s.momentError()[2]), num(s.crlbRatio()[0]), num(s.lockFractionMean()),
-                    Integer.toString(s.alphaLocks()), num(s.spectraPerSecond()),
-                    String.format(Locale.ROOT, "%.0f", s.bitsPerSecondMean()), num(s.informationEfficiency()),
-                    front.contains(s) ? "yes" : ""));
+            List<String> row = new ArrayList<>(List.of(Integer.toString(s.set()), describe(spec, s),
+                    pct(s.momentError()[0]), pct(s.momentError()[1]), pct(s.momentError()[2]), num(s.crlbRatio()[0]),
+                    num(s.lockFractionMean()), Integer.toString(s.alphaLocks()), num(s.spectraPerSecond()),
+                    String.format(Locale.ROOT, "%.0f", s.bitsPerSecondMean()), num(s.informationEfficiency())));
+            if (jumps) {
+                row.add(SideBySide.reacquire(s.reacquireSweepsMax(), s.reacquireSecondsMax()));
+                row.add(SideBySide.reacquire(s.strictReacquireSweepsMax(), s.strictReacquireSecondsMax()));
+            }
+            row.add((front.contains(s) ? "yes" : "") + (s == best ? " (recommended)" : ""));
+            rows.add(row);
         }
-        h.table(List.of("set", "parameters", "err n %", "err U %", "err T %", "n / CRLB", "lock", "alpha locks",
-                "spectra/s", "bit/s", "D-eff.", "front"), rows);
+        List<String> header = new ArrayList<>(List.of("set", "parameters", "err n %", "err U %", "err T %",
+                "n / CRLB", "lock", "alpha locks", "spectra/s", "bit/s", "D-eff."));
+        if (jumps) {
+            header.add("reacquired (worst)");
+            header.add("centred again (worst)");
+        }
+        header.add("front");
+        h.table(header, rows);
         h.write(dir.resolve("report.html"));
     }
 
-    private static byte[] chart(List<SetResult> sets, List<SetResult> front, boolean rate) throws IOException {
-        List<Charts.Series> series = new ArrayList<>();
-        series.add(points("all sets", sets, rate));
-        series.add(points("Pareto front", front, rate));
-        return Charts.xy(rate ? "Accuracy against telemetry rate" : "Accuracy against cadence",
-                rate ? "telemetry, bit/s" : "cadence, spectra per second",
-                "mean median error of n, U, T (%)", series);
-    }
-
-    private static Charts.Series points(String name, List<SetResult> sets, boolean rate) {
-        List<SetResult> shown = new ArrayList<>();
+    private static byte[] chart(CampaignSpec spec, List<SetResult> sets, List<SetResult> front, SetResult best,
+            boolean rate) throws IOException {
+        List<ParetoChart.Point> points = new ArrayList<>();
         for (SetResult s : sets) {
-            if (Double.isFinite(s.accuracy())) {
-                shown.add(s);
-            }
+            points.add(new ParetoChart.Point(s.set(), rate ? s.bitsPerSecondMean() : s.spectraPerSecond(),
+                    100 * s.accuracy(), front.contains(s), s == best));
         }
-        double[] x = new double[shown.size()];
-        double[] y = new double[shown.size()];
-        for (int i = 0; i < shown.size(); i++) {
-            x[i] = rate ? shown.get(i).bitsPerSecondMean() : shown.get(i).spectraPerSecond();
-            y[i] = 100 * shown.get(i).accuracy();
-        }
-        if (x.length == 0) { // XChart needs a point; an empty campaign shows none at the origin
-            return new Charts.Series(name, new double[] {0}, new double[] {0}, false);
-        }
-        return new Charts.Series(name, x, y, false);
+        return ParetoChart.render(rate ? "Accuracy against telemetry rate" : "Accuracy against cadence",
+                rate ? "telemetry, bit/s" : "cadence, spectra per second", "mean median error of n, U, T (%)",
+                points, rate ? spec.allocationBitsPerSecond() : Double.NaN);
     }
 
-    private static String describe(CampaignSpec spec, SetResult s) {
+    static String describe(CampaignSpec spec, SetResult s) {
         StringBuilder b = new StringBuilder();
         for (int a = 0; a < spec.grid().size(); a++) {
             b.append(a == 0 ? "" : ", ").append(spec.grid().get(a).parameter().key()).append(' ')
@@ -92,11 +103,11 @@ final class CampaignReport {
         return b.toString();
     }
 
-    private static String pct(double v) {
+    static String pct(double v) {
         return Double.isFinite(v) ? String.format(Locale.ROOT, "%.4f", 100 * v) : "";
     }
 
-    private static String num(double v) {
+    static String num(double v) {
         return Double.isFinite(v) ? String.format(Locale.ROOT, "%.3f", v) : "";
     }
 }

@@ -27,7 +27,17 @@ public enum TunableParameter {
     /** Settle after every level change, microseconds (at least the HV supply's settling). */
     FIXED_SETTLE_MICROS("fixedSettleMicros", 1, (p, v) -> p.fixedSettleMicros = v, p -> p.fixedSettleMicros),
     /** Extra settle per DAC code of rail change, microseconds (Q8 in the flight software; at least the slew limit's). */
-    SETTLE_MICROS_PER_CODE("settleMicrosPerCode", 256, (p, v) -> p.settleMicrosPerCodeQ8 = v, p -> p.settleMicrosPerCodeQ8);
+    SETTLE_MICROS_PER_CODE("settleMicrosPerCode", 256, (p, v) -> p.settleMicrosPerCodeQ8 = v, p -> p.settleMicrosPerCodeQ8),
+    /** Focus style: 0 band (today's), 1 design (the D-optimal band and a dwell from the budget; commands.md §4.1). */
+    FOCUS_STYLE("focusStyle", 1, (p, v) -> p.focusStyle = v, p -> p.focusStyle),
+    /** Design style: sweep-time budget of a focus sweep, microseconds (0: the table's dwell). */
+    FOCUS_BUDGET_MICROS("focusBudgetMicros", 1, (p, v) -> p.focusBudgetMicros = v, p -> p.focusBudgetMicros),
+    /** Design style: windows added either side of the design half-width. */
+    ROBUSTNESS_MARGIN_WINDOWS("robustnessMarginWindows", 1, (p, v) -> p.robustnessMarginWindows = v,
+            p -> p.robustnessMarginWindows),
+    /** Survey style: 0 the table's dwell, else a quick survey at this many periods per window. */
+    SURVEY_INTEGRATION_PERIODS("surveyIntegrationPeriods", 1, (p, v) -> p.surveyIntegrationPeriods = v,
+            p -> p.surveyIntegrationPeriods);
 
     private final String key;
     private final int scale;

@@ -1,5 +1,7 @@
 package dev.sweepline.sim.cli;
 
+import dev.sweepline.fsw.host.CliException;
+import dev.sweepline.fsw.host.Ranges;
 import dev.sweepline.sim.bench.Evaluation;
 import dev.sweepline.sim.bench.MomentErrors;
 import dev.sweepline.sim.bench.NonStationarity;
@@ -22,13 +24,13 @@ import picocli.CommandLine.Option;
             "with the ground on, and print per case the ground's errors, biases, CRLB ratios, spurious alphas,",
             "tracking error and strict reacquisition; with --calm the calm variants and the fidelity goal."})
 final class EvaluateCommand implements Callable<Integer> {
-    @Option(names = "--seconds", paramLabel = "S", description = "Simulated seconds per run (default: ${DEFAULT-VALUE}).")
+    @Option(names = "--seconds", paramLabel = "S", converter = Ranges.Positive.class, description = "Simulated seconds per run (default: ${DEFAULT-VALUE}).")
     double seconds = 120;
 
-    @Option(names = "--seeds", paramLabel = "K", description = "Seeds per case, 1..K (default: ${DEFAULT-VALUE}).")
+    @Option(names = "--seeds", paramLabel = "K", converter = Ranges.PositiveInt.class, description = "Seeds per case, 1..K (default: ${DEFAULT-VALUE}).")
     int seeds = 3;
 
-    @Option(names = "--threads", paramLabel = "N", description = "Worker threads (default: ${DEFAULT-VALUE}).")
+    @Option(names = "--threads", paramLabel = "N", converter = Ranges.PositiveInt.class, description = "Worker threads (default: ${DEFAULT-VALUE}).")
     int threads = 2;
 
     @Option(names = "--calm", description = "Fly the calm variant of every case (no fluctuations, no events) and "
@@ -45,10 +47,6 @@ final class EvaluateCommand implements Callable<Integer> {
     @Override
     public Integer call() {
         instrument.resolve();
-        if (!(seconds > 0) || seeds < 1 || threads < 1) {
-            System.err.println("--seconds must be positive, --seeds and --threads at least 1");
-            return 2;
-        }
         List<Scenario> cases = new ArrayList<>();
         try {
             if (only.isEmpty()) {
@@ -62,8 +60,7 @@ final class EvaluateCommand implements Callable<Integer> {
                 }
             }
         } catch (ScenarioException e) {
-            System.err.println("scenario error: " + e.getMessage());
-            return 2;
+            throw CliException.input("--scenario " + e.getMessage());
         }
         if (calm) {
             cases.replaceAll(Scenario::calm);

@@ -47,7 +47,7 @@ final class MergeCommand implements Callable<Integer> {
         }
         OutputFolder.create(out);
         CampaignOutput.writeRuns(out, rows);
-        TuneCommand.report(CampaignOutput.writeResults(out, spec, rows), out);
+        TuneCommand.report(CampaignOutput.writeResults(out, spec, rows), out, CampaignOutput.inertAxes(spec, rows));
         return 0;
     }
 }

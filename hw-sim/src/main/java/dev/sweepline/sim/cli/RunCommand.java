@@ -24,6 +24,8 @@ import dev.sweepline.fsw.host.Ranges;
 import java.util.List;
 import dev.sweepline.sim.bench.ClosedLoopBench;
 import dev.sweepline.sim.bench.RunReportWriter;
+import dev.sweepline.sim.bench.RunFigures;
+import dev.sweepline.sim.report.DecisionChart;
 import dev.sweepline.sim.scenario.Scenario;
 import dev.sweepline.sim.scenario.ScenarioException;
 import dev.sweepline.sim.scenario.ScenarioLoader;
@@ -137,19 +139,22 @@ final class RunCommand implements Callable<Integer> {
         }
         RunReportWriter.printTable(result.summary(), System.out);
         Map<String, Object> extra = new LinkedHashMap<>();
-        Map<String, Object> link = RunReportWriter.linkMap(config, baud);
-        extra.put("linkLoad", link);
+        extra.put("linkLoad", RunReportWriter.linkMap(config, baud));
         List<String> warnings = RunWarnings.of(config, baud, result.summary().telemetry());
+        byte[] decisions = RunFigures.decisionChart(config, result, commandMarkers(script));
+        Files.write(out.resolve(RunFigures.DECISIONS_PNG), decisions);
         if (noGround) {
             RunReportWriter.write(out, result, extra);
-            System.out.println("wrote " + out.resolve("summary.json") + ", decisions.csv and telemetry.tm (no ground products)");
+            System.out.println("wrote " + out.resolve("summary.json") + ", decisions.csv, decisions.png and telemetry.tm"
+                    + " (no ground products)");
             return RunWarnings.print(warnings, System.out);
         }
         // the ground's view: decode and fit what the flight software sent, compare with the truth
         Path groundDir = out.resolve("ground");
         GroundProducts ground = GroundProcessing.process(out.resolve("telemetry.tm"), groundDir,
                 allocation != null ? OptionalDouble.of(allocation) : OptionalDouble.empty(),
-                DecoderConfig.autoLength().withInstruments(GroundInstruments.of(model.spec())), windows);
+                DecoderConfig.autoLength().withInstruments(GroundInstruments.of(model.spec())), windows,
+                RunFigures.additions(result, config.flight().coarseTimeAtTickZero, decisions));
         GroundCheck.GroundFigures figures = GroundCheck.compare(ground.moments(), result.recorder().sweeps(),
                 result.recorder()::truthAt, config.flight().coarseTimeAtTickZero);
         // the ground's quick-look with the bench's comparison against the truth after it
@@ -158,7 +163,8 @@ final class RunCommand implements Callable<Integer> {
         extra.putAll(RunReportWriter.groundMap(figures));
         RunReportWriter.printGround(figures, System.out);
         RunReportWriter.write(out, result, extra);
-        System.out.println("wrote " + out.resolve("summary.json") + ", decisions.csv, telemetry.tm, report.html"
+        System.out.println("wrote " + out.resolve("summary.json") + ", decisions.csv, decisions.png, telemetry.tm, "
+                + "report.html"
                 + " and the ground products in " + groundDir);
         return RunWarnings.print(warnings, System.out);
     }
@@ -170,6 +176,18 @@ final class RunCommand implements Callable<Integer> {
         } catch (ScenarioException e) {
             throw CliException.input("--scenario " + e.getMessage());
         }
+    }
+
+    /** The telecommands sent, as event markers of the sweep-decision chart ("TC line N", refusals named). */
+    private static List<DecisionChart.Marker> commandMarkers(ScriptRunner script) {
+        List<DecisionChart.Marker> markers = new java.util.ArrayList<>();
+        if (script != null) {
+            for (dev.sweepline.fsw.host.script.ScriptPlayer.Sent x : script.sent()) {
+                markers.add(new DecisionChart.Marker(x.atMicros() / 1e6, "TC line " + x.line()
+                        + (x.reason() == 0 ? "" : " " + CommandReason.name(x.reason())), true));
+            }
+        }
+        return markers;
     }
 
     /** Commands sent and refused, with the count of each refusal reason. */

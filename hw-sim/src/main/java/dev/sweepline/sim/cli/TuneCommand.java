@@ -71,11 +71,15 @@ final class TuneCommand implements Callable<Integer> {
             System.out.println("wrote " + out.resolve(CampaignOutput.RUNS) + "; merge the shards with 'merge'");
             return 0;
         }
-        report(CampaignOutput.writeResults(out, spec, rows), out);
+        report(CampaignOutput.writeResults(out, spec, rows), out, CampaignOutput.inertAxes(spec, rows));
         return 0;
     }
 
-    static void report(SetResult best, Path out) {
+    static void report(SetResult best, Path out, List<String> inertAxes) {
+        for (String axis : inertAxes) {
+            System.out.println("warning: the grid axis " + axis + " changed nothing (every value gave the same runs; "
+                    + "see report.html)");
+        }
         if (best == null) {
             System.out.println("no set met the recommendation rules (see summary.json)");
         } else {
@@ -83,7 +87,8 @@ final class TuneCommand implements Callable<Integer> {
                     best.set(), best.lockFractionMean(), best.lockFractionMin(), best.spectraPerSecond(),
                     best.bitsPerSecondMean());
         }
-        System.out.println("wrote " + out.resolve("sets.csv") + ", " + out.resolve("summary.json")
-                + (best == null ? "" : " and " + out.resolve("recommended.yaml")));
+        System.out.println("wrote " + out.resolve(CampaignOutput.RUNS) + ", sets.csv, summary.json, pareto.png, "
+                + "pareto-cadence.png, report.html" + (best == null ? "" : ", recommended.yaml and "
+                + CampaignOutput.RECOMMENDED_IMAGE) + " in " + out);
     }
 }

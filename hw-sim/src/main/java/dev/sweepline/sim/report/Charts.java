@@ -21,6 +21,29 @@ public final class Charts {
     public record Series(String name, double[] x, double[] y, boolean line) {
     }
 
+    /**
+     * Marks {@code chart} as having no data: an invisible series spans the unit square (XChart draws no
+     * axes without one) and {@code note} in the middle says why, so no point is drawn at (0, 0).
+     */
+    static void empty(XYChart chart, String note) {
+        XYSeries none = chart.addSeries("none", new double[] {0, 1}, new double[] {0, 1});
+        none.setMarker(SeriesMarkers.NONE);
+        none.setLineColor(new java.awt.Color(0, 0, 0, 0));
+        none.setShowInLegend(false);
+        chart.getStyler().setLegendVisible(false);
+        chart.addAnnotation(new org.knowm.xchart.AnnotationText(note, 0.5, 0.5, false));
+    }
+
+    /** Adds a scatter series of {@code marker}s in {@code colour}. */
+    static XYSeries scatter(XYChart chart, String name, double[] x, double[] y,
+            org.knowm.xchart.style.markers.Marker marker, java.awt.Color colour) {
+        XYSeries s = chart.addSeries(name, x, y);
+        s.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Scatter);
+        s.setMarker(marker);
+        s.setMarkerColor(colour);
+        return s;
+    }
+
     /** An XY chart of {@code series} as PNG bytes. */
     public static byte[] xy(String title, String xLabel, String yLabel, List<Series> series) throws IOException {
         XYChart chart = new XYChartBuilder().width(900).height(480).title(title).xAxisTitle(xLabel)

@@ -1,0 +1,40 @@
+package dev.sweepline.ground.report;
+
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.awt.image.BufferedImage;
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.concurrent.TimeUnit;
+import javax.imageio.ImageIO;
+import org.junit.jupiter.api.Assumptions;
+
+/** Test helper: a page rendered by a real browser, a headless Chromium (Debian package chromium). */
+public final class HeadlessChromium {
+    /** Where a headless Chromium is installed on Debian (package chromium). */
+    public static final Path CHROMIUM = Path.of("/usr/bin/chromium");
+
+    private HeadlessChromium() {
+    }
+
+    /** Skips the calling test, saying why, when there is no Chromium. */
+    public static void assumeInstalled() {
+        Assumptions.assumeTrue(Files.isExecutable(CHROMIUM),
+                "skipped: no headless Chromium at /usr/bin/chromium (apt-get install -y chromium to run it)");
+    }
+
+    /** A screenshot of {@code page} in a 1200 x {@code height} window, written to {@code shot} and decoded. */
+    public static BufferedImage screenshot(Path page, Path shot, int height) throws IOException, InterruptedException {
+        Path work = Files.createDirectories(shot.resolveSibling(shot.getFileName() + ".chromium"));
+        Path log = work.resolve("chromium.log");
+        Process p = new ProcessBuilder(CHROMIUM.toString(), "--headless", "--no-sandbox", "--disable-gpu",
+                "--disable-quic", "--no-first-run", "--disable-background-networking", "--disable-component-update",
+                "--disable-sync", "--user-data-dir=" + work.resolve("profile"), "--screenshot=" + shot,
+                "--window-size=1200," + height, page.toUri().toString()).redirectErrorStream(true)
+                .redirectOutput(log.toFile()).start();
+        assertTrue(p.waitFor(90, TimeUnit.SECONDS), "chromium timed out");
+        assertTrue(Files.exists(shot), "no screenshot: " + Files.readString(log));
+        return ImageIO.read(shot.toFile());
+    }
+}
