@@ -21,6 +21,18 @@ public record CramerRaoBound(double[] sigma, boolean singular, double conditionN
         return sigma[0];
     }
 
+    /**
+     * Bound of n_p with the angles' uncertainty: the windows fix only n·A(θ), so with ln n = ln(nA) − ln A(θ)
+     * and the angle measured apart (the quadrant differences, independent of the summed current),
+     * σ_n² = σ_n|θ² + n² σ_lnA² (physics.md, "Density and speed beyond the split's reach").
+     *
+     * @param densityPerM3 the fitted n_p, m⁻³
+     * @param sigmaLogArea 1σ of ln A(θ) from the angles ({@code PlasmaFit.sigmaLogArea}); 0 inside full acceptance
+     */
+    public double sigmaDensity(double densityPerM3, double sigmaLogArea) {
+        return Math.hypot(sigmaDensity(), densityPerM3 * sigmaLogArea);
+    }
+
     /** Bound of U_p, m/s. */
     public double sigmaSpeed() {
         return sigma[1];

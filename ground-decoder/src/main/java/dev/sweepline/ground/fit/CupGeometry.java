@@ -95,6 +95,76 @@ public final class CupGeometry {
                 / (Math.PI * apertureRadiusM * apertureRadiusM);
     }
 
+    /**
+     * 1σ of ln A(θ) from the angles' 1σ, by linear propagation (physics.md, "Density and speed beyond the
+     * split's reach"): with s = d√(tx² + ty²) the image shift and A' = dA/ds = −L/(πR²) ({@link
+     * DiscOverlap#twoDiscAreaSlope}, L the common chord),
+     * <pre>
+     *   ∂ln A/∂θx = (A'/A) · d tx (1 + tx²)/√(tx² + ty²)      (the same in y)
+     *   σ_lnA²   = (∂ln A/∂θx)² σθx² + (∂ln A/∂θy)² σθy²
+     * </pre>
+     * 0 inside full acceptance (A' = 0), when the angles are not measured (θ taken as 0) or at normal
+     * incidence; infinite when the image is off the collector (A = 0), where the caller has no density.
+     */
+    public double sigmaLogTransmission(FlowAngles angles) {
+        if (!angles.measured()) {
+            return 0.0;
+        }
+        double tx = angles.tanX();
+        double ty = angles.tanY();
+        double h = Math.hypot(tx, ty);
+        if (!(h > 0)) {
+            return 0.0;
+        }
+        double s = apertureToCollectorM * h;
+        double area = DiscOverlap.twoDiscArea(apertureRadiusM, collectorRadiusM, s);
+        double slope = DiscOverlap.twoDiscAreaSlope(apertureRadiusM, collectorRadiusM, s);
+        if (slope == 0) {
+            return 0.0;
+        }
+        if (!(area > 0)) {
+            return Double.POSITIVE_INFINITY;
+        }
+        double gx = slope / area * apertureToCollectorM * tx * (1 + tx * tx) / h;
+        double gy = slope / area * apertureToCollectorM * ty * (1 + ty * ty) / h;
+        double sx = angles.sigmaThetaXRad();
+        double sy = angles.sigmaThetaYRad();
+        return Math.sqrt(gx * gx * sx * sx + gy * gy * sy * sy);
+    }
+
+    /** Aperture-to-collector distance d, m. */
+    public double apertureToCollectorM() {
+        return apertureToCollectorM;
+    }
+
+    /** dA/ds of the acceptance A(θ)/A(0) at image shift s (m): −L/(πR²), L the common chord; 0 inside full acceptance. */
+    public double transmissionSlope(double shiftM) {
+        return DiscOverlap.twoDiscAreaSlope(apertureRadiusM, collectorRadiusM, shiftM)
+                / (Math.PI * apertureRadiusM * apertureRadiusM);
+    }
+
+    /**
+     * The image shift s (m) at which the acceptance is {@code transmission}, for 0 < transmission < 1, by
+     * bisection on [R_c − R, R_c + R] where it falls monotonically; NaN outside (0, 1).
+     */
+    public double shiftOfTransmission(double transmission) {
+        if (!(transmission > 0 && transmission < 1)) {
+            return Double.NaN;
+        }
+        double lo = collectorRadiusM - apertureRadiusM;
+        double hi = collectorRadiusM + apertureRadiusM;
+        double area = transmission * Math.PI * apertureRadiusM * apertureRadiusM;
+        for (int i = 0; i < 60; i++) {
+            double mid = 0.5 * (lo + hi);
+            if (DiscOverlap.twoDiscArea(apertureRadiusM, collectorRadiusM, mid) > area) {
+                lo = mid;
+            } else {
+                hi = mid;
+            }
+        }
+        return 0.5 * (lo + hi);
+    }
+
     /** cos θ of the flow from its two angle tangents: 1/√(1 + tan²θx + tan²θy) (ICD §8 angle convention). */
     public static double cosOfFlow(double tanX, double tanY) {
         return 1 / Math.sqrt(1 + tanX * tanX + tanY * tanY);

@@ -67,4 +67,19 @@ public final class DiscOverlap {
         double k = 0.5 * Math.sqrt((-dist + r1 + r2) * (dist + r1 - r2) * (dist - r1 + r2) * (dist + r1 + r2));
         return r1 * r1 * a1 + r2 * r2 * a2 - k;
     }
+
+    /**
+     * d/d(dist) of {@link #twoDiscArea}: minus the length of the common chord, −2√(r1² − a²) with
+     * a = (dist² + r1² − r2²)/(2 dist) the distance from the first centre to the chord, while the discs cross
+     * (|r1 − r2| < dist < r1 + r2); 0 where one disc holds the other or they do not meet. Moving one centre
+     * by δ along the line of centres sweeps the lens boundary by the chord times δ to first order (the two
+     * arcs move, the chord's ends slide along them), so the area changes by −L·δ.
+     */
+    public static double twoDiscAreaSlope(double r1, double r2, double dist) {
+        if (dist >= r1 + r2 || dist <= Math.abs(r1 - r2)) {
+            return 0.0;
+        }
+        double a = (dist * dist + r1 * r1 - r2 * r2) / (2 * dist);
+        return -2 * Math.sqrt(Math.max(0.0, r1 * r1 - a * a));
+    }
 }

@@ -29,8 +29,9 @@ public enum FitFlag {
     ANGLE_OUT_OF_RANGE(false),
     /**
      * A difference ratio is saturated (±1): the aperture image lies wholly on one collector half, beyond the
-     * split's reach (24.96° for the demo cup: tan θ = R/d). The angle is then the middle of the interval
-     * from the reach to the cut-off with its uniform 1σ ({@link FlowAngleEstimator}): finite but large.
+     * split's reach (24.89° for the demo cup: tan θ = R/d). The angle is then the middle of the interval
+     * from the reach to the cut-off with its uniform 1σ ({@link FlowAngleEstimator}): finite but large; the
+     * density's and the speed's 1σ and bounds carry it (physics.md, "Density and speed beyond the split's reach").
      */
     BEYOND_SPLIT_REACH(false),
     /**

@@ -19,15 +19,18 @@ import java.util.Set;
  * @param areaM2           effective area times acceptance used by the model, m²
  * @param alphaPrior       the prior rows of a constrained alpha component ({@link FitFlag#ALPHAS_CONSTRAINED}),
  *                         null otherwise; the bound of the fit adds their information
+ * @param sigmaLogArea     1σ of ln A(θ) from the angles' 1σ ({@link CupGeometry#sigmaLogTransmission}): the
+ *                         density's relative 1σ from the angle, in its 1σ and its bound; 0 inside full
+ *                         acceptance and on failure
  */
 public record PlasmaFit(SpeciesMoments protons, SpeciesMoments alphas, FlowAngles angles, double reducedChiSquare,
         int windowsUsed, int iterations, Set<FitFlag> flags, double[] normalParameters, double areaM2,
-        AlphaPrior alphaPrior) {
+        AlphaPrior alphaPrior, double sigmaLogArea) {
 
     /** A failed fit with these flags on a cup of effective area {@code areaM2}. */
     public static PlasmaFit failed(EnumSet<FitFlag> flags, int windows, FlowAngles angles, double areaM2) {
         return new PlasmaFit(SpeciesMoments.NONE, SpeciesMoments.NONE, angles, Double.NaN, windows, 0,
-                Collections.unmodifiableSet(flags), new double[0], areaM2, null);
+                Collections.unmodifiableSet(flags), new double[0], areaM2, null, 0.0);
     }
 
     /** A failed fit with these flags and no cup (area NaN): nothing was fitted, so no model is drawn. */
@@ -40,7 +43,7 @@ public record PlasmaFit(SpeciesMoments protons, SpeciesMoments alphas, FlowAngle
         EnumSet<FitFlag> f = flags.isEmpty() ? EnumSet.noneOf(FitFlag.class) : EnumSet.copyOf(flags);
         f.add(flag);
         return new PlasmaFit(protons, alphas, angles, reducedChiSquare, windowsUsed, iterations,
-                Collections.unmodifiableSet(f), normalParameters, areaM2, alphaPrior);
+                Collections.unmodifiableSet(f), normalParameters, areaM2, alphaPrior, sigmaLogArea);
     }
 
     /** True unless a failure flag is set. */

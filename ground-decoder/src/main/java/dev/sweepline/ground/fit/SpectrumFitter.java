@@ -65,6 +65,14 @@ public final class SpectrumFitter {
 
     /** Fits {@code in}; never throws for bad data, flags it instead. */
     public PlasmaFit fit(SpectrumInput in) {
+        return fit(in, null);
+    }
+
+    /**
+     * Fits {@code in} with the density carried from an earlier spectrum inside the split's reach (null for
+     * none): beyond the reach the angle then comes from the total current's fall-off ({@link AcceptanceAngle}).
+     */
+    public PlasmaFit fit(SpectrumInput in, DensityPrior densityPrior) {
         EnumSet<FitFlag> flags = EnumSet.noneOf(FitFlag.class);
         if (in.saturatedDropped() > 0) {
             flags.add(FitFlag.SATURATED_DROPPED);
@@ -136,6 +144,11 @@ public final class SpectrumFitter {
         }
         FlowAngles angles = speciesAngles(in, preliminary, joint != null ? new PlasmaModel(in.lowVolts(), in.highVolts(),
                 area, true) : protonModel, best.parameters());
+        if (densityPrior != null && FlowAngleEstimator.beyondReach(angles, cup)) {
+            double n = best.parameters()[0];
+            double[][] c = best.covariance();
+            angles = AcceptanceAngle.fromDensity(cup, angles, n, Math.sqrt(c[0][0]) / n, densityPrior);
+        }
         double acceptance = cup.transmission(angles.tanX(), angles.tanY());
         if (acceptance > 0 && acceptance != area / cup.effectiveAreaM2()) {
             // beyond full acceptance the refined angle changes A(θ)/A(0), and n with it (I ∝ n A)
@@ -143,7 +156,13 @@ public final class SpectrumFitter {
             area = cup.effectiveAreaM2() * acceptance;
         }
         angleFlags(angles, flags);
-        return compose(in, angles, area, best, flags, prior);
+        double sigmaLogArea = cup.sigmaLogTransmission(angles);
+        if (!Double.isFinite(sigmaLogArea)) {
+            // the image at the estimated angle is off the collector: no density can be scaled from the current
+            flags.add(FitFlag.NO_SIGNAL);
+            return PlasmaFit.failed(flags, m, angles, cup.effectiveAreaM2());
+        }
+        return compose(in, angles, area, best, flags, prior, sigmaLogArea);
     }
 
     /** The angle flags of {@code angles}. */
@@ -302,7 +321,7 @@ public final class SpectrumFitter {
     }
 
     private static PlasmaFit compose(SpectrumInput in, FlowAngles angles, double area, LeastSquaresRun.Outcome o,
-            EnumSet<FitFlag> flags, AlphaPrior prior) {
+            EnumSet<FitFlag> flags, AlphaPrior prior, double sigmaLogArea) {
         double[] p = o.parameters();
         int np = p.length;
         // the data's degrees of freedom: windows less the parameters in effect (a prior pins some down)
@@ -315,14 +334,21 @@ public final class SpectrumFitter {
         if (peakVolts < min(in.lowVolts()) || peakVolts > max(in.highVolts())) {
             flags.add(FitFlag.PEAK_OUTSIDE_WINDOWS);
         }
-        SpeciesMoments protons = moments(Species.PROTON, p, o.covariance(), 0, angles);
+        SpeciesMoments protons = moments(Species.PROTON, p, o.covariance(), 0, angles, sigmaLogArea);
         SpeciesMoments alphas = np == PlasmaModel.JOINT_PARAMETERS
-                ? moments(Species.ALPHA, p, o.covariance(), 3, angles) : SpeciesMoments.NONE;
+                ? moments(Species.ALPHA, p, o.covariance(), 3, angles, sigmaLogArea) : SpeciesMoments.NONE;
         return new PlasmaFit(protons, alphas, angles, chi2, in.windows(), o.iterations(),
-                Collections.unmodifiableSet(flags), p.clone(), area, prior);
+                Collections.unmodifiableSet(flags), p.clone(), area, prior, sigmaLogArea);
     }
 
-    private static SpeciesMoments moments(Species s, double[] p, double[][] cov, int k, FlowAngles angles) {
+    /**
+     * The moments of species {@code k} with their 1σ: n's 1σ is the fit's (area fixed) and the angle's part
+     * n·σ_lnA added in quadrature (physics.md, "Density and speed beyond the split's reach"; the alphas share
+     * the protons' acceptance, an approximation where their drift shifts their image); U's carries the
+     * angles' 1σ ({@link FlowAngles#sigmaBulkSpeed}).
+     */
+    private static SpeciesMoments moments(Species s, double[] p, double[][] cov, int k, FlowAngles angles,
+            double sigmaLogArea) {
         double tx = angles.tanX();
         double ty = angles.tanY();
         double sec = 1 / CupGeometry.cosOfFlow(tx, ty);
@@ -333,7 +359,7 @@ public final class SpectrumFitter {
         if (cov == null) {
             return new SpeciesMoments(n, un * sec, w, t, Double.NaN, Double.NaN, Double.NaN, Double.NaN);
         }
-        double sn = Math.sqrt(cov[k][k]);
+        double sn = Math.hypot(Math.sqrt(cov[k][k]), n * sigmaLogArea);
         double sun = Math.sqrt(cov[k + 1][k + 1]);
         double sw = Math.sqrt(cov[k + 2][k + 2]);
         return new SpeciesMoments(n, un * sec, w, t, sn, angles.sigmaBulkSpeed(un, sun), sw, 2 * t * sw / w);

@@ -71,6 +71,16 @@
  *       model's bound ({@code PartialAlphaTest}).</li>
  *   <li>F10 with alphas drifting along the field the proton angle's bias over 200 seeds is below 3 ×
  *       scatter/√200 and its reported 1σ is the scatter ({@code AlphaDriftAngleTest}).</li>
+ *   <li>F11 beyond full acceptance the density's 1σ and bound carry the angle's part n·σ_lnA ({@link
+ *       dev.sweepline.ground.fit.CupGeometry#sigmaLogTransmission}, physics.md "Density and speed beyond the
+ *       split's reach"): the overlap's slope is minus the common chord, the propagation matches central
+ *       differences, and on 25–35° flows on both axes n and U lie within 2σ of the truth in every case with
+ *       finite errors ({@code BeyondReachErrorsTest}).</li>
+ *   <li>F12 beyond the reach with a density carried from the last spectrum inside it ({@link
+ *       dev.sweepline.ground.fit.DensityPrior}, {@code FitCollector} in time order) the angle comes from the total
+ *       current's fall-off ({@link dev.sweepline.ground.fit.AcceptanceAngle}): the overlap's inverse is exact,
+ *       and on 26–35° flows on both axes θ, n and U lie within 2σ in every clean case and ≥ 95 % of noisy ones
+ *       ({@code AcceptanceAngleTest}).</li>
  * </ol>
  */
 package dev.sweepline.ground.fit;

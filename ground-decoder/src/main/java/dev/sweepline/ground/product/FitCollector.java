@@ -3,6 +3,7 @@ package dev.sweepline.ground.product;
 import dev.sweepline.ground.bound.CramerRaoBound;
 import dev.sweepline.ground.bound.FisherMatrix;
 import dev.sweepline.ground.decode.DecodeListener;
+import dev.sweepline.ground.fit.DensityPrior;
 import dev.sweepline.ground.fit.FitFlag;
 import dev.sweepline.ground.fit.PlasmaFit;
 import dev.sweepline.ground.fit.PlasmaModel;
@@ -23,12 +24,15 @@ import java.util.Map;
  * Fits every decoded spectrum as it arrives, with its instrument's geometry and noise and its
  * Cramér–Rao bound, and keeps what the plots need: one spectrogram row per spectrum, on the default
  * table of the spectrum's instrument, and the example spectrum for the fit plot (the latest fitted
- * spectrum with the most windows, survey preferred).
+ * spectrum with the most windows, survey preferred). Spectra arrive in time order; the density of the
+ * last fit inside the split's reach is carried to spectra beyond it ({@link DensityPrior}).
  */
 public final class FitCollector implements DecodeListener {
     private final Map<Integer, SpectrumFitter> fitters = new LinkedHashMap<>();
     private final Map<Integer, Spectrogram> spectrograms = new LinkedHashMap<>();
     private final List<MomentRecord> records = new ArrayList<>();
+    /** Per instrument, the last fit whose angle the split measured: the density carried beyond the reach. */
+    private final Map<Integer, MomentRecord> lastInReach = new LinkedHashMap<>();
     private double firstTai = Double.NaN;
     private long fitNanos;
     private SpectrumInput exampleInput;
@@ -46,7 +50,9 @@ public final class FitCollector implements DecodeListener {
         long t0 = System.nanoTime();
         GroundInstrument instrument = s.instrument();
         SpectrumInput in = SpectrumInput.of(s);
-        PlasmaFit fit = fitters.computeIfAbsent(instrument.id(), id -> new SpectrumFitter(instrument)).fit(in);
+        double tai = s.time().taiSeconds();
+        PlasmaFit fit = fitters.computeIfAbsent(instrument.id(), id -> new SpectrumFitter(instrument))
+                .fit(in, carried(instrument.id(), tai));
         CramerRaoBound bound = null;
         if (fit.ok()) {
             PlasmaModel m = new PlasmaModel(in.lowVolts(), in.highVolts(), fit.areaM2(), fit.alphasFitted());
@@ -56,12 +62,15 @@ public final class FitCollector implements DecodeListener {
             }
         }
         fitNanos += System.nanoTime() - t0;
-        double tai = s.time().taiSeconds();
         if (Double.isNaN(firstTai)) {
             firstTai = tai;
         }
-        records.add(new MomentRecord(tai, s.time().isoTai(), s.apid(), s.modeName(), s.sweep(), fit, bound,
-                instrument.name()));
+        MomentRecord record = new MomentRecord(tai, s.time().isoTai(), s.apid(), s.modeName(), s.sweep(), fit, bound,
+                instrument.name());
+        records.add(record);
+        if (fit.ok() && fit.angles().measured() && !fit.flags().contains(FitFlag.BEYOND_SPLIT_REACH)) {
+            lastInReach.put(instrument.id(), record);
+        }
         spectrograms.computeIfAbsent(instrument.id(), id -> new Spectrogram(instrument, new ArrayList<>())).rows()
                 .add(onDefaultGrid(s, tai - firstTai));
         int score = fit.ok() ? in.windows() * 2 + (s.mode() == DecodedSpectrum.MODE_SURVEY ? 1000 : 0) : -1;
@@ -73,6 +82,13 @@ public final class FitCollector implements DecodeListener {
             exampleTitle = instrument.name() + " " + s.modeName() + " sweep " + s.sweep() + " at " + s.time().isoTai()
                     + " TAI";
         }
+    }
+
+    /** The density of instrument {@code id}'s last fit inside the reach, aged to {@code tai}; null for none. */
+    private DensityPrior carried(int id, double tai) {
+        MomentRecord r = lastInReach.get(id);
+        return r == null ? null : DensityPrior.carried(r.fit().protons().densityPerM3(),
+                r.fit().protons().sigmaDensityPerM3(), tai - r.taiSeconds());
     }
 
     /**

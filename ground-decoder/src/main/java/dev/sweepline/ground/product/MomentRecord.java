@@ -52,9 +52,10 @@ public record MomentRecord(double taiSeconds, String isoTai, int apid, String mo
         return Math.toDegrees(fit.angles().thetaYRad());
     }
 
-    /** Bound of n_p, cm⁻³ (NaN when singular or failed). */
+    /** Bound of n_p, cm⁻³, with the angle's part beyond full acceptance (NaN when singular or failed). */
     public double crlbDensityPerCc() {
-        return bound == null ? Double.NaN : bound.sigmaDensity() * PER_CC;
+        return bound == null ? Double.NaN
+                : bound.sigmaDensity(fit.protons().densityPerM3(), fit.sigmaLogArea()) * PER_CC;
     }
 
     /** Bound of |U_p|, km/s: the bound of U along the normal over cos θ, with the angles' 1σ propagated. */
