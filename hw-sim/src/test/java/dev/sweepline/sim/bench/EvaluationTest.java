@@ -60,9 +60,10 @@ class EvaluationTest {
             assertFalse(ScenarioLoader.builtInNames().contains(s.name()), s.name() + " shadows a built-in");
             assertTrue(s.name().startsWith("eval-"), s.name());
         }
-        // the four weak spots of the ground fit and the steady reference (scenarios/evaluation/index.txt)
+        // the weak spots of the ground fit (the flow beyond the reach both from the start and after a turn)
+        // and the steady reference (scenarios/evaluation/index.txt)
         assertEquals(Set.of("eval-fast-alpha-above", "eval-alpha-rich-ejecta", "eval-flow-28deg",
-                "eval-strong-shock-ramp", "eval-steady-no-alphas"), names);
+                "eval-flow-turn-28deg", "eval-strong-shock-ramp", "eval-steady-no-alphas"), names);
         assertEquals(1, evaluationCase("eval-strong-shock-ramp").jumps().size());
     }
 
