@@ -13,22 +13,24 @@ import dev.sweepline.fsw.table.WindowTable;
  *
  * <pre>
  *   0   2  marker 0x5354 ("ST")
- *   2   1  format version v: 1 or 2
+ *   2   1  format version v: 1, 2 or 3
  *   3   1  reserved, 0
- *   4   2  image length L = 138 + 4 n (v 1) or 154 + 4 n (v 2), octets, CRC included
+ *   4   2  image length L = 138 + 4 n (v 1), 154 + 4 n (v 2) or 158 + 4 n (v 3), octets, CRC included
  *   6   2  window count n (1..256)
  *   8  76  sweep parameters, 19 signed 32-bit values (order in commands.md §4.1)
  *  84   2  housekeeping period, seconds (1..3600)
  *  86   2  spectrum decimation (1..256)
  *  88  48  fault settings, monitors 1..6: response (1), retries (1), threshold (2), limit (4)
  * 136  4n  windows: low code (2), high code (2)
- * 136+4n 16  v 2 only: focusStyle, focusBudgetMicros, robustnessMarginWindows, surveyIntegrationPeriods (signed 32-bit)
+ * 136+4n 16  v 2 and 3: focusStyle, focusBudgetMicros, robustnessMarginWindows, surveyIntegrationPeriods (signed 32-bit)
+ * 152+4n  4  v 3 only: engineeringFlushSeconds (signed 32-bit)
  * L-2   2  CRC-16/IBM-3740 over octets 0 .. L-3
  * </pre>
  *
  * The table id is the CRC. An image is written in version 1 when its styles are the defaults (so
- * every version-1 table keeps its bytes and its id) and in version 2 otherwise; a version-1 image
- * decodes with the default styles. Decoding is allocation-free and never throws on bad bytes.
+ * every version-1 table keeps its bytes and its id), in version 2 when only its styles differ, and in
+ * version 3 when its engineering flush is not the build's; a version-1 image decodes with the default
+ * styles, a version-1 or 2 image with the build's flush (0). Decoding is allocation-free and never throws on bad bytes.
  */
 public final class TableImage {
     /** Marker "ST". */
@@ -43,10 +45,14 @@ public final class TableImage {
     public static final int FIXED_OCTETS = WINDOWS_AT + 2;
     /** Octets of the version-2 extension: four signed 32-bit style values. */
     public static final int STYLE_OCTETS = 16;
+    /** Format version of an image that also carries the engineering flush interval after the styles. */
+    public static final int VERSION_FLUSH = 3;
+    /** Octets of the version-3 flush field. */
+    public static final int FLUSH_OCTETS = 4;
     /** Shortest image (one window, version 1). */
     public static final int MIN_OCTETS = FIXED_OCTETS + 4;
-    /** Longest image ({@link WindowTable#CAPACITY} windows, version 2). */
-    public static final int MAX_OCTETS = FIXED_OCTETS + STYLE_OCTETS + 4 * WindowTable.CAPACITY;
+    /** Longest image ({@link WindowTable#CAPACITY} windows, version 3). */
+    public static final int MAX_OCTETS = FIXED_OCTETS + STYLE_OCTETS + FLUSH_OCTETS + 4 * WindowTable.CAPACITY;
     /** {@link #decode} result: the image is not intact (marker, version, length or CRC). */
     public static final int CORRUPT = -1;
 
@@ -64,9 +70,10 @@ public final class TableImage {
         return FIXED_OCTETS + 4 * windows;
     }
 
-    /** Image length for {@code windows} windows in format {@code version} (1 or 2). */
+    /** Image length for {@code windows} windows in format {@code version} (1, 2 or 3). */
     public static int length(int windows, int version) {
-        return length(windows) + (version == VERSION_STYLES ? STYLE_OCTETS : 0);
+        return length(windows) + (version >= VERSION_STYLES ? STYLE_OCTETS : 0)
+            + (version == VERSION_FLUSH ? FLUSH_OCTETS : 0);
     }
 
     /** The table id (CRC) of an image of {@code length} octets, as stored in its last two octets. */
@@ -86,7 +93,7 @@ public final class TableImage {
         }
         int n = Telecommand.u16(b, 6);
         int version = b[2] & 0xFF;
-        return Telecommand.u16(b, 0) == MARKER && (version == VERSION || version == VERSION_STYLES)
+        return Telecommand.u16(b, 0) == MARKER && version >= VERSION && version <= VERSION_FLUSH
             && Telecommand.u16(b, 4) == length
             && n >= 1 && n <= WindowTable.CAPACITY && length(n, version) == length
             && Crc16.of(b, 0, length - 2) == Telecommand.u16(b, length - 2);
@@ -111,7 +118,9 @@ public final class TableImage {
             into.dacHigh[w] = Telecommand.u16(b, WINDOWS_AT + 4 * w + 2);
         }
         readParameters(b, into.sweep);
-        readStyles(b, (b[2] & 0xFF) == VERSION_STYLES ? WINDOWS_AT + 4 * n : -1, into.sweep);
+        int version = b[2] & 0xFF;
+        readStyles(b, version >= VERSION_STYLES ? WINDOWS_AT + 4 * n : -1, into.sweep);
+        into.sweep.engineeringFlushSeconds = version == VERSION_FLUSH ? s32(b, WINDOWS_AT + 4 * n + STYLE_OCTETS) : 0;
         into.housekeepingSeconds = Telecommand.u16(b, HOUSEKEEPING_AT);
         into.spectrumDecimation = Telecommand.u16(b, DECIMATION_AT);
         for (int m = 1; m <= FaultMonitorId.COUNT; m++) {
@@ -152,7 +161,7 @@ public final class TableImage {
      * @return the image length
      */
     public static int encode(ParameterTable t, byte[] b) {
-        int version = t.sweep.defaultStyles() ? VERSION : VERSION_STYLES;
+        int version = !t.sweep.defaultFlush() ? VERSION_FLUSH : t.sweep.defaultStyles() ? VERSION : VERSION_STYLES;
         int length = length(t.windowCount, version);
         put16(b, 0, MARKER);
         b[2] = (byte) version;
@@ -173,12 +182,15 @@ public final class TableImage {
             put16(b, WINDOWS_AT + 4 * w, t.dacLow[w]);
             put16(b, WINDOWS_AT + 4 * w + 2, t.dacHigh[w]);
         }
-        if (version == VERSION_STYLES) {
+        if (version >= VERSION_STYLES) {
             int i = WINDOWS_AT + 4 * t.windowCount;
             put32(b, i, t.sweep.focusStyle);
             put32(b, i + 4, t.sweep.focusBudgetMicros);
             put32(b, i + 8, t.sweep.robustnessMarginWindows);
             put32(b, i + 12, t.sweep.surveyIntegrationPeriods);
+        }
+        if (version == VERSION_FLUSH) {
+            put32(b, WINDOWS_AT + 4 * t.windowCount + STYLE_OCTETS, t.sweep.engineeringFlushSeconds);
         }
         put16(b, length - 2, Crc16.of(b, 0, length - 2));
         return length;

@@ -7,6 +7,7 @@ import dev.sweepline.fsw.fault.FaultProtection;
 import dev.sweepline.fsw.report.EventWriter;
 import dev.sweepline.fsw.sweep.SweepScheduler;
 import dev.sweepline.fsw.table.TableStatus;
+import dev.sweepline.fsw.telemetry.TelemetryWriter;
 
 /**
  * The command processor's view of the rest of the flight software: counter resets, and a committed
@@ -19,9 +20,13 @@ final class FlightTarget implements CommandTarget {
     private final SweepRouting routing;
     private final HousekeepingClock housekeeping;
     private final EventWriter events;
+    private final TelemetryWriter telemetry;
+    private final long buildFlushMicros;
 
     FlightTarget(SweepScheduler scheduler, FaultProtection faults, SweepRouting routing, HousekeepingClock housekeeping,
-            EventWriter events) {
+            EventWriter events, TelemetryWriter telemetry, long buildFlushMicros) {
+        this.telemetry = telemetry;
+        this.buildFlushMicros = buildFlushMicros;
         this.scheduler = scheduler;
         this.faults = faults;
         this.routing = routing;
@@ -50,6 +55,7 @@ final class FlightTarget implements CommandTarget {
         }
         housekeeping.period(table.housekeepingSeconds * 1_000_000L, nowMicros);
         routing.tableCommitted(tableId, table.spectrumDecimation);
+        telemetry.engineeringFlush(table.sweep.engineeringFlushSeconds, buildFlushMicros);
         events.write(EventWriter.TABLE_COMMITTED, 0, 0, tableId, nowMicros);
         return CommandReason.OK;
     }

@@ -21,6 +21,11 @@ public final class SweepParameters {
     public static final int MAX_FOCUS_BUDGET_MICROS = 10_000_000;
     /** Upper limit of {@link #robustnessMarginWindows} (design limit: a quarter of the table capacity). */
     public static final int MAX_ROBUSTNESS_MARGIN_WINDOWS = 64;
+    /**
+     * Upper limit of {@link #engineeringFlushSeconds}: ten minutes, design limit (an event waits at most
+     * this long on board before its frame leaves; common practice keeps housekeeping latency within minutes).
+     */
+    public static final int MAX_ENGINEERING_FLUSH_SECONDS = 600;
     /** V_alpha / V_p at equal speed = m_alpha / (2 m_p) = 1.986300 (physics.md, alpha particles), Q16. */
     public static final int ALPHA_RATIO_1_986300_Q16 = 130_174;
 
@@ -84,6 +89,13 @@ public final class SweepParameters {
      * 1..{@link #integrationPeriods} modulation periods per window.
      */
     public int surveyIntegrationPeriods;
+    /**
+     * Telemetry: the longest time, seconds, a partly filled frame of the engineering virtual channel
+     * (housekeeping and events) waits before it is completed with idle data, 1..{@value #MAX_ENGINEERING_FLUSH_SECONDS};
+     * 0 keeps the build's flush interval (FlightConfig#flushIntervalMicros). Longer fills the frames
+     * fuller (less bandwidth) and delays a packet more (commands.md §4.1).
+     */
+    public int engineeringFlushSeconds;
 
     /**
      * The flight defaults of the tunables that are no instrument fact (values and reasons in the field
@@ -144,12 +156,18 @@ public final class SweepParameters {
         focusBudgetMicros = other.focusBudgetMicros;
         robustnessMarginWindows = other.robustnessMarginWindows;
         surveyIntegrationPeriods = other.surveyIntegrationPeriods;
+        engineeringFlushSeconds = other.engineeringFlushSeconds;
     }
 
     /** True when the focus and survey styles are today's (table image version 1 holds this set). */
     public boolean defaultStyles() {
         return focusStyle == FOCUS_STYLE_BAND && focusBudgetMicros == 0 && robustnessMarginWindows == 0
             && surveyIntegrationPeriods == 0;
+    }
+
+    /** True when the engineering flush is the build's (0): no table image version 3 needed. */
+    public boolean defaultFlush() {
+        return engineeringFlushSeconds == 0;
     }
 
     /**
@@ -201,6 +219,9 @@ public final class SweepParameters {
             || robustnessMarginWindows < 0 || robustnessMarginWindows > MAX_ROBUSTNESS_MARGIN_WINDOWS
             || surveyIntegrationPeriods < 0 || surveyIntegrationPeriods > integrationPeriods) {
             return TableStatus.BAD_STYLE;
+        }
+        if (engineeringFlushSeconds < 0 || engineeringFlushSeconds > MAX_ENGINEERING_FLUSH_SECONDS) {
+            return TableStatus.BAD_FLUSH;
         }
         return TableStatus.OK;
     }

@@ -44,12 +44,14 @@ public final class TableStatus {
     public static final int BAD_EDGE_SEARCH = 17;
     /** Parameter: focus style, sweep-time budget, robustness margin or survey dwell outside its range. */
     public static final int BAD_STYLE = 18;
+    /** Parameter: engineering flush interval outside 0..600 s (SweepParameters#engineeringFlushSeconds). */
+    public static final int BAD_FLUSH = 19;
 
     private static final String[] NAMES = {
         "OK", "EMPTY", "TOO_MANY_WINDOWS", "OUT_OF_DAC_RANGE", "NOT_MONOTONIC", "MISSING_DATA",
         "BAD_INTEGRATION", "BAD_SETTLE", "BAD_BAND", "BAD_RESURVEY", "BAD_LOCK_LOSS",
         "BAD_GAIN_THRESHOLDS", "BAD_ALPHA", "BAD_NOISE", "ABOVE_VOLTAGE_LIMIT", "SETTLE_BELOW_SLEW",
-        "SETTLE_TOO_SHORT", "BAD_EDGE_SEARCH", "BAD_STYLE",
+        "SETTLE_TOO_SHORT", "BAD_EDGE_SEARCH", "BAD_STYLE", "BAD_FLUSH",
     };
 
     private TableStatus() {

@@ -76,6 +76,19 @@ public final class TelemetryWriter {
         send(apid, Apid.VC_ENGINEERING, userDataLength, atMicros, nowMicros);
     }
 
+    /**
+     * Sets the flush interval of the engineering virtual channel (VC 1) to {@code seconds}, or back to
+     * the build's {@code buildMicros} when {@code seconds} is 0 (SweepParameters#engineeringFlushSeconds).
+     */
+    public void engineeringFlush(int seconds, long buildMicros) {
+        frames.flushInterval(Apid.VC_ENGINEERING, seconds == 0 ? buildMicros : seconds * 1_000_000L);
+    }
+
+    /** The flush interval of virtual channel {@code vc} in force, microseconds. */
+    public long flushInterval(int vc) {
+        return frames.flushInterval(vc);
+    }
+
     /** Flushes frames that have waited longer than the flush interval; returns how many. */
     public int doWork(long nowMicros) {
         return frames.flushStale(nowMicros);

@@ -39,7 +39,7 @@ public final class TransferFrameBuilder {
 
     private final int spacecraftId;
     private final int frameLength;
-    private final long flushIntervalMicros;
+    private final long[] flushIntervalMicros = new long[VIRTUAL_CHANNELS];
     private final FrameSink sink;
     private final byte[][] frames = new byte[VIRTUAL_CHANNELS][];
     private final int[] fill = new int[VIRTUAL_CHANNELS];
@@ -63,9 +63,9 @@ public final class TransferFrameBuilder {
         }
         this.spacecraftId = spacecraftId;
         this.frameLength = frameLength;
-        this.flushIntervalMicros = flushIntervalMicros;
         this.sink = sink;
         for (int vc = 0; vc < VIRTUAL_CHANNELS; vc++) {
+            this.flushIntervalMicros[vc] = flushIntervalMicros;
             frames[vc] = new byte[ASM_LENGTH + frameLength];
             writeAsm(frames[vc]);
             fill[vc] = -1;
@@ -147,11 +147,24 @@ public final class TransferFrameBuilder {
         }
     }
 
+    /**
+     * Sets the flush interval of virtual channel {@code vc} (allocation-free): an open frame of it is
+     * completed by the next {@link #flushStale} once it has held data this long.
+     */
+    public void flushInterval(int vc, long micros) {
+        flushIntervalMicros[vc] = micros;
+    }
+
+    /** The flush interval of virtual channel {@code vc}, microseconds. */
+    public long flushInterval(int vc) {
+        return flushIntervalMicros[vc];
+    }
+
     /** Flushes the frames that have waited longer than the flush interval; returns how many. */
     public int flushStale(long nowMicros) {
         int flushed = 0;
         for (int vc = 0; vc < VIRTUAL_CHANNELS; vc++) {
-            if (fill[vc] >= 0 && nowMicros - openedAtMicros[vc] >= flushIntervalMicros) {
+            if (fill[vc] >= 0 && nowMicros - openedAtMicros[vc] >= flushIntervalMicros[vc]) {
                 flush(vc, nowMicros);
                 flushed++;
             }

@@ -11,6 +11,7 @@ import dev.sweepline.fsw.octets.Crc16;
 import dev.sweepline.fsw.table.TableStatus;
 import dev.sweepline.fsw.table.WindowTable;
 import dev.sweepline.fsw.telemetry.Apid;
+import dev.sweepline.fsw.telemetry.TelemetryWriter;
 import org.junit.jupiter.api.Test;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
@@ -74,6 +75,95 @@ class TableCommandingTest {
         assertEquals(64, restarted.fsw.scheduler().windowCount());
         restarted.run(100_000);
         assertEquals(4, restarted.fsw.executive().currentStep().integrationPeriods);
+    }
+
+    /** The default table with the engineering flush at {@code seconds} (0: the build's). */
+    private static byte[] flushImage(int seconds) {
+        ParameterTable t = ParameterTable.of(DemoCup.table(), DemoCup.parameters());
+        t.sweep.engineeringFlushSeconds = seconds;
+        byte[] image = new byte[TableImage.MAX_OCTETS];
+        return java.util.Arrays.copyOf(image, TableImage.encode(t, image));
+    }
+
+    private void commit(FswRig rig, byte[] image) {
+        load(rig, image);
+        assertEquals(CommandReason.OK, rig.send(tc.command(CommandCode.TABLE_VERIFY, TcBuilder.u16(image.length))));
+        assertEquals(CommandReason.OK, rig.send(tc.command(CommandCode.TABLE_COMMIT,
+                TcBuilder.u16(TableImage.tableId(image, image.length)))));
+        assertEquals(0, rig.fsw.commands().executionFailures());
+    }
+
+    @Test
+    void shouldWriteTheEngineeringFlushInVersionThreeOnly() {
+        int n = DemoCup.table().count();
+        byte[] build = flushImage(0);
+        assertEquals(TableImage.VERSION, build[2]); // commands.md §4.1: the build's flush needs no extension
+        assertEquals(138 + 4 * n, build.length); // §4.1: L = 138 + 4 n in version 1
+        byte[] minute = flushImage(60);
+        assertEquals(TableImage.VERSION_FLUSH, minute[2]);
+        assertEquals(158 + 4 * n, minute.length); // §4.1: L = 158 + 4 n in version 3
+        assertEquals(60, minute[136 + 4 * n + 16 + 3]); // §4.1: the flush after the 16 octets of styles
+        ParameterTable back = new ParameterTable();
+        assertEquals(0, TableImage.decode(minute, minute.length, back, DemoCup.INSTRUMENT.limits()));
+        assertEquals(60, back.sweep.engineeringFlushSeconds);
+        assertTrue(back.sweep.defaultStyles()); // the styles written as their defaults come back so
+        assertEquals(0, TableImage.decode(build, build.length, back, DemoCup.INSTRUMENT.limits()));
+        assertEquals(0, back.sweep.engineeringFlushSeconds); // §4.1: version 1 loads with the build's flush
+    }
+
+    @Test
+    void shouldRefuseAnEngineeringFlushOutsideItsRange() {
+        // commands.md §4.1/§4.2: 0 (the build's) or 1..600 s; else TableStatus 19 BAD_FLUSH
+        for (int seconds : new int[] {1, 600}) {
+            byte[] image = flushImage(seconds);
+            assertEquals(0, TableImage.decode(image, image.length, new ParameterTable(), DemoCup.INSTRUMENT.limits()));
+        }
+        for (int seconds : new int[] {-1, 601, Integer.MAX_VALUE}) {
+            byte[] image = flushImage(seconds);
+            assertEquals(TableStatus.BAD_FLUSH, TableImage.decode(image, image.length, new ParameterTable(),
+                    DemoCup.INSTRUMENT.limits()), seconds + " s");
+        }
+        assertEquals(19, TableStatus.BAD_FLUSH); // commands.md §4.2: the next code after 18 BAD_STYLE
+        assertEquals("BAD_FLUSH", TableStatus.name(19));
+        FswRig rig = new FswRig();
+        byte[] image = flushImage(601);
+        load(rig, image);
+        rig.send(tc.command(CommandCode.TABLE_VERIFY, TcBuilder.u16(image.length)));
+        assertEquals(TableStatus.BAD_FLUSH, rig.fsw.tables().lastDetail());
+        assertFalse(rig.fsw.tables().verified());
+    }
+
+    @Test
+    void shouldFlushTheEngineeringChannelAsTheCommittedTableSays() {
+        long build = rigFlush(new FswRig(), Apid.VC_ENGINEERING);
+        assertEquals(TelemetryWriter.DEFAULT_FLUSH_INTERVAL_MICROS, build);
+        FswRig.MemoryStore store = new FswRig.MemoryStore();
+        FswRig rig = new FswRig(FswRig.withStore(store));
+        FswRig reference = new FswRig();
+        commit(rig, flushImage(60));
+        commit(reference, flushImage(0));
+        assertEquals(60_000_000L, rigFlush(rig, Apid.VC_ENGINEERING)); // in force at once (§4.2)
+        assertEquals(build, rigFlush(rig, Apid.VC_SCIENCE)); // the science channel keeps the build's
+        assertEquals(build, rigFlush(reference, Apid.VC_ENGINEERING));
+        rig.run(50_000_000);
+        reference.run(50_000_000);
+        // housekeeping every 16 s opens an engineering frame: at 10 s each leaves part-filled alone,
+        // at 60 s they share one frame, so the same packets cost fewer frame octets
+        long packets = rig.fsw.telemetry().counters().packets(Apid.HOUSEKEEPING);
+        assertEquals(reference.fsw.telemetry().counters().packets(Apid.HOUSEKEEPING), packets);
+        assertTrue(packets >= 3, packets + " housekeeping packets");
+        long minute = rig.fsw.telemetry().counters().frameOctets(Apid.VC_ENGINEERING);
+        long tenSeconds = reference.fsw.telemetry().counters().frameOctets(Apid.VC_ENGINEERING);
+        assertTrue(minute < tenSeconds, minute + " octets at 60 s against " + tenSeconds + " at 10 s");
+        FswRig restarted = new FswRig(FswRig.withStore(store));
+        assertEquals(TableManager.RESTORE_OK, restarted.fsw.restoreStatus());
+        assertEquals(60_000_000L, rigFlush(restarted, Apid.VC_ENGINEERING)); // the stored table's, from start-up
+        commit(rig, flushImage(0));
+        assertEquals(build, rigFlush(rig, Apid.VC_ENGINEERING)); // 0: back to the build's
+    }
+
+    private static long rigFlush(FswRig rig, int vc) {
+        return rig.fsw.telemetry().flushInterval(vc);
     }
 
     @Test

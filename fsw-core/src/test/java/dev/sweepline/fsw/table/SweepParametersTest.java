@@ -50,6 +50,11 @@ class SweepParametersTest {
         assertEquals(TableStatus.BAD_GAIN_THRESHOLDS, with(p -> p.gainDownFractionQ16 = p.gainUpFractionQ16 / 32 + 1));
         assertEquals(TableStatus.BAD_ALPHA, with(p -> p.alphaRatioQ16 = 65_536));
         assertEquals(TableStatus.BAD_NOISE, with(p -> p.significanceSigmas = 0));
+        // engineering flush: 0 (the build's) or 1..600 s (SweepParameters.MAX_ENGINEERING_FLUSH_SECONDS)
+        assertEquals(TableStatus.OK, with(p -> p.engineeringFlushSeconds = 0));
+        assertEquals(TableStatus.OK, with(p -> p.engineeringFlushSeconds = 600));
+        assertEquals(TableStatus.BAD_FLUSH, with(p -> p.engineeringFlushSeconds = 601));
+        assertEquals(TableStatus.BAD_FLUSH, with(p -> p.engineeringFlushSeconds = -1));
     }
 
     @Test

@@ -46,7 +46,7 @@ public record CommandReport(CucTime time, int sequenceCount, int type, int comma
         "OK", "EMPTY", "TOO_MANY_WINDOWS", "OUT_OF_DAC_RANGE", "NOT_MONOTONIC", "MISSING_DATA",
         "BAD_INTEGRATION", "BAD_SETTLE", "BAD_BAND", "BAD_RESURVEY", "BAD_LOCK_LOSS",
         "BAD_GAIN_THRESHOLDS", "BAD_ALPHA", "BAD_NOISE", "ABOVE_VOLTAGE_LIMIT", "SETTLE_BELOW_SLEW",
-        "SETTLE_TOO_SHORT", "BAD_EDGE_SEARCH", "BAD_STYLE",
+        "SETTLE_TOO_SHORT", "BAD_EDGE_SEARCH", "BAD_STYLE", "BAD_FLUSH",
     };
 
     /** Name of a reason code of commands.md §3, or "UNKNOWN". */

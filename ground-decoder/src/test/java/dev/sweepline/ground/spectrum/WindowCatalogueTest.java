@@ -17,14 +17,20 @@ class WindowCatalogueTest {
         return image(1);
     }
 
-    /** As {@link #image()} in format {@code version}: version 2 has 16 octets of styles after the windows (§4.1). */
+    /**
+     * As {@link #image()} in format {@code version}: version 2 has 16 octets of styles after the windows,
+     * version 3 also the engineering flush, seconds, after them (§4.1).
+     */
     private static byte[] image(int version) {
         int n = 2;
-        int length = 136 + 4 * n + 2 + (version == 2 ? 16 : 0);
+        int length = 136 + 4 * n + 2 + (version >= 2 ? 16 : 0) + (version >= 3 ? 4 : 0);
         ByteBuffer b = ByteBuffer.allocate(length);
         b.putShort(0, (short) 0x5354).put(2, (byte) version).putShort(4, (short) length).putShort(6, (short) n);
-        if (version == 2) {
+        if (version >= 2) {
             b.putInt(144, 1).putInt(148, 400_000); // focusStyle design, budget 0.4 s (values the catalogue ignores)
+        }
+        if (version >= 3) {
+            b.putInt(160, 60); // engineeringFlushSeconds at 136 + 4 n + 16 (§4.1)
         }
         b.putShort(136, (short) 1000).putShort(138, (short) 1100).putShort(140, (short) 1100).putShort(142, (short) 1200);
         byte[] a = b.array();
@@ -38,7 +44,19 @@ class WindowCatalogueTest {
         int id = c.add(image(2));
         assertTrue(c.knows(id));
         assertEquals(0.100150 * 1100 - 0.8, c.lowVolts(id, 1), 1e-12); // ICD §8, the same windows as version 1
-        assertEquals(-1, c.add(image(3))); // commands.md §4.1: versions 1 and 2 only
+        assertEquals(0, c.engineeringFlushSeconds(id)); // §4.1: a version-2 image keeps the build's flush
+        assertEquals(-1, c.add(image(4))); // commands.md §4.1: versions 1, 2 and 3 only
+    }
+
+    @Test
+    void shouldLearnTheEngineeringFlushOfAVersionThreeImage() {
+        WindowCatalogue c = new WindowCatalogue();
+        int id = c.add(image(3));
+        assertTrue(c.knows(id));
+        assertEquals(0.100150 * 1100 - 0.8, c.lowVolts(id, 1), 1e-12); // ICD §8, the same windows as version 1
+        assertEquals(60, c.engineeringFlushSeconds(id)); // the value written at 136 + 4 n + 16 above
+        assertEquals(0, c.engineeringFlushSeconds(c.add(image(1)))); // §4.1: version 1 keeps the build's flush
+        assertEquals(-1, c.engineeringFlushSeconds(0x1234)); // a table the catalogue was never given
     }
 
     @Test

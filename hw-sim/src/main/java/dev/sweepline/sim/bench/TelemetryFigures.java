@@ -19,7 +19,9 @@ import java.util.Map;
  * @param frames                  frames emitted
  * @param virtualChannels         per virtual channel by name (science, engineering; telemetry ICD §3.3): the
  *                                frames it sent against the packets they carried
- * @param flushIntervalSeconds    a frame holding data longer than this is sent part-filled (idle fill)
+ * @param flushIntervalSeconds    the engineering channel's flush interval in force at the end of the run (the
+ *                                table's engineeringFlushSeconds, else the build's): a frame holding data
+ *                                longer than this is sent part-filled (idle fill)
  */
 public record TelemetryFigures(double frameBitsPerSecond, Map<String, Double> packetBitsPerSecond,
         Map<SweepMode, Double> spectrumBitsPerSecond, double allocationBitsPerSecond, long frames,
@@ -65,6 +67,6 @@ public record TelemetryFigures(double frameBitsPerSecond, Map<String, Double> pa
                         + c.packetOctets(Apid.COMMAND_REPORT)) / seconds));
         return new TelemetryFigures(8.0 * c.frameOctets() / seconds, byApid, byMode,
                 config.allocationBitsPerSecond(), fsw.telemetry().framesEmitted(), vcs,
-                config.flight().flushIntervalMicros / 1e6);
+                fsw.telemetry().flushInterval(Apid.VC_ENGINEERING) / 1e6);
     }
 }

@@ -70,6 +70,12 @@ public final class BudgetRunner {
         double seconds = plan.sampleMinutes() * 60;
         Scenario scaled = DistanceScaling.at(plan.scenario(), distanceAu, seconds);
         BenchConfig config = BenchConfig.defaults(scaled, seed, seconds, plan.instrument()).withAllocation(phase.allocationBitsPerSecond());
+        if (plan.engineeringFlushSeconds() != 0) {
+            config = config.withFlight(f -> {
+                f.parameters = f.parameters.copy();
+                f.parameters.engineeringFlushSeconds = plan.engineeringFlushSeconds();
+            });
+        }
         ScriptRunner commands = new ScriptRunner(PhaseCommands.of(phase.mode(), config.flight()), true, null);
         RunSummary s = ClosedLoopBench.run(config, ClosedLoopBench.Progress.NONE,
                 ClosedLoopBench.Hooks.NONE.withCycle(commands)).summary();

@@ -17,10 +17,12 @@ import java.util.List;
  * @param phases            the phases, in time order
  * @param passes            downlink passes
  * @param instrument       the instrument flown in every phase
+ * @param engineeringFlushSeconds the start-up table's engineering frame flush interval, seconds (0: the
+ *                          build's; commands.md §4.1 engineeringFlushSeconds)
  */
 public record OrbitPlan(String name, String description, Scenario scenario, double sampleMinutes,
         double sampleEveryHours, double storageMegabits, List<Phase> phases, List<Pass> passes,
-        InstrumentModel instrument) {
+        InstrumentModel instrument, int engineeringFlushSeconds) {
 
     /**
      * A downlink pass.

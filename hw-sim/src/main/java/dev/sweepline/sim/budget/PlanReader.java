@@ -5,6 +5,7 @@ import dev.sweepline.sim.instrument.InstrumentKey;
 import dev.sweepline.sim.instrument.InstrumentModel;
 import dev.sweepline.sim.scenario.ScenarioLoader;
 import dev.sweepline.fsw.host.yaml.FileFormatException;
+import dev.sweepline.fsw.table.SweepParameters;
 import dev.sweepline.fsw.host.yaml.Section;
 import dev.sweepline.fsw.host.yaml.YamlNode;
 import dev.sweepline.fsw.host.yaml.YamlTreeReader;
@@ -21,8 +22,10 @@ import java.util.List;
  */
 public final class PlanReader {
     private static final String FORMAT = "sweepline-plan/1";
+    /** Plan key of the start-up table's engineering flush interval, seconds. */
+    private static final String FLUSH = "engineeringFlushSeconds";
     private static final List<String> TOP = List.of("format", "name", "description", "scenario", "sampleMinutes",
-            "sampleEveryHours", "storageMegabits", "phases", "passes", InstrumentKey.KEY);
+            "sampleEveryHours", "storageMegabits", "phases", "passes", InstrumentKey.KEY, FLUSH);
     private static final List<String> PHASE = List.of("name", "startHours", "endHours", "distanceAu", "mode",
             "allocationBitsPerS");
     private static final List<String> PASS = List.of("startHours", "hours", "bitsPerS");
@@ -66,7 +69,18 @@ public final class PlanReader {
         List<Phase> phases = phases(file, top.required("phases"));
         List<OrbitPlan.Pass> passes = top.has("passes") ? passes(file, top.required("passes")) : List.of();
         return new OrbitPlan(top.text("name"), top.text("description", ""), scenario, sampleMinutes, every, storage,
-                phases, passes, instrument);
+                phases, passes, instrument, top.has(FLUSH) ? flushSeconds(file, top) : 0);
+    }
+
+    /** The plan's engineering flush: a whole number of seconds, 0 (the build's) or 1..600 (commands.md §4.1). */
+    private static int flushSeconds(String file, Section top) {
+        double v = top.number(FLUSH);
+        if (v != Math.rint(v) || v < 0 || v > SweepParameters.MAX_ENGINEERING_FLUSH_SECONDS) {
+            throw new FileFormatException(file, top.required(FLUSH).line(), FLUSH, "expected whole seconds, 0 (the "
+                    + "build's) or 1.." + SweepParameters.MAX_ENGINEERING_FLUSH_SECONDS + ", got "
+                    + FileFormatException.number(v));
+        }
+        return (int) v;
     }
 
     private static List<Phase> phases(String file, YamlNode node) {

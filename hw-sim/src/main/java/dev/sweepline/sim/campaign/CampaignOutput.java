@@ -78,6 +78,16 @@ public final class CampaignOutput {
 
     /** Writes the campaign-wide results from all of its runs; returns the recommended set or null. */
     public static SetResult writeResults(Path dir, CampaignSpec spec, List<RunRow> rows) throws IOException {
+        return writeResults(dir, spec, rows, null);
+    }
+
+    /**
+     * As {@link #writeResults(Path, CampaignSpec, List)}, the report's side-by-side comparison showing
+     * sets {@code compare[0]} and {@code compare[1]} (set numbers of {@code spec}, checked by the caller),
+     * or, when {@code compare} is null, the recommended set beside {@link #comparedWith}'s choice.
+     */
+    public static SetResult writeResults(Path dir, CampaignSpec spec, List<RunRow> rows, int[] compare)
+            throws IOException {
         Files.createDirectories(dir);
         List<SetResult> sets = SetResult.aggregate(spec, rows);
         List<SetResult> front = ParetoFront.of(sets);
@@ -119,13 +129,20 @@ public final class CampaignOutput {
             writeRecommended(dir.resolve("recommended.yaml"), spec, best);
             Files.write(dir.resolve(RECOMMENDED_IMAGE), recommendedImage(spec, best));
         }
-        CampaignReport.write(dir, spec, sets, front, best, note(rec), inert, comparedWith(rec, sets, front));
+        SetResult left = compare == null ? best : numbered(sets, compare[0]);
+        SetResult right = compare == null ? comparedWith(rec, sets, front) : numbered(sets, compare[1]);
+        CampaignReport.write(dir, spec, sets, front, best, note(rec), inert, left, right);
         return best;
     }
 
     /** The grid axes of {@code spec} that changed nothing in {@code rows} ({@link InertAxes}). */
     public static List<String> inertAxes(CampaignSpec spec, List<RunRow> rows) {
         return InertAxes.of(spec, rows);
+    }
+
+    private static SetResult numbered(List<SetResult> sets, int set) {
+        return sets.stream().filter(s -> s.set() == set).findFirst()
+                .orElseThrow(() -> new IllegalArgumentException("no results for set " + set));
     }
 
     /**

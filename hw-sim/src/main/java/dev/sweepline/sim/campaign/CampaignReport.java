@@ -23,7 +23,7 @@ final class CampaignReport {
     }
 
     static void write(Path dir, CampaignSpec spec, List<SetResult> sets, List<SetResult> front, SetResult best,
-            String recommendationNote, List<String> inertAxes, SetResult compared) throws IOException {
+            String recommendationNote, List<String> inertAxes, SetResult left, SetResult right) throws IOException {
         byte[] rate = chart(spec, sets, front, best, true);
         byte[] cadence = chart(spec, sets, front, best, false);
         Files.write(dir.resolve("pareto.png"), rate);
@@ -51,10 +51,9 @@ final class CampaignReport {
         h.heading("Pareto front");
         h.image(rate, "accuracy against telemetry rate, Pareto front marked");
         h.image(cadence, "accuracy against cadence, Pareto front marked");
-        if (best != null && compared != null && compared != best) {
-            h.heading("Side by side: set " + best.set() + " and set " + compared.set());
-            h.table(List.of("", "set " + best.set() + " (recommended)", "set " + compared.set()),
-                    SideBySide.rows(spec, best, compared));
+        if (left != null && right != null && left != right) {
+            h.heading("Side by side: set " + left.set() + " and set " + right.set());
+            h.table(List.of("", sideLabel(left, best), sideLabel(right, best)), SideBySide.rows(spec, left, right));
         }
         boolean jumps = !spec.base().jumps().isEmpty();
         h.heading("Parameter sets");
@@ -92,6 +91,11 @@ final class CampaignReport {
         return ParetoChart.render(rate ? "Accuracy against telemetry rate" : "Accuracy against cadence",
                 rate ? "telemetry, bit/s" : "cadence, spectra per second", "mean median error of n, U, T (%)",
                 points, rate ? spec.allocationBitsPerSecond() : Double.NaN);
+    }
+
+    /** A side-by-side column heading: the set, marked when it is the recommended one. */
+    private static String sideLabel(SetResult s, SetResult best) {
+        return "set " + s.set() + (s == best ? " (recommended)" : "");
     }
 
     static String describe(CampaignSpec spec, SetResult s) {

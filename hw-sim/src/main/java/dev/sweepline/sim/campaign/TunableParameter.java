@@ -37,7 +37,10 @@ public enum TunableParameter {
             p -> p.robustnessMarginWindows),
     /** Survey style: 0 the table's dwell, else a quick survey at this many periods per window. */
     SURVEY_INTEGRATION_PERIODS("surveyIntegrationPeriods", 1, (p, v) -> p.surveyIntegrationPeriods = v,
-            p -> p.surveyIntegrationPeriods);
+            p -> p.surveyIntegrationPeriods),
+    /** Telemetry: engineering frame flush interval, seconds (0: the build's 10 s; 1..600; commands.md §4.1). */
+    ENGINEERING_FLUSH_SECONDS("engineeringFlushSeconds", 1, (p, v) -> p.engineeringFlushSeconds = v,
+            p -> p.engineeringFlushSeconds);
 
     private final String key;
     private final int scale;

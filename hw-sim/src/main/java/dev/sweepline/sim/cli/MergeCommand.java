@@ -32,6 +32,10 @@ final class MergeCommand implements Callable<Integer> {
     @CommandLine.Mixin
     InstrumentOption instrument = new InstrumentOption();
 
+    @Option(names = "--compare", paramLabel = "A,B", description = "Put sets A and B side by side in the report "
+            + "(as tune --compare).")
+    String compare;
+
     @Override
     public Integer call() throws IOException {
         instrument.resolve();
@@ -39,6 +43,7 @@ final class MergeCommand implements Callable<Integer> {
         List<RunRow> rows;
         try {
             spec = CampaignReader.load(campaign, instrument.given());
+            TuneCommand.comparePair(compare, spec);
             rows = CampaignOutput.readRuns(spec, shards);
         } catch (FileFormatException e) {
             throw CliException.input("merge error: " + e.getMessage());
@@ -47,7 +52,8 @@ final class MergeCommand implements Callable<Integer> {
         }
         OutputFolder.create(out);
         CampaignOutput.writeRuns(out, rows);
-        TuneCommand.report(CampaignOutput.writeResults(out, spec, rows), out, CampaignOutput.inertAxes(spec, rows));
+        TuneCommand.report(CampaignOutput.writeResults(out, spec, rows, TuneCommand.comparePair(compare, spec)), out,
+                CampaignOutput.inertAxes(spec, rows));
         return 0;
     }
 }

@@ -41,6 +41,10 @@ final class TuneCommand implements Callable<Integer> {
     @Option(names = "--shard", paramLabel = "i/N", description = "Run only shard i of N (1-based).")
     String shard;
 
+    @Option(names = "--compare", paramLabel = "A,B", description = "Put sets A and B (set numbers of sets.csv) "
+            + "side by side in the report (default: the recommended set and the set it is best compared with).")
+    String compare;
+
     @Override
     public Integer call() throws Exception {
         instrument.resolve();
@@ -54,6 +58,7 @@ final class TuneCommand implements Callable<Integer> {
         } catch (IllegalArgumentException e) {
             throw new CliException(ExitStatus.USAGE, "--shard " + shard + ": " + e.getMessage());
         }
+        int[] pair = comparePair(compare, spec);
         OutputFolder.create(out);
         long jobs = (long) spec.setCount() * spec.runsPerSet();
         System.out.printf(Locale.ROOT, "campaign %s: %d sets x %d runs of %.0f s, shard %s, %d threads%n",
@@ -71,8 +76,40 @@ final class TuneCommand implements Callable<Integer> {
             System.out.println("wrote " + out.resolve(CampaignOutput.RUNS) + "; merge the shards with 'merge'");
             return 0;
         }
-        report(CampaignOutput.writeResults(out, spec, rows), out, CampaignOutput.inertAxes(spec, rows));
+        report(CampaignOutput.writeResults(out, spec, rows, pair), out, CampaignOutput.inertAxes(spec, rows));
         return 0;
+    }
+
+    /**
+     * The two set numbers of {@code --compare A,B}, or null without the option.
+     *
+     * @throws CliException (usage) unless they are two different set numbers of the campaign's 0..sets-1
+     */
+    static int[] comparePair(String option, CampaignSpec spec) {
+        if (option == null) {
+            return null;
+        }
+        String[] parts = option.split(",", -1);
+        int last = spec.setCount() - 1;
+        try {
+            if (parts.length != 2) {
+                throw new NumberFormatException("two set numbers");
+            }
+            int[] pair = {Integer.parseInt(parts[0].trim()), Integer.parseInt(parts[1].trim())};
+            for (int set : pair) {
+                if (set < 0 || set > last) {
+                    throw new CliException(ExitStatus.USAGE, "--compare " + option + ": set " + set
+                            + " is outside the campaign's sets 0.." + last);
+                }
+            }
+            if (pair[0] == pair[1]) {
+                throw new CliException(ExitStatus.USAGE, "--compare " + option + ": name two different sets");
+            }
+            return pair;
+        } catch (NumberFormatException e) {
+            throw new CliException(ExitStatus.USAGE, "--compare " + option + ": expected two set numbers A,B (0.."
+                    + last + ")");
+        }
     }
 
     static void report(SetResult best, Path out, List<String> inertAxes) {

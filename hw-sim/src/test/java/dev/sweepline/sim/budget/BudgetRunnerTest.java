@@ -106,6 +106,26 @@ class BudgetRunnerTest {
     }
 
     @Test
+    void shouldSendTheEngineeringChannelInFewerFrameBitsWithTheLongerFlushOfThePlan() {
+        OrbitPlan build = PlanReader.parse(MODES, "modes.yaml");
+        OrbitPlan minute = PlanReader.parse("engineeringFlushSeconds: 60\n" + MODES, "modes.yaml");
+        assertEquals(0, build.engineeringFlushSeconds()); // absent: the build's (plans/FORMAT.md)
+        assertEquals(60, minute.engineeringFlushSeconds());
+        for (int phase = 0; phase < 2; phase++) { // survey (the committed table keeps the flush) and adaptive
+            var a = BudgetRunner.fly(build, build.phases().get(phase), 0.2, 1).summary().telemetry();
+            var b = BudgetRunner.fly(minute, minute.phases().get(phase), 0.2, 1).summary().telemetry();
+            assertEquals(10.0, a.flushIntervalSeconds()); // TelemetryWriter.DEFAULT_FLUSH_INTERVAL_MICROS
+            assertEquals(60.0, b.flushIntervalSeconds());
+            assertTrue(b.virtualChannels().get("engineering").frameBitsPerSecond()
+                    < a.virtualChannels().get("engineering").frameBitsPerSecond(), "phase " + phase);
+        }
+        var refused = assertThrows(FileFormatException.class,
+                () -> PlanReader.parse("engineeringFlushSeconds: 601\n" + MODES, "modes.yaml"));
+        assertTrue(refused.getMessage().contains("engineeringFlushSeconds"), refused.getMessage());
+        assertTrue(refused.getMessage().contains("1..600, got 601"), refused.getMessage());
+    }
+
+    @Test
     void shouldFlyASurveyPhaseOnTheStartUpTableCommittedWithFocusOff() {
         OrbitPlan plan = PlanReader.parse(MODES, "modes.yaml");
         BudgetRunner.Flown f = BudgetRunner.fly(plan, plan.phases().get(0), 0.2, 1);

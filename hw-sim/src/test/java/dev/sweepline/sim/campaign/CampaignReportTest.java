@@ -23,12 +23,13 @@ class CampaignReportTest {
 
     private static CampaignSpec spec;
     private static Document report;
+    private static List<RunRow> rows;
 
     @BeforeAll
     static void write() throws Exception {
         // shock-tuning: edgeSearchWindows x halfWidthPerFwhm x resurveyEvery, two values each, 8 members
         spec = CampaignReader.load(Path.of("src/main/resources/campaigns/shock-tuning.yaml"));
-        List<RunRow> rows = new ArrayList<>();
+        rows = new ArrayList<>();
         for (int set = 0; set < spec.setCount(); set++) {
             double[] v = spec.setValues(set); // edgeSearchWindows, halfWidthPerFwhm, resurveyEvery
             for (int run = 0; run < spec.runsPerSet(); run++) {
@@ -53,6 +54,24 @@ class CampaignReportTest {
         List<String> warnings = XhtmlImages.texts(report, "p").stream().filter(p -> p.startsWith("Warning")).toList();
         assertEquals(1, warnings.size(), warnings.toString());
         assertTrue(warnings.get(0).contains("edgeSearchWindows changed nothing"), warnings.get(0));
+    }
+
+    @Test
+    void shouldPutTheTwoChosenSetsSideBySide() throws Exception {
+        Path chosen = Files.createDirectories(dir.resolve("chosen"));
+        SetResult best = CampaignOutput.writeResults(chosen, spec, rows, new int[] {6, 1});
+        Document d = XhtmlImages.parse(chosen.resolve("report.html"));
+        assertTrue(XhtmlImages.texts(d, "h2").contains("Side by side: set 6 and set 1"), XhtmlImages.texts(d, "h2").toString());
+        List<String> th = XhtmlImages.texts(d, "th");
+        // the column headings name the chosen sets, the recommended one marked (CampaignReport)
+        assertTrue(th.contains("set 6" + (best.set() == 6 ? " (recommended)" : "")), th.toString());
+        assertTrue(th.contains("set 1" + (best.set() == 1 ? " (recommended)" : "")), th.toString());
+        List<String> td = XhtmlImages.texts(d, "td");
+        // the parameters row carries both sets' values in order (shock-tuning.yaml's grid, set 6 and set 1)
+        int at = td.indexOf("parameters");
+        assertEquals(CampaignReport.describe(spec, SetResult.aggregate(spec, rows).get(6)), td.get(at + 1));
+        assertEquals(CampaignReport.describe(spec, SetResult.aggregate(spec, rows).get(1)), td.get(at + 2));
+        assertTrue(td.contains("telemetry (bit/s, mean and worst run)"));
     }
 
     @Test

@@ -113,6 +113,24 @@ class BenchCommandLineErrorTest {
 
     @ParameterizedTest
     @CsvSource(delimiter = '|', value = {
+        "tune|0,99|set 99 is outside the campaign's sets 0..",
+        "tune|-1,2|set -1 is outside the campaign's sets 0..",
+        "tune|1,1|name two different sets",
+        "tune|1|expected two set numbers A,B",
+        "merge|2,x|expected two set numbers A,B",
+        "merge|0,99|set 99 is outside the campaign's sets 0.."})
+    void shouldRefuseACompareOutsideTheCampaignsSetsBeforeAnyWork(String command, String value, String why)
+            throws IOException {
+        Path out = dir.resolve("o");
+        Path shard = Files.createDirectories(dir.resolve("shard-1"));
+        Run r = run(command.equals("tune") ? new String[] {"tune", CAMPAIGN, "--out", out.toString(), "--compare", value}
+                : new String[] {"merge", CAMPAIGN, shard.toString(), "--out", out.toString(), "--compare", value});
+        assertOneLine(r, ExitStatus.USAGE, "sweepline-bench " + command + ": --compare " + value + ": " + why);
+        assertFalse(Files.exists(out));
+    }
+
+    @ParameterizedTest
+    @CsvSource(delimiter = '|', value = {
         "run|--allocation|-5|must be above 0, got -5",
         "run|--baud|0|must be 1 to 2147483647, got 0",
         "run|--minutes|-1|must be above 0, got -1",
