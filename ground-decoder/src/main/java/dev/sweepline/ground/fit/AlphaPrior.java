@@ -15,16 +15,26 @@ package dev.sweepline.ground.fit;
  *       {@link #TEMPERATURE_RATIO_SIGMA}: about 4 (mass-proportional temperatures) in the fast wind, lower
  *       in collisional slow wind (physics.md "alpha temperature" [memory]; Kasper et al. 2008 [memory]), so
  *       ± 2 covers 2 to 6 at 1σ.</li>
+ *   <li>Abundance, only in the fallback ({@link #withAbundance}): ln(n_α/n_p) = ln {@link #ABUNDANCE_MEDIAN}
+ *       ± {@link #ABUNDANCE_SIGMA_LOG}, the log-normal through the ejecta figures of physics.md (He/H &gt; 5 %
+ *       in 37 % of events, &gt; 8.5 % in 12 %; Song et al. 2022): z(0.63) = 0.332, z(0.88) = 1.175, so
+ *       σ = ln(8.5/5)/(1.175 − 0.332) = 0.629 and the median 5 % · e^(−0.332 σ) = 4.06 %. Without it the
+ *       row is zero (residual and gradient) and adds nothing.</li>
  * </ol>
  * Each row adds ((value − mean)/σ)² to χ² and g gᵀ/σ² to the information, g the row's gradient; the
  * same rows give the fit ({@link LeastSquaresRun}), its effective number of free parameters and the bound.
  *
  * @param driftMeanMPerS  mean of U_α − U_p, m/s
  * @param driftSigmaMPerS 1σ of U_α − U_p, m/s
+ * @param abundance       true when the abundance row is in use
  */
-public record AlphaPrior(double driftMeanMPerS, double driftSigmaMPerS) {
-    /** Rows the prior adds. */
-    public static final int ROWS = 2;
+public record AlphaPrior(double driftMeanMPerS, double driftSigmaMPerS, boolean abundance) {
+    /** Rows the prior adds (the abundance row zero when not in use). */
+    public static final int ROWS = 3;
+    /** Median n_α/n_p of the abundance row (see the class note: physics.md ejecta figures, Song et al. 2022). */
+    public static final double ABUNDANCE_MEDIAN = 0.0406;
+    /** 1σ of ln(n_α/n_p) of the abundance row (see the class note). */
+    public static final double ABUNDANCE_SIGMA_LOG = 0.63;
     /** Drift 1σ in units of the proton speed (see the class note; [memory]). */
     public static final double DRIFT_FRACTION = 0.1;
     /** Mean T_α/T_p (physics.md "alpha temperature", [memory]). */
@@ -35,7 +45,12 @@ public record AlphaPrior(double driftMeanMPerS, double driftSigmaMPerS) {
 
     /** The prior of a wind whose proton normal speed is {@code protonSpeedMPerS}: drift 0 ± 0.1 U_p. */
     public static AlphaPrior forProtonSpeed(double protonSpeedMPerS) {
-        return new AlphaPrior(0.0, DRIFT_FRACTION * protonSpeedMPerS);
+        return new AlphaPrior(0.0, DRIFT_FRACTION * protonSpeedMPerS, false);
+    }
+
+    /** This prior with the abundance row added. */
+    public AlphaPrior withAbundance() {
+        return new AlphaPrior(driftMeanMPerS, driftSigmaMPerS, true);
     }
 
     /**
@@ -53,13 +68,20 @@ public record AlphaPrior(double driftMeanMPerS, double driftSigmaMPerS) {
         gradient[0][4] = 1 / driftSigmaMPerS;
         gradient[1][2] = -2 * ratio / p[2] / TEMPERATURE_RATIO_SIGMA;
         gradient[1][5] = 2 * ratio / p[5] / TEMPERATURE_RATIO_SIGMA;
+        if (abundance) {
+            residual[2] = (Math.log(p[3] / p[0]) - Math.log(ABUNDANCE_MEDIAN)) / ABUNDANCE_SIGMA_LOG;
+            gradient[2][0] = -1 / (p[0] * ABUNDANCE_SIGMA_LOG);
+            gradient[2][3] = 1 / (p[3] * ABUNDANCE_SIGMA_LOG);
+        } else {
+            residual[2] = 0;
+        }
     }
 
     /** Σ r_i²: the prior's part of χ² at {@code p}. */
     public double chiSquare(double[] p) {
         double[] r = new double[ROWS];
         rows(p, r, new double[ROWS][PlasmaModel.JOINT_PARAMETERS]);
-        return r[0] * r[0] + r[1] * r[1];
+        return r[0] * r[0] + r[1] * r[1] + r[2] * r[2];
     }
 
     /** The prior's information Σ g gᵀ at {@code p}, 6 × 6, physical parameters. */

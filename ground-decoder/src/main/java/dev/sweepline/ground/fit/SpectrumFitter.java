@@ -129,8 +129,11 @@ public final class SpectrumFitter {
             } else if (coverage != AlphaCoverage.NONE && alphaScore(in, protonModel, best.parameters()) > MIN_ALPHA_SCORE) {
                 // part of the alphas in the band, or a free fit that put the alpha peak outside it (a drifting
                 // alpha peak just above the top window): the constrained component
-                prior = AlphaPrior.forProtonSpeed(best.parameters()[1]);
-                joint = constrainedFit(in, area, protonModel, best, prior);
+                Constrained c = constrainedFit(in, area, protonModel, best, AlphaPrior.forProtonSpeed(best.parameters()[1]));
+                if (c != null) {
+                    prior = c.prior();
+                    joint = c.outcome();
+                }
             }
         }
         if (joint != null) {
@@ -259,9 +262,12 @@ public final class SpectrumFitter {
      * joint model with the {@code prior} rows, started from the proton fit and an alpha density that
      * explains the proton fit's positive residuals in the windows the alphas reach (alphas at U_p with
      * T_α = 4 T_p). Kept when physical and when the χ² drop passes {@link AlphaSelection} with k the
-     * effective number of extra free parameters (3 less the prior's leverage).
+     * effective number of extra free parameters (3 less the prior's leverage). When the fit runs past
+     * {@link #MAX_ALPHA_RATIO} (the n_α–U_α trade-off of a band that holds only the alphas' low tail), it is
+     * tried once more with the abundance row ({@link AlphaPrior#withAbundance}), so alpha-free spectra, whose
+     * constrained fit stays below the limit or is not tried, never pay for the third fit.
      */
-    private static LeastSquaresRun.Outcome constrainedFit(SpectrumInput in, double area, PlasmaModel protonModel,
+    private static Constrained constrainedFit(SpectrumInput in, double area, PlasmaModel protonModel,
             LeastSquaresRun.Outcome protons, AlphaPrior prior) {
         double[] p = protons.parameters();
         double wAlpha = AlphaCoverage.startThermalSpeed(p[2]);
@@ -286,9 +292,16 @@ public final class SpectrumFitter {
         double[] q = o.parameters();
         double alphaRatio = q[3] / q[0];
         double extra = PlasmaModel.JOINT_PARAMETERS - PlasmaModel.PROTON_PARAMETERS - o.leverage();
-        boolean sane = alphaRatio > 0 && alphaRatio < MAX_ALPHA_RATIO && q[4] > 0.7 * q[1] && q[4] < 1.5 * q[1]
+        if (!(alphaRatio < MAX_ALPHA_RATIO)) {
+            return prior.abundance() ? null : constrainedFit(in, area, protonModel, protons, prior.withAbundance());
+        }
+        boolean sane = alphaRatio > 0 && q[4] > 0.7 * q[1] && q[4] < 1.5 * q[1]
                 && extra > 0 && new AlphaSelection(extra).accepts(protons.chiSquare(), o.totalChiSquare());
-        return sane ? o : null;
+        return sane ? new Constrained(o, prior) : null;
+    }
+
+    /** A kept constrained fit and the prior it was fitted with. */
+    private record Constrained(LeastSquaresRun.Outcome outcome, AlphaPrior prior) {
     }
 
     /** True when the covariance exists and every diagonal is positive and finite (errors can be reported). */

@@ -30,7 +30,8 @@
  * physical, the alphas are a constrained component instead: the joint model with the prior rows of {@link
  * dev.sweepline.ground.fit.AlphaPrior} (drift 0 ± 0.1 U_p, T_α/T_p = 4 ± 2), tried only when the proton
  * fit's residuals lean toward such alphas by more than 1σ (a score test), and kept by the same
- * likelihood-ratio test with k the effective number of extra free parameters. (3) The proton angles again, from each species' share of
+ * likelihood-ratio test with k the effective number of extra free parameters; a constrained fit that runs
+ * past n_α/n_p = 0.5 is tried once more with an abundance row (He/H log-normal, median 4.06 %). (3) The proton angles again, from each species' share of
  * the quadrant differences ({@link dev.sweepline.ground.fit.SpeciesFlowAngles}), so that drifting alphas
  * do not pull them toward the field. The bulk speed is U_n / cos θ, its 1σ with the angles' 1σ
  * propagated ({@link dev.sweepline.ground.fit.FlowAngles#sigmaBulkSpeed}). Parameters are (ln n, U, ln w)
