@@ -42,10 +42,10 @@ class AlphaDriftAngleTest {
         double[] lo = NearSunCase.low();
         double[] hi = NearSunCase.high();
         PlasmaModel model = new PlasmaModel(lo, hi, DemoCup.CUP.effectiveAreaM2(), true);
-        double[] sp = new double[4];
-        double[] sa = new double[4];
-        DemoCup.CUP.quadrantShares(k[0], 0, sp);
-        DemoCup.CUP.quadrantShares(k[1], 0, sa);
+        double[] protonShares = new double[4];
+        double[] alphaShares = new double[4];
+        DemoCup.CUP.quadrantShares(k[0], 0, protonShares);
+        DemoCup.CUP.quadrantShares(k[1], 0, alphaShares);
         double[][] q = new double[4][lo.length];
         double[][] species = new double[2][lo.length];
         for (int j = 0; j < lo.length; j++) {
@@ -53,7 +53,7 @@ class AlphaDriftAngleTest {
             species[1][j] = model.speciesCurrent(Species.ALPHA, j, ALPHA_RATIO * N_P, k[2],
                     Species.ALPHA.thermalSpeed(T_RATIO * T_P));
             for (int c = 0; c < 4; c++) {
-                q[c][j] = species[0][j] * sp[c] + species[1][j] * sa[c];
+                q[c][j] = species[0][j] * protonShares[c] + species[1][j] * alphaShares[c];
             }
         }
         return new double[][][] {q, species};
