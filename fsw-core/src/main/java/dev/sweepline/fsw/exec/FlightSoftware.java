@@ -68,7 +68,7 @@ public final class FlightSoftware {
         this.tables = new TableManager(startUp, config.nonVolatileStore, config.instrument.limits());
         this.restoreStatus = tables.restore();
         ParameterTable inForce = tables.activeTable();
-        telemetry.engineeringFlush(inForce.sweep.engineeringFlushSeconds, config.flushIntervalMicros);
+        telemetry.engineeringFlush(inForce.sweep.engineeringFlushSeconds);
         this.housekeeping = new HousekeepingClock(restoreStatus == TableManager.RESTORE_OK
                 ? inForce.housekeepingSeconds * 1_000_000L : config.housekeepingPeriodMicros);
         this.scheduler = new SweepScheduler(config.instrument, inForce.windowTable(), inForce.sweep, null);
@@ -86,7 +86,7 @@ public final class FlightSoftware {
         this.authRestoreStatus = config.authenticateCommands
                 ? authenticator.restore(restoreStatus != TableManager.RESTORE_NONE) : CommandAuthenticator.VOLATILE;
         this.commands = new CommandProcessor(authenticator, scheduler, hv, tables, new CommandReportWriter(telemetry),
-                new FlightTarget(scheduler, faults, routing, housekeeping, events, telemetry, config.flushIntervalMicros));
+                new FlightTarget(scheduler, faults, routing, housekeeping, events, telemetry));
         reportStartUp(events);
     }
 

@@ -21,12 +21,10 @@ final class FlightTarget implements CommandTarget {
     private final HousekeepingClock housekeeping;
     private final EventWriter events;
     private final TelemetryWriter telemetry;
-    private final long buildFlushMicros;
 
     FlightTarget(SweepScheduler scheduler, FaultProtection faults, SweepRouting routing, HousekeepingClock housekeeping,
-            EventWriter events, TelemetryWriter telemetry, long buildFlushMicros) {
+            EventWriter events, TelemetryWriter telemetry) {
         this.telemetry = telemetry;
-        this.buildFlushMicros = buildFlushMicros;
         this.scheduler = scheduler;
         this.faults = faults;
         this.routing = routing;
@@ -55,7 +53,7 @@ final class FlightTarget implements CommandTarget {
         }
         housekeeping.period(table.housekeepingSeconds * 1_000_000L, nowMicros);
         routing.tableCommitted(tableId, table.spectrumDecimation);
-        telemetry.engineeringFlush(table.sweep.engineeringFlushSeconds, buildFlushMicros);
+        telemetry.engineeringFlush(table.sweep.engineeringFlushSeconds);
         events.write(EventWriter.TABLE_COMMITTED, 0, 0, tableId, nowMicros);
         return CommandReason.OK;
     }

@@ -23,6 +23,8 @@ public final class TelemetryWriter {
     private final TelemetryCounters counters = new TelemetryCounters();
     private final int[] sequenceByApid = new int[SpacePacket.MAX_APID + 1];
     private final byte[] packet;
+    /** The build's flush interval, microseconds: what a table's engineering flush of 0 stands for. */
+    private final long buildFlushMicros;
 
     /**
      * @param frameLength         octets per transfer frame
@@ -34,6 +36,7 @@ public final class TelemetryWriter {
     public TelemetryWriter(int frameLength, long flushIntervalMicros, CucTime time, int maxUserDataOctets,
                            FrameSink sink) {
         this.time = time;
+        this.buildFlushMicros = flushIntervalMicros;
         this.packet = new byte[DATA_AT + maxUserDataOctets];
         this.frames = new TransferFrameBuilder(SPACECRAFT_ID, frameLength, flushIntervalMicros, (f, off, len) -> {
             counters.countFrame((f[off + TransferFrameBuilder.ASM_LENGTH + 1] >> 1) & 7, len);
@@ -78,10 +81,10 @@ public final class TelemetryWriter {
 
     /**
      * Sets the flush interval of the engineering virtual channel (VC 1) to {@code seconds}, or back to
-     * the build's {@code buildMicros} when {@code seconds} is 0 (SweepParameters#engineeringFlushSeconds).
+     * the build's (the constructor's) when {@code seconds} is 0 (SweepParameters#engineeringFlushSeconds).
      */
-    public void engineeringFlush(int seconds, long buildMicros) {
-        frames.flushInterval(Apid.VC_ENGINEERING, seconds == 0 ? buildMicros : seconds * 1_000_000L);
+    public void engineeringFlush(int seconds) {
+        frames.flushInterval(Apid.VC_ENGINEERING, seconds == 0 ? buildFlushMicros : seconds * 1_000_000L);
     }
 
     /** The flush interval of virtual channel {@code vc} in force, microseconds. */
