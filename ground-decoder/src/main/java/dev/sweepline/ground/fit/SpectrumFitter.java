@@ -120,16 +120,20 @@ public final class SpectrumFitter {
         }
         AlphaPrior prior = null;
         LeastSquaresRun.Outcome joint = null;
+        PlasmaModel jointModel = null;
         if (m >= MIN_WINDOWS_JOINT) {
+            jointModel = new PlasmaModel(in.lowVolts(), in.highVolts(), area, true); // one for every joint try
             AlphaCoverage coverage = AlphaCoverage.of(protonModel, best.parameters());
-            LeastSquaresRun.Outcome free = coverage == AlphaCoverage.PEAK ? jointFit(in, area, protonModel, best) : null;
+            LeastSquaresRun.Outcome free = coverage == AlphaCoverage.PEAK
+                    ? jointFit(in, area, protonModel, jointModel, best) : null;
             if (free != null) {
                 // a physical free fit: the test alone decides, no second try
                 joint = FREE_ALPHAS.accepts(best.chiSquare(), free.chiSquare()) ? free : null;
             } else if (coverage != AlphaCoverage.NONE && alphaScore(in, protonModel, best.parameters()) > MIN_ALPHA_SCORE) {
                 // part of the alphas in the band, or a free fit that put the alpha peak outside it (a drifting
                 // alpha peak just above the top window): the constrained component
-                Constrained c = constrainedFit(in, area, protonModel, best, AlphaPrior.forProtonSpeed(best.parameters()[1]));
+                Constrained c = constrainedFit(in, protonModel, jointModel, best,
+                        AlphaPrior.forProtonSpeed(best.parameters()[1]));
                 if (c != null) {
                     prior = c.prior();
                     joint = c.outcome();
@@ -145,8 +149,8 @@ public final class SpectrumFitter {
             prior = null;
             flags.add(FitFlag.ALPHAS_NOT_FITTED);
         }
-        FlowAngles angles = speciesAngles(in, preliminary, joint != null ? new PlasmaModel(in.lowVolts(), in.highVolts(),
-                area, true) : protonModel, best.parameters());
+        FlowAngles angles = speciesAngles(in, preliminary, joint != null ? jointModel : protonModel,
+                best.parameters());
         if (densityPrior != null && FlowAngleEstimator.beyondReach(angles, cup)) {
             double n = best.parameters()[0];
             double[][] c = best.covariance();
@@ -210,7 +214,7 @@ public final class SpectrumFitter {
      * alpha peak inside the windows; the selection test is the caller's.
      */
     private static LeastSquaresRun.Outcome jointFit(SpectrumInput in, double area, PlasmaModel protonModel,
-            LeastSquaresRun.Outcome protons) {
+            PlasmaModel joint, LeastSquaresRun.Outcome protons) {
         double[] p = protons.parameters();
         double residual = 0;
         for (int j = 0; j < in.windows(); j++) {
@@ -225,7 +229,6 @@ public final class SpectrumFitter {
         }
         double wAlpha = p[2] * Math.sqrt(START_ALPHA_TEMPERATURE_RATIO * Species.PROTON.massKg() / Species.ALPHA.massKg());
         double[] start = {p[0], p[1], p[2], ratio * p[0], p[1], wAlpha};
-        PlasmaModel joint = new PlasmaModel(in.lowVolts(), in.highVolts(), area, true);
         LeastSquaresRun.Outcome o = LeastSquaresRun.fit(joint, in.totalAmps(), in.sigmaAmps(), start);
         if (o == null || !physical(o.parameters(), in)) {
             return null;
@@ -267,7 +270,7 @@ public final class SpectrumFitter {
      * tried once more with the abundance row ({@link AlphaPrior#withAbundance}), so alpha-free spectra, whose
      * constrained fit stays below the limit or is not tried, never pay for the third fit.
      */
-    private static Constrained constrainedFit(SpectrumInput in, double area, PlasmaModel protonModel,
+    private static Constrained constrainedFit(SpectrumInput in, PlasmaModel protonModel, PlasmaModel joint,
             LeastSquaresRun.Outcome protons, AlphaPrior prior) {
         double[] p = protons.parameters();
         double wAlpha = AlphaCoverage.startThermalSpeed(p[2]);
@@ -284,7 +287,6 @@ public final class SpectrumFitter {
             ratio = DEFAULT_ALPHA_RATIO;
         }
         double[] start = {p[0], p[1], p[2], ratio * p[0], p[1], wAlpha};
-        PlasmaModel joint = new PlasmaModel(in.lowVolts(), in.highVolts(), area, true);
         LeastSquaresRun.Outcome o = LeastSquaresRun.fit(joint, in.totalAmps(), in.sigmaAmps(), start, prior);
         if (o == null || !physical(o.parameters(), in) || !finiteErrors(o.covariance())) {
             return null;
@@ -293,7 +295,7 @@ public final class SpectrumFitter {
         double alphaRatio = q[3] / q[0];
         double extra = PlasmaModel.JOINT_PARAMETERS - PlasmaModel.PROTON_PARAMETERS - o.leverage();
         if (!(alphaRatio < MAX_ALPHA_RATIO)) {
-            return prior.abundance() ? null : constrainedFit(in, area, protonModel, protons, prior.withAbundance());
+            return prior.abundance() ? null : constrainedFit(in, protonModel, joint, protons, prior.withAbundance());
         }
         boolean sane = alphaRatio > 0 && q[4] > 0.7 * q[1] && q[4] < 1.5 * q[1]
                 && extra > 0 && new AlphaSelection(extra).accepts(protons.chiSquare(), o.totalChiSquare());
