@@ -15,6 +15,7 @@ import dev.sweepline.sim.link.InProcessLink;
 import dev.sweepline.sim.plasma.IonPopulation;
 import dev.sweepline.sim.plasma.IonSpecies;
 import dev.sweepline.sim.plasma.PlasmaState;
+import dev.sweepline.sim.scenario.Scenario;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
@@ -24,6 +25,12 @@ import java.util.function.LongFunction;
 /**
  * Watches the closed loop from outside the flight software: every executed step (with its truth)
  * and every sweep decision, with the scenario's true peaks placed beside each sweep.
+ *
+ * <p>Each completed sweep is counted into the run's figures ({@link SweepTally}, bounded), handed to the
+ * sweep log with its truth change ({@link SweepLog}, e.g. {@code decisions.csv} written as the run goes)
+ * and added to a bounded series for the decision chart ({@link DecisionSeries}); the records themselves
+ * are kept in memory only when asked ({@link #keepSweeps}: the ground check needs them), so that a long
+ * run's memory does not grow with its length.
  */
 public final class BenchRecorder implements SweepListener, InProcessLink.StepObserver {
     private WindowVolts windows;
@@ -33,8 +40,16 @@ public final class BenchRecorder implements SweepListener, InProcessLink.StepObs
     private final LongFunction<PlasmaState> truthAt;
     private final SweepListener next;
     private final List<SweepRecord> sweeps = new ArrayList<>();
+    private boolean keepSweeps = true;
+    private SweepLog log = SweepLog.NONE;
+    private SweepTally tally = new SweepTally(0, List.of());
+    private final DecisionSeries series = new DecisionSeries(DecisionSeries.CAPACITY);
+    private final TruePeak trueProtons;
+    private final TruePeak trueAlphas;
     private final Map<String, Integer> modeChanges = new TreeMap<>();
-    private final List<ModeChange> modeChangeLog = new ArrayList<>();
+    private final List<ModeChange> chartModeChanges = new ArrayList<>();
+    private int previousReason = ModeChangeReason.NONE;
+    private long chartModeChangesLeftOut;
     private long steps;
     private long integrationMicros;
     private long saturatedSamples;
@@ -60,6 +75,19 @@ public final class BenchRecorder implements SweepListener, InProcessLink.StepObs
         this.cup = cup;
         this.information = new ProtonInformation(cup.geometry(), preamp);
         this.truthAt = truthAt;
+        this.trueProtons = new TruePeak(cup, IonSpecies.PROTON);
+        this.trueAlphas = new TruePeak(cup, IonSpecies.ALPHA);
+    }
+
+    /**
+     * What to do with each completed sweep from now on: count it for tables of up to {@code maxWindows}
+     * windows and the scenario's {@code jumps}, hand it to {@code log}, and keep it in {@link #sweeps()}
+     * only when {@code keep}.
+     */
+    public void recordSweeps(int maxWindows, List<Scenario.Jump> jumps, SweepLog log, boolean keep) {
+        this.tally = new SweepTally(maxWindows, jumps);
+        this.log = log;
+        this.keepSweeps = keep;
     }
 
     @Override
@@ -144,10 +172,18 @@ public final class BenchRecorder implements SweepListener, InProcessLink.StepObs
         }
         long mid = spectrum.startMicros() + (spectrum.endMicros() - spectrum.startMicros()) / 2;
         PlasmaState truth = truthAt.apply(mid);
-        sweeps.add(new SweepRecord((int) spectrum.sweepNumber(), spectrum.mode(), spectrum.startMicros(),
+        SweepRecord r = new SweepRecord((int) spectrum.sweepNumber(), spectrum.mode(), spectrum.startMicros(),
                 spectrum.endMicros(), spectrum.window(0), spectrum.window(spectrum.count() - 1),
                 spectrum.peakValid() ? spectrum.peakWindowQ8() / 256.0 : Double.NaN, spectrum.mode() == SweepMode.FOCUS ? chosenCentre : Double.NaN,
-                trueWindow(truth, IonSpecies.PROTON), trueWindow(truth, IonSpecies.ALPHA), saturated));
+                trueProtons.of(truth, windows), trueAlphas.of(truth, windows), saturated);
+        tally.add(r);
+        series.add(r);
+        if (log != SweepLog.NONE) {
+            log.add(r, TruthChange.of(r, truthAt, truth));
+        }
+        if (keepSweeps) {
+            sweeps.add(r);
+        }
     }
 
     @Override
@@ -169,32 +205,16 @@ public final class BenchRecorder implements SweepListener, InProcessLink.StepObs
     @Override
     public void onModeChange(SweepMode from, SweepMode to, int reason, long nowMicros) {
         modeChanges.merge(ModeChangeReason.name(reason), 1, Integer::sum);
-        modeChangeLog.add(new ModeChange(nowMicros, from, to, reason));
-        next.onModeChange(from, to, reason, nowMicros);
-    }
-
-    /**
-     * The window where the noise-free current of one species peaks: the peak the instrument would
-     * see from that species alone (for a hot wind it lies well above the bulk-speed E/q, because the
-     * window current grows with v and with the window width). -1 when the species is absent.
-     */
-    private int trueWindow(PlasmaState plasma, IonSpecies species) {
-        for (IonPopulation p : plasma.populations()) {
-            if (p.species().equals(species)) {
-                PlasmaState alone = new PlasmaState(List.of(p), plasma.bx(), plasma.by(), plasma.bz());
-                int best = -1;
-                double bestAmps = 0;
-                for (int w = 0; w < windows.count(); w++) {
-                    double amps = cup.totalCurrent(alone, windows.lowVolts(w), windows.highVolts(w));
-                    if (amps > bestAmps) {
-                        bestAmps = amps;
-                        best = w;
-                    }
-                }
-                return best;
-            }
+        // the periodic resurvey and the lock regained right after it are routine: the chart leaves them out
+        boolean routine = reason == ModeChangeReason.RESURVEY
+                || reason == ModeChangeReason.LOCK_ACQUIRED && previousReason == ModeChangeReason.RESURVEY;
+        previousReason = reason;
+        if (!routine && chartModeChanges.size() < MAX_CHART_MODE_CHANGES) {
+            chartModeChanges.add(new ModeChange(nowMicros, from, to, reason));
+        } else if (!routine) {
+            chartModeChangesLeftOut++;
         }
-        return -1;
+        next.onModeChange(from, to, reason, nowMicros);
     }
 
     /** The scenario's plasma at {@code micros} of simulated time (the truth). */
@@ -202,18 +222,48 @@ public final class BenchRecorder implements SweepListener, InProcessLink.StepObs
         return truthAt.apply(micros);
     }
 
-    /** Sweeps recorded so far, in order. */
+    /**
+     * Sweeps recorded so far, in order; empty when the records are not kept
+     * ({@link #recordSweeps}: the default keeps them).
+     */
     public List<SweepRecord> sweeps() {
         return sweeps;
+    }
+
+    /** True when {@link #sweeps()} holds every sweep. */
+    public boolean keepsSweeps() {
+        return keepSweeps;
+    }
+
+    /** The run's sweep figures so far. */
+    SweepTally tally() {
+        return tally;
+    }
+
+    /** The bounded series of the decision chart. */
+    public DecisionSeries chartSeries() {
+        return series;
     }
 
     /** A mode change as the scheduler reported it. */
     public record ModeChange(long atMicros, SweepMode from, SweepMode to, int reason) {
     }
 
-    /** Every mode change, in order. */
-    public List<ModeChange> modeChangeLog() {
-        return modeChangeLog;
+    /** Mode changes the chart marks at most (a run that loses its lock that often is marked at its start). */
+    static final int MAX_CHART_MODE_CHANGES = 1000;
+
+    /**
+     * The mode changes the decision chart marks, in order: every one but the routine ones (the periodic
+     * resurvey and the lock regained right after it, which the survey-sweep marks already show), the first
+     * {@link #MAX_CHART_MODE_CHANGES}.
+     */
+    public List<ModeChange> chartModeChanges() {
+        return chartModeChanges;
+    }
+
+    /** Non-routine mode changes beyond {@link #MAX_CHART_MODE_CHANGES}, not marked. */
+    public long chartModeChangesLeftOut() {
+        return chartModeChangesLeftOut;
     }
 
     /** Mode changes counted by reason name. */

@@ -109,21 +109,30 @@ public final class ClosedLoopBench {
 
     /**
      * What a caller may attach to a run: where the frames go, a hook into the cycles (command
-     * scripts, fault injection, a commanded mode), and one more observer of the scheduler's callbacks
-     * (after the bench's own recorder).
+     * scripts, fault injection, a commanded mode), one more observer of the scheduler's callbacks
+     * (after the bench's own recorder), where each completed sweep goes as it completes, and whether the
+     * recorder keeps every sweep's record in memory (the ground check needs them; a long run without the
+     * ground need not).
      */
-    public record Hooks(FrameSink frames, CycleHook cycle, SweepListener observer) {
-        /** Frames discarded (still built and counted), nothing else. */
-        public static final Hooks NONE = new Hooks((f, off, len) -> { }, CycleHook.NONE, SweepListener.NONE);
+    public record Hooks(FrameSink frames, CycleHook cycle, SweepListener observer, SweepLog sweeps,
+            boolean keepSweeps) {
+        /** Frames discarded (still built and counted), the sweeps kept, nothing else. */
+        public static final Hooks NONE = new Hooks((f, off, len) -> { }, CycleHook.NONE, SweepListener.NONE,
+                SweepLog.NONE, true);
 
         /** These hooks with another frame sink. */
         public Hooks withFrames(FrameSink sink) {
-            return new Hooks(sink, cycle, observer);
+            return new Hooks(sink, cycle, observer, sweeps, keepSweeps);
         }
 
         /** These hooks with another cycle hook. */
         public Hooks withCycle(CycleHook hook) {
-            return new Hooks(frames, hook, observer);
+            return new Hooks(frames, hook, observer, sweeps, keepSweeps);
+        }
+
+        /** These hooks handing each sweep to {@code log} as it completes; {@code keep}: also keep the records. */
+        public Hooks withSweepLog(SweepLog log, boolean keep) {
+            return new Hooks(frames, cycle, observer, log, keep);
         }
 
         /** These hooks with a set-up step run once on the built flight software (e.g. a commanded mode). */
@@ -138,7 +147,7 @@ public final class ClosedLoopBench {
 
         /** These hooks with another extra observer. */
         public Hooks withObserver(SweepListener listener) {
-            return new Hooks(frames, cycle, listener);
+            return new Hooks(frames, cycle, listener, sweeps, keepSweeps);
         }
     }
 
@@ -177,7 +186,8 @@ public final class ClosedLoopBench {
         FlightConfig flight = flightConfig(config);
         WindowVolts windows = new WindowVolts(flight.table, config.instrument().calibration());
         AlphaDriftDirection drift = config.scenario().alphaDriftDirection();
-        LongFunction<PlasmaState> plasma = micros -> PlasmaStates.of(timeline.at(micros / 1e6), drift);
+        PlasmaStates.Series states = new PlasmaStates.Series(drift);
+        LongFunction<PlasmaState> plasma = micros -> states.of(timeline.at(micros / 1e6));
         BenchRecorder recorder = new BenchRecorder(windows, new FaradayCup(config.instrument().cup()),
                 config.instrument().preamp(), plasma, hooks.observer());
         SimulatedInstrument instrument = new SimulatedInstrument(config.instrument(),
@@ -186,6 +196,8 @@ public final class ClosedLoopBench {
         hooks.cycle().configure(flight, instrument);
         FlightSoftware fsw = new FlightSoftware(flight, link, hooks.frames(), recorder);
         recorder.follow(fsw.scheduler(), config.instrument().calibration());
+        recorder.recordSweeps(Math.max(windows.count(), config.instrument().flight().windowCount()),
+                config.scenario().jumps(), hooks.sweeps(), hooks.keepSweeps());
         hooks.cycle().afterBuild(fsw);
 
         long wallStart = System.nanoTime();

@@ -51,9 +51,14 @@ public record Reacquisition(String label, long frontMicros, int sweeps, double s
                 && Math.abs(r.bandCentre() - r.trueProtonWindow()) <= STRICT_CENTRE_WINDOWS;
     }
 
+    /** The end of the jump's ramp, simulated time, microseconds: sweeps are counted from the first starting then. */
+    static long frontMicros(Jump jump) {
+        return Math.round((jump.atSeconds() + jump.rampSeconds()) * 1e6);
+    }
+
     private static Reacquisition after(Jump jump, List<SweepRecord> records,
             java.util.function.Predicate<SweepRecord> held) {
-        long front = Math.round((jump.atSeconds() + jump.rampSeconds()) * 1e6);
+        long front = frontMicros(jump);
         int counted = 0;
         for (SweepRecord r : records) {
             if (r.startMicros() < front) {

@@ -28,28 +28,18 @@ public final class RunFigures {
     }
 
     /**
-     * The sweep-decision chart: band, found and true peaks per sweep; the mode changes the scheduler
+     * The sweep-decision chart: band, found and true peaks per sweep (every sweep of a run of up to
+     * 16384, evenly taken ones of a longer run: {@link DecisionSeries}); the mode changes the scheduler
      * reported, except the routine ones (the periodic resurvey and the lock regained right after it,
-     * which the survey-sweep marks already show); the scenario's timed events and {@code commands}
-     * (times and labels of the telecommands sent) as events.
+     * which the survey-sweep marks already show; {@link BenchRecorder#chartModeChanges()}); the scenario's
+     * timed events and {@code commands} (times and labels of the telecommands sent) as events.
      */
     public static byte[] decisionChart(BenchConfig config, ClosedLoopBench.Result result,
             List<DecisionChart.Marker> commands) throws IOException {
-        List<DecisionChart.Sweep> sweeps = new ArrayList<>();
         List<DecisionChart.Marker> markers = new ArrayList<>();
-        for (SweepRecord r : result.recorder().sweeps()) {
-            sweeps.add(new DecisionChart.Sweep(r.midMicros() / 1e6, r.mode() == SweepMode.FOCUS, r.firstWindow(),
-                    r.lastWindow(), r.peakWindow(), r.trueProtonWindow(), r.trueAlphaWindow()));
-        }
-        int previous = ModeChangeReason.NONE;
-        for (BenchRecorder.ModeChange m : result.recorder().modeChangeLog()) {
-            boolean routine = m.reason() == ModeChangeReason.RESURVEY
-                    || m.reason() == ModeChangeReason.LOCK_ACQUIRED && previous == ModeChangeReason.RESURVEY;
-            if (!routine) {
-                markers.add(new DecisionChart.Marker(m.atMicros() / 1e6, m.to().name().toLowerCase(Locale.ROOT) + " ("
-                        + ModeChangeReason.name(m.reason()) + ")", false));
-            }
-            previous = m.reason();
+        for (BenchRecorder.ModeChange m : result.recorder().chartModeChanges()) {
+            markers.add(new DecisionChart.Marker(m.atMicros() / 1e6, m.to().name().toLowerCase(Locale.ROOT) + " ("
+                    + ModeChangeReason.name(m.reason()) + ")", false));
         }
         for (ScenarioEvent e : config.scenario().events()) {
             if (e.atSeconds() <= config.durationSeconds()) {
@@ -57,7 +47,7 @@ public final class RunFigures {
             }
         }
         markers.addAll(commands);
-        return DecisionChart.render(sweeps, markers, config.flight().table.count());
+        return DecisionChart.render(result.recorder().chartSeries().points(), markers, config.flight().table.count());
     }
 
     /**

@@ -125,33 +125,35 @@ public final class RunReportWriter {
         return m;
     }
 
-    /** Writes {@code summary.json} and {@code decisions.csv} into {@code dir}, creating it. */
+    /** File name of the decision log in the run folder. */
+    public static final String DECISIONS_CSV = "decisions.csv";
+
+    /** Writes {@code summary.json} and {@code decisions.csv} (from the kept records) into {@code dir}, creating it. */
     public static void write(Path dir, ClosedLoopBench.Result result) throws IOException {
         write(dir, result, Map.of());
     }
 
     /** As {@link #write(Path, ClosedLoopBench.Result)}, with {@code extra} fields appended to the summary. */
     public static void write(Path dir, ClosedLoopBench.Result result, Map<String, Object> extra) throws IOException {
+        if (!result.recorder().keepsSweeps()) {
+            throw new IllegalStateException("the run's sweeps were not kept: its decisions.csv is written as it goes");
+        }
+        writeSummary(dir, result, extra);
+        try (Writer w = Files.newBufferedWriter(dir.resolve(DECISIONS_CSV))) {
+            DecisionsCsv.writeAll(w, result.recorder().sweeps(), result.recorder()::truthAt);
+        }
+    }
+
+    /**
+     * Writes {@code summary.json} alone into {@code dir}, creating it: for a run whose {@code decisions.csv}
+     * was written as it went ({@link DecisionsCsv} as its sweep log).
+     */
+    public static void writeSummary(Path dir, ClosedLoopBench.Result result, Map<String, Object> extra)
+            throws IOException {
         Files.createDirectories(dir);
         Map<String, Object> summary = summaryMap(result.summary());
         summary.putAll(extra);
         JSON.writeValue(dir.resolve("summary.json").toFile(), summary);
-        try (Writer w = Files.newBufferedWriter(dir.resolve("decisions.csv"))) {
-            w.write("sweep,mode,startSeconds,endSeconds,firstWindow,lastWindow,peakWindow,bandCentre,"
-                    + "trueProtonWindow,trueAlphaWindow,locked,alphaLock,saturatedSamples,"
-                    + "truthChangeN,truthChangeU,truthChangeT\n");
-            for (SweepRecord r : result.recorder().sweeps()) {
-                double[] change = TruthChange.of(r, result.recorder()::truthAt);
-                w.write(String.format(Locale.ROOT, "%d,%s,%.6f,%.6f,%d,%d,%s,%s,%d,%d,%b,%b,%d,%s,%s,%s%n", r.sweep(),
-                        r.mode().name().toLowerCase(Locale.ROOT), r.startMicros() / 1e6, r.endMicros() / 1e6,
-                        r.firstWindow(), r.lastWindow(), Double.isNaN(r.peakWindow()) ? ""
-                            : String.format(Locale.ROOT, "%.3f", r.peakWindow()),
-                        Double.isNaN(r.bandCentre()) ? "" : String.format(Locale.ROOT, "%.3f", r.bandCentre()),
-                        r.trueProtonWindow(),
-                        r.trueAlphaWindow(), r.locked(), r.alphaLock(), r.saturatedSamples(), cell(change[0]),
-                        cell(change[1]), cell(change[2])));
-            }
-        }
     }
 
     /** The ground comparison as summary fields: momentErrors (median, p95) and crlbRatio, per moment. */
@@ -282,11 +284,6 @@ public final class RunReportWriter {
         Map<String, Integer> m = new LinkedHashMap<>();
         byMode.forEach((mode, v) -> m.put(mode.name().toLowerCase(Locale.ROOT), v));
         return m;
-    }
-
-    /** A relative change as a CSV cell: six significant digits, empty when undefined. */
-    private static String cell(double v) {
-        return Double.isFinite(v) ? String.format(Locale.ROOT, "%.6g", v) : "";
     }
 
     private static Object finite(double v) {

@@ -1,13 +1,12 @@
 package dev.sweepline.sim.bench;
 
 import dev.sweepline.fsw.sweep.SweepMode;
-import java.util.ArrayList;
 import java.util.EnumMap;
 import java.util.List;
 import java.util.Map;
 
 /**
- * The figures of one closed-loop run, computed from the recorder after the run.
+ * The figures of one closed-loop run, from the recorder's tally of its sweeps ({@link SweepTally}).
  *
  * @param instrument          the instrument flown (its description's name)
  * @param scenario            scenario name
@@ -88,34 +87,19 @@ public record RunSummary(String instrument, String scenario, long seed, double s
     /** The figures of a finished run. */
     static RunSummary of(BenchConfig config, BenchRecorder recorder, TelemetryFigures telemetry,
             double informationEfficiency, double wallSeconds, String decisionHash) {
-        Map<SweepMode, Integer> byMode = new EnumMap<>(SweepMode.class);
+        SweepTally tally = recorder.tally();
+        Map<SweepMode, Integer> byMode = tally.sweepsByMode();
         Map<SweepMode, Double> perSecond = new EnumMap<>(SweepMode.class);
-        for (SweepMode m : SweepMode.values()) {
-            byMode.put(m, 0);
-        }
-        int focus = 0;
-        int locked = 0;
-        int alpha = 0;
-        for (SweepRecord r : recorder.sweeps()) {
-            byMode.merge(r.mode(), 1, Integer::sum);
-            if (r.mode() == SweepMode.FOCUS) {
-                focus++;
-                locked += r.locked() ? 1 : 0;
-                alpha += r.alphaLock() ? 1 : 0;
-            }
-        }
         double seconds = config.durationSeconds();
         for (SweepMode m : SweepMode.values()) {
             perSecond.put(m, byMode.get(m) / seconds);
         }
-        List<Reacquisition> reacq = new ArrayList<>();
-        List<Reacquisition> strict = new ArrayList<>();
-        config.scenario().jumps().forEach(j -> reacq.add(Reacquisition.after(j, recorder.sweeps())));
-        config.scenario().jumps().forEach(j -> strict.add(Reacquisition.strictAfter(j, recorder.sweeps())));
+        int focus = tally.focusSweeps();
         return new RunSummary(config.instrument().name(), config.scenario().name(), config.seed(), seconds, wallSeconds, recorder.steps(),
-                byMode, perSecond, focus == 0 ? Double.NaN : (double) locked / focus, alpha, reacq,
+                byMode, perSecond, focus == 0 ? Double.NaN : (double) tally.lockedSweeps() / focus, tally.alphaLocks(),
+                tally.reacquisitions(),
                 recorder.integrationMicros() / (seconds * 1e6), recorder.saturatedSamples(),
                 recorder.unsettledSamples(), recorder.modeChanges(), telemetry, informationEfficiency, decisionHash,
-                TrackingError.of(recorder.sweeps()), strict);
+                tally.tracking(), tally.strictReacquisitions());
     }
 }

@@ -17,9 +17,14 @@ public final class TruthChange {
 
     /** Relative change of n, U, T over {@code sweep}; NaN for each when the protons are absent at an end. */
     public static double[] of(SweepRecord sweep, LongFunction<PlasmaState> truthAt) {
+        return of(sweep, truthAt, truthAt.apply(sweep.midMicros()));
+    }
+
+    /** As {@link #of(SweepRecord, LongFunction)}, with the plasma at the sweep's mid-time already at hand. */
+    public static double[] of(SweepRecord sweep, LongFunction<PlasmaState> truthAt, PlasmaState atMid) {
         double[] first = moments(truthAt.apply(sweep.startMicros()));
         double[] last = moments(truthAt.apply(sweep.endMicros()));
-        double[] mid = moments(truthAt.apply(sweep.midMicros()));
+        double[] mid = moments(atMid);
         double[] change = new double[3];
         for (int k = 0; k < 3; k++) {
             change[k] = first == null || last == null || mid == null ? Double.NaN

@@ -23,6 +23,7 @@ import dev.sweepline.fsw.host.ExitStatus;
 import dev.sweepline.fsw.host.Ranges;
 import java.util.List;
 import dev.sweepline.sim.bench.ClosedLoopBench;
+import dev.sweepline.sim.bench.DecisionsCsv;
 import dev.sweepline.sim.bench.RunReportWriter;
 import dev.sweepline.sim.bench.RunFigures;
 import dev.sweepline.sim.report.DecisionChart;
@@ -128,11 +129,14 @@ final class RunCommand implements Callable<Integer> {
             parsed.images().forEach(windows::add);
         }
         ClosedLoopBench.Result result;
+        // decisions.csv is written as the run goes; the records stay in memory only for the ground check
         try (ConsoleProgress progress = new ConsoleProgress("run " + sc.name());
                 FrameFile frames = new FrameFile(out.resolve("telemetry.tm"));
-                UplinkLog uplink = UplinkLog.create(out.resolve(UplinkLog.FILE))) {
-            result = ClosedLoopBench.run(config, progress, frames,
-                    script == null ? ClosedLoopBench.CycleHook.NONE : script.recordingTo(uplink));
+                UplinkLog uplink = UplinkLog.create(out.resolve(UplinkLog.FILE));
+                DecisionsCsv decisionLog = DecisionsCsv.create(out.resolve(RunReportWriter.DECISIONS_CSV))) {
+            result = ClosedLoopBench.run(config, progress, ClosedLoopBench.Hooks.NONE.withFrames(frames)
+                    .withCycle(script == null ? ClosedLoopBench.CycleHook.NONE : script.recordingTo(uplink))
+                    .withSweepLog(decisionLog, !noGround));
         }
         if (script != null) {
             printCommandOutcome(script);
@@ -144,7 +148,7 @@ final class RunCommand implements Callable<Integer> {
         byte[] decisions = RunFigures.decisionChart(config, result, commandMarkers(script));
         Files.write(out.resolve(RunFigures.DECISIONS_PNG), decisions);
         if (noGround) {
-            RunReportWriter.write(out, result, extra);
+            RunReportWriter.writeSummary(out, result, extra);
             System.out.println("wrote " + out.resolve("summary.json") + ", decisions.csv, decisions.png and telemetry.tm"
                     + " (no ground products)");
             return RunWarnings.print(warnings, System.out);
@@ -162,7 +166,7 @@ final class RunCommand implements Callable<Integer> {
                 Files.readAllBytes(groundDir.resolve(GroundProcessing.REPORT)), TruthSections.of(figures)));
         extra.putAll(RunReportWriter.groundMap(figures));
         RunReportWriter.printGround(figures, System.out);
-        RunReportWriter.write(out, result, extra);
+        RunReportWriter.writeSummary(out, result, extra);
         System.out.println("wrote " + out.resolve("summary.json") + ", decisions.csv, decisions.png, telemetry.tm, "
                 + "report.html"
                 + " and the ground products in " + groundDir);

@@ -20,11 +20,26 @@ public final class SplitCollector {
     private static final double TWO_PI = 2 * Math.PI;
     /** Relative slack of the inside test so that coincident circles count their common arc once. */
     private static final double INSIDE_SLACK = 1e-9;
+    /**
+     * Relative band around the inside test's limit (on squared distances) within which the test falls
+     * back to {@link Math#hypot}: the squared distance is within a few ulps (about 1e-15) of its true
+     * value and hypot within one ulp, so outside this band both give the same answer.
+     */
+    private static final double SQUARED_GUARD = 1e-12;
+    /**
+     * Relative margin of "the image lies inside the collector": far beyond the inside tests' slack and the
+     * rounding of the arc midpoints, so that within it every test would say so.
+     */
+    private static final double WELL_INSIDE = 1e-6;
 
     private final double imageRadiusM;
     private final double collectorRadiusM;
     private final double imageAreaM2;
-    private final double[] breaks = new double[6];
+    private final double[] breaks = new double[7];
+    /** sin and cos of breaks[0..n-1] and (at n) of breaks[0] + 2 pi, each evaluated at most once per circle. */
+    private final double[] sinBreak = new double[7];
+    private final double[] cosBreak = new double[7];
+    private int trigKnown;
     private final double[] cached = new double[4];
     private double cachedSx = Double.NaN;
     private double cachedSy = Double.NaN;
@@ -63,8 +78,15 @@ public final class SplitCollector {
             cached[1] = 0;
             cached[2] = 0;
             cached[3] = 0;
-            addArcs(sxM, syM, imageRadiusM, 0, 0, collectorRadiusM, true);
-            addArcs(0, 0, collectorRadiusM, sxM, syM, imageRadiusM, false);
+            // the centres lie this far apart seen from either circle (hypot ignores the signs)
+            double centres = Math.hypot(sxM, syM);
+            // an image well inside the collector: every arc of the image lies inside the collector disc and
+            // none of the collector's inside the image, which the inside tests would find arc by arc
+            boolean imageInside = centres + imageRadiusM < collectorRadiusM * (1 - WELL_INSIDE);
+            addArcs(sxM, syM, imageRadiusM, 0, 0, collectorRadiusM, centres, true, imageInside);
+            if (!imageInside) {
+                addArcs(0, 0, collectorRadiusM, sxM, syM, imageRadiusM, centres, false, false);
+            }
             for (int q = 0; q < 4; q++) {
                 cached[q] = Math.max(0, cached[q] / imageAreaM2);
             }
@@ -151,9 +173,11 @@ public final class SplitCollector {
 
     /**
      * Adds the contributions of the arcs of circle (cx, cy, r) that lie inside the other disc
-     * (ox, oy, ro) to their quadrants.
+     * (ox, oy, ro) to their quadrants; {@code dist} is the distance of the two centres; {@code allInside}:
+     * every arc is known to lie inside.
      */
-    private void addArcs(double cx, double cy, double r, double ox, double oy, double ro, boolean inclusive) {
+    private void addArcs(double cx, double cy, double r, double ox, double oy, double ro, double dist,
+                         boolean inclusive, boolean allInside) {
         int n = 0;
         if (Math.abs(cx) < r) {
             double phi = Math.acos(-cx / r);
@@ -167,7 +191,6 @@ public final class SplitCollector {
         }
         double dx = ox - cx;
         double dy = oy - cy;
-        double dist = Math.hypot(dx, dy);
         if (dist > Math.abs(r - ro) && dist < r + ro) {
             double alpha = Math.atan2(dy, dx);
             double beta = Math.acos(clamp((dist * dist + r * r - ro * ro) / (2 * dist * r)));
@@ -175,31 +198,73 @@ public final class SplitCollector {
             breaks[n++] = normalise(alpha - beta);
         }
         sort(n);
+        trigKnown = 0;
         if (n == 0) {
-            addArc(cx, cy, r, 0, TWO_PI, ox, oy, ro, inclusive);
+            breaks[0] = 0;
+            addArc(cx, cy, r, 0, 1, TWO_PI, ox, oy, ro, inclusive, allInside);
             return;
         }
+        breaks[n] = breaks[0] + TWO_PI;
         for (int i = 0; i < n; i++) {
-            double a = breaks[i];
-            double b = i + 1 < n ? breaks[i + 1] : breaks[0] + TWO_PI;
-            if (b > a) {
-                addArc(cx, cy, r, a, b, ox, oy, ro, inclusive);
+            if (breaks[i + 1] > breaks[i]) {
+                addArc(cx, cy, r, i, i + 1, breaks[i + 1], ox, oy, ro, inclusive, allInside);
             }
         }
     }
 
-    private void addArc(double cx, double cy, double r, double a, double b,
-                        double ox, double oy, double ro, boolean inclusive) {
+    /**
+     * The arc of circle (cx, cy, r) from angle breaks[ia] to {@code b} (breaks[ib], or 2 pi for the whole
+     * circle), when its midpoint lies inside the other disc.
+     */
+    private void addArc(double cx, double cy, double r, int ia, int ib, double b,
+                        double ox, double oy, double ro, boolean inclusive, boolean allInside) {
+        double a = breaks[ia];
         double mid = 0.5 * (a + b);
         double mx = cx + r * Math.cos(mid);
         double my = cy + r * Math.sin(mid);
-        double dist = Math.hypot(mx - ox, my - oy);
-        boolean inside = inclusive ? dist <= ro * (1 + INSIDE_SLACK) : dist < ro * (1 - INSIDE_SLACK);
-        if (!inside) {
+        if (!allInside
+                && !inside(mx - ox, my - oy, inclusive ? ro * (1 + INSIDE_SLACK) : ro * (1 - INSIDE_SLACK), inclusive)) {
             return;
         }
-        double area = 0.5 * r * (cx * (Math.sin(b) - Math.sin(a)) - cy * (Math.cos(b) - Math.cos(a)) + r * (b - a));
+        double area = 0.5 * r * (cx * (sinAt(ib, b) - sinAt(ia, a)) - cy * (cosAt(ib, b) - cosAt(ia, a)) + r * (b - a));
         cached[quadrant(mx, my)] += area;
+    }
+
+    /** sin(angle), angle being break {@code index}: evaluated once per circle. */
+    private double sinAt(int index, double angle) {
+        trig(index, angle);
+        return sinBreak[index];
+    }
+
+    /** cos(angle), angle being break {@code index}. */
+    private double cosAt(int index, double angle) {
+        trig(index, angle);
+        return cosBreak[index];
+    }
+
+    private void trig(int index, double angle) {
+        if ((trigKnown & (1 << index)) == 0) {
+            sinBreak[index] = Math.sin(angle);
+            cosBreak[index] = Math.cos(angle);
+            trigKnown |= 1 << index;
+        }
+    }
+
+    /**
+     * hypot(ex, ey) &lt;= limit (inclusive) or &lt; limit, decided on squared distances away from the limit and
+     * by hypot itself within {@link #SQUARED_GUARD} of it, so the answer is always hypot's.
+     */
+    private static boolean inside(double ex, double ey, double limit, boolean inclusive) {
+        double d2 = ex * ex + ey * ey;
+        double l2 = limit * limit;
+        if (d2 < l2 * (1 - SQUARED_GUARD)) {
+            return true;
+        }
+        if (d2 > l2 * (1 + SQUARED_GUARD)) {
+            return false;
+        }
+        double dist = Math.hypot(ex, ey);
+        return inclusive ? dist <= limit : dist < limit;
     }
 
     /** Quadrant index 0..3 (Q1..Q4) of a point; points on a split line go to the side of +x / +y. */

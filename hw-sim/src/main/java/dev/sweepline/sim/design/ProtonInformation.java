@@ -31,7 +31,7 @@ public final class ProtonInformation {
     /** The protons of {@code plasma}, or null. */
     public static IonPopulation protons(PlasmaState plasma) {
         for (IonPopulation p : plasma.populations()) {
-            if (p.species().equals(IonSpecies.PROTON)) {
+            if (p.species() == IonSpecies.PROTON || p.species().equals(IonSpecies.PROTON)) {
                 return p;
             }
         }
@@ -47,9 +47,7 @@ public final class ProtonInformation {
         double n = p.densityPerM3();
         double u = p.vzMetresPerSecond();
         double w = plasma.normalThermalSpeed(p);
-        out[0] = n * ConvectedMaxwellian.dCurrentDn(q, n, areaM2, u, w, v1, v2);
-        out[1] = u * ConvectedMaxwellian.dCurrentDu(q, n, areaM2, u, w, v1, v2);
-        out[2] = w * ConvectedMaxwellian.dCurrentDw(q, n, areaM2, u, w, v1, v2);
+        ConvectedMaxwellian.relativeSensitivities(q, n, areaM2, u, w, v1, v2, out);
     }
 
     /** Variance of the summed window current, A², for a total current, gain range and integration time. */

@@ -76,6 +76,30 @@ public final class ConvectedMaxwellian {
     }
 
     /**
+     * The three relative sensitivities at once, into {@code out3}: n dI/dn, U dI/dU and w dI/dw, each the
+     * same double as {@code nPerM3 * dCurrentDn(...)}, {@code uNormal * dCurrentDu(...)} and
+     * {@code w * dCurrentDw(...)} give (the same expressions, with the error-function difference and the
+     * exponentials they share evaluated once).
+     */
+    public static void relativeSensitivities(double q, double nPerM3, double areaM2, double uNormal, double w,
+                                             double v1, double v2, double[] out3) {
+        double x1 = (v1 - uNormal) / w;
+        double x2 = (v2 - uNormal) / w;
+        double erfDiff = ErrorFunction.difference(x1, x2);
+        double expDiff = expDifference(x1, x2, (v2 - v1) / w, (v1 + v2 - 2 * uNormal) / w);
+        double perDensity = q * 1.0 * areaM2 * (0.5 * uNormal * erfDiff + w / (2 * SQRT_PI) * expDiff);
+        if (v2 >= v1 && v1 >= 0 && perDensity < 0) {
+            perDensity = 0; // as windowCurrent: rounding in the lower tail
+        }
+        double e1 = Math.exp(-x1 * x1);
+        double e2 = Math.exp(-x2 * x2);
+        double qnA = q * nPerM3 * areaM2;
+        out3[0] = nPerM3 * perDensity;
+        out3[1] = uNormal * (qnA * (0.5 * erfDiff + (times(v1, e1) - times(v2, e2)) / (w * SQRT_PI)));
+        out3[2] = w * (qnA * ((times(x1 * v1, e1) - times(x2 * v2, e2)) / (w * SQRT_PI) + expDiff / (2 * SQRT_PI)));
+    }
+
+    /**
      * Normal speed an ion needs to pass a grid at {@code volts}: v = sqrt(2qV/m), metres per second.
      * A grid at or below 0 V stops nothing, so the threshold is 0.
      */

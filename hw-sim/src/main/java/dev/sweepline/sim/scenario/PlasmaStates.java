@@ -18,8 +18,41 @@ public final class PlasmaStates {
 
     /** The protons and alphas of {@code c} as convected (bi-)Maxwellians, alphas drifting along {@code drift}. */
     public static PlasmaState of(PlasmaConditions c, AlphaDriftDirection drift) {
+        return of(c, direction(c.fieldThetaXDeg(), c.fieldThetaYDeg()), drift.unitVector(c));
+    }
+
+    /**
+     * {@link #of(PlasmaConditions, AlphaDriftDirection)} for a series of conditions (a timeline's), keeping
+     * the field direction and the alpha drift's unit vector while the field angles stay the same: they are
+     * functions of those two angles alone, so the plasma is the same to the bit. Not thread-safe.
+     */
+    public static final class Series {
+        private final AlphaDriftDirection drift;
+        private double fieldThetaXDeg = Double.NaN;
+        private double fieldThetaYDeg = Double.NaN;
+        private double[] field;
+        private double[] driftVector;
+
+        /** A series whose alphas drift along {@code drift}. */
+        public Series(AlphaDriftDirection drift) {
+            this.drift = drift;
+        }
+
+        /** The plasma of {@code c}. */
+        public PlasmaState of(PlasmaConditions c) {
+            if (Double.compare(c.fieldThetaXDeg(), fieldThetaXDeg) != 0
+                    || Double.compare(c.fieldThetaYDeg(), fieldThetaYDeg) != 0) {
+                field = direction(c.fieldThetaXDeg(), c.fieldThetaYDeg());
+                driftVector = drift.unitVector(c);
+                fieldThetaXDeg = c.fieldThetaXDeg();
+                fieldThetaYDeg = c.fieldThetaYDeg();
+            }
+            return PlasmaStates.of(c, field, driftVector);
+        }
+    }
+
+    private static PlasmaState of(PlasmaConditions c, double[] field, double[] d) {
         double[] flow = direction(c.flowThetaXDeg(), c.flowThetaYDeg());
-        double[] field = direction(c.fieldThetaXDeg(), c.fieldThetaYDeg());
         double speed = c.protonSpeedKmPerS() * KM_TO_M;
         double vx = flow[0] * speed;
         double vy = flow[1] * speed;
@@ -35,7 +68,6 @@ public final class PlasmaStates {
             return new PlasmaState(List.of(protons), field[0], field[1], field[2]);
         }
         double driftSpeed = c.alphaDriftKmPerS() * KM_TO_M;
-        double[] d = drift.unitVector(c);
         double ratio = c.alphaTemperatureRatio();
         IonPopulation alphas = new IonPopulation(IonSpecies.ALPHA,
                 c.alphaAbundance() * c.protonDensityPerCc() * PER_CC_TO_PER_M3,
