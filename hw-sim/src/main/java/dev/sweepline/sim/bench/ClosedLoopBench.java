@@ -186,8 +186,8 @@ public final class ClosedLoopBench {
         FlightConfig flight = flightConfig(config);
         WindowVolts windows = new WindowVolts(flight.table, config.instrument().calibration());
         AlphaDriftDirection drift = config.scenario().alphaDriftDirection();
-        PlasmaStates.Series states = new PlasmaStates.Series(drift);
-        LongFunction<PlasmaState> plasma = micros -> states.of(timeline.at(micros / 1e6));
+        PlasmaStates.Series states = new PlasmaStates.Series(timeline, drift);
+        LongFunction<PlasmaState> plasma = micros -> states.at(micros / 1e6);
         BenchRecorder recorder = new BenchRecorder(windows, new FaradayCup(config.instrument().cup()),
                 config.instrument().preamp(), plasma, hooks.observer());
         SimulatedInstrument instrument = new SimulatedInstrument(config.instrument(),

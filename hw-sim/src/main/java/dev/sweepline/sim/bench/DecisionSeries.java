@@ -8,13 +8,20 @@ import java.util.List;
 /**
  * The sweeps the decision chart draws, bounded: every sweep while there are at most {@link #CAPACITY},
  * then every 2nd, 4th, ... sweep (when the series is full, every other point is dropped and the stride
- * doubles), so a run of any length is drawn from at most {@link #CAPACITY} evenly taken sweeps.
+ * doubles), so a run of any length is drawn from at most {@link #CAPACITY} evenly taken sweeps. The points
+ * live in primitive arrays allocated once, so the series takes the same memory from the first sweep on.
  */
 public final class DecisionSeries {
-    /** Points kept at most: more than a 60-minute run's sweeps (about 5800), and 1.1 MB at most. */
+    /** Points kept at most: more than a 60-minute run's sweeps (about 5800); 33 B each. */
     static final int CAPACITY = 16_384;
-    private final int capacity;
-    private final List<DecisionChart.Sweep> points = new ArrayList<>();
+    private final double[] seconds;
+    private final boolean[] focus;
+    private final int[] first;
+    private final int[] last;
+    private final double[] peak;
+    private final int[] trueProton;
+    private final int[] trueAlpha;
+    private int size;
     private long offered;
     private long stride = 1;
 
@@ -23,7 +30,13 @@ public final class DecisionSeries {
         if (capacity < 2) {
             throw new IllegalArgumentException("capacity " + capacity + " below 2");
         }
-        this.capacity = capacity;
+        seconds = new double[capacity];
+        focus = new boolean[capacity];
+        first = new int[capacity];
+        last = new int[capacity];
+        peak = new double[capacity];
+        trueProton = new int[capacity];
+        trueAlpha = new int[capacity];
     }
 
     /** Offers one sweep: kept when its index is a multiple of the current stride. */
@@ -32,24 +45,44 @@ public final class DecisionSeries {
         if (index % stride != 0) {
             return;
         }
-        if (points.size() == capacity) {
+        if (size == seconds.length) {
             int kept = 0;
-            for (int i = 0; i < points.size(); i += 2) {
-                points.set(kept++, points.get(i));
+            for (int i = 0; i < size; i += 2) {
+                move(i, kept++);
             }
-            points.subList(kept, points.size()).clear();
+            size = kept;
             stride *= 2;
             if (index % stride != 0) {
                 return;
             }
         }
-        points.add(new DecisionChart.Sweep(r.midMicros() / 1e6, r.mode() == SweepMode.FOCUS, r.firstWindow(),
-                r.lastWindow(), r.peakWindow(), r.trueProtonWindow(), r.trueAlphaWindow()));
+        seconds[size] = r.midMicros() / 1e6;
+        focus[size] = r.mode() == SweepMode.FOCUS;
+        first[size] = r.firstWindow();
+        last[size] = r.lastWindow();
+        peak[size] = r.peakWindow();
+        trueProton[size] = r.trueProtonWindow();
+        trueAlpha[size] = r.trueAlphaWindow();
+        size++;
     }
 
-    /** The points, in time order. */
+    private void move(int from, int to) {
+        seconds[to] = seconds[from];
+        focus[to] = focus[from];
+        first[to] = first[from];
+        last[to] = last[from];
+        peak[to] = peak[from];
+        trueProton[to] = trueProton[from];
+        trueAlpha[to] = trueAlpha[from];
+    }
+
+    /** The points, in time order (a new list). */
     public List<DecisionChart.Sweep> points() {
-        return points;
+        List<DecisionChart.Sweep> out = new ArrayList<>(size);
+        for (int i = 0; i < size; i++) {
+            out.add(new DecisionChart.Sweep(seconds[i], focus[i], first[i], last[i], peak[i], trueProton[i], trueAlpha[i]));
+        }
+        return out;
     }
 
     /** Every how many sweeps a point is kept now (1: every sweep). */

@@ -20,7 +20,8 @@ import java.util.function.LongFunction;
  * locked, alphaLock, saturatedSamples, truthChangeN, truthChangeU, truthChangeT ({@code %.6g}; empty when
  * undefined). The fixed-point cells are written digit by digit, as {@code String.format(Locale.ROOT, ...)}
  * would write them (checked exhaustively over the Q8 windows and on the microseconds by
- * {@code DecisionsCsvTest}); the {@code %.6g} cells go through one reused {@link Formatter}.
+ * {@code DecisionsCsvTest}, against {@code String.format(Locale.ROOT, ...)}); the {@code %.6g} cells go through
+ * one reused {@link Formatter}.
  */
 public final class DecisionsCsv implements SweepLog, Closeable {
     /** The header line. */
@@ -35,7 +36,12 @@ public final class DecisionsCsv implements SweepLog, Closeable {
 
     private final Writer out;
     private final StringBuilder line = new StringBuilder(160);
-    private final Formatter cells = new Formatter(line, Locale.ROOT);
+    /**
+     * The cells' formatter: Locale.US writes the same digits, point and signs as Locale.ROOT for these
+     * conversions (no grouping), and is the locale for which the JDK's formatter looks up no
+     * DecimalFormatSymbols per number.
+     */
+    private final Formatter cells = new Formatter(line, Locale.US);
 
     /** A log writing to {@code out} (the header first); closing it closes {@code out}. */
     public DecisionsCsv(Writer out) throws IOException {

@@ -29,6 +29,13 @@
  *     spurious-alpha rate, the tracking error, the strict reacquisition and the mean reduced chi-square
  *     per mode; on a steady plasma without alphas that mean is 1 within 4 of its standard errors
  *     sqrt(sum 2/nu)/N. Verified: EvaluationTest.</li>
+ * <li>B8 A run's memory does not grow with its length unless its records are asked for (the ground check
+ *     asks): the summary's sweep figures are tallied as the sweeps complete, in memory bounded by the table,
+ *     and are the figures the list functions give (SweepTallyTest); {@code decisions.csv} is written as the
+ *     run goes, the bytes the formatter gave (DecisionsCsvTest); the chart is drawn from a bounded series
+ *     (DecisionSeriesTest). The true peak's pruned search finds the full scan's window (TruePeakTest).
+ *     The whole: a 7-simulated-day {@code run --no-ground} under {@code -Xmx64m}, the live heap after a
+ *     full GC the same at its start and end (measured by hand, {@code jcmd PID GC.class_histogram}).</li>
  * </ol>
  * Truth conventions: the true peak of a species is the window where its noise-free current peaks
  * (for a hot wind well above the bulk-speed E/q); a focus sweep is locked when its band holds the

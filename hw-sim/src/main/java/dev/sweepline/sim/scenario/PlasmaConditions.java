@@ -34,12 +34,22 @@ public record PlasmaConditions(double protonDensityPerCc, double protonSpeedKmPe
      * (definition of the scalar temperature as the trace of the temperature tensor / 3, textbook).
      */
     public double protonParallelTemperatureK() {
-        return 3.0 * protonTemperatureK / (1.0 + 2.0 * temperatureAnisotropy);
+        return parallelTemperatureK(protonTemperatureK, temperatureAnisotropy);
     }
 
     /** Proton temperature across the field, K: T_perp = A T_par. */
     public double protonPerpendicularTemperatureK() {
-        return temperatureAnisotropy * protonParallelTemperatureK();
+        return perpendicularTemperatureK(protonTemperatureK, temperatureAnisotropy);
+    }
+
+    /** T_par = 3 T / (1 + 2 A) of a scalar temperature T and anisotropy A, K. */
+    static double parallelTemperatureK(double temperatureK, double anisotropy) {
+        return 3.0 * temperatureK / (1.0 + 2.0 * anisotropy);
+    }
+
+    /** T_perp = A T_par, K. */
+    static double perpendicularTemperatureK(double temperatureK, double anisotropy) {
+        return anisotropy * parallelTemperatureK(temperatureK, anisotropy);
     }
 
     /** The value of one parameter, in the unit of that parameter. */

@@ -16,61 +16,82 @@ public final class PlasmaStates {
     private PlasmaStates() {
     }
 
+    private static final int DENSITY = PlasmaParameter.PROTON_DENSITY.ordinal();
+    private static final int SPEED = PlasmaParameter.PROTON_SPEED.ordinal();
+    private static final int TEMPERATURE = PlasmaParameter.PROTON_TEMPERATURE.ordinal();
+    private static final int ANISOTROPY = PlasmaParameter.TEMPERATURE_ANISOTROPY.ordinal();
+    private static final int ABUNDANCE = PlasmaParameter.ALPHA_ABUNDANCE.ordinal();
+    private static final int DRIFT = PlasmaParameter.ALPHA_DRIFT.ordinal();
+    private static final int TEMPERATURE_RATIO = PlasmaParameter.ALPHA_TEMPERATURE_RATIO.ordinal();
+    private static final int FLOW_X = PlasmaParameter.FLOW_THETA_X.ordinal();
+    private static final int FLOW_Y = PlasmaParameter.FLOW_THETA_Y.ordinal();
+    private static final int FIELD_X = PlasmaParameter.FIELD_THETA_X.ordinal();
+    private static final int FIELD_Y = PlasmaParameter.FIELD_THETA_Y.ordinal();
+
     /** The protons and alphas of {@code c} as convected (bi-)Maxwellians, alphas drifting along {@code drift}. */
     public static PlasmaState of(PlasmaConditions c, AlphaDriftDirection drift) {
-        return of(c, direction(c.fieldThetaXDeg(), c.fieldThetaYDeg()), drift.unitVector(c));
+        double[] v = new double[PlasmaParameter.values().length];
+        for (PlasmaParameter p : PlasmaParameter.values()) {
+            v[p.ordinal()] = c.get(p);
+        }
+        return of(v, direction(c.fieldThetaXDeg(), c.fieldThetaYDeg()), drift.unitVector(c), new double[3]);
     }
 
     /**
-     * {@link #of(PlasmaConditions, AlphaDriftDirection)} for a series of conditions (a timeline's), keeping
-     * the field direction and the alpha drift's unit vector while the field angles stay the same: they are
-     * functions of those two angles alone, so the plasma is the same to the bit. Not thread-safe.
+     * {@link #of(PlasmaConditions, AlphaDriftDirection)} of a timeline's conditions, one time after another,
+     * without the per-call garbage of the conditions and the flow direction: the values are read from the
+     * timeline, and the field direction and the alpha drift's unit vector (functions of the two field angles
+     * alone) are kept while those angles stay the same; so the plasma is the same to the bit. Not thread-safe.
      */
     public static final class Series {
+        private final ScenarioTimeline timeline;
         private final AlphaDriftDirection drift;
+        private final double[] flow = new double[3];
         private double fieldThetaXDeg = Double.NaN;
         private double fieldThetaYDeg = Double.NaN;
         private double[] field;
         private double[] driftVector;
 
-        /** A series whose alphas drift along {@code drift}. */
-        public Series(AlphaDriftDirection drift) {
+        /** The plasmas of {@code timeline}, its alphas drifting along {@code drift}. */
+        public Series(ScenarioTimeline timeline, AlphaDriftDirection drift) {
+            this.timeline = timeline;
             this.drift = drift;
         }
 
-        /** The plasma of {@code c}. */
-        public PlasmaState of(PlasmaConditions c) {
-            if (Double.compare(c.fieldThetaXDeg(), fieldThetaXDeg) != 0
-                    || Double.compare(c.fieldThetaYDeg(), fieldThetaYDeg) != 0) {
-                field = direction(c.fieldThetaXDeg(), c.fieldThetaYDeg());
-                driftVector = drift.unitVector(c);
-                fieldThetaXDeg = c.fieldThetaXDeg();
-                fieldThetaYDeg = c.fieldThetaYDeg();
+        /** The plasma at {@code seconds} from the scenario start (as {@code of(timeline.at(seconds), drift)}). */
+        public PlasmaState at(double seconds) {
+            double[] v = timeline.valuesAt(seconds);
+            if (Double.compare(v[FIELD_X], fieldThetaXDeg) != 0 || Double.compare(v[FIELD_Y], fieldThetaYDeg) != 0) {
+                field = direction(v[FIELD_X], v[FIELD_Y]);
+                driftVector = drift.unitVector(PlasmaConditions.of(v));
+                fieldThetaXDeg = v[FIELD_X];
+                fieldThetaYDeg = v[FIELD_Y];
             }
-            return PlasmaStates.of(c, field, driftVector);
+            return PlasmaStates.of(v, field, driftVector, flow);
         }
     }
 
-    private static PlasmaState of(PlasmaConditions c, double[] field, double[] d) {
-        double[] flow = direction(c.flowThetaXDeg(), c.flowThetaYDeg());
-        double speed = c.protonSpeedKmPerS() * KM_TO_M;
+    /** The plasma of the values {@code v} (by {@link PlasmaParameter#ordinal()}); {@code flow} is scratch. */
+    private static PlasmaState of(double[] v, double[] field, double[] d, double[] flow) {
+        direction(v[FLOW_X], v[FLOW_Y], flow);
+        double speed = v[SPEED] * KM_TO_M;
         double vx = flow[0] * speed;
         double vy = flow[1] * speed;
         double vz = flow[2] * speed;
 
-        double tParallel = c.protonParallelTemperatureK();
-        double tPerp = c.protonPerpendicularTemperatureK();
-        IonPopulation protons = new IonPopulation(IonSpecies.PROTON, c.protonDensityPerCc() * PER_CC_TO_PER_M3,
+        double tParallel = PlasmaConditions.parallelTemperatureK(v[TEMPERATURE], v[ANISOTROPY]);
+        double tPerp = PlasmaConditions.perpendicularTemperatureK(v[TEMPERATURE], v[ANISOTROPY]);
+        IonPopulation protons = new IonPopulation(IonSpecies.PROTON, v[DENSITY] * PER_CC_TO_PER_M3,
                 vx, vy, vz,
                 IonPopulation.thermalSpeed(tParallel, IonSpecies.PROTON.massKg()),
                 IonPopulation.thermalSpeed(tPerp, IonSpecies.PROTON.massKg()));
-        if (c.alphaAbundance() <= 0) {
+        if (v[ABUNDANCE] <= 0) {
             return new PlasmaState(List.of(protons), field[0], field[1], field[2]);
         }
-        double driftSpeed = c.alphaDriftKmPerS() * KM_TO_M;
-        double ratio = c.alphaTemperatureRatio();
+        double driftSpeed = v[DRIFT] * KM_TO_M;
+        double ratio = v[TEMPERATURE_RATIO];
         IonPopulation alphas = new IonPopulation(IonSpecies.ALPHA,
-                c.alphaAbundance() * c.protonDensityPerCc() * PER_CC_TO_PER_M3,
+                v[ABUNDANCE] * v[DENSITY] * PER_CC_TO_PER_M3,
                 vx + driftSpeed * d[0], vy + driftSpeed * d[1], vz + driftSpeed * d[2],
                 IonPopulation.thermalSpeed(ratio * tParallel, IonSpecies.ALPHA.massKg()),
                 IonPopulation.thermalSpeed(ratio * tPerp, IonSpecies.ALPHA.massKg()));
@@ -79,10 +100,18 @@ public final class PlasmaStates {
 
     /** Unit vector with tan(thetaX) = x/z and tan(thetaY) = y/z, z > 0. */
     static double[] direction(double thetaXDeg, double thetaYDeg) {
+        double[] out = new double[3];
+        direction(thetaXDeg, thetaYDeg, out);
+        return out;
+    }
+
+    private static void direction(double thetaXDeg, double thetaYDeg, double[] out) {
         double tx = Math.tan(Math.toRadians(thetaXDeg));
         double ty = Math.tan(Math.toRadians(thetaYDeg));
         double z = 1.0 / Math.sqrt(1.0 + tx * tx + ty * ty);
-        return new double[] {tx * z, ty * z, z};
+        out[0] = tx * z;
+        out[1] = ty * z;
+        out[2] = z;
     }
 
     /** Energy per charge (V) at which a population's bulk speed along the cup normal sits. */

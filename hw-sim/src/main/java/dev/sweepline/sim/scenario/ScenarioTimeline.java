@@ -45,6 +45,14 @@ public final class ScenarioTimeline {
 
     /** The plasma at {@code seconds} from the scenario start (before 0: the starting plasma). */
     public PlasmaConditions at(double seconds) {
+        return PlasmaConditions.of(valuesAt(seconds));
+    }
+
+    /**
+     * The values of {@link #at} by {@link PlasmaParameter#ordinal()}, in this timeline's own array: read
+     * them before the next call.
+     */
+    double[] valuesAt(double seconds) {
         for (int i = 0; i < tracks.length; i++) {
             values[i] = tracks[i].at(seconds);
         }
@@ -55,7 +63,7 @@ public final class ScenarioTimeline {
                 factor(fluctuations.temperatureRelativeRms(), TEMPERATURE, seconds);
         values[PlasmaParameter.FLOW_THETA_X.ordinal()] += offset(fluctuations.flowAngleRmsDeg(), FLOW_X, seconds);
         values[PlasmaParameter.FLOW_THETA_Y.ordinal()] += offset(fluctuations.flowAngleRmsDeg(), FLOW_Y, seconds);
-        return PlasmaConditions.of(values);
+        return values;
     }
 
     /** The event-driven value of {@code p} at {@code seconds}, without fluctuations. */
