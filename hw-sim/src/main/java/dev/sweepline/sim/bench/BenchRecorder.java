@@ -42,14 +42,13 @@ public final class BenchRecorder implements SweepListener, InProcessLink.StepObs
     private final List<SweepRecord> sweeps = new ArrayList<>();
     private boolean keepSweeps = true;
     private SweepLog log = SweepLog.NONE;
-    private SweepTally tally = new SweepTally(0, List.of());
+    private SweepTally tally;
     private final DecisionSeries series = new DecisionSeries(DecisionSeries.CAPACITY);
     private final TruePeak trueProtons;
     private final TruePeak trueAlphas;
     private final Map<String, Integer> modeChanges = new TreeMap<>();
     private final List<ModeChange> chartModeChanges = new ArrayList<>();
     private int previousReason = ModeChangeReason.NONE;
-    private long chartModeChangesLeftOut;
     private long steps;
     private long integrationMicros;
     private long saturatedSamples;
@@ -75,6 +74,7 @@ public final class BenchRecorder implements SweepListener, InProcessLink.StepObs
         this.cup = cup;
         this.information = new ProtonInformation(cup.geometry(), preamp);
         this.truthAt = truthAt;
+        this.tally = new SweepTally(windows.count(), List.of());
         this.trueProtons = new TruePeak(cup, IonSpecies.PROTON);
         this.trueAlphas = new TruePeak(cup, IonSpecies.ALPHA);
     }
@@ -211,8 +211,6 @@ public final class BenchRecorder implements SweepListener, InProcessLink.StepObs
         previousReason = reason;
         if (!routine && chartModeChanges.size() < MAX_CHART_MODE_CHANGES) {
             chartModeChanges.add(new ModeChange(nowMicros, from, to, reason));
-        } else if (!routine) {
-            chartModeChangesLeftOut++;
         }
         next.onModeChange(from, to, reason, nowMicros);
     }
@@ -261,10 +259,6 @@ public final class BenchRecorder implements SweepListener, InProcessLink.StepObs
         return chartModeChanges;
     }
 
-    /** Non-routine mode changes beyond {@link #MAX_CHART_MODE_CHANGES}, not marked. */
-    public long chartModeChangesLeftOut() {
-        return chartModeChangesLeftOut;
-    }
 
     /** Mode changes counted by reason name. */
     public Map<String, Integer> modeChanges() {

@@ -3,24 +3,29 @@ package dev.sweepline.sim.bench;
 import dev.sweepline.fsw.sweep.SweepMode;
 import dev.sweepline.sim.report.DecisionChart;
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.List;
 
 /**
  * The sweeps the decision chart draws, bounded: every sweep while there are at most {@link #CAPACITY},
  * then every 2nd, 4th, ... sweep (when the series is full, every other point is dropped and the stride
  * doubles), so a run of any length is drawn from at most {@link #CAPACITY} evenly taken sweeps. The points
- * live in primitive arrays allocated once, so the series takes the same memory from the first sweep on.
+ * live in primitive arrays that grow with the series up to the capacity (a short run pays for its own
+ * points only), and stay at it from then on.
  */
 public final class DecisionSeries {
     /** Points kept at most: more than a 60-minute run's sweeps (about 5800); 33 B each. */
     static final int CAPACITY = 16_384;
-    private final double[] seconds;
-    private final boolean[] focus;
-    private final int[] first;
-    private final int[] last;
-    private final double[] peak;
-    private final int[] trueProton;
-    private final int[] trueAlpha;
+    /** Points room is made for at first. */
+    private static final int INITIAL = 1024;
+    private final int capacity;
+    private double[] seconds;
+    private boolean[] focus;
+    private int[] first;
+    private int[] last;
+    private double[] peak;
+    private int[] trueProton;
+    private int[] trueAlpha;
     private int size;
     private long offered;
     private long stride = 1;
@@ -30,13 +35,19 @@ public final class DecisionSeries {
         if (capacity < 2) {
             throw new IllegalArgumentException("capacity " + capacity + " below 2");
         }
-        seconds = new double[capacity];
-        focus = new boolean[capacity];
-        first = new int[capacity];
-        last = new int[capacity];
-        peak = new double[capacity];
-        trueProton = new int[capacity];
-        trueAlpha = new int[capacity];
+        this.capacity = capacity;
+        room(Math.min(INITIAL, capacity));
+    }
+
+    /** Makes the arrays {@code length} long, keeping the points. */
+    private void room(int length) {
+        seconds = seconds == null ? new double[length] : Arrays.copyOf(seconds, length);
+        focus = focus == null ? new boolean[length] : Arrays.copyOf(focus, length);
+        first = first == null ? new int[length] : Arrays.copyOf(first, length);
+        last = last == null ? new int[length] : Arrays.copyOf(last, length);
+        peak = peak == null ? new double[length] : Arrays.copyOf(peak, length);
+        trueProton = trueProton == null ? new int[length] : Arrays.copyOf(trueProton, length);
+        trueAlpha = trueAlpha == null ? new int[length] : Arrays.copyOf(trueAlpha, length);
     }
 
     /** Offers one sweep: kept when its index is a multiple of the current stride. */
@@ -45,7 +56,9 @@ public final class DecisionSeries {
         if (index % stride != 0) {
             return;
         }
-        if (size == seconds.length) {
+        if (size == seconds.length && size < capacity) {
+            room(Math.min(capacity, 2 * size));
+        } else if (size == capacity) {
             int kept = 0;
             for (int i = 0; i < size; i += 2) {
                 move(i, kept++);

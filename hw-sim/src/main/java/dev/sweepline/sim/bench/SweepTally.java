@@ -108,11 +108,16 @@ final class SweepTally {
     /** Exact counts of errors that are whole multiples of 1/256 window. */
     static final class ErrorCounts {
         private final IntCountsHistogram counts;
-        private final long highestUnits;
 
+        /**
+         * Counts for a table of {@code windows} windows: band centre, found peak and true peak all lie in
+         * [0, windows), so the errors stay below windows x 256 units, all kept exactly; a larger one (a peak
+         * outside the table) grows the histogram at a coarser resolution rather than failing the run.
+         */
         ErrorCounts(int windows) {
-            highestUnits = (long) (windows + 1) * UNITS_PER_WINDOW;
+            long highestUnits = Math.max(2, (long) windows * UNITS_PER_WINDOW - 1);
             counts = new IntCountsHistogram(highestUnits, exactDigits(highestUnits));
+            counts.setAutoResize(true);
         }
 
         /**
@@ -128,15 +133,15 @@ final class SweepTally {
                     return digits;
                 }
             }
-            throw new IllegalArgumentException("tracking error of up to " + highest + " units is beyond exact counting");
+            throw new IllegalArgumentException("tracking errors of up to " + highest + " units are beyond exact counting");
         }
 
         void add(double windows) {
             double units = windows * UNITS_PER_WINDOW;
             long k = (long) units;
-            if (k != units || k < 0 || k > highestUnits) {
+            if (k != units || k < 0) {
                 throw new IllegalArgumentException("tracking error " + windows + " windows is not a multiple of 1/"
-                        + UNITS_PER_WINDOW + " within the table");
+                        + UNITS_PER_WINDOW);
             }
             counts.recordValue(k);
         }

@@ -77,14 +77,18 @@ public final class DesignSolver {
             }
             double worst = 0;
             for (int j = 0; j < n; j++) {
-                d[j] = traceOfProduct(inv, m[j]);
                 if (active[j]) {
+                    d[j] = traceOfProduct(inv, m[j]);
                     worst = Math.max(worst, d[j]);
                 }
             }
             if (worst <= p * (1 + tolerance)) {
+                // the dropped candidates' variances are needed only now, for the stopping rule on every candidate
                 double all = 0;
                 for (int j = 0; j < n; j++) {
+                    if (!active[j]) {
+                        d[j] = traceOfProduct(inv, m[j]);
+                    }
                     all = Math.max(all, d[j]);
                 }
                 return new Solution(share, f, d, all, it, all <= p * (1 + tolerance));

@@ -32,6 +32,17 @@ class DecisionSeriesTest {
         assertThrows(IllegalArgumentException.class, () -> new DecisionSeries(1));
     }
 
+    @Test
+    void shouldGrowItsArraysUpToTheCapacityKeepingEverySweep() {
+        DecisionSeries series = new DecisionSeries(3000);
+        for (int i = 0; i < 2500; i++) { // beyond the first 1024 points made room for
+            series.add(sweep(i));
+        }
+        assertEquals(2500, series.points().size());
+        assertEquals(2499, series.points().get(2499).trueProton());
+        assertEquals(1, series.stride());
+    }
+
     /** The sweep index each point came from (its true proton window, set to the index above). */
     private static List<Integer> sources(List<DecisionChart.Sweep> points) {
         return points.stream().map(DecisionChart.Sweep::trueProton).toList();
