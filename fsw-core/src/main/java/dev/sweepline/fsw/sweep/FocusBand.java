@@ -6,15 +6,14 @@ import dev.sweepline.fsw.table.WindowTable;
 /**
  * The focus band and the reference peak it was chosen from (sweep design note, R6 and R10).
  * Band = refined peak window +/- max(minHalfWidth, FWHM * halfWidthPerFwhm), at most maxBandWindows
- * wide, clipped (not shifted) to the table; in the design style the half-width is the design table's
- * for the measured FWHM plus the robustness margin (R21, {@link FocusDesign}). Loss of lock compares each focus spectrum with the
+ * wide, clipped (not shifted) to the table; in the design style the band reaches the design's multiples of
+ * the measured low and high half-widths either side, plus the robustness margin (R21, {@link FocusDesign}). Loss of lock compares each focus spectrum with the
  * reference peak: no peak, current collapse, peak on an unclipped edge, peak jump (including a jump
  * to about the alpha ratio). A peak on an edge first turns the band into an edge search (R18).
  */
 final class FocusBand {
     private final int[] centreCode;
     private final SweepParameters params;
-    private final FocusDesign design;
 
     private boolean valid;
     private int first;
@@ -26,12 +25,10 @@ final class FocusBand {
     /**
      * @param centreCode the active table's centre codes (owned and kept current by the scheduler)
      * @param params     the active parameters (owned and kept current by the scheduler)
-     * @param design     the design table of the active parameters (kept current by the scheduler)
      */
-    FocusBand(int[] centreCode, SweepParameters params, FocusDesign design) {
+    FocusBand(int[] centreCode, SweepParameters params) {
         this.centreCode = centreCode;
         this.params = params;
-        this.design = design;
     }
 
     /** Forgets the band (new table, or no lock). */
@@ -57,10 +54,17 @@ final class FocusBand {
     /** Chooses the band from an analysed spectrum with a valid peak, in a table of {@code windowCount}. */
     void choose(Spectrum s, int windowCount) {
         int centre = (s.peakWindowQ8() + 128) >> 8;
-        int half = params.focusStyle == SweepParameters.FOCUS_STYLE_DESIGN ? design.halfWidth(s.fwhmWindowsQ8(), params)
-                : bandHalfWidth(s.fwhmWindowsQ8());
-        first = Math.max(0, centre - half);
-        last = Math.min(windowCount - 1, centre + half);
+        int above;
+        int below;
+        if (params.focusStyle == SweepParameters.FOCUS_STYLE_DESIGN) {
+            above = FocusDesign.reachAbove(s.fwhmWindowsQ8() - s.lowHalfWindowsQ8(), params);
+            below = FocusDesign.reachBelow(s.lowHalfWindowsQ8(), above, params);
+        } else {
+            above = bandHalfWidth(s.fwhmWindowsQ8());
+            below = above;
+        }
+        first = Math.max(0, centre - below);
+        last = Math.min(windowCount - 1, centre + above);
         referencePeakQ8 = s.peakWindowQ8();
         referencePeakUnits = s.peakCurrentUnits();
         valid = true;

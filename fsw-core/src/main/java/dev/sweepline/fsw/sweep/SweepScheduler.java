@@ -81,10 +81,9 @@ public final class SweepScheduler {
         this.completed = new Spectrum(instrument);
         this.peakFinder = new PeakFinder(config.centreCode, this.params, instrument.rangeRatioShift());
         this.design = new FocusDesign(instrument);
-        this.band = new FocusBand(config.centreCode, this.params, design);
+        this.band = new FocusBand(config.centreCode, this.params);
         gain.reset(config.windowCount());
         gain.configure(this.params);
-        design.configure(this.params);
     }
 
     /**
@@ -332,7 +331,6 @@ public final class SweepScheduler {
         }
         if ((changed & ActiveConfiguration.PARAMETERS_CHANGED) != 0) {
             gain.configure(params);
-            design.configure(params);
         }
         if ((changed & ActiveConfiguration.TABLE_CHANGED) != 0) {
             gain.reset(config.windowCount());

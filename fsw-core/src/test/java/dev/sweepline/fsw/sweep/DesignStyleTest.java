@@ -11,7 +11,7 @@ import org.junit.jupiter.api.Test;
 
 /**
  * The scheduler in the design style (sweep design note R21): it locks as in the band style, chooses the
- * design table's band for the measured width, flies every focus sweep within its budget at one dwell,
+ * design's band for the measured shape of the peak, flies every focus sweep within its budget at one dwell,
  * surveys at the quick survey's dwell, and reports each sweep's dwell with its spectrum.
  */
 class DesignStyleTest {
@@ -47,7 +47,8 @@ class DesignStyleTest {
 
             @Override
             public void onBandChosen(int first, int last, int peakQ8, long nowMicros) {
-                bands.add(new int[] {first, last, peakQ8, scheduler[0].lastSpectrum().fwhmWindowsQ8()});
+                Spectrum from = scheduler[0].lastSpectrum();
+                bands.add(new int[] {first, last, peakQ8, from.fwhmWindowsQ8(), from.lowHalfWindowsQ8()});
             }
 
             @Override
@@ -78,18 +79,25 @@ class DesignStyleTest {
         }
         assertTrue(focus >= 30, "focus sweeps " + focus);
         assertTrue(stretched >= 30, "focus sweeps above the table's dwell " + stretched);
-        // every band is the design table's: half-width h* = round(f x ratio) + margin around the peak
-        // of the spectrum it was chosen from (steady wind: no edge search)
-        FocusDesign d = new FocusDesign(DemoCup.INSTRUMENT);
+        // every band is the design's: 2.0 low and 1.75 high half-widths at half maximum plus the margin
+        // either side of the peak of the spectrum it was chosen from (steady wind: no edge search);
+        // docs/focus-design.md, closed form with the rounding of FocusDesign.reachAbove/reachBelow
         SweepParameters p = designStyle();
-        d.configure(p);
         assertTrue(bands.size() >= 30, "bands " + bands.size());
+        int lopsided = 0;
         for (int[] band : bands) {
-            int half = d.halfWidth(band[3], p);
+            int highHalfQ8 = band[3] - band[4];
+            int above = Math.max(p.minHalfWidthWindows, Math.min(31, (int) Math.round(highHalfQ8 * 1.75 / 256) + 1));
+            int below = Math.max(p.minHalfWidthWindows, Math.min(63 - above, (int) Math.round(band[4] * 2.0 / 256) + 1));
             int centre = (band[2] + 128) >> 8;
-            assertEquals(Math.max(0, centre - half), band[0]);
-            assertEquals(Math.min(127, centre + half), band[1]);
+            assertEquals(Math.max(0, centre - below), band[0]);
+            assertEquals(Math.min(127, centre + above), band[1]);
+            if (centre - band[0] > band[1] - centre) {
+                lopsided++;
+            }
         }
+        // the near-Sun wind's peak is lopsided on the demo table: the band reaches further below it
+        assertTrue(lopsided > bands.size() / 2, "bands reaching further below the peak " + lopsided + " of " + bands.size());
         // every step of a sweep flies the spectrum's dwell: steps of the last full focus sweep
         int n = l.steps.size();
         int last = l.steps.get(n - 1).periods();
