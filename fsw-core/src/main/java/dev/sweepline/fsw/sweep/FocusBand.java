@@ -56,8 +56,11 @@ final class FocusBand {
         int centre = (s.peakWindowQ8() + 128) >> 8;
         int above;
         int below;
-        if (params.focusStyle == SweepParameters.FOCUS_STYLE_DESIGN) {
-            above = FocusDesign.reachAbove(s.fwhmWindowsQ8() - s.lowHalfWindowsQ8(), params);
+        if (params.designBand()) {
+            int highHalfQ8 = s.fwhmWindowsQ8() - s.lowHalfWindowsQ8();
+            int alphaWindow = windowAtOrAbove(((long) codeAtQ8(s.peakWindowQ8(), windowCount) * params.alphaRatioQ16) >> 16,
+                    windowCount);
+            above = FocusDesign.reachAbove(highHalfQ8, alphaWindow - centre, params);
             below = FocusDesign.reachBelow(s.lowHalfWindowsQ8(), above, params);
         } else {
             above = bandHalfWidth(s.fwhmWindowsQ8());
@@ -134,6 +137,11 @@ final class FocusBand {
         return ModeChangeReason.NONE;
     }
 
+    /** True when the peak of {@code s} lies at about the alpha ratio from the reference peak. */
+    boolean jumpedToAlphaRatio(Spectrum s, int windowCount) {
+        return atAlphaRatio(s.peakWindowQ8(), referencePeakQ8, windowCount);
+    }
+
     /** True when the code at {@code peakQ8} is about alphaRatio times the code at {@code referenceQ8}. */
     boolean atAlphaRatio(int peakQ8, int referenceQ8, int windowCount) {
         long reference = codeAtQ8(referenceQ8, windowCount);
@@ -143,6 +151,15 @@ final class FocusBand {
         long ratioQ16 = (codeAtQ8(peakQ8, windowCount) << 16) / reference;
         long tolerance = ((long) params.alphaRatioQ16 * params.alphaToleranceQ16) >> 16;
         return Math.abs(ratioQ16 - params.alphaRatioQ16) <= tolerance;
+    }
+
+    /** The first window whose centre code is at least {@code code}; the last window when none is. */
+    int windowAtOrAbove(long code, int windowCount) {
+        int w = 0;
+        while (w < windowCount - 1 && centreCode[w] < code) {
+            w++;
+        }
+        return w;
     }
 
     /** Centre code at a fractional window index (Q8), linear between window centres, clamped to the table. */

@@ -10,13 +10,14 @@ import dev.sweepline.fsw.table.SweepParameters;
  * fills the sweep-time budget.
  *
  * <p>The band reaches {@link #LOW_REACH_PER_HWHM_Q8} times the peak's measured low half-width at half
- * maximum below the refined peak and {@link #HIGH_REACH_PER_HWHM_Q8} times the high one above it, plus
- * the robustness margin, within the band limits. Both factors were chosen off board against the bench's
+ * maximum below the refined peak and above it the farther of {@link #HIGH_REACH_PER_HWHM_Q8} times the
+ * high one and {@link #ALPHA_REACH_PER_HWHM_Q8} times it beyond the alphas' expected peak, plus the
+ * robustness margin, within the band limits. Both factors were chosen off board against the bench's
  * D-optimal yardstick (hw-sim {@code design.DOptimalDesign}) over the built-in scenarios'
  * plasmas (docs/focus-design.md, reproduced by hw-sim's FocusDesignTableTest): the information lies
  * further out on the low-voltage side (a hot, slow wind's long low tail on a table of equal voltage
- * ratios) and less far on the high side (where the alphas' current adds shot noise). A band choice is two
- * multiplications; nothing to precompute.
+ * ratios) and less far on the high side (where the alphas' current adds shot noise). A band choice is a
+ * few multiplications and a search of the table for the alphas' window; nothing to precompute.
  */
 public final class FocusDesign {
     /** Reach below the peak in low half-widths at half maximum, Q8: 2.0 (docs/focus-design.md). */
@@ -31,11 +32,24 @@ public final class FocusDesign {
     }
 
     /**
-     * Windows the design band reaches above the refined peak for a high half-width of
-     * {@code highHalfQ8} (Q8 windows): at least {@code minHalfWidthWindows}, at most half the widest band.
+     * Reach beyond the alphas' expected peak (alphaRatio times the proton peak's code) in high half-widths
+     * of the protons, Q8: 1.0. Not for the protons' information (the alphas' current only adds noise
+     * there) but for the ground's joint fit, which needs the alpha peak to keep the alphas from biasing
+     * the protons (docs/focus-design.md: without it the ground's p95 errors were 2-3 times the band
+     * style's).
      */
-    static int reachAbove(int highHalfQ8, SweepParameters p) {
-        long reach = (((long) Math.max(0, highHalfQ8) * HIGH_REACH_PER_HWHM_Q8 + (1 << 15)) >> 16) + p.robustnessMarginWindows;
+    public static final int ALPHA_REACH_PER_HWHM_Q8 = 256;
+
+    /**
+     * Windows the design band reaches above the refined peak for a high half-width of
+     * {@code highHalfQ8} (Q8 windows) when the alphas' peak is expected {@code alphaOffset} windows above
+     * it: at least {@code minHalfWidthWindows}, at most half the widest band.
+     */
+    static int reachAbove(int highHalfQ8, int alphaOffset, SweepParameters p) {
+        long h = Math.max(0, highHalfQ8);
+        long protons = (h * HIGH_REACH_PER_HWHM_Q8 + (1 << 15)) >> 16;
+        long alphas = alphaOffset + ((h * ALPHA_REACH_PER_HWHM_Q8 + (1 << 15)) >> 16);
+        long reach = Math.max(protons, alphas) + p.robustnessMarginWindows;
         return (int) Math.max(p.minHalfWidthWindows, Math.min((p.maxBandWindows - 1) / 2, reach));
     }
 

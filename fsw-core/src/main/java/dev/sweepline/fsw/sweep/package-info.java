@@ -132,6 +132,13 @@
  *     exactly as before (hw-sim GoldenRunTest). <i>FocusDesignTest, DesignStyleTest, AllocationTest
  *     (both styles); hw-sim FocusDesignReachTest (the reach factors against the D-optimal yardstick over
  *     the built-in scenarios' plasmas); SchedulerStepBenchmark, SweepBoundaryBenchmark.</i></li>
+ * <li><b>R22 Interleaved focus order (opt-in).</b> With {@code focusStyle} bit 1 set (2: band, 3: design)
+ *     a focus sweep of n windows steps the even offsets from its starting end outward and then the odd
+ *     ones back ({@code SweepScheduler.interleavedOffset}): neighbouring windows 2i and 2i + 1 are read at
+ *     steps i and n − 1 − i, so a wind drifting during the sweep reads, to first order, as the wind at
+ *     mid-sweep, and no rail change exceeds two windows (each step's settle is its own, R4). Surveys stay
+ *     monotonic. The spectrum packet is in window order either way. <i>InterleavedOrderTest; hw-sim
+ *     DesignStyleRunTest (the ground's errors).</i></li>
  * </ol>
  *
  * <h2>Choices worth knowing</h2>

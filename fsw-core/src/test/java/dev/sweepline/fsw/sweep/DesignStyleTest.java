@@ -26,6 +26,11 @@ class DesignStyleTest {
         return p;
     }
 
+    /** Centre code of window {@code w} of the fixture table, (low + high) / 2 as the scheduler's table. */
+    private static int centre(int w) {
+        return (Fixtures.TABLE.dacLow(w) + Fixtures.TABLE.dacHigh(w)) / 2;
+    }
+
     @Test
     void shouldLockAndFlyTheDesignBandWithinItsBudget() {
         RecordingListener l = new RecordingListener();
@@ -79,25 +84,37 @@ class DesignStyleTest {
         }
         assertTrue(focus >= 30, "focus sweeps " + focus);
         assertTrue(stretched >= 30, "focus sweeps above the table's dwell " + stretched);
-        // every band is the design's: 2.0 low and 1.75 high half-widths at half maximum plus the margin
-        // either side of the peak of the spectrum it was chosen from (steady wind: no edge search);
+        // every band is the design's: 2.0 low half-widths at half maximum below, above 1.75 high ones or
+        // 1.0 beyond the alphas' window, plus the margin either side of the peak of the spectrum it was
+        // chosen from (steady wind: no edge search);
         // docs/focus-design.md, closed form with the rounding of FocusDesign.reachAbove/reachBelow
         SweepParameters p = designStyle();
         assertTrue(bands.size() >= 30, "bands " + bands.size());
-        int lopsided = 0;
+        int alphasHeld = 0;
         for (int[] band : bands) {
             int highHalfQ8 = band[3] - band[4];
-            int above = Math.max(p.minHalfWidthWindows, Math.min(31, (int) Math.round(highHalfQ8 * 1.75 / 256) + 1));
+            // the alphas' window: the first whose centre code reaches alphaRatio x the peak's code
+            // (linear between window centres, as FocusBand.codeAtQ8)
+            int w = band[2] >> 8;
+            long peakCode = centre(w) + Math.floorDiv((long) (centre(w + 1) - centre(w)) * (band[2] & 0xFF), 256);
+            long alphaCode = Math.floorDiv(peakCode * p.alphaRatioQ16, 65_536);
+            int alpha = 0;
+            while (alpha < 127 && centre(alpha) < alphaCode) {
+                alpha++;
+            }
+            int reach = Math.max((int) Math.round(highHalfQ8 * 1.75 / 256),
+                    alpha - ((band[2] + 128) >> 8) + (int) Math.round(highHalfQ8 / 256.0));
+            int above = Math.max(p.minHalfWidthWindows, Math.min(31, reach + 1));
             int below = Math.max(p.minHalfWidthWindows, Math.min(63 - above, (int) Math.round(band[4] * 2.0 / 256) + 1));
             int centre = (band[2] + 128) >> 8;
             assertEquals(Math.max(0, centre - below), band[0]);
             assertEquals(Math.min(127, centre + above), band[1]);
-            if (centre - band[0] > band[1] - centre) {
-                lopsided++;
+            if (band[1] >= Math.min(127, alpha)) {
+                alphasHeld++;
             }
         }
-        // the near-Sun wind's peak is lopsided on the demo table: the band reaches further below it
-        assertTrue(lopsided > bands.size() / 2, "bands reaching further below the peak " + lopsided + " of " + bands.size());
+        // every band holds the alphas' expected window, for the ground's joint fit
+        assertEquals(bands.size(), alphasHeld);
         // every step of a sweep flies the spectrum's dwell: steps of the last full focus sweep
         int n = l.steps.size();
         int last = l.steps.get(n - 1).periods();

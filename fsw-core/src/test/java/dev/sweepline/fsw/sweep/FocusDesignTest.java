@@ -38,24 +38,29 @@ class FocusDesignTest {
     @Test
     void shouldReachTheDesignsMultiplesOfEachHalfWidth() {
         SweepParameters p = design(0, 0);
-        // docs/focus-design.md: 1.75 high half-widths above the peak, 2.0 low ones below (Q8, rounded)
-        assertEquals(7, FocusDesign.reachAbove(4 << 8, p)); // 4 x 1.75 = 7
-        assertEquals(18, FocusDesign.reachAbove((int) Math.round(10.4 * 256), p)); // 18.2 -> 18
+        // docs/focus-design.md: 1.75 high half-widths above the peak (or 1.0 beyond the alphas' window),
+        // 2.0 low ones below (Q8, rounded)
+        assertEquals(7, FocusDesign.reachAbove(4 << 8, 0, p)); // 4 x 1.75 = 7
+        assertEquals(18, FocusDesign.reachAbove((int) Math.round(10.4 * 256), 0, p)); // 18.2 -> 18
+        // alphas expected 12 windows above: 12 + 1.0 x 10.4 = 22.4 -> 22 beats 18
+        assertEquals(22, FocusDesign.reachAbove((int) Math.round(10.4 * 256), 12, p));
+        assertEquals(18, FocusDesign.reachAbove((int) Math.round(10.4 * 256), 7, p)); // 7 + 10 = 17 < 18
         assertEquals(28, FocusDesign.reachBelow(14 << 8, 18, p)); // 14 x 2 = 28
         assertEquals(29, FocusDesign.reachBelow((int) Math.round(14.3 * 256), 18, p)); // 28.6 -> 29
         // a narrow peak keeps the smallest half-width (4 > edge windows 2, SweepParameters.validate)
-        assertEquals(p.minHalfWidthWindows, FocusDesign.reachAbove(1 << 8, p));
+        assertEquals(p.minHalfWidthWindows, FocusDesign.reachAbove(1 << 8, 0, p));
         assertEquals(p.minHalfWidthWindows, FocusDesign.reachBelow(0, 4, p));
     }
 
     @Test
     void shouldAddTheMarginWithinTheBandLimits() {
         SweepParameters p = design(0, 3);
-        assertEquals(7 + 3, FocusDesign.reachAbove(4 << 8, p)); // 7 plus margin 3
+        assertEquals(7 + 3, FocusDesign.reachAbove(4 << 8, 0, p)); // 7 plus margin 3
         assertEquals(8 + 3, FocusDesign.reachBelow(4 << 8, 10, p)); // 8 plus margin 3
         // maxBandWindows 64 (SweepParameters.tunableDefaults): at most (64 - 1) / 2 = 31 above, and the
         // whole band 64 windows: 63 - 31 = 32 below
-        assertEquals(31, FocusDesign.reachAbove(40 << 8, p));
+        assertEquals(31, FocusDesign.reachAbove(40 << 8, 0, p));
+        assertEquals(31, FocusDesign.reachAbove(4 << 8, 40, p));
         assertEquals(32, FocusDesign.reachBelow(40 << 8, 31, p));
         assertEquals(63 - 10, FocusDesign.reachBelow(100 << 8, 10, p));
     }
@@ -94,7 +99,7 @@ class FocusDesignTest {
     void shouldRefuseStylesOutsideTheirRanges() {
         SweepParameters p = design(600_000, 0);
         assertEquals(0, p.validate(DemoCup.INSTRUMENT.rangeRatioShift()));
-        int[][] bad = {{2, 0, 0, 0}, {1, -1, 0, 0}, {1, SweepParameters.MAX_FOCUS_BUDGET_MICROS + 1, 0, 0},
+        int[][] bad = {{4, 0, 0, 0}, {-1, 0, 0, 0}, {1, -1, 0, 0}, {1, SweepParameters.MAX_FOCUS_BUDGET_MICROS + 1, 0, 0},
             {1, 0, -1, 0}, {1, 0, SweepParameters.MAX_ROBUSTNESS_MARGIN_WINDOWS + 1, 0}, {1, 0, 0, -1},
             {1, 0, 0, p.integrationPeriods + 1}};
         for (int[] b : bad) {
