@@ -120,15 +120,18 @@
  *     no peak gives SURVEY. This holds a shock's new peak within 2 sweeps even when the front lands at
  *     the end of a survey. <i>LockLossTest.shouldSearchBeyondTheEdgeAndHoldTheMovedPeak,
  *     shouldSurveyWhenTheEdgeSearchFindsTheEdgeAgain; hw-sim SweepPropertiesTest (1000 shocked winds).</i></li>
- * <li><b>R21 Design style (opt-in).</b> With {@code focusStyle} 1 (design) a focus band reaches 2.0 times
- *     the peak's measured low half-width at half maximum below the refined peak and 1.75 times the high one
- *     above it, each plus {@code robustnessMarginWindows}, within minHalfWidthWindows and maxBandWindows
- *     (docs/focus-design.md; {@link FocusDesign}, two multiplications per band; the peak finder keeps the
- *     low half-width with the FWHM); every step of a focus
+ * <li><b>R21 Design style (opt-in).</b> With {@code focusStyle} bit 0 (1 or 3: design) a focus band reaches
+ *     2.0 times the peak's measured low half-width at half maximum below the refined peak and above it the
+ *     farther of 1.75 times the high one and 1.0 times it beyond the alphas' expected window (alphaRatio
+ *     times the peak's code), each plus {@code robustnessMarginWindows}, within minHalfWidthWindows and maxBandWindows
+ *     (docs/focus-design.md; {@link FocusDesign}, a few multiplications and a table search per band; the
+ *     peak finder keeps the low half-width with the FWHM); every step of a focus
  *     sweep dwells the most whole periods that fit {@code focusBudgetMicros} after the settles, never fewer
  *     than integrationPeriods nor more than its limit; a survey dwells {@code surveyIntegrationPeriods}
  *     when not 0. Every spectrum carries its own dwell. Alpha discrimination, edge search, collapse and
- *     jump checks and gain ranging are those of the band style. The default (band, 0, 0, 0) flies
+ *     jump checks and gain ranging are those of the band style, but a peak that jumped inside the band and
+ *     not by about the alpha ratio is followed at once (the band chosen around it) instead of surveying
+ *     (LockLossTest.shouldFollowAJumpInsideTheBandInDesignStyle). The default (band, 0, 0, 0) flies
  *     exactly as before (hw-sim GoldenRunTest). <i>FocusDesignTest, DesignStyleTest, AllocationTest
  *     (both styles); hw-sim FocusDesignReachTest (the reach factors against the D-optimal yardstick over
  *     the built-in scenarios' plasmas); SchedulerStepBenchmark, SweepBoundaryBenchmark.</i></li>
