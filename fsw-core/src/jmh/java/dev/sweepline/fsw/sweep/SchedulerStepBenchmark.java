@@ -37,8 +37,8 @@ public class SchedulerStepBenchmark {
     private long nowMicros;
     private final SweepCounter counter = new SweepCounter();
 
-    /** Focus style (SweepParameters.FOCUS_STYLE_BAND or FOCUS_STYLE_DESIGN). */
-    @Param({"0", "1"})
+    /** Focus style (SweepParameters.FOCUS_STYLE_BAND, FOCUS_STYLE_DESIGN, or 3: the design interleaved). */
+    @Param({"0", "1", "3"})
     public int focusStyle;
 
     /** Counts sweeps per mode without allocating (the benchmark checks that it measured both modes). */
@@ -68,7 +68,9 @@ public class SchedulerStepBenchmark {
 
     /** The demo cup's parameters in {@code style}; the design style of the tests' Fixtures (400 ms budget, margin 1, quick survey). */
     static SweepParameters parameters(int style) {
-        return style == SweepParameters.FOCUS_STYLE_DESIGN ? Fixtures.designStyle() : DemoCup.parameters();
+        SweepParameters p = (style & SweepParameters.FOCUS_STYLE_DESIGN) != 0 ? Fixtures.designStyle() : DemoCup.parameters();
+        p.focusStyle = style;
+        return p;
     }
 
     /** Fails the run if the loop did not go survey -&gt; focus (a benchmark that checks its result). */

@@ -6,15 +6,14 @@ import dev.sweepline.fsw.table.WindowTable;
 /**
  * The focus band and the reference peak it was chosen from (sweep design note, R6 and R10).
  * Band = refined peak window +/- max(minHalfWidth, FWHM * halfWidthPerFwhm), at most maxBandWindows
- * wide, clipped (not shifted) to the table; in the design style the half-width is the design table's
- * for the measured FWHM plus the robustness margin (R21, {@link FocusDesign}). Loss of lock compares each focus spectrum with the
+ * wide, clipped (not shifted) to the table; in the design style the band reaches the design's multiples of
+ * the measured low and high half-widths either side, plus the robustness margin (R21, {@link FocusDesign}). Loss of lock compares each focus spectrum with the
  * reference peak: no peak, current collapse, peak on an unclipped edge, peak jump (including a jump
  * to about the alpha ratio). A peak on an edge first turns the band into an edge search (R18).
  */
 final class FocusBand {
     private final int[] centreCode;
     private final SweepParameters params;
-    private final FocusDesign design;
 
     private boolean valid;
     private int first;
@@ -26,12 +25,10 @@ final class FocusBand {
     /**
      * @param centreCode the active table's centre codes (owned and kept current by the scheduler)
      * @param params     the active parameters (owned and kept current by the scheduler)
-     * @param design     the design table of the active parameters (kept current by the scheduler)
      */
-    FocusBand(int[] centreCode, SweepParameters params, FocusDesign design) {
+    FocusBand(int[] centreCode, SweepParameters params) {
         this.centreCode = centreCode;
         this.params = params;
-        this.design = design;
     }
 
     /** Forgets the band (new table, or no lock). */
@@ -57,10 +54,20 @@ final class FocusBand {
     /** Chooses the band from an analysed spectrum with a valid peak, in a table of {@code windowCount}. */
     void choose(Spectrum s, int windowCount) {
         int centre = (s.peakWindowQ8() + 128) >> 8;
-        int half = params.focusStyle == SweepParameters.FOCUS_STYLE_DESIGN ? design.halfWidth(s.fwhmWindowsQ8(), params)
-                : bandHalfWidth(s.fwhmWindowsQ8());
-        first = Math.max(0, centre - half);
-        last = Math.min(windowCount - 1, centre + half);
+        int above;
+        int below;
+        if (params.designBand()) {
+            int highHalfQ8 = s.fwhmWindowsQ8() - s.lowHalfWindowsQ8();
+            int alphaWindow = windowAtOrAbove(((long) codeAtQ8(s.peakWindowQ8(), windowCount) * params.alphaRatioQ16) >> 16,
+                    windowCount);
+            above = FocusDesign.reachAbove(highHalfQ8, alphaWindow - centre, params);
+            below = FocusDesign.reachBelow(s.lowHalfWindowsQ8(), above, params);
+        } else {
+            above = bandHalfWidth(s.fwhmWindowsQ8());
+            below = above;
+        }
+        first = Math.max(0, centre - below);
+        last = Math.min(windowCount - 1, centre + above);
         referencePeakQ8 = s.peakWindowQ8();
         referencePeakUnits = s.peakCurrentUnits();
         valid = true;
@@ -130,6 +137,11 @@ final class FocusBand {
         return ModeChangeReason.NONE;
     }
 
+    /** True when the peak of {@code s} lies at about the alpha ratio from the reference peak. */
+    boolean jumpedToAlphaRatio(Spectrum s, int windowCount) {
+        return atAlphaRatio(s.peakWindowQ8(), referencePeakQ8, windowCount);
+    }
+
     /** True when the code at {@code peakQ8} is about alphaRatio times the code at {@code referenceQ8}. */
     boolean atAlphaRatio(int peakQ8, int referenceQ8, int windowCount) {
         long reference = codeAtQ8(referenceQ8, windowCount);
@@ -139,6 +151,15 @@ final class FocusBand {
         long ratioQ16 = (codeAtQ8(peakQ8, windowCount) << 16) / reference;
         long tolerance = ((long) params.alphaRatioQ16 * params.alphaToleranceQ16) >> 16;
         return Math.abs(ratioQ16 - params.alphaRatioQ16) <= tolerance;
+    }
+
+    /** The first window whose centre code is at least {@code code}; the last window when none is. */
+    int windowAtOrAbove(long code, int windowCount) {
+        int w = 0;
+        while (w < windowCount - 1 && centreCode[w] < code) {
+            w++;
+        }
+        return w;
     }
 
     /** Centre code at a fractional window index (Q8), linear between window centres, clamped to the table. */

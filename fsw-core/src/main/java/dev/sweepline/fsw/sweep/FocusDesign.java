@@ -5,66 +5,62 @@ import dev.sweepline.fsw.table.SettleTime;
 import dev.sweepline.fsw.table.SweepParameters;
 
 /**
- * The design style of focus (sweep design note R21; docs/focus-design.md): the band half-width that
- * maximises the information on the protons' (n, U, w) per second for a peak of the measured width, and
- * the dwell that fills the sweep-time budget.
+ * The design style of focus (sweep design note R21; docs/focus-design.md): the band that maximises the
+ * information on the protons' (n, U, w) per second for a peak of the measured shape, and the dwell that
+ * fills the sweep-time budget.
  *
- * <p>The normalised design table {@link #HALF_WIDTH_PER_FWHM_Q8} was computed off board
- * (docs/focus-design.md, reproduced by hw-sim's FocusDesignTableTest): for a Gaussian peak of FWHM f
- * windows, read in windows of one unit, with shot noise and a noise floor of 1 % of the peak window's
- * variance, the contiguous band |j - peak| ≤ h of equal dwell that maximises det F / (2h + 1)^3
- * (information per second, D-criterion), averaged over the peak's position within its window. At table
- * load the scheduler turns it into whole windows for every integer FWHM, with the robustness margin
- * and the band limits applied ({@link #configure}); a band choice is then one array read.
+ * <p>The band reaches {@link #LOW_REACH_PER_HWHM_Q8} times the peak's measured low half-width at half
+ * maximum below the refined peak and above it the farther of {@link #HIGH_REACH_PER_HWHM_Q8} times the
+ * high one and {@link #ALPHA_REACH_PER_HWHM_Q8} times it beyond the alphas' expected peak, plus the
+ * robustness margin, within the band limits. Both factors were chosen off board against the bench's
+ * D-optimal yardstick (hw-sim {@code design.DOptimalDesign}) over the built-in scenarios'
+ * plasmas (docs/focus-design.md, reproduced by hw-sim's FocusDesignTableTest): the information lies
+ * further out on the low-voltage side (a hot, slow wind's long low tail on a table of equal voltage
+ * ratios) and less far on the high side (where the alphas' current adds shot noise). A band choice is a
+ * few multiplications and a search of the table for the alphas' window; nothing to precompute.
  */
 public final class FocusDesign {
-    /** Widest FWHM of the normalised table, windows; wider peaks use its last entry. */
-    static final int TABLE_FWHM_WINDOWS = 32;
-    /**
-     * Design half-width over FWHM, Q8, for FWHM = 0..32 windows (entry 0 unused, as 1): h* / f with
-     * h* the best whole half-width (docs/focus-design.md table; h* = f − 1 windows from f = 5 on).
-     */
-    static final int[] HALF_WIDTH_PER_FWHM_Q8 = {
-        256, 256, 256, 256, 256, 205, 213, 219, 224, 228, 230, 233, 235, 236, 238, 239, 240,
-        241, 242, 243, 243, 244, 244, 245, 245, 246, 246, 247, 247, 247, 247, 248, 248,
-    };
+    /** Reach below the peak in low half-widths at half maximum, Q8: 2.0 (docs/focus-design.md). */
+    public static final int LOW_REACH_PER_HWHM_Q8 = 512;
+    /** Reach above the peak in high half-widths at half maximum, Q8: 1.75 (docs/focus-design.md). */
+    public static final int HIGH_REACH_PER_HWHM_Q8 = 448;
 
-    private final int[] halfWidthByFwhm = new int[TABLE_FWHM_WINDOWS + 1];
     private final int modulationPeriodMicros;
-    private int widestHalf;
-
-    /** The design table's half-width for a peak of {@code fwhmWindows} whole windows (1..32), before margin and limits. */
-    public static int tableHalfWidth(int fwhmWindows) {
-        int f = Math.max(1, Math.min(TABLE_FWHM_WINDOWS, fwhmWindows));
-        return (f * HALF_WIDTH_PER_FWHM_Q8[f] + 128) >> 8;
-    }
 
     FocusDesign(InstrumentDescription instrument) {
         this.modulationPeriodMicros = instrument.modulationPeriodMicros();
     }
 
-    /** Precomputes the half-width of every integer FWHM for {@code p} (at start-up and at every parameter load). */
-    void configure(SweepParameters p) {
-        int cap = (p.maxBandWindows - 1) / 2;
-        for (int f = 0; f <= TABLE_FWHM_WINDOWS; f++) {
-            int fwhm = Math.max(1, f);
-            int design = (fwhm * HALF_WIDTH_PER_FWHM_Q8[f] + 128) >> 8;
-            halfWidthByFwhm[f] = Math.min(cap, Math.max(p.minHalfWidthWindows, design + p.robustnessMarginWindows));
-        }
-        widestHalf = cap;
+    /**
+     * Reach beyond the alphas' expected peak (alphaRatio times the proton peak's code) in high half-widths
+     * of the protons, Q8: 1.0. Not for the protons' information (the alphas' current only adds noise
+     * there) but for the ground's joint fit, which needs the alpha peak to keep the alphas from biasing
+     * the protons (docs/focus-design.md: without it the ground's p95 errors were 2-3 times the band
+     * style's).
+     */
+    public static final int ALPHA_REACH_PER_HWHM_Q8 = 256;
+
+    /**
+     * Windows the design band reaches above the refined peak for a high half-width of
+     * {@code highHalfQ8} (Q8 windows) when the alphas' peak is expected {@code alphaOffset} windows above
+     * it: at least {@code minHalfWidthWindows}, at most half the widest band.
+     */
+    static int reachAbove(int highHalfQ8, int alphaOffset, SweepParameters p) {
+        long h = Math.max(0, highHalfQ8);
+        long protons = (h * HIGH_REACH_PER_HWHM_Q8 + (1 << 15)) >> 16;
+        long alphas = alphaOffset + ((h * ALPHA_REACH_PER_HWHM_Q8 + (1 << 15)) >> 16);
+        long reach = Math.max(protons, alphas) + p.robustnessMarginWindows;
+        return (int) Math.max(p.minHalfWidthWindows, Math.min((p.maxBandWindows - 1) / 2, reach));
     }
 
     /**
-     * The design half-width for a peak of {@code fwhmWindowsQ8} (Q8 windows): the table's entry at the
-     * nearest integer width, or beyond the table the last ratio times the width, with margin and limits.
+     * Windows the design band reaches below the refined peak for a low half-width of {@code lowHalfQ8}
+     * (Q8 windows), when it reaches {@code above} windows above: at least {@code minHalfWidthWindows},
+     * and the whole band at most {@code maxBandWindows}.
      */
-    int halfWidth(int fwhmWindowsQ8, SweepParameters p) {
-        int f = (fwhmWindowsQ8 + 128) >> 8;
-        if (f <= TABLE_FWHM_WINDOWS) {
-            return halfWidthByFwhm[Math.max(0, f)];
-        }
-        long design = ((long) fwhmWindowsQ8 * HALF_WIDTH_PER_FWHM_Q8[TABLE_FWHM_WINDOWS] + (1 << 15)) >> 16;
-        return (int) Math.min(widestHalf, Math.max(p.minHalfWidthWindows, design + p.robustnessMarginWindows));
+    static int reachBelow(int lowHalfQ8, int above, SweepParameters p) {
+        long reach = (((long) Math.max(0, lowHalfQ8) * LOW_REACH_PER_HWHM_Q8 + (1 << 15)) >> 16) + p.robustnessMarginWindows;
+        return (int) Math.max(p.minHalfWidthWindows, Math.min(p.maxBandWindows - 1 - above, reach));
     }
 
     /**

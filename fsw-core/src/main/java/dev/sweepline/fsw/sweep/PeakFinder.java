@@ -48,8 +48,11 @@ final class PeakFinder {
             return;
         }
         int peakLocalQ8 = (peak << 8) + parabolaOffsetQ8(s, peak);
-        int fwhmQ8 = fwhmQ8(s, peak, peakLocalQ8);
-        s.setPeak(argmax, peak, (s.firstWindow() << 8) + peakLocalQ8, fwhmQ8);
+        long leftQ8 = leftCrossingQ8(s, peak);
+        long rightQ8 = rightCrossingQ8(s, peak);
+        int fwhmQ8 = fwhmQ8(s.count(), peakLocalQ8, leftQ8, rightQ8);
+        int lowHalfQ8 = leftQ8 >= 0 ? (int) (peakLocalQ8 - leftQ8) : fwhmQ8 / 2;
+        s.setPeak(argmax, peak, (s.firstWindow() << 8) + peakLocalQ8, fwhmQ8, lowHalfQ8);
     }
 
     /**
@@ -123,24 +126,11 @@ final class PeakFinder {
      * neither, the spectrum width.
      */
     static int fwhmQ8(Spectrum s, int p, int peakLocalQ8) {
-        int n = s.count();
-        long half = s.currentUnits(p) / 2;
-        int i = p;
-        while (i > 0 && s.currentUnits(i - 1) >= half) {
-            i--;
-        }
-        long leftQ8 = -1;
-        if (i > 0) {
-            leftQ8 = crossingQ8(i - 1, s.currentUnits(i - 1), s.currentUnits(i), half);
-        }
-        int j = p;
-        while (j < n - 1 && s.currentUnits(j + 1) >= half) {
-            j++;
-        }
-        long rightQ8 = -1;
-        if (j < n - 1) {
-            rightQ8 = crossingQ8(j, s.currentUnits(j), s.currentUnits(j + 1), half);
-        }
+        return fwhmQ8(s.count(), peakLocalQ8, leftCrossingQ8(s, p), rightCrossingQ8(s, p));
+    }
+
+    /** As {@link #fwhmQ8(Spectrum, int, int)} from the crossings (-1: none) of a spectrum of {@code n} entries. */
+    private static int fwhmQ8(int n, int peakLocalQ8, long leftQ8, long rightQ8) {
         if (leftQ8 >= 0 && rightQ8 >= 0) {
             return (int) (rightQ8 - leftQ8);
         }
@@ -151,6 +141,26 @@ final class PeakFinder {
             return (int) (2 * (rightQ8 - peakLocalQ8));
         }
         return n << 8;
+    }
+
+    /** The half-maximum crossing below entry {@code p}, Q8 entries, or -1 when the spectrum has none. */
+    private static long leftCrossingQ8(Spectrum s, int p) {
+        long half = s.currentUnits(p) / 2;
+        int i = p;
+        while (i > 0 && s.currentUnits(i - 1) >= half) {
+            i--;
+        }
+        return i > 0 ? crossingQ8(i - 1, s.currentUnits(i - 1), s.currentUnits(i), half) : -1;
+    }
+
+    /** The half-maximum crossing above entry {@code p}, Q8 entries, or -1 when the spectrum has none. */
+    private static long rightCrossingQ8(Spectrum s, int p) {
+        long half = s.currentUnits(p) / 2;
+        int j = p;
+        while (j < s.count() - 1 && s.currentUnits(j + 1) >= half) {
+            j++;
+        }
+        return j < s.count() - 1 ? crossingQ8(j, s.currentUnits(j), s.currentUnits(j + 1), half) : -1;
     }
 
     /**

@@ -49,6 +49,7 @@ public final class Spectrum {
     private int argmaxIndex = -1;
     private int peakWindowQ8;
     private int fwhmWindowsQ8;
+    private int lowHalfWindowsQ8;
     private int integrationPeriods;
 
     /** An empty spectrum for sweeps of {@code instrument}. */
@@ -158,6 +159,16 @@ public final class Spectrum {
         return fwhmWindowsQ8;
     }
 
+    /**
+     * The low-voltage side of the FWHM: from the low half-maximum crossing to the refined peak, windows,
+     * Q8 (valid when {@link #peakValid()}; half the FWHM when that side has no crossing in the spectrum).
+     * A hot, slow wind's peak is lopsided on a table of equal voltage ratios: more windows below the
+     * peak than above it.
+     */
+    public int lowHalfWindowsQ8() {
+        return lowHalfWindowsQ8;
+    }
+
     /** Current of the proton peak entry, range-0 units (0 when no peak). */
     public long peakCurrentUnits() {
         return peakIndex >= 0 ? currentUnits[peakIndex] : 0;
@@ -236,13 +247,15 @@ public final class Spectrum {
         argmaxIndex = -1;
         peakWindowQ8 = 0;
         fwhmWindowsQ8 = 0;
+        lowHalfWindowsQ8 = 0;
     }
 
-    void setPeak(int argmaxIndex, int peakIndex, int peakWindowQ8, int fwhmWindowsQ8) {
+    void setPeak(int argmaxIndex, int peakIndex, int peakWindowQ8, int fwhmWindowsQ8, int lowHalfWindowsQ8) {
         this.argmaxIndex = argmaxIndex;
         this.peakIndex = peakIndex;
         this.peakWindowQ8 = peakWindowQ8;
         this.fwhmWindowsQ8 = fwhmWindowsQ8;
+        this.lowHalfWindowsQ8 = lowHalfWindowsQ8;
         this.peakValid = true;
     }
 

@@ -46,6 +46,7 @@ public final class SweepScheduler {
     private int sweepSteps;
     private int sweepPeriods;
     private boolean sweepAscending;
+    private boolean sweepInterleaved;
     private int stepsIssued;
     private int awaitingWindow = NO_WINDOW;
     private int awaitingRange;
@@ -81,10 +82,9 @@ public final class SweepScheduler {
         this.completed = new Spectrum(instrument);
         this.peakFinder = new PeakFinder(config.centreCode, this.params, instrument.rangeRatioShift());
         this.design = new FocusDesign(instrument);
-        this.band = new FocusBand(config.centreCode, this.params, design);
+        this.band = new FocusBand(config.centreCode, this.params);
         gain.reset(config.windowCount());
         gain.configure(this.params);
-        design.configure(this.params);
     }
 
     /**
@@ -118,7 +118,8 @@ public final class SweepScheduler {
         if (!sweepActive) {
             beginSweep(nowMicros);
         }
-        int window = sweepAscending ? sweepFirst + stepsIssued : sweepFirst + sweepSteps - 1 - stepsIssued;
+        int offset = sweepInterleaved ? interleavedOffset(stepsIssued, sweepSteps) : stepsIssued;
+        int window = sweepAscending ? sweepFirst + offset : sweepFirst + sweepSteps - 1 - offset;
         int range = gain.choose(window);
         int low = dacLow[window];
         int high = dacHigh[window];
@@ -185,14 +186,29 @@ public final class SweepScheduler {
         sweepFirst = first;
         sweepSteps = last - first + 1;
         sweepPeriods = survey ? FocusDesign.surveyPeriods(params)
-                : params.focusStyle == SweepParameters.FOCUS_STYLE_DESIGN ? design.focusPeriods(params, dacLow, dacHigh,
+                : params.designBand() ? design.focusPeriods(params, dacLow, dacHigh,
                         first, last, SettleTime.micros(params, hvLowCode, hvHighCode, dacLow[start], dacHigh[start]))
                 : params.integrationPeriods;
+        sweepInterleaved = !survey && params.interleavedFocus();
         stepsIssued = 0;
         awaitingWindow = NO_WINDOW;
         building.begin(sweepNumber + 1, mode, first, sweepSteps, sweepAscending, nowMicros);
         building.integrationPeriods(sweepPeriods);
         sweepActive = true;
+    }
+
+    /**
+     * The offset from the sweep's starting end of step {@code k} of {@code n} in an interleaved sweep: the
+     * even offsets outward (0, 2, 4, ...), then the odd ones back (..., 3, 1), so that every stretch of
+     * the profile holds steps from both halves of the sweep's time.
+     */
+    static int interleavedOffset(int k, int n) {
+        int evens = (n + 1) / 2;
+        if (k < evens) {
+            return 2 * k;
+        }
+        int lastOdd = (n - 1) % 2 == 1 ? n - 1 : n - 2;
+        return lastOdd - 2 * (k - evens);
     }
 
     private void completeSweep(long nowMicros) {
@@ -231,6 +247,9 @@ public final class SweepScheduler {
             band.searchBeyondEdge(done, config.windowCount());
             hash.addBand(band.first(), band.last());
             listener.onBandChosen(band.first(), band.last(), done.peakWindowQ8(), nowMicros);
+        } else if (lost == ModeChangeReason.PEAK_JUMP && params.designBand() && !band.jumpedToAlphaRatio(done, config.windowCount())) {
+            // design style: a peak that jumped within the band, not by the alpha ratio, is followed at once
+            chooseBand(done, nowMicros);
         } else if (lost != NONE) {
             changeMode(SweepMode.SURVEY, lost, nowMicros);
         } else if (focusSweepsSinceSurvey >= params.resurveyEveryFocusSweeps) {
@@ -332,7 +351,6 @@ public final class SweepScheduler {
         }
         if ((changed & ActiveConfiguration.PARAMETERS_CHANGED) != 0) {
             gain.configure(params);
-            design.configure(params);
         }
         if ((changed & ActiveConfiguration.TABLE_CHANGED) != 0) {
             gain.reset(config.windowCount());

@@ -120,17 +120,28 @@
  *     no peak gives SURVEY. This holds a shock's new peak within 2 sweeps even when the front lands at
  *     the end of a survey. <i>LockLossTest.shouldSearchBeyondTheEdgeAndHoldTheMovedPeak,
  *     shouldSurveyWhenTheEdgeSearchFindsTheEdgeAgain; hw-sim SweepPropertiesTest (1000 shocked winds).</i></li>
- * <li><b>R21 Design style (opt-in).</b> With {@code focusStyle} 1 (design) a focus band's half-width is
- *     the normalised D-optimal design table's for the measured FWHM plus {@code robustnessMarginWindows},
- *     within minHalfWidthWindows and maxBandWindows (docs/focus-design.md; {@link FocusDesign}, precomputed
- *     for every integer FWHM at each parameter load, one array read per band); every step of a focus
+ * <li><b>R21 Design style (opt-in).</b> With {@code focusStyle} bit 0 (1 or 3: design) a focus band reaches
+ *     2.0 times the peak's measured low half-width at half maximum below the refined peak and above it the
+ *     farther of 1.75 times the high one and 1.0 times it beyond the alphas' expected window (alphaRatio
+ *     times the peak's code), each plus {@code robustnessMarginWindows}, within minHalfWidthWindows and maxBandWindows
+ *     (docs/focus-design.md; {@link FocusDesign}, a few multiplications and a table search per band; the
+ *     peak finder keeps the low half-width with the FWHM); every step of a focus
  *     sweep dwells the most whole periods that fit {@code focusBudgetMicros} after the settles, never fewer
  *     than integrationPeriods nor more than its limit; a survey dwells {@code surveyIntegrationPeriods}
  *     when not 0. Every spectrum carries its own dwell. Alpha discrimination, edge search, collapse and
- *     jump checks and gain ranging are those of the band style. The default (band, 0, 0, 0) flies
+ *     jump checks and gain ranging are those of the band style, but a peak that jumped inside the band and
+ *     not by about the alpha ratio is followed at once (the band chosen around it) instead of surveying
+ *     (LockLossTest.shouldFollowAJumpInsideTheBandInDesignStyle). The default (band, 0, 0, 0) flies
  *     exactly as before (hw-sim GoldenRunTest). <i>FocusDesignTest, DesignStyleTest, AllocationTest
- *     (both styles); hw-sim FocusDesignTableTest (the table recomputed from its formula, and its band
- *     against the unconstrained D-optimum); SchedulerStepBenchmark, SweepBoundaryBenchmark.</i></li>
+ *     (both styles); hw-sim FocusDesignReachTest (the reach factors against the D-optimal yardstick over
+ *     the built-in scenarios' plasmas); SchedulerStepBenchmark, SweepBoundaryBenchmark.</i></li>
+ * <li><b>R22 Interleaved focus order (opt-in).</b> With {@code focusStyle} bit 1 set (2: band, 3: design)
+ *     a focus sweep of n windows steps the even offsets from its starting end outward and then the odd
+ *     ones back ({@code SweepScheduler.interleavedOffset}): neighbouring windows 2i and 2i + 1 are read at
+ *     steps i and n − 1 − i, so a wind drifting during the sweep reads, to first order, as the wind at
+ *     mid-sweep, and no rail change exceeds two windows (each step's settle is its own, R4). Surveys stay
+ *     monotonic. The spectrum packet is in window order either way. <i>InterleavedOrderTest; hw-sim
+ *     DesignStyleRunTest (the ground's errors).</i></li>
  * </ol>
  *
  * <h2>Choices worth knowing</h2>

@@ -17,6 +17,12 @@ public final class SweepParameters {
     public static final int FOCUS_STYLE_BAND = 0;
     /** {@link #focusStyle}: the band of the D-optimal design table (FocusDesign) and a dwell from {@link #focusBudgetMicros}. */
     public static final int FOCUS_STYLE_DESIGN = 1;
+    /**
+     * {@link #focusStyle} flag, added to either style: focus sweeps step the band's even offsets outward,
+     * then the odd ones back (an interleaved, time-symmetric order, docs/focus-design.md), so that a wind
+     * drifting during the sweep reads as the wind at mid-sweep to first order.
+     */
+    public static final int FOCUS_STYLE_INTERLEAVED = 2;
     /** Upper limit of {@link #focusBudgetMicros}: 10 s (design limit: a focus sweep far longer than the wind's changes teaches little). */
     public static final int MAX_FOCUS_BUDGET_MICROS = 10_000_000;
     /** Upper limit of {@link #robustnessMarginWindows} (design limit: a quarter of the table capacity). */
@@ -74,7 +80,10 @@ public final class SweepParameters {
     public int significanceSigmas;
     /** A local maximum is a separate peak when its prominence exceeds this fraction of its height, Q8. */
     public int prominenceFractionQ8;
-    /** How focus bands are chosen: {@link #FOCUS_STYLE_BAND} (the default) or {@link #FOCUS_STYLE_DESIGN}. */
+    /**
+     * How focus bands are chosen and stepped: {@link #FOCUS_STYLE_BAND} (the default) or
+     * {@link #FOCUS_STYLE_DESIGN}, either plus {@link #FOCUS_STYLE_INTERLEAVED} (0..3).
+     */
     public int focusStyle;
     /**
      * Design style: the sweep-time budget of a focus sweep, microseconds; the dwell of each window is
@@ -159,6 +168,16 @@ public final class SweepParameters {
         engineeringFlushSeconds = other.engineeringFlushSeconds;
     }
 
+    /** True when focus bands and dwell are the design style's ({@link #FOCUS_STYLE_DESIGN}, interleaved or not). */
+    public boolean designBand() {
+        return (focusStyle & FOCUS_STYLE_DESIGN) != 0;
+    }
+
+    /** True when focus sweeps step in the interleaved order ({@link #FOCUS_STYLE_INTERLEAVED}). */
+    public boolean interleavedFocus() {
+        return (focusStyle & FOCUS_STYLE_INTERLEAVED) != 0;
+    }
+
     /** True when the focus and survey styles are today's (table image version 1 holds this set). */
     public boolean defaultStyles() {
         return focusStyle == FOCUS_STYLE_BAND && focusBudgetMicros == 0 && robustnessMarginWindows == 0
@@ -214,7 +233,7 @@ public final class SweepParameters {
             || significanceSigmas > 100 || prominenceFractionQ8 < 0 || prominenceFractionQ8 > 256) {
             return TableStatus.BAD_NOISE;
         }
-        if ((focusStyle != FOCUS_STYLE_BAND && focusStyle != FOCUS_STYLE_DESIGN)
+        if (focusStyle < FOCUS_STYLE_BAND || focusStyle > (FOCUS_STYLE_DESIGN | FOCUS_STYLE_INTERLEAVED)
             || focusBudgetMicros < 0 || focusBudgetMicros > MAX_FOCUS_BUDGET_MICROS
             || robustnessMarginWindows < 0 || robustnessMarginWindows > MAX_ROBUSTNESS_MARGIN_WINDOWS
             || surveyIntegrationPeriods < 0 || surveyIntegrationPeriods > integrationPeriods) {

@@ -125,7 +125,7 @@ class AlphaDiscriminationTest {
         for (int w = 0; w < 128; w++) {
             centre[w] = (Fixtures.TABLE.dacLow(w) + Fixtures.TABLE.dacHigh(w)) / 2;
         }
-        FocusBand band = new FocusBand(centre, p, new FocusDesign(DemoCup.INSTRUMENT));
+        FocusBand band = new FocusBand(centre, p);
         // 18.35 windows up is 1.9863 x (physics.md); 9 windows up (1.40 x) is not, within 6 %
         assertTrue(band.atAlphaRatio((60 << 8) + (int) Math.round(ALPHA_OFFSET_WINDOWS * 256), 60 << 8, 128));
         assertFalse(band.atAlphaRatio(69 << 8, 60 << 8, 128));

@@ -11,7 +11,7 @@ import org.junit.jupiter.api.Test;
 
 /**
  * The scheduler in the design style (sweep design note R21): it locks as in the band style, chooses the
- * design table's band for the measured width, flies every focus sweep within its budget at one dwell,
+ * design's band for the measured shape of the peak, flies every focus sweep within its budget at one dwell,
  * surveys at the quick survey's dwell, and reports each sweep's dwell with its spectrum.
  */
 class DesignStyleTest {
@@ -24,6 +24,11 @@ class DesignStyleTest {
         p.robustnessMarginWindows = 1;
         p.surveyIntegrationPeriods = 4;
         return p;
+    }
+
+    /** Centre code of window {@code w} of the fixture table, (low + high) / 2 as the scheduler's table. */
+    private static int centre(int w) {
+        return (Fixtures.TABLE.dacLow(w) + Fixtures.TABLE.dacHigh(w)) / 2;
     }
 
     @Test
@@ -47,7 +52,8 @@ class DesignStyleTest {
 
             @Override
             public void onBandChosen(int first, int last, int peakQ8, long nowMicros) {
-                bands.add(new int[] {first, last, peakQ8, scheduler[0].lastSpectrum().fwhmWindowsQ8()});
+                Spectrum from = scheduler[0].lastSpectrum();
+                bands.add(new int[] {first, last, peakQ8, from.fwhmWindowsQ8(), from.lowHalfWindowsQ8()});
             }
 
             @Override
@@ -78,18 +84,37 @@ class DesignStyleTest {
         }
         assertTrue(focus >= 30, "focus sweeps " + focus);
         assertTrue(stretched >= 30, "focus sweeps above the table's dwell " + stretched);
-        // every band is the design table's: half-width h* = round(f x ratio) + margin around the peak
-        // of the spectrum it was chosen from (steady wind: no edge search)
-        FocusDesign d = new FocusDesign(DemoCup.INSTRUMENT);
+        // every band is the design's: 2.0 low half-widths at half maximum below, above 1.75 high ones or
+        // 1.0 beyond the alphas' window, plus the margin either side of the peak of the spectrum it was
+        // chosen from (steady wind: no edge search);
+        // docs/focus-design.md, closed form with the rounding of FocusDesign.reachAbove/reachBelow
         SweepParameters p = designStyle();
-        d.configure(p);
         assertTrue(bands.size() >= 30, "bands " + bands.size());
+        int alphasHeld = 0;
         for (int[] band : bands) {
-            int half = d.halfWidth(band[3], p);
+            int highHalfQ8 = band[3] - band[4];
+            // the alphas' window: the first whose centre code reaches alphaRatio x the peak's code
+            // (linear between window centres, as FocusBand.codeAtQ8)
+            int w = band[2] >> 8;
+            long peakCode = centre(w) + Math.floorDiv((long) (centre(w + 1) - centre(w)) * (band[2] & 0xFF), 256);
+            long alphaCode = Math.floorDiv(peakCode * p.alphaRatioQ16, 65_536);
+            int alpha = 0;
+            while (alpha < 127 && centre(alpha) < alphaCode) {
+                alpha++;
+            }
+            int reach = Math.max((int) Math.round(highHalfQ8 * 1.75 / 256),
+                    alpha - ((band[2] + 128) >> 8) + (int) Math.round(highHalfQ8 / 256.0));
+            int above = Math.max(p.minHalfWidthWindows, Math.min(31, reach + 1));
+            int below = Math.max(p.minHalfWidthWindows, Math.min(63 - above, (int) Math.round(band[4] * 2.0 / 256) + 1));
             int centre = (band[2] + 128) >> 8;
-            assertEquals(Math.max(0, centre - half), band[0]);
-            assertEquals(Math.min(127, centre + half), band[1]);
+            assertEquals(Math.max(0, centre - below), band[0]);
+            assertEquals(Math.min(127, centre + above), band[1]);
+            if (band[1] >= Math.min(127, alpha)) {
+                alphasHeld++;
+            }
         }
+        // every band holds the alphas' expected window, for the ground's joint fit
+        assertEquals(bands.size(), alphasHeld);
         // every step of a sweep flies the spectrum's dwell: steps of the last full focus sweep
         int n = l.steps.size();
         int last = l.steps.get(n - 1).periods();

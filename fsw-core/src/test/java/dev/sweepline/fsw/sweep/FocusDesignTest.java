@@ -9,8 +9,9 @@ import dev.sweepline.fsw.table.WindowTable;
 import org.junit.jupiter.api.Test;
 
 /**
- * The design style's band and dwell (sweep design note R21, docs/focus-design.md): the half-width is the
- * normalised design table's for the measured FWHM plus the robustness margin, within the band limits,
+ * The design style's band and dwell (sweep design note R21, docs/focus-design.md): the band reaches
+ * the design's multiples of the measured low and high half-widths plus the robustness margin, within
+ * the band limits,
  * and the dwell fills the sweep-time budget after each step's settle, never below the table's dwell nor
  * above its limit.
  */
@@ -35,32 +36,33 @@ class FocusDesignTest {
     }
 
     @Test
-    void shouldTakeTheHalfWidthOfTheDesignTable() {
+    void shouldReachTheDesignsMultiplesOfEachHalfWidth() {
         SweepParameters p = design(0, 0);
-        FocusDesign d = new FocusDesign(DemoCup.INSTRUMENT);
-        d.configure(p);
-        // docs/focus-design.md: h* = f - 1 windows from f = 5 on; FWHM 8 -> 7, FWHM 20 -> 19
-        assertEquals(7, d.halfWidth(8 << 8, p));
-        assertEquals(19, d.halfWidth(20 << 8, p));
-        // a narrow peak keeps the smallest half-width of the table (4 > edge windows 2, SweepParameters.validate)
-        assertEquals(p.minHalfWidthWindows, d.halfWidth(2 << 8, p));
-        // beyond the 32-window table: the last ratio 248/256, 40 x 248 / 256 = 38.75 -> 39 (in a band of up to 128)
-        p.maxBandWindows = 128;
-        d.configure(p);
-        assertEquals(39, d.halfWidth(40 << 8, p));
-        // nearest integer width: 7.6 windows reads the entry of 8
-        assertEquals(7, d.halfWidth((int) Math.round(7.6 * 256), p));
+        // docs/focus-design.md: 1.75 high half-widths above the peak (or 1.0 beyond the alphas' window),
+        // 2.0 low ones below (Q8, rounded)
+        assertEquals(7, FocusDesign.reachAbove(4 << 8, 0, p)); // 4 x 1.75 = 7
+        assertEquals(18, FocusDesign.reachAbove((int) Math.round(10.4 * 256), 0, p)); // 18.2 -> 18
+        // alphas expected 12 windows above: 12 + 1.0 x 10.4 = 22.4 -> 22 beats 18
+        assertEquals(22, FocusDesign.reachAbove((int) Math.round(10.4 * 256), 12, p));
+        assertEquals(18, FocusDesign.reachAbove((int) Math.round(10.4 * 256), 7, p)); // 7 + 10 = 17 < 18
+        assertEquals(28, FocusDesign.reachBelow(14 << 8, 18, p)); // 14 x 2 = 28
+        assertEquals(29, FocusDesign.reachBelow((int) Math.round(14.3 * 256), 18, p)); // 28.6 -> 29
+        // a narrow peak keeps the smallest half-width (4 > edge windows 2, SweepParameters.validate)
+        assertEquals(p.minHalfWidthWindows, FocusDesign.reachAbove(1 << 8, 0, p));
+        assertEquals(p.minHalfWidthWindows, FocusDesign.reachBelow(0, 4, p));
     }
 
     @Test
     void shouldAddTheMarginWithinTheBandLimits() {
         SweepParameters p = design(0, 3);
-        FocusDesign d = new FocusDesign(DemoCup.INSTRUMENT);
-        d.configure(p);
-        assertEquals(7 + 3, d.halfWidth(8 << 8, p)); // table 7 plus margin 3
-        // maxBandWindows 64 (SweepParameters.tunableDefaults): at most (64 - 1) / 2 = 31 either side
-        assertEquals(31, d.halfWidth(32 << 8, p));
-        assertEquals(31, d.halfWidth(100 << 8, p));
+        assertEquals(7 + 3, FocusDesign.reachAbove(4 << 8, 0, p)); // 7 plus margin 3
+        assertEquals(8 + 3, FocusDesign.reachBelow(4 << 8, 10, p)); // 8 plus margin 3
+        // maxBandWindows 64 (SweepParameters.tunableDefaults): at most (64 - 1) / 2 = 31 above, and the
+        // whole band 64 windows: 63 - 31 = 32 below
+        assertEquals(31, FocusDesign.reachAbove(40 << 8, 0, p));
+        assertEquals(31, FocusDesign.reachAbove(4 << 8, 40, p));
+        assertEquals(32, FocusDesign.reachBelow(40 << 8, 31, p));
+        assertEquals(63 - 10, FocusDesign.reachBelow(100 << 8, 10, p));
     }
 
     @Test
@@ -97,7 +99,7 @@ class FocusDesignTest {
     void shouldRefuseStylesOutsideTheirRanges() {
         SweepParameters p = design(600_000, 0);
         assertEquals(0, p.validate(DemoCup.INSTRUMENT.rangeRatioShift()));
-        int[][] bad = {{2, 0, 0, 0}, {1, -1, 0, 0}, {1, SweepParameters.MAX_FOCUS_BUDGET_MICROS + 1, 0, 0},
+        int[][] bad = {{4, 0, 0, 0}, {-1, 0, 0, 0}, {1, -1, 0, 0}, {1, SweepParameters.MAX_FOCUS_BUDGET_MICROS + 1, 0, 0},
             {1, 0, -1, 0}, {1, 0, SweepParameters.MAX_ROBUSTNESS_MARGIN_WINDOWS + 1, 0}, {1, 0, 0, -1},
             {1, 0, 0, p.integrationPeriods + 1}};
         for (int[] b : bad) {

@@ -167,6 +167,42 @@ class LockLossTest {
     }
 
     @Test
+    void shouldFollowAJumpInsideTheBandInDesignStyle() {
+        SweepParameters p = DemoCup.parameters();
+        p.focusStyle = SweepParameters.FOCUS_STYLE_DESIGN;
+        p.robustnessMarginWindows = 12; // a band wide enough for the jump to land inside
+        SyntheticInstrument plasma = Fixtures.oneAu(37);
+        RecordingListener l = new RecordingListener();
+        ClosedLoop loop = locked(plasma, p, l);
+        int changes = l.changes.size();
+        // 10 windows up: more than jumpWindows 6, well inside the band, not the alpha ratio (18.35)
+        plasma.speedKmPerS *= Math.sqrt(Math.pow(120, 10 / 128.0));
+        loop.runSweeps(1);
+        // R21: the design style re-centres on the new peak at once instead of surveying
+        assertEquals(changes, l.changes.size());
+        assertEquals(SweepMode.FOCUS, loop.scheduler.mode());
+        int truth = Fixtures.argmax(Fixtures.trueCurrents(plasma));
+        int centre = (loop.scheduler.lastSpectrum().peakWindowQ8() + 128) >> 8;
+        assertTrue(Math.abs(centre - truth) <= 1, "band chosen at " + centre + ", true peak " + truth);
+        assertTrue(loop.scheduler.bandFirst() < truth && truth < loop.scheduler.bandLast());
+    }
+
+    @Test
+    void shouldSurveyAfterAJumpByTheAlphaRatioInDesignStyle() {
+        SweepParameters p = DemoCup.parameters();
+        p.focusStyle = SweepParameters.FOCUS_STYLE_DESIGN;
+        p.robustnessMarginWindows = 24; // wide enough to hold a peak at the alpha ratio
+        SyntheticInstrument plasma = Fixtures.oneAu(37);
+        RecordingListener l = new RecordingListener();
+        ClosedLoop loop = locked(plasma, p, l);
+        // E/q x 1.9863 (the alpha ratio, SweepParameters.ALPHA_RATIO_1_986300_Q16): the alphas' place
+        plasma.speedKmPerS *= Math.sqrt(1.9863);
+        loop.runSweeps(1);
+        assertEquals(SweepMode.SURVEY, loop.scheduler.mode());
+        assertEquals(ModeChangeReason.PEAK_JUMP, l.lastChange().reason());
+    }
+
+    @Test
     void shouldTrackSlowDriftWithoutLosingLock() {
         SyntheticInstrument plasma = Fixtures.oneAu(38);
         RecordingListener l = new RecordingListener();

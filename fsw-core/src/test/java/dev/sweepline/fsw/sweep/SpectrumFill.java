@@ -35,7 +35,7 @@ public final class SpectrumFill {
 
     /** Sets a valid proton peak at entry {@code peakIndex}, refined to {@code peakWindowQ8}. */
     public static void setPeak(Spectrum s, int peakIndex, int peakWindowQ8) {
-        s.setPeak(peakIndex, peakIndex, peakWindowQ8, 0);
+        s.setPeak(peakIndex, peakIndex, peakWindowQ8, 0, 0);
     }
 
     /** Ends the sweep at {@code endMicros}. */
@@ -58,7 +58,8 @@ public final class SpectrumFill {
             to.store(i, r, from.gainRange(i), 0);
         }
         if (from.peakValid()) {
-            to.setPeak(from.argmaxIndex(), from.peakIndex(), from.peakWindowQ8(), from.fwhmWindowsQ8());
+            to.setPeak(from.argmaxIndex(), from.peakIndex(), from.peakWindowQ8(), from.fwhmWindowsQ8(),
+                    from.lowHalfWindowsQ8());
         }
         to.end(from.endMicros());
     }

@@ -21,20 +21,27 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
-import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.ValueSource;
 
 /**
  * Campaign design note C3: the recommended table, loaded through the table commands and restored by a fresh flight
- * software from its non-volatile memory, reproduces the metrics the campaign reported for it.
+ * software from its non-volatile memory, reproduces the metrics the campaign reported for it: for a small
+ * campaign, and for the demo campaign campaigns/focus-style.yaml (whose recommended set is an interleaved
+ * design style, focusStyle 3, a table image of version 2).
  */
 class RecommendedTableTest {
     @TempDir
     Path dir;
 
-    @Test
-    void shouldReproduceTheReportedMetricsWhenUplinked() throws Exception {
-        CampaignSpec spec = CampaignReader.parse(CampaignDeterminismTest.CAMPAIGN, "small.yaml", null);
+    @ParameterizedTest
+    @ValueSource(strings = {"small.yaml", "focus-style.yaml"})
+    void shouldReproduceTheReportedMetricsWhenUplinked(String campaign) throws Exception {
+        String text = campaign.equals("small.yaml") ? CampaignDeterminismTest.CAMPAIGN
+                : new String(RecommendedTableTest.class.getResourceAsStream("/campaigns/" + campaign).readAllBytes(),
+                        java.nio.charset.StandardCharsets.UTF_8);
+        CampaignSpec spec = CampaignReader.parse(text, campaign, null);
         List<RunRow> rows = CampaignRunner.run(spec, 2, Shard.ALL, RunPool.Progress.NONE);
         SetResult best = CampaignOutput.writeResults(dir, spec, rows);
         assertNotNull(best, "the small campaign recommends a set");
