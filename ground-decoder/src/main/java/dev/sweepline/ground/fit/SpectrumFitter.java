@@ -43,6 +43,8 @@ public final class SpectrumFitter {
 
     private final CupGeometry cup;
     private final Solver solver;
+    /** The models of the last spectrum, per thread (the fitter is shared between threads). */
+    private final ThreadLocal<ModelCache> models = ThreadLocal.withInitial(ModelCache::new);
 
     /** A fitter for a cup of geometry {@code cup}. */
     public SpectrumFitter(CupGeometry cup) {
@@ -127,7 +129,8 @@ public final class SpectrumFitter {
             angleFlags(preliminary, flags);
             return PlasmaFit.failed(flags, m, preliminary, cup.effectiveAreaM2());
         }
-        PlasmaModel protonModel = new PlasmaModel(in.lowVolts(), in.highVolts(), area, false);
+        ModelCache models = this.models.get();
+        PlasmaModel protonModel = models.model(in.lowVolts(), in.highVolts(), area, false);
         double[] guess = InitialGuess.protons(protonModel, in.totalAmps(), area);
         if (guess == null) {
             flags.add(FitFlag.NO_SIGNAL);
@@ -145,7 +148,7 @@ public final class SpectrumFitter {
         LeastSquaresRun.Outcome joint = null;
         PlasmaModel jointModel = null;
         if (m >= MIN_WINDOWS_JOINT) {
-            jointModel = new PlasmaModel(in.lowVolts(), in.highVolts(), area, true); // one for every joint try
+            jointModel = models.model(in.lowVolts(), in.highVolts(), area, true); // one for every joint try
             AlphaCoverage coverage = AlphaCoverage.of(protonModel, best.parameters());
             LeastSquaresRun.Outcome free = coverage == AlphaCoverage.PEAK
                     ? jointFit(in, area, protonModel, jointModel, best) : null;
@@ -321,7 +324,7 @@ public final class SpectrumFitter {
             return prior.abundance() ? null : constrainedFit(in, protonModel, joint, protons, prior.withAbundance());
         }
         boolean sane = alphaRatio > 0 && q[4] > 0.7 * q[1] && q[4] < 1.5 * q[1]
-                && extra > 0 && new AlphaSelection(extra).accepts(protons.chiSquare(), o.totalChiSquare());
+                && extra > 0 && AlphaSelection.accepts(extra, protons.chiSquare(), o.totalChiSquare());
         return sane ? new Constrained(o, prior) : null;
     }
 
