@@ -30,7 +30,11 @@ public final class FrameSynchroniser {
     private final FrameListener listener;
     private int frameOctets;
     private boolean lengthDetected;
-    private byte[] buf = new byte[64 * 1024];
+    /**
+     * The octets not yet decoded: room for a 64 KiB read (the decode command's) and the frame and ASM
+     * left over from the read before, so that a stream read that way needs no bigger buffer.
+     */
+    private byte[] buf = new byte[64 * 1024 + 2 * (FrameConstants.ASM_OCTETS + FrameConstants.MAX_FRAME_OCTETS)];
     private int start;
     private int end;
     /** Stream offset of buf[0]. */

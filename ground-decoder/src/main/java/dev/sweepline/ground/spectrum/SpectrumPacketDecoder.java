@@ -38,7 +38,8 @@ public final class SpectrumPacketDecoder {
     private final QuadrantDecompressor ccsds121;
     private final WindowCatalogue windows;
     private final InstrumentSet instruments;
-    private final SpectrumView own = new SpectrumView();
+    /** The view {@link #decode} fills before copying it; made on its first call. */
+    private SpectrumView own;
     private String detail = "";
 
     /**
@@ -69,6 +70,9 @@ public final class SpectrumPacketDecoder {
 
     /** Decodes the whole packet (primary header first) of {@code len} octets at {@code off}. */
     public SpectrumResult decode(byte[] pkt, int off, int len) {
+        if (own == null) {
+            own = new SpectrumView();
+        }
         SpectrumError e = decodeInto(pkt, off, len, own);
         return e == null ? SpectrumResult.ok(own.toDecoded()) : SpectrumResult.fail(e, detail);
     }
