@@ -122,7 +122,8 @@ public final class RiceDecoder {
     /** Decodes one coded data set starting at {@code block}; returns the blocks it covered. */
     private int decodeCds(int block, int blocksLeft) {
         int intervalBlocks = settings.referenceIntervalBlocks();
-        int inInterval = block % intervalBlocks;
+        // the ICD's streams lie within their first interval: no division there (an int division per block)
+        int inInterval = block < intervalBlocks ? block : block % intervalBlocks;
         boolean reference = preprocessed && inInterval == 0;
         long idPosition = reader.position();
         long id = reader.read(idBits);
