@@ -30,7 +30,15 @@ public final class FrameSynchroniser {
     private final FrameListener listener;
     private int frameOctets;
     private boolean lengthDetected;
-    private byte[] buf = new byte[64 * 1024];
+    /**
+     * Octets the buffer starts with: a few of the longest frames. Once the frame length is known, input
+     * is taken in pieces of what fits, so the buffer stays this size (and in cache); while the length is
+     * being detected each read is buffered whole, and the buffer grows as far as detection needs.
+     */
+    static final int INITIAL_BUFFER_OCTETS = 8 * (FrameConstants.ASM_OCTETS + FrameConstants.MAX_FRAME_OCTETS);
+
+    /** The octets not yet decoded, from {@link #start} to {@link #end}. */
+    private byte[] buf = new byte[INITIAL_BUFFER_OCTETS];
     private int start;
     private int end;
     /** Stream offset of buf[0]. */
@@ -71,10 +79,35 @@ public final class FrameSynchroniser {
         if (finished || len <= 0) {
             return;
         }
-        ensureRoom(len);
-        System.arraycopy(in, off, buf, end, len);
-        end += len;
-        process(false);
+        if (frameOctets == AUTO_LENGTH) {
+            // detection looks at what is buffered when it runs: buffer each read whole, as it came
+            ensureRoom(len);
+            System.arraycopy(in, off, buf, end, len);
+            end += len;
+            process(false);
+            return;
+        }
+        int at = off;
+        int left = len;
+        while (left > 0) {
+            int take = Math.min(left, roomAtEnd());
+            System.arraycopy(in, at, buf, end, take);
+            end += take;
+            at += take;
+            left -= take;
+            process(false);
+        }
+    }
+
+    /** Room after {@link #end}, making some when there is none: the undecoded octets moved down, or more buffer. */
+    private int roomAtEnd() {
+        if (end == buf.length) {
+            compactNow();
+        }
+        if (end == buf.length) {
+            buf = java.util.Arrays.copyOf(buf, buf.length * 2);
+        }
+        return buf.length - end;
     }
 
     /** Ends the stream: a partial frame is reported TRUNCATED and trailing octets as garbage. */

@@ -13,7 +13,8 @@
  *       ({@code Crc16Ibm3740Test}).</li>
  *   <li>F2 the header fields parse as CCSDS 132.0-B-3 lays them out: standards.md header example
  *       ({@code TmFrameHeaderTest}) and the golden frames ({@code GoldenFrameDecodeTest}).</li>
- *   <li>F3 any chunking gives the same result: one octet at a time vs all at once
+ *   <li>F3 any chunking gives the same result: one octet at a time vs all at once, and a read longer than
+ *       the synchroniser's buffer (taken in pieces of it once the frame length is known) as frame by frame
  *       ({@code FrameSynchroniserTest}).</li>
  *   <li>F4 bad input is reported with a reason, never thrown, and the next good frame decodes: garbage,
  *       truncation, bit flip, wrong SCID/version ({@code FrameSynchroniserTest}, {@code DecoderFuzzTest}).</li>

@@ -15,6 +15,8 @@ import java.util.Map;
 public final class InstrumentSet {
     private final List<GroundInstrument> list;
     private final Map<Integer, GroundInstrument> byId = new HashMap<>();
+    /** {@link #layoutOne()}, found once: it is asked for every layout-1 spectrum. */
+    private final GroundInstrument layoutOne;
 
     private InstrumentSet(List<GroundInstrument> list) {
         this.list = Collections.unmodifiableList(new ArrayList<>(list));
@@ -35,6 +37,7 @@ public final class InstrumentSet {
         if (list.isEmpty()) {
             throw new IllegalArgumentException("no instrument: the ground needs at least one description");
         }
+        this.layoutOne = byName(BuiltInInstruments.DEMO_CUP);
     }
 
     /** A set of these descriptions (at least one; ids and names distinct). */
@@ -98,7 +101,7 @@ public final class InstrumentSet {
      * ICD §4), or null when this set has no description of that name.
      */
     public GroundInstrument layoutOne() {
-        return byName(BuiltInInstruments.DEMO_CUP);
+        return layoutOne;
     }
 
     /** The descriptions, in the order given. */

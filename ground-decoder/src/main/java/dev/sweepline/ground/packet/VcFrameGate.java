@@ -55,7 +55,8 @@ final class VcFrameGate {
      * a frame equal to one accepted at its count, however long ago, is a copy of it.
      */
     private final int[] fecfAt = new int[COUNT_MODULUS];
-    private final byte[] held = new byte[FrameConstants.MAX_FRAME_OCTETS];
+    /** The frame held while the next one tells whether it starts a new sequence; made when first needed. */
+    private byte[] held;
     /** Octets of the held frame; 0 when none is held. */
     private int heldOctets;
 
@@ -100,6 +101,9 @@ final class VcFrameGate {
             sink.drop(count, dropReason(d));
         } else {
             // not a frame seen before: perhaps the first of a new sequence; the next frame tells
+            if (held == null) {
+                held = new byte[FrameConstants.MAX_FRAME_OCTETS];
+            }
             System.arraycopy(buf, off, held, 0, frameOctets);
             heldOctets = frameOctets;
         }

@@ -14,7 +14,11 @@ import dev.sweepline.ground.frame.FrameConstants;
 public final class VcReassembler {
     private final int vcid;
     private final PacketListener listener;
-    private final byte[] partial = new byte[SpacePacketHeader.MAX_PACKET_OCTETS];
+    /** Room for the first packets: a frame's worth; grows to the longest packet met, at most 65,542 octets. */
+    static final int INITIAL_PARTIAL_OCTETS = FrameConstants.MAX_FRAME_OCTETS;
+
+    /** The packet in progress: {@link #INITIAL_PARTIAL_OCTETS} at first, grown (never shrunk) to fit it. */
+    private byte[] partial = new byte[INITIAL_PARTIAL_OCTETS];
     /** Octets of the packet in progress held in {@link #partial}; 0 when none. */
     private int have;
     /** Length of the packet in progress, or -1 while its header is incomplete. */
@@ -126,6 +130,7 @@ public final class VcReassembler {
             }
             int total = SpacePacketHeader.totalOctets(d, p);
             if (total > rem) {
+                holdUpTo(total);
                 System.arraycopy(d, p, partial, 0, rem);
                 have = rem;
                 need = total;
@@ -154,11 +159,20 @@ public final class VcReassembler {
                 return -1;
             }
             need = SpacePacketHeader.totalOctets(partial, 0);
+            holdUpTo(need);
         }
         int take = Math.min(need - have, max - used);
         System.arraycopy(d, off + used, partial, have, take);
         have += take;
         return used + take;
+    }
+
+    /** Makes {@link #partial} hold {@code octets}, keeping the octets in it; doubles so that growth is rare. */
+    private void holdUpTo(int octets) {
+        if (octets > partial.length) {
+            int grown = Math.min(Math.max(octets, 2 * partial.length), SpacePacketHeader.MAX_PACKET_OCTETS);
+            partial = java.util.Arrays.copyOf(partial, grown);
+        }
     }
 
     private boolean inPacket() {

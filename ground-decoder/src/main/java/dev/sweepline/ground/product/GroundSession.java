@@ -7,7 +7,7 @@ import dev.sweepline.ground.decode.DecodeListener;
 import dev.sweepline.ground.decode.DecoderConfig;
 import dev.sweepline.ground.decode.TelemetryDecoder;
 import dev.sweepline.ground.spectrum.Ccsds121QuadrantDecoder;
-import dev.sweepline.ground.spectrum.DecodedSpectrum;
+import dev.sweepline.ground.spectrum.SpectrumView;
 import dev.sweepline.ground.spectrum.WindowCatalogue;
 import java.io.IOException;
 import java.io.Writer;
@@ -119,12 +119,15 @@ public final class GroundSession implements AutoCloseable {
         csv.close();
     }
 
-    /** Sends spectra to both the CSV writer and the fits. */
+    /**
+     * Sends spectra to both the CSV writer, which reads the decoder's reused view, and the fits, which
+     * keep an owned copy ({@link DecodeListener#onSpectrumView}'s default).
+     */
     private record Both(DecodeListener csv, DecodeListener fits) implements DecodeListener {
         @Override
-        public void onSpectrum(DecodedSpectrum s) {
-            csv.onSpectrum(s);
-            fits.onSpectrum(s);
+        public void onSpectrumView(SpectrumView s) {
+            csv.onSpectrumView(s);
+            fits.onSpectrumView(s);
         }
     }
 }

@@ -18,7 +18,9 @@
  * report says so and how many spectra of other instruments it leaves out); plot floors are a tenth of one
  * count of the instrument's most sensitive range. Values not available are NaN in the records and become an
  * empty CSV cell
- * or JSON null: no product carries NaN or Infinity. Bits per second are packet octets × 8 over the time
+ * or JSON null: no product carries NaN or Infinity. {@link dev.sweepline.ground.product.SpectraCsvWriter} reads
+ * the decoder's reused spectrum view and prints each number as its {@code Double.toString} text from one reused
+ * buffer (no boxing per cell); the fits take the owned copy they keep. Bits per second are packet octets × 8 over the time
  * span of the decoded packets, per APID, and frames × (L + 4 ASM) × 8 for the downlink.
  *
  * <p>Requirements and how each is verified ({@code GroundProcessingTest}, {@code QuickLookReportTest}):
@@ -32,6 +34,8 @@
  *   <li>P6 empty maps read "none", the allocation sentence follows the bit rates, moments.json carries the
  *       sigma and alpha fields of moments.csv ({@code ReportContentTest}); plot labels fall on 1-2-5 values
  *       and an empty series draws no point ({@code PlotLabelsTest}).</li>
+ *   <li>P7 spectra.csv from the view is the file commons-csv's {@code printRecord} of the boxed values gives:
+ *       survey and focus, currents either side of zero, unknown edges ({@code SpectraCsvWriterTest}).</li>
  * </ol>
  */
 package dev.sweepline.ground.product;

@@ -66,6 +66,72 @@ final class BitReader {
     }
 
     /**
+     * Reads the data of one split-sample block (CCSDS 121.0-B-3 §3.4.3.4): the fundamental sequences of
+     * {@code values[from .. to)}, then their {@code k}-bit low parts, each value becoming
+     * {@code (zeros << k) | low}. The fast path of the field-by-field reads: the bits are held in one 64-bit
+     * word loaded 8 octets at a time, each codeword's end found with {@code Long.numberOfLeadingZeros},
+     * and the stream's end and {@code maxHigh} are checked once for the whole block. Returns false, with the position unchanged and {@code values}
+     * partly overwritten, when the block does not pass that way (a codeword of more than 56 zeros, a load
+     * past the array, a bit past the stream, more than {@code maxHigh} zeros); the caller then reads the
+     * block field by field, which finds the exact error.
+     */
+    boolean readSplitBlock(long[] values, int from, int to, int k, long maxHigh) {
+        final byte[] d = data;
+        final int lastLoad = d.length - 8;
+        final long base = (long) offset * 8;
+        long p = base + position; // bit of the array the next field starts at
+        int at = (int) (p >>> 3);
+        if (at > lastLoad) {
+            return false;
+        }
+        long w = ((long) LONG_BE.get(d, at)) << (p & 7); // the bits from p on, MSB first, zeros after them
+        int valid = 64 - (int) (p & 7); // bits of w that are the array's: at least 57 after a load
+        int longest = 0;
+        for (int i = from; i < to; i++) {
+            int zeros = Long.numberOfLeadingZeros(w);
+            if (zeros >= valid) { // no one among the bits held: load from p again
+                at = (int) (p >>> 3);
+                if (at > lastLoad) {
+                    return false;
+                }
+                w = ((long) LONG_BE.get(d, at)) << (p & 7);
+                valid = 64 - (int) (p & 7);
+                zeros = Long.numberOfLeadingZeros(w);
+                if (zeros >= valid) {
+                    return false;
+                }
+            }
+            longest = Math.max(longest, zeros);
+            values[i] = (long) zeros << k;
+            w = (w << zeros) << 1; // two shifts: zeros + 1 may be 64, which a Java shift takes as 0
+            valid -= zeros + 1;
+            p += zeros + 1;
+        }
+        if (k > 0) {
+            final int drop = 64 - k;
+            for (int i = from; i < to; i++) {
+                if (valid < k) {
+                    at = (int) (p >>> 3);
+                    if (at > lastLoad) {
+                        return false;
+                    }
+                    w = ((long) LONG_BE.get(d, at)) << (p & 7);
+                    valid = 64 - (int) (p & 7); // >= 57 > k (k <= 31)
+                }
+                values[i] |= w >>> drop;
+                w <<= k;
+                valid -= k;
+                p += k;
+            }
+        }
+        if (p - base > endBit || longest > maxHigh) {
+            return false;
+        }
+        position = p - base;
+        return true;
+    }
+
+    /**
      * Skips to the next octet boundary of the stream (nothing when already on one) and returns the
      * skipped bits as an unsigned value, 0 when they are all zero. The skipped bits lie in the octet
      * of the last bit read, so this never runs past the region.

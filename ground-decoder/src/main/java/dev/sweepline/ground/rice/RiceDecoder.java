@@ -36,6 +36,7 @@ public final class RiceDecoder {
     private final long allOnesId;
     private final long maxGamma;
     private final boolean padIntervals;
+    private final boolean preprocessed;
     private final long[] mapped;
 
     private final BitReader reader = new BitReader(new byte[0], 0, 0);
@@ -57,6 +58,7 @@ public final class RiceDecoder {
         this.allOnesId = (1L << idBits) - 1;
         this.maxGamma = SecondExtension.maxGamma(n);
         this.padIntervals = settings.padIntervalsToOctet();
+        this.preprocessed = settings.preprocessed();
         this.mapped = new long[blockSize];
     }
 
@@ -120,8 +122,9 @@ public final class RiceDecoder {
     /** Decodes one coded data set starting at {@code block}; returns the blocks it covered. */
     private int decodeCds(int block, int blocksLeft) {
         int intervalBlocks = settings.referenceIntervalBlocks();
-        int inInterval = block % intervalBlocks;
-        boolean reference = settings.preprocessed() && inInterval == 0;
+        // the ICD's streams lie within their first interval: no division there (an int division per block)
+        int inInterval = block < intervalBlocks ? block : block % intervalBlocks;
+        boolean reference = preprocessed && inInterval == 0;
         long idPosition = reader.position();
         long id = reader.read(idBits);
         if (id < 0) {
@@ -236,6 +239,10 @@ public final class RiceDecoder {
     private boolean split(boolean reference, long refSample, int k) {
         int first = reference ? 1 : 0;
         long maxHigh = maxSample >>> k;
+        if (reader.readSplitBlock(mapped, first, blockSize, k, maxHigh)) {
+            return emitBlock(reference, refSample, reader.position());
+        }
+        // field by field: the block has an error (or a codeword too long for one load); find it exactly
         for (int i = first; i < blockSize; i++) {
             long position = reader.position();
             long high = reader.readFundamentalSequence(maxHigh);
@@ -259,26 +266,42 @@ public final class RiceDecoder {
         return emitBlock(reference, refSample, reader.position());
     }
 
-    /** Turns the block's mapped values into samples; writes those the caller asked for. */
+    /**
+     * Turns the block's mapped values into samples; writes those the caller asked for. On a value no
+     * sample can give, the samples before it stay written and counted.
+     */
     private boolean emitBlock(boolean reference, long refSample, long position) {
-        for (int i = 0; i < blockSize; i++) {
-            long x;
-            if (reference && i == 0) {
-                x = refSample;
-            } else if (settings.preprocessed()) {
-                x = UnitDelayReconstructor.sample(mapped[i], previous, maxSample);
-            } else {
-                x = mapped[i] <= maxSample ? mapped[i] : UnitDelayReconstructor.INVALID;
+        final long[] m = mapped;
+        final int[] o = out;
+        final long top = maxSample;
+        // samples of this block the caller wants: the last block may carry the encoder's padding
+        final int wantedHere = Math.min(blockSize, wanted - produced);
+        int written = produced;
+        long prev = previous;
+        int i = 0;
+        if (reference) {
+            prev = refSample;
+            if (wantedHere > 0) {
+                o[written++] = (int) refSample;
             }
+            i = 1;
+        }
+        for (; i < blockSize; i++) {
+            long x = preprocessed ? UnitDelayReconstructor.sample(m[i], prev, top)
+                    : m[i] <= top ? m[i] : UnitDelayReconstructor.INVALID;
             if (x < 0) {
+                previous = prev;
+                produced = written;
                 fail(DecodeStatus.VALUE_OUT_OF_RANGE, position);
                 return false;
             }
-            previous = x;
-            if (produced < wanted) {
-                out[produced++] = (int) x;
+            prev = x;
+            if (i < wantedHere) {
+                o[written++] = (int) x;
             }
         }
+        previous = prev;
+        produced = written;
         return true;
     }
 

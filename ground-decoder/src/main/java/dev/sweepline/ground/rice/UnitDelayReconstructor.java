@@ -27,7 +27,8 @@ final class UnitDelayReconstructor {
         long roomUp = maxSample - previous;
         long theta = Math.min(roomDown, roomUp);
         if (mapped <= 2 * theta) {
-            return (mapped & 1) == 0 ? previous + mapped / 2 : previous - (mapped + 1) / 2;
+            // even: + mapped / 2; odd: - (mapped + 1) / 2 = ~(mapped / 2), without a branch on the parity
+            return previous + ((mapped >>> 1) ^ -(mapped & 1));
         }
         return roomDown <= roomUp ? mapped : maxSample - mapped;
     }

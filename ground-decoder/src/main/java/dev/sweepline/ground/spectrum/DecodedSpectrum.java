@@ -68,6 +68,11 @@ public record DecodedSpectrum(CucTime time, int apid, int sequenceCount, int mod
 
     /** "survey" or "focus". */
     public String modeName() {
+        return modeName(mode);
+    }
+
+    /** "survey" or "focus" for the mode code {@code mode} (ICD §4), "mode" and the code for another. */
+    public static String modeName(int mode) {
         return mode == MODE_SURVEY ? "survey" : mode == MODE_FOCUS ? "focus" : "mode" + mode;
     }
 }

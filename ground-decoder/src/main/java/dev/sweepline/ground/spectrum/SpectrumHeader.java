@@ -24,21 +24,10 @@ import dev.sweepline.ground.frame.BigEndian;
  * 18         14          ...     gain-range tags, saturation flags, compression, quadrant streams
  * </pre>
  *
- * @param layout             1 or 2
- * @param instrumentId       the instrument id (layout 2), 0 in layout 1 (which names none)
- * @param sampleBits         w (layout 2), 16 in layout 1
- * @param mode               1 survey, 2 focus
- * @param flags              the flags octet
- * @param sweep              sweep number
- * @param tableId            table id
- * @param firstWindow        f
- * @param windowCount        c
- * @param peakQ8             peak, Q8 window units
- * @param integrationPeriods modulation periods per window
- * @param octets             length of the fixed fields: where the gain tags start
+ * <p>A flyweight: {@link #wrap} points it at a packet's user data and the accessors read the fields from
+ * there, so that one header per decoder serves every packet. Valid while the packet's buffer is.
  */
-record SpectrumHeader(int layout, int instrumentId, int sampleBits, int mode, int flags, int sweep, int tableId,
-        int firstWindow, int windowCount, int peakQ8, int integrationPeriods, int octets) {
+final class SpectrumHeader {
     /** First octet of layout 2: bit 7 set (versioned), bits 6..0 the version 2 (ICD §4). */
     static final int LAYOUT_2_MARKER = 0x82;
     /** Bit 7 of the first octet: set in every versioned layout (ICD §4). */
@@ -60,21 +49,87 @@ record SpectrumHeader(int layout, int instrumentId, int sampleBits, int mode, in
         return first == LAYOUT_2_MARKER ? LAYOUT_2_OCTETS : -1;
     }
 
+    private byte[] b;
+    /** User-data offset of the first octet. */
+    private int u;
+    /** Offset of the mode octet: the fields from there on are those of layout 1. */
+    private int m;
+    private boolean two;
+
     /** Reads the fixed fields at user-data offset {@code u}; {@link #octetsOf} octets must be there. */
-    static SpectrumHeader read(byte[] b, int u) {
-        boolean two = (b[u] & 0xFF) == LAYOUT_2_MARKER;
-        int m = two ? u + LAYOUT_2_OCTETS - LAYOUT_1_OCTETS : u;
-        return new SpectrumHeader(two ? 2 : 1, two ? BigEndian.u16(b, u + 1) : 0,
-                two ? b[u + 3] & 0xFF : QuadrantDecompressor.LAYOUT_1_SAMPLE_BITS, b[m] & 0xFF, b[m + 1] & 0xFF,
-                BigEndian.u16(b, m + 2), BigEndian.u16(b, m + 4), BigEndian.u16(b, m + 6), BigEndian.u16(b, m + 8),
-                BigEndian.u16(b, m + 10), BigEndian.u16(b, m + 12), two ? LAYOUT_2_OCTETS : LAYOUT_1_OCTETS);
+    SpectrumHeader wrap(byte[] buf, int userData) {
+        this.b = buf;
+        this.u = userData;
+        this.two = (buf[userData] & 0xFF) == LAYOUT_2_MARKER;
+        this.m = two ? userData + LAYOUT_2_OCTETS - LAYOUT_1_OCTETS : userData;
+        return this;
+    }
+
+    /** 1 or 2. */
+    int layout() {
+        return two ? 2 : 1;
+    }
+
+    /** The instrument id (layout 2), 0 in layout 1 (which names none). */
+    int instrumentId() {
+        return two ? BigEndian.u16(b, u + 1) : 0;
+    }
+
+    /** w (layout 2), 16 in layout 1. */
+    int sampleBits() {
+        return two ? b[u + 3] & 0xFF : QuadrantDecompressor.LAYOUT_1_SAMPLE_BITS;
+    }
+
+    /** 1 survey, 2 focus. */
+    int mode() {
+        return b[m] & 0xFF;
+    }
+
+    /** The flags octet. */
+    int flags() {
+        return b[m + 1] & 0xFF;
+    }
+
+    /** Sweep number. */
+    int sweep() {
+        return BigEndian.u16(b, m + 2);
+    }
+
+    /** Table id. */
+    int tableId() {
+        return BigEndian.u16(b, m + 4);
+    }
+
+    /** First window f. */
+    int firstWindow() {
+        return BigEndian.u16(b, m + 6);
+    }
+
+    /** Window count c. */
+    int windowCount() {
+        return BigEndian.u16(b, m + 8);
+    }
+
+    /** Peak, Q8 window units. */
+    int peakQ8() {
+        return BigEndian.u16(b, m + 10);
+    }
+
+    /** Modulation periods per window. */
+    int integrationPeriods() {
+        return BigEndian.u16(b, m + 12);
+    }
+
+    /** Length of the fixed fields: where the gain tags start. */
+    int octets() {
+        return two ? LAYOUT_2_OCTETS : LAYOUT_1_OCTETS;
     }
 
     boolean steppedDown() {
-        return (flags & STEPPED_DOWN) != 0;
+        return (flags() & STEPPED_DOWN) != 0;
     }
 
     boolean tableChanged() {
-        return (flags & TABLE_CHANGED) != 0;
+        return (flags() & TABLE_CHANGED) != 0;
     }
 }

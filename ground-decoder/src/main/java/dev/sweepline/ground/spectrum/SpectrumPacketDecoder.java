@@ -38,8 +38,16 @@ public final class SpectrumPacketDecoder {
     private final QuadrantDecompressor ccsds121;
     private final WindowCatalogue windows;
     private final InstrumentSet instruments;
-    private final SpectrumView own = new SpectrumView();
+    /** The view {@link #decode} fills before copying it; made on its first call. */
+    private SpectrumView own;
     private String detail = "";
+    /** The fixed fields of the packet being decoded, read in place. */
+    private final SpectrumHeader header = new SpectrumHeader();
+    /**
+     * The LSB of each gain tag of the spectrum being decoded, amperes (NaN for a range its instrument has
+     * not): one per value of the 2-bit tag (ICD §4).
+     */
+    private final double[] lsbByRange = new double[1 << 2];
 
     /**
      * A decoder for every built-in instrument.
@@ -69,6 +77,9 @@ public final class SpectrumPacketDecoder {
 
     /** Decodes the whole packet (primary header first) of {@code len} octets at {@code off}. */
     public SpectrumResult decode(byte[] pkt, int off, int len) {
+        if (own == null) {
+            own = new SpectrumView();
+        }
         SpectrumError e = decodeInto(pkt, off, len, own);
         return e == null ? SpectrumResult.ok(own.toDecoded()) : SpectrumResult.fail(e, detail);
     }
@@ -104,7 +115,7 @@ public final class SpectrumPacketDecoder {
         if (end - u < fixed) {
             return fail(SpectrumError.LENGTH_BEYOND_DATA, "packet of " + len + " octets");
         }
-        SpectrumHeader h = SpectrumHeader.read(pkt, u);
+        SpectrumHeader h = header.wrap(pkt, u);
         GroundInstrument instrument = h.layout() == 1 ? instruments.layoutOne() : instruments.byId(h.instrumentId());
         if (instrument == null) {
             return fail(SpectrumError.UNKNOWN_INSTRUMENT, h.layout() == 1
@@ -209,23 +220,24 @@ public final class SpectrumPacketDecoder {
     }
 
     /** Quadrant and total currents from the ADC samples: (count − pedestal) × the LSB of the window's range. */
-    private static void currents(SpectrumView v) {
+    private void currents(SpectrumView v) {
         GroundInstrument instrument = v.instrument;
         int pedestal = instrument.adc().pedestalCounts();
         int[] gain = v.gainRange;
         int[][] adc = v.adcCounts;
         double[][] amps = v.currentAmps;
-        double lsb0 = instrument.lsbAmps(0); // GroundInstrument.amps: one LSB per range, looked up once per spectrum
-        double lsb1 = instrument.gains().ranges() > 1 ? instrument.lsbAmps(1) : Double.NaN;
-        double lsb2 = instrument.gains().ranges() > 2 ? instrument.lsbAmps(2) : Double.NaN;
-        double lsb3 = instrument.gains().ranges() > 3 ? instrument.lsbAmps(3) : Double.NaN;
+        // GroundInstrument.amps: one LSB per range, looked up once per spectrum and then by the window's tag
+        // (an index rather than a branch on it: tags change from window to window)
+        double[] lsb = lsbByRange;
+        for (int r = 0; r < lsb.length; r++) {
+            lsb[r] = instrument.gains().hasRange(r) ? instrument.lsbAmps(r) : Double.NaN;
+        }
         for (int i = 0, c = v.windowCount; i < c; i++) {
-            int g = gain[i];
-            double lsb = g == 0 ? lsb0 : g == 1 ? lsb1 : g == 2 ? lsb2 : lsb3;
-            double a0 = (adc[0][i] - pedestal) * lsb;
-            double a1 = (adc[1][i] - pedestal) * lsb;
-            double a2 = (adc[2][i] - pedestal) * lsb;
-            double a3 = (adc[3][i] - pedestal) * lsb;
+            double l = lsb[gain[i]];
+            double a0 = (adc[0][i] - pedestal) * l;
+            double a1 = (adc[1][i] - pedestal) * l;
+            double a2 = (adc[2][i] - pedestal) * l;
+            double a3 = (adc[3][i] - pedestal) * l;
             amps[0][i] = a0;
             amps[1][i] = a1;
             amps[2][i] = a2;

@@ -63,6 +63,21 @@ public final class SpectrumView {
         return mode;
     }
 
+    /** "survey" or "focus" ({@link DecodedSpectrum#modeName(int)}). */
+    public String modeName() {
+        return DecodedSpectrum.modeName(mode);
+    }
+
+    /** Sweep number (16 bits, wraps). */
+    public int sweep() {
+        return sweep;
+    }
+
+    /** CUC time of the sweep's first step (a new object each call). */
+    public CucTime time() {
+        return new CucTime(coarseSeconds, fine);
+    }
+
     /** Window count c. */
     public int windowCount() {
         return windowCount;
@@ -122,7 +137,7 @@ public final class SpectrumView {
             adc[q] = Arrays.copyOf(adcCounts[q], c);
             amps[q] = Arrays.copyOf(currentAmps[q], c);
         }
-        return new DecodedSpectrum(new CucTime(coarseSeconds, fine), apid, sequenceCount, mode,
+        return new DecodedSpectrum(time(), apid, sequenceCount, mode,
                 (flags & SpectrumHeader.STEPPED_DOWN) != 0, (flags & SpectrumHeader.TABLE_CHANGED) != 0, sweep, tableId,
                 firstWindow, c, peakQ8, integrationPeriods, compression, Arrays.copyOf(gainRange, c),
                 Arrays.copyOf(saturated, c), adc, amps, Arrays.copyOf(totalAmps, c), Arrays.copyOf(lowVolts, c),

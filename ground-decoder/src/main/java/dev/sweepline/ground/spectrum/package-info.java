@@ -46,10 +46,11 @@
  *       {@code SAMPLE_WIDTH_MISMATCH}, a first octet with bit 7 set other than 0x82 as {@code UNKNOWN_LAYOUT},
  *       each with a detail naming the id or the instrument ({@code SpectrumLayoutTwoTest}).</li>
  *   <li>S7 the telemetry decoder's hot path fills one reused {@link dev.sweepline.ground.spectrum.SpectrumView}
- *       (buffers for 256 windows, the decompressor writing into them) and allocates nothing per sample or
- *       per window; a listener gets an owned {@code DecodedSpectrum} unless it reads the view
- *       ({@code SpectrumViewTest}; the golden tests go through the same path; JMH
- *       {@code FlightTelemetryDecodeBenchmark -prof gc}).</li>
+ *       (buffers for 256 windows, the decompressor writing into them; the fixed fields read in place by a
+ *       reused {@code SpectrumHeader}) and allocates nothing per sample, window or spectrum; a listener gets an
+ *       owned {@code DecodedSpectrum} unless it reads the view ({@code SpectrumViewTest}; the golden tests go
+ *       through the same path; {@code DecodeAllocationTest}: under 1 KiB for 300 spectra once warm; JMH
+ *       {@code FlightTelemetryDecodeBenchmark -prof gc}: what a pass allocates is the new decoder's tables).</li>
  * </ol>
  *
  * <p>Choices: the window edges reported are the calibrated voltages of the DAC-rounded codes the table

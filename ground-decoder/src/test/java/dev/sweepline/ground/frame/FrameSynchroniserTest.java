@@ -62,6 +62,34 @@ class FrameSynchroniserTest {
     }
 
     @Test
+    void shouldGiveTheSameEventsWhenOneReadIsLongerThanTheBuffer() {
+        // golden frames, damaged frames, cut frames and garbage, repeated past the synchroniser's first
+        // buffer (frames taken in pieces of it once the length is known), fed whole and frame by frame
+        Random rnd = new Random(0x5C4A_11L); // recorded seed
+        ByteArrayOutputStream o = new ByteArrayOutputStream();
+        byte[] golden = Hex.stream(GoldenFrames.STREAM);
+        while (o.size() < 3 * FrameSynchroniser.INITIAL_BUFFER_OCTETS) {
+            byte[] part = golden.clone();
+            switch (rnd.nextInt(4)) {
+                case 0 -> part[4 + rnd.nextInt(part.length - 4)] ^= 0x04; // a bit flip: one bad FECF
+                case 1 -> part = java.util.Arrays.copyOf(part, 4 + rnd.nextInt(part.length - 4)); // cut short
+                case 2 -> o.writeBytes(new byte[1 + rnd.nextInt(300)]); // garbage before the frames
+                default -> { }
+            }
+            o.writeBytes(part);
+        }
+        byte[] s = o.toByteArray();
+        List<String> whole = run(s, s.length);
+        long good = whole.stream().filter(e -> e.startsWith("GOOD")).count();
+        // about 62 copies of the 6 golden frames (3 buffers of 16,416 octets / 792), each losing at most 2
+        assertTrue(good > 4 * 60, "frames found: " + good);
+        assertTrue(whole.stream().anyMatch(e -> e.startsWith("BAD_CRC")), "a bad frame among them");
+        for (int chunk : new int[] {1, L + 4, 64 * 1024}) {
+            assertEquals(whole, run(s, chunk), "chunk " + chunk);
+        }
+    }
+
+    @Test
     void shouldCountGarbageBetweenFramesAndResync() {
         byte[] garbage = {0x1A, (byte) 0xCF, 0x00, 0x11, 0x22, 0x1A, (byte) 0xCF, (byte) 0xFC};
         byte[] s = cat(Hex.stream(GoldenFrames.HOUSEKEEPING_WITH_IDLE_TAIL), garbage,

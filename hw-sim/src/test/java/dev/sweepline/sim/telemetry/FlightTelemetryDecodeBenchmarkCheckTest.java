@@ -2,6 +2,9 @@ package dev.sweepline.sim.telemetry;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.util.Arrays;
 
 import org.junit.jupiter.api.Test;
 import org.openjdk.jmh.infra.Blackhole;
@@ -22,5 +25,19 @@ class FlightTelemetryDecodeBenchmarkCheckTest {
 
         bench.stream[bench.stream.length / 3] ^= 0x01; // one bit of one frame: its FECF no longer checks
         assertThrows(IllegalStateException.class, () -> bench.decode(octets, HOLE));
+    }
+
+    @Test
+    void shouldThrowWhenWholeFramesAreMissingThoughEveryFrameLeftIsGood() {
+        FlightTelemetryDecodeBenchmark bench = new FlightTelemetryDecodeBenchmark();
+        bench.record();
+        // the last 20 frames of ASM + 1024 octets (ICD §1 default length) cut off at a frame boundary: no
+        // bad frame and no spectrum error, only fewer spectra than the run sent
+        int frame = 4 + 1024;
+        assertEquals(0, bench.stream.length % frame, "the stream is whole frames");
+        bench.stream = Arrays.copyOf(bench.stream, bench.stream.length - 20 * frame);
+        IllegalStateException e = assertThrows(IllegalStateException.class,
+                () -> bench.decode(new FlightTelemetryDecodeBenchmark.Octets(), HOLE));
+        assertTrue(e.getMessage().startsWith("0 bad frames, 0 spectrum errors"), e.getMessage());
     }
 }
