@@ -14,6 +14,8 @@ import org.junit.jupiter.api.Assumptions;
 public final class HeadlessChromium {
     /** Where a headless Chromium is installed on Debian (package chromium). */
     public static final Path CHROMIUM = Path.of("/usr/bin/chromium");
+    /** How long one screenshot may take: a few seconds when idle, over a minute on a loaded 2-core machine. */
+    private static final long WAIT_SECONDS = 180;
 
     private HeadlessChromium() {
     }
@@ -33,7 +35,13 @@ public final class HeadlessChromium {
                 "--disable-sync", "--user-data-dir=" + work.resolve("profile"), "--screenshot=" + shot,
                 "--window-size=1200," + height, page.toUri().toString()).redirectErrorStream(true)
                 .redirectOutput(log.toFile()).start();
-        assertTrue(p.waitFor(90, TimeUnit.SECONDS), "chromium timed out");
+        boolean ended = p.waitFor(WAIT_SECONDS, TimeUnit.SECONDS);
+        if (!ended) {
+            // A browser that hangs keeps its zygote and renderer children: end the whole tree.
+            p.descendants().forEach(ProcessHandle::destroyForcibly);
+            p.destroyForcibly();
+        }
+        assertTrue(ended, "chromium did not finish within " + WAIT_SECONDS + " s: " + Files.readString(log));
         assertTrue(Files.exists(shot), "no screenshot: " + Files.readString(log));
         return ImageIO.read(shot.toFile());
     }
