@@ -23,10 +23,12 @@ import java.util.stream.Stream;
 
 /**
  * The version of the code a campaign ran on, as written into each shard's {@link CampaignIdentity}: the
- * project version and the first 16 hex digits of a SHA-256 over the content of the code and resources
- * the given classes were loaded from (a jar's entries or a class folder's files, by name, without
- * {@code META-INF/}, so a build's time stamps do not count but any changed class or built-in scenario
- * does). Two runs agree on it exactly when they ran the same classes and data.
+ * project version and the first 16 hex digits of a SHA-256 over the content of the code and data the given
+ * classes were loaded from (a jar's entries or a class folder's files, by name): the project's own classes
+ * ({@code dev/sweepline/}), every resource that is not a class (built-in scenarios, instruments, campaigns)
+ * and the libraries' versions ({@code META-INF/maven/.../pom.properties}); not the rest of {@code META-INF/},
+ * so a build's time stamps do not count, and not the libraries' classes, which their versions stand for
+ * (hashing them took seconds). Two runs agree on it when they ran the same classes, data and libraries.
  */
 public final class CodeVersion {
     private static final int DIGITS = 16;
@@ -69,7 +71,7 @@ public final class CodeVersion {
             TreeMap<String, JarEntry> entries = new TreeMap<>();
             for (Enumeration<JarEntry> e = jar.entries(); e.hasMoreElements(); ) {
                 JarEntry entry = e.nextElement();
-                if (!entry.isDirectory() && !entry.getName().startsWith("META-INF/")) {
+                if (!entry.isDirectory() && counts(entry.getName())) {
                     entries.put(entry.getName(), entry);
                 }
             }
@@ -89,13 +91,21 @@ public final class CodeVersion {
         TreeMap<String, Path> byName = new TreeMap<>();
         for (Path f : files) {
             String name = root.relativize(f).toString().replace('\\', '/');
-            if (!name.startsWith("META-INF/")) {
+            if (counts(name)) {
                 byName.put(name, f);
             }
         }
         for (var e : byName.entrySet()) {
             add(sha, e.getKey(), Files.readAllBytes(e.getValue()));
         }
+    }
+
+    /** True for the entries the version covers (the class comment). */
+    static boolean counts(String name) {
+        if (name.startsWith("META-INF/")) {
+            return name.startsWith("META-INF/maven/") && name.endsWith("/pom.properties");
+        }
+        return name.startsWith("dev/sweepline/") || !name.endsWith(".class");
     }
 
     private static void add(MessageDigest sha, String name, byte[] content) {

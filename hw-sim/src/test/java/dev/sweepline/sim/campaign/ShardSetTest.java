@@ -96,7 +96,7 @@ class ShardSetTest {
 
     @Test
     void shouldVersionTheCodeByContentAlone() throws IOException {
-        Path classes = Files.createDirectories(dir.resolve("classes/dev/x"));
+        Path classes = Files.createDirectories(dir.resolve("classes/dev/sweepline/x"));
         Files.writeString(classes.resolve("A.class"), "a");
         Files.createDirectories(dir.resolve("classes/META-INF"));
         Files.writeString(dir.resolve("classes/META-INF/MANIFEST.MF"), "Built: monday");
@@ -106,11 +106,19 @@ class ShardSetTest {
         // the same entries in a jar: the same version
         Path jar = dir.resolve("code.jar");
         try (JarOutputStream out = new JarOutputStream(Files.newOutputStream(jar))) {
-            out.putNextEntry(new JarEntry("dev/x/A.class"));
+            out.putNextEntry(new JarEntry("dev/sweepline/x/A.class"));
             out.write("a".getBytes(StandardCharsets.UTF_8));
             out.closeEntry();
         }
         assertEquals(before, CodeVersion.ofSources("1.0", List.of(jar)));
+        // a library's class stands in by its version (its pom.properties), which counts
+        Files.createDirectories(dir.resolve("classes/org/lib"));
+        Files.writeString(dir.resolve("classes/org/lib/L.class"), "l");
+        assertEquals(before, CodeVersion.ofSources("1.0", List.of(dir.resolve("classes"))));
+        Files.createDirectories(dir.resolve("classes/META-INF/maven/org.lib/lib"));
+        Files.writeString(dir.resolve("classes/META-INF/maven/org.lib/lib/pom.properties"), "version=2.0");
+        assertNotEquals(before, CodeVersion.ofSources("1.0", List.of(dir.resolve("classes"))));
+        Files.delete(dir.resolve("classes/META-INF/maven/org.lib/lib/pom.properties"));
         Files.writeString(classes.resolve("A.class"), "b");
         String after = CodeVersion.ofSources("1.0", List.of(dir.resolve("classes")));
         assertNotEquals(before, after);
