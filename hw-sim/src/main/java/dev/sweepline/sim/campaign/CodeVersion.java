@@ -25,13 +25,16 @@ import java.util.stream.Stream;
  * The version of the code a campaign ran on, as written into each shard's {@link CampaignIdentity}: the
  * project version and the first 16 hex digits of a SHA-256 over the content of the code and data the given
  * classes were loaded from (a jar's entries or a class folder's files, by name): the project's own classes
- * ({@code dev/sweepline/}), every resource that is not a class (built-in scenarios, instruments, campaigns)
- * and the libraries' versions ({@code META-INF/maven/.../pom.properties}); not the rest of {@code META-INF/},
- * so a build's time stamps do not count, and not the libraries' classes, which their versions stand for
- * (hashing them took seconds). Two runs agree on it when they ran the same classes, data and libraries.
+ * and files ({@code dev/sweepline/}), its built-in data ({@link #DATA}: the top folders of the modules'
+ * {@code src/main/resources}, which {@code ShardSetTest} keeps in step) and the libraries' versions
+ * ({@code META-INF/maven/.../pom.properties}); not the rest of {@code META-INF/}, so a build's time stamps do
+ * not count, and not the libraries' own classes and files, which their versions stand for (hashing the whole
+ * jar took 2-3 s). Two runs agree on it when they ran the same code, data and library versions.
  */
 public final class CodeVersion {
     private static final int DIGITS = 16;
+    /** The built-in data folders of the jar: fsw-core's instruments, hw-sim's campaigns, plans and scenarios. */
+    static final List<String> DATA = List.of("campaigns/", "instruments/", "plans/", "scenarios/");
 
     private CodeVersion() {
     }
@@ -105,7 +108,7 @@ public final class CodeVersion {
         if (name.startsWith("META-INF/")) {
             return name.startsWith("META-INF/maven/") && name.endsWith("/pom.properties");
         }
-        return name.startsWith("dev/sweepline/") || !name.endsWith(".class");
+        return name.startsWith("dev/sweepline/") || DATA.stream().anyMatch(name::startsWith);
     }
 
     private static void add(MessageDigest sha, String name, byte[] content) {

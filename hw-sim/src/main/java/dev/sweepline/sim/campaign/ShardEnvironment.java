@@ -8,8 +8,10 @@ import java.util.Map;
  * <ul>
  * <li><b>Slurm</b> job arrays ({@code sbatch --array}; Slurm "Job Array Support",
  *     https://slurm.schedmd.com/job_array.html): every task has {@code SLURM_ARRAY_TASK_ID} (its array
- *     index) and {@code SLURM_ARRAY_TASK_MIN}, {@code SLURM_ARRAY_TASK_MAX}, {@code SLURM_ARRAY_TASK_STEP},
- *     {@code SLURM_ARRAY_TASK_COUNT} (the same page, "environment variables"). The shard is the task's
+ *     index), {@code SLURM_ARRAY_TASK_MIN} and {@code _MAX} (the lowest and highest index of the array),
+ *     {@code SLURM_ARRAY_TASK_COUNT} (the number of tasks) and {@code SLURM_ARRAY_TASK_STEP} (the step of
+ *     {@code --array=A-B:S}; the four also in the sbatch manual's output environment variables,
+ *     https://slurm.schedmd.com/sbatch.html [memory]). The shard is the task's
  *     place in the range MIN..MAX by STEP (1 when unset), counted from 1; the count is COUNT, or
  *     (MAX - MIN) / STEP + 1 without it. An index list that is no such range ({@code --array=1,3,8}) is
  *     refused: its COUNT disagrees with MIN, MAX and STEP.</li>

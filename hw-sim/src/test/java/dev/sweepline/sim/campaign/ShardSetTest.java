@@ -95,6 +95,22 @@ class ShardSetTest {
     }
 
     @Test
+    void shouldCountEveryFolderOfBuiltInData() throws IOException {
+        // the top folders of the modules' resources (the working folder of the tests is hw-sim)
+        List<String> folders = new ArrayList<>();
+        for (Path root : List.of(Path.of("src/main/resources"), Path.of("../fsw-core/src/main/resources"),
+                Path.of("../ground-decoder/src/main/resources"))) {
+            if (Files.isDirectory(root)) {
+                try (var list = Files.list(root)) {
+                    list.filter(Files::isDirectory).forEach(p -> folders.add(p.getFileName() + "/"));
+                }
+            }
+        }
+        assertTrue(folders.contains("scenarios/") && folders.contains("instruments/"), folders.toString());
+        assertTrue(CodeVersion.DATA.containsAll(folders), "CodeVersion.DATA misses one of " + folders);
+    }
+
+    @Test
     void shouldVersionTheCodeByContentAlone() throws IOException {
         Path classes = Files.createDirectories(dir.resolve("classes/dev/sweepline/x"));
         Files.writeString(classes.resolve("A.class"), "a");
@@ -111,14 +127,20 @@ class ShardSetTest {
             out.closeEntry();
         }
         assertEquals(before, CodeVersion.ofSources("1.0", List.of(jar)));
-        // a library's class stands in by its version (its pom.properties), which counts
+        // a library's classes and files stand in by its version (its pom.properties), which counts
         Files.createDirectories(dir.resolve("classes/org/lib"));
         Files.writeString(dir.resolve("classes/org/lib/L.class"), "l");
+        Files.writeString(dir.resolve("classes/org/lib/font.ttf"), "f");
         assertEquals(before, CodeVersion.ofSources("1.0", List.of(dir.resolve("classes"))));
         Files.createDirectories(dir.resolve("classes/META-INF/maven/org.lib/lib"));
         Files.writeString(dir.resolve("classes/META-INF/maven/org.lib/lib/pom.properties"), "version=2.0");
         assertNotEquals(before, CodeVersion.ofSources("1.0", List.of(dir.resolve("classes"))));
         Files.delete(dir.resolve("classes/META-INF/maven/org.lib/lib/pom.properties"));
+        // built-in data counts (a scenario)
+        Files.createDirectories(dir.resolve("classes/scenarios"));
+        Files.writeString(dir.resolve("classes/scenarios/calm.yaml"), "x");
+        assertNotEquals(before, CodeVersion.ofSources("1.0", List.of(dir.resolve("classes"))));
+        Files.delete(dir.resolve("classes/scenarios/calm.yaml"));
         Files.writeString(classes.resolve("A.class"), "b");
         String after = CodeVersion.ofSources("1.0", List.of(dir.resolve("classes")));
         assertNotEquals(before, after);
