@@ -3,7 +3,6 @@ package dev.sweepline.sim.campaign;
 import dev.sweepline.fsw.sweep.SweepMode;
 import dev.sweepline.sim.bench.GroundCheck;
 import dev.sweepline.sim.bench.RunSummary;
-import java.util.Locale;
 
 /**
  * The metrics of one campaign run (one set on one ensemble member). Written to and read back from
@@ -75,15 +74,31 @@ public record RunRow(int set, int run, double lockFraction, int alphaLocks, int 
                 g.nonStationary(), g.stationary().medianRelative().clone(), g.stationary().crlbRatio().clone());
     }
 
-    /** One CSV line (no newline). */
+    /**
+     * One CSV line (no newline): integers as {@link Integer#toString}, doubles as {@link Double#toString}
+     * (what {@code String.format("%s")} gave before, without its parsing of a format per row: the rows are
+     * compared through this text, {@link #equals}).
+     */
     public String toCsv() {
-        return String.format(Locale.ROOT, "%d,%d,%s,%d,%d,%s,%s,%s,%s,%s,%s,%s,%s,%s,%s,%s,%s,%s,%s,%d,%s,%s,%s,%s,%d,%s,%s,%s,%s,%s,%s", set, run, lockFraction,
-                alphaLocks, reacquireSweeps, reacquireSeconds, spectraPerSecond, bitsPerSecond, integratingFraction,
-                informationEfficiency, momentError[0], momentError[1], momentError[2], crlbRatio[0], crlbRatio[1],
-                crlbRatio[2], trackingCentre[0], trackingCentre[1], trackingCentre[2], strictReacquireSweeps,
-                strictReacquireSeconds, crlbRobust[0], crlbRobust[1], crlbRobust[2], nonStationary,
-                errorUnflagged[0], errorUnflagged[1], errorUnflagged[2], crlbUnflagged[0], crlbUnflagged[1],
-                crlbUnflagged[2]);
+        StringBuilder b = new StringBuilder(400);
+        b.append(set).append(',').append(run).append(',').append(lockFraction).append(',').append(alphaLocks)
+                .append(',').append(reacquireSweeps).append(',').append(reacquireSeconds).append(',')
+                .append(spectraPerSecond).append(',').append(bitsPerSecond).append(',').append(integratingFraction)
+                .append(',').append(informationEfficiency);
+        appendAll(b, momentError);
+        appendAll(b, crlbRatio);
+        appendAll(b, trackingCentre);
+        b.append(',').append(strictReacquireSweeps).append(',').append(strictReacquireSeconds);
+        appendAll(b, crlbRobust);
+        b.append(',').append(nonStationary);
+        appendAll(b, errorUnflagged);
+        appendAll(b, crlbUnflagged);
+        return b.toString();
+    }
+
+    /** The three values of {@code v}, each after a comma. */
+    private static void appendAll(StringBuilder b, double[] v) {
+        b.append(',').append(v[0]).append(',').append(v[1]).append(',').append(v[2]);
     }
 
     /** Parses a line written by {@link #toCsv()}. */

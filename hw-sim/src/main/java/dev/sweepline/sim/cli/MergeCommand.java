@@ -1,9 +1,12 @@
 package dev.sweepline.sim.cli;
 
+import dev.sweepline.sim.campaign.CampaignIdentity;
 import dev.sweepline.sim.campaign.CampaignOutput;
 import dev.sweepline.sim.campaign.CampaignReader;
 import dev.sweepline.sim.campaign.CampaignSpec;
 import dev.sweepline.sim.campaign.RunRow;
+import dev.sweepline.sim.campaign.Shard;
+import dev.sweepline.sim.campaign.ShardSet;
 import dev.sweepline.fsw.host.CliException;
 import dev.sweepline.fsw.host.CommandLines;
 import dev.sweepline.fsw.host.yaml.FileFormatException;
@@ -18,7 +21,8 @@ import picocli.CommandLine.Parameters;
 
 /** {@code merge}: joins the shards of a campaign; the result equals the unsharded run. */
 @Command(name = "merge", mixinStandardHelpOptions = true,
-        description = "Merge the shard folders of a campaign into its full results.")
+        description = {"Merge the shard folders of a campaign into its full results.",
+            "Every shard of one split must be there once, run from this campaign file on this code version."})
 final class MergeCommand implements Callable<Integer> {
     @Parameters(index = "0", paramLabel = "CAMPAIGN.yaml", description = "The campaign file the shards ran.")
     Path campaign;
@@ -44,6 +48,8 @@ final class MergeCommand implements Callable<Integer> {
         try {
             spec = CampaignReader.load(campaign, instrument.given());
             TuneCommand.comparePair(compare, spec);
+            ShardSet.check(shards, CampaignIdentity.of(spec, TuneCommand.campaignOctets(campaign),
+                    TuneCommand.codeVersion(), Shard.ALL));
             rows = CampaignOutput.readRuns(spec, shards);
         } catch (FileFormatException e) {
             throw CliException.input("merge error: " + e.getMessage());

@@ -1,19 +1,29 @@
 package dev.sweepline.sim.cli;
 
+import dev.sweepline.sim.campaign.CampaignIdentity;
 import dev.sweepline.sim.campaign.CampaignOutput;
 import dev.sweepline.sim.campaign.CampaignReader;
 import dev.sweepline.sim.campaign.CampaignRunner;
 import dev.sweepline.sim.campaign.CampaignSpec;
+import dev.sweepline.sim.campaign.CodeVersion;
+import dev.sweepline.sim.campaign.RunJournal;
 import dev.sweepline.sim.campaign.RunRow;
 import dev.sweepline.sim.campaign.SetResult;
 import dev.sweepline.sim.campaign.Shard;
+import dev.sweepline.sim.campaign.ShardEnvironment;
+import dev.sweepline.fsw.exec.FlightSoftware;
 import dev.sweepline.fsw.host.CliException;
+import dev.sweepline.fsw.host.CommandLines;
 import dev.sweepline.fsw.host.ExitStatus;
 import dev.sweepline.fsw.host.Ranges;
 import dev.sweepline.fsw.host.yaml.FileFormatException;
+import dev.sweepline.ground.decode.TelemetryDecoder;
+import java.io.IOException;
+import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.Locale;
+import java.util.Map;
 import java.util.concurrent.Callable;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
@@ -23,7 +33,9 @@ import picocli.CommandLine.Parameters;
 /** {@code tune}: a tuning campaign, on every core, or one shard of it for a cluster job array. */
 @Command(name = "tune", mixinStandardHelpOptions = true,
         description = {"Run a tuning campaign: a scenario ensemble crossed with a grid of sweep parameters.",
-            "With --shard i/N only that slice runs (write each shard to its own folder, then 'merge')."})
+            "With --shard i/N only that slice runs (write each shard to its own folder, then 'merge');",
+            "--shard auto takes i and N from a Slurm job array or a Kubernetes Indexed Job.",
+            "Each run is journalled as it finishes: run the same command again to resume."})
 final class TuneCommand implements Callable<Integer> {
     @Parameters(index = "0", paramLabel = "CAMPAIGN.yaml", description = "The campaign file.")
     Path campaign;
@@ -38,8 +50,17 @@ final class TuneCommand implements Callable<Integer> {
     @CommandLine.Mixin
     InstrumentOption instrument = new InstrumentOption();
 
-    @Option(names = "--shard", paramLabel = "i/N", description = "Run only shard i of N (1-based).")
+    @Option(names = "--shard", paramLabel = "i/N|auto", description = "Run only shard i of N (1-based); auto: from "
+            + "the job array's environment (Slurm SLURM_ARRAY_TASK_ID/_MIN/_MAX/_STEP/_COUNT; Kubernetes "
+            + "JOB_COMPLETION_INDEX with --shards or " + ShardEnvironment.SHARD_COUNT + ").")
     String shard;
+
+    @Option(names = "--shards", paramLabel = "N", converter = Ranges.PositiveInt.class,
+            description = "With --shard auto: the number of shards (a Kubernetes Indexed Job's completions).")
+    Integer shards;
+
+    /** The environment --shard auto reads (tests put their own). */
+    Map<String, String> environment = System.getenv();
 
     @Option(names = "--compare", paramLabel = "A,B", description = "Put sets A and B (set numbers of sets.csv) "
             + "side by side in the report (default: the recommended set and the set it is best compared with).")
@@ -48,36 +69,107 @@ final class TuneCommand implements Callable<Integer> {
     @Override
     public Integer call() throws Exception {
         instrument.resolve();
+        if (shards != null && !"auto".equals(shard)) {
+            throw new CliException(ExitStatus.USAGE, "--shards " + shards + ": only with --shard auto");
+        }
         CampaignSpec spec;
-        Shard slice;
+        Shard slice = shard();
         try {
             spec = CampaignReader.load(campaign, instrument.given());
-            slice = shard == null ? Shard.ALL : Shard.parse(shard);
         } catch (FileFormatException e) {
             throw CliException.input("campaign error: " + e.getMessage());
-        } catch (IllegalArgumentException e) {
-            throw new CliException(ExitStatus.USAGE, "--shard " + shard + ": " + e.getMessage());
         }
         int[] pair = comparePair(compare, spec);
+        CampaignIdentity identity = CampaignIdentity.of(spec, campaignOctets(campaign), codeVersion(), slice);
         OutputFolder.create(out);
-        long jobs = (long) spec.setCount() * spec.runsPerSet();
+        claim(out, identity);
         System.out.printf(Locale.ROOT, "campaign %s: %d sets x %d runs of %.0f s, shard %s, %d threads%n",
                 spec.name(), spec.setCount(), spec.runsPerSet(), spec.durationSeconds(), slice, threads);
         long start = System.nanoTime();
         List<RunRow> rows;
-        try (ConsoleProgress bar = ConsoleProgress.ofRuns("tune")) {
-            rows = CampaignRunner.run(spec, threads, slice, bar::step);
+        int resumed;
+        try (RunJournal journal = openJournal(out, spec, slice); ConsoleProgress bar = ConsoleProgress.ofRuns("tune")) {
+            resumed = journal.finished().size();
+            if (resumed > 0 || journal.droppedOctets() > 0) {
+                System.out.printf(Locale.ROOT, "resuming: %d of %d runs already in %s%s%n", resumed, identity.runs(),
+                        journal.file(), journal.droppedOctets() > 0 ? " (dropped a torn last line of "
+                        + journal.droppedOctets() + " octets)" : "");
+            }
+            rows = CampaignRunner.run(spec, threads, slice, journal, bar::step);
         }
         double wall = (System.nanoTime() - start) / 1e9;
         CampaignOutput.writeRuns(out, rows);
+        int ran = rows.size() - resumed;
         System.out.printf(Locale.ROOT, "%d runs in %.1f s: %.2f scenario-runs per second, x%.0f real time%n",
-                rows.size(), wall, rows.size() / wall, rows.size() * spec.durationSeconds() / wall);
+                ran, wall, ran / wall, ran * spec.durationSeconds() / wall);
         if (!slice.whole()) {
             System.out.println("wrote " + out.resolve(CampaignOutput.RUNS) + "; merge the shards with 'merge'");
             return 0;
         }
         report(CampaignOutput.writeResults(out, spec, rows, pair), out, CampaignOutput.inertAxes(spec, rows));
         return 0;
+    }
+
+    /** The shard of {@code --shard}: the whole campaign without it, from the environment with {@code auto}. */
+    private Shard shard() {
+        try {
+            if (shard == null) {
+                return Shard.ALL;
+            }
+            return "auto".equals(shard) ? ShardEnvironment.of(environment, shards) : Shard.parse(shard);
+        } catch (IllegalArgumentException e) {
+            throw new CliException(ExitStatus.USAGE, "--shard " + shard + ": " + e.getMessage());
+        }
+    }
+
+    /** The campaign file's octets, which its identity hashes. */
+    static byte[] campaignOctets(Path campaign) {
+        try {
+            return Files.readAllBytes(campaign);
+        } catch (IOException e) {
+            throw CliException.input("campaign error: " + CommandLines.located(e));
+        }
+    }
+
+    /** The version of the bench's code (its flight software, simulator and ground), computed once. */
+    static String codeVersion() {
+        return CodeHolder.VERSION;
+    }
+
+    private static final class CodeHolder {
+        static final String VERSION = CodeVersion.of(CommandLines.version(BenchMain.class), BenchMain.class,
+                FlightSoftware.class, TelemetryDecoder.class);
+    }
+
+    /**
+     * Writes the folder's identity, or checks the one there: a folder of another campaign file, code version or
+     * shard is not resumed.
+     */
+    private static void claim(Path out, CampaignIdentity identity) {
+        try {
+            if (Files.exists(out.resolve(CampaignIdentity.FILE))) {
+                CampaignIdentity there = CampaignIdentity.read(out);
+                if (!there.sameCampaign(identity) || !there.shard().equals(identity.shard())) {
+                    throw CliException.io("--out " + out + ": holds shard " + there.shard() + " of campaign "
+                            + there.campaign() + " (sha256 " + there.shortHash() + "…, code "
+                            + there.code() + "), not shard " + identity.shard() + " of " + identity.campaign()
+                            + " (sha256 " + identity.shortHash() + "…, code " + identity.code()
+                            + "): it resumes only the same campaign file, code and shard; use another folder");
+                }
+            } else {
+                identity.write(out);
+            }
+        } catch (IOException e) {
+            throw CliException.io("--out " + out + ": " + CommandLines.located(e));
+        }
+    }
+
+    private static RunJournal openJournal(Path out, CampaignSpec spec, Shard slice) {
+        try {
+            return RunJournal.open(out, spec, slice);
+        } catch (IOException e) {
+            throw CliException.input("--out " + out + ": " + CommandLines.located(e));
+        }
     }
 
     /**

@@ -34,7 +34,12 @@ class BenchCommandLineErrorTest {
     }
 
     /** Runs the bench's command line in process, capturing both streams. */
-    static synchronized Run run(String... args) {
+    static Run run(String... args) {
+        return run(cl -> { }, args);
+    }
+
+    /** As {@link #run(String...)}, {@code setup} given the command line first (to set a command's fields). */
+    static synchronized Run run(java.util.function.Consumer<picocli.CommandLine> setup, String... args) {
         StringWriter err = new StringWriter();
         ByteArrayOutputStream out = new ByteArrayOutputStream();
         PrintStream stdout = System.out;
@@ -43,7 +48,9 @@ class BenchCommandLineErrorTest {
         try {
             System.setOut(new PrintStream(out, true, StandardCharsets.UTF_8));
             System.setErr(new PrintStream(out, true, StandardCharsets.UTF_8));
-            status = BenchMain.commandLine().setErr(new PrintWriter(err, true)).execute(args);
+            picocli.CommandLine commandLine = BenchMain.commandLine();
+            setup.accept(commandLine);
+            status = commandLine.setErr(new PrintWriter(err, true)).execute(args);
         } finally {
             System.setOut(stdout);
             System.setErr(stderr);
