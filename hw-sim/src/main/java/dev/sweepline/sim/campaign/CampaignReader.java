@@ -2,6 +2,7 @@ package dev.sweepline.sim.campaign;
 
 import dev.sweepline.fsw.instrument.InstrumentDescription;
 import dev.sweepline.fsw.host.instrument.InstrumentSpec;
+import dev.sweepline.fsw.host.instrument.Instruments;
 import dev.sweepline.sim.instrument.InstrumentKey;
 import dev.sweepline.sim.instrument.InstrumentModel;
 import dev.sweepline.fsw.command.ParameterTable;
@@ -24,6 +25,7 @@ import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.Optional;
 
 /**
  * Reads a campaign file ({@code format: sweepline-campaign/1}); every problem names the file, the
@@ -60,6 +62,47 @@ public final class CampaignReader {
         }
         Path folder = path.toAbsolutePath().getParent();
         return parse(text, path.toString(), folder, instrument);
+    }
+
+    /**
+     * The files the campaign at {@code path} names and that a run reads: its scenario and instrument when
+     * given as files rather than built-in names, resolved as {@link #load} resolves them. A shard's identity
+     * hashes them with the campaign file, so an edited scenario file makes a different campaign.
+     */
+    public static List<Path> namedFiles(Path path) {
+        String text;
+        try {
+            text = Files.readString(path);
+        } catch (IOException e) {
+            throw new FileFormatException(path.toString(), 0, "", "cannot read: " + e, e);
+        }
+        Section top = Section.of(path.toString(), YamlTreeReader.read(text, path.toString()), TOP);
+        Path folder = path.toAbsolutePath().getParent();
+        List<Path> files = new ArrayList<>();
+        if (top.has("scenario")) {
+            // a scenario file beside the campaign wins over a built-in of the same name
+            String name = top.text("scenario");
+            fileNamed(name, ScenarioLoader.builtInNames().contains(name), false, folder).ifPresent(files::add);
+        }
+        if (top.has(InstrumentKey.KEY)) {
+            String name = top.text(InstrumentKey.KEY);
+            // a built-in instrument name wins over a file of that name
+            fileNamed(name, Instruments.builtInNames().contains(name), true, folder).ifPresent(files::add);
+        }
+        return files;
+    }
+
+    /** The file {@code name} stands for: beside the campaign, then as given; none for a built-in. */
+    private static Optional<Path> fileNamed(String name, boolean builtIn, boolean builtInFirst, Path folder) {
+        if (builtIn && builtInFirst) {
+            return Optional.empty();
+        }
+        Path beside = folder == null ? null : folder.resolve(name);
+        if (beside != null && Files.isRegularFile(beside)) {
+            return Optional.of(beside);
+        }
+        Path given = Path.of(name);
+        return !builtIn && Files.isRegularFile(given) ? Optional.of(given) : Optional.empty();
     }
 
     /** Parses campaign text for the instrument it names (or the default). */

@@ -48,7 +48,7 @@ final class MergeCommand implements Callable<Integer> {
         try {
             spec = CampaignReader.load(campaign, instrument.given());
             TuneCommand.comparePair(compare, spec);
-            ShardSet.check(shards, CampaignIdentity.of(spec, TuneCommand.campaignOctets(campaign),
+            ShardSet.check(shards, CampaignIdentity.of(spec, TuneCommand.campaignOctets(campaign, instrument.given()),
                     TuneCommand.codeVersion(), Shard.ALL));
             rows = CampaignOutput.readRuns(spec, shards);
         } catch (FileFormatException e) {

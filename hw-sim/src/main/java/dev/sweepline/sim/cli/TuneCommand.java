@@ -16,11 +16,15 @@ import dev.sweepline.fsw.host.CliException;
 import dev.sweepline.fsw.host.CommandLines;
 import dev.sweepline.fsw.host.ExitStatus;
 import dev.sweepline.fsw.host.Ranges;
+import dev.sweepline.fsw.host.instrument.InstrumentSpec;
 import dev.sweepline.fsw.host.yaml.FileFormatException;
 import dev.sweepline.ground.decode.TelemetryDecoder;
+import java.io.ByteArrayOutputStream;
 import java.io.IOException;
+import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
@@ -80,7 +84,7 @@ final class TuneCommand implements Callable<Integer> {
             throw CliException.input("campaign error: " + e.getMessage());
         }
         int[] pair = comparePair(compare, spec);
-        CampaignIdentity identity = CampaignIdentity.of(spec, campaignOctets(campaign), codeVersion(), slice);
+        CampaignIdentity identity = CampaignIdentity.of(spec, campaignOctets(campaign, instrument.given()), codeVersion(), slice);
         OutputFolder.create(out);
         claim(out, identity);
         System.out.printf(Locale.ROOT, "campaign %s: %d sets x %d runs of %.0f s, shard %s, %d threads%n",
@@ -122,12 +126,28 @@ final class TuneCommand implements Callable<Integer> {
         }
     }
 
-    /** The campaign file's octets, which its identity hashes. */
-    static byte[] campaignOctets(Path campaign) {
+    /**
+     * The octets a campaign's identity hashes: the campaign file, then each scenario or instrument file it
+     * or {@code --instrument} names (a name line, then the file), so that editing any of them between shards
+     * makes a different campaign. A campaign of built-ins alone hashes its own file's octets.
+     */
+    static byte[] campaignOctets(Path campaign, InstrumentSpec option) {
         try {
-            return Files.readAllBytes(campaign);
+            ByteArrayOutputStream octets = new ByteArrayOutputStream();
+            octets.write(Files.readAllBytes(campaign));
+            List<Path> named = new ArrayList<>(CampaignReader.namedFiles(campaign));
+            if (option != null && Files.isRegularFile(Path.of(option.file()))) {
+                named.add(Path.of(option.file()));
+            }
+            for (Path file : named) {
+                octets.write(("\n# file " + file.getFileName() + "\n").getBytes(StandardCharsets.UTF_8));
+                octets.write(Files.readAllBytes(file));
+            }
+            return octets.toByteArray();
         } catch (IOException e) {
             throw CliException.input("campaign error: " + CommandLines.located(e));
+        } catch (FileFormatException e) {
+            throw CliException.input("campaign error: " + e.getMessage());
         }
     }
 

@@ -113,4 +113,25 @@ class TuneShardCommandLineTest {
         Run otherShard = tune(Map.of(), "tune", c.toString(), "--shard", "2/2", "--out", out.toString());
         assertOneLine(otherShard, ExitStatus.IO, "--out " + out + ": holds shard 1/2 of campaign tiny", "not shard 2/2");
     }
+
+    @Test
+    void shouldTakeAnEditedScenarioFileForAnotherCampaign() throws IOException {
+        // the campaign names a scenario file beside it: a shard run before the file was edited is another campaign's
+        String scenario = new String(getClass().getResourceAsStream("/scenarios/quiet-perihelion.yaml").readAllBytes(),
+                java.nio.charset.StandardCharsets.UTF_8);
+        Path file = Files.writeString(dir.resolve("mine.yaml"), scenario);
+        Path c = Files.writeString(dir.resolve("tiny.yaml"), CAMPAIGN.replace("scenario: quiet-perihelion",
+                "scenario: mine.yaml"));
+        for (int shard = 1; shard <= 2; shard++) {
+            Run run = tune(Map.of(), "tune", c.toString(), "--shard", shard + "/2", "--threads", "1", "--out",
+                    dir.resolve("s" + shard).toString());
+            assertEquals(0, run.status(), run.err() + run.out());
+            if (shard == 1) {
+                Files.writeString(file, scenario + "\n# edited after shard 1\n");
+            }
+        }
+        Run merged = BenchCommandLineErrorTest.run("merge", c.toString(), dir.resolve("s1").toString(),
+                dir.resolve("s2").toString(), "--out", dir.resolve("m").toString());
+        assertOneLine(merged, ExitStatus.INPUT, "merge error: " + dir.resolve("s1") + ": a shard of another campaign file");
+    }
 }
