@@ -79,8 +79,12 @@ public record AlphaPrior(double driftMeanMPerS, double driftSigmaMPerS, boolean 
 
     /** Σ r_i²: the prior's part of χ² at {@code p}. */
     public double chiSquare(double[] p) {
-        double[] r = new double[ROWS];
-        rows(p, r, new double[ROWS][PlasmaModel.JOINT_PARAMETERS]);
+        return chiSquare(p, new double[ROWS], new double[ROWS][PlasmaModel.JOINT_PARAMETERS]);
+    }
+
+    /** {@link #chiSquare(double[])} with scratch rows {@code r} ({@link #ROWS}) and {@code g} ({@link #ROWS} × 6). */
+    double chiSquare(double[] p, double[] r, double[][] g) {
+        rows(p, r, g);
         return r[0] * r[0] + r[1] * r[1] + r[2] * r[2];
     }
 
@@ -109,8 +113,12 @@ public record AlphaPrior(double driftMeanMPerS, double driftSigmaMPerS, boolean 
      * @param cov the fit's covariance (F_data + F_prior)⁻¹, physical parameters
      */
     public double leverage(double[] p, double[][] cov) {
-        double[][] g = new double[ROWS][PlasmaModel.JOINT_PARAMETERS];
-        rows(p, new double[ROWS], g);
+        return leverage(p, cov, new double[ROWS], new double[ROWS][PlasmaModel.JOINT_PARAMETERS]);
+    }
+
+    /** {@link #leverage(double[], double[][])} with scratch rows {@code r} and {@code g} as {@link #chiSquare}'s. */
+    double leverage(double[] p, double[][] cov, double[] r, double[][] g) {
+        rows(p, r, g);
         double sum = 0;
         for (double[] row : g) {
             for (int a = 0; a < row.length; a++) {
