@@ -2,6 +2,8 @@ package dev.sweepline.ground.fit;
 
 import org.hipparchus.distribution.continuous.ChiSquaredDistribution;
 import org.hipparchus.special.Gamma;
+import org.hipparchus.util.FastMath;
+import org.hipparchus.util.Precision;
 
 /**
  * Whether the joint proton + alpha model explains a spectrum better than protons alone, as a
@@ -77,6 +79,62 @@ final class AlphaSelection {
      */
     static boolean accepts(double extraParameters, double protonChiSquare, double jointChiSquare) {
         double drop = protonChiSquare - jointChiSquare;
-        return drop > 0 && Gamma.regularizedGammaQ(extraParameters / 2, drop / 2) < TEST_LEVEL;
+        return drop > 0 && upperGammaQ(extraParameters / 2, drop / 2) < TEST_LEVEL;
+    }
+
+    /** Convergence of the series and the continued fraction: Hipparchus' default for Q(a, x). */
+    private static final double GAMMA_EPSILON = 1e-14;
+    /** Lentz's guard against a zero denominator (Hipparchus' ContinuedFraction). */
+    private static final double LENTZ_SMALL = 1e-50;
+
+    /**
+     * Q(a, x) as Hipparchus' {@code Gamma.regularizedGammaQ(a, x)} computes it, operation for operation (so bit
+     * for bit): 1 − P(a, x) by its series below x = a + 1, above it the continued fraction
+     * 1/(x − a + 1 + K(n(a − n)/(2n + 1 − a + x))) by the modified Lentz method and the factor
+     * e^(−x + a ln x − ln Γ(a)) (Numerical Recipes §6.2 [memory]; Hipparchus 4.0.2 {@code Gamma},
+     * {@code ContinuedFraction}), without the continued fraction's object, so the test allocates nothing.
+     */
+    static double upperGammaQ(double a, double x) {
+        if (Double.isNaN(a) || Double.isNaN(x) || a <= 0 || x < 0) {
+            return Double.NaN;
+        }
+        if (x == 0) {
+            return 1.0;
+        }
+        if (x < a + 1) {
+            return 1.0 - Gamma.regularizedGammaP(a, x, GAMMA_EPSILON, Integer.MAX_VALUE);
+        }
+        double hPrev = 2.0 * 0 + 1.0 - a + x;
+        if (Precision.equals(hPrev, 0.0, LENTZ_SMALL)) {
+            hPrev = LENTZ_SMALL;
+        }
+        double dPrev = 0.0;
+        double cPrev = hPrev;
+        double hN = hPrev;
+        for (int n = 1; n < Integer.MAX_VALUE; n++) {
+            double an = 2.0 * n + 1.0 - a + x;
+            double bn = n * (a - n);
+            double dN = an + bn * dPrev;
+            if (Precision.equals(dN, 0.0, LENTZ_SMALL)) {
+                dN = LENTZ_SMALL;
+            }
+            double cN = an + bn / cPrev;
+            if (Precision.equals(cN, 0.0, LENTZ_SMALL)) {
+                cN = LENTZ_SMALL;
+            }
+            dN = 1 / dN;
+            double deltaN = cN * dN;
+            hN = hPrev * deltaN;
+            if (Double.isInfinite(hN) || Double.isNaN(hN)) {
+                throw new IllegalStateException("Q(" + a + ", " + x + "): the continued fraction diverged at term " + n);
+            }
+            if (FastMath.abs(deltaN - 1.0) < GAMMA_EPSILON) {
+                break;
+            }
+            dPrev = dN;
+            cPrev = cN;
+            hPrev = hN;
+        }
+        return FastMath.exp(-x + a * FastMath.log(x) - Gamma.logGamma(a)) * (1.0 / hN);
     }
 }

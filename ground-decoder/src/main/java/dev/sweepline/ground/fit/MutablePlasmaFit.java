@@ -29,7 +29,9 @@ public final class MutablePlasmaFit {
     final double[] normalParameters = new double[PlasmaModel.JOINT_PARAMETERS];
     int parameterCount;
     double areaM2 = Double.NaN;
-    AlphaPrior alphaPrior;
+    /** The constrained alpha fit's prior, in use when {@link #hasPrior} (this holder's own instance). */
+    final AlphaPrior alphaPrior = new AlphaPrior(0, 1, false);
+    boolean hasPrior;
     double sigmaLogArea;
 
     private boolean warmStart;
@@ -69,7 +71,7 @@ public final class MutablePlasmaFit {
         iterations = 0;
         parameterCount = 0;
         areaM2 = Double.NaN;
-        alphaPrior = null;
+        hasPrior = false;
         sigmaLogArea = 0.0;
         warmStarted = false;
     }
@@ -83,7 +85,7 @@ public final class MutablePlasmaFit {
         iterations = 0;
         parameterCount = 0;
         areaM2 = area;
-        alphaPrior = null;
+        hasPrior = false;
         sigmaLogArea = 0.0;
     }
 
@@ -156,7 +158,7 @@ public final class MutablePlasmaFit {
         SpeciesMoments a = alphasFitted() ? moments(alphas) : SpeciesMoments.NONE;
         return new PlasmaFit(p, a, angles, reducedChiSquare, windowsUsed, iterations,
                 Collections.unmodifiableSet(EnumSet.copyOf(flags)), Arrays.copyOf(normalParameters, parameterCount),
-                areaM2, alphaPrior, sigmaLogArea);
+                areaM2, hasPrior ? alphaPrior.copy() : null, sigmaLogArea);
     }
 
     private static SpeciesMoments moments(double[] m) {

@@ -62,6 +62,8 @@ public final class SpectrumFitter {
         final LeastSquaresRun.Outcome scaledProtons = new LeastSquaresRun.Outcome(PlasmaModel.PROTON_PARAMETERS);
         final LeastSquaresRun.Outcome scaledJoint = new LeastSquaresRun.Outcome(PlasmaModel.JOINT_PARAMETERS);
         final MutablePlasmaFit result = new MutablePlasmaFit();
+        /** The prior of the constrained alpha fit, set per spectrum ({@link AlphaPrior#setForProtonSpeed}). */
+        final AlphaPrior prior = new AlphaPrior(0, 1, false);
     }
 
     /** A fitter for a cup of geometry {@code cup}. */
@@ -233,10 +235,9 @@ public final class SpectrumFitter {
             } else if (coverage != AlphaCoverage.NONE && alphaScore(in, protonModel, best.parameters()) > MIN_ALPHA_SCORE) {
                 // part of the alphas in the band, or a free fit that put the alpha peak outside it (a drifting
                 // alpha peak just above the top window): the constrained component
-                AlphaPrior kept = constrainedFit(in, protonModel, jointModel, best,
-                        AlphaPrior.forProtonSpeed(best.parameters()[1]), ws);
-                if (kept != null) {
-                    prior = kept;
+                ws.prior.setForProtonSpeed(best.parameters()[1]);
+                if (constrainedFit(in, protonModel, jointModel, best, ws.prior, ws)) {
+                    prior = ws.prior;
                     joint = ws.constrained;
                 }
             }
@@ -412,7 +413,7 @@ public final class SpectrumFitter {
      * tried once more with the abundance row ({@link AlphaPrior#withAbundance}), so alpha-free spectra, whose
      * constrained fit stays below the limit or is not tried, never pay for the third fit.
      */
-    private AlphaPrior constrainedFit(SpectrumInput in, PlasmaModel protonModel, PlasmaModel joint,
+    private boolean constrainedFit(SpectrumInput in, PlasmaModel protonModel, PlasmaModel joint,
             LeastSquaresRun.Outcome protons, AlphaPrior prior, Workspace ws) {
         double[] p = protons.parameters();
         double wAlpha = AlphaCoverage.startThermalSpeed(p[2]);
@@ -432,17 +433,22 @@ public final class SpectrumFitter {
         LeastSquaresRun.Outcome o = ws.constrained;
         if (!solver.fitInto(joint, in.totalAmps(), in.sigmaAmps(), start, prior, o) || !physical(o.parameters(), in)
                 || !finiteErrors(o.covariance())) {
-            return null;
+            return false;
         }
         double[] q = o.parameters();
         double alphaRatio = q[3] / q[0];
         double extra = PlasmaModel.JOINT_PARAMETERS - PlasmaModel.PROTON_PARAMETERS - o.leverage();
         if (!(alphaRatio < MAX_ALPHA_RATIO)) {
-            return prior.abundance() ? null : constrainedFit(in, protonModel, joint, protons, prior.withAbundance(), ws);
+            if (prior.abundance()) {
+                return false;
+            }
+            // the workspace's prior, with the abundance row added (AlphaPrior#withAbundance)
+            prior.set(prior.driftMeanMPerS(), prior.driftSigmaMPerS(), true);
+            return constrainedFit(in, protonModel, joint, protons, prior, ws);
         }
         boolean sane = alphaRatio > 0 && q[4] > 0.7 * q[1] && q[4] < 1.5 * q[1]
                 && extra > 0 && AlphaSelection.accepts(extra, protons.chiSquare(), o.totalChiSquare());
-        return sane ? prior : null;
+        return sane;
     }
 
     /** The joint start (n_p, U_p, w_p, ratio·n_p, U_p, w_α) from the proton fit {@code p}, into {@code s}. */
@@ -509,7 +515,10 @@ public final class SpectrumFitter {
         System.arraycopy(p, 0, out.normalParameters, 0, np);
         out.parameterCount = np;
         out.areaM2 = area;
-        out.alphaPrior = prior;
+        out.hasPrior = prior != null;
+        if (prior != null) {
+            out.alphaPrior.set(prior.driftMeanMPerS(), prior.driftSigmaMPerS(), prior.abundance());
+        }
         out.sigmaLogArea = sigmaLogArea;
     }
 
