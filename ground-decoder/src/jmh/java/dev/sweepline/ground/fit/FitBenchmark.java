@@ -39,7 +39,11 @@ import org.openjdk.jmh.annotations.Warmup;
  * fitting thread, ThreadMXBean, 2 s after 2 s of warm-up, before → after in the same minute): 14 windows
  * 23.6e3 → 55e3, 32 windows 15.3e3 → 24.9e3, 64 windows joint 3.5e3 → 6.5e3, 128 windows joint 1.6e3 →
  * 4.4e3; {@code -prof gc} 908, 928, 1433, 1432 B/op (was 44, 83, 380, 650 KB/op), what is left being the
- * result objects ({@link PlasmaFit}, its moments, angles and flag set, the outcome records).
+ * result objects ({@link PlasmaFit}, its moments, angles and flag set, the outcome records). Timing the holder
+ * path ({@link SpectrumFitter#fitInto}), {@code -wi 2 -i 3 -f 1 -prof gc} at a load average of 6–7: 14 windows
+ * 0.06 B/op, 32 windows 0.17, 64 windows joint 0.62, 128 windows joint 1.2, each about 3 KB/s whatever the
+ * rate, i.e. the harness's own per-iteration allocation on the benchmark thread; per fit 0 bytes
+ * ({@code FitIntoTest}, the JVM's per-thread counter over 64 fits).
  */
 @State(Scope.Thread)
 @BenchmarkMode(Mode.Throughput)

@@ -82,6 +82,32 @@ class FitIntoTest {
         assertTrue(warmIterations < coldIterations, "iterations warm " + warmIterations + " cold " + coldIterations);
     }
 
+    @Test
+    void shouldAllocateNothingPerFitAfterWarmUp() {
+        FitBenchmark b = new FitBenchmark();
+        b.build();
+        SpectrumFitter fitter = new SpectrumFitter();
+        MutablePlasmaFit holder = new MutablePlasmaFit();
+        com.sun.management.ThreadMXBean threads =
+                (com.sun.management.ThreadMXBean) java.lang.management.ManagementFactory.getThreadMXBean();
+        SpectrumInput[][] pools = {b.reference, b.focus32, b.focus, b.survey};
+        String[] names = {"14 windows", "32 windows", "64 windows joint", "128 windows joint"};
+        for (int k = 0; k < pools.length; k++) {
+            // warm-up: the first pass builds this shape's models and grows the optimiser's workspace
+            for (SpectrumInput in : pools[k]) {
+                fitter.fitInto(in, null, holder);
+            }
+            long before = threads.getCurrentThreadAllocatedBytes();
+            for (SpectrumInput in : pools[k]) {
+                fitter.fitInto(in, null, holder);
+            }
+            long bytes = threads.getCurrentThreadAllocatedBytes() - before;
+            // the per-thread allocation counter of the JVM (com.sun.management.ThreadMXBean): 0 bytes in 64 fits
+            assertEquals(0, bytes, names[k] + ": bytes allocated by 64 fits after warm-up");
+            assertTrue(holder.ok(), names[k]);
+        }
+    }
+
     /** Field by field, the arrays by content. */
     private static void assertSame(PlasmaFit want, PlasmaFit got) {
         assertEquals(want.protons(), got.protons());
