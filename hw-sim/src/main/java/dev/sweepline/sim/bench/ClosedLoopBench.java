@@ -192,7 +192,8 @@ public final class ClosedLoopBench {
                 config.instrument().preamp(), plasma, hooks.observer());
         SimulatedInstrument instrument = new SimulatedInstrument(config.instrument(),
                 SeedTree.of(config.seed()).instrument());
-        InProcessLink link = new InProcessLink(instrument, plasma::apply, recorder);
+        // the steps' plasma refilled in place (the instrument and the recorder read it within the step)
+        InProcessLink link = new InProcessLink(instrument, micros -> states.reused(micros / 1e6), recorder);
         hooks.cycle().configure(flight, instrument);
         FlightSoftware fsw = new FlightSoftware(flight, link, hooks.frames(), recorder);
         recorder.follow(fsw.scheduler(), config.instrument().calibration());

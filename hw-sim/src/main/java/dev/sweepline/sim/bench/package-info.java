@@ -35,7 +35,9 @@
  *     run goes, the bytes the formatter gave (DecisionsCsvTest); the chart is drawn from a bounded series
  *     (DecisionSeriesTest). The true peak's pruned search finds the full scan's window (TruePeakTest).
  *     The whole: a 7-simulated-day {@code run --no-ground} under {@code -Xmx64m}, the live heap after a
- *     full GC the same at its start and end (measured by hand, {@code jcmd PID GC.class_histogram}).</li>
+ *     full GC the same at its start and end (measured by hand, {@code jcmd PID GC.class_histogram}).
+ *     The steps' plasma is one plasma refilled in place, the built plasma to the bit
+ *     (ReusedPlasmaSeriesTest); the truth the recorder keeps is built afresh.</li>
  * </ol>
  * Truth conventions: the true peak of a species is the window where its noise-free current peaks
  * (for a hot wind well above the bulk-speed E/q); a focus sweep is locked when its band holds the

@@ -57,6 +57,9 @@ public final class DesignSolver {
     private static Solution solve(double[][][] m, double tolerance, boolean dropping) {
         int n = m.length;
         int p = m[0].length;
+        // the candidates in one array (candidate j's element (a, b) at j p² + a p + b): the same sums in the
+        // same order as over m, without the rows' indirection
+        double[] flat = flatten(m, p);
         double[] share = new double[n];
         boolean[] active = new boolean[n];
         int count = 0;
@@ -70,7 +73,7 @@ public final class DesignSolver {
         double[] d = new double[n];
         double[][] f = new double[p][p];
         for (int it = 0; it < MAX_ITERATIONS; it++) {
-            combine(m, share, f);
+            combine(flat, p, share, f);
             double[][] inv = invert(f);
             if (inv == null) {
                 return null;
@@ -78,7 +81,7 @@ public final class DesignSolver {
             double worst = 0;
             for (int j = 0; j < n; j++) {
                 if (active[j]) {
-                    d[j] = traceOfProduct(inv, m[j]);
+                    d[j] = traceOfProduct(inv, flat, j * p * p);
                     worst = Math.max(worst, d[j]);
                 }
             }
@@ -87,7 +90,7 @@ public final class DesignSolver {
                 double all = 0;
                 for (int j = 0; j < n; j++) {
                     if (!active[j]) {
-                        d[j] = traceOfProduct(inv, m[j]);
+                        d[j] = traceOfProduct(inv, flat, j * p * p);
                     }
                     all = Math.max(all, d[j]);
                 }
@@ -112,14 +115,14 @@ public final class DesignSolver {
                 share[j] /= sum; // renormalise after dropping (the update alone keeps Σ s_j = 1)
             }
         }
-        combine(m, share, f);
+        combine(flat, p, share, f);
         double[][] inv = invert(f);
         if (inv == null) {
             return null;
         }
         double all = 0;
         for (int j = 0; j < n; j++) {
-            d[j] = traceOfProduct(inv, m[j]);
+            d[j] = traceOfProduct(inv, flat, j * p * p);
             all = Math.max(all, d[j]);
         }
         return new Solution(share, f, d, all, MAX_ITERATIONS, false);
@@ -151,6 +154,49 @@ public final class DesignSolver {
                 }
             }
         }
+    }
+
+    private static double[] flatten(double[][][] m, int p) {
+        double[] flat = new double[m.length * p * p];
+        for (int j = 0; j < m.length; j++) {
+            for (int a = 0; a < p; a++) {
+                System.arraycopy(m[j][a], 0, flat, (j * p + a) * p, p);
+            }
+        }
+        return flat;
+    }
+
+    /** {@link #combine(double[][][], double[], double[][])} over the flattened candidates. */
+    private static void combine(double[] flat, int p, double[] share, double[][] f) {
+        for (double[] row : f) {
+            Arrays.fill(row, 0);
+        }
+        for (int j = 0, n = share.length; j < n; j++) {
+            if (share[j] == 0) {
+                continue;
+            }
+            double sj = share[j];
+            int off = j * p * p;
+            for (int a = 0; a < p; a++) {
+                double[] fa = f[a];
+                for (int b = 0; b < p; b++) {
+                    fa[b] += sj * flat[off + a * p + b];
+                }
+            }
+        }
+    }
+
+    /** {@link #traceOfProduct(double[][], double[][])} with candidate j's matrix at {@code off} of the flattened. */
+    private static double traceOfProduct(double[][] inv, double[] flat, int off) {
+        int p = inv.length;
+        double t = 0;
+        for (int a = 0; a < p; a++) {
+            double[] ia = inv[a];
+            for (int b = 0; b < p; b++) {
+                t += ia[b] * flat[off + b * p + a];
+            }
+        }
+        return t;
     }
 
     private static double[][] invert(double[][] f) {

@@ -17,13 +17,13 @@ import dev.sweepline.sim.plasma.PlasmaState;
 public final class InProcessLink implements InstrumentLink {
     /** Where the plasma of a given time comes from (the scenario timeline, in the bench). */
     public interface PlasmaSource {
-        /** The plasma at {@code micros} of simulated time. */
+        /** The plasma at {@code micros} of simulated time: read during the step only (a source may reuse it). */
         PlasmaState plasmaAt(long micros);
     }
 
     /** Sees every executed step with its truth: the bench records truth beside each decision. */
     public interface StepObserver {
-        /** Called once per executed step, before the reply becomes visible, with the plasma it saw. */
+        /** Called once per executed step, before the reply becomes visible, with the plasma it saw (not to be kept). */
         void onExecuted(StepCommand step, SampleReply reply, StepTruth truth, PlasmaState plasma, long startMicros);
     }
 

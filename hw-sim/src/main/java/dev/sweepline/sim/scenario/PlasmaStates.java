@@ -3,6 +3,7 @@ package dev.sweepline.sim.scenario;
 import dev.sweepline.sim.plasma.IonPopulation;
 import dev.sweepline.sim.plasma.IonSpecies;
 import dev.sweepline.sim.plasma.PlasmaState;
+import dev.sweepline.sim.plasma.ReusablePlasma;
 import java.util.List;
 
 /**
@@ -34,7 +35,9 @@ public final class PlasmaStates {
         for (PlasmaParameter p : PlasmaParameter.values()) {
             v[p.ordinal()] = c.get(p);
         }
-        return of(v, direction(c.fieldThetaXDeg(), c.fieldThetaYDeg()), drift.unitVector(c), new double[3]);
+        double[] populations = new double[POPULATION_VALUES];
+        return of(populations(v, drift.unitVector(c), new double[3], populations),
+                direction(c.fieldThetaXDeg(), c.fieldThetaYDeg()));
     }
 
     /**
@@ -51,6 +54,8 @@ public final class PlasmaStates {
         private double fieldThetaYDeg = Double.NaN;
         private double[] field;
         private double[] driftVector;
+        private final double[] populations = new double[POPULATION_VALUES];
+        private final ReusablePlasma reusable = new ReusablePlasma();
 
         /** The plasmas of {@code timeline}, its alphas drifting along {@code drift}. */
         public Series(ScenarioTimeline timeline, AlphaDriftDirection drift) {
@@ -60,6 +65,25 @@ public final class PlasmaStates {
 
         /** The plasma at {@code seconds} from the scenario start (as {@code of(timeline.at(seconds), drift)}). */
         public PlasmaState at(double seconds) {
+            return of(valuesAt(seconds), field);
+        }
+
+        /**
+         * {@link #at} in this series' one reused plasma, refilled by every call (the same values to the
+         * bit): valid until the next call of {@code reused}; a caller that keeps it uses {@link #at}.
+         */
+        public PlasmaState reused(double seconds) {
+            double[] p = valuesAt(seconds);
+            reusable.protons(p[0], p[1], p[2], p[3], p[4], p[5]);
+            boolean withAlphas = p[WITH_ALPHAS] != 0;
+            if (withAlphas) {
+                reusable.alphas(p[6], p[7], p[8], p[9], p[10], p[11]);
+            }
+            return reusable.set(withAlphas, field[0], field[1], field[2]);
+        }
+
+        /** The populations' values at {@code seconds} (see {@link #populations}), in this series' scratch. */
+        private double[] valuesAt(double seconds) {
             double[] v = timeline.valuesAt(seconds);
             if (Double.compare(v[FIELD_X], fieldThetaXDeg) != 0 || Double.compare(v[FIELD_Y], fieldThetaYDeg) != 0) {
                 field = direction(v[FIELD_X], v[FIELD_Y]);
@@ -67,12 +91,25 @@ public final class PlasmaStates {
                 fieldThetaXDeg = v[FIELD_X];
                 fieldThetaYDeg = v[FIELD_Y];
             }
-            return PlasmaStates.of(v, field, driftVector, flow);
+            return populations(v, driftVector, flow, populations);
         }
     }
 
-    /** The plasma of the values {@code v} (by {@link PlasmaParameter#ordinal()}); {@code flow} is scratch. */
-    private static PlasmaState of(double[] v, double[] field, double[] d, double[] flow) {
+    /**
+     * Values per population in {@link #populations}: density, vx, vy, vz, w parallel, w perpendicular (SI),
+     * the protons' then the alphas'.
+     */
+    private static final int PER_POPULATION = 6;
+    /** The slot in {@link #populations} that is 1 when there are alphas, 0 when not. */
+    private static final int WITH_ALPHAS = 2 * PER_POPULATION;
+    private static final int POPULATION_VALUES = WITH_ALPHAS + 1;
+
+    /**
+     * The protons' and the alphas' values (see {@link #PER_POPULATION}) of the values {@code v} (by
+     * {@link PlasmaParameter#ordinal()}) into {@code out}, alphas drifting along {@code d}; no alphas when
+     * their abundance is not positive (their slots then left as they were). {@code flow} is scratch.
+     */
+    private static double[] populations(double[] v, double[] d, double[] flow, double[] out) {
         direction(v[FLOW_X], v[FLOW_Y], flow);
         double speed = v[SPEED] * KM_TO_M;
         double vx = flow[0] * speed;
@@ -81,20 +118,35 @@ public final class PlasmaStates {
 
         double tParallel = PlasmaConditions.parallelTemperatureK(v[TEMPERATURE], v[ANISOTROPY]);
         double tPerp = PlasmaConditions.perpendicularTemperatureK(v[TEMPERATURE], v[ANISOTROPY]);
-        IonPopulation protons = new IonPopulation(IonSpecies.PROTON, v[DENSITY] * PER_CC_TO_PER_M3,
-                vx, vy, vz,
-                IonPopulation.thermalSpeed(tParallel, IonSpecies.PROTON.massKg()),
-                IonPopulation.thermalSpeed(tPerp, IonSpecies.PROTON.massKg()));
+        out[0] = v[DENSITY] * PER_CC_TO_PER_M3;
+        out[1] = vx;
+        out[2] = vy;
+        out[3] = vz;
+        out[4] = IonPopulation.thermalSpeed(tParallel, IonSpecies.PROTON.massKg());
+        out[5] = IonPopulation.thermalSpeed(tPerp, IonSpecies.PROTON.massKg());
         if (v[ABUNDANCE] <= 0) {
-            return new PlasmaState(List.of(protons), field[0], field[1], field[2]);
+            out[WITH_ALPHAS] = 0;
+            return out;
         }
         double driftSpeed = v[DRIFT] * KM_TO_M;
         double ratio = v[TEMPERATURE_RATIO];
-        IonPopulation alphas = new IonPopulation(IonSpecies.ALPHA,
-                v[ABUNDANCE] * v[DENSITY] * PER_CC_TO_PER_M3,
-                vx + driftSpeed * d[0], vy + driftSpeed * d[1], vz + driftSpeed * d[2],
-                IonPopulation.thermalSpeed(ratio * tParallel, IonSpecies.ALPHA.massKg()),
-                IonPopulation.thermalSpeed(ratio * tPerp, IonSpecies.ALPHA.massKg()));
+        out[6] = v[ABUNDANCE] * v[DENSITY] * PER_CC_TO_PER_M3;
+        out[7] = vx + driftSpeed * d[0];
+        out[8] = vy + driftSpeed * d[1];
+        out[9] = vz + driftSpeed * d[2];
+        out[10] = IonPopulation.thermalSpeed(ratio * tParallel, IonSpecies.ALPHA.massKg());
+        out[11] = IonPopulation.thermalSpeed(ratio * tPerp, IonSpecies.ALPHA.massKg());
+        out[WITH_ALPHAS] = 1;
+        return out;
+    }
+
+    /** The plasma of the populations' values {@code p} (see {@link #populations}) and the field direction. */
+    private static PlasmaState of(double[] p, double[] field) {
+        IonPopulation protons = new IonPopulation(IonSpecies.PROTON, p[0], p[1], p[2], p[3], p[4], p[5]);
+        if (p[WITH_ALPHAS] == 0) {
+            return new PlasmaState(List.of(protons), field[0], field[1], field[2]);
+        }
+        IonPopulation alphas = new IonPopulation(IonSpecies.ALPHA, p[6], p[7], p[8], p[9], p[10], p[11]);
         return new PlasmaState(List.of(protons, alphas), field[0], field[1], field[2]);
     }
 
