@@ -20,7 +20,7 @@ import java.util.List;
  * a window whose bound (times 1 + 1e-6 for the rounding of the evaluated currents, plus an absolute
  * allowance of 1e-12 q n A (U + w) for the lower tail, where the cup's formula cancels) lies below that
  * current evaluates to less than it, so it cannot be the first largest, and is skipped. Every other window
- * is evaluated as the full scan would, in order.
+ * is evaluated as the exhaustive search would, in order.
  *
  * <p>Not thread-safe (the cup's scratch, the cached edge speeds). One per recorder.
  */
@@ -59,7 +59,7 @@ final class TruePeak {
         return -1;
     }
 
-    /** The full scan: every window evaluated (the definition {@link #of} agrees with). */
+    /** The exhaustive search: every window evaluated (the definition {@link #of} agrees with). */
     static int scan(FaradayCup cup, PlasmaState alone, WindowVolts windows) {
         int best = -1;
         double bestAmps = 0;

@@ -33,7 +33,7 @@
  *     asks): the summary's sweep figures are tallied as the sweeps complete, in memory bounded by the table,
  *     and are the figures the list functions give (SweepTallyTest); {@code decisions.csv} is written as the
  *     run goes, the bytes the formatter gave (DecisionsCsvTest); the chart is drawn from a bounded series
- *     (DecisionSeriesTest). The true peak's pruned search finds the full scan's window (TruePeakTest).
+ *     (DecisionSeriesTest). The true peak's pruned search finds the exhaustive search's window (TruePeakTest).
  *     The whole: a 7-simulated-day {@code run --no-ground} under {@code -Xmx64m}, the live heap after a
  *     full GC the same at its start and end (measured by hand, {@code jcmd PID GC.class_histogram}).
  *     The steps' plasma is one plasma refilled in place, the built plasma to the bit

@@ -15,7 +15,7 @@ import java.util.SplittableRandom;
 import org.junit.jupiter.api.Test;
 
 /**
- * The pruned search for the true peak finds the window the full scan finds (the reference: the scan of
+ * The pruned search for the true peak finds the window the exhaustive search finds (the reference: the scan of
  * every window, {@link TruePeak#scan}), on slowly drifting winds (the hint is the previous answer, as
  * in a run), on jumps (the hint far off), on cold and hot, dense and sparse, oblique and absent species.
  * Wind ranges: those of {@link RandomWind} (physics.md, "Solar wind"), widened to be harsher.
@@ -70,7 +70,7 @@ class TruePeakTest {
     }
 
     @Test
-    void shouldFindTheWindowTheFullScanFinds() {
+    void shouldFindTheWindowTheExhaustiveSearchFinds() {
         for (long seed = 1; seed <= 4; seed++) {
             assertSameAsTheScan(TestInstruments.DEMO_CUP, seed);
             assertSameAsTheScan(TestInstruments.FINE_CUP, seed);
