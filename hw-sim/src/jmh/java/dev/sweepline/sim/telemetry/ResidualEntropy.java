@@ -44,6 +44,37 @@ public final class ResidualEntropy {
         return h / Math.log(2);
     }
 
+    /**
+     * The entropy of the smoothest distribution with the same mass in each bin as the residuals: bins of
+     * width 1 below {@code 2 * subBinsPerOctave}, then each octave [2^j, 2^(j+1)) cut into
+     * {@code subBinsPerOctave} bins of equal width, the probability spread evenly inside a bin:
+     * -sum (n_b / N) log2(n_b / (N w_b)) bits per residual. For the distribution the residuals were drawn
+     * from, H = H(bin) + H(value | bin) and H(value | bin) &lt;= log2 w_b, so this is an upper estimate of
+     * the true entropy, with a small bias of its own because the bins are few and well filled; the plug-in
+     * {@link #bitsPerResidual()} is a lower one when most tail values occur once (Miller 1955).
+     */
+    public double binnedBitsPerResidual(int subBinsPerOctave) {
+        if (Integer.bitCount(subBinsPerOctave) != 1) {
+            throw new IllegalArgumentException("sub-bins per octave must be a power of two: " + subBinsPerOctave);
+        }
+        int fine = 2 * subBinsPerOctave;
+        double bits = 0;
+        int d = 0;
+        while (d <= X_MAX) {
+            int width = d < fine ? 1 : Integer.highestOneBit(d) / subBinsPerOctave;
+            long n = 0;
+            for (int v = d; v < d + width && v <= X_MAX; v++) {
+                n += histogram[v];
+            }
+            if (n > 0) {
+                double p = (double) n / residuals;
+                bits -= p * Math.log(p / width);
+            }
+            d += width;
+        }
+        return bits / Math.log(2);
+    }
+
     /** Distinct mapped residual values seen (occupied histogram bins). */
     public long occupiedSymbols() {
         long k = 0;
@@ -53,6 +84,11 @@ public final class ResidualEntropy {
             }
         }
         return k;
+    }
+
+    /** Samples counted: references and residuals. */
+    public long samples() {
+        return references + residuals;
     }
 
     /** Mapped residuals counted. */

@@ -30,10 +30,16 @@ public final class SpectrumCorpus {
 
     /** Runs each scenario of {@link #SCENARIOS} for its whole duration and keeps every spectrum. */
     public static SpectrumCorpus simulate() {
+        return simulate(Double.POSITIVE_INFINITY);
+    }
+
+    /** Runs each scenario for its duration or {@code maxSeconds}, whichever is shorter (a small corpus for tests). */
+    public static SpectrumCorpus simulate(double maxSeconds) {
         SpectrumCorpus corpus = new SpectrumCorpus();
         for (String name : SCENARIOS) {
             var scenario = ScenarioLoader.builtIn(name);
-            FlightLoop loop = new FlightLoop(scenario, SEED, scenario.durationSeconds(), FlightConfig.of(TestInstruments.DEMO_CUP.flight()),
+            double seconds = Math.min(maxSeconds, scenario.durationSeconds());
+            FlightLoop loop = new FlightLoop(scenario, SEED, seconds, FlightConfig.of(TestInstruments.DEMO_CUP.flight()),
                     (f, off, len) -> { }).run();
             for (RecordedSpectrum s : loop.spectra()) {
                 corpus.add(name, s.adc());
