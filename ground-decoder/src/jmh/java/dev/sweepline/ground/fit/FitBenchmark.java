@@ -32,7 +32,12 @@ import org.openjdk.jmh.annotations.Warmup;
  * 18–25 ({@code -f 1 -wi 2 -w 1 -i 3 -r 1 -prof gc}, figures only good for the allocation): 14 windows 428
  * ops/s and 54 KB/op (34 KB/op before the constrained alpha component, whose score-screened attempts these
  * proton spectra pay for), 32 windows 103 ops/s and 104 KB/op, 64 windows joint 49 ops/s and 509 KB/op,
- * 128 windows joint 32 ops/s and 884 KB/op.
+ * 128 windows joint 32 ops/s and 884 KB/op. With the ground's own Levenberg–Marquardt, the per-edge model and
+ * the per-thread model reuse, at a load average of 12–20 (so ops/s say little; spectra per CPU-second of the
+ * fitting thread, ThreadMXBean, 2 s after 2 s of warm-up, before → after in the same minute): 14 windows
+ * 23.6e3 → 55e3, 32 windows 15.3e3 → 24.9e3, 64 windows joint 3.5e3 → 6.5e3, 128 windows joint 1.6e3 →
+ * 4.4e3; {@code -prof gc} 908, 928, 1433, 1432 B/op (was 44, 83, 380, 650 KB/op), what is left being the
+ * result objects ({@link PlasmaFit}, its moments, angles and flag set, the outcome records).
  */
 @State(Scope.Thread)
 @BenchmarkMode(Mode.Throughput)

@@ -1,6 +1,7 @@
 package dev.sweepline.ground.fit;
 
 import org.hipparchus.distribution.continuous.ChiSquaredDistribution;
+import org.hipparchus.special.Gamma;
 
 /**
  * Whether the joint proton + alpha model explains a spectrum better than protons alone, as a
@@ -66,5 +67,16 @@ final class AlphaSelection {
     /** True when the drop from {@code protonChiSquare} to {@code jointChiSquare} exceeds the threshold. */
     boolean accepts(double protonChiSquare, double jointChiSquare) {
         return protonChiSquare - jointChiSquare > threshold;
+    }
+
+    /**
+     * The same test for a k known only per fit (the constrained component's effective k), without solving
+     * for the quantile: the drop exceeds the χ²(k) quantile at 1 − {@link #TEST_LEVEL} exactly when its tail
+     * probability Q(k/2, drop/2) (the regularised upper incomplete gamma function, Hipparchus) is below the
+     * level, the χ² distribution function being increasing.
+     */
+    static boolean accepts(double extraParameters, double protonChiSquare, double jointChiSquare) {
+        double drop = protonChiSquare - jointChiSquare;
+        return drop > 0 && Gamma.regularizedGammaQ(extraParameters / 2, drop / 2) < TEST_LEVEL;
     }
 }

@@ -42,10 +42,35 @@ public final class SpectrumFitter {
     private static final AlphaSelection FREE_ALPHAS = new AlphaSelection(3);
 
     private final CupGeometry cup;
+    private final Solver solver;
+    /** The models of the last spectrum, per thread (the fitter is shared between threads). */
+    private final ThreadLocal<ModelCache> models = ThreadLocal.withInitial(ModelCache::new);
 
     /** A fitter for a cup of geometry {@code cup}. */
     public SpectrumFitter(CupGeometry cup) {
+        this(cup, threadWorkspaces());
+    }
+
+    /** A fitter for {@code cup} whose least-squares runs are {@code solver}'s (the reference comparison's). */
+    SpectrumFitter(CupGeometry cup, Solver solver) {
         this.cup = cup;
+        this.solver = solver;
+    }
+
+    /**
+     * One weighted least-squares run: the fitted outcome of {@code model} on the amps from the physical
+     * start, with prior rows (null for none), or null when it does not converge.
+     */
+    interface Solver {
+        LeastSquaresRun.Outcome fit(PlasmaModel model, double[] amps, double[] sigma, double[] startPhysical,
+                AlphaPrior prior);
+    }
+
+    /** The default solver: {@link LevenbergMarquardt} with one workspace per thread, so the fitter stays thread-safe. */
+    private static Solver threadWorkspaces() {
+        ThreadLocal<LevenbergMarquardt> workspaces = ThreadLocal.withInitial(LevenbergMarquardt::new);
+        return (model, amps, sigma, start, prior) -> LeastSquaresRun.fit(workspaces.get(), model, amps, sigma, start,
+                prior);
     }
 
     /** A fitter for {@code instrument}'s cup. */
@@ -104,14 +129,15 @@ public final class SpectrumFitter {
             angleFlags(preliminary, flags);
             return PlasmaFit.failed(flags, m, preliminary, cup.effectiveAreaM2());
         }
-        PlasmaModel protonModel = new PlasmaModel(in.lowVolts(), in.highVolts(), area, false);
+        ModelCache models = this.models.get();
+        PlasmaModel protonModel = models.model(in.lowVolts(), in.highVolts(), area, false);
         double[] guess = InitialGuess.protons(protonModel, in.totalAmps(), area);
         if (guess == null) {
             flags.add(FitFlag.NO_SIGNAL);
             angleFlags(preliminary, flags);
             return PlasmaFit.failed(flags, m, preliminary, cup.effectiveAreaM2());
         }
-        LeastSquaresRun.Outcome best = LeastSquaresRun.fit(protonModel, in.totalAmps(), in.sigmaAmps(), guess);
+        LeastSquaresRun.Outcome best = solver.fit(protonModel, in.totalAmps(), in.sigmaAmps(), guess, null);
         // no covariance means no errors: a product without errors is not a product
         if (best == null || !physical(best.parameters(), in) || !finiteErrors(best.covariance())) {
             flags.add(FitFlag.NO_CONVERGENCE);
@@ -122,7 +148,7 @@ public final class SpectrumFitter {
         LeastSquaresRun.Outcome joint = null;
         PlasmaModel jointModel = null;
         if (m >= MIN_WINDOWS_JOINT) {
-            jointModel = new PlasmaModel(in.lowVolts(), in.highVolts(), area, true); // one for every joint try
+            jointModel = models.model(in.lowVolts(), in.highVolts(), area, true); // one for every joint try
             AlphaCoverage coverage = AlphaCoverage.of(protonModel, best.parameters());
             LeastSquaresRun.Outcome free = coverage == AlphaCoverage.PEAK
                     ? jointFit(in, area, protonModel, jointModel, best) : null;
@@ -213,7 +239,7 @@ public final class SpectrumFitter {
      * The free joint fit (n_α, U_α, w_α free), or null when it does not converge to physical values with the
      * alpha peak inside the windows; the selection test is the caller's.
      */
-    private static LeastSquaresRun.Outcome jointFit(SpectrumInput in, double area, PlasmaModel protonModel,
+    private LeastSquaresRun.Outcome jointFit(SpectrumInput in, double area, PlasmaModel protonModel,
             PlasmaModel joint, LeastSquaresRun.Outcome protons) {
         double[] p = protons.parameters();
         double residual = 0;
@@ -229,7 +255,7 @@ public final class SpectrumFitter {
         }
         double wAlpha = p[2] * Math.sqrt(START_ALPHA_TEMPERATURE_RATIO * Species.PROTON.massKg() / Species.ALPHA.massKg());
         double[] start = {p[0], p[1], p[2], ratio * p[0], p[1], wAlpha};
-        LeastSquaresRun.Outcome o = LeastSquaresRun.fit(joint, in.totalAmps(), in.sigmaAmps(), start);
+        LeastSquaresRun.Outcome o = solver.fit(joint, in.totalAmps(), in.sigmaAmps(), start, null);
         if (o == null || !physical(o.parameters(), in)) {
             return null;
         }
@@ -270,7 +296,7 @@ public final class SpectrumFitter {
      * tried once more with the abundance row ({@link AlphaPrior#withAbundance}), so alpha-free spectra, whose
      * constrained fit stays below the limit or is not tried, never pay for the third fit.
      */
-    private static Constrained constrainedFit(SpectrumInput in, PlasmaModel protonModel, PlasmaModel joint,
+    private Constrained constrainedFit(SpectrumInput in, PlasmaModel protonModel, PlasmaModel joint,
             LeastSquaresRun.Outcome protons, AlphaPrior prior) {
         double[] p = protons.parameters();
         double wAlpha = AlphaCoverage.startThermalSpeed(p[2]);
@@ -287,7 +313,7 @@ public final class SpectrumFitter {
             ratio = DEFAULT_ALPHA_RATIO;
         }
         double[] start = {p[0], p[1], p[2], ratio * p[0], p[1], wAlpha};
-        LeastSquaresRun.Outcome o = LeastSquaresRun.fit(joint, in.totalAmps(), in.sigmaAmps(), start, prior);
+        LeastSquaresRun.Outcome o = solver.fit(joint, in.totalAmps(), in.sigmaAmps(), start, prior);
         if (o == null || !physical(o.parameters(), in) || !finiteErrors(o.covariance())) {
             return null;
         }
@@ -298,7 +324,7 @@ public final class SpectrumFitter {
             return prior.abundance() ? null : constrainedFit(in, protonModel, joint, protons, prior.withAbundance());
         }
         boolean sane = alphaRatio > 0 && q[4] > 0.7 * q[1] && q[4] < 1.5 * q[1]
-                && extra > 0 && new AlphaSelection(extra).accepts(protons.chiSquare(), o.totalChiSquare());
+                && extra > 0 && AlphaSelection.accepts(extra, protons.chiSquare(), o.totalChiSquare());
         return sane ? new Constrained(o, prior) : null;
     }
 

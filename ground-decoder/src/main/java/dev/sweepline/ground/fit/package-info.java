@@ -17,8 +17,9 @@
  * inverted with tan θ = (R/d)·D⁻¹(D). A half-plane split of a disc depends only on the shift across the
  * line, so D_x = D(u_x) exactly even for a 2-D shift, and the ICD's beam model (every window's image
  * shifted by d tan θ of the bulk flow) makes the ratio the same in every window. (2) The summed spectrum
- * by weighted Levenberg–Marquardt (Hipparchus {@code LevenbergMarquardtOptimizer}, weights 1/σ² from the
- * ICD §8 noise row), which sees only the normal speed U cos θ and the acceptance A(θ)/A(0) (exact
+ * by weighted Levenberg–Marquardt ({@link dev.sweepline.ground.fit.LevenbergMarquardt}: Moré's scaled trust
+ * region, the analytic Jacobian, allocation-free on one workspace per thread; weights 1/σ² from the ICD §8
+ * noise row), which sees only the normal speed U cos θ and the acceptance A(θ)/A(0) (exact
  * disc–disc overlap of the image and the collector, 1 up to the cup's full acceptance, 20.25° for the
  * demo cup): first protons alone from moments of the spectrum ({@link dev.sweepline.ground.fit.InitialGuess}, the half below the peak so that alphas do not
  * widen it), then, where the windows reach the alpha peak, protons and alphas jointly (n_α, U_α, w_α
@@ -58,7 +59,14 @@
  *       ({@code FlowAngleRecoveryTest}); the disc–quadrant overlap matches Monte Carlo ({@code CupGeometryTest}).</li>
  *   <li>F5 all-zero, saturated, one-window and uncalibrated spectra give a flagged fit with NaN moments,
  *       never an exception ({@link dev.sweepline.ground.fit.FitFlag}; {@code GroundProcessingTest}).</li>
- *   <li>F6 fit rate measured by {@code FitBenchmark} (JMH, src/jmh).</li>
+ *   <li>F6 fit rate measured by {@code FitBenchmark} (JMH, src/jmh), which checks every fit
+ *       ({@code FitBenchmarkCheckTest}).</li>
+ *   <li>F13 the optimiser reaches the χ² minimum Hipparchus' {@code LevenbergMarquardtOptimizer} reaches, on
+ *       every least-squares run of the fit tests' spectra, at least as close by the Gauss–Newton decrement,
+ *       the parameters within 1e-9 relative or the distance the two stopping points allow, the covariance
+ *       within 1e-9 of Hipparchus' QR inverse, and the same flags ({@code LevenbergMarquardtAgreementTest});
+ *       the per-edge model equals the per-window {@link dev.sweepline.ground.fit.WindowCurrent} bit for bit
+ *       ({@code PlasmaModelEdgeTest}).</li>
  *   <li>F7 a second cup's spectra (fine-cup.yaml: half the area, 256 windows, 20-bit ADC, other ranges and
  *       cadence) fit to the same truth with its own geometry and noise ({@code FineCupProcessingTest}).</li>
  *   <li>F8 on alpha-free spectra the joint fit is accepted in at most 1 % of trials, the binomial 95 % upper

@@ -46,6 +46,11 @@ class AlphaSelectionTest {
         // level is the 1 % target over the trials factor 10 (AlphaSelection class note)
         assertEquals(0.001, AlphaSelection.TEST_LEVEL, 1e-15);
         assertEquals(16.266, new AlphaSelection(3).threshold(), 1e-3);
+        // the tail-probability form decides as the quantile does, either side of it (k = 3 and a real k)
+        for (double k : new double[] {3, 1.7}) {
+            double q = new AlphaSelection(k).threshold();
+            assertTrue(AlphaSelection.accepts(k, q + 1e-6, 0) && !AlphaSelection.accepts(k, q - 1e-6, 0), "k " + k);
+        }
     }
 
     @Test
