@@ -20,17 +20,67 @@ final class LeastSquaresRun {
     static final double MAX_SPEED = 1e7;
 
     /**
-     * The outcome.
-     *
-     * @param parameters physical parameters
-     * @param covariance physical covariance, or null when singular
-     * @param chiSquare  Σ (r_j/σ_j)² over the windows
-     * @param iterations iterations used
-     * @param priorChiSquare the prior rows' part of the minimised χ², 0 without a prior
-     * @param leverage   parameters the prior pins down ({@link AlphaPrior#leverage}), 0 without a prior
+     * The outcome. Made by a solver and then read only, or, as a slot of a fitter's per-thread workspace
+     * ({@link #Outcome(int)}), filled again by every fit ({@link #outcomeInto}) so that a fit allocates nothing.
      */
-    record Outcome(double[] parameters, double[][] covariance, double chiSquare, int iterations,
-            double priorChiSquare, double leverage) {
+    static final class Outcome {
+        private final double[] parameters;
+        private final double[][] covariance;
+        private boolean hasCovariance;
+        private double chiSquare;
+        private int iterations;
+        private double priorChiSquare;
+        private double leverage;
+
+        /**
+         * @param parameters physical parameters
+         * @param covariance physical covariance, or null when singular
+         * @param chiSquare  Σ (r_j/σ_j)² over the windows
+         * @param iterations iterations used
+         * @param priorChiSquare the prior rows' part of the minimised χ², 0 without a prior
+         * @param leverage   parameters the prior pins down ({@link AlphaPrior#leverage}), 0 without a prior
+         */
+        Outcome(double[] parameters, double[][] covariance, double chiSquare, int iterations, double priorChiSquare,
+                double leverage) {
+            this.parameters = parameters;
+            this.covariance = covariance == null ? new double[parameters.length][parameters.length] : covariance;
+            this.hasCovariance = covariance != null;
+            this.chiSquare = chiSquare;
+            this.iterations = iterations;
+            this.priorChiSquare = priorChiSquare;
+            this.leverage = leverage;
+        }
+
+        /** An empty slot for a model of {@code np} parameters, filled by {@link #outcomeInto} or {@link #copyFrom}. */
+        Outcome(int np) {
+            this(new double[np], new double[np][np], Double.NaN, 0, 0, 0);
+        }
+
+        double[] parameters() {
+            return parameters;
+        }
+
+        /** The physical covariance, or null when singular. */
+        double[][] covariance() {
+            return hasCovariance ? covariance : null;
+        }
+
+        double chiSquare() {
+            return chiSquare;
+        }
+
+        int iterations() {
+            return iterations;
+        }
+
+        double priorChiSquare() {
+            return priorChiSquare;
+        }
+
+        double leverage() {
+            return leverage;
+        }
+
         /** The minimised χ²: windows and prior rows. */
         double totalChiSquare() {
             return chiSquare + priorChiSquare;
@@ -42,18 +92,38 @@ final class LeastSquaresRun {
          * covariance rows).
          */
         Outcome withDensityScale(double factor) {
-            double[] p = parameters.clone();
-            double[][] c = covariance == null ? null : new double[p.length][];
-            for (int a = 0; a < p.length; a++) {
-                p[a] *= a % 3 == 0 ? factor : 1;
-                if (c != null) {
-                    c[a] = covariance[a].clone();
-                    for (int b = 0; b < p.length; b++) {
-                        c[a][b] *= (a % 3 == 0 ? factor : 1) * (b % 3 == 0 ? factor : 1);
-                    }
+            Outcome o = new Outcome(parameters.length);
+            o.scaledFrom(this, factor);
+            return o;
+        }
+
+        /** This slot made {@code from} with every density times {@code factor} ({@link #withDensityScale}). */
+        void scaledFrom(Outcome from, double factor) {
+            copyFrom(from);
+            for (int a = 0; a < parameters.length; a++) {
+                parameters[a] *= a % 3 == 0 ? factor : 1;
+                for (int b = 0; b < parameters.length; b++) {
+                    covariance[a][b] *= (a % 3 == 0 ? factor : 1) * (b % 3 == 0 ? factor : 1);
                 }
             }
-            return new Outcome(p, c, chiSquare, iterations, priorChiSquare, leverage);
+        }
+
+        /** This slot a copy of {@code from}, a fit of as many parameters. */
+        void copyFrom(Outcome from) {
+            int np = parameters.length;
+            if (from.parameters.length != np) {
+                throw new IllegalArgumentException("outcome of " + from.parameters.length
+                        + " parameters copied into a slot of " + np);
+            }
+            System.arraycopy(from.parameters, 0, parameters, 0, np);
+            for (int a = 0; a < np; a++) {
+                System.arraycopy(from.covariance[a], 0, covariance[a], 0, np);
+            }
+            hasCovariance = from.hasCovariance;
+            chiSquare = from.chiSquare;
+            iterations = from.iterations;
+            priorChiSquare = from.priorChiSquare;
+            leverage = from.leverage;
         }
 
         /** Free parameters in effect: the model's count less what the prior pins down. */
@@ -90,17 +160,28 @@ final class LeastSquaresRun {
 
     /** The outcome of {@code lm}'s last successful fit, with the prior's part of χ² and its leverage. */
     static Outcome outcome(LevenbergMarquardt lm, AlphaPrior prior) {
+        Outcome o = new Outcome(lm.parameterCount());
+        outcomeInto(lm, prior, o);
+        return o;
+    }
+
+    /** {@link #outcome} into the slot {@code into} (of {@code lm}'s parameter count), allocating nothing. */
+    static void outcomeInto(LevenbergMarquardt lm, AlphaPrior prior, Outcome into) {
         int np = lm.parameterCount();
-        double[] out = java.util.Arrays.copyOf(lm.parameters(), np);
-        double[][] cov = null;
-        if (lm.hasCovariance()) {
-            cov = new double[np][np];
+        double[] out = into.parameters;
+        System.arraycopy(lm.parameters(), 0, out, 0, np);
+        into.hasCovariance = lm.hasCovariance();
+        if (into.hasCovariance) {
             for (int a = 0; a < np; a++) {
-                System.arraycopy(lm.covariance(), a * np, cov[a], 0, np);
+                System.arraycopy(lm.covariance(), a * np, into.covariance[a], 0, np);
             }
         }
-        double priorChi2 = prior == null ? 0 : prior.chiSquare(out);
-        double leverage = prior == null || cov == null ? 0 : prior.leverage(out, cov);
-        return new Outcome(out, cov, lm.chiSquare() - priorChi2, lm.iterations(), priorChi2, leverage);
+        double priorChi2 = prior == null ? 0 : prior.chiSquare(out, lm.priorResidual(), lm.priorGradient());
+        double leverage = prior == null || !into.hasCovariance ? 0
+                : prior.leverage(out, into.covariance, lm.priorResidual(), lm.priorGradient());
+        into.chiSquare = lm.chiSquare() - priorChi2;
+        into.iterations = lm.iterations();
+        into.priorChiSquare = priorChi2;
+        into.leverage = leverage;
     }
 }

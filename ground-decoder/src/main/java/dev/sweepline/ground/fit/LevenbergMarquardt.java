@@ -321,6 +321,16 @@ final class LevenbergMarquardt {
         return lambda;
     }
 
+    /** Scratch rows for the prior's χ² and leverage after a fit (overwritten by the next fit). */
+    double[] priorResidual() {
+        return priorResidual;
+    }
+
+    /** Scratch gradients, {@link AlphaPrior#ROWS} × 6, as {@link #priorResidual}. */
+    double[][] priorGradient() {
+        return priorGradient;
+    }
+
     private static boolean isLog(int a) {
         return a % 3 != 1;
     }

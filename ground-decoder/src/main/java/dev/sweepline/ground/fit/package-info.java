@@ -67,6 +67,16 @@
  *       within 1e-9 of Hipparchus' QR inverse, and the same flags ({@code LevenbergMarquardtAgreementTest});
  *       the per-edge model equals the per-window {@link dev.sweepline.ground.fit.WindowCurrent} bit for bit
  *       ({@code PlasmaModelEdgeTest}).</li>
+ *   <li>F14 {@link dev.sweepline.ground.fit.SpectrumFitter#fitInto} fills a reusable
+ *       {@link dev.sweepline.ground.fit.MutablePlasmaFit} with the values {@code fit} returns, bit for bit, and
+ *       allocates nothing per fit after warm-up on the benchmark's summed spectra (14, 32 windows protons; 64,
+ *       128 windows joint, free and constrained alphas): 0 bytes in 64 fits by the JVM's per-thread counter
+ *       ({@code FitIntoTest}). Still allocating: the quadrant angles ({@code FlowAngles},
+ *       {@code SpeciesFlowAngles}' current arrays), the angle from a carried density ({@code AcceptanceAngle}),
+ *       the models when the windows or the area change ({@code ModelCache}), and the immutable
+ *       {@link dev.sweepline.ground.fit.PlasmaFit} of {@code fit}. The opt-in warm start (the holder's last
+ *       proton solution) agrees with the cold start within twice the optimiser's stopping distance and needs
+ *       fewer iterations on a time series ({@code FitIntoTest}).</li>
  *   <li>F7 a second cup's spectra (fine-cup.yaml: half the area, 256 windows, 20-bit ADC, other ranges and
  *       cadence) fit to the same truth with its own geometry and noise ({@code FineCupProcessingTest}).</li>
  *   <li>F8 on alpha-free spectra the joint fit is accepted in at most 1 % of trials, the binomial 95 % upper
