@@ -196,8 +196,12 @@ final class LevenbergMarquardt {
             lambda = polishing || newton && scaledNorm(step, np) <= (1 + RADIUS_TOLERANCE) * radius ? 0.0
                     : dampingForRadius(np, radius, lambda, newton);
             while (lambda > 0 && !dampedStep(np, lambda)) {
-                // JᵀJ + λD² too near singular for Cholesky: more damping
+                // JᵀJ + λD² too near singular for Cholesky: more damping, until λ overflows (then JᵀJ or Jᵀr
+                // is not finite, or the diagonal vanishes: no step and no fit)
                 lambda *= 10;
+                if (!Double.isFinite(lambda)) {
+                    return false;
+                }
             }
             double stepLength = scaledNorm(step, np);
             if (iterations == 1) {
