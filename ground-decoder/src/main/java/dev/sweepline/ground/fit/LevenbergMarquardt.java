@@ -11,9 +11,15 @@ package dev.sweepline.ground.fit;
  * <pre>
  *   (JᵀJ + λ D²) δ = Jᵀr,   D_a = max over the iterations so far of ‖column a of J‖
  * </pre>
- * by Cholesky, λ = 0 (Gauss–Newton) when that step lies inside the region ‖Dδ‖ ≤ Δ, otherwise the λ that
- * puts it on the region's edge (Moré §5). A step that lowers χ² is taken; Δ is halved when the actual drop
- * of χ² is under a quarter of the predicted one and doubled when over three quarters (Moré §4). The fit has
+ * by Cholesky, λ = 0 (Gauss–Newton) when that step lies inside the region ‖Dδ‖ ≤ 1.1 Δ, otherwise the λ that
+ * puts it on the region's edge (Moré §5, MINPACK's lmpar). A step that lowers χ² is taken. Δ is cut to the first step, and
+ * then updated as MINPACK's lmder does (Moré §4, and Hipparchus' LevenbergMarquardtOptimizer, its port): when
+ * the actual drop of χ² is under a quarter of the predicted one, Δ becomes γ·min(Δ, 10‖Dδ‖) and λ becomes
+ * λ/γ, γ = ½ or, on a rise of χ², the minimum of the quadratic through χ² and its slope along the step,
+ * ½ψ/(ψ + ½ρ_act), ψ = −gᵀδ/χ² and ρ_act = 1 − χ²_trial/χ², held to [0.1, ½]; when over three quarters or
+ * at a Gauss–Newton step, Δ becomes 2‖Dδ‖ and λ is halved. The path matters, not only the minimum: a free
+ * joint fit on a narrow band has two minima (the alphas faster and slower than the protons) and the
+ * start lies between them. The fit has
  * converged when the Gauss–Newton decrement gᵀ(JᵀJ)⁻¹g, g = Jᵀr — the squared distance of the point from
  * the minimum of the local quadratic model in units of the parameters' 1σ — falls below
  * {@link #STEP_SIGMAS}², or when the distance it bounds is below {@link #RELATIVE_DISTANCE} of every
@@ -46,8 +52,10 @@ final class LevenbergMarquardt {
     private static final double INITIAL_RADIUS = 100;
     /** Radius, relative to ‖Dx‖, below which no step can change the point: the minimum to rounding. */
     private static final double MIN_RADIUS = 1e-15;
-    /** Newton iterations for λ of a radius: Moré's iteration needs about two (Moré 1978 §5). */
+    /** Newton iterations for λ of a radius after the first: MINPACK's lmpar limit (Moré's iteration needs about two, Moré 1978 §5). */
     private static final int RADIUS_ITERATIONS = 10;
+    /** A damped step within this fraction of the radius is on its edge; a Gauss–Newton step inside (1 + it) Δ is taken (MINPACK's lmpar 0.1). */
+    private static final double RADIUS_TOLERANCE = 0.1;
     /**
      * Gauss–Newton decrement below which the undamped step is taken (the point within 1e-3 σ of the minimum,
      * where the quadratic model is exact to far below that): χ² then changes by less than it can be
@@ -62,6 +70,8 @@ final class LevenbergMarquardt {
      * about this times I/σ, and χ² of 2|r| times that.
      */
     private static final double MODEL_PRECISION = 1e-15;
+    /** Rise of χ² beyond which MINPACK's region update takes the actual drop as −1 (its norm tenfold). */
+    private static final double MINPACK_RISE = 100;
     private static final double LOG_LOW = -50;
     private static final double LOG_HIGH = 80;
 
@@ -183,12 +193,21 @@ final class LevenbergMarquardt {
             boolean polishing = decrement <= POLISH_DECREMENT && !polishRefused && decrement < lastDecrement;
             // (Gauss–Newton steps that no longer shrink the decrement hand back to the region's steps)
             lastDecrement = decrement;
-            lambda = polishing || newton && scaledNorm(step, np) <= radius ? 0.0 : dampingForRadius(np, radius, lambda);
+            lambda = polishing || newton && scaledNorm(step, np) <= (1 + RADIUS_TOLERANCE) * radius ? 0.0
+                    : dampingForRadius(np, radius, lambda, newton);
             while (lambda > 0 && !dampedStep(np, lambda)) {
-                // JᵀJ + λD² too near singular for Cholesky: more damping
+                // JᵀJ + λD² too near singular for Cholesky: more damping, until λ overflows (then JᵀJ or Jᵀr
+                // is not finite, or the diagonal vanishes: no step and no fit)
                 lambda *= 10;
+                if (!Double.isFinite(lambda)) {
+                    return false;
+                }
             }
             double stepLength = scaledNorm(step, np);
+            if (iterations == 1) {
+                // MINPACK lmder: the first region is cut to the first step
+                radius = Math.min(radius, stepLength);
+            }
             for (int a = 0; a < np; a++) {
                 trial[a] = x[a] + step[a];
             }
@@ -201,12 +220,21 @@ final class LevenbergMarquardt {
             for (int a = 0; a < np; a++) {
                 predicted += step[a] * (lambda * scale[a] * scale[a] * step[a] + gradient[a]);
             }
-            double rho = predicted > 0 && trialCost < cost ? (cost - trialCost) / predicted : 0;
-            // Moré 1978 §4: halve the region on a poor agreement, double it on a good one
-            if (rho < 0.25) {
-                radius = 0.5 * Math.min(radius, stepLength);
-            } else if (rho > 0.75 || lambda == 0) {
-                radius = Math.max(radius, 2 * stepLength);
+            // MINPACK lmder's region update (Moré 1978 §4), in χ² relative to the current χ²; an actual drop
+            // of −1 when χ² rises more than a hundredfold (the norm tenfold)
+            double actual = trialCost < MINPACK_RISE * cost ? 1 - trialCost / cost : -1;
+            double ratio = predicted > 0 ? actual / (predicted / cost) : 0;
+            if (ratio <= 0.25) {
+                double slope = -dot(gradient, step, np) / cost;
+                double shrink = actual < 0 ? 0.5 * slope / (slope + 0.5 * actual) : 0.5;
+                if (!(trialCost < MINPACK_RISE * cost) || !(shrink >= 0.1)) {
+                    shrink = 0.1;
+                }
+                radius = shrink * Math.min(radius, 10 * stepLength);
+                lambda /= shrink;
+            } else if (lambda == 0 || ratio >= 0.75) {
+                radius = 2 * stepLength;
+                lambda *= 0.5;
             }
             if (polishing ? trialCost <= lowest + rounding : trialCost < cost) {
                 System.arraycopy(trial, 0, x, 0, np);
@@ -278,47 +306,68 @@ final class LevenbergMarquardt {
     }
 
     /**
-     * λ for which the damped step's scaled length ‖Dδ(λ)‖ is within 10 % of {@code radius}, by Moré's
-     * safeguarded Newton iteration on φ(λ) = ‖Dδ‖ − Δ (Moré 1978 §5: λ ← λ + (φ/Δ)/‖L⁻¹D²δ/‖Dδ‖‖², inside
-     * the bracket [0, ‖D⁻¹g‖/Δ]); the step is left in {@link #step}. Called when the Gauss–Newton step is
-     * longer than the region or does not exist.
+     * λ for which the damped step's scaled length ‖Dδ(λ)‖ is within {@link #RADIUS_TOLERANCE} of {@code radius},
+     * by MINPACK's lmpar (Moré 1978 §5, as Hipparchus' LevenbergMarquardtOptimizer ports it): Newton's
+     * iteration on φ(λ) = ‖Dδ‖ − Δ, λ ← max(l, λ + (φ/Δ)/‖L⁻¹D²δ/‖Dδ‖‖²), inside the bracket [l, u] that
+     * starts at l = φ(0)/(Δ‖L⁻¹D²δ_GN/‖Dδ_GN‖‖²) (0 without a Gauss–Newton step) and u = ‖D⁻¹g‖/Δ, from the
+     * previous fit's λ held to the bracket. Called when the Gauss–Newton step ({@code newton}: in {@link #step},
+     * its factor in {@link #factor}) is longer than the region or does not exist; the step is left in
+     * {@link #step}.
      */
-    private double dampingForRadius(int np, double radius, double previous) {
+    private double dampingForRadius(int np, double radius, double previous, boolean newton) {
+        double length = newton ? scaledNorm(step, np) : Double.POSITIVE_INFINITY;
+        double phi = length - radius;
+        double low = 0;
+        if (newton) {
+            low = phi / (radius * newtonDenominator(np, length));
+        }
         double gradientNorm = 0;
         for (int a = 0; a < np; a++) {
             gradientNorm += sq(gradient[a] / scale[a]);
         }
-        double low = 0;
-        double high = Math.sqrt(gradientNorm) / radius;
-        double lambda = Math.max(low, Math.min(high, previous));
-        if (!(lambda > 0)) {
-            lambda = 1e-3 * high;
+        gradientNorm = Math.sqrt(gradientNorm);
+        double high = gradientNorm / radius;
+        if (high == 0) {
+            high = Double.MIN_NORMAL / Math.min(radius, 0.1);
         }
-        for (int k = 0; k < RADIUS_ITERATIONS; k++) {
+        double lambda = Math.min(high, Math.max(previous, low));
+        if (lambda == 0) {
+            lambda = newton ? gradientNorm / length : 0;
+        }
+        for (int k = 0; k <= RADIUS_ITERATIONS; k++) {
+            if (lambda == 0) {
+                lambda = Math.max(Double.MIN_NORMAL, 1e-3 * high);
+            }
             if (!dampedStep(np, lambda)) {
+                // JᵀJ + λD² too near singular for Cholesky: more damping
                 low = lambda;
-                lambda = Math.max(10 * lambda, Math.sqrt(low * high));
+                lambda *= 10;
                 continue;
             }
-            double length = scaledNorm(step, np);
-            double phi = length - radius;
-            if (Math.abs(phi) <= 0.1 * radius) {
+            length = scaledNorm(step, np);
+            double previousPhi = phi;
+            phi = length - radius;
+            if (Math.abs(phi) <= RADIUS_TOLERANCE * radius || low == 0 && phi <= previousPhi && previousPhi < 0) {
                 break;
             }
+            double correction = phi / (radius * newtonDenominator(np, length));
             if (phi > 0) {
                 low = Math.max(low, lambda);
-            } else {
+            } else if (phi < 0) {
                 high = Math.min(high, lambda);
             }
-            for (int a = 0; a < np; a++) {
-                column[a] = sq(scale[a]) * step[a] / length;
-            }
-            forwardSolve(factor, np, column);
-            double q = dot(column, column, np);
-            double next = lambda + (phi / radius) / q;
-            lambda = next > low && next < high ? next : Math.max(1e-3 * high, Math.sqrt(low * high));
+            lambda = Math.max(low, lambda + correction);
         }
         return lambda;
+    }
+
+    /** ‖L⁻¹D²δ/‖Dδ‖‖², L the Cholesky factor in {@link #factor} and δ the step in {@link #step} of scaled length {@code length}. */
+    private double newtonDenominator(int np, double length) {
+        for (int a = 0; a < np; a++) {
+            column[a] = sq(scale[a]) * step[a] / length;
+        }
+        forwardSolve(factor, np, column);
+        return dot(column, column, np);
     }
 
     /** Scratch rows for the prior's χ² and leverage after a fit (overwritten by the next fit). */
