@@ -1,106 +1,114 @@
 package dev.sweepline.ground.fit;
 
+import java.util.Arrays;
+
 /**
  * Weighted Levenberg–Marquardt minimisation of χ² for a {@link PlasmaModel}, allocation-free after its
  * workspaces have grown to the largest spectrum seen: one instance per thread, reused fit after fit.
  *
- * <p>Method: Marquardt's damped Gauss–Newton step (Marquardt 1963, SIAM J. Appl. Math. 11, 431) in the
- * trust-region form and with the diagonal scaling of Moré (1978, "The Levenberg–Marquardt algorithm:
- * implementation and theory", Lecture Notes in Mathematics 630, 105–116), the method of MINPACK's lmder:
- * with the whitened residuals r and Jacobian J of the model in the optimiser's parameters, each step solves
- * <pre>
- *   (JᵀJ + λ D²) δ = Jᵀr,   D_a = max over the iterations so far of ‖column a of J‖
- * </pre>
- * by Cholesky, λ = 0 (Gauss–Newton) when that step lies inside the region ‖Dδ‖ ≤ 1.1 Δ, otherwise the λ that
- * puts it on the region's edge (Moré §5, MINPACK's lmpar). A step that lowers χ² is taken. Δ is cut to the first step, and
- * then updated as MINPACK's lmder does (Moré §4, and Hipparchus' LevenbergMarquardtOptimizer, its port): when
- * the actual drop of χ² is under a quarter of the predicted one, Δ becomes γ·min(Δ, 10‖Dδ‖) and λ becomes
- * λ/γ, γ = ½ or, on a rise of χ², the minimum of the quadratic through χ² and its slope along the step,
- * ½ψ/(ψ + ½ρ_act), ψ = −gᵀδ/χ² and ρ_act = 1 − χ²_trial/χ², held to [0.1, ½]; when over three quarters or
- * at a Gauss–Newton step, Δ becomes 2‖Dδ‖ and λ is halved. The path matters, not only the minimum: a free
- * joint fit on a narrow band has two minima (the alphas faster and slower than the protons) and the
- * start lies between them. The fit has
- * converged when the Gauss–Newton decrement gᵀ(JᵀJ)⁻¹g, g = Jᵀr — the squared distance of the point from
- * the minimum of the local quadratic model in units of the parameters' 1σ — falls below
- * {@link #STEP_SIGMAS}², or when the distance it bounds is below {@link #RELATIVE_DISTANCE} of every
- * parameter. Within {@link #POLISH_DECREMENT} of the minimum the undamped steps are taken, kept unless they
- * raise χ² above its lowest value so far by more than its rounding (χ² can no longer tell them apart); a refused one, or one that does not
- * shrink the decrement (where the residuals' curvature stalls Gauss–Newton), hands back to the region. A
- * refused step whose predicted drop is below the rounding of χ² ends the fit: the minimum to rounding.
+ * <p>Method: MINPACK's lmder (Moré 1978, "The Levenberg–Marquardt algorithm: implementation and theory",
+ * Lecture Notes in Mathematics 630, 105–116; Moré, Garbow and Hillstrom 1980, "User guide for MINPACK-1",
+ * Argonne National Laboratory report ANL-80-74 [memory]), step for step as Hipparchus'
+ * LevenbergMarquardtOptimizer ports it, which the fit used before and whose results it keeps: with the
+ * whitened residuals r and Jacobian J of the model in the optimiser's parameters,
+ * <ul>
+ *   <li>each iteration factors J P = Q R by Householder reflections with column pivoting (MINPACK's qrfac) and
+ *       forms Qᵀr;</li>
+ *   <li>the step δ minimises ‖r − Jδ‖² + λ‖Dδ‖² (MINPACK's qrsolv, Givens rotations on R), D_a the largest
+ *       ‖column a of J‖ so far, λ = 0 (Gauss–Newton) when that step lies within 1.1 Δ, otherwise the λ that puts
+ *       ‖Dδ‖ within a tenth of Δ (MINPACK's lmpar, Moré §5: Newton's iteration on ‖Dδ(λ)‖ − Δ in a bracket,
+ *       at most 11 trials);</li>
+ *   <li>Δ starts at 100 ‖Dx₀‖, is cut to the first step, and is updated from ρ, the actual over the predicted
+ *       relative drop of χ² (Moré §4): ρ ≤ ¼ → Δ = γ min(Δ, 10‖Dδ‖), λ = λ/γ (γ = ½, or on a rise of χ² the
+ *       minimum of the quadratic along the step, held to [0.1, ½]); ρ ≥ ¾ or λ = 0 → Δ = 2‖Dδ‖, λ = λ/2; a
+ *       step is taken when ρ ≥ 1e-4, otherwise the next λ is tried on the same factorisation;</li>
+ *   <li>the fit has converged when the largest cosine between r and a column of J is at most
+ *       {@link #ORTHO_TOLERANCE}, when both the actual and the predicted relative drop of χ² are at most
+ *       {@link #COST_TOLERANCE} (and ρ ≤ 2), or when Δ ≤ {@link #PARAMETER_TOLERANCE} ‖Dx‖ (MINPACK's ftol,
+ *       xtol and gtol tests with Hipparchus' defaults); it fails when those drops, Δ or the cosine fall to
+ *       2ε (tolerances that can no longer be met), or after {@link LeastSquaresRun#MAX_ITERATIONS} iterations or
+ *       {@link LeastSquaresRun#MAX_EVALUATIONS} evaluations.</li>
+ * </ul>
+ * The same arithmetic in the same order as that port (weights √(1/σ²), sums in row order) gives the same
+ * point to the last bit on the fit tests, so the path — which decides between the two minima of a free joint
+ * fit on a narrow band, the alphas faster and slower than the protons, from a start between them — is the
+ * same too.
  *
  * <p>As {@code LeastSquaresRun} always did, the parameters inside are (ln n, U, ln w) per species, the speed
  * clamped to [{@link LeastSquaresRun#MIN_SPEED}, {@link LeastSquaresRun#MAX_SPEED}] and the logarithms to
- * [−50, 80] after every step; a joint fit may carry {@link AlphaPrior} rows, appended to the window rows as
+ * [−50, 80] at every evaluation; a joint fit may carry {@link AlphaPrior} rows, appended to the window rows as
  * whitened pseudo-observations (target 0, weight 1). The covariance is (JᵀJ)⁻¹ at the minimum, from the
  * same analytic Jacobian ({@link WindowCurrent}), by Cholesky of the diagonally equilibrated matrix, mapped
- * back to physical parameters; none when a pivot falls below {@link #SINGULAR_PIVOT} of its diagonal.
+ * back to physical parameters; none when the QR of the raw JᵀJ has a diagonal element at most
+ * {@link #COVARIANCE_THRESHOLD} (the singularity test of Hipparchus' getCovariances as the fit called it) or
+ * a Cholesky pivot falls below {@link #SINGULAR_PIVOT} of its diagonal.
  */
 final class LevenbergMarquardt {
     /** Largest number of parameters: the joint model. */
     static final int MAX_PARAMETERS = PlasmaModel.JOINT_PARAMETERS;
-    /**
-     * Converged when every parameter is within this relative distance of the minimum: a hundredth of the
-     * 1e-9 the fit's results are held to, since a slowly contracting Gauss–Newton sequence (large residual
-     * curvature) still moves by some multiple of its last step.
-     */
-    static final double RELATIVE_DISTANCE = 1e-11;
-    /** Converged when the point is within this many 1σ of the minimum (common practice: far below the noise). */
-    static final double STEP_SIGMAS = 1e-9;
-    /** A Cholesky pivot below this fraction of its diagonal counts as singular (Hipparchus' covariance threshold 1e-14). */
-    static final double SINGULAR_PIVOT = 1e-14;
-    /** First trust-region radius in units of ‖Dx₀‖ (MINPACK's step bound factor 100, Moré 1978 §6 [memory]). */
-    private static final double INITIAL_RADIUS = 100;
-    /** Radius, relative to ‖Dx‖, below which no step can change the point: the minimum to rounding. */
-    private static final double MIN_RADIUS = 1e-15;
-    /** Newton iterations for λ of a radius after the first: MINPACK's lmpar limit (Moré's iteration needs about two, Moré 1978 §5). */
-    private static final int RADIUS_ITERATIONS = 10;
-    /** A damped step within this fraction of the radius is on its edge; a Gauss–Newton step inside (1 + it) Δ is taken (MINPACK's lmpar 0.1). */
+    /** Relative drop of χ² (actual and predicted) that ends the fit: MINPACK's ftol, Hipparchus' default 1e-10. */
+    static final double COST_TOLERANCE = 1e-10;
+    /** Region radius relative to ‖Dx‖ that ends the fit: MINPACK's xtol, Hipparchus' default 1e-10. */
+    static final double PARAMETER_TOLERANCE = 1e-10;
+    /** Cosine between r and every column of J that ends the fit: MINPACK's gtol, Hipparchus' default 1e-10. */
+    static final double ORTHO_TOLERANCE = 1e-10;
+    /** First region radius in units of ‖Dx₀‖: MINPACK's factor, Hipparchus' default 100. */
+    static final double INITIAL_STEP_BOUND = 100;
+    /** Squared column norm under which QR counts a column as zero (Hipparchus' default, the smallest normal double). */
+    private static final double RANKING_THRESHOLD = Double.MIN_NORMAL;
+    /** A tolerance that can no longer be met: twice the double epsilon 2⁻⁵³ (MINPACK's epsmch tests). */
+    private static final double TWO_EPS = Math.ulp(1.0);
+    /** ρ at or above which a step is taken (MINPACK lmder). */
+    private static final double ACCEPT_RATIO = 1e-4;
+    /** A damped step within this fraction of the radius is on its edge (MINPACK lmpar). */
     private static final double RADIUS_TOLERANCE = 0.1;
-    /**
-     * Gauss–Newton decrement below which the undamped step is taken (the point within 1e-3 σ of the minimum,
-     * where the quadratic model is exact to far below that): χ² then changes by less than it can be
-     * resolved, so a step is kept unless it raises χ² beyond its rounding.
-     */
-    static final double POLISH_DECREMENT = 1e-6;
-    /** Relative rounding of χ², a sum of some hundred squares (common practice: a few hundred ε). */
-    private static final double ROUNDING = 1e-13;
-    /**
-     * Relative precision of a model current near its peak, where I/σ is large (ErrorFunction's erf and erfc
-     * within 1e-15, SPF-1): a window of current I and 1σ σ carries a rounding of its whitened residual of
-     * about this times I/σ, and χ² of 2|r| times that.
-     */
-    private static final double MODEL_PRECISION = 1e-15;
-    /** Rise of χ² beyond which MINPACK's region update takes the actual drop as −1 (its norm tenfold). */
-    private static final double MINPACK_RISE = 100;
+    /** Newton iterations for λ after the first trial (MINPACK lmpar: 10). */
+    private static final int RADIUS_ITERATIONS = 10;
+    /** A Cholesky pivot below this fraction of its diagonal counts as singular (common practice: some hundred ε). */
+    static final double SINGULAR_PIVOT = 1e-14;
+    /** |R_ii| of the QR of JᵀJ at or below which it counts as singular: the threshold the fit gave Hipparchus' getCovariances. */
+    static final double COVARIANCE_THRESHOLD = 1e-14;
     private static final double LOG_LOW = -50;
     private static final double LOG_HIGH = 80;
 
-    private double[] rows0 = new double[0];
-    private double[] rows1 = new double[0];
-    private double[][] jac0 = new double[0][];
-    private double[][] jac1 = new double[0][];
+    // per-row workspaces; Jacobians column-major, element (row i, column a) at [a * rows + i]
+    private double[] residual = new double[0];
+    private double[] trialResidual = new double[0];
+    private double[] jacobian = new double[0];
+    private double[] trialJacobian = new double[0];
+    /** The QR factors of −J: R above the diagonal, the Householder vectors (later qrsolv's S) below. */
+    private double[] qr = new double[0];
+    private double[] qtr = new double[0];
     private double[] current = new double[0];
     private double[][] physicalJacobian = new double[0][];
-    private double[] inverseSigma = new double[0];
+    private double[] weight = new double[0];
     private final double[] priorResidual = new double[AlphaPrior.ROWS];
     private final double[][] priorGradient = new double[AlphaPrior.ROWS][MAX_PARAMETERS];
+    // per-parameter workspaces
     private final double[] x = new double[MAX_PARAMETERS];
+    private final double[] oldX = new double[MAX_PARAMETERS];
     private final double[] trial = new double[MAX_PARAMETERS];
     private final double[] phys = new double[MAX_PARAMETERS];
-    private final double[] gradient = new double[MAX_PARAMETERS];
-    private final double[] scale = new double[MAX_PARAMETERS];
-    private final double[] step = new double[MAX_PARAMETERS];
+    private final double[] diag = new double[MAX_PARAMETERS];
+    private final int[] permutation = new int[MAX_PARAMETERS];
+    private final double[] diagR = new double[MAX_PARAMETERS];
+    private final double[] columnNorm = new double[MAX_PARAMETERS];
+    private final double[] beta = new double[MAX_PARAMETERS];
+    private final double[] direction = new double[MAX_PARAMETERS];
+    private final double[] work1 = new double[MAX_PARAMETERS];
+    private final double[] work2 = new double[MAX_PARAMETERS];
+    private final double[] work3 = new double[MAX_PARAMETERS];
     private final double[] normal = new double[MAX_PARAMETERS * MAX_PARAMETERS];
     private final double[] factor = new double[MAX_PARAMETERS * MAX_PARAMETERS];
     private final double[] inverse = new double[MAX_PARAMETERS * MAX_PARAMETERS];
     private final double[] column = new double[MAX_PARAMETERS];
 
-    /** The rounding of χ² of the last evaluation (see {@link #MODEL_PRECISION}). */
-    private double trialRounding;
-    private double[] residual;
-    private double[][] jacobian;
-    private double[] trialResidual;
-    private double[][] trialJacobian;
+    /** Rows of the current fit: the stride of the column-major Jacobians. */
+    private int rows;
+    /** Columns the current QR factorisation found independent. */
+    private int rank;
+    /** χ² of the last evaluation. */
+    private double evaluatedChiSquare;
 
     // the outcome of the last fit
     private final double[] parameters = new double[MAX_PARAMETERS];
@@ -135,126 +143,37 @@ final class LevenbergMarquardt {
         return chiSquare;
     }
 
-    /** Iterations (steps tried) of the last fit. */
+    /** Iterations (Jacobian factorisations) of the last fit. */
     int iterations() {
         return iterations;
     }
 
     /**
      * Fits {@code model} to {@code amps} (1σ {@code sigma}) from {@code startPhysical}, with {@code prior}
-     * rows (joint model only; null for none). False when the iterations run out or the point is not finite;
-     * the outcome is then undefined.
+     * rows (joint model only; null for none). False when the fit fails (see the class note) or the point is
+     * not finite; the outcome is then undefined.
      */
     boolean fit(PlasmaModel model, double[] amps, double[] sigma, double[] startPhysical, AlphaPrior prior) {
         int np = model.parameters();
         int m = model.windows();
-        int rows = m + (prior == null ? 0 : AlphaPrior.ROWS);
-        ensure(m, rows);
+        ensure(m, m + (prior == null ? 0 : AlphaPrior.ROWS));
+        rows = m + (prior == null ? 0 : AlphaPrior.ROWS);
         parameterCount = np;
         hasCovariance = false;
         for (int j = 0; j < m; j++) {
-            inverseSigma[j] = 1 / Math.max(sigma[j], LeastSquaresRun.MIN_SIGMA_AMPS);
+            double s = Math.max(sigma[j], LeastSquaresRun.MIN_SIGMA_AMPS);
+            weight[j] = Math.sqrt(1 / (s * s));
         }
         for (int a = 0; a < np; a++) {
             x[a] = isLog(a) ? Math.log(startPhysical[a]) : startPhysical[a];
         }
         clamp(x, np);
-        double cost = evaluate(model, amps, prior, x, np, m, residual, jacobian);
-        if (!Double.isFinite(cost)) {
+        evaluate(model, amps, prior, x, np, m, residual, jacobian);
+        double chi2 = evaluatedChiSquare;
+        if (!Double.isFinite(chi2)) {
             return false;
         }
-        double rounding = trialRounding;
-        double lowest = cost;
-        java.util.Arrays.fill(scale, 0.0);
-        double radius = -1;
-        double lambda = 0;
-        double lastDecrement = Double.POSITIVE_INFINITY;
-        boolean polishRefused = false;
-        int evaluations = 1;
-        for (iterations = 1; iterations <= LeastSquaresRun.MAX_ITERATIONS; iterations++) {
-            normalEquations(jacobian, residual, rows, np);
-            for (int a = 0; a < np; a++) {
-                scale[a] = Math.max(scale[a], Math.sqrt(normal[a * np + a]));
-                if (!(scale[a] > 0)) {
-                    scale[a] = 1;
-                }
-            }
-            if (radius < 0) {
-                double scaledX = scaledNorm(x, np);
-                radius = scaledX > 0 ? INITIAL_RADIUS * scaledX : INITIAL_RADIUS;
-            }
-            // the Gauss–Newton step and its decrement gᵀ(JᵀJ)⁻¹g: the χ² the full step would remove, the
-            // squared distance to the minimum in units of the parameters' 1σ
-            boolean newton = dampedStep(np, 0.0);
-            double decrement = newton ? dot(gradient, step, np) : Double.POSITIVE_INFINITY;
-            if (decrement <= STEP_SIGMAS * STEP_SIGMAS || decrement <= POLISH_DECREMENT && withinRelative(np, decrement)) {
-                break;
-            }
-            boolean polishing = decrement <= POLISH_DECREMENT && !polishRefused && decrement < lastDecrement;
-            // (Gauss–Newton steps that no longer shrink the decrement hand back to the region's steps)
-            lastDecrement = decrement;
-            lambda = polishing || newton && scaledNorm(step, np) <= (1 + RADIUS_TOLERANCE) * radius ? 0.0
-                    : dampingForRadius(np, radius, lambda, newton);
-            while (lambda > 0 && !dampedStep(np, lambda)) {
-                // JᵀJ + λD² too near singular for Cholesky: more damping, until λ overflows (then JᵀJ or Jᵀr
-                // is not finite, or the diagonal vanishes: no step and no fit)
-                lambda *= 10;
-                if (!Double.isFinite(lambda)) {
-                    return false;
-                }
-            }
-            double stepLength = scaledNorm(step, np);
-            if (iterations == 1) {
-                // MINPACK lmder: the first region is cut to the first step
-                radius = Math.min(radius, stepLength);
-            }
-            for (int a = 0; a < np; a++) {
-                trial[a] = x[a] + step[a];
-            }
-            clamp(trial, np);
-            if (evaluations++ >= LeastSquaresRun.MAX_EVALUATIONS) {
-                return false;
-            }
-            double trialCost = evaluate(model, amps, prior, trial, np, m, trialResidual, trialJacobian);
-            double predicted = 0;
-            for (int a = 0; a < np; a++) {
-                predicted += step[a] * (lambda * scale[a] * scale[a] * step[a] + gradient[a]);
-            }
-            // MINPACK lmder's region update (Moré 1978 §4), in χ² relative to the current χ²; an actual drop
-            // of −1 when χ² rises more than a hundredfold (the norm tenfold)
-            double actual = trialCost < MINPACK_RISE * cost ? 1 - trialCost / cost : -1;
-            double ratio = predicted > 0 ? actual / (predicted / cost) : 0;
-            if (ratio <= 0.25) {
-                double slope = -dot(gradient, step, np) / cost;
-                double shrink = actual < 0 ? 0.5 * slope / (slope + 0.5 * actual) : 0.5;
-                if (!(trialCost < MINPACK_RISE * cost) || !(shrink >= 0.1)) {
-                    shrink = 0.1;
-                }
-                radius = shrink * Math.min(radius, 10 * stepLength);
-                lambda /= shrink;
-            } else if (lambda == 0 || ratio >= 0.75) {
-                radius = 2 * stepLength;
-                lambda *= 0.5;
-            }
-            if (polishing ? trialCost <= lowest + rounding : trialCost < cost) {
-                System.arraycopy(trial, 0, x, 0, np);
-                swap();
-                cost = trialCost;
-                lowest = Math.min(lowest, cost);
-                rounding = trialRounding;
-                polishRefused = false;
-            } else if (polishing) {
-                // the undamped step overshoots (the model is not yet quadratic at this distance): damp again
-                polishRefused = true;
-                lastDecrement = Double.POSITIVE_INFINITY;
-            } else if (predicted <= rounding || !(radius > MIN_RADIUS * scaledNorm(x, np))) {
-                // no step lowers χ² by more than its rounding: the point is the minimum to rounding
-                break;
-            }
-        }
-        if (iterations > LeastSquaresRun.MAX_ITERATIONS && !(lastDecrement <= POLISH_DECREMENT)) {
-            // out of iterations farther than 1e-3 σ from the minimum: no fit (within it, where the residuals'
-            // curvature slows the last digits, the point is kept)
+        if (!minimise(model, amps, prior, np, m, Math.sqrt(chi2))) {
             return false;
         }
         for (int a = 0; a < np; a++) {
@@ -263,8 +182,7 @@ final class LevenbergMarquardt {
                 return false;
             }
         }
-        chiSquare = cost;
-        normalEquations(jacobian, residual, rows, np);
+        normalEquations(np);
         hasCovariance = invertNormal(np);
         if (hasCovariance) {
             for (int a = 0; a < np; a++) {
@@ -279,81 +197,362 @@ final class LevenbergMarquardt {
     }
 
     /**
-     * True when every parameter lies within {@link #RELATIVE_DISTANCE} of the minimum: |x_a − x̂_a| ≤
-     * √(C_aa · decrement) (Cauchy–Schwarz in the metric JᵀJ, C its inverse), relative for U and absolute
-     * for the logarithms (a relative distance of n and w). {@link #factor} holds the Cholesky factor of JᵀJ.
+     * MINPACK lmder's iterations from {@link #x} of norm ‖r‖ = {@code norm} (see the class note), leaving the
+     * minimum in {@link #x}, its rows in {@link #residual} and {@link #jacobian} and its χ² in {@link #chiSquare};
+     * false when the fit fails.
      */
-    private boolean withinRelative(int np, double decrement) {
-        for (int a = 0; a < np; a++) {
-            java.util.Arrays.fill(column, 0, np, 0.0);
-            column[a] = 1;
-            solve(factor, np, column);
-            double scaleA = isLog(a) ? 1 : Math.abs(x[a]);
-            if (!(column[a] * decrement <= sq(RELATIVE_DISTANCE * scaleA))) {
+    private boolean minimise(PlasmaModel model, double[] amps, AlphaPrior prior, int np, int m, double norm) {
+        int solved = Math.min(rows, np);
+        int evaluations = 1;
+        double cost = norm;
+        chiSquare = evaluatedChiSquare;
+        double radius = 0;
+        double xNorm = 0;
+        double lambda = 0;
+        boolean first = true;
+        for (iterations = 0; ; ) {
+            if (iterations >= LeastSquaresRun.MAX_ITERATIONS) {
                 return false;
+            }
+            iterations++;
+            for (int i = 0; i < np * rows; i++) {
+                qr[i] = -jacobian[i];
+            }
+            if (!factorise(np)) {
+                return false;
+            }
+            System.arraycopy(residual, 0, qtr, 0, rows);
+            applyQTransposed(np);
+            for (int k = 0; k < solved; k++) {
+                int pk = permutation[k];
+                qr[pk * rows + k] = diagR[pk];
+            }
+            if (first) {
+                xNorm = 0;
+                for (int a = 0; a < np; a++) {
+                    double d = columnNorm[a] == 0 ? 1.0 : columnNorm[a];
+                    double xa = d * x[a];
+                    xNorm += xa * xa;
+                    diag[a] = d;
+                }
+                xNorm = Math.sqrt(xNorm);
+                radius = xNorm == 0 ? INITIAL_STEP_BOUND : INITIAL_STEP_BOUND * xNorm;
+            }
+            // the largest cosine between r and a column of J: zero at a stationary point
+            double maxCosine = 0;
+            if (cost != 0) {
+                for (int j = 0; j < solved; j++) {
+                    int pj = permutation[j];
+                    double s = columnNorm[pj];
+                    if (s != 0) {
+                        double sum = 0;
+                        for (int i = 0; i <= j; i++) {
+                            sum += qr[pj * rows + i] * qtr[i];
+                        }
+                        maxCosine = Math.max(maxCosine, Math.abs(sum) / (s * cost));
+                    }
+                }
+            }
+            if (maxCosine <= ORTHO_TOLERANCE) {
+                return true;
+            }
+            for (int a = 0; a < np; a++) {
+                diag[a] = Math.max(diag[a], columnNorm[a]);
+            }
+            for (double ratio = 0; ratio < ACCEPT_RATIO; ) {
+                for (int j = 0; j < solved; j++) {
+                    oldX[permutation[j]] = x[permutation[j]];
+                }
+                double previousCost = cost;
+                lambda = dampingForRadius(np, radius, lambda);
+                double stepNorm = 0;
+                for (int j = 0; j < solved; j++) {
+                    int pj = permutation[j];
+                    direction[pj] = -direction[pj];
+                    trial[pj] = oldX[pj] + direction[pj];
+                    double s = diag[pj] * direction[pj];
+                    stepNorm += s * s;
+                }
+                stepNorm = Math.sqrt(stepNorm);
+                if (first) {
+                    radius = Math.min(radius, stepNorm);
+                }
+                if (evaluations >= LeastSquaresRun.MAX_EVALUATIONS) {
+                    return false;
+                }
+                evaluations++;
+                clamp(trial, np);
+                evaluate(model, amps, prior, trial, np, m, trialResidual, trialJacobian);
+                double trialChiSquare = evaluatedChiSquare;
+                double trialCost = Math.sqrt(trialChiSquare);
+                // actual and predicted drops of χ² relative to χ², and the directional derivative
+                double actual = -1.0;
+                if (0.1 * trialCost < previousCost) {
+                    double r = trialCost / previousCost;
+                    actual = 1.0 - r * r;
+                }
+                for (int j = 0; j < solved; j++) {
+                    int pj = permutation[j];
+                    double dj = direction[pj];
+                    work1[j] = 0;
+                    for (int i = 0; i <= j; i++) {
+                        work1[i] += qr[pj * rows + i] * dj;
+                    }
+                }
+                double coefficient1 = 0;
+                for (int j = 0; j < solved; j++) {
+                    coefficient1 += work1[j] * work1[j];
+                }
+                double previousSquare = previousCost * previousCost;
+                coefficient1 /= previousSquare;
+                double coefficient2 = lambda * stepNorm * stepNorm / previousSquare;
+                double predicted = coefficient1 + 2 * coefficient2;
+                double slope = -(coefficient1 + coefficient2);
+                ratio = predicted == 0 ? 0 : actual / predicted;
+                if (ratio <= 0.25) {
+                    double shrink = actual < 0 ? 0.5 * slope / (slope + 0.5 * actual) : 0.5;
+                    if (0.1 * trialCost >= previousCost || shrink < 0.1) {
+                        shrink = 0.1;
+                    }
+                    radius = shrink * Math.min(radius, 10.0 * stepNorm);
+                    lambda /= shrink;
+                } else if (lambda == 0 || ratio >= 0.75) {
+                    radius = 2 * stepNorm;
+                    lambda *= 0.5;
+                }
+                if (ratio >= ACCEPT_RATIO) {
+                    first = false;
+                    System.arraycopy(trial, 0, x, 0, np);
+                    swap();
+                    cost = trialCost;
+                    chiSquare = trialChiSquare;
+                    xNorm = 0;
+                    for (int a = 0; a < np; a++) {
+                        double xa = diag[a] * x[a];
+                        xNorm += xa * xa;
+                    }
+                    xNorm = Math.sqrt(xNorm);
+                } else {
+                    cost = previousCost;
+                    for (int j = 0; j < solved; j++) {
+                        x[permutation[j]] = oldX[permutation[j]];
+                    }
+                }
+                if (Math.abs(actual) <= COST_TOLERANCE && predicted <= COST_TOLERANCE && ratio <= 2.0
+                        || radius <= PARAMETER_TOLERANCE * xNorm) {
+                    return true;
+                }
+                if (Math.abs(actual) <= TWO_EPS && predicted <= TWO_EPS && ratio <= 2.0
+                        || radius <= TWO_EPS * xNorm || maxCosine <= TWO_EPS) {
+                    // the tolerances can no longer be met in double precision: no fit, as Hipparchus
+                    return false;
+                }
+            }
+        }
+    }
+
+    /**
+     * Householder QR with column pivoting of {@link #qr} (−J; MINPACK qrfac): the reflections' vectors in and
+     * below the diagonal, R above it, R's diagonal in {@link #diagR}, the reflections' factors in {@link #beta},
+     * the columns' norms before it in {@link #columnNorm}, the order in {@link #permutation} and the rank in
+     * {@link #rank}; false when a column norm is not finite.
+     */
+    private boolean factorise(int np) {
+        Arrays.fill(diagR, 0, np, 0.0);
+        Arrays.fill(beta, 0, np, 0.0);
+        for (int k = 0; k < np; k++) {
+            permutation[k] = k;
+            double norm2 = 0;
+            for (int i = 0; i < rows; i++) {
+                double v = qr[k * rows + i];
+                norm2 += v * v;
+            }
+            columnNorm[k] = Math.sqrt(norm2);
+        }
+        rank = Math.min(rows, np);
+        for (int k = 0; k < np; k++) {
+            // the column of the largest norm below row k next
+            int next = -1;
+            double ak2 = Double.NEGATIVE_INFINITY;
+            for (int i = k; i < np; i++) {
+                int base = permutation[i] * rows;
+                double norm2 = 0;
+                for (int j = k; j < rows; j++) {
+                    double v = qr[base + j];
+                    norm2 += v * v;
+                }
+                if (Double.isInfinite(norm2) || Double.isNaN(norm2)) {
+                    return false;
+                }
+                if (norm2 > ak2) {
+                    next = i;
+                    ak2 = norm2;
+                }
+            }
+            if (ak2 <= RANKING_THRESHOLD) {
+                rank = k;
+                return true;
+            }
+            int pk = permutation[next];
+            permutation[next] = permutation[k];
+            permutation[k] = pk;
+            int kBase = pk * rows;
+            double akk = qr[kBase + k];
+            double alpha = akk > 0 ? -Math.sqrt(ak2) : Math.sqrt(ak2);
+            double betak = 1.0 / (ak2 - akk * alpha);
+            beta[pk] = betak;
+            diagR[pk] = alpha;
+            qr[kBase + k] -= alpha;
+            for (int dk = np - 1 - k; dk > 0; dk--) {
+                int cBase = permutation[k + dk] * rows;
+                double gamma = 0;
+                for (int j = k; j < rows; j++) {
+                    gamma += qr[kBase + j] * qr[cBase + j];
+                }
+                gamma *= betak;
+                for (int j = k; j < rows; j++) {
+                    qr[cBase + j] -= gamma * qr[kBase + j];
+                }
             }
         }
         return true;
     }
 
-    /** ‖D v‖. */
-    private double scaledNorm(double[] v, int np) {
-        double s = 0;
-        for (int a = 0; a < np; a++) {
-            s += sq(scale[a] * v[a]);
+    /** {@link #qtr} ← Qᵀ {@link #qtr}, Q of {@link #factorise}. */
+    private void applyQTransposed(int np) {
+        for (int k = 0; k < np; k++) {
+            int pk = permutation[k];
+            int base = pk * rows;
+            double gamma = 0;
+            for (int i = k; i < rows; i++) {
+                gamma += qr[base + i] * qtr[i];
+            }
+            gamma *= beta[pk];
+            for (int i = k; i < rows; i++) {
+                qtr[i] -= gamma * qr[base + i];
+            }
         }
-        return Math.sqrt(s);
     }
 
     /**
-     * λ for which the damped step's scaled length ‖Dδ(λ)‖ is within {@link #RADIUS_TOLERANCE} of {@code radius},
-     * by MINPACK's lmpar (Moré 1978 §5, as Hipparchus' LevenbergMarquardtOptimizer ports it): Newton's
-     * iteration on φ(λ) = ‖Dδ‖ − Δ, λ ← max(l, λ + (φ/Δ)/‖L⁻¹D²δ/‖Dδ‖‖²), inside the bracket [l, u] that
-     * starts at l = φ(0)/(Δ‖L⁻¹D²δ_GN/‖Dδ_GN‖‖²) (0 without a Gauss–Newton step) and u = ‖D⁻¹g‖/Δ, from the
-     * previous fit's λ held to the bracket. Called when the Gauss–Newton step ({@code newton}: in {@link #step},
-     * its factor in {@link #factor}) is longer than the region or does not exist; the step is left in
-     * {@link #step}.
+     * λ whose step (left in {@link #direction}, with the sign of −δ) has ‖Dδ‖ within a tenth of {@code radius},
+     * or 0 when the Gauss–Newton step is within 1.1 × {@code radius}: MINPACK's lmpar (Moré 1978 §5) — Newton's
+     * iteration on ‖Dδ(λ)‖ − Δ inside a bracket whose lower end comes from the Gauss–Newton step (0 when J is
+     * rank-deficient) and whose upper end is ‖D⁻¹Jᵀr‖/Δ, from the previous λ held to it.
      */
-    private double dampingForRadius(int np, double radius, double previous, boolean newton) {
-        double length = newton ? scaledNorm(step, np) : Double.POSITIVE_INFINITY;
-        double phi = length - radius;
+    private double dampingForRadius(int np, double radius, double previous) {
+        int solved = Math.min(rows, np);
+        // the Gauss–Newton direction; a least-squares one when J is rank-deficient
+        for (int j = 0; j < rank; j++) {
+            direction[permutation[j]] = qtr[j];
+        }
+        for (int j = rank; j < np; j++) {
+            direction[permutation[j]] = 0;
+        }
+        for (int k = rank - 1; k >= 0; k--) {
+            int pk = permutation[k];
+            double ypk = direction[pk] / diagR[pk];
+            for (int i = 0; i < k; i++) {
+                direction[permutation[i]] -= ypk * qr[pk * rows + i];
+            }
+            direction[pk] = ypk;
+        }
+        double dxNorm = 0;
+        for (int j = 0; j < solved; j++) {
+            int pj = permutation[j];
+            double s = diag[pj] * direction[pj];
+            work1[pj] = s;
+            dxNorm += s * s;
+        }
+        dxNorm = Math.sqrt(dxNorm);
+        double fp = dxNorm - radius;
+        if (fp <= RADIUS_TOLERANCE * radius) {
+            return 0;
+        }
+        double sum2;
         double low = 0;
-        if (newton) {
-            low = phi / (radius * newtonDenominator(np, length));
+        if (rank == solved) {
+            for (int j = 0; j < solved; j++) {
+                int pj = permutation[j];
+                work1[pj] *= diag[pj] / dxNorm;
+            }
+            sum2 = 0;
+            for (int j = 0; j < solved; j++) {
+                int pj = permutation[j];
+                double sum = 0;
+                for (int i = 0; i < j; i++) {
+                    sum += qr[pj * rows + i] * work1[permutation[i]];
+                }
+                double s = (work1[pj] - sum) / diagR[pj];
+                work1[pj] = s;
+                sum2 += s * s;
+            }
+            low = fp / (radius * sum2);
         }
-        double gradientNorm = 0;
-        for (int a = 0; a < np; a++) {
-            gradientNorm += sq(gradient[a] / scale[a]);
+        sum2 = 0;
+        for (int j = 0; j < solved; j++) {
+            int pj = permutation[j];
+            double sum = 0;
+            for (int i = 0; i <= j; i++) {
+                sum += qr[pj * rows + i] * qtr[i];
+            }
+            sum /= diag[pj];
+            sum2 += sum * sum;
         }
-        gradientNorm = Math.sqrt(gradientNorm);
+        double gradientNorm = Math.sqrt(sum2);
         double high = gradientNorm / radius;
         if (high == 0) {
             high = Double.MIN_NORMAL / Math.min(radius, 0.1);
         }
         double lambda = Math.min(high, Math.max(previous, low));
         if (lambda == 0) {
-            lambda = newton ? gradientNorm / length : 0;
+            lambda = gradientNorm / dxNorm;
         }
-        for (int k = 0; k <= RADIUS_ITERATIONS; k++) {
+        for (int countdown = RADIUS_ITERATIONS; countdown >= 0; countdown--) {
             if (lambda == 0) {
-                lambda = Math.max(Double.MIN_NORMAL, 1e-3 * high);
+                lambda = Math.max(Double.MIN_NORMAL, 0.001 * high);
             }
-            if (!dampedStep(np, lambda)) {
-                // JᵀJ + λD² too near singular for Cholesky: more damping
-                low = lambda;
-                lambda *= 10;
-                continue;
+            double root = Math.sqrt(lambda);
+            for (int j = 0; j < solved; j++) {
+                int pj = permutation[j];
+                work1[pj] = root * diag[pj];
             }
-            length = scaledNorm(step, np);
-            double previousPhi = phi;
-            phi = length - radius;
-            if (Math.abs(phi) <= RADIUS_TOLERANCE * radius || low == 0 && phi <= previousPhi && previousPhi < 0) {
-                break;
+            dampedDirection(np, solved);
+            dxNorm = 0;
+            for (int j = 0; j < solved; j++) {
+                int pj = permutation[j];
+                double s = diag[pj] * direction[pj];
+                work3[pj] = s;
+                dxNorm += s * s;
             }
-            double correction = phi / (radius * newtonDenominator(np, length));
-            if (phi > 0) {
+            dxNorm = Math.sqrt(dxNorm);
+            double previousFp = fp;
+            fp = dxNorm - radius;
+            if (Math.abs(fp) <= RADIUS_TOLERANCE * radius || low == 0 && fp <= previousFp && previousFp < 0) {
+                return lambda;
+            }
+            // Newton's correction
+            for (int j = 0; j < solved; j++) {
+                int pj = permutation[j];
+                work1[pj] = work3[pj] * diag[pj] / dxNorm;
+            }
+            for (int j = 0; j < solved; j++) {
+                int pj = permutation[j];
+                work1[pj] /= work2[j];
+                double tmp = work1[pj];
+                for (int i = j + 1; i < solved; i++) {
+                    work1[permutation[i]] -= qr[pj * rows + i] * tmp;
+                }
+            }
+            sum2 = 0;
+            for (int j = 0; j < solved; j++) {
+                double s = work1[permutation[j]];
+                sum2 += s * s;
+            }
+            double correction = fp / (radius * sum2);
+            if (fp > 0) {
                 low = Math.max(low, lambda);
-            } else if (phi < 0) {
+            } else if (fp < 0) {
                 high = Math.min(high, lambda);
             }
             lambda = Math.max(low, lambda + correction);
@@ -361,13 +560,80 @@ final class LevenbergMarquardt {
         return lambda;
     }
 
-    /** ‖L⁻¹D²δ/‖Dδ‖‖², L the Cholesky factor in {@link #factor} and δ the step in {@link #step} of scaled length {@code length}. */
-    private double newtonDenominator(int np, double length) {
-        for (int a = 0; a < np; a++) {
-            column[a] = sq(scale[a]) * step[a] / length;
+    /**
+     * The damped direction for the scaling √λ D in {@link #work1}: the least-squares solution of R z = Qᵀr,
+     * √λ D z = 0 by Givens rotations (MINPACK qrsolv), into {@link #direction}; the rotated triangle S below
+     * R's diagonal in {@link #qr} and its diagonal in {@link #work2}, {@link #work3} scratch.
+     */
+    private void dampedDirection(int np, int solved) {
+        double[] sDiagonal = work2;
+        double[] z = work3;
+        for (int j = 0; j < solved; j++) {
+            int pj = permutation[j];
+            for (int i = j + 1; i < solved; i++) {
+                qr[pj * rows + i] = qr[permutation[i] * rows + j];
+            }
+            direction[j] = diagR[pj];
+            z[j] = qtr[j];
         }
-        forwardSolve(factor, np, column);
-        return dot(column, column, np);
+        for (int j = 0; j < solved; j++) {
+            int pj = permutation[j];
+            double dpj = work1[pj];
+            if (dpj != 0) {
+                Arrays.fill(sDiagonal, j + 1, np, 0);
+            }
+            sDiagonal[j] = dpj;
+            double qtbpj = 0;
+            for (int k = j; k < solved; k++) {
+                int pk = permutation[k];
+                if (sDiagonal[k] != 0) {
+                    double sin;
+                    double cos;
+                    double rkk = qr[pk * rows + k];
+                    if (Math.abs(rkk) < Math.abs(sDiagonal[k])) {
+                        double cotan = rkk / sDiagonal[k];
+                        sin = 1.0 / Math.sqrt(1.0 + cotan * cotan);
+                        cos = sin * cotan;
+                    } else {
+                        double tan = sDiagonal[k] / rkk;
+                        cos = 1.0 / Math.sqrt(1.0 + tan * tan);
+                        sin = cos * tan;
+                    }
+                    qr[pk * rows + k] = cos * rkk + sin * sDiagonal[k];
+                    double temp = cos * z[k] + sin * qtbpj;
+                    qtbpj = -sin * z[k] + cos * qtbpj;
+                    z[k] = temp;
+                    for (int i = k + 1; i < solved; i++) {
+                        double rik = qr[pk * rows + i];
+                        double temp2 = cos * rik + sin * sDiagonal[i];
+                        sDiagonal[i] = -sin * rik + cos * sDiagonal[i];
+                        qr[pk * rows + i] = temp2;
+                    }
+                }
+            }
+            sDiagonal[j] = qr[permutation[j] * rows + j];
+            qr[permutation[j] * rows + j] = direction[j];
+        }
+        int singular = solved;
+        for (int j = 0; j < solved; j++) {
+            if (sDiagonal[j] == 0 && singular == solved) {
+                singular = j;
+            }
+            if (singular < solved) {
+                z[j] = 0;
+            }
+        }
+        for (int j = singular - 1; j >= 0; j--) {
+            int pj = permutation[j];
+            double sum = 0;
+            for (int i = j + 1; i < singular; i++) {
+                sum += qr[pj * rows + i] * z[i];
+            }
+            z[j] = (z[j] - sum) / sDiagonal[j];
+        }
+        for (int j = 0; j < np; j++) {
+            direction[permutation[j]] = z[j];
+        }
     }
 
     /** Scratch rows for the prior's χ² and leverage after a fit (overwritten by the next fit). */
@@ -384,18 +650,6 @@ final class LevenbergMarquardt {
         return a % 3 != 1;
     }
 
-    private static double sq(double v) {
-        return v * v;
-    }
-
-    private static double dot(double[] u, double[] v, int n) {
-        double s = 0;
-        for (int a = 0; a < n; a++) {
-            s += u[a] * v[a];
-        }
-        return s;
-    }
-
     private static void clamp(double[] p, int np) {
         for (int a = 0; a < np; a++) {
             p[a] = isLog(a) ? Math.max(LOG_LOW, Math.min(LOG_HIGH, p[a]))
@@ -407,94 +661,103 @@ final class LevenbergMarquardt {
         double[] r = residual;
         residual = trialResidual;
         trialResidual = r;
-        double[][] j = jacobian;
+        double[] j = jacobian;
         jacobian = trialJacobian;
         trialJacobian = j;
     }
 
-    /** Whitened residuals and Jacobian at {@code at} (optimiser parameters) into {@code r}, {@code jj}; χ². */
-    private double evaluate(PlasmaModel model, double[] amps, AlphaPrior prior, double[] at, int np, int m,
-            double[] r, double[][] jj) {
+    /**
+     * Whitened residuals (data − model) and Jacobian of the model at {@code at} (optimiser parameters) into
+     * {@code r} and {@code jj} (column-major); χ² into {@link #evaluatedChiSquare}.
+     */
+    private void evaluate(PlasmaModel model, double[] amps, AlphaPrior prior, double[] at, int np, int m,
+            double[] r, double[] jj) {
         for (int a = 0; a < np; a++) {
             phys[a] = isLog(a) ? Math.exp(at[a]) : at[a];
         }
         model.evaluate(phys, current, physicalJacobian);
         double cost = 0;
-        double rounding = 0;
         for (int j = 0; j < m; j++) {
-            double w = inverseSigma[j];
-            double rj = (amps[j] - current[j]) * w;
+            double w = weight[j];
+            double rj = w * (amps[j] - current[j]);
             r[j] = rj;
             cost += rj * rj;
-            rounding += Math.abs(rj) * Math.abs(current[j]) * w;
             double[] pj = physicalJacobian[j];
-            double[] out = jj[j];
             for (int a = 0; a < np; a++) {
-                out[a] = (isLog(a) ? pj[a] * phys[a] : pj[a]) * w;
+                jj[a * rows + j] = w * (isLog(a) ? pj[a] * phys[a] : pj[a]);
             }
         }
         if (prior != null) {
             prior.rows(phys, priorResidual, priorGradient);
             for (int i = 0; i < AlphaPrior.ROWS; i++) {
-                double ri = -priorResidual[i];
+                double ri = 0 - priorResidual[i];
                 r[m + i] = ri;
                 cost += ri * ri;
-                double[] out = jj[m + i];
                 for (int a = 0; a < np; a++) {
-                    out[a] = isLog(a) ? priorGradient[i][a] * phys[a] : priorGradient[i][a];
+                    jj[a * rows + m + i] = isLog(a) ? priorGradient[i][a] * phys[a] : priorGradient[i][a];
                 }
             }
         }
-        trialRounding = 2 * MODEL_PRECISION * rounding + ROUNDING * cost;
-        return cost;
+        evaluatedChiSquare = cost;
     }
 
-    /** JᵀJ into {@link #normal} and Jᵀr into {@link #gradient}. */
-    private void normalEquations(double[][] jj, double[] r, int rows, int np) {
-        java.util.Arrays.fill(normal, 0, np * np, 0.0);
-        java.util.Arrays.fill(gradient, 0, np, 0.0);
-        for (int j = 0; j < rows; j++) {
-            double[] row = jj[j];
-            double rj = r[j];
-            for (int a = 0; a < np; a++) {
-                double ja = row[a];
-                gradient[a] += ja * rj;
-                int base = a * np;
-                for (int b = 0; b <= a; b++) {
-                    normal[base + b] += ja * row[b];
-                }
-            }
-        }
+    /** JᵀJ of {@link #jacobian} into {@link #normal}. */
+    private void normalEquations(int np) {
         for (int a = 0; a < np; a++) {
-            for (int b = 0; b < a; b++) {
-                normal[b * np + a] = normal[a * np + b];
+            for (int b = 0; b <= a; b++) {
+                double s = 0;
+                int ia = a * rows;
+                int ib = b * rows;
+                for (int j = 0; j < rows; j++) {
+                    s += jacobian[ia + j] * jacobian[ib + j];
+                }
+                normal[a * np + b] = s;
+                normal[b * np + a] = s;
             }
         }
     }
 
-    /** δ of (JᵀJ + λD²) δ = Jᵀr into {@link #step}; false when the matrix is not positive definite. */
-    private boolean dampedStep(int np, double lambda) {
-        for (int a = 0; a < np; a++) {
-            for (int b = 0; b < np; b++) {
-                factor[a * np + b] = normal[a * np + b];
+    /**
+     * True when JᵀJ in {@link #normal} is singular as the fit judged it before its own optimiser: a diagonal
+     * element of the R of its Householder QR (unpivoted, of the raw matrix) at most {@link #COVARIANCE_THRESHOLD}
+     * in magnitude (Hipparchus' QRDecomposition with that threshold, as its getCovariances was called).
+     */
+    private boolean singularByQr(int np) {
+        System.arraycopy(normal, 0, factor, 0, np * np); // symmetric: its rows are its columns
+        for (int minor = 0; minor < np; minor++) {
+            int base = minor * np;
+            double norm2 = 0;
+            for (int row = minor; row < np; row++) {
+                norm2 += factor[base + row] * factor[base + row];
             }
-            factor[a * np + a] += lambda * sq(scale[a]);
+            double a = factor[base + minor] > 0 ? -Math.sqrt(norm2) : Math.sqrt(norm2);
+            if (Math.abs(a) <= COVARIANCE_THRESHOLD) {
+                return true;
+            }
+            factor[base + minor] -= a;
+            for (int col = minor + 1; col < np; col++) {
+                int c = col * np;
+                double alpha = 0;
+                for (int row = minor; row < np; row++) {
+                    alpha -= factor[c + row] * factor[base + row];
+                }
+                alpha /= a * factor[base + minor];
+                for (int row = minor; row < np; row++) {
+                    factor[c + row] -= alpha * factor[base + row];
+                }
+            }
         }
-        if (!cholesky(factor, np)) {
+        return false;
+    }
+
+    /**
+     * (JᵀJ)⁻¹ into {@link #inverse}, by Cholesky of JᵀJ equilibrated by its diagonal; false when singular
+     * ({@link #singularByQr}, or a pivot below {@link #SINGULAR_PIVOT}).
+     */
+    private boolean invertNormal(int np) {
+        if (singularByQr(np)) {
             return false;
         }
-        System.arraycopy(gradient, 0, step, 0, np);
-        solve(factor, np, step);
-        for (int a = 0; a < np; a++) {
-            if (!Double.isFinite(step[a])) {
-                return false;
-            }
-        }
-        return true;
-    }
-
-    /** (JᵀJ)⁻¹ into {@link #inverse}, equilibrated by its diagonal; false when singular. */
-    private boolean invertNormal(int np) {
         for (int a = 0; a < np; a++) {
             double d = normal[a * np + a];
             if (!(d > 0) || !Double.isFinite(d)) {
@@ -511,11 +774,11 @@ final class LevenbergMarquardt {
             return false;
         }
         for (int b = 0; b < np; b++) {
-            java.util.Arrays.fill(step, 0, np, 0.0);
-            step[b] = 1;
-            solve(factor, np, step);
+            Arrays.fill(work1, 0, np, 0.0);
+            work1[b] = 1;
+            solve(factor, np, work1);
             for (int a = 0; a < np; a++) {
-                inverse[a * np + b] = step[a] * column[a] * column[b];
+                inverse[a * np + b] = work1[a] * column[a] * column[b];
             }
         }
         return true;
@@ -544,8 +807,8 @@ final class LevenbergMarquardt {
         return true;
     }
 
-    /** Solves L y = b in place. */
-    private static void forwardSolve(double[] l, int n, double[] b) {
+    /** Solves L Lᵀ y = b in place. */
+    private static void solve(double[] l, int n, double[] b) {
         for (int i = 0; i < n; i++) {
             double s = b[i];
             for (int k = 0; k < i; k++) {
@@ -553,11 +816,6 @@ final class LevenbergMarquardt {
             }
             b[i] = s / l[i * n + i];
         }
-    }
-
-    /** Solves L Lᵀ y = b in place. */
-    private static void solve(double[] l, int n, double[] b) {
-        forwardSolve(l, n, b);
         for (int i = n - 1; i >= 0; i--) {
             double s = b[i];
             for (int k = i + 1; k < n; k++) {
@@ -567,23 +825,21 @@ final class LevenbergMarquardt {
         }
     }
 
-    /** Grows the workspaces to {@code windows} model rows and {@code rows} rows in all. */
-    private void ensure(int windows, int rows) {
-        if (rows0.length < rows) {
-            int n = Math.max(rows, 2 * rows0.length);
-            rows0 = new double[n];
-            rows1 = new double[n];
-            jac0 = new double[n][MAX_PARAMETERS];
-            jac1 = new double[n][MAX_PARAMETERS];
-            residual = rows0;
-            trialResidual = rows1;
-            jacobian = jac0;
-            trialJacobian = jac1;
+    /** Grows the workspaces to {@code windows} model rows and {@code allRows} rows in all. */
+    private void ensure(int windows, int allRows) {
+        if (residual.length < allRows) {
+            int n = Math.max(allRows, 2 * residual.length);
+            residual = new double[n];
+            trialResidual = new double[n];
+            qtr = new double[n];
+            jacobian = new double[n * MAX_PARAMETERS];
+            trialJacobian = new double[n * MAX_PARAMETERS];
+            qr = new double[n * MAX_PARAMETERS];
         }
         if (current.length < windows) {
             int n = Math.max(windows, 2 * current.length);
             current = new double[n];
-            inverseSigma = new double[n];
+            weight = new double[n];
             physicalJacobian = new double[n][MAX_PARAMETERS];
         }
     }

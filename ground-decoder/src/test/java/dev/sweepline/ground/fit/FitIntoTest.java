@@ -66,11 +66,13 @@ class FitIntoTest {
             double[] sigma = {c.protons().sigmaDensityPerM3(), c.protons().sigmaSpeedMPerS(),
                 c.protons().sigmaThermalSpeedMPerS()};
             for (int i = 0; i < PlasmaModel.PROTON_PARAMETERS; i++) {
-                // both runs stop within RELATIVE_DISTANCE of |p| or STEP_SIGMAS σ of the one minimum
-                // (LevenbergMarquardt's stopping rule), so they differ by at most twice the larger
+                // MINPACK's ftol test (LevenbergMarquardt.COST_TOLERANCE) ends a run once a Gauss–Newton step
+                // predicts a relative drop of χ² under it: the step's χ² drop, the decrement d = δᵀJᵀJδ, is then
+                // below COST_TOLERANCE χ², and the point within √(C_aa d) ≤ σ_a √(COST_TOLERANCE χ²) of the
+                // minimum (Cauchy–Schwarz in the metric JᵀJ); the two runs differ by at most twice that
                 double p = cold.normalParameter(i);
-                double tolerance = 2 * Math.max(LevenbergMarquardt.RELATIVE_DISTANCE * Math.abs(p),
-                        LevenbergMarquardt.STEP_SIGMAS * sigma[i]);
+                double tolerance = 2 * sigma[i] * Math.sqrt(LevenbergMarquardt.COST_TOLERANCE
+                        * c.reducedChiSquare() * (ReferenceCase.WINDOWS - PlasmaModel.PROTON_PARAMETERS));
                 assertEquals(p, warm.normalParameter(i), tolerance, "spectrum " + k + " parameter " + i);
             }
             coldIterations += cold.iterations();
