@@ -43,7 +43,12 @@ import org.openjdk.jmh.annotations.Warmup;
  * path ({@link SpectrumFitter#fitInto}), {@code -wi 2 -i 3 -f 1 -prof gc} at a load average of 6–7: 14 windows
  * 0.06 B/op, 32 windows 0.17, 64 windows joint 0.62, 128 windows joint 1.2, each about 3 KB/s whatever the
  * rate, i.e. the harness's own per-iteration allocation on the benchmark thread; per fit 0 bytes
- * ({@code FitIntoTest}, the JVM's per-thread counter over 64 fits).
+ * ({@code FitIntoTest}, the JVM's per-thread counter over 64 fits). With the optimiser made MINPACK's lmder
+ * step for step as Hipparchus ports it (its stopping tests), at a load average of 5–7: spectra per CPU-second
+ * of the fitting thread (2 s after 1.5 s of warm-up, two alternating runs each) 14 windows 76e3–79e3 (the
+ * previous own optimiser 67e3–70e3), 32 windows 38e3–39e3 (24e3–30e3), 64 windows joint 8.9e3–9.3e3 (8.2e3),
+ * 128 windows joint 5.1e3–5.3e3 (4.7e3–5.0e3); {@code -f 1 -wi 2 -i 3 -prof gc} 38.8e3, 33.0e3, 8.7e3, 4.1e3
+ * ops/s (errors of the order of the scores: contended) and 0.09, 0.09, 0.34, 0.75 B/op.
  */
 @State(Scope.Thread)
 @BenchmarkMode(Mode.Throughput)

@@ -156,13 +156,13 @@ final class LevenbergMarquardt {
     boolean fit(PlasmaModel model, double[] amps, double[] sigma, double[] startPhysical, AlphaPrior prior) {
         int np = model.parameters();
         int m = model.windows();
-        ensure(m, m + (prior == null ? 0 : AlphaPrior.ROWS));
         rows = m + (prior == null ? 0 : AlphaPrior.ROWS);
+        ensure(m, rows);
         parameterCount = np;
         hasCovariance = false;
         for (int j = 0; j < m; j++) {
             double s = Math.max(sigma[j], LeastSquaresRun.MIN_SIGMA_AMPS);
-            weight[j] = Math.sqrt(1 / (s * s));
+            weight[j] = Math.sqrt(1 / (s * s)); // √ of the weight 1/σ², as Hipparchus took it: the same bits as its rows
         }
         for (int a = 0; a < np; a++) {
             x[a] = isLog(a) ? Math.log(startPhysical[a]) : startPhysical[a];
