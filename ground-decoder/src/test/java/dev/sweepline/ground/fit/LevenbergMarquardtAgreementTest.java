@@ -95,7 +95,7 @@ class LevenbergMarquardtAgreementTest {
         assertTrue(campaignWidth >= NARROW_TRIALS / 10, "bands of 47–49 windows: " + campaignWidth);
         int[] counts = agreeOn(spectra, "LM agreement, narrow near-Sun bands");
         assertTrue(counts[2] >= NARROW_TRIALS / 2, "joint runs " + counts[2]);
-        // the set reaches both minima (28 fast, 32 slow of 60 joint runs, measured), each optimiser the same one
+        // the set reaches both minima (29 faster, 32 slower of 61 joint runs, measured), each optimiser the same one
         assertTrue(counts[6] >= NARROW_TRIALS / 6 && counts[7] >= NARROW_TRIALS / 6,
                 "minima with the alphas faster " + counts[6] + ", slower " + counts[7]);
     }
