@@ -21,8 +21,10 @@ import org.openjdk.jmh.annotations.Warmup;
  * reach), a near-Sun survey spectrum (128 windows of the default table, joint protons + alphas,
  * NearSunCase) and a near-Sun focus-like band (the 64 windows around the proton and alpha peaks, joint).
  * Each draws from a pool of 64 noisy spectra made once from a recorded seed, so that no two consecutive
- * fits see the same data. Every fit is checked ({@link #checked}): a fit that fails, or that should carry
- * alphas and does not, throws, so a broken fitter cannot post a fast score.
+ * fits see the same data. Each op fits into a reused {@link MutablePlasmaFit} ({@link SpectrumFitter#fitInto}),
+ * the allocation-free path, and is checked ({@link #checked}): a fit that fails, that should carry alphas and
+ * does not, or whose proton parameters lie outside the bounds around the truth ({@link #inBounds}) throws, so
+ * a broken fitter cannot post a fast score.
  *
  * <p>Run: {@code mvn -q -o -pl ground-decoder -Pjmh verify -DskipTests -Djmh.includes=FitBenchmark
  * -Djmh.args="-f 1 -wi 3 -w 2 -i 5 -r 2"} (with {@code -am} the parent module's exec finds no benchmark
@@ -32,7 +34,21 @@ import org.openjdk.jmh.annotations.Warmup;
  * 18–25 ({@code -f 1 -wi 2 -w 1 -i 3 -r 1 -prof gc}, figures only good for the allocation): 14 windows 428
  * ops/s and 54 KB/op (34 KB/op before the constrained alpha component, whose score-screened attempts these
  * proton spectra pay for), 32 windows 103 ops/s and 104 KB/op, 64 windows joint 49 ops/s and 509 KB/op,
- * 128 windows joint 32 ops/s and 884 KB/op.
+ * 128 windows joint 32 ops/s and 884 KB/op. With the ground's own Levenberg–Marquardt, the per-edge model and
+ * the per-thread model reuse, at a load average of 12–20 (so ops/s say little; spectra per CPU-second of the
+ * fitting thread, ThreadMXBean, 2 s after 2 s of warm-up, before → after in the same minute): 14 windows
+ * 23.6e3 → 55e3, 32 windows 15.3e3 → 24.9e3, 64 windows joint 3.5e3 → 6.5e3, 128 windows joint 1.6e3 →
+ * 4.4e3; {@code -prof gc} 908, 928, 1433, 1432 B/op (was 44, 83, 380, 650 KB/op), what is left being the
+ * result objects ({@link PlasmaFit}, its moments, angles and flag set, the outcome records). Timing the holder
+ * path ({@link SpectrumFitter#fitInto}), {@code -wi 2 -i 3 -f 1 -prof gc} at a load average of 6–7: 14 windows
+ * 0.06 B/op, 32 windows 0.17, 64 windows joint 0.62, 128 windows joint 1.2, each about 3 KB/s whatever the
+ * rate, i.e. the harness's own per-iteration allocation on the benchmark thread; per fit 0 bytes
+ * ({@code FitIntoTest}, the JVM's per-thread counter over 64 fits). With the optimiser made MINPACK's lmder
+ * step for step as Hipparchus ports it (its stopping tests), at a load average of 5–7: spectra per CPU-second
+ * of the fitting thread (2 s after 1.5 s of warm-up, two alternating runs each) 14 windows 76e3–79e3 (the
+ * previous own optimiser 67e3–70e3), 32 windows 38e3–39e3 (24e3–30e3), 64 windows joint 8.9e3–9.3e3 (8.2e3),
+ * 128 windows joint 5.1e3–5.3e3 (4.7e3–5.0e3); {@code -f 1 -wi 2 -i 3 -prof gc} 38.8e3, 33.0e3, 8.7e3, 4.1e3
+ * ops/s (errors of the order of the scores: contended) and 0.09, 0.09, 0.34, 0.75 B/op.
  */
 @State(Scope.Thread)
 @BenchmarkMode(Mode.Throughput)
@@ -49,6 +65,16 @@ public class FitBenchmark {
     SpectrumInput[] survey = new SpectrumInput[POOL];
     SpectrumInput[] focus = new SpectrumInput[POOL];
     final SpectrumFitter fitter = new SpectrumFitter();
+    final MutablePlasmaFit result = new MutablePlasmaFit();
+    /** Proton truth (n_p, U_p, w_p) of the reference and focus-32 pools and of the near-Sun pools. */
+    static final double[] REFERENCE_TRUTH = {ReferenceCase.DENSITY, ReferenceCase.SPEED, ReferenceCase.thermalSpeed()};
+    static final double[] NEAR_SUN_TRUTH = java.util.Arrays.copyOf(NearSunCase.truth(), 3);
+    /**
+     * Relative bound of a benchmark fit's n_p, U_p, w_p from the truth: far outside the noise of these pools
+     * (their fits scatter by a few per cent at most: ReferenceTrialsTest, NearSunAlphaTest), so only a broken
+     * fit crosses it (common practice: a sanity bound, not a statistical test).
+     */
+    static final double BOUND = 0.2;
     int next;
 
     /** Builds the pools. */
@@ -110,6 +136,28 @@ public class FitBenchmark {
         return f;
     }
 
+    /**
+     * {@code f}, or an exception when it failed, lacks the alphas it should have, or its normal proton
+     * parameters are out of {@link #BOUND} of {@code truth}.
+     */
+    static MutablePlasmaFit checked(MutablePlasmaFit f, boolean alphas, double[] truth) {
+        if (!f.ok() || alphas && !f.alphasFitted() || !inBounds(f, truth)) {
+            throw new IllegalStateException("benchmark fit is wrong: " + f.toPlasmaFit().flagText() + " "
+                    + f.toPlasmaFit().protons() + " against the truth " + java.util.Arrays.toString(truth));
+        }
+        return f;
+    }
+
+    /** True when every normal proton parameter of {@code f} lies within {@link #BOUND} of {@code truth}. */
+    static boolean inBounds(MutablePlasmaFit f, double[] truth) {
+        for (int i = 0; i < truth.length; i++) {
+            if (!(Math.abs(f.normalParameter(i) / truth[i] - 1) <= BOUND)) {
+                return false;
+            }
+        }
+        return true;
+    }
+
     private int index() {
         next = (next + 1) & (POOL - 1);
         return next;
@@ -117,25 +165,29 @@ public class FitBenchmark {
 
     /** 14 windows, protons only. */
     @Benchmark
-    public PlasmaFit referenceProtons() {
-        return checked(fitter.fit(reference[index()]), false);
+    public MutablePlasmaFit referenceProtons() {
+        fitter.fitInto(reference[index()], null, result);
+        return checked(result, false, REFERENCE_TRUTH);
     }
 
     /** 32 windows, protons only. */
     @Benchmark
-    public PlasmaFit focus32Protons() {
-        return checked(fitter.fit(focus32[index()]), false);
+    public MutablePlasmaFit focus32Protons() {
+        fitter.fitInto(focus32[index()], null, result);
+        return checked(result, false, REFERENCE_TRUTH);
     }
 
     /** 128 windows, protons + alphas. */
     @Benchmark
-    public PlasmaFit nearSunSurveyJoint() {
-        return checked(fitter.fit(survey[index()]), true);
+    public MutablePlasmaFit nearSunSurveyJoint() {
+        fitter.fitInto(survey[index()], null, result);
+        return checked(result, true, NEAR_SUN_TRUTH);
     }
 
     /** 64 windows, protons + alphas. */
     @Benchmark
-    public PlasmaFit nearSunFocusJoint() {
-        return checked(fitter.fit(focus[index()]), true);
+    public MutablePlasmaFit nearSunFocusJoint() {
+        fitter.fitInto(focus[index()], null, result);
+        return checked(result, true, NEAR_SUN_TRUTH);
     }
 }

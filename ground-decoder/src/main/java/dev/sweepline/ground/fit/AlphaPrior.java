@@ -24,11 +24,11 @@ package dev.sweepline.ground.fit;
  * Each row adds ((value − mean)/σ)² to χ² and g gᵀ/σ² to the information, g the row's gradient; the
  * same rows give the fit ({@link LeastSquaresRun}), its effective number of free parameters and the bound.
  *
- * @param driftMeanMPerS  mean of U_α − U_p, m/s
- * @param driftSigmaMPerS 1σ of U_α − U_p, m/s
- * @param abundance       true when the abundance row is in use
+ *
+ * <p>A value to every caller outside this package; inside it a fitter's per-thread workspace reuses one
+ * instance ({@link #set}) so that a constrained fit allocates nothing, and copies it before it leaves.
  */
-public record AlphaPrior(double driftMeanMPerS, double driftSigmaMPerS, boolean abundance) {
+public final class AlphaPrior {
     /** Rows the prior adds (the abundance row zero when not in use). */
     public static final int ROWS = 3;
     /** Median n_α/n_p of the abundance row (see the class note: physics.md ejecta figures, Song et al. 2022). */
@@ -42,6 +42,68 @@ public record AlphaPrior(double driftMeanMPerS, double driftSigmaMPerS, boolean 
     /** 1σ of T_α/T_p (see the class note; [memory]). */
     public static final double TEMPERATURE_RATIO_SIGMA = 2.0;
     private static final double MASS_RATIO = Species.ALPHA.massKg() / Species.PROTON.massKg();
+
+    private double driftMeanMPerS;
+    private double driftSigmaMPerS;
+    private boolean abundance;
+
+    /**
+     * @param driftMeanMPerS  mean of U_α − U_p, m/s
+     * @param driftSigmaMPerS 1σ of U_α − U_p, m/s
+     * @param abundance       true when the abundance row is in use
+     */
+    public AlphaPrior(double driftMeanMPerS, double driftSigmaMPerS, boolean abundance) {
+        set(driftMeanMPerS, driftSigmaMPerS, abundance);
+    }
+
+    /** Sets this (workspace) instance; only the fitter's own, never one that has been handed out. */
+    void set(double driftMean, double driftSigma, boolean withAbundance) {
+        this.driftMeanMPerS = driftMean;
+        this.driftSigmaMPerS = driftSigma;
+        this.abundance = withAbundance;
+    }
+
+    /** Sets this (workspace) instance to {@link #forProtonSpeed}'s prior. */
+    void setForProtonSpeed(double protonSpeedMPerS) {
+        set(0.0, DRIFT_FRACTION * protonSpeedMPerS, false);
+    }
+
+    /** Mean of U_α − U_p, m/s. */
+    public double driftMeanMPerS() {
+        return driftMeanMPerS;
+    }
+
+    /** 1σ of U_α − U_p, m/s. */
+    public double driftSigmaMPerS() {
+        return driftSigmaMPerS;
+    }
+
+    /** True when the abundance row is in use. */
+    public boolean abundance() {
+        return abundance;
+    }
+
+    /** A copy (the value of a workspace instance at this moment). */
+    AlphaPrior copy() {
+        return new AlphaPrior(driftMeanMPerS, driftSigmaMPerS, abundance);
+    }
+
+    @Override
+    public boolean equals(Object o) {
+        return o instanceof AlphaPrior a && Double.compare(a.driftMeanMPerS, driftMeanMPerS) == 0
+                && Double.compare(a.driftSigmaMPerS, driftSigmaMPerS) == 0 && a.abundance == abundance;
+    }
+
+    @Override
+    public int hashCode() {
+        return java.util.Objects.hash(driftMeanMPerS, driftSigmaMPerS, abundance);
+    }
+
+    @Override
+    public String toString() {
+        return "AlphaPrior[driftMeanMPerS=" + driftMeanMPerS + ", driftSigmaMPerS=" + driftSigmaMPerS
+                + ", abundance=" + abundance + "]";
+    }
 
     /** The prior of a wind whose proton normal speed is {@code protonSpeedMPerS}: drift 0 ± 0.1 U_p. */
     public static AlphaPrior forProtonSpeed(double protonSpeedMPerS) {
@@ -79,8 +141,12 @@ public record AlphaPrior(double driftMeanMPerS, double driftSigmaMPerS, boolean 
 
     /** Σ r_i²: the prior's part of χ² at {@code p}. */
     public double chiSquare(double[] p) {
-        double[] r = new double[ROWS];
-        rows(p, r, new double[ROWS][PlasmaModel.JOINT_PARAMETERS]);
+        return chiSquare(p, new double[ROWS], new double[ROWS][PlasmaModel.JOINT_PARAMETERS]);
+    }
+
+    /** {@link #chiSquare(double[])} with scratch rows {@code r} ({@link #ROWS}) and {@code g} ({@link #ROWS} × 6). */
+    double chiSquare(double[] p, double[] r, double[][] g) {
+        rows(p, r, g);
         return r[0] * r[0] + r[1] * r[1] + r[2] * r[2];
     }
 
@@ -109,8 +175,12 @@ public record AlphaPrior(double driftMeanMPerS, double driftSigmaMPerS, boolean 
      * @param cov the fit's covariance (F_data + F_prior)⁻¹, physical parameters
      */
     public double leverage(double[] p, double[][] cov) {
-        double[][] g = new double[ROWS][PlasmaModel.JOINT_PARAMETERS];
-        rows(p, new double[ROWS], g);
+        return leverage(p, cov, new double[ROWS], new double[ROWS][PlasmaModel.JOINT_PARAMETERS]);
+    }
+
+    /** {@link #leverage(double[], double[][])} with scratch rows {@code r} and {@code g} as {@link #chiSquare}'s. */
+    double leverage(double[] p, double[][] cov, double[] r, double[][] g) {
+        rows(p, r, g);
         double sum = 0;
         for (double[] row : g) {
             for (int a = 0; a < row.length; a++) {

@@ -12,6 +12,12 @@ final class InitialGuess {
 
     /** {n, U, w} in SI units, or null when no window has positive current. */
     static double[] protons(PlasmaModel m, double[] amps, double areaM2) {
+        double[] g = new double[PlasmaModel.PROTON_PARAMETERS];
+        return protons(m, amps, areaM2, g) ? g : null;
+    }
+
+    /** {n, U, w} in SI units into {@code out}; false (and {@code out} as it was) when no window has positive current. */
+    static boolean protons(PlasmaModel m, double[] amps, double areaM2, double[] out) {
         double qA = Species.PROTON.chargeC() * areaM2;
         int best = -1;
         double bestF = 0;
@@ -31,7 +37,7 @@ final class InitialGuess {
             }
         }
         if (best < 0) {
-            return null;
+            return false;
         }
         double u = 0.5 * (m.protonThreshold(best, false) + m.protonThreshold(best, true));
         double sum = 0;
@@ -50,6 +56,9 @@ final class InitialGuess {
         double peakWidth = m.protonThreshold(best, true) - m.protonThreshold(best, false);
         double w = sum > 0 ? Math.sqrt(2 * sum2 / sum) : peakWidth;
         w = Math.max(w, 0.5 * peakWidth);
-        return new double[] {density, u, w};
+        out[0] = density;
+        out[1] = u;
+        out[2] = w;
+        return true;
     }
 }

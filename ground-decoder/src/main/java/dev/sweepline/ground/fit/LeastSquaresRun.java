@@ -1,20 +1,8 @@
 package dev.sweepline.ground.fit;
 
-import org.hipparchus.exception.MathIllegalArgumentException;
-import org.hipparchus.exception.MathIllegalStateException;
-import org.hipparchus.linear.Array2DRowRealMatrix;
-import org.hipparchus.linear.ArrayRealVector;
-import org.hipparchus.linear.DiagonalMatrix;
-import org.hipparchus.linear.RealMatrix;
-import org.hipparchus.linear.RealVector;
-import org.hipparchus.optim.nonlinear.vector.leastsquares.LeastSquaresBuilder;
-import org.hipparchus.optim.nonlinear.vector.leastsquares.LeastSquaresOptimizer;
-import org.hipparchus.optim.nonlinear.vector.leastsquares.LeastSquaresProblem;
-import org.hipparchus.optim.nonlinear.vector.leastsquares.LevenbergMarquardtOptimizer;
-import org.hipparchus.util.Pair;
 
 /**
- * One weighted Levenberg–Marquardt fit of a {@link PlasmaModel} (Hipparchus). The optimiser works in
+ * One weighted Levenberg–Marquardt fit of a {@link PlasmaModel} ({@link LevenbergMarquardt}). The optimiser works in
  * (ln n, U, ln w) per species, so that densities and thermal speeds stay positive; the covariance
  * (JᵀWJ)⁻¹ is mapped back to physical parameters. A joint fit may carry an {@link AlphaPrior}: its rows
  * are appended to the window rows as whitened pseudo-observations (target 0, weight 1), so that the
@@ -32,17 +20,67 @@ final class LeastSquaresRun {
     static final double MAX_SPEED = 1e7;
 
     /**
-     * The outcome.
-     *
-     * @param parameters physical parameters
-     * @param covariance physical covariance, or null when singular
-     * @param chiSquare  Σ (r_j/σ_j)² over the windows
-     * @param iterations iterations used
-     * @param priorChiSquare the prior rows' part of the minimised χ², 0 without a prior
-     * @param leverage   parameters the prior pins down ({@link AlphaPrior#leverage}), 0 without a prior
+     * The outcome. Made by a solver and then read only, or, as a slot of a fitter's per-thread workspace
+     * ({@link #Outcome(int)}), filled again by every fit ({@link #outcomeInto}) so that a fit allocates nothing.
      */
-    record Outcome(double[] parameters, double[][] covariance, double chiSquare, int iterations,
-            double priorChiSquare, double leverage) {
+    static final class Outcome {
+        private final double[] parameters;
+        private final double[][] covariance;
+        private boolean hasCovariance;
+        private double chiSquare;
+        private int iterations;
+        private double priorChiSquare;
+        private double leverage;
+
+        /**
+         * @param parameters physical parameters
+         * @param covariance physical covariance, or null when singular
+         * @param chiSquare  Σ (r_j/σ_j)² over the windows
+         * @param iterations iterations used
+         * @param priorChiSquare the prior rows' part of the minimised χ², 0 without a prior
+         * @param leverage   parameters the prior pins down ({@link AlphaPrior#leverage}), 0 without a prior
+         */
+        Outcome(double[] parameters, double[][] covariance, double chiSquare, int iterations, double priorChiSquare,
+                double leverage) {
+            this.parameters = parameters;
+            this.covariance = covariance == null ? new double[parameters.length][parameters.length] : covariance;
+            this.hasCovariance = covariance != null;
+            this.chiSquare = chiSquare;
+            this.iterations = iterations;
+            this.priorChiSquare = priorChiSquare;
+            this.leverage = leverage;
+        }
+
+        /** An empty slot for a model of {@code np} parameters, filled by {@link #outcomeInto} or {@link #copyFrom}. */
+        Outcome(int np) {
+            this(new double[np], new double[np][np], Double.NaN, 0, 0, 0);
+        }
+
+        double[] parameters() {
+            return parameters;
+        }
+
+        /** The physical covariance, or null when singular. */
+        double[][] covariance() {
+            return hasCovariance ? covariance : null;
+        }
+
+        double chiSquare() {
+            return chiSquare;
+        }
+
+        int iterations() {
+            return iterations;
+        }
+
+        double priorChiSquare() {
+            return priorChiSquare;
+        }
+
+        double leverage() {
+            return leverage;
+        }
+
         /** The minimised χ²: windows and prior rows. */
         double totalChiSquare() {
             return chiSquare + priorChiSquare;
@@ -54,18 +92,38 @@ final class LeastSquaresRun {
          * covariance rows).
          */
         Outcome withDensityScale(double factor) {
-            double[] p = parameters.clone();
-            double[][] c = covariance == null ? null : new double[p.length][];
-            for (int a = 0; a < p.length; a++) {
-                p[a] *= a % 3 == 0 ? factor : 1;
-                if (c != null) {
-                    c[a] = covariance[a].clone();
-                    for (int b = 0; b < p.length; b++) {
-                        c[a][b] *= (a % 3 == 0 ? factor : 1) * (b % 3 == 0 ? factor : 1);
-                    }
+            Outcome o = new Outcome(parameters.length);
+            o.scaledFrom(this, factor);
+            return o;
+        }
+
+        /** This slot made {@code from} with every density times {@code factor} ({@link #withDensityScale}). */
+        void scaledFrom(Outcome from, double factor) {
+            copyFrom(from);
+            for (int a = 0; a < parameters.length; a++) {
+                parameters[a] *= a % 3 == 0 ? factor : 1;
+                for (int b = 0; b < parameters.length; b++) {
+                    covariance[a][b] *= (a % 3 == 0 ? factor : 1) * (b % 3 == 0 ? factor : 1);
                 }
             }
-            return new Outcome(p, c, chiSquare, iterations, priorChiSquare, leverage);
+        }
+
+        /** This slot a copy of {@code from}, a fit of as many parameters. */
+        void copyFrom(Outcome from) {
+            int np = parameters.length;
+            if (from.parameters.length != np) {
+                throw new IllegalArgumentException("outcome of " + from.parameters.length
+                        + " parameters copied into a slot of " + np);
+            }
+            System.arraycopy(from.parameters, 0, parameters, 0, np);
+            for (int a = 0; a < np; a++) {
+                System.arraycopy(from.covariance[a], 0, covariance[a], 0, np);
+            }
+            hasCovariance = from.hasCovariance;
+            chiSquare = from.chiSquare;
+            iterations = from.iterations;
+            priorChiSquare = from.priorChiSquare;
+            leverage = from.leverage;
         }
 
         /** Free parameters in effect: the model's count less what the prior pins down. */
@@ -86,99 +144,44 @@ final class LeastSquaresRun {
         return fit(model, amps, sigma, startPhysical, null);
     }
 
-    /** Fits with {@code prior} rows (joint model only; null for none). */
+    /** Fits with {@code prior} rows (joint model only; null for none), with a workspace of its own. */
     static Outcome fit(PlasmaModel model, double[] amps, double[] sigma, double[] startPhysical, AlphaPrior prior) {
-        int np = model.parameters();
-        int m = model.windows();
-        int rows = m + (prior == null ? 0 : AlphaPrior.ROWS);
-        double[] start = new double[np];
-        for (int a = 0; a < np; a++) {
-            start[a] = isLog(a) ? Math.log(startPhysical[a]) : startPhysical[a];
-        }
-        double[] weights = new double[rows];
-        double[] target = new double[rows];
-        for (int j = 0; j < m; j++) {
-            double s = Math.max(sigma[j], MIN_SIGMA_AMPS);
-            weights[j] = 1 / (s * s);
-            target[j] = amps[j];
-        }
-        for (int j = m; j < rows; j++) {
-            weights[j] = 1;
-        }
-        double[] cur = new double[rows];
-        double[][] jac = new double[rows][np];
-        double[] priorResidual = new double[AlphaPrior.ROWS];
-        double[][] priorGradient = new double[AlphaPrior.ROWS][np];
-        double[] phys = new double[np];
-        LeastSquaresProblem problem = new LeastSquaresBuilder()
-                .start(start)
-                .target(target)
-                .weight(new DiagonalMatrix(weights))
-                .model((RealVector p) -> {
-                    for (int a = 0; a < np; a++) {
-                        phys[a] = isLog(a) ? Math.exp(p.getEntry(a)) : p.getEntry(a);
-                    }
-                    model.evaluate(phys, cur, jac);
-                    if (prior != null) {
-                        prior.rows(phys, priorResidual, priorGradient);
-                        for (int i = 0; i < AlphaPrior.ROWS; i++) {
-                            cur[m + i] = priorResidual[i];
-                            System.arraycopy(priorGradient[i], 0, jac[m + i], 0, np);
-                        }
-                    }
-                    double[][] ji = new double[rows][np];
-                    for (int j = 0; j < rows; j++) {
-                        for (int a = 0; a < np; a++) {
-                            ji[j][a] = isLog(a) ? jac[j][a] * phys[a] : jac[j][a];
-                        }
-                    }
-                    return new Pair<>(new ArrayRealVector(cur, true), new Array2DRowRealMatrix(ji, false));
-                })
-                .parameterValidator(p -> {
-                    for (int a = 1; a < np; a += 3) {
-                        p.setEntry(a, Math.max(MIN_SPEED, Math.min(MAX_SPEED, p.getEntry(a))));
-                    }
-                    for (int a = 0; a < np; a++) {
-                        if (isLog(a)) {
-                            p.setEntry(a, Math.max(-50, Math.min(80, p.getEntry(a))));
-                        }
-                    }
-                    return p;
-                })
-                .lazyEvaluation(false)
-                .maxIterations(MAX_ITERATIONS)
-                .maxEvaluations(MAX_EVALUATIONS)
-                .build();
-        LeastSquaresOptimizer.Optimum opt;
-        try {
-            opt = new LevenbergMarquardtOptimizer().optimize(problem);
-        } catch (MathIllegalStateException | MathIllegalArgumentException e) {
+        return fit(new LevenbergMarquardt(), model, amps, sigma, startPhysical, prior);
+    }
+
+    /** Fits in the workspace {@code lm}; null when it fails to converge or leaves no finite numbers. */
+    static Outcome fit(LevenbergMarquardt lm, PlasmaModel model, double[] amps, double[] sigma,
+            double[] startPhysical, AlphaPrior prior) {
+        if (!lm.fit(model, amps, sigma, startPhysical, prior)) {
             return null;
         }
-        double[] p = opt.getPoint().toArray();
-        double[] out = new double[np];
-        for (int a = 0; a < np; a++) {
-            out[a] = isLog(a) ? Math.exp(p[a]) : p[a];
-            if (!Double.isFinite(out[a])) {
-                return null;
-            }
-        }
-        double[][] cov = null;
-        try {
-            RealMatrix c = opt.getCovariances(1e-14);
-            cov = new double[np][np];
+        return outcome(lm, prior);
+    }
+
+    /** The outcome of {@code lm}'s last successful fit, with the prior's part of χ² and its leverage. */
+    static Outcome outcome(LevenbergMarquardt lm, AlphaPrior prior) {
+        Outcome o = new Outcome(lm.parameterCount());
+        outcomeInto(lm, prior, o);
+        return o;
+    }
+
+    /** {@link #outcome} into the slot {@code into} (of {@code lm}'s parameter count), allocating nothing. */
+    static void outcomeInto(LevenbergMarquardt lm, AlphaPrior prior, Outcome into) {
+        int np = lm.parameterCount();
+        double[] out = into.parameters;
+        System.arraycopy(lm.parameters(), 0, out, 0, np);
+        into.hasCovariance = lm.hasCovariance();
+        if (into.hasCovariance) {
             for (int a = 0; a < np; a++) {
-                for (int b = 0; b < np; b++) {
-                    double sa = isLog(a) ? out[a] : 1;
-                    double sb = isLog(b) ? out[b] : 1;
-                    cov[a][b] = c.getEntry(a, b) * sa * sb;
-                }
+                System.arraycopy(lm.covariance(), a * np, into.covariance[a], 0, np);
             }
-        } catch (MathIllegalArgumentException e) {
-            cov = null;
         }
-        double priorChi2 = prior == null ? 0 : prior.chiSquare(out);
-        double leverage = prior == null || cov == null ? 0 : prior.leverage(out, cov);
-        return new Outcome(out, cov, opt.getChiSquare() - priorChi2, opt.getIterations(), priorChi2, leverage);
+        double priorChi2 = prior == null ? 0 : prior.chiSquare(out, lm.priorResidual(), lm.priorGradient());
+        double leverage = prior == null || !into.hasCovariance ? 0
+                : prior.leverage(out, into.covariance, lm.priorResidual(), lm.priorGradient());
+        into.chiSquare = lm.chiSquare() - priorChi2;
+        into.iterations = lm.iterations();
+        into.priorChiSquare = priorChi2;
+        into.leverage = leverage;
     }
 }

@@ -20,6 +20,18 @@ public final class PlasmaModel {
     private final double[] aV1;
     private final double[] aV2;
     private final double[] scratch = new double[4];
+    private final double[] lowVolts;
+    private final double[] highVolts;
+    /** Index of window j's low and high edge in the edge arrays: adjacent windows share an edge. */
+    private final int[] lowEdge;
+    private final int[] highEdge;
+    private final double[] protonEdge;
+    private final double[] alphaEdge;
+    // per edge, for one species at a time: x = (v − U)/w, exp(−x²), erfc|x|, erf x
+    private final double[] edgeX;
+    private final double[] edgeExp;
+    private final double[] edgeErfc;
+    private final double[] edgeErf;
 
     /**
      * @param lowVolts   low window edges, V
@@ -29,6 +41,8 @@ public final class PlasmaModel {
      */
     public PlasmaModel(double[] lowVolts, double[] highVolts, double areaM2, boolean withAlphas) {
         this.windows = lowVolts.length;
+        this.lowVolts = lowVolts.clone();
+        this.highVolts = highVolts.clone();
         this.withAlphas = withAlphas;
         this.areaM2 = areaM2;
         pV1 = new double[windows];
@@ -41,6 +55,30 @@ public final class PlasmaModel {
             aV1[j] = Species.ALPHA.thresholdSpeed(lowVolts[j]);
             aV2[j] = Species.ALPHA.thresholdSpeed(highVolts[j]);
         }
+        lowEdge = new int[windows];
+        highEdge = new int[windows];
+        int edges = 0;
+        for (int j = 0; j < windows; j++) {
+            lowEdge[j] = j > 0 && lowVolts[j] == highVolts[j - 1] ? highEdge[j - 1] : edges++;
+            highEdge[j] = edges++;
+        }
+        protonEdge = new double[edges];
+        alphaEdge = new double[edges];
+        for (int j = 0; j < windows; j++) {
+            protonEdge[lowEdge[j]] = pV1[j];
+            protonEdge[highEdge[j]] = pV2[j];
+            alphaEdge[lowEdge[j]] = aV1[j];
+            alphaEdge[highEdge[j]] = aV2[j];
+        }
+        edgeX = new double[edges];
+        edgeExp = new double[edges];
+        edgeErfc = new double[edges];
+        edgeErf = new double[edges];
+    }
+
+    /** True when this model is that of windows {@code low}–{@code high} on area {@code area} (same model kind aside). */
+    boolean sameWindows(double[] low, double[] high, double area) {
+        return area == areaM2 && java.util.Arrays.equals(low, lowVolts) && java.util.Arrays.equals(high, highVolts);
     }
 
     /** Number of parameters. */
@@ -70,29 +108,38 @@ public final class PlasmaModel {
 
     /**
      * Window currents (A) into {@code current} and, when {@code jacobian} is not null, ∂I_j/∂θ_a in
-     * physical parameters into {@code jacobian[j][a]}.
+     * physical parameters into {@code jacobian[j][a]}. The same values as {@link WindowCurrent#evaluate} per
+     * window, bit for bit, with the error function and exponential taken once per edge.
      */
     public void evaluate(double[] p, double[] current, double[][] jacobian) {
-        double qpA = Species.PROTON.chargeC() * areaM2;
-        double qaA = Species.ALPHA.chargeC() * areaM2;
+        species(Species.PROTON.chargeC() * areaM2, p[0], p[1], p[2], protonEdge, pV1, pV2, 0, current, jacobian);
+        if (withAlphas) {
+            species(Species.ALPHA.chargeC() * areaM2, p[3], p[4], p[5], alphaEdge, aV1, aV2, 3, current, jacobian);
+        }
+    }
+
+    /** One species' share: written into {@code current} for the protons (offset 0), added for the alphas. */
+    private void species(double chargeAreaC, double n, double u, double w, double[] edge, double[] v1, double[] v2,
+            int offset, double[] current, double[][] jacobian) {
+        for (int k = 0; k < edge.length; k++) {
+            double x = (edge[k] - u) / w;
+            edgeX[k] = x;
+            edgeExp[k] = Math.exp(-x * x);
+            edgeErfc[k] = WindowCurrent.erfcOfEdge(x);
+            edgeErf[k] = WindowCurrent.erfOfEdge(x, edgeErfc[k]);
+        }
         for (int j = 0; j < windows; j++) {
-            WindowCurrent.evaluate(qpA, p[0], p[1], p[2], pV1[j], pV2[j], scratch);
-            double i = scratch[WindowCurrent.VALUE];
+            int a = lowEdge[j];
+            int b = highEdge[j];
+            double derf = WindowCurrent.difference(edgeX[a], edgeErfc[a], edgeErf[a], edgeX[b], edgeErfc[b], edgeErf[b]);
+            WindowCurrent.combine(chargeAreaC, n, u, w, v1[j], v2[j], edgeX[a], edgeX[b], edgeExp[a], edgeExp[b], derf,
+                    scratch);
+            current[j] = offset == 0 ? scratch[WindowCurrent.VALUE] : current[j] + scratch[WindowCurrent.VALUE];
             if (jacobian != null) {
-                jacobian[j][0] = scratch[WindowCurrent.D_DENSITY];
-                jacobian[j][1] = scratch[WindowCurrent.D_SPEED];
-                jacobian[j][2] = scratch[WindowCurrent.D_THERMAL];
+                jacobian[j][offset] = scratch[WindowCurrent.D_DENSITY];
+                jacobian[j][offset + 1] = scratch[WindowCurrent.D_SPEED];
+                jacobian[j][offset + 2] = scratch[WindowCurrent.D_THERMAL];
             }
-            if (withAlphas) {
-                WindowCurrent.evaluate(qaA, p[3], p[4], p[5], aV1[j], aV2[j], scratch);
-                i += scratch[WindowCurrent.VALUE];
-                if (jacobian != null) {
-                    jacobian[j][3] = scratch[WindowCurrent.D_DENSITY];
-                    jacobian[j][4] = scratch[WindowCurrent.D_SPEED];
-                    jacobian[j][5] = scratch[WindowCurrent.D_THERMAL];
-                }
-            }
-            current[j] = i;
         }
     }
 

@@ -2,7 +2,6 @@ package dev.sweepline.ground.fit;
 
 import dev.sweepline.ground.instrument.BuiltInInstruments;
 import dev.sweepline.ground.instrument.GroundInstrument;
-import java.util.Collections;
 import java.util.EnumSet;
 
 /**
@@ -42,10 +41,87 @@ public final class SpectrumFitter {
     private static final AlphaSelection FREE_ALPHAS = new AlphaSelection(3);
 
     private final CupGeometry cup;
+    private final Solver solver;
+    /** The models of the last spectrum and the fit's slots, per thread (the fitter is shared between threads). */
+    private final ThreadLocal<Workspace> workspaces = ThreadLocal.withInitial(Workspace::new);
+
+    /**
+     * What one thread's fits reuse: the models of the last spectrum, the start vectors, an outcome slot per
+     * least-squares run of a fit and the holder behind {@link #fit(SpectrumInput, DensityPrior)}.
+     */
+    private static final class Workspace {
+        final ModelCache models = new ModelCache();
+        final double[] guess = new double[PlasmaModel.PROTON_PARAMETERS];
+        final double[] start = new double[PlasmaModel.JOINT_PARAMETERS];
+        final LeastSquaresRun.Outcome protons = new LeastSquaresRun.Outcome(PlasmaModel.PROTON_PARAMETERS);
+        final LeastSquaresRun.Outcome warmProtons = new LeastSquaresRun.Outcome(PlasmaModel.PROTON_PARAMETERS);
+        /** The marker of a proton run that did not converge. */
+        final LeastSquaresRun.Outcome none = new LeastSquaresRun.Outcome(PlasmaModel.PROTON_PARAMETERS);
+        final LeastSquaresRun.Outcome free = new LeastSquaresRun.Outcome(PlasmaModel.JOINT_PARAMETERS);
+        final LeastSquaresRun.Outcome constrained = new LeastSquaresRun.Outcome(PlasmaModel.JOINT_PARAMETERS);
+        final LeastSquaresRun.Outcome scaledProtons = new LeastSquaresRun.Outcome(PlasmaModel.PROTON_PARAMETERS);
+        final LeastSquaresRun.Outcome scaledJoint = new LeastSquaresRun.Outcome(PlasmaModel.JOINT_PARAMETERS);
+        final MutablePlasmaFit result = new MutablePlasmaFit();
+        /** The prior of the constrained alpha fit, set per spectrum ({@link AlphaPrior#setForProtonSpeed}). */
+        final AlphaPrior prior = new AlphaPrior(0, 1, false);
+    }
 
     /** A fitter for a cup of geometry {@code cup}. */
     public SpectrumFitter(CupGeometry cup) {
+        this(cup, threadWorkspaces());
+    }
+
+    /** A fitter for {@code cup} whose least-squares runs are {@code solver}'s (the reference comparison's). */
+    SpectrumFitter(CupGeometry cup, Solver solver) {
         this.cup = cup;
+        this.solver = solver;
+    }
+
+    /**
+     * One weighted least-squares run: the fitted outcome of {@code model} on the amps from the physical
+     * start, with prior rows (null for none), or null when it does not converge.
+     */
+    interface Solver {
+        LeastSquaresRun.Outcome fit(PlasmaModel model, double[] amps, double[] sigma, double[] startPhysical,
+                AlphaPrior prior);
+
+        /** The same run into the slot {@code into} (of the model's parameter count); false when it does not converge. */
+        default boolean fitInto(PlasmaModel model, double[] amps, double[] sigma, double[] startPhysical,
+                AlphaPrior prior, LeastSquaresRun.Outcome into) {
+            LeastSquaresRun.Outcome o = fit(model, amps, sigma, startPhysical, prior);
+            if (o == null) {
+                return false;
+            }
+            into.copyFrom(o);
+            return true;
+        }
+    }
+
+    /** The default solver: {@link LevenbergMarquardt} with one workspace per thread, so the fitter stays thread-safe. */
+    private static Solver threadWorkspaces() {
+        return new ThreadSolver();
+    }
+
+    /** {@link LevenbergMarquardt} with one workspace per thread; {@link #fitInto} allocates nothing. */
+    private static final class ThreadSolver implements Solver {
+        private final ThreadLocal<LevenbergMarquardt> workspaces = ThreadLocal.withInitial(LevenbergMarquardt::new);
+
+        @Override
+        public LeastSquaresRun.Outcome fit(PlasmaModel model, double[] amps, double[] sigma, double[] start,
+                AlphaPrior prior) {
+            return LeastSquaresRun.fit(workspaces.get(), model, amps, sigma, start, prior);
+        }
+
+        @Override
+        public boolean fitInto(PlasmaModel model, double[] amps, double[] sigma, double[] start, AlphaPrior prior,
+                LeastSquaresRun.Outcome into) {
+            LevenbergMarquardt lm = workspaces.get();
+            if (!lm.fit(model, amps, sigma, start, prior)) {
+                return false;
+            }
+            LeastSquaresRun.outcomeInto(lm, prior, into);
+            return true;
+        }
     }
 
     /** A fitter for {@code instrument}'s cup. */
@@ -73,18 +149,36 @@ public final class SpectrumFitter {
      * none): beyond the reach the angle then comes from the total current's fall-off ({@link AcceptanceAngle}).
      */
     public PlasmaFit fit(SpectrumInput in, DensityPrior densityPrior) {
-        EnumSet<FitFlag> flags = EnumSet.noneOf(FitFlag.class);
+        MutablePlasmaFit holder = workspaces.get().result;
+        fitInto(in, densityPrior, holder);
+        return holder.toPlasmaFit();
+    }
+
+    /**
+     * Fits {@code in} into {@code out}, as {@link #fit(SpectrumInput, DensityPrior)} (the same values bit for
+     * bit), allocating nothing after warm-up on spectra without quadrants or density prior and on the
+     * proton-only path (see the package note for what still allocates). With {@code out}'s warm start on and a
+     * previous good solution in it, the proton fit starts from that solution; when that run fails, is not
+     * physical, or ends with a reduced χ² above {@link #POOR_FIT_REDUCED_CHI2}, the fit starts again from
+     * {@link InitialGuess} and keeps the lower χ² of the two. Never throws for bad data, flags it instead.
+     */
+    public void fitInto(SpectrumInput in, DensityPrior densityPrior, MutablePlasmaFit out) {
+        Workspace ws = workspaces.get();
+        EnumSet<FitFlag> flags = out.flags;
+        int m = in.windows();
+        out.reset(m);
         if (in.saturatedDropped() > 0) {
             flags.add(FitFlag.SATURATED_DROPPED);
         }
-        int m = in.windows();
         if (m == 0 && in.uncalibratedDropped() > 0) {
             flags.add(FitFlag.NO_CALIBRATION);
-            return PlasmaFit.failed(flags, m, FlowAngles.NONE, cup.effectiveAreaM2());
+            out.failed(FlowAngles.NONE, cup.effectiveAreaM2());
+            return;
         }
         if (m < MIN_WINDOWS) {
             flags.add(FitFlag.TOO_FEW_WINDOWS);
-            return PlasmaFit.failed(flags, m, FlowAngles.NONE, cup.effectiveAreaM2());
+            out.failed(FlowAngles.NONE, cup.effectiveAreaM2());
+            return;
         }
         double signal = 0;
         double var = 0;
@@ -94,7 +188,8 @@ public final class SpectrumFitter {
         }
         if (!(signal > MIN_SNR * Math.sqrt(var))) {
             flags.add(FitFlag.NO_SIGNAL);
-            return PlasmaFit.failed(flags, m, FlowAngles.NONE, cup.effectiveAreaM2());
+            out.failed(FlowAngles.NONE, cup.effectiveAreaM2());
+            return;
         }
         FlowAngles preliminary = FlowAngleEstimator.estimate(in, cup);
         double area = cup.effectiveAreaM2() * cup.transmission(preliminary.tanX(), preliminary.tanY());
@@ -102,41 +197,48 @@ public final class SpectrumFitter {
             // the estimated image lies off the collector: nothing to scale the current by
             flags.add(FitFlag.NO_SIGNAL);
             angleFlags(preliminary, flags);
-            return PlasmaFit.failed(flags, m, preliminary, cup.effectiveAreaM2());
+            out.failed(preliminary, cup.effectiveAreaM2());
+            return;
         }
-        PlasmaModel protonModel = new PlasmaModel(in.lowVolts(), in.highVolts(), area, false);
-        double[] guess = InitialGuess.protons(protonModel, in.totalAmps(), area);
-        if (guess == null) {
+        ModelCache models = ws.models;
+        PlasmaModel protonModel = models.model(in.lowVolts(), in.highVolts(), area, false);
+        LeastSquaresRun.Outcome best = protonFit(in, protonModel, area, ws, out);
+        if (best == null) {
             flags.add(FitFlag.NO_SIGNAL);
             angleFlags(preliminary, flags);
-            return PlasmaFit.failed(flags, m, preliminary, cup.effectiveAreaM2());
+            out.failed(preliminary, cup.effectiveAreaM2());
+            return;
         }
-        LeastSquaresRun.Outcome best = LeastSquaresRun.fit(protonModel, in.totalAmps(), in.sigmaAmps(), guess);
         // no covariance means no errors: a product without errors is not a product
-        if (best == null || !physical(best.parameters(), in) || !finiteErrors(best.covariance())) {
+        if (best == ws.none || !physical(best.parameters(), in) || !finiteErrors(best.covariance())) {
+            out.hasLast = false;
             flags.add(FitFlag.NO_CONVERGENCE);
             angleFlags(preliminary, flags);
-            return PlasmaFit.failed(flags, m, preliminary, cup.effectiveAreaM2());
+            out.failed(preliminary, cup.effectiveAreaM2());
+            return;
+        }
+        if (out.warmStart()) {
+            System.arraycopy(best.parameters(), 0, out.lastProtons, 0, PlasmaModel.PROTON_PARAMETERS);
+            out.hasLast = true;
         }
         AlphaPrior prior = null;
         LeastSquaresRun.Outcome joint = null;
         PlasmaModel jointModel = null;
         if (m >= MIN_WINDOWS_JOINT) {
-            jointModel = new PlasmaModel(in.lowVolts(), in.highVolts(), area, true); // one for every joint try
+            jointModel = models.model(in.lowVolts(), in.highVolts(), area, true); // one for every joint try
             AlphaCoverage coverage = AlphaCoverage.of(protonModel, best.parameters());
             LeastSquaresRun.Outcome free = coverage == AlphaCoverage.PEAK
-                    ? jointFit(in, area, protonModel, jointModel, best) : null;
+                    ? jointFit(in, area, protonModel, jointModel, best, ws) : null;
             if (free != null) {
                 // a physical free fit: the test alone decides, no second try
                 joint = FREE_ALPHAS.accepts(best.chiSquare(), free.chiSquare()) ? free : null;
             } else if (coverage != AlphaCoverage.NONE && alphaScore(in, protonModel, best.parameters()) > MIN_ALPHA_SCORE) {
                 // part of the alphas in the band, or a free fit that put the alpha peak outside it (a drifting
                 // alpha peak just above the top window): the constrained component
-                Constrained c = constrainedFit(in, protonModel, jointModel, best,
-                        AlphaPrior.forProtonSpeed(best.parameters()[1]));
-                if (c != null) {
-                    prior = c.prior();
-                    joint = c.outcome();
+                ws.prior.setForProtonSpeed(best.parameters()[1]);
+                if (constrainedFit(in, protonModel, jointModel, best, ws.prior, ws)) {
+                    prior = ws.prior;
+                    joint = ws.constrained;
                 }
             }
         }
@@ -159,7 +261,10 @@ public final class SpectrumFitter {
         double acceptance = cup.transmission(angles.tanX(), angles.tanY());
         if (acceptance > 0 && acceptance != area / cup.effectiveAreaM2()) {
             // beyond full acceptance the refined angle changes A(θ)/A(0), and n with it (I ∝ n A)
-            best = best.withDensityScale(area / (cup.effectiveAreaM2() * acceptance));
+            LeastSquaresRun.Outcome scaled = best.parameters().length == PlasmaModel.JOINT_PARAMETERS
+                    ? ws.scaledJoint : ws.scaledProtons;
+            scaled.scaledFrom(best, area / (cup.effectiveAreaM2() * acceptance));
+            best = scaled;
             area = cup.effectiveAreaM2() * acceptance;
         }
         angleFlags(angles, flags);
@@ -167,9 +272,47 @@ public final class SpectrumFitter {
         if (!Double.isFinite(sigmaLogArea)) {
             // the image at the estimated angle is off the collector: no density can be scaled from the current
             flags.add(FitFlag.NO_SIGNAL);
-            return PlasmaFit.failed(flags, m, angles, cup.effectiveAreaM2());
+            out.failed(angles, cup.effectiveAreaM2());
+            return;
         }
-        return compose(in, angles, area, best, flags, prior, sigmaLogArea);
+        compose(in, angles, area, best, prior, sigmaLogArea, out);
+    }
+
+    /**
+     * The proton-only fit into the workspace's slot: from {@code out}'s last solution when its warm start is on
+     * and that run is good, else from {@link InitialGuess}; null when the guess finds no positive current,
+     * {@code ws.none} when the run does not converge.
+     */
+    private LeastSquaresRun.Outcome protonFit(SpectrumInput in, PlasmaModel protonModel, double area, Workspace ws,
+            MutablePlasmaFit out) {
+        if (out.warmStart() && out.hasLast) {
+            LeastSquaresRun.Outcome warm = ws.warmProtons;
+            boolean warmGood = solver.fitInto(protonModel, in.totalAmps(), in.sigmaAmps(), out.lastProtons, null, warm)
+                    && physical(warm.parameters(), in) && finiteErrors(warm.covariance());
+            if (warmGood
+                    && warm.chiSquare() <= POOR_FIT_REDUCED_CHI2 * (in.windows() - PlasmaModel.PROTON_PARAMETERS)) {
+                out.warmStarted = true;
+                return warm;
+            }
+            // a failed or poor warm start: the cold start decides, keeping the lower χ² of the two
+            LeastSquaresRun.Outcome cold = coldProtonFit(in, protonModel, area, ws);
+            if (warmGood && (cold == null || cold == ws.none || warm.chiSquare() < cold.chiSquare())) {
+                out.warmStarted = true;
+                return warm;
+            }
+            return cold;
+        }
+        return coldProtonFit(in, protonModel, area, ws);
+    }
+
+    /** The proton fit from {@link InitialGuess}: null without a guess, {@code ws.none} when it does not converge. */
+    private LeastSquaresRun.Outcome coldProtonFit(SpectrumInput in, PlasmaModel protonModel, double area,
+            Workspace ws) {
+        if (!InitialGuess.protons(protonModel, in.totalAmps(), area, ws.guess)) {
+            return null;
+        }
+        return solver.fitInto(protonModel, in.totalAmps(), in.sigmaAmps(), ws.guess, null, ws.protons)
+                ? ws.protons : ws.none;
     }
 
     /** The angle flags of {@code angles}. */
@@ -213,8 +356,8 @@ public final class SpectrumFitter {
      * The free joint fit (n_α, U_α, w_α free), or null when it does not converge to physical values with the
      * alpha peak inside the windows; the selection test is the caller's.
      */
-    private static LeastSquaresRun.Outcome jointFit(SpectrumInput in, double area, PlasmaModel protonModel,
-            PlasmaModel joint, LeastSquaresRun.Outcome protons) {
+    private LeastSquaresRun.Outcome jointFit(SpectrumInput in, double area, PlasmaModel protonModel,
+            PlasmaModel joint, LeastSquaresRun.Outcome protons, Workspace ws) {
         double[] p = protons.parameters();
         double residual = 0;
         for (int j = 0; j < in.windows(); j++) {
@@ -228,9 +371,9 @@ public final class SpectrumFitter {
             ratio = DEFAULT_ALPHA_RATIO;
         }
         double wAlpha = p[2] * Math.sqrt(START_ALPHA_TEMPERATURE_RATIO * Species.PROTON.massKg() / Species.ALPHA.massKg());
-        double[] start = {p[0], p[1], p[2], ratio * p[0], p[1], wAlpha};
-        LeastSquaresRun.Outcome o = LeastSquaresRun.fit(joint, in.totalAmps(), in.sigmaAmps(), start);
-        if (o == null || !physical(o.parameters(), in)) {
+        double[] start = startVector(ws.start, p, ratio, wAlpha);
+        LeastSquaresRun.Outcome o = ws.free;
+        if (!solver.fitInto(joint, in.totalAmps(), in.sigmaAmps(), start, null, o) || !physical(o.parameters(), in)) {
             return null;
         }
         double[] q = o.parameters();
@@ -270,8 +413,8 @@ public final class SpectrumFitter {
      * tried once more with the abundance row ({@link AlphaPrior#withAbundance}), so alpha-free spectra, whose
      * constrained fit stays below the limit or is not tried, never pay for the third fit.
      */
-    private static Constrained constrainedFit(SpectrumInput in, PlasmaModel protonModel, PlasmaModel joint,
-            LeastSquaresRun.Outcome protons, AlphaPrior prior) {
+    private boolean constrainedFit(SpectrumInput in, PlasmaModel protonModel, PlasmaModel joint,
+            LeastSquaresRun.Outcome protons, AlphaPrior prior, Workspace ws) {
         double[] p = protons.parameters();
         double wAlpha = AlphaCoverage.startThermalSpeed(p[2]);
         double residual = 0;
@@ -286,24 +429,37 @@ public final class SpectrumFitter {
         if (!(ratio > 0.005 && ratio < MAX_ALPHA_RATIO)) {
             ratio = DEFAULT_ALPHA_RATIO;
         }
-        double[] start = {p[0], p[1], p[2], ratio * p[0], p[1], wAlpha};
-        LeastSquaresRun.Outcome o = LeastSquaresRun.fit(joint, in.totalAmps(), in.sigmaAmps(), start, prior);
-        if (o == null || !physical(o.parameters(), in) || !finiteErrors(o.covariance())) {
-            return null;
+        double[] start = startVector(ws.start, p, ratio, wAlpha);
+        LeastSquaresRun.Outcome o = ws.constrained;
+        if (!solver.fitInto(joint, in.totalAmps(), in.sigmaAmps(), start, prior, o) || !physical(o.parameters(), in)
+                || !finiteErrors(o.covariance())) {
+            return false;
         }
         double[] q = o.parameters();
         double alphaRatio = q[3] / q[0];
         double extra = PlasmaModel.JOINT_PARAMETERS - PlasmaModel.PROTON_PARAMETERS - o.leverage();
         if (!(alphaRatio < MAX_ALPHA_RATIO)) {
-            return prior.abundance() ? null : constrainedFit(in, protonModel, joint, protons, prior.withAbundance());
+            if (prior.abundance()) {
+                return false;
+            }
+            // the workspace's prior, with the abundance row added (AlphaPrior#withAbundance)
+            prior.set(prior.driftMeanMPerS(), prior.driftSigmaMPerS(), true);
+            return constrainedFit(in, protonModel, joint, protons, prior, ws);
         }
         boolean sane = alphaRatio > 0 && q[4] > 0.7 * q[1] && q[4] < 1.5 * q[1]
-                && extra > 0 && new AlphaSelection(extra).accepts(protons.chiSquare(), o.totalChiSquare());
-        return sane ? new Constrained(o, prior) : null;
+                && extra > 0 && AlphaSelection.accepts(extra, protons.chiSquare(), o.totalChiSquare());
+        return sane;
     }
 
-    /** A kept constrained fit and the prior it was fitted with. */
-    private record Constrained(LeastSquaresRun.Outcome outcome, AlphaPrior prior) {
+    /** The joint start (n_p, U_p, w_p, ratio·n_p, U_p, w_α) from the proton fit {@code p}, into {@code s}. */
+    private static double[] startVector(double[] s, double[] p, double ratio, double wAlpha) {
+        s[0] = p[0];
+        s[1] = p[1];
+        s[2] = p[2];
+        s[3] = ratio * p[0];
+        s[4] = p[1];
+        s[5] = wAlpha;
+        return s;
     }
 
     /** True when the covariance exists and every diagonal is positive and finite (errors can be reported). */
@@ -335,25 +491,35 @@ public final class SpectrumFitter {
         return x;
     }
 
-    private static PlasmaFit compose(SpectrumInput in, FlowAngles angles, double area, LeastSquaresRun.Outcome o,
-            EnumSet<FitFlag> flags, AlphaPrior prior, double sigmaLogArea) {
+    private static void compose(SpectrumInput in, FlowAngles angles, double area, LeastSquaresRun.Outcome o,
+            AlphaPrior prior, double sigmaLogArea, MutablePlasmaFit out) {
         double[] p = o.parameters();
         int np = p.length;
         // the data's degrees of freedom: windows less the parameters in effect (a prior pins some down)
         double dof = in.windows() - o.effectiveParameters();
         double chi2 = dof > 0 ? o.chiSquare() / dof : Double.NaN;
         if (chi2 > POOR_FIT_REDUCED_CHI2) {
-            flags.add(FitFlag.POOR_FIT);
+            out.flags.add(FitFlag.POOR_FIT);
         }
         double peakVolts = Species.PROTON.voltsAtSpeed(p[1]);
         if (peakVolts < min(in.lowVolts()) || peakVolts > max(in.highVolts())) {
-            flags.add(FitFlag.PEAK_OUTSIDE_WINDOWS);
+            out.flags.add(FitFlag.PEAK_OUTSIDE_WINDOWS);
         }
-        SpeciesMoments protons = moments(Species.PROTON, p, o.covariance(), 0, angles, sigmaLogArea);
-        SpeciesMoments alphas = np == PlasmaModel.JOINT_PARAMETERS
-                ? moments(Species.ALPHA, p, o.covariance(), 3, angles, sigmaLogArea) : SpeciesMoments.NONE;
-        return new PlasmaFit(protons, alphas, angles, chi2, in.windows(), o.iterations(),
-                Collections.unmodifiableSet(flags), p.clone(), area, prior, sigmaLogArea);
+        moments(Species.PROTON, p, o.covariance(), 0, angles, sigmaLogArea, out.protons);
+        if (np == PlasmaModel.JOINT_PARAMETERS) {
+            moments(Species.ALPHA, p, o.covariance(), 3, angles, sigmaLogArea, out.alphas);
+        }
+        out.angles = angles;
+        out.reducedChiSquare = chi2;
+        out.iterations = o.iterations();
+        System.arraycopy(p, 0, out.normalParameters, 0, np);
+        out.parameterCount = np;
+        out.areaM2 = area;
+        out.hasPrior = prior != null;
+        if (prior != null) {
+            out.alphaPrior.set(prior.driftMeanMPerS(), prior.driftSigmaMPerS(), prior.abundance());
+        }
+        out.sigmaLogArea = sigmaLogArea;
     }
 
     /**
@@ -362,8 +528,8 @@ public final class SpectrumFitter {
      * the protons' acceptance, an approximation where their drift shifts their image); U's carries the
      * angles' 1σ ({@link FlowAngles#sigmaBulkSpeed}).
      */
-    private static SpeciesMoments moments(Species s, double[] p, double[][] cov, int k, FlowAngles angles,
-            double sigmaLogArea) {
+    private static void moments(Species s, double[] p, double[][] cov, int k, FlowAngles angles,
+            double sigmaLogArea, double[] out) {
         double tx = angles.tanX();
         double ty = angles.tanY();
         double sec = 1 / CupGeometry.cosOfFlow(tx, ty);
@@ -371,12 +537,20 @@ public final class SpectrumFitter {
         double un = p[k + 1];
         double w = p[k + 2];
         double t = s.temperature(w);
+        out[0] = n;
+        out[1] = un * sec;
+        out[2] = w;
+        out[3] = t;
         if (cov == null) {
-            return new SpeciesMoments(n, un * sec, w, t, Double.NaN, Double.NaN, Double.NaN, Double.NaN);
+            java.util.Arrays.fill(out, 4, MutablePlasmaFit.MOMENTS, Double.NaN);
+            return;
         }
         double sn = Math.hypot(Math.sqrt(cov[k][k]), n * sigmaLogArea);
         double sun = Math.sqrt(cov[k + 1][k + 1]);
         double sw = Math.sqrt(cov[k + 2][k + 2]);
-        return new SpeciesMoments(n, un * sec, w, t, sn, angles.sigmaBulkSpeed(un, sun), sw, 2 * t * sw / w);
+        out[4] = sn;
+        out[5] = angles.sigmaBulkSpeed(un, sun);
+        out[6] = sw;
+        out[7] = 2 * t * sw / w;
     }
 }

@@ -50,7 +50,16 @@ public final class WindowCurrent {
         double x2 = (v2 - speedMPerS) / w;
         double e1 = Math.exp(-x1 * x1);
         double e2 = Math.exp(-x2 * x2);
-        double derf = ErrorFunction.difference(x1, x2);
+        combine(chargeAreaC, densityPerM3, speedMPerS, w, v1, v2, x1, x2, e1, e2, ErrorFunction.difference(x1, x2), out);
+    }
+
+    /**
+     * I and its derivatives into {@code out[0..3]} from the edge values x_i = (v_i − U)/w, e_i = exp(−x_i²) and
+     * erf x2 − erf x1 (the class note's formulas): the edges of adjacent windows are shared, so a spectrum's
+     * model computes them once per edge ({@link PlasmaModel}).
+     */
+    static void combine(double chargeAreaC, double densityPerM3, double speedMPerS, double w, double v1,
+            double v2, double x1, double x2, double e1, double e2, double derf, double[] out) {
         double qnA = chargeAreaC * densityPerM3;
         double bracket = 0.5 * speedMPerS * derf + w / (2 * PlasmaConstants.SQRT_PI) * (e1 - e2);
         out[VALUE] = qnA * bracket;
@@ -58,5 +67,40 @@ public final class WindowCurrent {
         out[D_SPEED] = qnA * (0.5 * derf + (v1 * e1 - v2 * e2) / (w * PlasmaConstants.SQRT_PI));
         out[D_THERMAL] = qnA * ((x1 * v1 * e1 - x2 * v2 * e2) / (w * PlasmaConstants.SQRT_PI)
                 + (e1 - e2) / (2 * PlasmaConstants.SQRT_PI));
+    }
+
+    /** erfc|x| at an edge: one rational evaluation serves both {@link #erfOfEdge} and the tail differences. */
+    static double erfcOfEdge(double x) {
+        return ErrorFunction.erfc(Math.abs(x));
+    }
+
+    /**
+     * erf x from {@code erfcAbs} = erfc|x|, bit for bit {@link ErrorFunction#erf}: beyond its first interval
+     * erf x = ±(1 − erfc|x|) is how it computes it; within |x| ≤ 0.5 (its series holds to 0.46875, Cody
+     * 1969) it is called itself.
+     */
+    static double erfOfEdge(double x, double erfcAbs) {
+        if (Math.abs(x) <= 0.5) {
+            return ErrorFunction.erf(x);
+        }
+        double oneMinus = 1.0 - erfcAbs;
+        return x < 0 ? -oneMinus : oneMinus;
+    }
+
+    /**
+     * erf b − erf a from the edge values, bit for bit {@link ErrorFunction#difference}: erfc values where both
+     * arguments lie beyond {@link ErrorFunction#HALF_POINT} in one tail, erf values otherwise.
+     */
+    static double difference(double a, double erfcAbsA, double erfA, double b, double erfcAbsB, double erfB) {
+        if (b < a) {
+            return -difference(b, erfcAbsB, erfB, a, erfcAbsA, erfA);
+        }
+        if (a >= 0 && b > ErrorFunction.HALF_POINT) {
+            return erfcAbsA - erfcAbsB;
+        }
+        if (b <= 0 && a < -ErrorFunction.HALF_POINT) {
+            return erfcAbsB - erfcAbsA;
+        }
+        return erfB - erfA;
     }
 }

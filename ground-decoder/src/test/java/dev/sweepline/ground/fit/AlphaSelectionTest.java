@@ -46,6 +46,11 @@ class AlphaSelectionTest {
         // level is the 1 % target over the trials factor 10 (AlphaSelection class note)
         assertEquals(0.001, AlphaSelection.TEST_LEVEL, 1e-15);
         assertEquals(16.266, new AlphaSelection(3).threshold(), 1e-3);
+        // the tail-probability form decides as the quantile does, either side of it (k = 3 and a real k)
+        for (double k : new double[] {3, 1.7}) {
+            double q = new AlphaSelection(k).threshold();
+            assertTrue(AlphaSelection.accepts(k, q + 1e-6, 0) && !AlphaSelection.accepts(k, q - 1e-6, 0), "k " + k);
+        }
     }
 
     @Test
@@ -86,5 +91,30 @@ class AlphaSelectionTest {
             assertTrue(near >= 0.95, "detection at " + r + " near the Sun " + near);
             assertTrue(au >= 0.95, "detection at " + r + " at 1 AU " + au);
         }
+    }
+
+    @Test
+    void shouldDecideTheTailTestAsHipparchus() {
+        // the reference: Hipparchus 4.0.2 Gamma.regularizedGammaQ; a = k/2 over the constrained fit's effective
+        // k (0 to 3), x = drop/2 up to far tails; Q to 1e-12 relative (the series' and fraction's 1e-14
+        // convergence and rounding of ln Γ), the decision Q < TEST_LEVEL always the same
+        int compared = 0;
+        for (double a = 0.01; a <= 2.0; a += 0.0173) {
+            for (double x = 0.001; x < 200; x *= 1.09) {
+                double want = org.hipparchus.special.Gamma.regularizedGammaQ(a, x);
+                double got = AlphaSelection.upperGammaQ(a, x);
+                assertEquals(want, got, 1e-12 * want + 1e-300, "Q(" + a + ", " + x + ")");
+                assertEquals(want < AlphaSelection.TEST_LEVEL, AlphaSelection.tailBelowLevel(a, x), "Q(" + a + ", " + x + ")");
+                compared++;
+            }
+            // at the level itself: x with Q(a, x) = TEST_LEVEL exactly as Hipparchus solves it, and its neighbours
+            double x0 = new org.hipparchus.distribution.continuous.ChiSquaredDistribution(2 * a)
+                    .inverseCumulativeProbability(1 - AlphaSelection.TEST_LEVEL) / 2;
+            for (double x = Math.nextDown(Math.nextDown(x0)); x <= Math.nextUp(Math.nextUp(x0)); x = Math.nextUp(x)) {
+                assertEquals(org.hipparchus.special.Gamma.regularizedGammaQ(a, x) < AlphaSelection.TEST_LEVEL,
+                        AlphaSelection.tailBelowLevel(a, x), "Q(" + a + ", " + x + ") at the level");
+            }
+        }
+        assertTrue(compared > 10000, "values compared " + compared);
     }
 }

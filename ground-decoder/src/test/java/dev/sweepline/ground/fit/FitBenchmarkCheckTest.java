@@ -23,5 +23,16 @@ class FitBenchmarkCheckTest {
         // a proton-only fit where alphas are expected is wrong too
         PlasmaFit protons = fitter.fit(b.reference[0]);
         assertThrows(IllegalStateException.class, () -> FitBenchmark.checked(protons, true));
+        // the holder path the benchmarks time: the broken input throws, and so does a fit out of the truth's bounds
+        MutablePlasmaFit holder = new MutablePlasmaFit();
+        fitter.fitInto(zero, null, holder);
+        assertThrows(IllegalStateException.class,
+                () -> FitBenchmark.checked(holder, false, FitBenchmark.REFERENCE_TRUTH));
+        fitter.fitInto(b.reference[0], null, holder);
+        FitBenchmark.checked(holder, false, FitBenchmark.REFERENCE_TRUTH);
+        // the same good fit against a truth twice as dense: n_p is 50 % off, beyond the bound
+        double[] wrongTruth = FitBenchmark.REFERENCE_TRUTH.clone();
+        wrongTruth[0] *= 2;
+        assertThrows(IllegalStateException.class, () -> FitBenchmark.checked(holder, false, wrongTruth));
     }
 }

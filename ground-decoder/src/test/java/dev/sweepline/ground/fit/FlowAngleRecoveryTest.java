@@ -40,7 +40,7 @@ class FlowAngleRecoveryTest {
         return q;
     }
 
-    private static SpectrumInput oblique(double thetaXDeg, double thetaYDeg, Random noise) {
+    static SpectrumInput oblique(double thetaXDeg, double thetaYDeg, Random noise) {
         double tx = Math.tan(Math.toRadians(thetaXDeg));
         double ty = Math.tan(Math.toRadians(thetaYDeg));
         double cos = 1 / Math.sqrt(1 + tx * tx + ty * ty);
