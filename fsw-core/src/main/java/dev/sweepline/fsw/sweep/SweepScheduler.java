@@ -216,7 +216,7 @@ public final class SweepScheduler {
     private void chooseSupport(int first, int last, long firstSettleMicros) {
         sweepPeriods = params.focusFloorPeriods;
         int n = design.supportWindows(band.referencePeakQ8(), band.referenceLowHalfQ8(), band.referenceHighHalfQ8(),
-                first, last, supportWindow);
+                first, last, gain.lastRanges(), supportWindow);
         supportPeriods = design.supportPeriods(params, dacLow, dacHigh, first, last, firstSettleMicros, n);
         supportCount = supportPeriods > sweepPeriods ? n : 0;
     }

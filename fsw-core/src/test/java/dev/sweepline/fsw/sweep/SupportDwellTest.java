@@ -126,6 +126,9 @@ class SupportDwellTest {
     void shouldPlaceTheSupportWindowsAtThePeakAndItsFlanks() {
         Sweeps l = new Sweeps();
         List<int[]> bands = new ArrayList<>();
+        List<int[]> rangesAfter = new ArrayList<>();
+        int[] lastRange = new int[128];
+        java.util.Arrays.fill(lastRange, DemoCup.INSTRUMENT.gainRanges() - 1); // never read: the top range
         SweepScheduler[] s = new SweepScheduler[1];
         SweepListener both = new SweepListener() {
             @Override
@@ -136,6 +139,12 @@ class SupportDwellTest {
             @Override
             public void onSweepComplete(Spectrum sp, long nowMicros) {
                 l.onSweepComplete(sp, nowMicros);
+                for (int i = 0; i < sp.count(); i++) {
+                    if ((sp.status(i) & Spectrum.STATUS_MISSING) == 0) {
+                        lastRange[sp.window(i)] = sp.gainRange(i);
+                    }
+                }
+                rangesAfter.add(lastRange.clone());
             }
 
             @Override
@@ -150,23 +159,39 @@ class SupportDwellTest {
         loop.runSweeps(20);
         FocusDesign design = new FocusDesign(DemoCup.INSTRUMENT);
         int checked = 0;
+        int stepped = 0;
         int b = 0;
-        for (int[] r : l.spectra) {
+        for (int i = 0; i < l.spectra.size(); i++) {
+            int[] r = l.spectra.get(i);
             if (r[0] != SweepMode.FOCUS.ordinal()) {
                 continue;
             }
             int[] band = bands.get(b++);
+            int[] ranges = rangesAfter.get(i - 1); // the ranges each window was last read in
+
             assertEquals(band[0], r[1]);
             // the peak window is the band's reference peak rounded (closed form); the flanks lie the
             // table's factors of the half-widths below and above it (FocusDesign.supportWindows)
             assertEquals((band[2] + 128) >> 8, r[1] + r[6]);
             long low = band[2] - ((long) band[3] * design.lowSupportFactorQ8(band[3]) >> 8);
             long high = band[2] + ((long) band[4] * design.highSupportFactorQ8(band[4]) >> 8);
-            assertEquals(Math.max(band[0], (low + 128) >> 8), r[1] + r[4]);
-            assertEquals(Math.min(band[1], (high + 128) >> 8), r[1] + r[8]);
+            int lowFlank = (int) Math.max(band[0], (low + 128) >> 8);
+            int highFlank = (int) Math.min(band[1], (high + 128) >> 8);
+            // a flank read in a less sensitive range than its outer neighbour moves out, up to 2 windows
+            for (int k = 0; k < 2 && lowFlank > band[0] && ranges[lowFlank - 1] < ranges[lowFlank]; k++) {
+                lowFlank--;
+                stepped++;
+            }
+            for (int k = 0; k < 2 && highFlank < band[1] && ranges[highFlank + 1] < ranges[highFlank]; k++) {
+                highFlank++;
+                stepped++;
+            }
+            assertEquals(lowFlank, r[1] + r[4]);
+            assertEquals(highFlank, r[1] + r[8]);
             checked++;
         }
         assertTrue(checked >= 10, "focus sweeps " + checked);
+        System.out.println("support flanks moved past a range switch: " + stepped + " of " + 2 * checked);
     }
 
     @Test
@@ -229,15 +254,46 @@ class SupportDwellTest {
     void shouldClampTheSupportToTheBandAndDropRepeats() {
         FocusDesign d = new FocusDesign(DemoCup.INSTRUMENT);
         int[] out = new int[FocusDesign.SUPPORT_WINDOWS];
+        int[] ranges = new int[128];
         // peak at 50.0, half-widths 10 (low: 1.50 -> 15 windows) and 9 (high: 1.36 -> 12.2): 35, 50, 62
-        assertEquals(3, d.supportWindows(50 << 8, 10 << 8, 9 << 8, 30, 80, out));
+        assertEquals(3, d.supportWindows(50 << 8, 10 << 8, 9 << 8, 30, 80, ranges, out));
         assertArrayEquals(new int[] {35, 50, 62}, out);
         // a band that cuts both flanks: the flanks fall on its edges
-        assertEquals(3, d.supportWindows(50 << 8, 10 << 8, 9 << 8, 40, 55, out));
+        assertEquals(3, d.supportWindows(50 << 8, 10 << 8, 9 << 8, 40, 55, ranges, out));
         assertArrayEquals(new int[] {40, 50, 55}, out);
         // a peak narrower than a window: one support window
-        assertEquals(1, d.supportWindows(50 << 8, 32, 32, 40, 55, out));
+        assertEquals(1, d.supportWindows(50 << 8, 32, 32, 40, 55, ranges, out));
         assertEquals(50, out[0]);
+    }
+
+    @Test
+    void shouldMoveAFlankOutOfALessSensitiveRange() {
+        FocusDesign d = new FocusDesign(DemoCup.INSTRUMENT);
+        int[] out = new int[FocusDesign.SUPPORT_WINDOWS];
+        int[] ranges = new int[128];
+        // peak 50.0, half-widths 10 and 9: flanks at 35 and 62 (shouldClampTheSupportToTheBandAndDropRepeats)
+        java.util.Arrays.fill(ranges, 36, 62, 1); // the flanks are in range 0 already: they stay
+        d.supportWindows(50 << 8, 10 << 8, 9 << 8, 30, 80, ranges, out);
+        assertArrayEquals(new int[] {35, 50, 62}, out);
+        java.util.Arrays.fill(ranges, 35, 63, 1); // the flanks in range 1, their outer neighbours in 0: one out
+        d.supportWindows(50 << 8, 10 << 8, 9 << 8, 30, 80, ranges, out);
+        assertArrayEquals(new int[] {34, 50, 63}, out);
+        java.util.Arrays.fill(ranges, 30, 70, 1); // no more sensitive neighbour: stay
+        d.supportWindows(50 << 8, 10 << 8, 9 << 8, 30, 80, ranges, out);
+        assertArrayEquals(new int[] {35, 50, 62}, out);
+        // a staircase 3, 2, 1, 0 outward: RANGE_STEP_WINDOWS (2) windows out, not 3
+        java.util.Arrays.fill(ranges, 0, 128, 0);
+        java.util.Arrays.fill(ranges, 35, 63, 3);
+        ranges[34] = 2;
+        ranges[33] = 1;
+        ranges[63] = 2;
+        ranges[64] = 1;
+        d.supportWindows(50 << 8, 10 << 8, 9 << 8, 20, 80, ranges, out);
+        assertEquals(2, FocusDesign.RANGE_STEP_WINDOWS);
+        assertArrayEquals(new int[] {33, 50, 64}, out);
+        // never beyond the band
+        d.supportWindows(50 << 8, 10 << 8, 9 << 8, 34, 63, ranges, out);
+        assertArrayEquals(new int[] {34, 50, 63}, out);
     }
 
     @Test
