@@ -92,7 +92,9 @@ public final class FocusDesign {
      * Windows a flank support window moves outward, at most, to leave a less sensitive gain range: the
      * read noise of a range grows with its full scale (a feedback resistor {@code 2^rangeRatioShift} times
      * smaller), so the window just past the range switch teaches more than the one just inside it
-     * (hw-sim SupportDwellReachTest: 0.85 → 0.98 of the optimum on quiet-perihelion for one window).
+     * (hw-sim SupportDwellReachTest: 0.85 → 0.98 of the optimum on quiet-perihelion for one window). Two:
+     * the gain predictor reads a window in the range its brighter neighbour needs (R9), so on the bench the
+     * switch lies up to two windows beyond the yardstick's.
      */
     public static final int RANGE_STEP_WINDOWS = 2;
 
@@ -100,9 +102,8 @@ public final class FocusDesign {
      * The support windows of a peak refined at {@code peakQ8} (Q8 windows) with low and high half-widths
      * at half maximum {@code lowHalfQ8} and {@code highHalfQ8}, in a band {@code first..last}: the low
      * flank, the peak and the high flank, each clamped to the band, ascending, without repeats. A flank
-     * whose window was read in a less sensitive range than its outer neighbour ({@code rangeByWindow}, the
-     * ranges the windows were last read in) moves outward, up to {@link #RANGE_STEP_WINDOWS} windows,
-     * until it is not.
+     * moves outward to the first window within {@link #RANGE_STEP_WINDOWS} that was read in a more
+     * sensitive range than it ({@code rangeByWindow}, the ranges the windows were last read in), if any.
      *
      * @param out receives the windows ({@link #SUPPORT_WINDOWS} entries)
      * @return how many distinct windows (1..3)
@@ -112,19 +113,32 @@ public final class FocusDesign {
         long low = (long) peakQ8 - (((long) Math.max(0, lowHalfQ8) * lowSupportFactorQ8(lowHalfQ8)) >> 8);
         long high = (long) peakQ8 + (((long) Math.max(0, highHalfQ8) * highSupportFactorQ8(highHalfQ8)) >> 8);
         int peak = clamp(((long) peakQ8 + 128) >> 8, first, last);
-        int lowFlank = clamp((low + 128) >> 8, first, last);
-        for (int k = 0; k < RANGE_STEP_WINDOWS && lowFlank > first && lowFlank < peak
-                && rangeByWindow[lowFlank - 1] < rangeByWindow[lowFlank]; k++) {
-            lowFlank--;
-        }
-        int highFlank = clamp((high + 128) >> 8, first, last);
-        for (int k = 0; k < RANGE_STEP_WINDOWS && highFlank < last && highFlank > peak
-                && rangeByWindow[highFlank + 1] < rangeByWindow[highFlank]; k++) {
-            highFlank++;
-        }
+        int lowFlank = outOfRange(clamp((low + 128) >> 8, first, last), -1, first, last, peak, rangeByWindow);
+        int highFlank = outOfRange(clamp((high + 128) >> 8, first, last), 1, first, last, peak, rangeByWindow);
         int n = addSupport(lowFlank, out, 0);
         n = addSupport(peak, out, n);
         return addSupport(highFlank, out, n);
+    }
+
+    /**
+     * Flank window {@code w} (not the peak), or the first window within {@link #RANGE_STEP_WINDOWS} of it
+     * outward ({@code step} −1 below the peak, +1 above) inside {@code first..last} that was read in a more
+     * sensitive range than {@code w}.
+     */
+    private static int outOfRange(int w, int step, int first, int last, int peak, int[] rangeByWindow) {
+        if (w == peak) {
+            return w;
+        }
+        for (int k = 1; k <= RANGE_STEP_WINDOWS; k++) {
+            int v = w + step * k;
+            if (v < first || v > last) {
+                break;
+            }
+            if (rangeByWindow[v] < rangeByWindow[w]) {
+                return v;
+            }
+        }
+        return w;
     }
 
     private static int clamp(long w, int first, int last) {

@@ -177,21 +177,29 @@ class SupportDwellTest {
             long high = band[2] + ((long) band[4] * design.highSupportFactorQ8(band[4]) >> 8);
             int lowFlank = (int) Math.max(band[0], (low + 128) >> 8);
             int highFlank = (int) Math.min(band[1], (high + 128) >> 8);
-            // a flank read in a less sensitive range than its outer neighbour moves out, up to 2 windows
-            for (int k = 0; k < 2 && lowFlank > band[0] && ranges[lowFlank - 1] < ranges[lowFlank]; k++) {
-                lowFlank--;
-                stepped++;
-            }
-            for (int k = 0; k < 2 && highFlank < band[1] && ranges[highFlank + 1] < ranges[highFlank]; k++) {
-                highFlank++;
-                stepped++;
-            }
+            // a flank moves out to the first window within 2 that was read in a more sensitive range
+            int peakWindow = (band[2] + 128) >> 8;
+            int lowMoved = outward(lowFlank, -1, band[0], band[1], peakWindow, ranges);
+            int highMoved = outward(highFlank, 1, band[0], band[1], peakWindow, ranges);
+            stepped += (lowMoved != lowFlank ? 1 : 0) + (highMoved != highFlank ? 1 : 0);
+            lowFlank = lowMoved;
+            highFlank = highMoved;
             assertEquals(lowFlank, r[1] + r[4]);
             assertEquals(highFlank, r[1] + r[8]);
             checked++;
         }
         assertTrue(checked >= 10, "focus sweeps " + checked);
         System.out.println("support flanks moved past a range switch: " + stepped + " of " + 2 * checked);
+    }
+
+    /** The flank rule of FocusDesign.supportWindows, written out here for the closed loop's check. */
+    private static int outward(int w, int step, int first, int last, int peak, int[] ranges) {
+        for (int k = 1; w != peak && k <= 2 && w + step * k >= first && w + step * k <= last; k++) {
+            if (ranges[w + step * k] < ranges[w]) {
+                return w + step * k;
+            }
+        }
+        return w;
     }
 
     @Test
@@ -278,22 +286,24 @@ class SupportDwellTest {
         java.util.Arrays.fill(ranges, 35, 63, 1); // the flanks in range 1, their outer neighbours in 0: one out
         d.supportWindows(50 << 8, 10 << 8, 9 << 8, 30, 80, ranges, out);
         assertArrayEquals(new int[] {34, 50, 63}, out);
-        java.util.Arrays.fill(ranges, 30, 70, 1); // no more sensitive neighbour: stay
+        java.util.Arrays.fill(ranges, 34, 64, 1); // range 0 two windows out: two out (RANGE_STEP_WINDOWS)
         d.supportWindows(50 << 8, 10 << 8, 9 << 8, 30, 80, ranges, out);
-        assertArrayEquals(new int[] {35, 50, 62}, out);
-        // a staircase 3, 2, 1, 0 outward: RANGE_STEP_WINDOWS (2) windows out, not 3
-        java.util.Arrays.fill(ranges, 0, 128, 0);
-        java.util.Arrays.fill(ranges, 35, 63, 3);
-        ranges[34] = 2;
-        ranges[33] = 1;
-        ranges[63] = 2;
-        ranges[64] = 1;
-        d.supportWindows(50 << 8, 10 << 8, 9 << 8, 20, 80, ranges, out);
         assertEquals(2, FocusDesign.RANGE_STEP_WINDOWS);
         assertArrayEquals(new int[] {33, 50, 64}, out);
+        java.util.Arrays.fill(ranges, 33, 65, 1); // three out is too far: stay
+        d.supportWindows(50 << 8, 10 << 8, 9 << 8, 30, 80, ranges, out);
+        assertArrayEquals(new int[] {35, 50, 62}, out);
+        // the first more sensitive window counts, not the most sensitive
+        java.util.Arrays.fill(ranges, 0, 128, 2);
+        ranges[34] = 1;
+        ranges[33] = 0;
+        d.supportWindows(50 << 8, 10 << 8, 9 << 8, 30, 80, ranges, out);
+        assertEquals(34, out[0]);
         // never beyond the band
-        d.supportWindows(50 << 8, 10 << 8, 9 << 8, 34, 63, ranges, out);
-        assertArrayEquals(new int[] {34, 50, 63}, out);
+        java.util.Arrays.fill(ranges, 0, 128, 0);
+        java.util.Arrays.fill(ranges, 35, 63, 1);
+        d.supportWindows(50 << 8, 10 << 8, 9 << 8, 35, 62, ranges, out);
+        assertArrayEquals(new int[] {35, 50, 62}, out);
     }
 
     @Test
