@@ -92,11 +92,13 @@ public final class FocusDesign {
      * Windows a flank support window moves outward, at most, to leave a less sensitive gain range: the
      * read noise of a range grows with its full scale (a feedback resistor {@code 2^rangeRatioShift} times
      * smaller), so the window just past the range switch teaches more than the one just inside it
-     * (hw-sim SupportDwellReachTest: 0.85 → 0.98 of the optimum on quiet-perihelion for one window). Two:
-     * the gain predictor reads a window in the range its brighter neighbour needs (R9), so on the bench the
-     * switch lies up to two windows beyond the yardstick's.
+     * (hw-sim SupportDwellReachTest: 0.85 → 0.98 of the optimum on quiet-perihelion for one window). Three:
+     * the gain predictor reads a window in the range its brighter neighbour needs and switches down only
+     * below 2 % of full scale (R9), so on the bench the switch lies up to three windows beyond the
+     * yardstick's (docs/focus-design.md: on calm-perihelion 0.63 of the optimum with a reach of 2, 0.82
+     * with 3; 4 adds at most 0.03 on one scenario).
      */
-    public static final int RANGE_STEP_WINDOWS = 2;
+    public static final int RANGE_STEP_WINDOWS = 3;
 
     /**
      * The support windows of a peak refined at {@code peakQ8} (Q8 windows) with low and high half-widths

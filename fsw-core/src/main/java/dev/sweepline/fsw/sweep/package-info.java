@@ -146,7 +146,8 @@
  *     either order) every window of a focus sweep dwells {@code focusFloorPeriods}, and three support
  *     windows (the low flank, the refined peak and the high flank of the peak the band was chosen from,
  *     at factors of the low and high half-widths at half maximum looked up by the half-width in windows,
- *     {@link FocusDesign#supportWindows}) dwell the floor plus an equal third of what the sweep's
+ *     {@link FocusDesign#supportWindows}; a flank moves out to the first window within 3 read last in a
+ *     more sensitive gain range, whose read noise is lower) dwell the floor plus an equal third of what the sweep's
  *     integration leaves after the floors: {@code integrationPeriods} times the band's windows when
  *     {@code focusBudgetMicros} is 0, else the budget after the settles; at most the dwell limit. Each
  *     step's dwell travels in its step command (hardware ICD §3.1) and its settle is its own (R4). An edge

@@ -177,7 +177,7 @@ class SupportDwellTest {
             long high = band[2] + ((long) band[4] * design.highSupportFactorQ8(band[4]) >> 8);
             int lowFlank = (int) Math.max(band[0], (low + 128) >> 8);
             int highFlank = (int) Math.min(band[1], (high + 128) >> 8);
-            // a flank moves out to the first window within 2 that was read in a more sensitive range
+            // a flank moves out to the first window within 3 that was read in a more sensitive range
             int peakWindow = (band[2] + 128) >> 8;
             int lowMoved = outward(lowFlank, -1, band[0], band[1], peakWindow, ranges);
             int highMoved = outward(highFlank, 1, band[0], band[1], peakWindow, ranges);
@@ -194,7 +194,7 @@ class SupportDwellTest {
 
     /** The flank rule of FocusDesign.supportWindows, written out here for the closed loop's check. */
     private static int outward(int w, int step, int first, int last, int peak, int[] ranges) {
-        for (int k = 1; w != peak && k <= 2 && w + step * k >= first && w + step * k <= last; k++) {
+        for (int k = 1; w != peak && k <= 3 && w + step * k >= first && w + step * k <= last; k++) {
             if (ranges[w + step * k] < ranges[w]) {
                 return w + step * k;
             }
@@ -286,11 +286,14 @@ class SupportDwellTest {
         java.util.Arrays.fill(ranges, 35, 63, 1); // the flanks in range 1, their outer neighbours in 0: one out
         d.supportWindows(50 << 8, 10 << 8, 9 << 8, 30, 80, ranges, out);
         assertArrayEquals(new int[] {34, 50, 63}, out);
-        java.util.Arrays.fill(ranges, 34, 64, 1); // range 0 two windows out: two out (RANGE_STEP_WINDOWS)
+        java.util.Arrays.fill(ranges, 34, 64, 1); // range 0 two windows out: two out
         d.supportWindows(50 << 8, 10 << 8, 9 << 8, 30, 80, ranges, out);
-        assertEquals(2, FocusDesign.RANGE_STEP_WINDOWS);
         assertArrayEquals(new int[] {33, 50, 64}, out);
-        java.util.Arrays.fill(ranges, 33, 65, 1); // three out is too far: stay
+        java.util.Arrays.fill(ranges, 33, 65, 1); // three out: RANGE_STEP_WINDOWS
+        d.supportWindows(50 << 8, 10 << 8, 9 << 8, 30, 80, ranges, out);
+        assertEquals(3, FocusDesign.RANGE_STEP_WINDOWS);
+        assertArrayEquals(new int[] {32, 50, 65}, out);
+        java.util.Arrays.fill(ranges, 32, 66, 1); // four out is too far: stay
         d.supportWindows(50 << 8, 10 << 8, 9 << 8, 30, 80, ranges, out);
         assertArrayEquals(new int[] {35, 50, 62}, out);
         // the first more sensitive window counts, not the most sensitive
