@@ -13,24 +13,26 @@ import dev.sweepline.fsw.table.WindowTable;
  *
  * <pre>
  *   0   2  marker 0x5354 ("ST")
- *   2   1  format version v: 1, 2 or 3
+ *   2   1  format version v: 1, 2, 3 or 4
  *   3   1  reserved, 0
- *   4   2  image length L = 138 + 4 n (v 1), 154 + 4 n (v 2) or 158 + 4 n (v 3), octets, CRC included
+ *   4   2  image length L = 138 + 4 n (v 1), 154 + 4 n (v 2), 158 + 4 n (v 3) or 162 + 4 n (v 4), octets, CRC included
  *   6   2  window count n (1..256)
  *   8  76  sweep parameters, 19 signed 32-bit values (order in commands.md §4.1)
  *  84   2  housekeeping period, seconds (1..3600)
  *  86   2  spectrum decimation (1..256)
  *  88  48  fault settings, monitors 1..6: response (1), retries (1), threshold (2), limit (4)
  * 136  4n  windows: low code (2), high code (2)
- * 136+4n 16  v 2 and 3: focusStyle, focusBudgetMicros, robustnessMarginWindows, surveyIntegrationPeriods (signed 32-bit)
- * 152+4n  4  v 3 only: engineeringFlushSeconds (signed 32-bit)
+ * 136+4n 16  v 2, 3 and 4: focusStyle, focusBudgetMicros, robustnessMarginWindows, surveyIntegrationPeriods (signed 32-bit)
+ * 152+4n  4  v 3 and 4: engineeringFlushSeconds (signed 32-bit)
+ * 156+4n  4  v 4 only: focusFloorPeriods (signed 32-bit)
  * L-2   2  CRC-16/IBM-3740 over octets 0 .. L-3
  * </pre>
  *
  * The table id is the CRC. An image is written in version 1 when its styles are the defaults (so
  * every version-1 table keeps its bytes and its id), in version 2 when only its styles differ, and in
- * version 3 when its engineering flush is not the build's; a version-1 image decodes with the default
- * styles, a version-1 or 2 image with the build's flush (0). Decoding is allocation-free and never throws on bad bytes.
+ * version 3 when its engineering flush is not the build's, in version 4 when its focus floor dwell is
+ * set; a version-1 image decodes with the default styles, a version-1 or 2 image with the build's flush
+ * (0), a version-1, 2 or 3 image with no floor dwell (0). Decoding is allocation-free and never throws on bad bytes.
  */
 public final class TableImage {
     /** Marker "ST". */
@@ -49,10 +51,14 @@ public final class TableImage {
     public static final int VERSION_FLUSH = 3;
     /** Octets of the version-3 flush field. */
     public static final int FLUSH_OCTETS = 4;
+    /** Format version of an image that also carries the focus floor dwell after the flush interval. */
+    public static final int VERSION_FLOOR = 4;
+    /** Octets of the version-4 floor field. */
+    public static final int FLOOR_OCTETS = 4;
     /** Shortest image (one window, version 1). */
     public static final int MIN_OCTETS = FIXED_OCTETS + 4;
-    /** Longest image ({@link WindowTable#CAPACITY} windows, version 3). */
-    public static final int MAX_OCTETS = FIXED_OCTETS + STYLE_OCTETS + FLUSH_OCTETS + 4 * WindowTable.CAPACITY;
+    /** Longest image ({@link WindowTable#CAPACITY} windows, version 4). */
+    public static final int MAX_OCTETS = FIXED_OCTETS + STYLE_OCTETS + FLUSH_OCTETS + FLOOR_OCTETS + 4 * WindowTable.CAPACITY;
     /** {@link #decode} result: the image is not intact (marker, version, length or CRC). */
     public static final int CORRUPT = -1;
 
@@ -70,10 +76,10 @@ public final class TableImage {
         return FIXED_OCTETS + 4 * windows;
     }
 
-    /** Image length for {@code windows} windows in format {@code version} (1, 2 or 3). */
+    /** Image length for {@code windows} windows in format {@code version} (1..4). */
     public static int length(int windows, int version) {
         return length(windows) + (version >= VERSION_STYLES ? STYLE_OCTETS : 0)
-            + (version == VERSION_FLUSH ? FLUSH_OCTETS : 0);
+            + (version >= VERSION_FLUSH ? FLUSH_OCTETS : 0) + (version == VERSION_FLOOR ? FLOOR_OCTETS : 0);
     }
 
     /** The table id (CRC) of an image of {@code length} octets, as stored in its last two octets. */
@@ -93,7 +99,7 @@ public final class TableImage {
         }
         int n = Telecommand.u16(b, 6);
         int version = b[2] & 0xFF;
-        return Telecommand.u16(b, 0) == MARKER && version >= VERSION && version <= VERSION_FLUSH
+        return Telecommand.u16(b, 0) == MARKER && version >= VERSION && version <= VERSION_FLOOR
             && Telecommand.u16(b, 4) == length
             && n >= 1 && n <= WindowTable.CAPACITY && length(n, version) == length
             && Crc16.of(b, 0, length - 2) == Telecommand.u16(b, length - 2);
@@ -120,7 +126,9 @@ public final class TableImage {
         readParameters(b, into.sweep);
         int version = b[2] & 0xFF;
         readStyles(b, version >= VERSION_STYLES ? WINDOWS_AT + 4 * n : -1, into.sweep);
-        into.sweep.engineeringFlushSeconds = version == VERSION_FLUSH ? s32(b, WINDOWS_AT + 4 * n + STYLE_OCTETS) : 0;
+        into.sweep.engineeringFlushSeconds = version >= VERSION_FLUSH ? s32(b, WINDOWS_AT + 4 * n + STYLE_OCTETS) : 0;
+        into.sweep.focusFloorPeriods = version == VERSION_FLOOR
+                ? s32(b, WINDOWS_AT + 4 * n + STYLE_OCTETS + FLUSH_OCTETS) : 0;
         into.housekeepingSeconds = Telecommand.u16(b, HOUSEKEEPING_AT);
         into.spectrumDecimation = Telecommand.u16(b, DECIMATION_AT);
         for (int m = 1; m <= FaultMonitorId.COUNT; m++) {
@@ -161,7 +169,8 @@ public final class TableImage {
      * @return the image length
      */
     public static int encode(ParameterTable t, byte[] b) {
-        int version = !t.sweep.defaultFlush() ? VERSION_FLUSH : t.sweep.defaultStyles() ? VERSION : VERSION_STYLES;
+        int version = !t.sweep.defaultFloor() ? VERSION_FLOOR
+                : !t.sweep.defaultFlush() ? VERSION_FLUSH : t.sweep.defaultStyles() ? VERSION : VERSION_STYLES;
         int length = length(t.windowCount, version);
         put16(b, 0, MARKER);
         b[2] = (byte) version;
@@ -189,8 +198,11 @@ public final class TableImage {
             put32(b, i + 8, t.sweep.robustnessMarginWindows);
             put32(b, i + 12, t.sweep.surveyIntegrationPeriods);
         }
-        if (version == VERSION_FLUSH) {
+        if (version >= VERSION_FLUSH) {
             put32(b, WINDOWS_AT + 4 * t.windowCount + STYLE_OCTETS, t.sweep.engineeringFlushSeconds);
+        }
+        if (version == VERSION_FLOOR) {
+            put32(b, WINDOWS_AT + 4 * t.windowCount + STYLE_OCTETS + FLUSH_OCTETS, t.sweep.focusFloorPeriods);
         }
         put16(b, length - 2, Crc16.of(b, 0, length - 2));
         return length;

@@ -4,7 +4,9 @@ import dev.sweepline.fsw.octets.BigEndian;
 
 /**
  * The spectrum packet's user data, layout version 2 (telemetry ICD §4): a flyweight over the packet
- * buffer with the fixed header's named offsets, then the variable part.
+ * buffer with the fixed header's named offsets, then the variable part. Layout version 3 (a
+ * support-dwell focus sweep) inserts after the header the support windows: b (1), then b × [window
+ * offset from f (1) | integration periods (2)].
  *
  * <pre>
  *  0        1          3      4      5       6        8         10      12      14      16        18
@@ -21,6 +23,14 @@ import dev.sweepline.fsw.octets.BigEndian;
 public final class SpectrumLayout {
     /** Layout version octet: bit 7 set (versioned), bits 6..0 = 2 (telemetry ICD §4). */
     public static final int LAYOUT_VERSION_2 = 0x82;
+    /** Layout version octet of a spectrum with support windows: bit 7 set, bits 6..0 = 3 (telemetry ICD §4). */
+    public static final int LAYOUT_VERSION_3 = 0x83;
+    /** Layout 3: offset of the support window count b (1), 0..3. */
+    public static final int SUPPORT_COUNT_OFFSET = 18;
+    /** Layout 3: octets of one support window entry: offset from f (1), integration periods (2). */
+    public static final int SUPPORT_ENTRY_OCTETS = 3;
+    /** Layout 3: most support windows. */
+    public static final int MAX_SUPPORT_WINDOWS = 3;
     /** Offset of the layout version (1). */
     public static final int VERSION_OFFSET = 0;
     /** Offset of the instrument id (2): the description's {@code id}. */
@@ -60,15 +70,17 @@ public final class SpectrumLayout {
 
     private byte[] buffer;
     private int offset;
+    private int supportOctets;
 
-    /** Points this flyweight at the user data starting at {@code offset} of {@code buffer}. */
+    /** Points this flyweight at the user data starting at {@code offset} of {@code buffer} (layout 2). */
     public SpectrumLayout wrap(byte[] buffer, int offset) {
         this.buffer = buffer;
         this.offset = offset;
+        this.supportOctets = 0;
         return this;
     }
 
-    /** Writes the version octet, the instrument id and the sample width. */
+    /** Writes the version octet (layout 2), the instrument id and the sample width. */
     public SpectrumLayout instrument(int id, int sampleBits) {
         buffer[offset + VERSION_OFFSET] = (byte) LAYOUT_VERSION_2;
         BigEndian.put16(buffer, offset + INSTRUMENT_ID_OFFSET, id);
@@ -99,9 +111,29 @@ public final class SpectrumLayout {
         return this;
     }
 
-    /** Offset in the buffer of the gain tags (the variable part). */
+    /**
+     * Turns the packet into layout 3 with {@code b} support windows (1..{@value #MAX_SUPPORT_WINDOWS}):
+     * the version octet and the count; write each entry with {@link #supportWindow}. After the header
+     * fields.
+     */
+    public SpectrumLayout supportCount(int b) {
+        buffer[offset + VERSION_OFFSET] = (byte) LAYOUT_VERSION_3;
+        buffer[offset + SUPPORT_COUNT_OFFSET] = (byte) b;
+        supportOctets = 1 + SUPPORT_ENTRY_OCTETS * b;
+        return this;
+    }
+
+    /** Writes support window entry {@code k}: its offset from the first window and its integration periods. */
+    public SpectrumLayout supportWindow(int k, int windowOffset, int integrationPeriods) {
+        int at = offset + SUPPORT_COUNT_OFFSET + 1 + SUPPORT_ENTRY_OCTETS * k;
+        buffer[at] = (byte) windowOffset;
+        BigEndian.put16(buffer, at + 1, integrationPeriods);
+        return this;
+    }
+
+    /** Offset in the buffer of the gain tags (the variable part), after the support windows in layout 3. */
     public int variablePartOffset() {
-        return offset + GAIN_TAGS_OFFSET;
+        return offset + GAIN_TAGS_OFFSET + supportOctets;
     }
 
     /** Octets of the gain tags of {@code c} windows, 2 bits each. */

@@ -9,7 +9,8 @@ import dev.sweepline.fsw.sweep.Spectrum;
 import dev.sweepline.fsw.table.WindowTable;
 
 /**
- * Writes the user data of a spectrum packet (telemetry ICD §4, layout version 2, {@link SpectrumLayout}):
+ * Writes the user data of a spectrum packet (telemetry ICD §4, layout version 2, or 3 when the sweep had
+ * support windows, {@link SpectrumLayout}):
  * the header with the instrument's id and sample width w, gain tags (2 bits per window), saturation
  * flags (1 bit per window), then each quadrant's ADC samples of w bits, coded with CCSDS 121.0-B
  * (n = w, J = 8, x_max = 2^w − 1, one reference interval per quadrant stream) or raw (⌈w/8⌉ octets each).
@@ -60,7 +61,8 @@ public final class SpectrumPacker {
     public int maxUserDataLength() {
         int c = WindowTable.CAPACITY;
         int perQuadrant = (int) Math.max(encoder.maxEncodedBytes(c), (long) sampleOctets * c);
-        return SpectrumLayout.HEADER_LENGTH + SpectrumLayout.gainTagOctets(c) + SpectrumLayout.saturationOctets(c) + 1
+        return SpectrumLayout.HEADER_LENGTH + 1 + SpectrumLayout.SUPPORT_ENTRY_OCTETS * SpectrumLayout.MAX_SUPPORT_WINDOWS
+                + SpectrumLayout.gainTagOctets(c) + SpectrumLayout.saturationOctets(c) + 1
                 + Q * (2 + perQuadrant);
     }
 
@@ -79,6 +81,12 @@ public final class SpectrumPacker {
                         (s.ascending() ? 0 : SpectrumLayout.FLAG_DESCENDING) | (flags & SpectrumLayout.FLAG_TABLE_CHANGED))
                 .sweep((int) s.sweepNumber(), tableId)
                 .windows(s.firstWindow(), c, peak, integrationPeriods);
+        if (s.supportCount() > 0) {
+            layout.supportCount(s.supportCount());
+            for (int k = 0; k < s.supportCount(); k++) {
+                layout.supportWindow(k, s.supportEntry(k), s.supportPeriods(k));
+            }
+        }
         int p = layout.variablePartOffset();
         p = writeGainTags(s, out, p);
         p = writeSaturationFlags(s, out, p);

@@ -20,6 +20,8 @@ final class FocusBand {
     private int last;
     private int referencePeakQ8;
     private long referencePeakUnits;
+    private int referenceLowHalfQ8;
+    private int referenceHighHalfQ8;
     private boolean searching;
 
     /**
@@ -70,8 +72,25 @@ final class FocusBand {
         last = Math.min(windowCount - 1, centre + above);
         referencePeakQ8 = s.peakWindowQ8();
         referencePeakUnits = s.peakCurrentUnits();
+        referenceLowHalfQ8 = s.lowHalfWindowsQ8();
+        referenceHighHalfQ8 = s.fwhmWindowsQ8() - s.lowHalfWindowsQ8();
         valid = true;
         searching = false;
+    }
+
+    /** Refined peak of the spectrum the band was chosen from, Q8 windows. */
+    int referencePeakQ8() {
+        return referencePeakQ8;
+    }
+
+    /** Low half-width at half maximum of the spectrum the band was chosen from, Q8 windows. */
+    int referenceLowHalfQ8() {
+        return referenceLowHalfQ8;
+    }
+
+    /** High half-width at half maximum of the spectrum the band was chosen from, Q8 windows. */
+    int referenceHighHalfQ8() {
+        return referenceHighHalfQ8;
     }
 
     /** The band style's half-width: FWHM * halfWidthPerFwhm, within the band limits. */

@@ -84,6 +84,11 @@ final class GainPredictor {
         lastRange[w] = range;
     }
 
+    /** The range each window was last read in (the top range for a window never read), by window; read-only. */
+    int[] lastRanges() {
+        return lastRange;
+    }
+
     /** The range to read window {@code w} in. */
     int choose(int w) {
         if (state[w] == UNKNOWN) {

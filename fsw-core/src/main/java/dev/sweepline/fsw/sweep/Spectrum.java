@@ -51,6 +51,9 @@ public final class Spectrum {
     private int fwhmWindowsQ8;
     private int lowHalfWindowsQ8;
     private int integrationPeriods;
+    private final int[] supportEntry = new int[FocusDesign.SUPPORT_WINDOWS];
+    private final int[] supportPeriods = new int[FocusDesign.SUPPORT_WINDOWS];
+    private int supportCount;
 
     /** An empty spectrum for sweeps of {@code instrument}. */
     public Spectrum(InstrumentDescription instrument) {
@@ -174,9 +177,44 @@ public final class Spectrum {
         return peakIndex >= 0 ? currentUnits[peakIndex] : 0;
     }
 
-    /** Modulation periods integrated per window in this sweep (every step of a sweep has the same dwell). */
+    /**
+     * Modulation periods integrated per window in this sweep: every window's, or in a support-dwell focus
+     * sweep every window's but the support windows' (the floor).
+     */
     public int integrationPeriods() {
         return integrationPeriods;
+    }
+
+    /** Modulation periods integrated in entry {@code i}: a support window's dwell, else the sweep's. */
+    public int integrationPeriodsOf(int i) {
+        for (int k = 0; k < supportCount; k++) {
+            if (supportEntry[k] == i) {
+                return supportPeriods[k];
+            }
+        }
+        return integrationPeriods;
+    }
+
+    /** Support windows of a support-dwell focus sweep (0..3; 0 in every other sweep). */
+    public int supportCount() {
+        return supportCount;
+    }
+
+    /** Entry index of support window {@code k} (ascending in k). */
+    public int supportEntry(int k) {
+        return supportEntry[k];
+    }
+
+    /** Modulation periods integrated in support window {@code k}. */
+    public int supportPeriods(int k) {
+        return supportPeriods[k];
+    }
+
+    /** Sets support window {@code k} (by the scheduler, after {@link #begin}, k = 0, 1, ... in order). */
+    void support(int k, int entry, int periods) {
+        supportEntry[k] = entry;
+        supportPeriods[k] = periods;
+        supportCount = k + 1;
     }
 
     /** Sets the sweep's dwell (by the scheduler, after {@link #begin}). */
@@ -193,6 +231,7 @@ public final class Spectrum {
         this.ascending = ascending;
         this.startMicros = startMicros;
         this.endMicros = startMicros;
+        this.supportCount = 0;
         for (int i = 0; i < count; i++) {
             gainRange[i] = 0;
             status[i] = STATUS_MISSING;

@@ -45,6 +45,10 @@ public final class SweepScheduler {
     private int sweepFirst;
     private int sweepSteps;
     private int sweepPeriods;
+    /** Support-dwell focus sweep: its support windows (ascending), how many (0: none), and their dwell. */
+    private final int[] supportWindow = new int[FocusDesign.SUPPORT_WINDOWS];
+    private int supportCount;
+    private int supportPeriods;
     private boolean sweepAscending;
     private boolean sweepInterleaved;
     private int stepsIssued;
@@ -129,7 +133,7 @@ public final class SweepScheduler {
         out.dacHigh = high;
         out.gainRange = range;
         out.settleMicros = (int) Math.min(Integer.MAX_VALUE, settle);
-        out.integrationPeriods = sweepPeriods;
+        out.integrationPeriods = periodsOf(window);
         out.hvEnabled = hvPermitted; // the host's HV permission (arm-then-fire on a real bench)
         lastStep.copyFrom(out);
         hvLowCode = low;
@@ -190,11 +194,41 @@ public final class SweepScheduler {
                         first, last, SettleTime.micros(params, hvLowCode, hvHighCode, dacLow[start], dacHigh[start]))
                 : params.integrationPeriods;
         sweepInterleaved = !survey && params.interleavedFocus();
+        supportCount = 0;
+        if (!survey && params.supportDwell() && !band.searching()) {
+            chooseSupport(first, last, SettleTime.micros(params, hvLowCode, hvHighCode, dacLow[start], dacHigh[start]));
+        }
         stepsIssued = 0;
         awaitingWindow = NO_WINDOW;
         building.begin(sweepNumber + 1, mode, first, sweepSteps, sweepAscending, nowMicros);
         building.integrationPeriods(sweepPeriods);
+        for (int k = 0; k < supportCount; k++) {
+            building.support(k, supportWindow[k] - first, supportPeriods);
+        }
         sweepActive = true;
+    }
+
+    /**
+     * Support dwell (R23): the floor for every window of the band {@code first..last}, and the support
+     * windows of the band's reference peak sharing the rest of the sweep's integration; none when the
+     * share would not exceed the floor.
+     */
+    private void chooseSupport(int first, int last, long firstSettleMicros) {
+        sweepPeriods = params.focusFloorPeriods;
+        int n = design.supportWindows(band.referencePeakQ8(), band.referenceLowHalfQ8(), band.referenceHighHalfQ8(),
+                first, last, gain.lastRanges(), supportWindow);
+        supportPeriods = design.supportPeriods(params, dacLow, dacHigh, first, last, firstSettleMicros, n);
+        supportCount = supportPeriods > sweepPeriods ? n : 0;
+    }
+
+    /** The dwell of {@code window} in the present sweep: a support window's, else the sweep's. */
+    private int periodsOf(int window) {
+        for (int k = 0; k < supportCount; k++) {
+            if (supportWindow[k] == window) {
+                return supportPeriods;
+            }
+        }
+        return sweepPeriods;
     }
 
     /**

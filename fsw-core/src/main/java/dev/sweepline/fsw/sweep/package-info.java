@@ -142,6 +142,18 @@
  *     mid-sweep, and no rail change exceeds two windows (each step's settle is its own, R4). Surveys stay
  *     monotonic. The spectrum packet is in window order either way. <i>InterleavedOrderTest; hw-sim
  *     DesignStyleRunTest (the ground's errors).</i></li>
+ * <li><b>R23 Support dwell (opt-in).</b> With {@code focusStyle} bit 2 set (4..7, with either band and
+ *     either order) every window of a focus sweep dwells {@code focusFloorPeriods}, and three support
+ *     windows (the low flank, the refined peak and the high flank of the peak the band was chosen from,
+ *     at factors of the low and high half-widths at half maximum looked up by the half-width in windows,
+ *     {@link FocusDesign#supportWindows}; a flank moves out to the first window within 3 read last in a
+ *     more sensitive gain range, whose read noise is lower) dwell the floor plus an equal third of what the sweep's
+ *     integration leaves after the floors: {@code integrationPeriods} times the band's windows when
+ *     {@code focusBudgetMicros} is 0, else the budget after the settles; at most the dwell limit. Each
+ *     step's dwell travels in its step command (hardware ICD §3.1) and its settle is its own (R4). An edge
+ *     search sweep dwells the table's dwell everywhere. The spectrum of a sweep with support windows is
+ *     packet layout 3 (telemetry ICD §4), which lists them with their dwell; every other stays layout 2.
+ *     <i>SupportDwellTest, AllocationTest; hw-sim SupportDwellReachTest, SupportDwellRunTest.</i></li>
  * </ol>
  *
  * <h2>Choices worth knowing</h2>

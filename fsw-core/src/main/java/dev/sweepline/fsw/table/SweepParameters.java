@@ -23,6 +23,12 @@ public final class SweepParameters {
      * drifting during the sweep reads as the wind at mid-sweep to first order.
      */
     public static final int FOCUS_STYLE_INTERLEAVED = 2;
+    /**
+     * {@link #focusStyle} flag, added to any of the above (4..7): support dwell. Every window of a focus
+     * band dwells {@link #focusFloorPeriods}; three support windows (low flank, peak, high flank,
+     * FocusDesign) share the rest of the sweep's integration equally (docs/focus-design.md, "Support dwell").
+     */
+    public static final int FOCUS_STYLE_SUPPORT_DWELL = 4;
     /** Upper limit of {@link #focusBudgetMicros}: 10 s (design limit: a focus sweep far longer than the wind's changes teaches little). */
     public static final int MAX_FOCUS_BUDGET_MICROS = 10_000_000;
     /** Upper limit of {@link #robustnessMarginWindows} (design limit: a quarter of the table capacity). */
@@ -82,13 +88,16 @@ public final class SweepParameters {
     public int prominenceFractionQ8;
     /**
      * How focus bands are chosen and stepped: {@link #FOCUS_STYLE_BAND} (the default) or
-     * {@link #FOCUS_STYLE_DESIGN}, either plus {@link #FOCUS_STYLE_INTERLEAVED} (0..3).
+     * {@link #FOCUS_STYLE_DESIGN}, either plus {@link #FOCUS_STYLE_INTERLEAVED}, any of these plus
+     * {@link #FOCUS_STYLE_SUPPORT_DWELL} (0..7).
      */
     public int focusStyle;
     /**
      * Design style: the sweep-time budget of a focus sweep, microseconds; the dwell of each window is
      * the most whole modulation periods that fit it, never fewer than {@link #integrationPeriods}
-     * (0: always {@link #integrationPeriods}). Ignored in band style.
+     * (0: always {@link #integrationPeriods}). Ignored in band style. In support dwell, the sweep's
+     * time, whose integration after the settles the windows share (0: {@link #integrationPeriods} times
+     * the band's windows of integration).
      */
     public int focusBudgetMicros;
     /** Design style: windows added on each side of the design's half-width, for the peak's motion between sweeps. */
@@ -105,6 +114,12 @@ public final class SweepParameters {
      * fuller (less bandwidth) and delays a packet more (commands.md §4.1).
      */
     public int engineeringFlushSeconds;
+    /**
+     * Support dwell ({@link #FOCUS_STYLE_SUPPORT_DWELL}): the dwell of every focus window that is not a
+     * support window, 1..{@link #integrationPeriods} modulation periods; ignored (and may be 0) in any
+     * other style.
+     */
+    public int focusFloorPeriods;
 
     /**
      * The flight defaults of the tunables that are no instrument fact (values and reasons in the field
@@ -166,6 +181,7 @@ public final class SweepParameters {
         robustnessMarginWindows = other.robustnessMarginWindows;
         surveyIntegrationPeriods = other.surveyIntegrationPeriods;
         engineeringFlushSeconds = other.engineeringFlushSeconds;
+        focusFloorPeriods = other.focusFloorPeriods;
     }
 
     /** True when focus bands and dwell are the design style's ({@link #FOCUS_STYLE_DESIGN}, interleaved or not). */
@@ -176,6 +192,16 @@ public final class SweepParameters {
     /** True when focus sweeps step in the interleaved order ({@link #FOCUS_STYLE_INTERLEAVED}). */
     public boolean interleavedFocus() {
         return (focusStyle & FOCUS_STYLE_INTERLEAVED) != 0;
+    }
+
+    /** True when focus sweeps dwell longer on three support windows ({@link #FOCUS_STYLE_SUPPORT_DWELL}). */
+    public boolean supportDwell() {
+        return (focusStyle & FOCUS_STYLE_SUPPORT_DWELL) != 0;
+    }
+
+    /** True when the floor dwell is unset (0): no table image version 4 needed. */
+    public boolean defaultFloor() {
+        return focusFloorPeriods == 0;
     }
 
     /** True when the focus and survey styles are today's (table image version 1 holds this set). */
@@ -233,7 +259,9 @@ public final class SweepParameters {
             || significanceSigmas > 100 || prominenceFractionQ8 < 0 || prominenceFractionQ8 > 256) {
             return TableStatus.BAD_NOISE;
         }
-        if (focusStyle < FOCUS_STYLE_BAND || focusStyle > (FOCUS_STYLE_DESIGN | FOCUS_STYLE_INTERLEAVED)
+        if (focusStyle < FOCUS_STYLE_BAND
+            || focusStyle > (FOCUS_STYLE_DESIGN | FOCUS_STYLE_INTERLEAVED | FOCUS_STYLE_SUPPORT_DWELL)
+            || focusFloorPeriods < (supportDwell() ? 1 : 0) || focusFloorPeriods > integrationPeriods
             || focusBudgetMicros < 0 || focusBudgetMicros > MAX_FOCUS_BUDGET_MICROS
             || robustnessMarginWindows < 0 || robustnessMarginWindows > MAX_ROBUSTNESS_MARGIN_WINDOWS
             || surveyIntegrationPeriods < 0 || surveyIntegrationPeriods > integrationPeriods) {

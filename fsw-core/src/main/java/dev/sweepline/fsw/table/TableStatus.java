@@ -42,7 +42,7 @@ public final class TableStatus {
     public static final int SETTLE_TOO_SHORT = 16;
     /** Parameter: edge-search reach outside 0..{@link WindowTable#CAPACITY} windows. */
     public static final int BAD_EDGE_SEARCH = 17;
-    /** Parameter: focus style, sweep-time budget, robustness margin or survey dwell outside its range. */
+    /** Parameter: focus style, sweep-time budget, robustness margin, survey dwell or focus floor dwell outside its range. */
     public static final int BAD_STYLE = 18;
     /** Parameter: engineering flush interval outside 0..600 s (SweepParameters#engineeringFlushSeconds). */
     public static final int BAD_FLUSH = 19;

@@ -103,10 +103,10 @@ class CommandFuzzTest {
                     return m == 0 || m > 7 ? CommandReason.ARGUMENT_RANGE : CommandReason.OK;
                 }
                 case 0x30:
-                    return u16(b, 11) + args - 2 > 1182 ? CommandReason.ARGUMENT_RANGE : CommandReason.OK;
+                    return u16(b, 11) + args - 2 > 1186 ? CommandReason.ARGUMENT_RANGE : CommandReason.OK;
                 case 0x31: {
                     int l = u16(b, 11);
-                    return l < 142 || l > 1182 ? CommandReason.ARGUMENT_RANGE : CommandReason.OK;
+                    return l < 142 || l > 1186 ? CommandReason.ARGUMENT_RANGE : CommandReason.OK;
                 }
                 case 0x32:
                     return CommandReason.TABLE_NOT_VERIFIED; // random loads never make an intact image
@@ -114,7 +114,7 @@ class CommandFuzzTest {
                     int copy = b[11] & 0xFF;
                     int off = u16(b, 12);
                     int len = u16(b, 14);
-                    int available = copy == 0 ? 650 : 1182; // default image 138 + 4*128; pending buffer (commands.md §4.1: 158 + 4*256, version 3)
+                    int available = copy == 0 ? 650 : 1186; // default image 138 + 4*128; pending buffer (commands.md §4.1: 162 + 4*256, version 4)
                     return copy > 1 || len < 1 || len > 192 || off + len > available
                         ? CommandReason.ARGUMENT_RANGE : CommandReason.OK;
                 }

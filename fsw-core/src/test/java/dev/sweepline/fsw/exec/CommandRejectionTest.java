@@ -109,7 +109,7 @@ class CommandRejectionTest {
         assertRejected(tc.command(CommandCode.TABLE_VERIFY, TcBuilder.u16(137)), CommandReason.ARGUMENT_RANGE);
         assertRejected(tc.command(CommandCode.TABLE_DUMP, (byte) 2, (byte) 0, (byte) 0, (byte) 0, (byte) 1),
                 CommandReason.ARGUMENT_RANGE);
-        byte[] load = TcBuilder.load(new byte[1200], 1100, 100); // ends at 1200 > 1182 (commands.md §4.1)
+        byte[] load = TcBuilder.load(new byte[1200], 1100, 100); // ends at 1200 > 1186 (commands.md §4.1)
         assertRejected(tc.command(CommandCode.TABLE_LOAD, load), CommandReason.ARGUMENT_RANGE);
     }
 

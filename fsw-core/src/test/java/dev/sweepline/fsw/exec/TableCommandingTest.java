@@ -112,6 +112,35 @@ class TableCommandingTest {
     }
 
     @Test
+    void shouldWriteTheFocusFloorInVersionFourOnly() {
+        int n = DemoCup.table().count();
+        ParameterTable t = ParameterTable.of(DemoCup.table(), DemoCup.parameters());
+        t.sweep.focusStyle = 7;
+        t.sweep.focusFloorPeriods = 2;
+        byte[] image = new byte[TableImage.MAX_OCTETS];
+        image = java.util.Arrays.copyOf(image, TableImage.encode(t, image));
+        assertEquals(TableImage.VERSION_FLOOR, image[2]); // commands.md §4.1: a floor dwell needs version 4
+        assertEquals(162 + 4 * n, image.length); // §4.1: L = 162 + 4 n in version 4
+        assertEquals(7, image[136 + 4 * n + 3]); // §4.1: focusStyle first of the styles
+        assertEquals(2, image[136 + 4 * n + 16 + 4 + 3]); // §4.1: the floor after the styles and the flush
+        ParameterTable back = new ParameterTable();
+        assertEquals(0, TableImage.decode(image, image.length, back, DemoCup.INSTRUMENT.limits()));
+        assertEquals(2, back.sweep.focusFloorPeriods);
+        assertEquals(7, back.sweep.focusStyle);
+        assertEquals(0, back.sweep.engineeringFlushSeconds);
+        // a version-3 image loads with no floor dwell (0)
+        byte[] minute = flushImage(60);
+        assertEquals(0, TableImage.decode(minute, minute.length, back, DemoCup.INSTRUMENT.limits()));
+        assertEquals(0, back.sweep.focusFloorPeriods);
+        // support dwell without a floor is refused: 18 BAD_STYLE (§4.2)
+        t.sweep.focusFloorPeriods = 0;
+        byte[] bad = new byte[TableImage.MAX_OCTETS];
+        bad = java.util.Arrays.copyOf(bad, TableImage.encode(t, bad));
+        assertEquals(TableImage.VERSION_STYLES, bad[2]);
+        assertEquals(TableStatus.BAD_STYLE, TableImage.decode(bad, bad.length, back, DemoCup.INSTRUMENT.limits()));
+    }
+
+    @Test
     void shouldRefuseAnEngineeringFlushOutsideItsRange() {
         // commands.md §4.1/§4.2: 0 (the build's) or 1..600 s; else TableStatus 19 BAD_FLUSH
         for (int seconds : new int[] {1, 600}) {

@@ -38,6 +38,11 @@ public final class SpectrumFill {
         s.setPeak(peakIndex, peakIndex, peakWindowQ8, 0, 0);
     }
 
+    /** Makes entry {@code entry} support window {@code k} dwelling {@code periods} (a support-dwell sweep). */
+    public static void support(Spectrum s, int k, int entry, int periods) {
+        s.support(k, entry, periods);
+    }
+
     /** Ends the sweep at {@code endMicros}. */
     public static void end(Spectrum s, long endMicros) {
         s.end(endMicros);
@@ -48,6 +53,9 @@ public final class SpectrumFill {
         to.begin(from.sweepNumber(), from.mode(), from.firstWindow(), from.count(), from.ascending(),
                 from.startMicros());
         to.integrationPeriods(from.integrationPeriods());
+        for (int k = 0; k < from.supportCount(); k++) {
+            to.support(k, from.supportEntry(k), from.supportPeriods(k));
+        }
         SampleReply r = new SampleReply();
         for (int i = 0; i < from.count(); i++) {
             for (int q = 0; q < Q; q++) {

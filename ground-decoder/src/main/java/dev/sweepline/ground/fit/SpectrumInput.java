@@ -5,7 +5,8 @@ import java.util.Arrays;
 
 /**
  * The windows of one spectrum that the fit may use: calibrated edges, summed current and its 1σ, and the
- * four quadrant currents with their 1σ. Saturated windows and windows without known edges are left out
+ * four quadrant currents with their 1σ (each window's noise for its own integration periods, ICD §4
+ * layout 3). Saturated windows and windows without known edges are left out
  * and counted. Arrays are not copied: treat them as read-only.
  *
  * @param lowVolts            low edge per window, volts
@@ -69,7 +70,7 @@ public record SpectrumInput(double[] lowVolts, double[] highVolts, double[] tota
             double var = 0;
             for (int q = 0; q < DecodedSpectrum.QUADRANTS; q++) {
                 double a = s.currentAmps()[q][i];
-                double v = noise.quadrantVariance(a, s.gainRange()[i], s.integrationPeriods());
+                double v = noise.quadrantVariance(a, s.gainRange()[i], s.integrationPeriodsOf(i));
                 qa[q][k] = a;
                 qs[q][k] = Math.sqrt(v);
                 tot[k] += a;

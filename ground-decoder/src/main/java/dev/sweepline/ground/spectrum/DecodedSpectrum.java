@@ -19,7 +19,8 @@ import dev.sweepline.ground.packet.CucTime;
  * @param firstWindow        first window index f
  * @param windowCount        window count c
  * @param peakQ8             refined proton peak, window units Q8; 0xFFFF when none
- * @param integrationPeriods modulation periods (the instrument's {@code modulationPeriodMicros}) integrated per window
+ * @param integrationPeriods modulation periods (the instrument's {@code modulationPeriodMicros}) integrated per
+ *                           window; in layout 3 per window but the support windows (see {@code windowPeriods})
  * @param compression        0x00 raw or 0x01 CCSDS 121
  * @param gainRange          gain range 0 .. ranges − 1 of the instrument, per window
  * @param saturated          saturation flag per window
@@ -28,15 +29,17 @@ import dev.sweepline.ground.packet.CucTime;
  * @param totalAmps          sum of the four quadrant currents per window, amperes
  * @param lowVolts           low window edge per window, volts; NaN when the table is not known
  * @param highVolts          high window edge per window, volts; NaN when the table is not known
- * @param layoutVersion      spectrum packet layout, 1 or 2 (ICD §4)
+ * @param layoutVersion      spectrum packet layout, 1, 2 or 3 (ICD §4)
  * @param instrument         the instrument the packet names (layout 2), or the demo cup (layout 1),
  *                           whose description gave the currents and edges
+ * @param windowPeriods      modulation periods integrated per window: {@code integrationPeriods}, or a
+ *                           support window's own (layout 3)
  */
 public record DecodedSpectrum(CucTime time, int apid, int sequenceCount, int mode, boolean steppedDown,
         boolean tableChanged, int sweep, int tableId, int firstWindow, int windowCount, int peakQ8,
         int integrationPeriods, int compression, int[] gainRange, boolean[] saturated, int[][] adcCounts,
         double[][] currentAmps, double[] totalAmps, double[] lowVolts, double[] highVolts, int layoutVersion,
-        GroundInstrument instrument) {
+        GroundInstrument instrument, int[] windowPeriods) {
     /** Peak value meaning "no peak" (ICD §4). */
     public static final int NO_PEAK = 0xFFFF;
     /** Mode code of survey (ICD §4). */
@@ -54,6 +57,11 @@ public record DecodedSpectrum(CucTime time, int apid, int sequenceCount, int mod
     /** Sample width w, bits: the packet's, which equals its instrument's ADC width (ICD §4). */
     public int sampleBits() {
         return instrument.sampleBits();
+    }
+
+    /** Modulation periods integrated in window {@code i} (0..c−1). */
+    public int integrationPeriodsOf(int i) {
+        return windowPeriods[i];
     }
 
     /** True when a proton peak was found. */

@@ -7,10 +7,15 @@ public enum SpectrumError {
     /** The secondary header flag is 0 although ICD §3.1 requires the CUC time. */
     NO_SECONDARY_HEADER,
     /**
-     * The first user-data octet has bit 7 set but is not 0x82: a layout version this ground does not
-     * know (ICD §4: 0x82 is layout 2; layout 1 begins with the mode, bit 7 clear).
+     * The first user-data octet has bit 7 set but is neither 0x82 nor 0x83: a layout version this ground
+     * does not know (ICD §4: 0x82 is layout 2, 0x83 layout 3; layout 1 begins with the mode, bit 7 clear).
      */
     UNKNOWN_LAYOUT,
+    /**
+     * Layout 3 with a support window count b outside 1..3, a support window offset that is not inside
+     * 0..c−1 or not above the previous one, or a support window of 0 integration periods (ICD §4).
+     */
+    BAD_SUPPORT_WINDOWS,
     /**
      * The instrument id (layout 2) is not one the ground has a description for, or a layout-1 spectrum
      * (the demo cup's, ICD §4) reached a ground configured without the demo cup.

@@ -5,8 +5,10 @@ import dev.sweepline.ground.frame.BigEndian;
 /**
  * The fixed fields at the start of a spectrum packet's user data, in either layout (ICD §4). The first
  * octet tells them apart: layout 2 begins with {@code 0x82} (bit 7 set), then the instrument id and the
- * sample width; layout 1 (recorded demo-cup telemetry) begins with the mode, bit 7 clear, and has
- * neither, so it is the demo cup's with 16-bit samples.
+ * sample width; layout 3 (a focus sweep with support windows) begins with {@code 0x83} and is layout 2
+ * with the support windows inserted after the integration periods; layout 1 (recorded demo-cup
+ * telemetry) begins with the mode, bit 7 clear, and has neither, so it is the demo cup's with 16-bit
+ * samples.
  *
  * <pre>
  * layout 2   layout 1   octets  field
@@ -22,6 +24,11 @@ import dev.sweepline.ground.frame.BigEndian;
  * 14         10          2       peak, window units Q8 (0xFFFF none)
  * 16         12          2       integration periods per window
  * 18         14          ...     gain-range tags, saturation flags, compression, quadrant streams
+ *
+ * layout 3: as layout 2 to offset 17, then
+ * 18                     1       support windows b (1..3)
+ * 19                     3 b     b × [window offset from f (1), integration periods (2)]
+ * 19 + 3 b               ...     gain-range tags, ...
  * </pre>
  *
  * <p>A flyweight: {@link #wrap} points it at a packet's user data and the accessors read the fields from
@@ -30,6 +37,12 @@ import dev.sweepline.ground.frame.BigEndian;
 final class SpectrumHeader {
     /** First octet of layout 2: bit 7 set (versioned), bits 6..0 the version 2 (ICD §4). */
     static final int LAYOUT_2_MARKER = 0x82;
+    /** First octet of layout 3: bit 7 set, bits 6..0 the version 3 (ICD §4). */
+    static final int LAYOUT_3_MARKER = 0x83;
+    /** Layout 3: octets of one support window entry, offset (1) and integration periods (2) (ICD §4). */
+    static final int SUPPORT_ENTRY_OCTETS = 3;
+    /** Layout 3: most support windows (ICD §4). */
+    static final int MAX_SUPPORT_WINDOWS = 3;
     /** Bit 7 of the first octet: set in every versioned layout (ICD §4). */
     static final int VERSIONED_BIT = 0x80;
     /** Fixed octets of layout 1, before the gain tags (ICD §4). */
@@ -41,12 +54,15 @@ final class SpectrumHeader {
     /** Flags bit 6: the first sweep flown with a newly applied table (ICD §4). */
     static final int TABLE_CHANGED = 0x40;
 
-    /** The fixed octets the layout announced by first octet {@code first} has, or −1 for an unknown layout. */
+    /**
+     * The fixed octets the layout announced by first octet {@code first} has at least (layout 3: up to its
+     * support window count b), or −1 for an unknown layout.
+     */
     static int octetsOf(int first) {
         if ((first & VERSIONED_BIT) == 0) {
             return LAYOUT_1_OCTETS;
         }
-        return first == LAYOUT_2_MARKER ? LAYOUT_2_OCTETS : -1;
+        return first == LAYOUT_2_MARKER ? LAYOUT_2_OCTETS : first == LAYOUT_3_MARKER ? LAYOUT_2_OCTETS + 1 : -1;
     }
 
     private byte[] b;
@@ -55,19 +71,37 @@ final class SpectrumHeader {
     /** Offset of the mode octet: the fields from there on are those of layout 1. */
     private int m;
     private boolean two;
+    private boolean three;
 
     /** Reads the fixed fields at user-data offset {@code u}; {@link #octetsOf} octets must be there. */
     SpectrumHeader wrap(byte[] buf, int userData) {
         this.b = buf;
         this.u = userData;
-        this.two = (buf[userData] & 0xFF) == LAYOUT_2_MARKER;
+        int first = buf[userData] & 0xFF;
+        this.three = first == LAYOUT_3_MARKER;
+        this.two = first == LAYOUT_2_MARKER || three;
         this.m = two ? userData + LAYOUT_2_OCTETS - LAYOUT_1_OCTETS : userData;
         return this;
     }
 
-    /** 1 or 2. */
+    /** 1, 2 or 3. */
     int layout() {
-        return two ? 2 : 1;
+        return three ? 3 : two ? 2 : 1;
+    }
+
+    /** Support windows b (layout 3; 0 in the others). */
+    int supportCount() {
+        return three ? b[u + LAYOUT_2_OCTETS] & 0xFF : 0;
+    }
+
+    /** Offset from f of support window {@code k} (layout 3, k < b, within {@link #octets()}). */
+    int supportOffset(int k) {
+        return b[u + LAYOUT_2_OCTETS + 1 + SUPPORT_ENTRY_OCTETS * k] & 0xFF;
+    }
+
+    /** Integration periods of support window {@code k} (layout 3). */
+    int supportPeriods(int k) {
+        return BigEndian.u16(b, u + LAYOUT_2_OCTETS + 2 + SUPPORT_ENTRY_OCTETS * k);
     }
 
     /** The instrument id (layout 2), 0 in layout 1 (which names none). */
@@ -115,14 +149,14 @@ final class SpectrumHeader {
         return BigEndian.u16(b, m + 10);
     }
 
-    /** Modulation periods per window. */
+    /** Modulation periods per window (layout 3: per window but the support windows). */
     int integrationPeriods() {
         return BigEndian.u16(b, m + 12);
     }
 
-    /** Length of the fixed fields: where the gain tags start. */
+    /** Length of the fixed fields: where the gain tags start (layout 3: after the b support windows). */
     int octets() {
-        return two ? LAYOUT_2_OCTETS : LAYOUT_1_OCTETS;
+        return three ? LAYOUT_2_OCTETS + 1 + SUPPORT_ENTRY_OCTETS * supportCount() : two ? LAYOUT_2_OCTETS : LAYOUT_1_OCTETS;
     }
 
     boolean steppedDown() {

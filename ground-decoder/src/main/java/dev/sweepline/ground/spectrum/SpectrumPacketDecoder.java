@@ -5,10 +5,12 @@ import dev.sweepline.ground.instrument.GroundInstrument;
 import dev.sweepline.ground.instrument.InstrumentSet;
 import dev.sweepline.ground.packet.CucTime;
 import dev.sweepline.ground.packet.SpacePacketHeader;
+import java.util.Arrays;
 
 /**
- * Decodes a spectrum packet (APIDs 0x100, 0x101) per ICD §4, layout 2 or layout 1 ({@link
- * SpectrumHeader} gives the fixed fields of both). After the fixed fields:
+ * Decodes a spectrum packet (APIDs 0x100, 0x101) per ICD §4, layout 2, its support-dwell form layout 3
+ * (the support windows and their dwell after the fixed fields), or layout 1 ({@link SpectrumHeader} gives
+ * the fixed fields of all three). After the fixed fields:
  *
  * <pre>
  *  ⌈c/4⌉   gain-range tags, 2 bits per window, MSB first: 0 .. ranges − 1 of the instrument
@@ -133,6 +135,29 @@ public final class SpectrumPacketDecoder {
         }
         if (h.windowCount() < 1 || h.windowCount() > MAX_WINDOWS) {
             return fail(SpectrumError.BAD_WINDOW_COUNT, "c = " + h.windowCount());
+        }
+        if (h.layout() == 3 && (h.supportCount() < 1 || h.supportCount() > SpectrumHeader.MAX_SUPPORT_WINDOWS)) {
+            return fail(SpectrumError.BAD_SUPPORT_WINDOWS, "b = " + h.supportCount() + ", not 1.."
+                    + SpectrumHeader.MAX_SUPPORT_WINDOWS);
+        }
+        if (end - u < h.octets()) {
+            return fail(SpectrumError.LENGTH_BEYOND_DATA, "support windows of a packet of " + len + " octets");
+        }
+        if (h.integrationPeriods() < 1 && h.layout() == 3) {
+            return fail(SpectrumError.BAD_SUPPORT_WINDOWS, "floor dwell of 0 periods");
+        }
+        Arrays.fill(v.windowPeriods, 0, h.windowCount(), h.integrationPeriods());
+        for (int k = 0, previous = -1; k < h.supportCount(); k++) {
+            int at = h.supportOffset(k);
+            if (at <= previous || at >= h.windowCount()) {
+                return fail(SpectrumError.BAD_SUPPORT_WINDOWS, "support window " + (k + 1) + " at offset " + at
+                        + (at >= h.windowCount() ? " beyond c = " + h.windowCount() : " not above " + previous));
+            }
+            if (h.supportPeriods(k) < 1) {
+                return fail(SpectrumError.BAD_SUPPORT_WINDOWS, "support window " + (k + 1) + " of 0 periods");
+            }
+            v.windowPeriods[at] = h.supportPeriods(k);
+            previous = at;
         }
         v.apid = apid;
         v.sequenceCount = SpacePacketHeader.sequenceCount(pkt, off);

@@ -37,6 +37,8 @@ public final class SpectrumView {
     final double[] totalAmps = new double[MAX];
     final double[] lowVolts = new double[MAX];
     final double[] highVolts = new double[MAX];
+    /** Integration periods of each window: the packet's, or a support window's (layout 3). */
+    final int[] windowPeriods = new int[MAX];
 
     /** CUC coarse time of the sweep's first step, seconds. */
     public long coarseSeconds() {
@@ -118,6 +120,11 @@ public final class SpectrumView {
         return totalAmps[i];
     }
 
+    /** Modulation periods integrated in window {@code i}: the packet's dwell, or its own in layout 3. */
+    public int integrationPeriods(int i) {
+        return windowPeriods[i];
+    }
+
     /** Low edge of window {@code i}, volts; NaN when the table is not known. */
     public double lowVolts(int i) {
         return lowVolts[i];
@@ -141,6 +148,6 @@ public final class SpectrumView {
                 (flags & SpectrumHeader.STEPPED_DOWN) != 0, (flags & SpectrumHeader.TABLE_CHANGED) != 0, sweep, tableId,
                 firstWindow, c, peakQ8, integrationPeriods, compression, Arrays.copyOf(gainRange, c),
                 Arrays.copyOf(saturated, c), adc, amps, Arrays.copyOf(totalAmps, c), Arrays.copyOf(lowVolts, c),
-                Arrays.copyOf(highVolts, c), layoutVersion, instrument);
+                Arrays.copyOf(highVolts, c), layoutVersion, instrument, Arrays.copyOf(windowPeriods, c));
     }
 }

@@ -12,9 +12,10 @@ import java.util.Map;
 /**
  * The window tables the ground knows, by table id: the built-in table (id 0), which is each
  * instrument's own default table (FORMAT.md {@code windows}), and any uplinked table image registered
- * from its file (commands.md §4.1: marker "ST", format version 1, 2 or 3 at offset 2, length L at offset 4
+ * from its file (commands.md §4.1: marker "ST", format version 1, 2, 3 or 4 at offset 2, length L at offset 4
  * (138 + 4 n in version 1, 154 + 4 n in version 2, whose 16 octets of sweep styles follow the windows,
- * 158 + 4 n in version 3, whose engineering flush interval, seconds, signed 32-bit, follows the styles),
+ * 158 + 4 n in version 3, whose engineering flush interval, seconds, signed 32-bit, follows the styles,
+ * 162 + 4 n in version 4, whose focus floor dwell follows the flush),
  * window count n at offset 6, windows from offset 136 as low/high DAC codes, CRC-16/IBM-3740 of octets 0..L-3 at L-2, which is also
  * the table id). An image holds DAC codes and names no instrument, so its edges are the codes put
  * through the calibration of the instrument whose spectrum asks (telemetry ICD §8). Edges are
@@ -28,6 +29,8 @@ public final class WindowCatalogue {
     private static final int STYLE_OCTETS = 16;
     /** Octets of the version-3 engineering flush field after the styles (commands.md §4.1). */
     private static final int FLUSH_OCTETS = 4;
+    /** Octets of the version-4 focus floor dwell after the flush (commands.md §4.1). */
+    private static final int FLOOR_OCTETS = 4;
 
     /** Engineering flush interval, seconds, of uplinked tables by id (0: the build's). */
     private final Map<Integer, Integer> flushSeconds = new HashMap<>();
@@ -50,8 +53,9 @@ public final class WindowCatalogue {
         int length = BigEndian.u16(image, 4);
         int n = BigEndian.u16(image, 6);
         int version = image[2] & 0xFF;
-        int extension = (version >= 2 ? STYLE_OCTETS : 0) + (version == 3 ? FLUSH_OCTETS : 0);
-        if (length != image.length || n < 1 || n > MAX_WINDOWS || version < 1 || version > 3
+        int extension = (version >= 2 ? STYLE_OCTETS : 0) + (version >= 3 ? FLUSH_OCTETS : 0)
+            + (version == 4 ? FLOOR_OCTETS : 0);
+        if (length != image.length || n < 1 || n > MAX_WINDOWS || version < 1 || version > 4
             || length != WINDOWS_AT + 2 + 4 * n + extension) {
             return -1;
         }
@@ -65,7 +69,7 @@ public final class WindowCatalogue {
             codes[1][w] = BigEndian.u16(image, WINDOWS_AT + 4 * w + 2);
         }
         uplinked.put(crc, codes);
-        flushSeconds.put(crc, version == 3 ? (int) BigEndian.u32(image, WINDOWS_AT + 4 * n + STYLE_OCTETS) : 0);
+        flushSeconds.put(crc, version >= 3 ? (int) BigEndian.u32(image, WINDOWS_AT + 4 * n + STYLE_OCTETS) : 0);
         return crc;
     }
 

@@ -1,12 +1,14 @@
 /**
- * Spectrum packets (APIDs 0x100 survey, 0x101 focus) of telemetry ICD §4, layouts 2 and 1: fields, the
+ * Spectrum packets (APIDs 0x100 survey, 0x101 focus) of telemetry ICD §4, layouts 3, 2 and 1: fields, the
  * instrument they name, quadrant sample streams of w-bit samples, ADC counts to amperes and window edges
  * with that instrument's description, and the window catalogue of uplinked tables.
  *
  * <h2>Design note</h2>
  * <p>{@link dev.sweepline.ground.spectrum.SpectrumPacketDecoder} walks the packet once, checking every
  * length against the packet's end. The first user-data octet gives the layout ({@code SpectrumHeader}):
- * {@code 0x82} is layout 2, with the instrument id and the sample width w; bit 7 clear is layout 1, which
+ * {@code 0x82} is layout 2, with the instrument id and the sample width w; {@code 0x83} layout 3, layout 2
+ * with the support windows of a support-dwell focus sweep and their own integration periods after the
+ * fixed fields (each window's dwell is exposed, and the fit weights each window by it); bit 7 clear is layout 1, which
  * recorded telemetry of the demo cup has (16-bit samples, no id). The instrument is looked up in the
  * ground's {@link dev.sweepline.ground.instrument.InstrumentSet} by id (layout 1: the demo cup by name); its
  * description gives the gain ranges the tags may name, the ADC width w must equal, the pedestal and LSB of
@@ -21,7 +23,8 @@
  *   <li>S1 every field of ICD §4 decodes, in both layouts: golden spectrum frames ({@code GoldenFrameDecodeTest},
  *       layout 1), golden layout-2 packets of both built-in instruments, 20-bit raw and CCSDS 121 with n = 20,
  *       made with python3 from the ICD and cross-checked with libaec ({@code SpectrumLayoutTwoTest}), and
- *       field-by-field checks ({@code SpectrumPacketDecoderTest}).</li>
+ *       field-by-field checks ({@code SpectrumPacketDecoderTest}); layout 3 made from the golden layout-2
+ *       packet by the ICD's rule ({@code SpectrumLayoutThreeTest}).</li>
  *   <li>S2 currents follow ICD §4 "Converting to current" with the instrument's pedestal, ADC width and
  *       full scales (values computed independently with python3: {@code InstrumentCurrentTest},
  *       {@code SpectrumLayoutTwoTest}).</li>
@@ -29,9 +32,10 @@
  *       ({@code DefaultWindowTableTest}); an uplinked table's codes are calibrated with the instrument of the
  *       spectrum that names it ({@code WindowCatalogueTest}).</li>
  *   <li>S4 every malformed packet gives a {@link dev.sweepline.ground.spectrum.SpectrumError}, never an
- *       exception ({@code SpectrumPacketDecoderTest}, {@code SpectrumLayoutTwoTest}; {@code SpectrumMutationTest}:
- *       20,000 damaged copies of the golden packets of both layouts, recorded seed, 9,124 decode and the rest
- *       are refused under ten different reasons; the frame-level fuzz test).</li>
+ *       exception ({@code SpectrumPacketDecoderTest}, {@code SpectrumLayoutTwoTest}, {@code SpectrumLayoutThreeTest};
+ *       {@code SpectrumMutationTest}: 25,000 damaged copies of the golden packets of the three layouts,
+ *       recorded seed, 11,160 decode and the rest are refused under eleven different reasons; the
+ *       frame-level fuzz test).</li>
  *   <li>S5 a quadrant stream must use its stated length Lq (ICD §10): the coded data sets of its c samples
  *       (padding blocks included) end in its last octet, since fill reaches only the next octet boundary
  *       (ICD §4); a stream that leaves one or more whole octets unused, or a raw one with Lq &gt; c⌈w/8⌉,

@@ -167,8 +167,10 @@ class SpectrumLayoutTwoTest {
     @Test
     void shouldRefuseAnUnknownLayoutAndAShortHeader() {
         byte[] p = Hex.bytes(GoldenSpectraV2.DEMO_V2);
-        p[12] = (byte) 0x83; // bit 7 set, version 3: not a layout of ICD §4
+        p[12] = (byte) 0x84; // bit 7 set, version 4: not a layout of ICD §4
         assertEquals(SpectrumError.UNKNOWN_LAYOUT, decode(p).error());
+        p[12] = (byte) 0x83; // layout 3 read over a layout-2 body: octet 18 (gain tags 0x1a = 26) is no b of 1..3
+        assertEquals(SpectrumError.BAD_SUPPORT_WINDOWS, decode(p).error());
         p[12] = (byte) 0x80;
         assertEquals(SpectrumError.UNKNOWN_LAYOUT, decode(p).error());
         // a layout-2 packet that ends inside its 18 fixed octets

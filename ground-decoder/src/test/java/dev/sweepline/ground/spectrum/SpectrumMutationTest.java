@@ -13,7 +13,7 @@ import java.util.Random;
 import org.junit.jupiter.api.Test;
 
 /**
- * Damaged spectrum packets of both layouts (the golden ones with random bit flips, octets overwritten,
+ * Damaged spectrum packets of every layout (the golden ones with random bit flips, octets overwritten,
  * truncation), from a recorded seed: every one decodes to a spectrum or a {@link SpectrumError}, never an
  * exception (ICD §10: bad input is a status), and a spectrum that decodes keeps its instrument's ranges.
  */
@@ -29,10 +29,10 @@ class SpectrumMutationTest {
         SpectrumPacketDecoder decoder = new SpectrumPacketDecoder(new Ccsds121QuadrantDecoder());
         Map<SpectrumError, Integer> errors = new EnumMap<>(SpectrumError.class);
         int ok = 0;
-        String[] golden = {GoldenFrames.SPECTRUM_PACKET, GoldenSpectraV2.FINE_RAW, GoldenSpectraV2.FINE_RICE,
-            GoldenSpectraV2.DEMO_V2};
-        for (String g : golden) {
-            byte[] clean = Hex.bytes(g);
+        byte[][] golden = {Hex.bytes(GoldenFrames.SPECTRUM_PACKET), Hex.bytes(GoldenSpectraV2.FINE_RAW),
+            Hex.bytes(GoldenSpectraV2.FINE_RICE), Hex.bytes(GoldenSpectraV2.DEMO_V2),
+            SpectrumLayoutThreeTest.layoutThree(3, 0, 40, 1, 300, 2, 40)};
+        for (byte[] clean : golden) {
             for (int m = 0; m < MUTATIONS; m++) {
                 byte[] p = mutate(clean, rnd);
                 SpectrumResult r = decoder.decode(p, 0, p.length);
@@ -55,7 +55,8 @@ class SpectrumMutationTest {
         assertEquals(golden.length * MUTATIONS, ok + refused);
         // the layout and instrument checks are reached (first octets damaged): common practice, not a figure
         assertTrue(errors.containsKey(SpectrumError.UNKNOWN_INSTRUMENT)
-                && errors.containsKey(SpectrumError.UNKNOWN_LAYOUT), errors.toString());
+                && errors.containsKey(SpectrumError.UNKNOWN_LAYOUT)
+                && errors.containsKey(SpectrumError.BAD_SUPPORT_WINDOWS), errors.toString());
     }
 
     private static byte[] mutate(byte[] clean, Random rnd) {

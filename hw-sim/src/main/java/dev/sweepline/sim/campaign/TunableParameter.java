@@ -28,7 +28,10 @@ public enum TunableParameter {
     FIXED_SETTLE_MICROS("fixedSettleMicros", 1, (p, v) -> p.fixedSettleMicros = v, p -> p.fixedSettleMicros),
     /** Extra settle per DAC code of rail change, microseconds (Q8 in the flight software; at least the slew limit's). */
     SETTLE_MICROS_PER_CODE("settleMicrosPerCode", 256, (p, v) -> p.settleMicrosPerCodeQ8 = v, p -> p.settleMicrosPerCodeQ8),
-    /** Focus style: 0 band (today's), 1 design (the D-optimal band and a dwell from the budget; commands.md §4.1). */
+    /**
+     * Focus style: 0 band (today's), 1 design (the D-optimal band and a dwell from the budget), plus 2
+     * interleaved, plus 4 support dwell (commands.md §4.1).
+     */
     FOCUS_STYLE("focusStyle", 1, (p, v) -> p.focusStyle = v, p -> p.focusStyle),
     /** Design style: sweep-time budget of a focus sweep, microseconds (0: the table's dwell). */
     FOCUS_BUDGET_MICROS("focusBudgetMicros", 1, (p, v) -> p.focusBudgetMicros = v, p -> p.focusBudgetMicros),
@@ -40,7 +43,9 @@ public enum TunableParameter {
             p -> p.surveyIntegrationPeriods),
     /** Telemetry: engineering frame flush interval, seconds (0: the build's 10 s; 1..600; commands.md §4.1). */
     ENGINEERING_FLUSH_SECONDS("engineeringFlushSeconds", 1, (p, v) -> p.engineeringFlushSeconds = v,
-            p -> p.engineeringFlushSeconds);
+            p -> p.engineeringFlushSeconds),
+    /** Support dwell (focusStyle 4..7): the floor dwell of every focus window but the support windows, periods. */
+    FOCUS_FLOOR_PERIODS("focusFloorPeriods", 1, (p, v) -> p.focusFloorPeriods = v, p -> p.focusFloorPeriods);
 
     private final String key;
     private final int scale;

@@ -4,7 +4,8 @@ import dev.sweepline.fsw.table.SweepParameters;
 
 /**
  * The focus tables the bench tests compare (docs/focus-design.md): the instrument's default (band style)
- * and the interleaved design table that the demo campaign campaigns/focus-style.yaml compares with it.
+ * and the interleaved design table that the demo campaign campaigns/focus-style.yaml compares with it, and
+ * that table with the support dwell (docs/focus-design.md, "Support dwell").
  */
 enum FocusTables {
     /** The default table, unchanged. */
@@ -21,6 +22,18 @@ enum FocusTables {
             p.focusBudgetMicros = 0;
             p.surveyIntegrationPeriods = 2;
             p.resurveyEveryFocusSweeps = 64;
+        }
+    },
+    /**
+     * The interleaved design table with the support dwell (focusStyle 7): every focus window dwells 1
+     * period, three support windows share the rest of the table's dwell times the band's windows.
+     */
+    SUPPORT_DWELL {
+        @Override
+        void apply(SweepParameters p) {
+            INTERLEAVED_DESIGN.apply(p);
+            p.focusStyle |= SweepParameters.FOCUS_STYLE_SUPPORT_DWELL;
+            p.focusFloorPeriods = 1;
         }
     };
 

@@ -11,7 +11,7 @@ import java.util.Locale;
  * scenario flown on seeds 1..K with a given focus table, overall and by mode (a development tool, run by
  * hand with {@code java -cp} on the test classes; docs/focus-design.md). Arguments: scenario, seconds,
  * seeds, focusBudgetMicros, surveyIntegrationPeriods, robustnessMarginWindows, focusStyle, then optionally
- * integrationPeriods and resurveyEveryFocusSweeps (0: the table's).
+ * integrationPeriods and resurveyEveryFocusSweeps (0: the table's) and focusFloorPeriods (support dwell).
  */
 public final class GroundErrorDiagnostic {
     private GroundErrorDiagnostic() {
@@ -27,6 +27,7 @@ public final class GroundErrorDiagnostic {
         int style = Integer.parseInt(args[6]);
         int periods = args.length > 7 ? Integer.parseInt(args[7]) : 0;
         int resurvey = args.length > 8 ? Integer.parseInt(args[8]) : 0;
+        int floor = args.length > 9 ? Integer.parseInt(args[9]) : 0;
         List<GroundCheck.ComparedFit> all = new ArrayList<>();
         int spectra = 0;
         double bits = 0;
@@ -41,6 +42,10 @@ public final class GroundErrorDiagnostic {
                 }
                 f.parameters.focusStyle = style;
                 f.parameters.surveyIntegrationPeriods = survey;
+                f.parameters.focusFloorPeriods = floor;
+                if ((style & SweepParameters.FOCUS_STYLE_SUPPORT_DWELL) != 0) {
+                    f.parameters.focusBudgetMicros = budget;
+                }
                 if ((style & SweepParameters.FOCUS_STYLE_DESIGN) != 0) {
                     f.parameters.focusBudgetMicros = budget;
                     f.parameters.surveyIntegrationPeriods = survey;

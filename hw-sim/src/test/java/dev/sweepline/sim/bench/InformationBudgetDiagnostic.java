@@ -20,7 +20,8 @@ import java.util.function.Consumer;
  * focus, the optimum's support at mid-run, the efficiency of equal-dwell bands around its peak
  * and of the best mixture of such bands.
  * Arguments: scenario, seed, seconds, focusStyle, focusBudgetMicros, surveyIntegrationPeriods,
- * robustnessMarginWindows, resurveyEveryFocusSweeps (0: the table's); -Daround=MICROS prints the sweeps near then.
+ * robustnessMarginWindows, resurveyEveryFocusSweeps (0: the table's), focusFloorPeriods (support dwell);
+ * -Daround=MICROS prints the sweeps near then.
  */
 public final class InformationBudgetDiagnostic {
     private InformationBudgetDiagnostic() {
@@ -35,9 +36,12 @@ public final class InformationBudgetDiagnostic {
         int survey = args.length > 5 ? Integer.parseInt(args[5]) : 0;
         int margin = args.length > 6 ? Integer.parseInt(args[6]) : 0;
         int resurvey = args.length > 7 ? Integer.parseInt(args[7]) : 0;
+        int floor = args.length > 8 ? Integer.parseInt(args[8]) : 0;
         Consumer<FlightConfig> change = f -> {
             f.parameters.focusStyle = style;
-            f.parameters.focusBudgetMicros = (style & SweepParameters.FOCUS_STYLE_DESIGN) != 0 ? budget : 0;
+            f.parameters.focusFloorPeriods = floor;
+            f.parameters.focusBudgetMicros = (style & (SweepParameters.FOCUS_STYLE_DESIGN
+                    | SweepParameters.FOCUS_STYLE_SUPPORT_DWELL)) != 0 ? budget : 0;
             f.parameters.surveyIntegrationPeriods = survey;
             f.parameters.robustnessMarginWindows = margin;
             if (resurvey > 0) {
