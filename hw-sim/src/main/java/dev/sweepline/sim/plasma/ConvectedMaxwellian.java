@@ -118,9 +118,9 @@ public final class ConvectedMaxwellian {
             return Math.exp(-x1 * x1) - Math.exp(-x2 * x2);
         }
         if (Math.abs(x1) <= Math.abs(x2)) {
-            return -Math.exp(-x1 * x1) * Math.expm1(-dx * sum);
+            return -Math.exp(-x1 * x1) * ExpMinusOne.of(-dx * sum);
         }
-        return Math.exp(-x2 * x2) * Math.expm1(dx * sum);
+        return Math.exp(-x2 * x2) * ExpMinusOne.of(dx * sum);
     }
 
     /** a * e, taking an underflowed or vanishing e as an exact zero even when a is infinite. */
