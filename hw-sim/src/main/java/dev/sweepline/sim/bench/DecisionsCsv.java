@@ -18,10 +18,10 @@ import java.util.function.LongFunction;
  * <p>Columns: sweep, mode, startSeconds and endSeconds ({@code %.6f} of the microseconds), firstWindow,
  * lastWindow, peakWindow and bandCentre ({@code %.3f}; empty when NaN), trueProtonWindow, trueAlphaWindow,
  * locked, alphaLock, saturatedSamples, truthChangeN, truthChangeU, truthChangeT ({@code %.6g}; empty when
- * undefined). The fixed-point cells are written digit by digit, as {@code String.format(Locale.ROOT, ...)}
- * would write them (checked exhaustively over the Q8 windows and on the microseconds by
- * {@code DecisionsCsvTest}, against {@code String.format(Locale.ROOT, ...)}); the {@code %.6g} cells go through
- * one reused {@link Formatter}.
+ * undefined). Every cell is written digit by digit, as {@code String.format(Locale.ROOT, ...)} would write
+ * it (checked exhaustively over the Q8 windows, on the microseconds and on three million seeded
+ * {@code %.6g} values, ties included, by {@code DecisionsCsvTest}, against {@code String.format(Locale.ROOT,
+ * ...)}); only values outside those ranges go through one reused {@link Formatter}.
  */
 public final class DecisionsCsv implements SweepLog, Closeable {
     /** The header line. */
@@ -36,6 +36,8 @@ public final class DecisionsCsv implements SweepLog, Closeable {
 
     private final Writer out;
     private final StringBuilder line = new StringBuilder(160);
+    /** The significant digits of a %.6g cell (Double.toString gives at most 17, plus the rounding digit). */
+    private final byte[] sig = new byte[7];
     /**
      * The cells' formatter: Locale.US writes the same digits, point and signs as Locale.ROOT for these
      * conversions (no grouping), and is the locale for which the JDK's formatter looks up no
@@ -84,7 +86,7 @@ public final class DecisionsCsv implements SweepLog, Closeable {
         for (int k = 0; k < 3; k++) {
             line.append(',');
             if (Double.isFinite(change[k])) {
-                cells.format("%.6g", change[k]);
+                general6(change[k]);
             }
         }
         line.append(NEWLINE);
@@ -117,6 +119,101 @@ public final class DecisionsCsv implements SweepLog, Closeable {
         long thousandths = thousandthsTimes32 / 32 + (thousandthsTimes32 % 32 >= 16 ? 1 : 0);
         line.append(thousandths / 1000).append('.');
         digits(thousandths % 1000, 3);
+    }
+
+    /**
+     * {@code %.6g} of a finite value, as the JDK's formatter writes it: the shortest decimal of the double
+     * ({@link Double#toString}, the digits the formatter starts from) rounded half up to six significant
+     * digits; then, for a rounded magnitude in [1e-4, 1e6), fixed notation with six significant digits,
+     * otherwise d.ddddde±XX (java.util.Formatter, "General scientific").
+     */
+    void general6(double value) {
+        if (value == 0) {
+            line.append(Double.doubleToRawLongBits(value) < 0 ? "-0.00000" : "0.00000");
+            return;
+        }
+        String shortest = Double.toString(Math.abs(value));
+        // the significant digits and the decimal exponent of the first of them
+        int count = 0;
+        int exponent = 0;
+        int point = -1;
+        boolean leading = true;
+        int leadingZeros = 0;
+        int i = 0;
+        for (; i < shortest.length(); i++) {
+            char c = shortest.charAt(i);
+            if (c == '.') {
+                point = i;
+            } else if (c == 'E') {
+                break;
+            } else if (leading && c == '0') {
+                leadingZeros++;
+            } else {
+                leading = false;
+                if (count < sig.length) {
+                    sig[count] = (byte) (c - '0');
+                }
+                count++;
+            }
+        }
+        int exp = i < shortest.length() ? Integer.parseInt(shortest, i + 1, shortest.length(), 10) : 0;
+        int intDigits = (point < 0 ? i : point) - leadingZeros; // digits before the point, past leading zeros
+        exponent = intDigits - 1 + exp;
+        if (point >= 0 && intDigits <= 0) {
+            exponent = exp - 1 - (leadingZeros - point); // 0.000ddd: zeros after the point
+        }
+        // round half up to six digits
+        int kept = Math.min(count, 6);
+        for (int k = kept; k < 6; k++) {
+            sig[k] = 0;
+        }
+        if (count > 6 && sig[6] >= 5) {
+            int k = 5;
+            while (k >= 0 && sig[k] == 9) {
+                sig[k--] = 0;
+            }
+            if (k >= 0) {
+                sig[k]++;
+            } else {
+                sig[0] = 1;
+                exponent++;
+            }
+        }
+        if (value < 0) {
+            line.append('-');
+        }
+        if (exponent >= -4 && exponent < 6) {
+            if (exponent >= 0) {
+                for (int k = 0; k <= exponent; k++) {
+                    line.append((char) ('0' + sig[k]));
+                }
+                if (exponent < 5) {
+                    line.append('.');
+                    for (int k = exponent + 1; k < 6; k++) {
+                        line.append((char) ('0' + sig[k]));
+                    }
+                }
+            } else {
+                line.append("0.");
+                for (int k = exponent; k < -1; k++) {
+                    line.append('0');
+                }
+                for (int k = 0; k < 6; k++) {
+                    line.append((char) ('0' + sig[k]));
+                }
+            }
+            return;
+        }
+        line.append((char) ('0' + sig[0])).append('.');
+        for (int k = 1; k < 6; k++) {
+            line.append((char) ('0' + sig[k]));
+        }
+        int e = Math.abs(exponent);
+        line.append(exponent < 0 ? "e-" : "e+");
+        if (e < 10) {
+            line.append('0');
+        }
+        line.append(e);
     }
 
     /** {@code value} (0 &lt;= value &lt; 10^width) in {@code width} digits with leading zeros. */

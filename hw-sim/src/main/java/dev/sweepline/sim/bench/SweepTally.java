@@ -3,12 +3,11 @@ package dev.sweepline.sim.bench;
 import dev.sweepline.fsw.sweep.SweepMode;
 import dev.sweepline.sim.scenario.Scenario.Jump;
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.EnumMap;
 import java.util.List;
 import java.util.Map;
 import java.util.function.Predicate;
-import org.HdrHistogram.HistogramIterationValue;
-import org.HdrHistogram.IntCountsHistogram;
 
 /**
  * The run's sweep figures kept as the sweeps complete, in memory bounded by the table (not by the run's
@@ -16,8 +15,8 @@ import org.HdrHistogram.IntCountsHistogram;
  * the reacquisition after each jump ({@link Reacquisition}, loose and strict). They are the figures the
  * same functions give over the list of every record: the tracking errors are whole multiples of 1/256 of
  * a window (band centre and found peak are the flight software's Q8 windows, the true peak a whole
- * window), counted exactly per multiple in an HdrHistogram at unit resolution, and the quantile is the
- * same order statistic {@code sorted[floor(q n)]}.
+ * window), counted exactly per multiple ({@link ErrorCounts}), and the quantile is the same order
+ * statistic {@code sorted[floor(q n)]}.
  */
 final class SweepTally {
     /** Tracking errors are counted in units of 1/256 window (the Q8 of the flight software's windows). */
@@ -105,70 +104,76 @@ final class SweepTally {
         return strict.stream().map(Watch::result).toList();
     }
 
-    /** Exact counts of errors that are whole multiples of 1/256 window. */
+    /**
+     * Exact counts of errors that are whole multiples of 1/256 window: one count per multiple, in an
+     * array grown (doubling) to the largest error seen, so a run's tally costs what its errors need
+     * (a tracking run's errors stay within a few windows: a few thousand counts) and at most the
+     * table's windows x 256 counts while the errors stay within the table (band centre, found and true
+     * peak all lie in it); a larger error grows the array to it, still exact.
+     */
     static final class ErrorCounts {
-        private final IntCountsHistogram counts;
+        /** Counts allocated at the first error: errors below 4 windows. */
+        private static final int FIRST_LENGTH = 4 * UNITS_PER_WINDOW;
+        private final int tableUnits;
+        private int[] counts = new int[0];
+        private long total;
+        private int max = -1;
 
-        /**
-         * Counts for a table of {@code windows} windows: band centre, found peak and true peak all lie in
-         * [0, windows), so the errors stay below windows x 256 units, all kept exactly; a larger one (a peak
-         * outside the table) grows the histogram at a coarser resolution rather than failing the run.
-         */
+        /** Counts for a table of {@code windows} windows. */
         ErrorCounts(int windows) {
-            long highestUnits = Math.max(2, (long) windows * UNITS_PER_WINDOW - 1);
-            counts = new IntCountsHistogram(highestUnits, exactDigits(highestUnits));
-            counts.setAutoResize(true);
-        }
-
-        /**
-         * The fewest significant digits at which an HdrHistogram keeps every value up to {@code highest} at
-         * unit resolution: its first bucket holds 2^ceil(log2(2 x 10^digits)) values one apart (HdrHistogram
-         * documentation, "subBucketCount").
-         */
-        static int exactDigits(long highest) {
-            for (int digits = 0; digits <= 5; digits++) {
-                long largestSingleUnit = 2 * (long) Math.pow(10, digits);
-                long subBuckets = Long.highestOneBit(largestSingleUnit - 1) << 1;
-                if (highest < subBuckets) {
-                    return digits;
-                }
-            }
-            throw new IllegalArgumentException("tracking errors of up to " + highest + " units are beyond exact counting");
+            tableUnits = Math.max(1, windows) * UNITS_PER_WINDOW;
         }
 
         void add(double windows) {
             double units = windows * UNITS_PER_WINDOW;
             long k = (long) units;
-            if (k != units || k < 0) {
+            if (k != units || k < 0 || k >= Integer.MAX_VALUE / 2) {
                 throw new IllegalArgumentException("tracking error " + windows + " windows is not a multiple of 1/"
-                        + UNITS_PER_WINDOW);
+                        + UNITS_PER_WINDOW + (k >= Integer.MAX_VALUE / 2 ? " within the counts' range" : ""));
             }
-            counts.recordValue(k);
+            int unit = (int) k;
+            if (unit >= counts.length) {
+                int length = Math.max(FIRST_LENGTH, counts.length);
+                while (length <= unit) {
+                    length *= 2;
+                }
+                if (unit < tableUnits) {
+                    length = Math.min(length, tableUnits);
+                }
+                counts = Arrays.copyOf(counts, length);
+            }
+            counts[unit]++;
+            total++;
+            max = Math.max(max, unit);
         }
 
         int count() {
-            return (int) counts.getTotalCount();
+            return (int) total;
+        }
+
+        /** Counts held (the array's length). */
+        int length() {
+            return counts.length;
         }
 
         /** The order statistic sorted[floor(q n)] (0-based, at most n - 1), windows; NaN when empty. */
         double quantile(double q) {
-            long n = counts.getTotalCount();
-            if (n == 0) {
+            if (total == 0) {
                 return Double.NaN;
             }
-            long rank = (long) Math.min(n - 1, Math.floor(q * n));
+            long rank = (long) Math.min(total - 1, Math.floor(q * total));
             long seen = 0;
-            for (HistogramIterationValue v : counts.recordedValues()) {
-                seen += v.getCountAtValueIteratedTo();
+            for (int unit = 0; unit <= max; unit++) {
+                seen += counts[unit];
                 if (seen > rank) {
-                    return v.getValueIteratedTo() / (double) UNITS_PER_WINDOW;
+                    return unit / (double) UNITS_PER_WINDOW;
                 }
             }
-            throw new IllegalStateException("rank " + rank + " beyond " + n + " counts");
+            throw new IllegalStateException("rank " + rank + " beyond " + total + " counts");
         }
 
         double max() {
-            return counts.getTotalCount() == 0 ? Double.NaN : counts.getMaxValue() / (double) UNITS_PER_WINDOW;
+            return total == 0 ? Double.NaN : max / (double) UNITS_PER_WINDOW;
         }
     }
 

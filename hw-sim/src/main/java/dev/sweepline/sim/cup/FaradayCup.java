@@ -50,6 +50,17 @@ public final class FaradayCup {
      * @param outAmps4  receives the currents of Q1..Q4, amperes (noiseless)
      */
     public void quadrantCurrents(PlasmaState plasma, double lowVolts, double highVolts, double[] outAmps4) {
+        quadrantCurrents(plasma, lowVolts, highVolts, null, 0, outAmps4);
+    }
+
+    /**
+     * {@link #quadrantCurrents(PlasmaState, double, double, double[])} with the window current of one of
+     * the plasma's populations, {@code known}, already computed by the caller ({@code knownAmps}, the
+     * closed form of {@link ConvectedMaxwellian} before the split; e.g. from its sensitivities, whose
+     * density term is that current): the yardstick computes both for every window.
+     */
+    public void quadrantCurrents(PlasmaState plasma, double lowVolts, double highVolts, IonPopulation known,
+            double knownAmps, double[] outAmps4) {
         outAmps4[0] = 0;
         outAmps4[1] = 0;
         outAmps4[2] = 0;
@@ -62,11 +73,16 @@ public final class FaradayCup {
             if (!(vz > 0) || p.densityPerM3() == 0) {
                 continue;
             }
-            IonSpecies species = p.species();
-            double v1 = ConvectedMaxwellian.speedForVoltage(lowVolts, species.massKg(), species.chargeCoulomb());
-            double v2 = ConvectedMaxwellian.speedForVoltage(highVolts, species.massKg(), species.chargeCoulomb());
-            double current = ConvectedMaxwellian.windowCurrent(species.chargeCoulomb(), p.densityPerM3(),
-                    effectiveAreaM2, vz, plasma.normalThermalSpeed(p), v1, v2);
+            double current;
+            if (p == known) {
+                current = knownAmps;
+            } else {
+                IonSpecies species = p.species();
+                double v1 = ConvectedMaxwellian.speedForVoltage(lowVolts, species.massKg(), species.chargeCoulomb());
+                double v2 = ConvectedMaxwellian.speedForVoltage(highVolts, species.massKg(), species.chargeCoulomb());
+                current = ConvectedMaxwellian.windowCurrent(species.chargeCoulomb(), p.densityPerM3(),
+                        effectiveAreaM2, vz, plasma.normalThermalSpeed(p), v1, v2);
+            }
             collector.fractions(d * p.vxMetresPerSecond() / vz, d * p.vyMetresPerSecond() / vz, fractions);
             for (int q = 0; q < 4; q++) {
                 outAmps4[q] += current * fractions[q];

@@ -13,8 +13,9 @@ package dev.sweepline.sim.cup;
  * with the other circle and with both axes; each piece lies in one quadrant and wholly inside or
  * outside the other disc, which its midpoint decides. Closed form, exact to rounding.
  *
- * <p>Threading: not thread-safe; it caches the last shift because a plasma's populations usually
- * share one flow direction. Allocation-free after construction.
+ * <p>Threading: not thread-safe; it caches the fractions of the last two shifts, because a plasma's
+ * populations share one flow direction or, with drifting alphas, two, and the same plasma is read
+ * through many windows (the yardstick's 128 per sampled plasma). Allocation-free after construction.
  */
 public final class SplitCollector {
     private static final double TWO_PI = 2 * Math.PI;
@@ -40,9 +41,14 @@ public final class SplitCollector {
     private final double[] sinBreak = new double[7];
     private final double[] cosBreak = new double[7];
     private int trigKnown;
+    /** The fractions being summed (then slot {@code next} of the cache). */
     private final double[] cached = new double[4];
-    private double cachedSx = Double.NaN;
-    private double cachedSy = Double.NaN;
+    /** The cache: two shifts and their fractions (Q1..Q4 of slot k at 4k). */
+    private final double[] slotSx = {Double.NaN, Double.NaN};
+    private final double[] slotSy = {Double.NaN, Double.NaN};
+    private final double[] slotFractions = new double[8];
+    /** The slot the next new shift replaces (the one not used last). */
+    private int next;
 
     /**
      * A collector of radius {@code collectorRadiusM} under an aperture image of radius {@code imageRadiusM}.
@@ -73,26 +79,33 @@ public final class SplitCollector {
      * @param out4  receives Q1..Q4
      */
     public void fractions(double sxM, double syM, double[] out4) {
-        if (sxM != cachedSx || syM != cachedSy) {
-            cached[0] = 0;
-            cached[1] = 0;
-            cached[2] = 0;
-            cached[3] = 0;
-            // the centres lie this far apart seen from either circle (hypot ignores the signs)
-            double centres = Math.hypot(sxM, syM);
-            // an image well inside the collector: every arc of the image lies inside the collector disc and
-            // none of the collector's inside the image, which the inside tests would find arc by arc
-            boolean imageInside = centres + imageRadiusM < collectorRadiusM * (1 - WELL_INSIDE);
-            addArcs(sxM, syM, imageRadiusM, 0, 0, collectorRadiusM, centres, true, imageInside);
-            if (!imageInside) {
-                addArcs(0, 0, collectorRadiusM, sxM, syM, imageRadiusM, centres, false, false);
+        for (int k = 0; k < 2; k++) {
+            if (sxM == slotSx[k] && syM == slotSy[k]) {
+                System.arraycopy(slotFractions, 4 * k, out4, 0, 4);
+                next = 1 - k;
+                return;
             }
-            for (int q = 0; q < 4; q++) {
-                cached[q] = Math.max(0, cached[q] / imageAreaM2);
-            }
-            cachedSx = sxM;
-            cachedSy = syM;
         }
+        cached[0] = 0;
+        cached[1] = 0;
+        cached[2] = 0;
+        cached[3] = 0;
+        // the centres lie this far apart seen from either circle (hypot ignores the signs)
+        double centres = Math.hypot(sxM, syM);
+        // an image well inside the collector: every arc of the image lies inside the collector disc and
+        // none of the collector's inside the image, which the inside tests would find arc by arc
+        boolean imageInside = centres + imageRadiusM < collectorRadiusM * (1 - WELL_INSIDE);
+        addArcs(sxM, syM, imageRadiusM, 0, 0, collectorRadiusM, centres, true, imageInside);
+        if (!imageInside) {
+            addArcs(0, 0, collectorRadiusM, sxM, syM, imageRadiusM, centres, false, false);
+        }
+        for (int q = 0; q < 4; q++) {
+            cached[q] = Math.max(0, cached[q] / imageAreaM2);
+        }
+        System.arraycopy(cached, 0, slotFractions, 4 * next, 4);
+        slotSx[next] = sxM;
+        slotSy[next] = syM;
+        next = 1 - next;
         System.arraycopy(cached, 0, out4, 0, 4);
     }
 

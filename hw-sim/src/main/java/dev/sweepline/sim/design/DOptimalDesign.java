@@ -81,11 +81,12 @@ public final class DOptimalDesign {
             }
             sampled++;
             for (int j = 0; j < n; j++) {
-                cup.quadrantCurrents(plasma, windows.lowVolts(j), windows.highVolts(j), quadrants);
+                information.gradient(plasma, p, windows.lowVolts(j), windows.highVolts(j), g);
+                // g[0] = n dI/dn is the protons' window current itself: the cup need not compute it again
+                cup.quadrantCurrents(plasma, windows.lowVolts(j), windows.highVolts(j), p, g[0], quadrants);
                 double total = quadrants[0] + quadrants[1] + quadrants[2] + quadrants[3];
                 int range = rangeFor(preamp, Math.max(Math.max(quadrants[0], quadrants[1]),
                         Math.max(quadrants[2], quadrants[3])));
-                information.gradient(plasma, p, windows.lowVolts(j), windows.highVolts(j), g);
                 // information per second of window j, at the run's step length
                 ProtonInformation.accumulate(m[j], g, information.variance(total, range, stepSeconds) * stepSeconds, 1.0);
             }

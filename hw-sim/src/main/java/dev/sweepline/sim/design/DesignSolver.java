@@ -6,36 +6,42 @@ import java.util.Arrays;
  * The D-optimal approximate design on a finite set of candidates: shares s_j ≥ 0, Σ s_j = 1, that
  * maximise det F(s), F(s) = Σ_j s_j M_j, for the candidates' 3 x 3 (p = 3) information matrices M_j.
  *
- * <p>Method: the multiplicative algorithm s_j ← s_j d_j(s) / p, with d_j(s) = tr(F(s)⁻¹ M_j) the
- * standardised variance of candidate j (Silvey, Titterington and Torsney 1978, "An algorithm for
- * optimal designs on a finite design space", Communications in Statistics A 7, 1379-1389 [memory]),
- * which increases det F monotonically from any design with all shares positive. Candidates that
- * cannot support an optimal design are dropped as soon as the bound of Harman and Pronzato (2007,
- * "Improvements on removing nonoptimal support points in D-optimum design algorithms", Statistics and
- * Probability Letters 77, 90-94 [memory]) shows it: with ε = max_j d_j − p, no support point of a
- * D-optimal design has d_j below h = p (1 + ε/2 − √(ε (4 + ε − 4/p)) / 2). Dropping them only speeds
- * the convergence; the stopping rule is checked on every candidate, dropped or not, and if a dropped
- * one violates it the solver runs again without dropping.
+ * <p>Method, in two stages. First a few updates of the multiplicative algorithm s_j ← s_j d_j(s) / p,
+ * with d_j(s) = tr(F(s)⁻¹ M_j) the standardised variance of candidate j, and the support-point deletion
+ * of Harman and Pronzato ({@link MultiplicativeAlgorithm}): its shares gather on the region of the
+ * optimum's support, but the last digits would take it thousands of updates. Then {@link SupportNewton}:
+ * Newton's method for the shares on the candidates holding a sizeable share, and a vertex step onto the
+ * candidate of largest d_j whenever one exceeds the stopping rule, until the rule holds on every
+ * candidate. Should that stall, the multiplicative algorithm is run to the end instead (first with
+ * deletion, then, if a dropped candidate violates the rule, without), as the solver did alone before.
  *
  * <p>Stopping rule, from the general equivalence theorem (Kiefer and Wolfowitz 1960, "The equivalence
  * of two extremum problems", Canadian Journal of Mathematics 12, 363-366 [memory]): for every design
  * Σ_j s_j d_j = tr(F⁻¹ F) = p, so max_j d_j ≥ p, with equality exactly at the D-optimum. The solver
- * stops when max_j d_j ≤ p (1 + tolerance); then log det F* − log det F ≤ max_j d_j − p (the same
- * theorem's bound, from the concavity of log det), so the D-efficiency of the found design is at
- * least exp(−tolerance) and the yardstick is low by at most that fraction.
+ * stops when max_j d_j ≤ p (1 + tolerance), checked on every candidate; then log det F* − log det F ≤
+ * max_j d_j − p (the same theorem's bound, from the concavity of log det), so the D-efficiency of the
+ * found design is at least exp(−tolerance) and the yardstick is low by at most that fraction.
  */
 public final class DesignSolver {
-    /** Iteration limit; the demo cup's designs converge to 1e-6 in far fewer (DesignSolverTest). */
+    /** Iteration limit of the multiplicative algorithm when it runs alone (the fallback). */
     static final int MAX_ITERATIONS = 200_000;
+    /**
+     * Multiplicative updates before Newton takes over: on the built-in scenarios' runs they leave
+     * the optimum's support among the candidates holding at least {@link #SUPPORT_FRACTION} of the
+     * largest share (a support point missed is added back by the vertex step; DesignSolverTest).
+     */
+    static final int START_ITERATIONS = 40;
+    /** Share, relative to the largest, of the candidates Newton starts on. */
+    static final double SUPPORT_FRACTION = 0.2;
 
     /**
      * A converged design.
      *
-     * @param shares       the share of each candidate (0 for dropped ones)
+     * @param shares       the share of each candidate (0 for those off the support)
      * @param information  F(s) = Σ_j s_j M_j
      * @param variances    d_j = tr(F⁻¹ M_j) for every candidate
      * @param maxVariance  max_j d_j, ≥ p; p (1 + tolerance) or less when converged
-     * @param iterations   multiplicative updates made
+     * @param iterations   multiplicative updates and Newton steps made
      * @param converged    whether the stopping rule was met within the iteration limit
      */
     public record Solution(double[] shares, double[][] information, double[] variances, double maxVariance,
@@ -47,92 +53,73 @@ public final class DesignSolver {
 
     /** The D-optimal design over the candidates {@code m} (each 3 x 3, positive semi-definite); null if F stays singular. */
     public static Solution solve(double[][][] m, double tolerance) {
-        Solution s = solve(m, tolerance, true);
-        if (s != null && !s.converged()) {
-            return solve(m, tolerance, false);
+        int p = m[0].length;
+        // the candidates in one array (candidate j's element (a, b) at j p² + a p + b)
+        double[] flat = flatten(m, p);
+        MultiplicativeAlgorithm start = new MultiplicativeAlgorithm(flat, p, true);
+        switch (start.run(tolerance, START_ITERATIONS)) {
+            case SINGULAR:
+                return null;
+            case MET:
+                Solution met = solution(start, p, tolerance);
+                if (met.converged()) {
+                    return met;
+                }
+                break;
+            case LIMIT:
+                break;
         }
-        return s;
+        Solution s = new SupportNewton(flat, p).solve(start.share, SUPPORT_FRACTION, tolerance, start.iterations);
+        return s != null ? s : multiplicative(flat, p, tolerance);
     }
 
-    private static Solution solve(double[][][] m, double tolerance, boolean dropping) {
-        int n = m.length;
-        int p = m[0].length;
-        // the candidates in one array (candidate j's element (a, b) at j p² + a p + b): the same sums in the
-        // same order as over m, without the rows' indirection
-        double[] flat = flatten(m, p);
-        double[] share = new double[n];
-        boolean[] active = new boolean[n];
-        int count = 0;
-        for (int j = 0; j < n; j++) {
-            active[j] = trace(m[j]) > 0;
-            count += active[j] ? 1 : 0;
-        }
-        for (int j = 0; j < n; j++) {
-            share[j] = active[j] ? 1.0 / count : 0;
-        }
-        double[] d = new double[n];
-        double[][] f = new double[p][p];
-        for (int it = 0; it < MAX_ITERATIONS; it++) {
-            combine(flat, p, share, f);
-            double[][] inv = invert(f);
-            if (inv == null) {
+    /** The multiplicative algorithm alone, to the stopping rule (with deletion, and without if that fails). */
+    static Solution multiplicative(double[] flat, int p, double tolerance) {
+        Solution s = multiplicative(flat, p, tolerance, true);
+        return s == null || s.converged() ? s : multiplicative(flat, p, tolerance, false);
+    }
+
+    private static Solution multiplicative(double[] flat, int p, double tolerance, boolean dropping) {
+        MultiplicativeAlgorithm run = new MultiplicativeAlgorithm(flat, p, dropping);
+        switch (run.run(tolerance, MAX_ITERATIONS)) {
+            case SINGULAR:
                 return null;
-            }
-            double worst = 0;
-            for (int j = 0; j < n; j++) {
-                if (active[j]) {
-                    d[j] = traceOfProduct(inv, flat, j * p * p);
-                    worst = Math.max(worst, d[j]);
-                }
-            }
-            if (worst <= p * (1 + tolerance)) {
-                // the dropped candidates' variances are needed only now, for the stopping rule on every candidate
-                double all = 0;
-                for (int j = 0; j < n; j++) {
-                    if (!active[j]) {
-                        d[j] = traceOfProduct(inv, flat, j * p * p);
-                    }
-                    all = Math.max(all, d[j]);
-                }
-                return new Solution(share, f, d, all, it, all <= p * (1 + tolerance));
-            }
-            double eps = worst - p;
-            double bound = dropping ? p * (1 + eps / 2 - Math.sqrt(eps * (4 + eps - 4.0 / p)) / 2) : 0;
-            double sum = 0;
-            for (int j = 0; j < n; j++) {
-                if (!active[j]) {
-                    continue;
-                }
-                if (d[j] < bound) {
-                    active[j] = false;
-                    share[j] = 0;
-                } else {
-                    share[j] *= d[j] / p;
-                    sum += share[j];
-                }
-            }
-            for (int j = 0; j < n; j++) {
-                share[j] /= sum; // renormalise after dropping (the update alone keeps Σ s_j = 1)
-            }
+            case MET:
+                return solution(run, p, tolerance);
+            case LIMIT:
+                break;
         }
-        combine(flat, p, share, f);
-        double[][] inv = invert(f);
-        if (inv == null) {
+        // the limit reached: the figures of every candidate at the last shares
+        combine(flat, p, run.share, run.f);
+        double[] inv = new double[p * p];
+        if (!invert3(run.f, inv)) {
             return null;
         }
-        double all = 0;
-        for (int j = 0; j < n; j++) {
-            d[j] = traceOfProduct(inv, flat, j * p * p);
-            all = Math.max(all, d[j]);
+        for (int j = 0; j < run.d.length; j++) {
+            run.d[j] = traceOfProduct(inv, flat, j * p * p, p);
         }
-        return new Solution(share, f, d, all, MAX_ITERATIONS, false);
+        Solution s = solution(run, p, tolerance);
+        return new Solution(s.shares(), s.information(), s.variances(), s.maxVariance(), s.iterations(), false);
+    }
+
+    /** The solution at the algorithm's last evaluated design, converged if the rule holds on every candidate. */
+    private static Solution solution(MultiplicativeAlgorithm run, int p, double tolerance) {
+        double all = 0;
+        for (double v : run.d) {
+            all = Math.max(all, v);
+        }
+        double[][] f = new double[p][p];
+        for (int r = 0; r < p; r++) {
+            System.arraycopy(run.f, r * p, f[r], 0, p);
+        }
+        return new Solution(run.share.clone(), f, run.d.clone(), all, run.iterations, all <= p * (1 + tolerance));
     }
 
     /** d(M) = tr(F⁻¹ M) for the design {@code shares} over {@code m}: the standardised variance of a candidate. */
     public static double[] variances(double[][][] m, double[] shares) {
         double[][] f = new double[m[0].length][m[0].length];
         combine(m, shares, f);
-        double[][] inv = invert(f);
+        double[][] inv = ProtonInformation.inverse(f);
         double[] d = new double[m.length];
         for (int j = 0; j < m.length; j++) {
             d[j] = inv == null ? Double.POSITIVE_INFINITY : traceOfProduct(inv, m[j]);
@@ -166,49 +153,68 @@ public final class DesignSolver {
         return flat;
     }
 
-    /** {@link #combine(double[][][], double[], double[][])} over the flattened candidates. */
-    private static void combine(double[] flat, int p, double[] share, double[][] f) {
-        for (double[] row : f) {
-            Arrays.fill(row, 0);
-        }
+    /** F = Σ_j s_j M_j over the flattened candidates, into {@code f} (p x p, row-major). */
+    static void combine(double[] flat, int p, double[] share, double[] f) {
+        Arrays.fill(f, 0);
+        int pp = p * p;
         for (int j = 0, n = share.length; j < n; j++) {
-            if (share[j] == 0) {
+            double sj = share[j];
+            if (sj == 0) {
                 continue;
             }
-            double sj = share[j];
-            int off = j * p * p;
-            for (int a = 0; a < p; a++) {
-                double[] fa = f[a];
-                for (int b = 0; b < p; b++) {
-                    fa[b] += sj * flat[off + a * p + b];
-                }
+            int off = j * pp;
+            for (int e = 0; e < pp; e++) {
+                f[e] += sj * flat[off + e];
             }
         }
     }
 
-    /** {@link #traceOfProduct(double[][], double[][])} with candidate j's matrix at {@code off} of the flattened. */
-    private static double traceOfProduct(double[][] inv, double[] flat, int off) {
-        int p = inv.length;
+    /** F = Σ_i w_i M_{support_i} over the first {@code size} support points, into {@code f}. */
+    static void combine(double[] flat, int p, int[] support, double[] w, int size, double[] f) {
+        Arrays.fill(f, 0);
+        int pp = p * p;
+        for (int i = 0; i < size; i++) {
+            double wi = w[i];
+            int off = support[i] * pp;
+            for (int e = 0; e < pp; e++) {
+                f[e] += wi * flat[off + e];
+            }
+        }
+    }
+
+    /** tr(inv M_j) with candidate j's matrix at {@code off} of the flattened, inv p x p row-major. */
+    static double traceOfProduct(double[] inv, double[] flat, int off, int p) {
         double t = 0;
         for (int a = 0; a < p; a++) {
-            double[] ia = inv[a];
             for (int b = 0; b < p; b++) {
-                t += ia[b] * flat[off + b * p + a];
+                t += inv[a * p + b] * flat[off + b * p + a];
             }
         }
         return t;
     }
 
-    private static double[][] invert(double[][] f) {
-        return ProtonInformation.inverse(f);
+    /** Determinant of a 3 x 3 matrix, row-major. */
+    static double det3(double[] f) {
+        return f[0] * (f[4] * f[8] - f[5] * f[7]) - f[1] * (f[3] * f[8] - f[5] * f[6])
+                + f[2] * (f[3] * f[7] - f[4] * f[6]);
     }
 
-    private static double trace(double[][] mj) {
-        double t = 0;
-        for (int a = 0; a < mj.length; a++) {
-            t += mj[a][a];
+    /** Inverse of a 3 x 3 matrix, row-major (adjugate over determinant), into {@code inv}; false when singular. */
+    static boolean invert3(double[] f, double[] inv) {
+        double det = det3(f);
+        if (!(Math.abs(det) > 0) || !Double.isFinite(det)) {
+            return false;
         }
-        return t;
+        inv[0] = (f[4] * f[8] - f[5] * f[7]) / det;
+        inv[1] = (f[2] * f[7] - f[1] * f[8]) / det;
+        inv[2] = (f[1] * f[5] - f[2] * f[4]) / det;
+        inv[3] = (f[5] * f[6] - f[3] * f[8]) / det;
+        inv[4] = (f[0] * f[8] - f[2] * f[6]) / det;
+        inv[5] = (f[2] * f[3] - f[0] * f[5]) / det;
+        inv[6] = (f[3] * f[7] - f[4] * f[6]) / det;
+        inv[7] = (f[1] * f[6] - f[0] * f[7]) / det;
+        inv[8] = (f[0] * f[4] - f[1] * f[3]) / det;
+        return true;
     }
 
     private static double traceOfProduct(double[][] inv, double[][] mj) {

@@ -86,13 +86,14 @@ public final class ConvectedMaxwellian {
         double x1 = (v1 - uNormal) / w;
         double x2 = (v2 - uNormal) / w;
         double erfDiff = ErrorFunction.difference(x1, x2);
-        double expDiff = expDifference(x1, x2, (v2 - v1) / w, (v1 + v2 - 2 * uNormal) / w);
+        double e1 = Math.exp(-x1 * x1);
+        double e2 = Math.exp(-x2 * x2);
+        // the same e1 - e2 as windowCurrent's, its exp(-x^2) factor taken from e1 or e2 (the same call)
+        double expDiff = expDifference(x1, x2, (v2 - v1) / w, (v1 + v2 - 2 * uNormal) / w, e1, e2);
         double perDensity = q * 1.0 * areaM2 * (0.5 * uNormal * erfDiff + w / (2 * SQRT_PI) * expDiff);
         if (v2 >= v1 && v1 >= 0 && perDensity < 0) {
             perDensity = 0; // as windowCurrent: rounding in the lower tail
         }
-        double e1 = Math.exp(-x1 * x1);
-        double e2 = Math.exp(-x2 * x2);
         double qnA = q * nPerM3 * areaM2;
         out3[0] = nPerM3 * perDensity;
         out3[1] = uNormal * (qnA * (0.5 * erfDiff + (times(v1, e1) - times(v2, e2)) / (w * SQRT_PI)));
@@ -118,9 +119,20 @@ public final class ConvectedMaxwellian {
             return Math.exp(-x1 * x1) - Math.exp(-x2 * x2);
         }
         if (Math.abs(x1) <= Math.abs(x2)) {
-            return -Math.exp(-x1 * x1) * Math.expm1(-dx * sum);
+            return -Math.exp(-x1 * x1) * ExpMinusOne.of(-dx * sum);
         }
-        return Math.exp(-x2 * x2) * Math.expm1(dx * sum);
+        return Math.exp(-x2 * x2) * ExpMinusOne.of(dx * sum);
+    }
+
+    /** {@link #expDifference(double, double, double, double)} with e1 = exp(-x1^2) and e2 = exp(-x2^2) known. */
+    private static double expDifference(double x1, double x2, double dx, double sum, double e1, double e2) {
+        if (Double.isInfinite(x1) || Double.isInfinite(x2)) {
+            return e1 - e2;
+        }
+        if (Math.abs(x1) <= Math.abs(x2)) {
+            return -e1 * ExpMinusOne.of(-dx * sum);
+        }
+        return e2 * ExpMinusOne.of(dx * sum);
     }
 
     /** a * e, taking an underflowed or vanishing e as an exact zero even when a is infinite. */

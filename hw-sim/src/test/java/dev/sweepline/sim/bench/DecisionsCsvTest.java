@@ -75,4 +75,37 @@ class DecisionsCsvTest {
                     rng.nextInt(32768) / 256.0, 30, 50, 0), change);
         }
     }
+
+    @Test
+    void shouldWriteTheGeneralCellsAsTheFormatterDid() throws IOException {
+        // %.6g cells: zeros, ties at the seventh digit (the formatter rounds the shortest decimal half up:
+        // 0.15 style cases), the carry to 1e6 and below 1e-4 where the notation switches, extremes
+        double[] edges = {0.0, -0.0, 1.0000005, 0.15, 999999.5, 999999.4, 99999.95, 9.999995, 0.0000999995,
+            0.00009999949, 1e-4, 1e6, 123456.5, 1.234565, -1.234565, 1e-300, 1e300, Double.MIN_VALUE,
+            Double.MAX_VALUE, -Double.MAX_VALUE, 0.1, 1, -1, 2.5e-5, 0.5, 100, 1e7, 1e-3, 9.9999995e-5};
+        SweepRecord r = new SweepRecord(1, SweepMode.FOCUS, 0, 1, 0, 127, Double.NaN, Double.NaN, -1, -1, 0);
+        for (int k = 0; k + 2 < edges.length; k += 3) {
+            assertSameRow(r, new double[] {edges[k], edges[k + 1], edges[k + 2]});
+        }
+        StringWriter out = new StringWriter();
+        StringBuilder expected = new StringBuilder(DecisionsCsv.HEADER);
+        DecisionsCsv csv = new DecisionsCsv(out);
+        SplittableRandom rng = new SplittableRandom(6);
+        for (int i = 0; i < 100_000; i++) {
+            double[] change = new double[3];
+            for (int k = 0; k < 3; k++) {
+                change[k] = switch ((3 * i + k) % 6) {
+                    case 0 -> rng.nextDouble(-2, 2); // the truth changes' own range
+                    case 1 -> Math.scalb(rng.nextDouble(-1, 1), rng.nextInt(-40, 40));
+                    case 2 -> Double.longBitsToDouble(rng.nextLong()); // every exponent (NaN, infinities: empty)
+                    case 3 -> (rng.nextLong(1, 10_000_000) + 0.5) * Math.pow(10, rng.nextInt(-18, 2)); // ties
+                    case 4 -> rng.nextInt(-2_000_000, 2_000_000) / 1e6;
+                    default -> (rng.nextLong(100_000, 1_000_000) * 10 + 5) / Math.pow(10, rng.nextInt(0, 14));
+                };
+            }
+            csv.add(r, change);
+            expected.append(formatted(r, change));
+        }
+        assertEquals(expected.toString(), out.toString());
+    }
 }

@@ -68,12 +68,29 @@ class SweepTallyTest {
     }
 
     @Test
-    void shouldChooseTheFewestDigitsThatKeepUnitResolution() {
-        // HdrHistogram keeps values below 2^ceil(log2(2 x 10^d)) at unit resolution (its subBucketCount):
-        assertEquals(3, SweepTally.ErrorCounts.exactDigits(2047)); // 2 x 10^3 -> 2048
-        assertEquals(4, SweepTally.ErrorCounts.exactDigits(2048));
-        assertEquals(4, SweepTally.ErrorCounts.exactDigits(32767)); // 2 x 10^4 -> 32768
-        assertEquals(5, SweepTally.ErrorCounts.exactDigits(129 * 256)); // the demo cup's 128 windows and one more
-        assertThrows(IllegalArgumentException.class, () -> SweepTally.ErrorCounts.exactDigits(262144)); // 2 x 10^5 -> 2^18
+    void shouldCountExactlyAnErrorBeyondTheTableAndBoundTheCountsByIt() {
+        // errors of 0 to 300 windows on a 128-window table (a peak off the table): the list figures
+        // still, to the bit; the counts grow to the largest error, not beyond twice it
+        SplittableRandom rng = new SplittableRandom(300);
+        List<SweepRecord> records = new ArrayList<>();
+        for (int i = 0; i < 2000; i++) {
+            int truth = rng.nextInt(128);
+            double peak = truth + rng.nextInt(300 * 256) / 256.0;
+            long start = i * 600_000L;
+            records.add(new SweepRecord(i + 1, SweepMode.FOCUS, start, start + 550_000, 0, 127, peak, peak, truth, -1, 0));
+        }
+        SweepTally tally = new SweepTally(128, List.of());
+        records.forEach(tally::add);
+        assertEquals(TrackingError.of(records), tally.tracking());
+        SweepTally.ErrorCounts counts = new SweepTally.ErrorCounts(128);
+        counts.add(3.5); // 896 units: the first 1024 counts
+        assertEquals(1024, counts.length());
+        counts.add(100); // 25 600 units: doubled to 32 768, the table's 128 x 256
+        assertEquals(128 * 256, counts.length());
+        counts.add(200); // beyond the table: doubled past 51 200 units
+        assertEquals(65536, counts.length());
+        assertEquals(200, counts.max());
+        assertEquals(3.5, counts.quantile(0));
+        assertEquals(100, counts.quantile(0.5)); // sorted[floor(0.5 x 3)] = sorted[1]
     }
 }

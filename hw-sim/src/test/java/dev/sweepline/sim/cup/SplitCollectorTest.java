@@ -98,6 +98,27 @@ class SplitCollectorTest {
     }
 
     @Test
+    void shouldGiveTheSameFractionsFromItsCacheAsAFreshCollector() {
+        // the two-shift cache must be invisible: interleaved shifts (two populations of one plasma, a
+        // third evicting one of them, repeats) give bit for bit what a new collector computes
+        SplitCollector cached = SplitCollector.of(DEMO);
+        SplittableRandom random = new SplittableRandom(SEED);
+        double[][] shifts = new double[3][];
+        for (int k = 0; k < 3; k++) {
+            shifts[k] = new double[] {random.nextDouble(-1, 1) * R, random.nextDouble(-1, 1) * R};
+        }
+        int[] order = {0, 1, 0, 1, 1, 2, 0, 2, 1, 1, 0, 0, 2};
+        double[] got = new double[4];
+        double[] fresh = new double[4];
+        for (int i = 0; i < order.length; i++) {
+            double[] s = shifts[order[i]];
+            cached.fractions(s[0], s[1], got);
+            SplitCollector.of(DEMO).fractions(s[0], s[1], fresh);
+            assertTrue(Arrays.equals(fresh, got), "call " + i + ": " + Arrays.toString(got) + " vs " + Arrays.toString(fresh));
+        }
+    }
+
+    @Test
     void shouldSumTheQuadrantsToTheClosedFormAcceptance() {
         // disc-overlap closed form vs the quadrant arcs: two exact methods, rounding only (1e-12)
         SplitCollector collector = SplitCollector.of(DEMO);

@@ -112,6 +112,48 @@ class DesignSolverTest {
         assertTrue(tight.iterations() < DesignSolver.MAX_ITERATIONS, "iterations " + tight.iterations());
     }
 
+    @Test
+    void shouldAgreeWithTheMultiplicativeAlgorithmAloneOnTheCupsWindows() {
+        // the same optimum two ways: Newton on the support after 40 multiplicative updates, and the
+        // multiplicative algorithm alone to its stopping rule; both within 1e-6 of the optimum's log det
+        // (equivalence theorem: log det F* − log det F ≤ max d − p), so their dets agree to 2 x 3e-6
+        double[][][] m = cupInformation();
+        DesignSolver.Solution fast = DesignSolver.solve(m, 1e-6);
+        DesignSolver.Solution alone = DesignSolver.multiplicative(flat(m), P, 1e-6);
+        assertTrue(fast.converged() && alone.converged());
+        double logRatio = Math.log(ProtonInformation.det(fast.information()) / ProtonInformation.det(alone.information()));
+        assertTrue(Math.abs(logRatio) <= 2 * P * 1e-6, "log det ratio " + logRatio);
+        // Newton's design is no worse: the multiplicative one stops short of the optimum, from below
+        assertTrue(logRatio >= -1e-12, "log det ratio " + logRatio);
+        assertTrue(fast.iterations() < alone.iterations() / 10,
+                "iterations " + fast.iterations() + " against " + alone.iterations());
+    }
+
+    @Test
+    void shouldAddTheSupportPointsAStartMissed() {
+        // quadratic regression on 201 points of [-1, 1] (the textbook design above: 1/3 at -1, 0, 1),
+        // Newton started on -1, -0.9, 0.9 and 1: the optimum on that support is not the optimum, its
+        // d(0) > p, and the vertex step must bring x = 0 (index 100) in
+        int n = 201;
+        double[][][] m = new double[n][][];
+        for (int j = 0; j < n; j++) {
+            double x = -1 + 2.0 * j / (n - 1);
+            m[j] = outer(new double[] {1, x, x * x});
+        }
+        double[] start = new double[n];
+        for (int j : new int[] {0, 10, 190, 200}) {
+            start[j] = 0.25;
+        }
+        DesignSolver.Solution s = new SupportNewton(flat(m), P).solve(start, 0.5, 1e-9, 0);
+        assertNotNull(s);
+        assertTrue(s.converged() && s.maxVariance() <= P * (1 + 1e-9), "max d " + s.maxVariance());
+        // closed form of the textbook design (Atkinson, Donev and Tobias 2007, §11.2 [memory]);
+        // 1e-6: shares of a 1e-9 converged design
+        assertEquals(1.0 / 3, s.shares()[0], 1e-6);
+        assertEquals(1.0 / 3, s.shares()[100], 1e-6);
+        assertEquals(1.0 / 3, s.shares()[200], 1e-6);
+    }
+
     private static DesignSolver.Solution cupDesign(double tolerance) {
         return DesignSolver.solve(cupInformation(), tolerance);
     }
@@ -144,6 +186,16 @@ class DesignSolverTest {
             share[j] /= sum;
         }
         return share;
+    }
+
+    private static double[] flat(double[][][] m) {
+        double[] flat = new double[m.length * P * P];
+        for (int j = 0; j < m.length; j++) {
+            for (int a = 0; a < P; a++) {
+                System.arraycopy(m[j][a], 0, flat, (j * P + a) * P, P);
+            }
+        }
+        return flat;
     }
 
     private static double[][] outer(double[] g) {
