@@ -86,16 +86,10 @@ public class FitBenchmark {
         double[] nearSigma = NearSunCase.sigma(near);
         int from = 52;
         int to = from + 64;
-        int peak = peakWindow(Species.PROTON.voltsAtSpeed(ReferenceCase.SPEED));
-        double[] lo32 = new double[32];
-        double[] hi32 = new double[32];
-        for (int j = 0; j < 32; j++) {
-            lo32[j] = DemoCup.TABLE.lowVolts(peak - 16 + j);
-            hi32[j] = DemoCup.TABLE.highVolts(peak - 16 + j);
-        }
-        double[] ref32 = new double[32];
-        new PlasmaModel(lo32, hi32, ReferenceCase.AREA, false).evaluate(new double[] {ReferenceCase.DENSITY,
-            ReferenceCase.SPEED, ReferenceCase.thermalSpeed()}, ref32, null);
+        double[][] focus32Case = focus32Reference();
+        double[] lo32 = focus32Case[0];
+        double[] hi32 = focus32Case[1];
+        double[] ref32 = focus32Case[2];
         for (int k = 0; k < POOL; k++) {
             double[] r = new double[ref.length];
             for (int j = 0; j < r.length; j++) {
@@ -116,6 +110,24 @@ public class FitBenchmark {
                     java.util.Arrays.copyOfRange(NearSunCase.high(), from, to), java.util.Arrays.copyOfRange(s, from, to),
                     java.util.Arrays.copyOfRange(nearSigma, from, to), null, null, 0, 0);
         }
+    }
+
+    /**
+     * The 32-window focus case: the default table's windows 16 below to 15 above the reference case's
+     * proton peak and their noiseless proton currents, as {low volts, high volts, amperes}.
+     */
+    static double[][] focus32Reference() {
+        int peak = peakWindow(Species.PROTON.voltsAtSpeed(ReferenceCase.SPEED));
+        double[] lo32 = new double[32];
+        double[] hi32 = new double[32];
+        for (int j = 0; j < 32; j++) {
+            lo32[j] = DemoCup.TABLE.lowVolts(peak - 16 + j);
+            hi32[j] = DemoCup.TABLE.highVolts(peak - 16 + j);
+        }
+        double[] ref32 = new double[32];
+        new PlasmaModel(lo32, hi32, ReferenceCase.AREA, false).evaluate(new double[] {ReferenceCase.DENSITY,
+            ReferenceCase.SPEED, ReferenceCase.thermalSpeed()}, ref32, null);
+        return new double[][] {lo32, hi32, ref32};
     }
 
     /** The default-table window holding {@code volts}. */

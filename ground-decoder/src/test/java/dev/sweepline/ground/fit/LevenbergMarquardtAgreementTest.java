@@ -320,16 +320,10 @@ class LevenbergMarquardtAgreementTest {
         Random rng = new Random(SEED);
         List<SpectrumInput> out = new ArrayList<>();
         double[] ref = ReferenceCase.currents();
-        int peak = FitBenchmark.peakWindow(Species.PROTON.voltsAtSpeed(ReferenceCase.SPEED));
-        double[] lo32 = new double[32];
-        double[] hi32 = new double[32];
-        for (int j = 0; j < 32; j++) {
-            lo32[j] = DemoCup.TABLE.lowVolts(peak - 16 + j);
-            hi32[j] = DemoCup.TABLE.highVolts(peak - 16 + j);
-        }
-        double[] ref32 = new double[32];
-        new PlasmaModel(lo32, hi32, ReferenceCase.AREA, false).evaluate(new double[] {ReferenceCase.DENSITY,
-            ReferenceCase.SPEED, ReferenceCase.thermalSpeed()}, ref32, null);
+        double[][] focus32 = FitBenchmark.focus32Reference();
+        double[] lo32 = focus32[0];
+        double[] hi32 = focus32[1];
+        double[] ref32 = focus32[2];
         double[] near = NearSunCase.currents();
         double[] nearSigma = NearSunCase.sigma(near);
         List<AlphaScenario> scenarios = List.of(AlphaScenario.nearSun(0.0), AlphaScenario.nearSun(0.02),

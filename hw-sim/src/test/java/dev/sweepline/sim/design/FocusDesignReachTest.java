@@ -4,15 +4,6 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import dev.sweepline.fsw.sweep.FocusDesign;
-import dev.sweepline.sim.cup.FaradayCup;
-import dev.sweepline.sim.hv.WindowVolts;
-import dev.sweepline.sim.instrument.InstrumentModel;
-import dev.sweepline.sim.instrument.TestInstruments;
-import dev.sweepline.sim.plasma.PlasmaState;
-import dev.sweepline.sim.scenario.PlasmaStates;
-import dev.sweepline.sim.scenario.Scenario;
-import dev.sweepline.sim.scenario.ScenarioLoader;
-import dev.sweepline.sim.scenario.ScenarioTimeline;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
@@ -108,41 +99,10 @@ class FocusDesignReachTest {
     }
 
     private static List<Case> cases() {
-        InstrumentModel demo = TestInstruments.DEMO_CUP;
-        WindowVolts windows = new WindowVolts(demo.flight().defaultTable(), demo.calibration());
-        FaradayCup cup = new FaradayCup(demo.cup());
-        DOptimalDesign design = new DOptimalDesign(cup, demo.preamp(), windows);
         List<Case> out = new ArrayList<>();
-        double[] q = new double[4];
-        for (String name : ScenarioLoader.builtInNames()) {
-            Scenario scenario = ScenarioLoader.builtIn(name);
-            ScenarioTimeline timeline = scenario.timeline(1);
-            for (double t : new double[] {2, 4, 6}) {
-                PlasmaState plasma = PlasmaStates.of(timeline.at(t), scenario.alphaDriftDirection());
-                double[][][] m = design.windowInformation(List.of(plasma), STEP_SECONDS);
-                DesignSolver.Solution optimum = DesignSolver.solve(m, DOptimalDesign.TOLERANCE);
-                double[] current = new double[m.length];
-                int peak = 0;
-                for (int j = 0; j < m.length; j++) {
-                    cup.quadrantCurrents(plasma, windows.lowVolts(j), windows.highVolts(j), q);
-                    current[j] = q[0] + q[1] + q[2] + q[3];
-                    if (current[j] > current[peak]) {
-                        peak = j;
-                    }
-                }
-                double half = current[peak] / 2;
-                int lo = peak;
-                while (current[lo - 1] >= half) {
-                    lo--;
-                }
-                int hi = peak;
-                while (current[hi + 1] >= half) {
-                    hi++;
-                }
-                double left = lo - 1 + (current[lo - 1] - half) / (current[lo - 1] - current[lo]);
-                double right = hi + (current[hi] - half) / (current[hi] - current[hi + 1]);
-                out.add(new Case(name + " t=" + t, m, optimum, peak, peak - left, right - peak));
-            }
+        for (BuiltInPeaks.Peak p : BuiltInPeaks.of(STEP_SECONDS)) {
+            out.add(new Case(p.scenario() + " t=" + p.time(), p.m(), p.optimum(), p.peak(), p.peak() - p.left(),
+                    p.right() - p.peak()));
         }
         return out;
     }
