@@ -37,7 +37,7 @@ enum FocusTables {
         }
     },
     /**
-     * The support dwell with paired support (focusStyle 15): every focus window dwells 3 periods, the
+     * The support dwell with paired support (focusStyle 15): every focus window dwells 4 periods, the
      * three support points are each two neighbouring windows read in opposite halves of the sweep
      * (docs/focus-design.md, "Paired support").
      */
@@ -46,7 +46,7 @@ enum FocusTables {
         void apply(SweepParameters p) {
             SUPPORT_DWELL.apply(p);
             p.focusStyle |= SweepParameters.FOCUS_STYLE_PAIRED_SUPPORT;
-            p.focusFloorPeriods = 3;
+            p.focusFloorPeriods = 4;
         }
     };
 

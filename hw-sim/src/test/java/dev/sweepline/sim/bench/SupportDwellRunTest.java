@@ -41,14 +41,14 @@ class SupportDwellRunTest {
             String report = String.format(Locale.ROOT, "%s ground p95 n/U/T %.2e %.2e %.2e -> %.2e %.2e %.2e, D-eff %.3f -> %.3f",
                     scenario, unpaired[0], unpaired[1], unpaired[2], paired[0], paired[1], paired[2], unpaired[3], paired[3]);
             System.out.println(report);
-            // docs/focus-design.md, "Paired support", 3 seeds x 120 s: p95 n 0.34 and 0.24 of the unpaired
-            // table's, U 0.46 and 0.47, T 0.94 and 0.21 (quiet-perihelion, fast-wind); here one seed of 60 s
-            // (seed 1, 60 s measured: n 0.39, U 0.54, T 1.04 on quiet-perihelion)
+            // docs/focus-design.md, "Paired support", 3 seeds x 120 s: p95 n 0.25 of the unpaired table's on
+            // both, U 0.33 and 0.47, T 0.66 and 0.22 (quiet-perihelion, fast-wind); seed 1, 60 s here
+            // (measured n 0.25 and 0.22, U 0.38 and 0.43, T 0.66 and 0.23)
             assertTrue(paired[0] <= 0.5 * unpaired[0], report);
             assertTrue(paired[1] <= 0.7 * unpaired[1], report);
-            assertTrue(paired[2] <= (scenario.equals("fast-wind") ? 0.5 : 1.1) * unpaired[2], report);
-            // and keeps the D-efficiency of issue 13's goal on these two (>= 0.75 each; measured 0.83, 0.89)
-            assertTrue(paired[3] >= 0.80, report);
+            assertTrue(paired[2] <= 0.75 * unpaired[2], report);
+            // with a D-efficiency above the equal-dwell tables' (0.69 and 0.67, the test above; measured 0.81, 0.83)
+            assertTrue(paired[3] >= 0.78, report);
         }
     }
 
