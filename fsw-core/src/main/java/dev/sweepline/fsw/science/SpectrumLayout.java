@@ -25,12 +25,12 @@ public final class SpectrumLayout {
     public static final int LAYOUT_VERSION_2 = 0x82;
     /** Layout version octet of a spectrum with support windows: bit 7 set, bits 6..0 = 3 (telemetry ICD §4). */
     public static final int LAYOUT_VERSION_3 = 0x83;
-    /** Layout 3: offset of the support window count b (1), 0..3. */
+    /** Layout 3: offset of the support window count b (1), 1..6. */
     public static final int SUPPORT_COUNT_OFFSET = 18;
     /** Layout 3: octets of one support window entry: offset from f (1), integration periods (2). */
     public static final int SUPPORT_ENTRY_OCTETS = 3;
     /** Layout 3: most support windows. */
-    public static final int MAX_SUPPORT_WINDOWS = 3;
+    public static final int MAX_SUPPORT_WINDOWS = 6;
     /** Offset of the layout version (1). */
     public static final int VERSION_OFFSET = 0;
     /** Offset of the instrument id (2): the description's {@code id}. */

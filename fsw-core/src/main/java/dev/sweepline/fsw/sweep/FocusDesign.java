@@ -30,8 +30,10 @@ public final class FocusDesign {
     /** Reach above the peak in high half-widths at half maximum, Q8: 1.75 (docs/focus-design.md). */
     public static final int HIGH_REACH_PER_HWHM_Q8 = 448;
 
-    /** Support windows of a support-dwell sweep: low flank, peak, high flank. */
+    /** Support points of a support-dwell sweep: low flank, peak, high flank. */
     public static final int SUPPORT_WINDOWS = 3;
+    /** Most support windows of a sweep: each support point paired with a neighbour ({@link #pairedSupport}). */
+    public static final int MAX_SUPPORT_WINDOWS = 2 * SUPPORT_WINDOWS;
     /** Largest half-width at half maximum, windows, the support factor tables are indexed by (wider peaks use the last entry). */
     public static final int SUPPORT_TABLE_HALF_WIDTHS = 64;
     /**
@@ -156,10 +158,46 @@ public final class FocusDesign {
     }
 
     /**
-     * The dwell of each of {@code supports} support windows of a support-dwell sweep over {@code steps}
-     * windows: the floor plus an equal share of what the sweep's integration leaves after every window's
-     * floor, at most the dwell limit. The sweep's integration is {@code integrationPeriods} times the
-     * windows when the budget is 0, else the budget after the settles (as {@link #focusPeriods}).
+     * Paired support (R23): pairs each of the {@code n} support windows in {@code out} (ascending: low
+     * flank, peak, high flank) with a neighbour: a flank with the next window outward (inward at the band's
+     * edge), the peak with the window on the side of its refined position {@code peakQ8}; inside
+     * {@code first..last}, ascending, without repeats. In the interleaved order two neighbouring windows
+     * are read in opposite halves of the sweep (one on the way out, one on the way back), so a pair's
+     * dwell is spread over the sweep's time instead of one long step, as the equal-dwell band's is
+     * (docs/focus-design.md, "Paired support").
+     *
+     * @return how many support windows {@code out} holds now (at most 2 n)
+     */
+    public int pairedSupport(int[] out, int n, int peakQ8, int first, int last) {
+        int peak = clamp(((long) peakQ8 + 128) >> 8, first, last);
+        int m = 0;
+        for (int k = 0; k < n; k++) {
+            int w = out[k];
+            int step = w < peak ? -1 : w > peak ? 1 : (peakQ8 & 0xFF) >= 128 ? -1 : 1;
+            int v = w + step;
+            if (v < first || v > last) {
+                v = w - step;
+            }
+            pairScratch[2 * k] = Math.min(w, v);
+            pairScratch[2 * k + 1] = Math.max(w, v);
+        }
+        for (int k = 0; k < 2 * n; k++) {
+            int w = pairScratch[k];
+            if (w >= first && w <= last) {
+                m = addSupport(w, out, m);
+            }
+        }
+        return m;
+    }
+
+    /** Scratch of {@link #pairedSupport}: the pairs before repeats are dropped. */
+    private final int[] pairScratch = new int[MAX_SUPPORT_WINDOWS];
+
+    /**
+     * The dwell of each of {@code supports} support windows of a support-dwell sweep over {@code first..last}:
+     * the floor plus an equal share of what the sweep's integration leaves after every window's floor, at
+     * most the dwell limit. The sweep's integration is {@code integrationPeriods} times the windows when
+     * the budget is 0, else the budget after the settles (as {@link #focusPeriods}).
      */
     int supportPeriods(SweepParameters p, int[] dacLow, int[] dacHigh, int first, int last, long firstSettleMicros,
                        int supports) {

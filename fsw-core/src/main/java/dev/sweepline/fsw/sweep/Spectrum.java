@@ -51,8 +51,8 @@ public final class Spectrum {
     private int fwhmWindowsQ8;
     private int lowHalfWindowsQ8;
     private int integrationPeriods;
-    private final int[] supportEntry = new int[FocusDesign.SUPPORT_WINDOWS];
-    private final int[] supportPeriods = new int[FocusDesign.SUPPORT_WINDOWS];
+    private final int[] supportEntry = new int[FocusDesign.MAX_SUPPORT_WINDOWS];
+    private final int[] supportPeriods = new int[FocusDesign.MAX_SUPPORT_WINDOWS];
     private int supportCount;
 
     /** An empty spectrum for sweeps of {@code instrument}. */

@@ -153,6 +153,11 @@
  *     step's dwell travels in its step command (hardware ICD §3.1) and its settle is its own (R4). An edge
  *     search sweep dwells the table's dwell everywhere. The spectrum of a sweep with support windows is
  *     packet layout 3 (telemetry ICD §4), which lists them with their dwell; every other stays layout 2.
+ *     With {@code focusStyle} bit 3 as well (12..15, paired support) each support window is paired with
+ *     a neighbour (a flank with the next window outward, inward at the band's edge; the peak with the
+ *     window on the side of its refined position, {@link FocusDesign#pairedSupport}) and the six (fewer
+ *     where pairs meet) share the rest equally: in the interleaved order two neighbours are read in
+ *     opposite halves of the sweep, so no support point is one long step at one moment of a changing wind.
  *     <i>SupportDwellTest, AllocationTest; hw-sim SupportDwellReachTest, SupportDwellRunTest.</i></li>
  * </ol>
  *

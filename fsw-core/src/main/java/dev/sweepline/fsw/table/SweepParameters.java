@@ -29,6 +29,12 @@ public final class SweepParameters {
      * FocusDesign) share the rest of the sweep's integration equally (docs/focus-design.md, "Support dwell").
      */
     public static final int FOCUS_STYLE_SUPPORT_DWELL = 4;
+    /**
+     * {@link #focusStyle} flag, added to a support-dwell style (12..15): paired support. Each of the three
+     * support points is two neighbouring windows sharing its dwell (FocusDesign.pairedSupport), read in
+     * opposite halves of an interleaved sweep (docs/focus-design.md, "Paired support").
+     */
+    public static final int FOCUS_STYLE_PAIRED_SUPPORT = 8;
     /** Upper limit of {@link #focusBudgetMicros}: 10 s (design limit: a focus sweep far longer than the wind's changes teaches little). */
     public static final int MAX_FOCUS_BUDGET_MICROS = 10_000_000;
     /** Upper limit of {@link #robustnessMarginWindows} (design limit: a quarter of the table capacity). */
@@ -89,7 +95,7 @@ public final class SweepParameters {
     /**
      * How focus bands are chosen and stepped: {@link #FOCUS_STYLE_BAND} (the default) or
      * {@link #FOCUS_STYLE_DESIGN}, either plus {@link #FOCUS_STYLE_INTERLEAVED}, any of these plus
-     * {@link #FOCUS_STYLE_SUPPORT_DWELL} (0..7).
+     * {@link #FOCUS_STYLE_SUPPORT_DWELL} (0..7), a support-dwell style plus {@link #FOCUS_STYLE_PAIRED_SUPPORT} (12..15).
      */
     public int focusStyle;
     /**
@@ -199,6 +205,11 @@ public final class SweepParameters {
         return (focusStyle & FOCUS_STYLE_SUPPORT_DWELL) != 0;
     }
 
+    /** True when support-dwell sweeps pair each support window with a neighbour ({@link #FOCUS_STYLE_PAIRED_SUPPORT}). */
+    public boolean pairedSupport() {
+        return (focusStyle & FOCUS_STYLE_PAIRED_SUPPORT) != 0;
+    }
+
     /** True when the floor dwell is unset (0): no table image version 4 needed. */
     public boolean defaultFloor() {
         return focusFloorPeriods == 0;
@@ -260,7 +271,8 @@ public final class SweepParameters {
             return TableStatus.BAD_NOISE;
         }
         if (focusStyle < FOCUS_STYLE_BAND
-            || focusStyle > (FOCUS_STYLE_DESIGN | FOCUS_STYLE_INTERLEAVED | FOCUS_STYLE_SUPPORT_DWELL)
+            || focusStyle > (FOCUS_STYLE_DESIGN | FOCUS_STYLE_INTERLEAVED | FOCUS_STYLE_SUPPORT_DWELL | FOCUS_STYLE_PAIRED_SUPPORT)
+            || pairedSupport() && !supportDwell()
             || focusFloorPeriods < (supportDwell() ? 1 : 0) || focusFloorPeriods > integrationPeriods
             || focusBudgetMicros < 0 || focusBudgetMicros > MAX_FOCUS_BUDGET_MICROS
             || robustnessMarginWindows < 0 || robustnessMarginWindows > MAX_ROBUSTNESS_MARGIN_WINDOWS

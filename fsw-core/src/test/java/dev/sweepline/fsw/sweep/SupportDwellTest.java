@@ -311,11 +311,19 @@ class SupportDwellTest {
 
     @Test
     void shouldRefuseAStyleOrFloorOutOfRange() {
-        // commands.md §4.1: focusStyle 0..7; focusFloorPeriods 1..integrationPeriods with support dwell
+        // commands.md §4.1: focusStyle 0..7 and 12..15 (paired support only with support dwell);
+        // focusFloorPeriods 1..integrationPeriods with support dwell
         SweepParameters p = support(7, 0);
         assertEquals(TableStatus.OK, p.validate(DemoCup.INSTRUMENT.rangeRatioShift()));
-        p.focusStyle = 8;
-        assertEquals(TableStatus.BAD_STYLE, p.validate(DemoCup.INSTRUMENT.rangeRatioShift()));
+        p.focusStyle = 15;
+        assertEquals(TableStatus.OK, p.validate(DemoCup.INSTRUMENT.rangeRatioShift()));
+        p.focusStyle = 12;
+        assertEquals(TableStatus.OK, p.validate(DemoCup.INSTRUMENT.rangeRatioShift()));
+        for (int style : new int[] {8, 11, 16}) {
+            p.focusStyle = style;
+            assertEquals(TableStatus.BAD_STYLE, p.validate(DemoCup.INSTRUMENT.rangeRatioShift()), "focusStyle " + style);
+        }
+        p.focusStyle = 7;
         p = support(4, 0);
         p.focusFloorPeriods = 0;
         assertEquals(TableStatus.BAD_STYLE, p.validate(DemoCup.INSTRUMENT.rangeRatioShift()));
@@ -328,6 +336,74 @@ class SupportDwellTest {
         assertEquals(TableStatus.BAD_STYLE, p.validate(DemoCup.INSTRUMENT.rangeRatioShift()));
         p.focusFloorPeriods = 0; // ignored without support dwell
         assertEquals(TableStatus.OK, p.validate(DemoCup.INSTRUMENT.rangeRatioShift()));
+    }
+
+    @Test
+    void shouldPairEachSupportWindowWithANeighbour() {
+        FocusDesign d = new FocusDesign(DemoCup.INSTRUMENT);
+        int[] out = new int[FocusDesign.MAX_SUPPORT_WINDOWS];
+        int[] ranges = new int[128];
+        // flanks at 35 and 62 (shouldClampTheSupportToTheBandAndDropRepeats): each pairs with the window
+        // outward; the peak at 50.0 (fraction below a half) with the window above it
+        int n = d.supportWindows(50 << 8, 10 << 8, 9 << 8, 30, 80, ranges, out);
+        assertEquals(6, d.pairedSupport(out, n, 50 << 8, 30, 80));
+        assertArrayEquals(new int[] {34, 35, 50, 51, 62, 63}, out);
+        // a peak refined at 49.75 rounds to 50 and pairs with 49, the side of its refined position
+        n = d.supportWindows((50 << 8) - 64, 10 << 8, 9 << 8, 30, 80, ranges, out);
+        d.pairedSupport(out, n, (50 << 8) - 64, 30, 80);
+        assertEquals(49, out[2]);
+        assertEquals(50, out[3]);
+        // flanks on the band's edges pair inward
+        n = d.supportWindows(50 << 8, 10 << 8, 9 << 8, 40, 55, ranges, out);
+        assertEquals(6, d.pairedSupport(out, n, 50 << 8, 40, 55));
+        assertArrayEquals(new int[] {40, 41, 50, 51, 54, 55}, out);
+        // a band of two windows: the pairs coincide, no repeats
+        n = d.supportWindows(50 << 8, 10 << 8, 9 << 8, 50, 51, ranges, out);
+        assertEquals(2, d.pairedSupport(out, n, 50 << 8, 50, 51));
+        assertEquals(50, out[0]);
+        assertEquals(51, out[1]);
+    }
+
+    @Test
+    void shouldReadEachPairInOppositeHalvesOfAnInterleavedSweep() {
+        Sweeps l = new Sweeps();
+        ClosedLoop loop = new ClosedLoop(new SweepScheduler(DemoCup.INSTRUMENT, Fixtures.TABLE, support(15, 0), l),
+                Fixtures.nearSun(31));
+        loop.runSweeps(30);
+        int dwell = DemoCup.parameters().integrationPeriods;
+        int focus = 0;
+        for (int i = 0; i < l.spectra.size(); i++) {
+            int[] r = l.spectra.get(i);
+            if (r[0] != SweepMode.FOCUS.ordinal()) {
+                continue;
+            }
+            focus++;
+            int supports = (r.length - 4) / 2;
+            assertEquals(6, supports, "a wide steady peak has three pairs of support windows");
+            // closed form: the floor plus a sixth of (table dwell - floor) x band windows (budget 0)
+            int share = FLOOR + (dwell - FLOOR) * r[2] / 6;
+            List<StepCommand> steps = l.steps.get(i);
+            for (int k = 0; k < supports; k += 2) {
+                assertEquals(r[4 + 2 * k] + 1, r[6 + 2 * k], "a pair is two neighbouring windows");
+                assertEquals(share, r[5 + 2 * k]);
+                assertEquals(share, r[7 + 2 * k]);
+                // interleaved order (R22): even offsets on the way out, odd ones on the way back
+                int a = stepIndex(steps, r[1] + r[4 + 2 * k]);
+                int b = stepIndex(steps, r[1] + r[6 + 2 * k]);
+                int half = (steps.size() + 1) / 2;
+                assertTrue((a < half) != (b < half), "pair read at steps " + a + " and " + b + " of " + steps.size());
+            }
+        }
+        assertTrue(focus >= 20, "focus sweeps " + focus);
+    }
+
+    private static int stepIndex(List<StepCommand> steps, int window) {
+        for (int k = 0; k < steps.size(); k++) {
+            if (steps.get(k).window == window) {
+                return k;
+            }
+        }
+        throw new AssertionError("window " + window + " not stepped");
     }
 
     @Test

@@ -42,7 +42,7 @@ final class SpectrumHeader {
     /** Layout 3: octets of one support window entry, offset (1) and integration periods (2) (ICD §4). */
     static final int SUPPORT_ENTRY_OCTETS = 3;
     /** Layout 3: most support windows (ICD §4). */
-    static final int MAX_SUPPORT_WINDOWS = 3;
+    static final int MAX_SUPPORT_WINDOWS = 6;
     /** Bit 7 of the first octet: set in every versioned layout (ICD §4). */
     static final int VERSIONED_BIT = 0x80;
     /** Fixed octets of layout 1, before the gain tags (ICD §4). */

@@ -96,7 +96,7 @@ class SpectrumLayoutThreeTest {
     void shouldRefuseDamagedSupportWindowsAndDecodeTheNextSpectrum() {
         byte[][] bad = {
             layoutThree(0), // b = 0
-            layoutThree(4, 0, 9, 1, 9, 2, 9, 3, 9), // b = 4 > 3
+            layoutThree(7, 0, 9, 1, 9, 2, 9, 3, 9, 4, 9, 5, 9, 6, 9), // b = 7 > 6 (ICD §4: paired support, 2 x 3)
             layoutThree(1, 4, 9), // offset 4 beyond c = 4
             layoutThree(2, 2, 9, 1, 9), // not ascending
             layoutThree(2, 1, 9, 1, 9), // a repeat
@@ -110,6 +110,10 @@ class SpectrumLayoutThreeTest {
             // the next spectrum decodes as usual
             assertTrue(decode(layoutThree(1, 3, 9)).isOk());
         }
+        // b = 4, more than the three support points of unpaired support, is a valid layout 3 (ICD §4: b 1..6)
+        SpectrumResult fourSupports = decode(layoutThree(4, 0, 9, 1, 9, 2, 9, 3, 9));
+        assertTrue(fourSupports.isOk(), fourSupports.detail());
+        assertArrayEquals(new int[] {9, 9, 9, 9}, fourSupports.spectrum().windowPeriods()); // every window a support window of 9 periods
         // the floor dwell at offset 16 of 0 periods
         byte[] zeroFloor = layoutThree(1, 1, 9);
         zeroFloor[USER_DATA + 16] = 0;

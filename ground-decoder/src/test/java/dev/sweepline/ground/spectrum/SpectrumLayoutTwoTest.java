@@ -169,7 +169,7 @@ class SpectrumLayoutTwoTest {
         byte[] p = Hex.bytes(GoldenSpectraV2.DEMO_V2);
         p[12] = (byte) 0x84; // bit 7 set, version 4: not a layout of ICD §4
         assertEquals(SpectrumError.UNKNOWN_LAYOUT, decode(p).error());
-        p[12] = (byte) 0x83; // layout 3 read over a layout-2 body: octet 18 (gain tags 0x1a = 26) is no b of 1..3
+        p[12] = (byte) 0x83; // layout 3 read over a layout-2 body: octet 18 (gain tags 0x1a = 26) is no b of 1..6
         assertEquals(SpectrumError.BAD_SUPPORT_WINDOWS, decode(p).error());
         p[12] = (byte) 0x80;
         assertEquals(SpectrumError.UNKNOWN_LAYOUT, decode(p).error());

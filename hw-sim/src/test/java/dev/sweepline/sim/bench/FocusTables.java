@@ -5,7 +5,7 @@ import dev.sweepline.fsw.table.SweepParameters;
 /**
  * The focus tables the bench tests compare (docs/focus-design.md): the instrument's default (band style)
  * and the interleaved design table that the demo campaign campaigns/focus-style.yaml compares with it, and
- * that table with the support dwell (docs/focus-design.md, "Support dwell").
+ * that table with the support dwell (docs/focus-design.md, "Support dwell"), unpaired and paired.
  */
 enum FocusTables {
     /** The default table, unchanged. */
@@ -34,6 +34,19 @@ enum FocusTables {
             INTERLEAVED_DESIGN.apply(p);
             p.focusStyle |= SweepParameters.FOCUS_STYLE_SUPPORT_DWELL;
             p.focusFloorPeriods = 1;
+        }
+    },
+    /**
+     * The support dwell with paired support (focusStyle 15): every focus window dwells 4 periods, the
+     * three support points are each two neighbouring windows read in opposite halves of the sweep
+     * (docs/focus-design.md, "Paired support").
+     */
+    PAIRED_SUPPORT {
+        @Override
+        void apply(SweepParameters p) {
+            SUPPORT_DWELL.apply(p);
+            p.focusStyle |= SweepParameters.FOCUS_STYLE_PAIRED_SUPPORT;
+            p.focusFloorPeriods = 4;
         }
     };
 

@@ -6,6 +6,8 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import dev.sweepline.sim.scenario.ScenarioLoader;
 import java.util.Locale;
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.EnumSource;
 
 /**
  * The support dwell table (FocusTables.SUPPORT_DWELL, sweep design note R23) in closed loop
@@ -32,9 +34,41 @@ class SupportDwellRunTest {
     }
 
     @Test
-    void shouldHoldTheStrongShocksNewPeakCentredWithinTwoSweeps() {
+    void shouldCutTheGroundsErrorsOfTheUnpairedSupportDwellWhileKeepingItsInformation() {
+        for (String scenario : new String[] {"quiet-perihelion", "fast-wind"}) {
+            double[] unpaired = groundP95(FocusTables.SUPPORT_DWELL, scenario);
+            double[] paired = groundP95(FocusTables.PAIRED_SUPPORT, scenario);
+            String report = String.format(Locale.ROOT, "%s ground p95 n/U/T %.2e %.2e %.2e -> %.2e %.2e %.2e, D-eff %.3f -> %.3f",
+                    scenario, unpaired[0], unpaired[1], unpaired[2], paired[0], paired[1], paired[2], unpaired[3], paired[3]);
+            System.out.println(report);
+            // docs/focus-design.md, "Paired support", 3 seeds x 120 s: p95 n 0.25 of the unpaired table's on
+            // both, U 0.33 and 0.47, T 0.66 and 0.22 (quiet-perihelion, fast-wind); seed 1, 60 s here
+            // (measured n 0.25 and 0.22, U 0.38 and 0.43, T 0.66 and 0.23)
+            assertTrue(paired[0] <= 0.5 * unpaired[0], report);
+            assertTrue(paired[1] <= 0.7 * unpaired[1], report);
+            assertTrue(paired[2] <= 0.75 * unpaired[2], report);
+            // with a D-efficiency above the equal-dwell tables' (0.69 and 0.67, the test above; measured 0.81, 0.83)
+            assertTrue(paired[3] >= 0.78, report);
+        }
+    }
+
+    /** The ground's p95 relative errors of n, U, T and the bench's D-efficiency, seed 1, 60 s. */
+    private static double[] groundP95(FocusTables table, String scenario) {
+        BenchConfig config = table.on(BenchConfig.defaults(ScenarioLoader.builtIn(scenario), 1, 60));
+        GroundCheck ground = new GroundCheck(config.flight(), GroundInstruments.of(config.instrument().spec()));
+        ClosedLoopBench.Result r = ClosedLoopBench.run(config, ClosedLoopBench.Progress.NONE,
+                ClosedLoopBench.Hooks.NONE.withFrames(ground.frames()));
+        GroundCheck.GroundFigures g = GroundCheck.figures(r.recorder().sweeps().size(),
+                ground.compared(r.recorder().sweeps(), r.recorder()::truthAt));
+        double[] p = g.p95Relative();
+        return new double[] {p[0], p[1], p[2], r.summary().informationEfficiency()};
+    }
+
+    @ParameterizedTest
+    @EnumSource(value = FocusTables.class, names = {"SUPPORT_DWELL", "PAIRED_SUPPORT"})
+    void shouldHoldTheStrongShocksNewPeakCentredWithinTwoSweeps(FocusTables table) {
         for (long seed = 1; seed <= 3; seed++) {
-            BenchConfig config = FocusTables.SUPPORT_DWELL.on(
+            BenchConfig config = table.on(
                     BenchConfig.defaults(ScenarioLoader.builtIn("perihelion-strong-shock"), seed, 45));
             RunSummary s = ClosedLoopBench.run(config, ClosedLoopBench.Progress.NONE).summary();
             assertEquals(1, s.strictReacquisitions().size());
