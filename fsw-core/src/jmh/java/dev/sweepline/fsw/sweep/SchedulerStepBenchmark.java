@@ -24,7 +24,8 @@ import org.openjdk.jmh.annotations.TearDown;
  * the sweep analysis at every sweep end is amortised in the mean as it is in flight.
  * Measured as a mean and, in sample mode, as a distribution, whose high percentiles are the step's tail
  * (the sweep-end analysis). Target: mean &lt;= 1 us, 0 B/op under {@code -prof gc}; in both focus styles
- * ({@code focusStyle} 1: the design style of sweep design note R21, with a budget and a quick survey).
+ * ({@code focusStyle} 1: the design style of sweep design note R21, with a budget and a quick survey; 7 and 15:
+ * support dwell and paired support, R23, at a floor of 4 periods).
  */
 @State(Scope.Thread)
 @BenchmarkMode({Mode.AverageTime, Mode.SampleTime})
@@ -38,7 +39,7 @@ public class SchedulerStepBenchmark {
     private final SweepCounter counter = new SweepCounter();
 
     /** Focus style (SweepParameters.FOCUS_STYLE_BAND, FOCUS_STYLE_DESIGN, or 3: the design interleaved). */
-    @Param({"0", "1", "3"})
+    @Param({"0", "1", "3", "7", "15"})
     public int focusStyle;
 
     /** Counts sweeps per mode without allocating (the benchmark checks that it measured both modes). */
@@ -70,6 +71,9 @@ public class SchedulerStepBenchmark {
     static SweepParameters parameters(int style) {
         SweepParameters p = (style & SweepParameters.FOCUS_STYLE_DESIGN) != 0 ? Fixtures.designStyle() : DemoCup.parameters();
         p.focusStyle = style;
+        if ((style & SweepParameters.FOCUS_STYLE_SUPPORT_DWELL) != 0) {
+            p.focusFloorPeriods = 4; // the paired-support test table's floor (hw-sim FocusTables)
+        }
         return p;
     }
 

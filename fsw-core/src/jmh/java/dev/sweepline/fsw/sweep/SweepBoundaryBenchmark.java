@@ -36,7 +36,7 @@ public class SweepBoundaryBenchmark {
     private long boundaries;
 
     /** Focus style (SweepParameters.FOCUS_STYLE_BAND, FOCUS_STYLE_DESIGN, or 3: the design interleaved). */
-    @Param({"0", "1", "3"})
+    @Param({"0", "1", "3", "7", "15"})
     public int focusStyle;
 
     /** Builds the scheduler and the canned replies and issues the first step. */
