@@ -45,10 +45,10 @@ public final class SweepScheduler {
     private int sweepFirst;
     private int sweepSteps;
     private int sweepPeriods;
-    /** Support-dwell focus sweep: its support windows (ascending), their dwell, and how many (0: none). */
+    /** Support-dwell focus sweep: its support windows (ascending), how many (0: none) and their common dwell. */
     private final int[] supportWindow = new int[FocusDesign.MAX_SUPPORT_WINDOWS];
-    private final int[] supportPeriods = new int[FocusDesign.MAX_SUPPORT_WINDOWS];
     private int supportCount;
+    private int supportPeriods;
     private boolean sweepAscending;
     private boolean sweepInterleaved;
     private int stepsIssued;
@@ -203,7 +203,7 @@ public final class SweepScheduler {
         building.begin(sweepNumber + 1, mode, first, sweepSteps, sweepAscending, nowMicros);
         building.integrationPeriods(sweepPeriods);
         for (int k = 0; k < supportCount; k++) {
-            building.support(k, supportWindow[k] - first, supportPeriods[k]);
+            building.support(k, supportWindow[k] - first, supportPeriods);
         }
         sweepActive = true;
     }
@@ -220,18 +220,15 @@ public final class SweepScheduler {
         if (params.pairedSupport()) {
             n = design.pairedSupport(supportWindow, n, band.referencePeakQ8(), first, last);
         }
-        int share = design.supportPeriods(params, dacLow, dacHigh, first, last, firstSettleMicros, n);
-        for (int k = 0; k < n; k++) {
-            supportPeriods[k] = share;
-        }
-        supportCount = share > sweepPeriods ? n : 0;
+        supportPeriods = design.supportPeriods(params, dacLow, dacHigh, first, last, firstSettleMicros, n);
+        supportCount = supportPeriods > sweepPeriods ? n : 0;
     }
 
     /** The dwell of {@code window} in the present sweep: a support window's, else the sweep's. */
     private int periodsOf(int window) {
         for (int k = 0; k < supportCount; k++) {
             if (supportWindow[k] == window) {
-                return supportPeriods[k];
+                return supportPeriods;
             }
         }
         return sweepPeriods;

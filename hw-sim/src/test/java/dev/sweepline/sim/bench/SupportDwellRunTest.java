@@ -6,14 +6,12 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import dev.sweepline.sim.scenario.ScenarioLoader;
 import java.util.Locale;
 import org.junit.jupiter.api.Test;
-import org.junit.jupiter.params.ParameterizedTest;
-import org.junit.jupiter.params.provider.EnumSource;
 
 /**
  * The support dwell table (FocusTables.SUPPORT_DWELL, sweep design note R23) in closed loop
  * (docs/focus-design.md, "Support dwell"): on the same plasma as the interleaved design table it collects
  * more of the attainable information (the bench's D-efficiency), keeps the lock and never locks on the
- * alphas, and holds the strong shock's new peak centred within 2 sweeps.
+ * alphas; the strong shock's reacquisition is DesignStyleRunTest's, for both support tables.
  */
 class SupportDwellRunTest {
     @Test
@@ -62,21 +60,5 @@ class SupportDwellRunTest {
                 ground.compared(r.recorder().sweeps(), r.recorder()::truthAt));
         double[] p = g.p95Relative();
         return new double[] {p[0], p[1], p[2], r.summary().informationEfficiency()};
-    }
-
-    @ParameterizedTest
-    @EnumSource(value = FocusTables.class, names = {"SUPPORT_DWELL", "PAIRED_SUPPORT"})
-    void shouldHoldTheStrongShocksNewPeakCentredWithinTwoSweeps(FocusTables table) {
-        for (long seed = 1; seed <= 3; seed++) {
-            BenchConfig config = table.on(
-                    BenchConfig.defaults(ScenarioLoader.builtIn("perihelion-strong-shock"), seed, 45));
-            RunSummary s = ClosedLoopBench.run(config, ClosedLoopBench.Progress.NONE).summary();
-            assertEquals(1, s.strictReacquisitions().size());
-            // the band centred within 2 windows of the new peak (Reacquisition.STRICT_CENTRE_WINDOWS) by the 2nd sweep
-            int strict = s.strictReacquireSweepsMax();
-            assertTrue(strict >= 1 && strict <= 2, "seed " + seed + ": strict reacquisition " + strict);
-            assertEquals(0, s.alphaLocks(), "seed " + seed);
-            assertTrue(s.lockFraction() >= 0.99, "seed " + seed + ": lock " + s.lockFraction());
-        }
     }
 }
