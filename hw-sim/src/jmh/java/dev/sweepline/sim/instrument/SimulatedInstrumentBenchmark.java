@@ -5,6 +5,7 @@ import dev.sweepline.fsw.link.StepCommand;
 import dev.sweepline.sim.plasma.IonPopulation;
 import dev.sweepline.sim.plasma.IonSpecies;
 import dev.sweepline.sim.plasma.PlasmaState;
+import dev.sweepline.sim.plasma.ReusablePlasma;
 import java.util.List;
 import java.util.concurrent.TimeUnit;
 import org.openjdk.jmh.annotations.Benchmark;
@@ -22,7 +23,9 @@ import org.openjdk.jmh.annotations.Warmup;
 
 /**
  * Cost of one simulated step: a survey of 128 log-spaced windows over a proton + alpha wind flowing
- * 4 deg and 2 deg off the normal (two populations, so the split collector's cache hits on the second).
+ * 4 deg and 2 deg off the normal (two populations, so the split collector's cache hits on the second);
+ * and the same survey with the flow direction turning a little from step to step, as the scenarios'
+ * fluctuations turn it in a closed-loop run, so that the collector computes both populations every step.
  * Run: {@code mvn -q -pl hw-sim -am -Pjmh verify -DskipTests -Djmh.includes=SimulatedInstrumentBenchmark
  * -Djmh.args="-f 1 -wi 3 -i 5 -prof gc"}. Each step's reply and truth are checked; an iteration in which
  * no window saw the wind fails.
@@ -39,6 +42,7 @@ public class SimulatedInstrumentBenchmark {
     private final StepTruth truth = new StepTruth();
     private SimulatedInstrument instrument;
     private PlasmaState plasma;
+    private final ReusablePlasma turning = new ReusablePlasma();
     private int next;
     private long nowMicros;
     private double peakTruthAmps;
@@ -72,6 +76,29 @@ public class SimulatedInstrumentBenchmark {
         StepCommand c = survey[next];
         next = (next + 1) & 127;
         nowMicros = instrument.execute(c, nowMicros, plasma, reply, truth);
+        check(c);
+        peakTruthAmps = Math.max(peakTruthAmps, truth.totalAmps);
+        return reply.quadrant[0] + reply.quadrant[3];
+    }
+
+    /**
+     * One step of the survey in a wind whose direction goes round a circle of 0.3 deg about 4 deg and 2 deg
+     * off the normal once every 360 simulated seconds (so it differs at every step), the alphas drifting
+     * 30 km/s along the field; checked ({@link #check}).
+     */
+    @Benchmark
+    public int executeStepTurningFlow() {
+        StepCommand c = survey[next];
+        next = (next + 1) & 127;
+        double turn = Math.toRadians(nowMicros % 360_000_000L / 1e6);
+        double thetaX = Math.toRadians(4 + 0.3 * Math.cos(turn));
+        double thetaY = Math.toRadians(2 + 0.3 * Math.sin(turn));
+        double vx = 400e3 * Math.sin(thetaX);
+        double vy = 400e3 * Math.sin(thetaY);
+        double vz = Math.sqrt(400e3 * 400e3 - vx * vx - vy * vy);
+        turning.protons(5e6, vx, vy, vz, 45e3, 38e3);
+        turning.alphas(0.2e6, vx + 30e3 * 0.3, vy + 30e3 * 0.2, vz + 30e3 * 0.93, 40.77e3, 40.77e3);
+        nowMicros = instrument.execute(c, nowMicros, turning.set(true, 0.3, 0.2, 0.93), reply, truth);
         check(c);
         peakTruthAmps = Math.max(peakTruthAmps, truth.totalAmps);
         return reply.quadrant[0] + reply.quadrant[3];

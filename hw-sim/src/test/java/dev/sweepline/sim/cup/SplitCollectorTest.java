@@ -119,6 +119,52 @@ class SplitCollectorTest {
     }
 
     @Test
+    void shouldGiveTheGeneralPathsFractionsForAnImageWellInside() {
+        // an image well inside the collector takes its breaks' sines and cosines from the axes' equations
+        // and its arcs' quadrants from their ends: the same fractions as the general path (every sine,
+        // cosine and midpoint evaluated; the collector's trigonometryOnly mode) up to rounding, 1e-14 of
+        // the image area (a few ulps of each of up to five arc terms of order pi r^2). Random shifts well
+        // inside, and shifts that put a split line within 1e-17..1e-3 of a tangent to the image (tiny arcs,
+        // midpoints next to a line), for the demo cup and two other radius ratios
+        double[][] radii = {{R, RC}, {1.0, 1.000002}, {1.0, 7.0}};
+        SplittableRandom rng = new SplittableRandom(SEED + 2);
+        double[] got = new double[4];
+        double[] general = new double[4];
+        for (double[] rr : radii) {
+            SplitCollector fast = new SplitCollector(rr[0], rr[1]);
+            SplitCollector reference = new SplitCollector(rr[0], rr[1], true);
+            double room = (rr[1] - rr[0]) * (1 - 1e-5);
+            for (int i = 0; i < 30_000; i++) {
+                double sx;
+                double sy;
+                if (i % 2 == 0) {
+                    double radius = room * Math.sqrt(rng.nextDouble());
+                    double angle = rng.nextDouble(2 * Math.PI);
+                    sx = radius * Math.cos(angle);
+                    sy = radius * Math.sin(angle);
+                } else {
+                    double near = rr[0] * (1 - Math.pow(10, -rng.nextDouble(3, 17)));
+                    sx = Math.min(near, room) * (rng.nextBoolean() ? 1 : -1);
+                    sy = rng.nextDouble(-1, 1) * Math.min(room, rr[0]) * 0.5;
+                    if (rng.nextBoolean()) {
+                        double t = sx;
+                        sx = sy;
+                        sy = t;
+                    }
+                }
+                fast.fractions(sx, sy, got);
+                reference.fractions(sx, sy, general);
+                for (int q = 0; q < 4; q++) {
+                    if (!(Math.abs(got[q] - general[q]) <= 1e-14)) {
+                        assertEquals(general[q], got[q], 1e-14, "Q" + (q + 1) + " at shift " + sx + ", " + sy
+                                + " (radii " + rr[0] + ", " + rr[1] + ")");
+                    }
+                }
+            }
+        }
+    }
+
+    @Test
     void shouldSumTheQuadrantsToTheClosedFormAcceptance() {
         // disc-overlap closed form vs the quadrant arcs: two exact methods, rounding only (1e-12)
         SplitCollector collector = SplitCollector.of(DEMO);
