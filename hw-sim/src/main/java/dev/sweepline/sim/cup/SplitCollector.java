@@ -1,5 +1,7 @@
 package dev.sweepline.sim.cup;
 
+import dev.sweepline.sim.plasma.InverseTrigonometry;
+
 /**
  * Exact geometry of a shifted aperture image (disc of radius R) on a circular collector (radius Rc,
  * centred at the origin) split along the x and y axes into quadrants Q1 (x&gt;0, y&gt;0), Q2 (x&lt;0, y&gt;0),
@@ -17,7 +19,8 @@ package dev.sweepline.sim.cup;
  * the axes alone, where the sines and cosines of the break angles are known without evaluating them: on
  * the y axis cos = -cx/r and sin = ±sqrt(1 - cos²), on the x axis sin = -cy/r and cos = ±sqrt(1 - sin²);
  * and an arc's quadrant is that of the midpoint formed from its two ends. Only the angles themselves (one
- * acos, one asin) are evaluated there; the fractions agree with the general path's within 1e-15.
+ * acos, one asin) are evaluated there; the fractions agree with the general path's within 1e-15. The breaks'
+ * acos and asin are {@link InverseTrigonometry}'s (StrictMath's to the bit, without the native call).
  *
  * <p>Threading: not thread-safe; it caches the fractions of the last two shifts, because a plasma's
  * populations share one flow direction or, with drifting alphas, two, and the same plasma is read
@@ -221,7 +224,7 @@ public final class SplitCollector {
         int n = 0;
         if (Math.abs(cx) < r) {
             double cos = -cx / r;
-            double phi = Math.acos(cos);
+            double phi = InverseTrigonometry.acos(cos);
             if (known) {
                 double sin = Math.sqrt((1 - cos) * (1 + cos));
                 setTrig(n, sin, cos);
@@ -232,7 +235,7 @@ public final class SplitCollector {
         }
         if (Math.abs(cy) < r) {
             double sin = -cy / r;
-            double phi = Math.asin(sin);
+            double phi = InverseTrigonometry.asin(sin);
             if (known) {
                 double cos = Math.sqrt((1 - sin) * (1 + sin));
                 setTrig(n, sin, cos);
@@ -245,7 +248,7 @@ public final class SplitCollector {
         double dy = oy - cy;
         if (dist > Math.abs(r - ro) && dist < r + ro) {
             double alpha = Math.atan2(dy, dx);
-            double beta = Math.acos(clamp((dist * dist + r * r - ro * ro) / (2 * dist * r)));
+            double beta = InverseTrigonometry.acos(clamp((dist * dist + r * r - ro * ro) / (2 * dist * r)));
             breaks[n++] = normalise(alpha + beta);
             breaks[n++] = normalise(alpha - beta);
         }
@@ -397,6 +400,13 @@ public final class SplitCollector {
     }
 
     private static double normalise(double phi) {
+        // within one turn of [0, 2 pi) the remainder is phi itself, exactly (no call of fmod)
+        if (phi >= 0 && phi < TWO_PI) {
+            return phi;
+        }
+        if (phi < 0 && phi > -TWO_PI) {
+            return phi + TWO_PI;
+        }
         double p = phi % TWO_PI;
         return p < 0 ? p + TWO_PI : p;
     }

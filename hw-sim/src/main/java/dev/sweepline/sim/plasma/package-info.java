@@ -26,6 +26,9 @@
  *   <li>PLA-8: {@link dev.sweepline.sim.plasma.ExpMinusOne} gives e^x − 1 equal to the bit to
  *       {@code StrictMath.expm1} (fdlibm's routine followed operation for operation, in Java so that
  *       it is inlined: on Java 17 {@code Math.expm1} is a native call), so the currents are unchanged.</li>
+ *   <li>PLA-9: {@link dev.sweepline.sim.plasma.InverseTrigonometry} gives asin and acos equal to the bit
+ *       to {@code StrictMath}'s (fdlibm's e_asin.c and e_acos.c followed operation for operation, in
+ *       Java so that they are inlined), for the split collector's arc breaks.</li>
  * </ol>
  *
  * <h2>How verified</h2>
@@ -35,7 +38,9 @@
  * PLA-6 by {@code SimulatedInstrumentBenchmark} (time and gc profile); PLA-7 by {@code ErrorFunctionTest}
  * against a BigDecimal series reference (A&amp;S 7.1.6) and A&amp;S Table 7.1, with the thread's
  * allocation counter; PLA-8 by {@code ExpMinusOneTest} (a million seeded arguments over the whole
- * double range and the special values, compared bit for bit).
+ * double range and the special values, compared bit for bit); PLA-9 by {@code InverseTrigonometryTest}
+ * (two million seeded arguments over the domain, near ±1, near 0 and over every exponent, and the special
+ * values, bit for bit).
  *
  * <h2>Limits</h2>
  * In the far lower tail (v much below U) about log10(U/v) digits are lost to cancellation between the
