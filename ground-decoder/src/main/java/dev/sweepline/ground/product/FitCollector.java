@@ -5,6 +5,7 @@ import dev.sweepline.ground.bound.FisherMatrix;
 import dev.sweepline.ground.decode.DecodeListener;
 import dev.sweepline.ground.fit.DensityPrior;
 import dev.sweepline.ground.fit.FitFlag;
+import dev.sweepline.ground.fit.ModelCache;
 import dev.sweepline.ground.fit.PlasmaFit;
 import dev.sweepline.ground.fit.PlasmaModel;
 import dev.sweepline.ground.fit.SpectrumFitter;
@@ -31,6 +32,8 @@ public final class FitCollector implements DecodeListener {
     private final Map<Integer, SpectrumFitter> fitters = new LinkedHashMap<>();
     private final Map<Integer, Spectrogram> spectrograms = new LinkedHashMap<>();
     private final List<MomentRecord> records = new ArrayList<>();
+    /** The models of the bounds: a band repeats sweep after sweep. */
+    private final ModelCache boundModels = new ModelCache();
     /** Per instrument, the last fit whose angle the split measured: the density carried beyond the reach. */
     private final Map<Integer, MomentRecord> lastInReach = new LinkedHashMap<>();
     private double firstTai = Double.NaN;
@@ -55,7 +58,7 @@ public final class FitCollector implements DecodeListener {
                 .fit(in, carried(instrument.id(), tai));
         CramerRaoBound bound = null;
         if (fit.ok()) {
-            PlasmaModel m = new PlasmaModel(in.lowVolts(), in.highVolts(), fit.areaM2(), fit.alphasFitted());
+            PlasmaModel m = boundModels.model(in.lowVolts(), in.highVolts(), fit.areaM2(), fit.alphasFitted());
             bound = FisherMatrix.bound(m, fit.normalParameters(), in.sigmaAmps(), fit.alphaPrior());
             if (bound.singular()) {
                 fit = fit.withFlag(FitFlag.SINGULAR_BOUND);
