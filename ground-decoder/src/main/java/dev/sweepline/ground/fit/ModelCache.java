@@ -1,26 +1,39 @@
 package dev.sweepline.ground.fit;
 
 /**
- * The proton and joint models of the last spectrum fitted on one thread, reused while the next spectrum has
- * the same windows and area (a focus band or a survey table repeats sweep after sweep), so that a fit builds
- * no model. Not thread-safe: one per thread ({@link SpectrumFitter}'s workspaces).
+ * The proton and joint models of the last few window sets fitted, reused when a spectrum has the windows of
+ * one of them (a focus band or a survey table repeats sweep after sweep, and survey and focus spectra
+ * alternate) and moved to its area (the acceptance changes with the flow angle from spectrum to spectrum; it
+ * only scales the currents), so that a fit seldom builds a model. A model it returns stays valid until its
+ * next call. Not thread-safe: one per thread ({@link SpectrumFitter}'s workspaces) or per single-threaded
+ * user (the bound of each fit, {@code FitCollector}).
  */
-final class ModelCache {
-    private PlasmaModel protons;
-    private PlasmaModel joint;
+public final class ModelCache {
+    /** Window sets kept per model kind: the survey table and a few focus bands (common practice: a small LRU). */
+    static final int SIZE = 4;
+
+    /** Most recently used first. */
+    private final PlasmaModel[] protons = new PlasmaModel[SIZE];
+    private final PlasmaModel[] joint = new PlasmaModel[SIZE];
 
     /** The model of windows {@code low}–{@code high} on area {@code areaM2}, with alphas or without. */
-    PlasmaModel model(double[] low, double[] high, double areaM2, boolean withAlphas) {
-        PlasmaModel m = withAlphas ? joint : protons;
-        if (m != null && m.sameWindows(low, high, areaM2)) {
-            return m;
+    public PlasmaModel model(double[] low, double[] high, double areaM2, boolean withAlphas) {
+        PlasmaModel[] kept = withAlphas ? joint : protons;
+        int found = SIZE - 1;
+        PlasmaModel m = null;
+        for (int i = 0; i < SIZE && kept[i] != null; i++) {
+            if (kept[i].sameWindows(low, high)) {
+                found = i;
+                m = kept[i];
+                m.setArea(areaM2);
+                break;
+            }
         }
-        m = new PlasmaModel(low, high, areaM2, withAlphas);
-        if (withAlphas) {
-            joint = m;
-        } else {
-            protons = m;
+        if (m == null) {
+            m = new PlasmaModel(low, high, areaM2, withAlphas);
         }
+        System.arraycopy(kept, 0, kept, 1, found);
+        kept[0] = m;
         return m;
     }
 }

@@ -14,7 +14,8 @@ public final class PlasmaModel {
 
     private final int windows;
     private final boolean withAlphas;
-    private final double areaM2;
+    /** The effective area, m²: a {@link ModelCache} moves its model to the next spectrum's area. */
+    private double areaM2;
     private final double[] pV1;
     private final double[] pV2;
     private final double[] aV1;
@@ -76,9 +77,17 @@ public final class PlasmaModel {
         edgeErf = new double[edges];
     }
 
-    /** True when this model is that of windows {@code low}–{@code high} on area {@code area} (same model kind aside). */
-    boolean sameWindows(double[] low, double[] high, double area) {
-        return area == areaM2 && java.util.Arrays.equals(low, lowVolts) && java.util.Arrays.equals(high, highVolts);
+    /** True when this model's windows are {@code low}–{@code high} (model kind and area aside). */
+    boolean sameWindows(double[] low, double[] high) {
+        return java.util.Arrays.equals(low, lowVolts) && java.util.Arrays.equals(high, highVolts);
+    }
+
+    /**
+     * Moves the model to effective area {@code area}, m²: the thresholds and edges depend on the windows
+     * alone, the area only scales the currents, so the model is then, bit for bit, the one built on that area.
+     */
+    void setArea(double area) {
+        areaM2 = area;
     }
 
     /** Number of parameters. */

@@ -1,6 +1,7 @@
 package dev.sweepline.ground.fit;
 
 import dev.sweepline.ground.spectrum.DecodedSpectrum;
+import dev.sweepline.ground.spectrum.SpectrumValues;
 import java.util.Arrays;
 
 /**
@@ -38,17 +39,20 @@ public record SpectrumInput(double[] lowVolts, double[] highVolts, double[] tota
         return new SpectrumInput(lowVolts, highVolts, totalAmps, s, null, null, 0, 0);
     }
 
-    /** The usable windows of a decoded spectrum, with its instrument's noise model (ICD §8) for the weights. */
-    public static SpectrumInput of(DecodedSpectrum s) {
+    /**
+     * The usable windows of a spectrum (an owned {@link dev.sweepline.ground.spectrum.DecodedSpectrum} or the
+     * decoder's view, read in place), with its instrument's noise model (ICD §8) for the weights.
+     */
+    public static SpectrumInput of(SpectrumValues s) {
         NoiseModel noise = new NoiseModel(s.instrument());
         int c = s.windowCount();
         int keep = 0;
         int saturated = 0;
         int uncalibrated = 0;
         for (int i = 0; i < c; i++) {
-            if (s.saturated()[i]) {
+            if (s.saturated(i)) {
                 saturated++;
-            } else if (!Double.isFinite(s.lowVolts()[i]) || !Double.isFinite(s.highVolts()[i])) {
+            } else if (!Double.isFinite(s.lowVolts(i)) || !Double.isFinite(s.highVolts(i))) {
                 uncalibrated++;
             } else {
                 keep++;
@@ -62,15 +66,15 @@ public record SpectrumInput(double[] lowVolts, double[] highVolts, double[] tota
         double[][] qs = new double[DecodedSpectrum.QUADRANTS][keep];
         int k = 0;
         for (int i = 0; i < c; i++) {
-            if (s.saturated()[i] || !Double.isFinite(s.lowVolts()[i]) || !Double.isFinite(s.highVolts()[i])) {
+            if (s.saturated(i) || !Double.isFinite(s.lowVolts(i)) || !Double.isFinite(s.highVolts(i))) {
                 continue;
             }
-            lo[k] = s.lowVolts()[i];
-            hi[k] = s.highVolts()[i];
+            lo[k] = s.lowVolts(i);
+            hi[k] = s.highVolts(i);
             double var = 0;
             for (int q = 0; q < DecodedSpectrum.QUADRANTS; q++) {
-                double a = s.currentAmps()[q][i];
-                double v = noise.quadrantVariance(a, s.gainRange()[i], s.integrationPeriodsOf(i));
+                double a = s.currentAmps(q, i);
+                double v = noise.quadrantVariance(a, s.gainRange(i), s.integrationPeriods(i));
                 qa[q][k] = a;
                 qs[q][k] = Math.sqrt(v);
                 tot[k] += a;

@@ -79,7 +79,7 @@
  *       128 windows joint, free and constrained alphas): 0 bytes in 64 fits by the JVM's per-thread counter
  *       ({@code FitIntoTest}). Still allocating: the quadrant angles ({@code FlowAngles},
  *       {@code SpeciesFlowAngles}' current arrays), the angle from a carried density ({@code AcceptanceAngle}),
- *       the models when the windows or the area change ({@code ModelCache}), and the immutable
+ *       the models when the windows change ({@code ModelCache}; a new area only rescales them), and the immutable
  *       {@link dev.sweepline.ground.fit.PlasmaFit} of {@code fit}. The opt-in warm start (the holder's last
  *       proton solution) agrees with the cold start within twice the optimiser's stopping distance (the cost
  *       test's 2 √(1e-10 χ²) σ) and needs

@@ -5,6 +5,7 @@ import dev.sweepline.ground.bound.FisherMatrix;
 import dev.sweepline.ground.decode.DecodeListener;
 import dev.sweepline.ground.fit.DensityPrior;
 import dev.sweepline.ground.fit.FitFlag;
+import dev.sweepline.ground.fit.ModelCache;
 import dev.sweepline.ground.fit.PlasmaFit;
 import dev.sweepline.ground.fit.PlasmaModel;
 import dev.sweepline.ground.fit.SpectrumFitter;
@@ -13,6 +14,8 @@ import dev.sweepline.ground.instrument.DefaultWindowTable;
 import dev.sweepline.ground.instrument.GroundInstrument;
 import dev.sweepline.ground.plot.SpectrogramData;
 import dev.sweepline.ground.spectrum.DecodedSpectrum;
+import dev.sweepline.ground.spectrum.SpectrumValues;
+import dev.sweepline.ground.spectrum.SpectrumView;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.Collections;
@@ -31,6 +34,8 @@ public final class FitCollector implements DecodeListener {
     private final Map<Integer, SpectrumFitter> fitters = new LinkedHashMap<>();
     private final Map<Integer, Spectrogram> spectrograms = new LinkedHashMap<>();
     private final List<MomentRecord> records = new ArrayList<>();
+    /** The models of the bounds: a band repeats sweep after sweep. */
+    private final ModelCache boundModels = new ModelCache();
     /** Per instrument, the last fit whose angle the split measured: the density carried beyond the reach. */
     private final Map<Integer, MomentRecord> lastInReach = new LinkedHashMap<>();
     private double firstTai = Double.NaN;
@@ -47,6 +52,16 @@ public final class FitCollector implements DecodeListener {
 
     @Override
     public void onSpectrum(DecodedSpectrum s) {
+        collect(s);
+    }
+
+    /** The decoder's view, read in place: the same records and rows as its owned copy, without the copy. */
+    @Override
+    public void onSpectrumView(SpectrumView view) {
+        collect(view);
+    }
+
+    private void collect(SpectrumValues s) {
         long t0 = System.nanoTime();
         GroundInstrument instrument = s.instrument();
         SpectrumInput in = SpectrumInput.of(s);
@@ -55,7 +70,7 @@ public final class FitCollector implements DecodeListener {
                 .fit(in, carried(instrument.id(), tai));
         CramerRaoBound bound = null;
         if (fit.ok()) {
-            PlasmaModel m = new PlasmaModel(in.lowVolts(), in.highVolts(), fit.areaM2(), fit.alphasFitted());
+            PlasmaModel m = boundModels.model(in.lowVolts(), in.highVolts(), fit.areaM2(), fit.alphasFitted());
             bound = FisherMatrix.bound(m, fit.normalParameters(), in.sigmaAmps(), fit.alphaPrior());
             if (bound.singular()) {
                 fit = fit.withFlag(FitFlag.SINGULAR_BOUND);
@@ -96,11 +111,11 @@ public final class FitCollector implements DecodeListener {
      * hold spectra of uplinked tables too: each window's current goes to the default window holding its
      * geometric centre (several currents to one window are summed; saturated windows stay NaN).
      */
-    static SpectrogramData.Row onDefaultGrid(DecodedSpectrum s, double seconds) {
+    static SpectrogramData.Row onDefaultGrid(SpectrumValues s, double seconds) {
         if (s.tableId() == DefaultWindowTable.TABLE_ID) {
-            double[] amps = s.totalAmps().clone();
+            double[] amps = new double[s.windowCount()];
             for (int i = 0; i < amps.length; i++) {
-                amps[i] = s.saturated()[i] ? Double.NaN : amps[i];
+                amps[i] = s.saturated(i) ? Double.NaN : s.totalAmps(i);
             }
             return new SpectrogramData.Row(seconds, s.firstWindow(), amps);
         }
@@ -108,12 +123,12 @@ public final class FitCollector implements DecodeListener {
         double[] amps = new double[table.windows()];
         Arrays.fill(amps, Double.NaN);
         for (int i = 0; i < s.windowCount(); i++) {
-            double centre = Math.sqrt(s.lowVolts()[i] * s.highVolts()[i]);
+            double centre = Math.sqrt(s.lowVolts(i) * s.highVolts(i));
             int w = table.windowOf(centre);
             if (w < 0) {
                 continue;
             }
-            double a = s.saturated()[i] ? Double.NaN : s.totalAmps()[i];
+            double a = s.saturated(i) ? Double.NaN : s.totalAmps(i);
             amps[w] = Double.isNaN(amps[w]) ? a : amps[w] + a;
         }
         return new SpectrogramData.Row(seconds, 0, amps);

@@ -120,8 +120,7 @@ public final class GroundSession implements AutoCloseable {
     }
 
     /**
-     * Sends spectra to both the CSV writer, which reads the decoder's reused view, and the fits, which
-     * keep an owned copy ({@link DecodeListener#onSpectrumView}'s default).
+     * Sends spectra to both the CSV writer and the fits, which both read the decoder's reused view in place.
      */
     private record Both(DecodeListener csv, DecodeListener fits) implements DecodeListener {
         @Override

@@ -39,7 +39,7 @@ public record DecodedSpectrum(CucTime time, int apid, int sequenceCount, int mod
         boolean tableChanged, int sweep, int tableId, int firstWindow, int windowCount, int peakQ8,
         int integrationPeriods, int compression, int[] gainRange, boolean[] saturated, int[][] adcCounts,
         double[][] currentAmps, double[] totalAmps, double[] lowVolts, double[] highVolts, int layoutVersion,
-        GroundInstrument instrument, int[] windowPeriods) {
+        GroundInstrument instrument, int[] windowPeriods) implements SpectrumValues {
     /** Peak value meaning "no peak" (ICD §4). */
     public static final int NO_PEAK = 0xFFFF;
     /** Mode code of survey (ICD §4). */
@@ -60,8 +60,39 @@ public record DecodedSpectrum(CucTime time, int apid, int sequenceCount, int mod
     }
 
     /** Modulation periods integrated in window {@code i} (0..c−1). */
-    public int integrationPeriodsOf(int i) {
+    @Override
+    public int integrationPeriods(int i) {
         return windowPeriods[i];
+    }
+
+    @Override
+    public int gainRange(int i) {
+        return gainRange[i];
+    }
+
+    @Override
+    public boolean saturated(int i) {
+        return saturated[i];
+    }
+
+    @Override
+    public double currentAmps(int q, int i) {
+        return currentAmps[q][i];
+    }
+
+    @Override
+    public double totalAmps(int i) {
+        return totalAmps[i];
+    }
+
+    @Override
+    public double lowVolts(int i) {
+        return lowVolts[i];
+    }
+
+    @Override
+    public double highVolts(int i) {
+        return highVolts[i];
     }
 
     /** True when a proton peak was found. */

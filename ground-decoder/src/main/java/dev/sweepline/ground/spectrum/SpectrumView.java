@@ -12,7 +12,7 @@ import java.util.Arrays;
  * f..f+c−1) and quadrant 0..3. Valid only until the decoder that filled it decodes again; {@link
  * #toDecoded()} makes the owned, immutable copy. Not thread-safe.
  */
-public final class SpectrumView {
+public final class SpectrumView implements SpectrumValues {
     private static final int MAX = SpectrumPacketDecoder.MAX_WINDOWS;
 
     long coarseSeconds;
@@ -78,6 +78,12 @@ public final class SpectrumView {
     /** CUC time of the sweep's first step (a new object each call). */
     public CucTime time() {
         return new CucTime(coarseSeconds, fine);
+    }
+
+    /** Window table id (0: built-in default table). */
+    @Override
+    public int tableId() {
+        return tableId;
     }
 
     /** Window count c. */

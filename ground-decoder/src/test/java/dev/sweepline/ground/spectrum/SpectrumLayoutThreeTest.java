@@ -59,7 +59,7 @@ class SpectrumLayoutThreeTest {
         assertEquals(3, s.layoutVersion());
         assertEquals(8, s.integrationPeriods()); // GoldenSpectraV2.DEMO_V2: 8 periods, here the floor
         assertArrayEquals(new int[] {8, 40, 300, 8}, s.windowPeriods()); // windows 60..63
-        assertEquals(300, s.integrationPeriodsOf(2));
+        assertEquals(300, s.integrationPeriods(2));
         DecodedSpectrum t = two.spectrum();
         assertArrayEquals(new int[] {8, 8, 8, 8}, t.windowPeriods()); // layout 2: one dwell
         assertArrayEquals(t.gainRange(), s.gainRange());
