@@ -48,25 +48,20 @@ public final class InverseTrigonometry {
             if (ix < 0x3e500000) { // |x| < 2^-26
                 return x;
             }
-            double t = x * x;
-            double p = t * (PS0 + t * (PS1 + t * (PS2 + t * (PS3 + t * (PS4 + t * PS5)))));
-            double q = 1.0 + t * (QS1 + t * (QS2 + t * (QS3 + t * QS4)));
-            return x + x * (p / q);
+            return x + x * ratio(x * x);
         }
         // 0.5 <= |x| < 1
         double w = 1.0 - Math.abs(x);
         double t = w * 0.5;
-        double p = t * (PS0 + t * (PS1 + t * (PS2 + t * (PS3 + t * (PS4 + t * PS5)))));
-        double q = 1.0 + t * (QS1 + t * (QS2 + t * (QS3 + t * QS4)));
+        double r = ratio(t);
         double s = Math.sqrt(t);
         if (ix >= 0x3FEF3333) { // |x| > 0.975
-            t = PIO2_HI - (2.0 * (s + s * (p / q)) - PIO2_LO);
+            t = PIO2_HI - (2.0 * (s + s * r) - PIO2_LO);
         } else {
             double f = highWord(s);
             double c = (t - f * f) / (s + f);
-            double r = p / q;
-            p = 2.0 * s * r - (PIO2_LO - 2.0 * c);
-            q = PIO4_HI - 2.0 * f;
+            double p = 2.0 * s * r - (PIO2_LO - 2.0 * c);
+            double q = PIO4_HI - 2.0 * f;
             t = PIO4_HI - (p - q);
         }
         return hx > 0 ? t : -t;
@@ -108,7 +103,7 @@ public final class InverseTrigonometry {
         return 2.0 * (df + w);
     }
 
-    /** R(z) = P(z)/Q(z), the routines' rational fit (p/q of e_acos.c, evaluated in its order). */
+    /** R(z) = P(z)/Q(z), the routines' rational fit (p/q of e_asin.c and e_acos.c, evaluated in their order). */
     private static double ratio(double z) {
         double p = z * (PS0 + z * (PS1 + z * (PS2 + z * (PS3 + z * (PS4 + z * PS5)))));
         double q = 1.0 + z * (QS1 + z * (QS2 + z * (QS3 + z * QS4)));
