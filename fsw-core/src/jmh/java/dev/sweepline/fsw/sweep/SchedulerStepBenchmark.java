@@ -25,7 +25,7 @@ import org.openjdk.jmh.annotations.TearDown;
  * Measured as a mean and, in sample mode, as a distribution, whose high percentiles are the step's tail
  * (the sweep-end analysis). Target: mean &lt;= 1 us, 0 B/op under {@code -prof gc}; in both focus styles
  * ({@code focusStyle} 1: the design style of sweep design note R21, with a budget and a quick survey; 7 and 15:
- * support dwell and paired support, R23, at a floor of 4 periods).
+ * support dwell and paired support, R23, at a floor of 4 periods; 19 and 31: the alpha-clear band, R24).
  */
 @State(Scope.Thread)
 @BenchmarkMode({Mode.AverageTime, Mode.SampleTime})
@@ -38,8 +38,8 @@ public class SchedulerStepBenchmark {
     private long nowMicros;
     private final SweepCounter counter = new SweepCounter();
 
-    /** Focus style (SweepParameters.FOCUS_STYLE_BAND, FOCUS_STYLE_DESIGN, or 3: the design interleaved). */
-    @Param({"0", "1", "3", "7", "15"})
+    /** Focus style (SweepParameters.FOCUS_STYLE_BAND, FOCUS_STYLE_DESIGN, 3: the design interleaved, 7 and 15: support dwell, 19 and 31: alpha-clear). */
+    @Param({"0", "1", "3", "7", "15", "19", "31"})
     public int focusStyle;
 
     /** Counts sweeps per mode without allocating (the benchmark checks that it measured both modes). */

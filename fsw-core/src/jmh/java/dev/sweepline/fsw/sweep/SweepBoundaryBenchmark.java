@@ -35,8 +35,8 @@ public class SweepBoundaryBenchmark {
     private final SchedulerStepBenchmark.SweepCounter counter = new SchedulerStepBenchmark.SweepCounter();
     private long boundaries;
 
-    /** Focus style (SweepParameters.FOCUS_STYLE_BAND, FOCUS_STYLE_DESIGN, or 3: the design interleaved). */
-    @Param({"0", "1", "3", "7", "15"})
+    /** Focus style (SweepParameters.FOCUS_STYLE_BAND, FOCUS_STYLE_DESIGN, 3: the design interleaved, 7 and 15: support dwell, 19 and 31: alpha-clear). */
+    @Param({"0", "1", "3", "7", "15", "19", "31"})
     public int focusStyle;
 
     /** Builds the scheduler and the canned replies and issues the first step. */

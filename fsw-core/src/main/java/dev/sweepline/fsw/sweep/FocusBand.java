@@ -7,7 +7,8 @@ import dev.sweepline.fsw.table.WindowTable;
  * The focus band and the reference peak it was chosen from (sweep design note, R6 and R10).
  * Band = refined peak window +/- max(minHalfWidth, FWHM * halfWidthPerFwhm), at most maxBandWindows
  * wide, clipped (not shifted) to the table; in the design style the band reaches the design's multiples of
- * the measured low and high half-widths either side, plus the robustness margin (R21, {@link FocusDesign}). Loss of lock compares each focus spectrum with the
+ * the measured low and high half-widths either side, plus the robustness margin (R21, {@link FocusDesign}), and in
+ * the alpha-clear style not beyond alphas clear of the protons (R24). Loss of lock compares each focus spectrum with the
  * reference peak: no peak, current collapse, peak on an unclipped edge, peak jump (including a jump
  * to about the alpha ratio). A peak on an edge first turns the band into an edge search (R18).
  */
@@ -62,7 +63,11 @@ final class FocusBand {
             int highHalfQ8 = s.fwhmWindowsQ8() - s.lowHalfWindowsQ8();
             int alphaWindow = windowAtOrAbove(((long) codeAtQ8(s.peakWindowQ8(), windowCount) * params.alphaRatioQ16) >> 16,
                     windowCount);
-            above = FocusDesign.reachAbove(highHalfQ8, alphaWindow - centre, params);
+            // alpha-clear (R24): clear by this spectrum's half-width and by that of the spectrum the last
+            // band was chosen from, so that one spectrum mixing two winds (a front during the sweep) does
+            // not cut the band short of a peak that moved up
+            int clearHalfQ8 = valid ? Math.max(highHalfQ8, referenceHighHalfQ8) : highHalfQ8;
+            above = FocusDesign.reachAbove(highHalfQ8, clearHalfQ8, alphaWindow - centre, params);
             below = FocusDesign.reachBelow(s.lowHalfWindowsQ8(), above, params);
         } else {
             above = bandHalfWidth(s.fwhmWindowsQ8());

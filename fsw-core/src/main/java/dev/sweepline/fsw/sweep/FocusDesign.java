@@ -223,11 +223,44 @@ public final class FocusDesign {
      * it: at least {@code minHalfWidthWindows}, at most half the widest band.
      */
     static int reachAbove(int highHalfQ8, int alphaOffset, SweepParameters p) {
+        return reachAbove(highHalfQ8, highHalfQ8, alphaOffset, p);
+    }
+
+    /**
+     * {@link #reachAbove(int, int, SweepParameters)}, where in the alpha-clear style
+     * ({@link SweepParameters#alphaClear()}) alphas {@link #alphasClear clear} of a high half-width of
+     * {@code clearHalfQ8} (Q8 windows) add no reach.
+     */
+    static int reachAbove(int highHalfQ8, int clearHalfQ8, int alphaOffset, SweepParameters p) {
         long h = Math.max(0, highHalfQ8);
         long protons = (h * HIGH_REACH_PER_HWHM_Q8 + (1 << 15)) >> 16;
         long alphas = alphaOffset + ((h * ALPHA_REACH_PER_HWHM_Q8 + (1 << 15)) >> 16);
-        long reach = Math.max(protons, alphas) + p.robustnessMarginWindows;
+        long reach = (p.alphaClear() && alphasClear(clearHalfQ8, alphaOffset) ? protons : Math.max(protons, alphas))
+                + p.robustnessMarginWindows;
         return (int) Math.max(p.minHalfWidthWindows, Math.min((p.maxBandWindows - 1) / 2, reach));
+    }
+
+    /**
+     * Alpha-clear threshold (sweep design note R24): the alphas' expected peak counts as clear of the protons
+     * when it lies at least this many proton high half-widths at half maximum above the refined peak, Q8:
+     * 2.5. There the protons' current has fallen to 2^-6.25 = 1.3 % of their peak (a peak of Gaussian shape
+     * in windows falls as 2^-(x/HWHM)^2), of the order of the alphas' own peak current at a few per cent
+     * abundance, so each species' peak is its own; and the alphas' half-width in windows is about the
+     * protons' (T_alpha = 4 T_p gives w_alpha = w_p, and E/q goes as v^2 for both; physics.md, alpha
+     * particles), so the protons' reach of 1.75 half-widths ends at least 0.75 alpha half-widths below the
+     * alpha peak: the band holds the alphas' low flank, not their peak, and the ground holds the alphas by
+     * its constrained rows from the proton fit (ground-decoder fit.AlphaCoverage PART). Closer, the alpha peak rides on
+     * the protons' high flank and the two must be fitted jointly, so the band holds it (docs/focus-design.md,
+     * "Alpha-clear", with the bench's figures at other thresholds).
+     */
+    public static final int ALPHA_CLEAR_PER_HWHM_Q8 = 640;
+
+    /**
+     * True when the alphas' peak, expected {@code alphaOffset} windows above the refined peak, lies at least
+     * {@link #ALPHA_CLEAR_PER_HWHM_Q8} high half-widths ({@code highHalfQ8}, Q8 windows) above it.
+     */
+    static boolean alphasClear(int highHalfQ8, int alphaOffset) {
+        return ((long) alphaOffset << 16) >= (long) Math.max(0, highHalfQ8) * ALPHA_CLEAR_PER_HWHM_Q8;
     }
 
     /**

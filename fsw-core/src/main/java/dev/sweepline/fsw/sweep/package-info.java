@@ -159,6 +159,21 @@
  *     where pairs meet) share the rest equally: in the interleaved order two neighbours are read in
  *     opposite halves of the sweep, so no support point is one long step at one moment of a changing wind.
  *     <i>SupportDwellTest, AllocationTest; hw-sim SupportDwellReachTest, SupportDwellRunTest.</i></li>
+ * <li><b>R24 Alpha-clear band (opt-in).</b> With {@code focusStyle} bit 4 (16) on a design style (17, 19, 21,
+ *     23, 29, 31; the table is refused without the design bit, as the band style has no alpha reach to leave
+ *     out) the design band of R21 does not stretch to the alphas when their expected window lies at least
+ *     2.5 high half-widths at half maximum above the refined peak ({@link FocusDesign#ALPHA_CLEAR_PER_HWHM_Q8},
+ *     whole windows from the peak window against the Q8 half-width, integer; at exactly 2.5 the alphas are
+ *     clear), by the high half-width of the spectrum the band is chosen from and by that of the spectrum the
+ *     previous band was chosen from (a spectrum that mixes two winds, a front arriving during the sweep, reads
+ *     narrow and would cut the band short of a peak that moved up: the strong shock then took 3 sweeps on 7 of
+ *     10 seeds): the reach above is then 1.75 high half-widths plus {@code robustnessMarginWindows}. Closer
+ *     alphas ride on the protons' flank and the band is R21's, reaching 1.0 half-width beyond them. The
+ *     ground fits a band without the alpha peak with its constrained alpha component (ground-decoder
+ *     fit AlphaCoverage PART and NONE). Everything else (dwell, order, support windows, lock) is unchanged;
+ *     styles without the bit band exactly as before. <i>AlphaClearBandTest, AllocationTest (19, 31); hw-sim
+ *     DesignStyleRunTest, SweepPropertiesTest (FocusTables.ALPHA_CLEAR); SchedulerStepBenchmark,
+ *     SweepBoundaryBenchmark (19, 31).</i></li>
  * </ol>
  *
  * <h2>Choices worth knowing</h2>

@@ -35,6 +35,14 @@ public final class SweepParameters {
      * opposite halves of an interleaved sweep (docs/focus-design.md, "Paired support").
      */
     public static final int FOCUS_STYLE_PAIRED_SUPPORT = 8;
+    /**
+     * {@link #focusStyle} flag, added to a design style only (17, 19, 21, 23, 29, 31): alpha-clear. When the
+     * alphas' expected peak lies at least FocusDesign.ALPHA_CLEAR_PER_HWHM_Q8 (2.5) proton high half-widths
+     * above the refined peak, the design band does not stretch to hold it (its reach above is the protons'
+     * alone); closer alphas sit on the protons' flank and the band is the design band
+     * (docs/focus-design.md, "Alpha-clear"). Only with the design bit: the band style has no alpha reach to leave out.
+     */
+    public static final int FOCUS_STYLE_ALPHA_CLEAR = 16;
     /** Upper limit of {@link #focusBudgetMicros}: 10 s (design limit: a focus sweep far longer than the wind's changes teaches little). */
     public static final int MAX_FOCUS_BUDGET_MICROS = 10_000_000;
     /** Upper limit of {@link #robustnessMarginWindows} (design limit: a quarter of the table capacity). */
@@ -95,7 +103,8 @@ public final class SweepParameters {
     /**
      * How focus bands are chosen and stepped: {@link #FOCUS_STYLE_BAND} (the default) or
      * {@link #FOCUS_STYLE_DESIGN}, either plus {@link #FOCUS_STYLE_INTERLEAVED}, any of these plus
-     * {@link #FOCUS_STYLE_SUPPORT_DWELL} (0..7), a support-dwell style plus {@link #FOCUS_STYLE_PAIRED_SUPPORT} (12..15).
+     * {@link #FOCUS_STYLE_SUPPORT_DWELL} (0..7), a support-dwell style plus {@link #FOCUS_STYLE_PAIRED_SUPPORT} (12..15),
+     * and any design style of these plus {@link #FOCUS_STYLE_ALPHA_CLEAR} (17, 19, 21, 23, 29, 31).
      */
     public int focusStyle;
     /**
@@ -210,6 +219,11 @@ public final class SweepParameters {
         return (focusStyle & FOCUS_STYLE_PAIRED_SUPPORT) != 0;
     }
 
+    /** True when the design band leaves out alphas well clear of the protons ({@link #FOCUS_STYLE_ALPHA_CLEAR}). */
+    public boolean alphaClear() {
+        return (focusStyle & FOCUS_STYLE_ALPHA_CLEAR) != 0;
+    }
+
     /** True when the floor dwell is unset (0): no table image version 4 needed. */
     public boolean defaultFloor() {
         return focusFloorPeriods == 0;
@@ -271,8 +285,10 @@ public final class SweepParameters {
             return TableStatus.BAD_NOISE;
         }
         if (focusStyle < FOCUS_STYLE_BAND
-            || focusStyle > (FOCUS_STYLE_DESIGN | FOCUS_STYLE_INTERLEAVED | FOCUS_STYLE_SUPPORT_DWELL | FOCUS_STYLE_PAIRED_SUPPORT)
+            || focusStyle > (FOCUS_STYLE_DESIGN | FOCUS_STYLE_INTERLEAVED | FOCUS_STYLE_SUPPORT_DWELL | FOCUS_STYLE_PAIRED_SUPPORT
+                | FOCUS_STYLE_ALPHA_CLEAR)
             || pairedSupport() && !supportDwell()
+            || alphaClear() && !designBand()
             || focusFloorPeriods < (supportDwell() ? 1 : 0) || focusFloorPeriods > integrationPeriods
             || focusBudgetMicros < 0 || focusBudgetMicros > MAX_FOCUS_BUDGET_MICROS
             || robustnessMarginWindows < 0 || robustnessMarginWindows > MAX_ROBUSTNESS_MARGIN_WINDOWS

@@ -14,19 +14,19 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
  * nothing): nextStep + ingest + sweep analysis over 10 windows of 10k steps after a 100k warm-up,
  * with the rule of {@link AllocationMeter}, in the band style and in the design style with a budget, a
  * margin and a quick survey (sweep design note R21), and that with the interleaved order and the support
- * dwell, unpaired and paired (R22, R23). Not timed.
+ * dwell, unpaired and paired (R22, R23), and the alpha-clear band with either (R24). Not timed.
  */
 class AllocationTest {
     private long nowMicros;
 
     @ParameterizedTest
-    @ValueSource(ints = {SweepParameters.FOCUS_STYLE_BAND, SweepParameters.FOCUS_STYLE_DESIGN, 7, 15})
+    @ValueSource(ints = {SweepParameters.FOCUS_STYLE_BAND, SweepParameters.FOCUS_STYLE_DESIGN, 7, 15, 19, 31})
     void shouldAllocateNothingPerStep(int focusStyle) {
         SyntheticInstrument plasma = Fixtures.oneAu(81);
         CannedReplies canned = new CannedReplies(Fixtures.TABLE, plasma);
         SweepParameters p = focusStyle == SweepParameters.FOCUS_STYLE_BAND ? DemoCup.parameters() : Fixtures.designStyle();
         p.focusStyle = focusStyle; // 7: design, interleaved, support dwell (R23)
-        p.focusFloorPeriods = p.supportDwell() ? 1 : 0; // 15: and paired support (R23)
+        p.focusFloorPeriods = p.supportDwell() ? 1 : 0; // 15: and paired support (R23); 19, 31: alpha-clear (R24)
         SweepScheduler scheduler = new SweepScheduler(DemoCup.INSTRUMENT, Fixtures.TABLE, p, SweepListener.NONE);
         StepCommand step = new StepCommand();
         SampleReply reply = new SampleReply();

@@ -44,7 +44,7 @@ public enum TunableParameter {
     /** Telemetry: engineering frame flush interval, seconds (0: the build's 10 s; 1..600; commands.md §4.1). */
     ENGINEERING_FLUSH_SECONDS("engineeringFlushSeconds", 1, (p, v) -> p.engineeringFlushSeconds = v,
             p -> p.engineeringFlushSeconds),
-    /** Support dwell (focusStyle 4..7, 12..15): the floor dwell of every focus window but the support windows, periods. */
+    /** Support dwell (focusStyle 4..7, 12..15, 21, 23, 29, 31): the floor dwell of every focus window but the support windows, periods. */
     FOCUS_FLOOR_PERIODS("focusFloorPeriods", 1, (p, v) -> p.focusFloorPeriods = v, p -> p.focusFloorPeriods);
 
     private final String key;
