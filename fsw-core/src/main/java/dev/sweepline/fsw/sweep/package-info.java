@@ -166,7 +166,7 @@
  *     whole windows from the peak window against the Q8 half-width, integer; at exactly 2.5 the alphas are
  *     clear), by the high half-width of the spectrum the band is chosen from and by that of the spectrum the
  *     previous band was chosen from (a spectrum that mixes two winds, a front arriving during the sweep, reads
- *     narrow and would cut the band short of a peak that moved up: the strong shock then took 3 sweeps on 7 of
+ *     narrow and would cut the band short of a peak that moved up: the strong shock then took 3 sweeps on 6 of
  *     10 seeds): the reach above is then 1.75 high half-widths plus {@code robustnessMarginWindows}. Closer
  *     alphas ride on the protons' flank and the band is R21's, reaching 1.0 half-width beyond them. The
  *     ground fits a band without the alpha peak with its constrained alpha component (ground-decoder
