@@ -34,7 +34,7 @@ import java.util.Optional;
 public final class CampaignReader {
     private static final String FORMAT = "sweepline-campaign/1";
     private static final List<String> TOP = List.of("format", "name", "description", "seed", "runsPerSet",
-            "durationS", "scenario", "allocationBitsPerS", "draws", "eventShiftS", "grid", InstrumentKey.KEY);
+            "durationS", "scenario", "allocationBitsPerS", "draws", "eventShiftS", "grid", "linked", InstrumentKey.KEY);
     private static final List<String> KINDS = List.of("fixed", "uniform", "logUniform", "normal");
     /** Largest campaign this reader accepts, runs: a guard against a typo exploding the grid. */
     static final int MAX_RUNS = 1_000_000;
@@ -125,6 +125,9 @@ public final class CampaignReader {
         Map<PlasmaParameter, Distribution> draws = top.has("draws") ? draws(file, top.required("draws"))
                 : Map.of();
         List<CampaignSpec.GridAxis> grid = grid(file, top.required("grid"));
+        if (top.has("linked")) {
+            grid = linked(top, grid);
+        }
         Distribution shift = top.has("eventShiftS") ? distribution(file, top.required("eventShiftS")) : null;
         CampaignSpec spec = new CampaignSpec(top.text("name"), top.text("description", ""), seed, runs, duration,
                 base, draws, grid, allocation, shift, model);
@@ -274,6 +277,45 @@ public final class CampaignReader {
         if (!(ab[1] > ab[0])) {
             throw d.invalid(value, "the upper bound must exceed the lower bound " + FileFormatException.number(ab[0]), ab[1]);
         }
+    }
+
+    /**
+     * The grid with the axes named by {@code linked} (two or more grid keys, each once, all with the same
+     * number of values) marked linked: they take their values together.
+     */
+    private static List<CampaignSpec.GridAxis> linked(Section top, List<CampaignSpec.GridAxis> grid) {
+        YamlNode node = top.required("linked");
+        if (!(node instanceof YamlNode.Sequence seq) || seq.items().size() < 2) {
+            throw top.typeError(node, "a list of two or more grid keys");
+        }
+        List<String> keys = new ArrayList<>();
+        for (YamlNode item : seq.items()) {
+            if (!(item instanceof YamlNode.Scalar scalar)) {
+                throw top.typeError(node, "a list of two or more grid keys");
+            }
+            String key = scalar.text();
+            if (keys.contains(key)) {
+                throw new FileFormatException(top.file(), item.line(), "linked", key + " is named twice");
+            }
+            if (grid.stream().noneMatch(a -> a.parameter().key().equals(key))) {
+                throw new FileFormatException(top.file(), item.line(), "linked", key + " is not a grid key");
+            }
+            keys.add(key);
+        }
+        List<CampaignSpec.GridAxis> out = new ArrayList<>();
+        int length = -1;
+        for (CampaignSpec.GridAxis a : grid) {
+            boolean linked = keys.contains(a.parameter().key());
+            if (linked && length >= 0 && a.values().size() != length) {
+                throw new FileFormatException(top.file(), node.line(), "linked", "the linked grid keys must have as many values each: "
+                        + a.parameter().key() + " has " + a.values().size() + ", the first " + length);
+            }
+            if (linked && length < 0) {
+                length = a.values().size();
+            }
+            out.add(new CampaignSpec.GridAxis(a.parameter(), a.values(), linked));
+        }
+        return List.copyOf(out);
     }
 
     private static List<CampaignSpec.GridAxis> grid(String file, YamlNode node) {

@@ -13,7 +13,8 @@ import java.util.SplittableRandom;
 
 /**
  * A tuning campaign: a scenario ensemble (the base scenario with its starting plasma drawn from
- * seeded distributions) crossed with a grid over the sweep parameters. Every grid point ("set") is
+ * seeded distributions) crossed with a grid over the sweep parameters (some of whose axes may be linked,
+ * taking their values together: whole tables side by side). Every grid point ("set") is
  * run on the same ensemble draws (common random numbers), so differences between sets come from the
  * sets, not from the luck of the draw.
  *
@@ -34,27 +35,56 @@ public record CampaignSpec(String name, String description, long seed, int runsP
         Scenario base, Map<PlasmaParameter, Distribution> draws, List<GridAxis> grid,
         double allocationBitsPerSecond, Distribution eventShift, InstrumentModel instrument) {
 
-    /** One grid axis: a tunable parameter and the values it takes. */
-    public record GridAxis(TunableParameter parameter, List<Double> values) {
+    /**
+     * One grid axis: a tunable parameter and the values it takes; a {@code linked} axis takes its i-th value
+     * together with the i-th value of every other linked axis (FORMAT.md, {@code linked}), so that the linked
+     * axes are one axis of the grid, at the place of the first of them.
+     */
+    public record GridAxis(TunableParameter parameter, List<Double> values, boolean linked) {
+        /** An axis crossed with every other. */
+        public GridAxis(TunableParameter parameter, List<Double> values) {
+            this(parameter, values, false);
+        }
     }
 
-    /** Number of grid points: the product of the axis lengths. */
+    /** Number of grid points: the product of the axis lengths, the linked axes counting once. */
     public int setCount() {
         int n = 1;
+        boolean linkedSeen = false;
         for (GridAxis a : grid) {
-            n *= a.values().size();
+            if (!a.linked() || !linkedSeen) {
+                n *= a.values().size();
+            }
+            linkedSeen |= a.linked();
         }
         return n;
     }
 
-    /** The values of set {@code index} along each axis (the last axis varies fastest). */
+    /** The values of set {@code index} along each axis (the last axis varies fastest; linked axes together). */
     public double[] setValues(int index) {
         double[] v = new double[grid.size()];
         int rest = index;
+        int firstLinked = -1;
+        for (int a = 0; a < grid.size() && firstLinked < 0; a++) {
+            firstLinked = grid.get(a).linked() ? a : -1;
+        }
+        int linkedIndex = 0;
         for (int a = grid.size() - 1; a >= 0; a--) {
             List<Double> values = grid.get(a).values();
-            v[a] = values.get(rest % values.size());
+            if (grid.get(a).linked() && a != firstLinked) {
+                continue; // takes the first linked axis's index, below
+            }
+            int i = rest % values.size();
             rest /= values.size();
+            v[a] = values.get(i);
+            if (a == firstLinked) {
+                linkedIndex = i;
+            }
+        }
+        for (int a = 0; a < grid.size(); a++) {
+            if (grid.get(a).linked()) {
+                v[a] = grid.get(a).values().get(linkedIndex);
+            }
         }
         return v;
     }

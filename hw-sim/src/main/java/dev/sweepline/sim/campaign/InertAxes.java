@@ -34,7 +34,8 @@ final class InertAxes {
             double[] v = spec.setValues(r.set());
             StringBuilder key = new StringBuilder().append(r.run());
             for (int a = 0; a < v.length; a++) {
-                if (a != axis) {
+                // a linked axis moves with the others linked to it: they are not "the other axes"
+                if (a != axis && !(spec.grid().get(axis).linked() && spec.grid().get(a).linked())) {
                     key.append(',').append(v[a]);
                 }
             }

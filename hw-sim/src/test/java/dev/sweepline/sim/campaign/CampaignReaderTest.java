@@ -1,5 +1,6 @@
 package dev.sweepline.sim.campaign;
 
+import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -19,6 +20,39 @@ class CampaignReaderTest {
         assertEquals(6, spec.draws().size());
     }
 
+    @Test
+    void shouldTakeLinkedAxesTogether() {
+        // FORMAT.md, linked: the linked axes are one axis of the grid, at the place of the first of them;
+        // crossed with the others, the last axis varying fastest
+        String text = """
+                format: sweepline-campaign/1
+                name: linked
+                seed: 1
+                runsPerSet: 1
+                durationS: 10
+                scenario: quiet-perihelion
+                grid:
+                  focusStyle: [0, 19]
+                  jumpWindows: [5, 6, 7]
+                  robustnessMarginWindows: [0, 1]
+                linked: [focusStyle, robustnessMarginWindows]
+                """;
+        CampaignSpec spec = CampaignReader.parse(text, "linked.yaml", null);
+        assertEquals(2 * 3, spec.setCount());
+        double[][] expected = {{0, 5, 0}, {0, 6, 0}, {0, 7, 0}, {19, 5, 1}, {19, 6, 1}, {19, 7, 1}};
+        for (int s = 0; s < expected.length; s++) {
+            assertArrayEquals(expected[s], spec.setValues(s), "set " + s);
+        }
+        assertEquals(19, spec.parameters(4).focusStyle);
+        assertEquals(1, spec.parameters(4).robustnessMarginWindows);
+        assertEquals(6, spec.parameters(4).jumpWindows);
+        // the demo campaign: three whole tables, default first
+        CampaignSpec demo = CampaignReader.load(Path.of("src/main/resources/campaigns/focus-style.yaml"));
+        assertEquals(3, demo.setCount());
+        assertArrayEquals(new double[] {0, 0, 0, 0, 16}, demo.setValues(0));
+        assertArrayEquals(new double[] {19, 320_000, 1, 2, 128}, demo.setValues(2));
+    }
+
     /** Each broken line names its file, line and field (the bad-input rule of the project). */
     @ParameterizedTest
     @CsvSource(delimiter = '|', value = {
@@ -35,6 +69,11 @@ class CampaignReaderTest {
         // 0.5 us per code and 300 us fixed settle are below what it needs (commands.md §4.4)
         "grid: {settleMicrosPerCode: [1, 0.5]}|5|grid|SETTLE_BELOW_SLEW (the HV supply's slew limit",
         "grid: {fixedSettleMicros: [1000, 300]}|5|grid|SETTLE_TOO_SHORT (the HV supply's settling",
+        // FORMAT.md, linked: grid keys, each once, with as many values each
+        "linked: [jumpWindows, bogus]|5|linked|bogus is not a grid key",
+        "linked: [jumpWindows, jumpWindows]|5|linked|jumpWindows is named twice",
+        "linked: [jumpWindows]|5|linked|a list of two or more grid keys",
+        "linked: [jumpWindows, maxBandWindows]|5|linked|as many values each",
     })
     void shouldNameFileLineAndField(String line, int lineNo, String field, String problem) {
         String head = """
@@ -46,7 +85,8 @@ class CampaignReaderTest {
                 scenario: quiet-perihelion
                 """.formatted(line);
         String text = head + (line.startsWith("runsPerSet") ? "" : "runsPerSet: 2\n")
-                + (line.startsWith("grid") ? "" : "grid: {integrationPeriods: [8]}\n");
+                + (line.startsWith("grid") ? "" : line.startsWith("linked")
+                        ? "grid: {jumpWindows: [5, 6], maxBandWindows: [64]}\n" : "grid: {integrationPeriods: [8]}\n");
         FileFormatException e = assertThrows(FileFormatException.class,
                 () -> CampaignReader.parse(text, "broken.yaml", null));
         assertEquals("broken.yaml", e.file());

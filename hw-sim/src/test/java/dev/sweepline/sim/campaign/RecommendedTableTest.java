@@ -28,8 +28,9 @@ import org.junit.jupiter.params.provider.ValueSource;
 /**
  * Campaign design note C3: the recommended table, loaded through the table commands and restored by a fresh flight
  * software from its non-volatile memory, reproduces the metrics the campaign reported for it: for a small
- * campaign, and for the demo campaign campaigns/focus-style.yaml (whose recommended set is an interleaved
- * design style, focusStyle 3, a table image of version 2).
+ * campaign, and for the demo campaign campaigns/focus-style.yaml (three linked tables: the default, the interleaved
+ * design and the alpha-clear table; its recommended set is the interleaved design, focusStyle 3, a table image of
+ * version 2, indistinguishable from the alpha-clear leader near perihelion).
  */
 class RecommendedTableTest {
     @TempDir
