@@ -311,7 +311,8 @@ class SupportDwellTest {
 
     @Test
     void shouldRefuseAStyleOrFloorOutOfRange() {
-        // commands.md §4.1: focusStyle 0..7 and 12..15 (paired support only with support dwell);
+        // commands.md §4.1: focusStyle 0..7 and 12..15 (paired support only with support dwell; 16, alpha-clear,
+        // only on a design style, AlphaClearBandTest);
         // focusFloorPeriods 1..integrationPeriods with support dwell
         SweepParameters p = support(7, 0);
         assertEquals(TableStatus.OK, p.validate(DemoCup.INSTRUMENT.rangeRatioShift()));
