@@ -32,7 +32,9 @@ import java.util.SplittableRandom;
  * output function over a Weyl sequence of step γ, which is what {@code SplittableRandom.nextLong}
  * computes. Two are weaker than a split would be and are kept for the bytes alone: the instrument
  * seed and the point seeds are linear in their root (budget seed 0 gives points 0, 1, 2, ..., which are
- * also the run seeds of plain bench runs). A new stream takes a new name here, split from its root,
+ * also the run seeds of plain bench runs); so the instrument noise of run seed s + 1 is that of s shifted by
+ * one draw, and runs of consecutive seeds share most of their noise (statistics over runs take seeds further
+ * apart than a run's draws). A new stream takes a new name here, split from its root,
  * never a value another stream already draws.
  *
  * <p>Immutable; thread-safe. Each {@link SplittableRandom} returned is new and belongs to the caller.

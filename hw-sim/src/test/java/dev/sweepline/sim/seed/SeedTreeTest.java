@@ -137,6 +137,22 @@ class SeedTreeTest {
         assertTrue((SeedTree.GOLDEN_GAMMA & 1) == 1, "a Weyl step must be odd to visit every counter");
     }
 
+    @Test
+    void shouldDrawTheInstrumentNoiseOfConsecutiveSeedsFromOneStreamShiftedByOne() {
+        // instrument(s + 1) = instrument(s) + GOLDEN_GAMMA, and SplittableRandom steps its seed by the same
+        // GOLDEN_GAMMA before each output (its source; shouldBeSplittableRandomsGenerator): run seed s + 1 draws
+        // run seed s's numbers from the second on, so runs of consecutive seeds share most of their noise
+        // (docs/focus-design.md, "The interleaved order and the χ² check")
+        for (long seed : SEEDS) {
+            SplittableRandom s = new SplittableRandom(SeedTree.of(seed).instrument());
+            SplittableRandom next = new SplittableRandom(SeedTree.of(seed + 1).instrument());
+            s.nextLong();
+            for (int k = 0; k < 16; k++) {
+                assertEquals(s.nextLong(), next.nextLong(), "seed " + seed + ", draw " + k);
+            }
+        }
+    }
+
     /** The SplitMix64 finaliser as OrnsteinUhlenbeckSeries had it (an independent copy). */
     private static long mix64(long z) {
         z = (z ^ (z >>> 30)) * 0xBF58476D1CE4E5B9L;
