@@ -41,6 +41,8 @@ public final class SplitCollector {
      * rounding of the arc midpoints, so that within it every test would say so.
      */
     private static final double WELL_INSIDE = 1e-6;
+    /** Fraction of the squared well-inside limit below which no hypot is evaluated (about 0.999²: far beyond rounding). */
+    private static final double CLEARLY_INSIDE_SQUARED = 0.998;
     /**
      * Distance from a split line, relative to the radius, beyond which the midpoint formed from an arc's
      * ends decides its quadrant: that point is within about 1e-12 r of the true one (1e-15 over a half-angle
@@ -53,6 +55,13 @@ public final class SplitCollector {
     private final double imageRadiusM;
     private final double collectorRadiusM;
     private final double imageAreaM2;
+    /**
+     * Squared shift below which the image is well inside ({@code hypot + R < Rc (1 - WELL_INSIDE)}) without
+     * evaluating hypot: {@link #CLEARLY_INSIDE_SQUARED} times the square of that limit L, so hypot stays below
+     * 0.9991 L whatever the ulps of the squared shift and of hypot, and the sum with R below the limit by
+     * 0.0009 L, which its rounding cannot bridge while L exceeds 1e-9 Rc; -1 (never) otherwise.
+     */
+    private final double clearlyInsideSquaredM2;
     private final double[] breaks = new double[7];
     /** sin and cos of breaks[0..n-1] and (at n) of breaks[0] + 2 pi, each evaluated at most once per circle. */
     private final double[] sinBreak = new double[7];
@@ -91,6 +100,9 @@ public final class SplitCollector {
         this.imageRadiusM = imageRadiusM;
         this.collectorRadiusM = collectorRadiusM;
         this.imageAreaM2 = Math.PI * imageRadiusM * imageRadiusM;
+        double insideLimit = collectorRadiusM * (1 - WELL_INSIDE) - imageRadiusM;
+        this.clearlyInsideSquaredM2 = insideLimit > 1e-9 * collectorRadiusM
+                ? CLEARLY_INSIDE_SQUARED * insideLimit * insideLimit : -1;
     }
 
     /** A split collector for the aperture and collector of {@code geometry}. */
@@ -118,11 +130,17 @@ public final class SplitCollector {
         cached[1] = 0;
         cached[2] = 0;
         cached[3] = 0;
-        // the centres lie this far apart seen from either circle (hypot ignores the signs)
-        double centres = Math.hypot(sxM, syM);
         // an image well inside the collector: every arc of the image lies inside the collector disc and
-        // none of the collector's inside the image, which the inside tests would find arc by arc
-        boolean imageInside = centres + imageRadiusM < collectorRadiusM * (1 - WELL_INSIDE);
+        // none of the collector's inside the image, which the inside tests would find arc by arc; the
+        // centres' distance (hypot ignores the signs) is needed only when it is not
+        boolean imageInside;
+        double centres = Double.NaN;
+        if (clearlyInside(sxM, syM)) {
+            imageInside = true;
+        } else {
+            centres = Math.hypot(sxM, syM);
+            imageInside = wellInside(centres);
+        }
         addArcs(sxM, syM, imageRadiusM, 0, 0, collectorRadiusM, centres, true, imageInside);
         if (!imageInside) {
             addArcs(0, 0, collectorRadiusM, sxM, syM, imageRadiusM, centres, false, false);
@@ -135,6 +153,16 @@ public final class SplitCollector {
         slotSy[next] = syM;
         next = 1 - next;
         System.arraycopy(cached, 0, out4, 0, 4);
+    }
+
+    /** The image well inside the collector, its centre {@code centres} from the collector's (the definition). */
+    boolean wellInside(double centres) {
+        return centres + imageRadiusM < collectorRadiusM * (1 - WELL_INSIDE);
+    }
+
+    /** The shift below {@link #clearlyInsideSquaredM2}: {@link #wellInside} without evaluating hypot. */
+    boolean clearlyInside(double sxM, double syM) {
+        return sxM * sxM + syM * syM < clearlyInsideSquaredM2;
     }
 
     /**
@@ -214,8 +242,8 @@ public final class SplitCollector {
 
     /**
      * Adds the contributions of the arcs of circle (cx, cy, r) that lie inside the other disc
-     * (ox, oy, ro) to their quadrants; {@code dist} is the distance of the two centres; {@code allInside}:
-     * every arc is known to lie inside.
+     * (ox, oy, ro) to their quadrants; {@code dist} is the distance of the two centres (not read when
+     * {@code allInside}: every arc is known to lie inside, so the circles do not cross).
      */
     private void addArcs(double cx, double cy, double r, double ox, double oy, double ro, double dist,
                          boolean inclusive, boolean allInside) {
@@ -246,7 +274,8 @@ public final class SplitCollector {
         }
         double dx = ox - cx;
         double dy = oy - cy;
-        if (dist > Math.abs(r - ro) && dist < r + ro) {
+        // well inside, dist + r < ro (1 - WELL_INSIDE) gives dist < |r - ro|: no crossing to look for
+        if (!allInside && dist > Math.abs(r - ro) && dist < r + ro) {
             double alpha = Math.atan2(dy, dx);
             double beta = InverseTrigonometry.acos(clamp((dist * dist + r * r - ro * ro) / (2 * dist * r)));
             breaks[n++] = normalise(alpha + beta);

@@ -165,6 +165,33 @@ class SplitCollectorTest {
     }
 
     @Test
+    void shouldFindAnImageWellInsideByItsSquaredShiftOnlyWhereHypotDoes() {
+        // the squared-shift test skips hypot only where the definition (hypot + R < Rc (1 - 1e-6)) holds:
+        // shifts whose length lies within 0.2 % of the test's limit, where rounding could matter most, and
+        // the radius ratios of shouldGiveTheGeneralPathsFractionsForAnImageWellInside; and it takes the
+        // usual image (a shift of half the room) without hypot, as the fast path of the closed loop needs
+        double[][] radii = {{R, RC}, {1.0, 1.000002}, {1.0, 7.0}};
+        SplittableRandom rng = new SplittableRandom(SEED + 3);
+        int clearly = 0;
+        for (double[] rr : radii) {
+            SplitCollector collector = new SplitCollector(rr[0], rr[1]);
+            double limit = rr[1] * (1 - 1e-6) - rr[0];
+            assertTrue(collector.clearlyInside(0.5 * limit, 0), "half the room, radii " + rr[0] + ", " + rr[1]);
+            for (int i = 0; i < 100_000; i++) {
+                double length = limit * rng.nextDouble(0.998, 1.0);
+                double angle = rng.nextDouble(2 * Math.PI);
+                double sx = length * Math.cos(angle);
+                double sy = length * Math.sin(angle);
+                if (collector.clearlyInside(sx, sy)) {
+                    clearly++;
+                    assertTrue(collector.wellInside(Math.hypot(sx, sy)), "shift " + sx + ", " + sy);
+                }
+            }
+        }
+        assertTrue(clearly > 10_000, "shifts tested below the squared limit: " + clearly);
+    }
+
+    @Test
     void shouldSumTheQuadrantsToTheClosedFormAcceptance() {
         // disc-overlap closed form vs the quadrant arcs: two exact methods, rounding only (1e-12)
         SplitCollector collector = SplitCollector.of(DEMO);
