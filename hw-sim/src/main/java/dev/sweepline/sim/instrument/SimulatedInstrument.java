@@ -99,14 +99,12 @@ public final class SimulatedInstrument {
 
         cup.quadrantCurrents(plasma, low, high, truth.quadrantAmps);
         double integrationSeconds = Math.max(1, cmd.integrationPeriods) * modulationPeriodMicros * 1e-6;
+        preamp.sample(truth.quadrantAmps, range, integrationSeconds, rng, reply.quadrant);
         boolean saturated = false;
         double total = 0;
         for (int q = 0; q < InstrumentDescription.QUADRANTS; q++) {
-            double amps = truth.quadrantAmps[q];
-            int counts = preamp.sample(amps, range, integrationSeconds, rng);
-            reply.quadrant[q] = counts;
-            saturated |= preamp.isSaturated(counts);
-            total += amps;
+            saturated |= preamp.isSaturated(reply.quadrant[q]);
+            total += truth.quadrantAmps[q];
         }
 
         reply.sequence = cmd.sequence;
