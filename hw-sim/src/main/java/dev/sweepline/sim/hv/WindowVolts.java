@@ -2,6 +2,7 @@ package dev.sweepline.sim.hv;
 
 import dev.sweepline.fsw.sweep.SweepScheduler;
 import dev.sweepline.fsw.table.WindowTable;
+import java.util.Arrays;
 import java.util.function.IntUnaryOperator;
 
 /**
@@ -12,6 +13,10 @@ import java.util.function.IntUnaryOperator;
 public final class WindowVolts {
     private final double[] lowVolts;
     private final double[] highVolts;
+    /** The distinct edges, in volts (see {@link #edgeVolts()}), and each window's low and high edge in it. */
+    private final double[] edgeVolts;
+    private final int[] lowEdge;
+    private final int[] highEdge;
 
     /** The windows of {@code table} through {@code calibration}. */
     public WindowVolts(WindowTable table, HvCalibration calibration) {
@@ -30,6 +35,21 @@ public final class WindowVolts {
             lowVolts[w] = calibration.volts(dacLow.applyAsInt(w));
             highVolts[w] = calibration.volts(dacHigh.applyAsInt(w));
         }
+        lowEdge = new int[count];
+        highEdge = new int[count];
+        double[] edges = new double[2 * count];
+        int n = 0;
+        for (int w = 0; w < count; w++) {
+            if (w > 0 && lowVolts[w] == highVolts[w - 1]) {
+                lowEdge[w] = highEdge[w - 1];
+            } else {
+                lowEdge[w] = n;
+                edges[n++] = lowVolts[w];
+            }
+            highEdge[w] = n;
+            edges[n++] = highVolts[w];
+        }
+        edgeVolts = Arrays.copyOf(edges, n);
     }
 
     /** Number of windows. */
@@ -73,6 +93,24 @@ public final class WindowVolts {
     /** High edge of window {@code w}, volts. */
     public double highVolts(int w) {
         return highVolts[w];
+    }
+
+    /**
+     * The windows' edges, volts, each window's low then high edge in window order, an edge that adjacent
+     * windows share (the high edge of one equal to the low edge of the next) listed once; a new array.
+     */
+    public double[] edgeVolts() {
+        return edgeVolts.clone();
+    }
+
+    /** Index of window {@code w}'s low edge in {@link #edgeVolts()}. */
+    public int lowEdge(int w) {
+        return lowEdge[w];
+    }
+
+    /** Index of window {@code w}'s high edge in {@link #edgeVolts()}. */
+    public int highEdge(int w) {
+        return highEdge[w];
     }
 
     /** Geometric centre of window {@code w}, volts. */
