@@ -3,6 +3,7 @@ package dev.sweepline.sim.cup;
 import dev.sweepline.sim.plasma.ConvectedMaxwellian;
 import dev.sweepline.sim.plasma.IonPopulation;
 import dev.sweepline.sim.plasma.IonSpecies;
+import dev.sweepline.sim.plasma.MaxwellianWindow;
 import dev.sweepline.sim.plasma.PlasmaState;
 import java.util.List;
 
@@ -49,7 +50,21 @@ public final class FaradayCup {
      * @param outAmps4  receives the currents of Q1..Q4, amperes (noiseless)
      */
     public void quadrantCurrents(PlasmaState plasma, double lowVolts, double highVolts, double[] outAmps4) {
+        quadrantCurrents(plasma, lowVolts, highVolts, null, outAmps4);
+    }
+
+    /**
+     * {@link #quadrantCurrents(PlasmaState, double, double, double[])}, the closed-form evaluation of the
+     * plasma's first population's window current kept in {@code first} (cleared when the cup does not
+     * evaluate it: that population does not flow into the cup): the instrument's step keeps it for the
+     * bench, which takes the protons' sensitivities of the same window from it.
+     */
+    public void quadrantCurrents(PlasmaState plasma, double lowVolts, double highVolts, MaxwellianWindow first,
+            double[] outAmps4) {
         clear(outAmps4);
+        if (first != null) {
+            first.clear();
+        }
         List<IonPopulation> populations = plasma.populations();
         for (int i = 0, n = populations.size(); i < n; i++) {
             IonPopulation p = populations.get(i);
@@ -60,8 +75,12 @@ public final class FaradayCup {
             IonSpecies species = p.species();
             double v1 = ConvectedMaxwellian.speedForVoltage(lowVolts, species.massKg(), species.chargeCoulomb());
             double v2 = ConvectedMaxwellian.speedForVoltage(highVolts, species.massKg(), species.chargeCoulomb());
-            double current = ConvectedMaxwellian.windowCurrent(species.chargeCoulomb(), p.densityPerM3(),
-                    effectiveAreaM2, vz, plasma.normalThermalSpeed(p), v1, v2);
+            double w = plasma.normalThermalSpeed(p);
+            double current = i == 0 && first != null
+                    ? ConvectedMaxwellian.windowCurrent(species.chargeCoulomb(), p.densityPerM3(), effectiveAreaM2, vz, w,
+                            v1, v2, first)
+                    : ConvectedMaxwellian.windowCurrent(species.chargeCoulomb(), p.densityPerM3(), effectiveAreaM2, vz, w,
+                            v1, v2);
             addSplit(p, current, outAmps4);
         }
     }

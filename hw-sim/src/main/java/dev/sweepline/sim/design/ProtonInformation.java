@@ -6,6 +6,7 @@ import dev.sweepline.sim.physics.PhysicalConstants;
 import dev.sweepline.sim.plasma.ConvectedMaxwellian;
 import dev.sweepline.sim.plasma.IonPopulation;
 import dev.sweepline.sim.plasma.IonSpecies;
+import dev.sweepline.sim.plasma.MaxwellianWindow;
 import dev.sweepline.sim.plasma.PlasmaState;
 import dev.sweepline.sim.preamp.Preamplifier;
 
@@ -48,6 +49,21 @@ public final class ProtonInformation {
         double u = p.vzMetresPerSecond();
         double w = plasma.normalThermalSpeed(p);
         ConvectedMaxwellian.relativeSensitivities(q, n, areaM2, u, w, v1, v2, out);
+    }
+
+    /**
+     * {@link #gradient(PlasmaState, IonPopulation, double, double, double[])}, with the terms it shares with
+     * the window current taken from {@code known} when that is the evaluation at the same speeds (the same
+     * doubles either way).
+     */
+    public void gradient(PlasmaState plasma, IonPopulation p, double lowVolts, double highVolts,
+            MaxwellianWindow known, double[] out) {
+        double q = p.species().chargeCoulomb();
+        double m = p.species().massKg();
+        double v1 = ConvectedMaxwellian.speedForVoltage(lowVolts, m, q);
+        double v2 = ConvectedMaxwellian.speedForVoltage(highVolts, m, q);
+        ConvectedMaxwellian.relativeSensitivities(q, p.densityPerM3(), areaM2, p.vzMetresPerSecond(),
+                plasma.normalThermalSpeed(p), v1, v2, known, out);
     }
 
     /** Variance of the summed window current, A², for a total current, gain range and integration time. */

@@ -13,10 +13,15 @@ import java.util.function.IntUnaryOperator;
 public final class WindowVolts {
     private final double[] lowVolts;
     private final double[] highVolts;
-    /** The distinct edges, in volts (see {@link #edgeVolts()}), and each window's low and high edge in it. */
-    private final double[] edgeVolts;
-    private final int[] lowEdge;
-    private final int[] highEdge;
+    /**
+     * The distinct edges (see {@link #edgeVolts()}), found on first use (only the yardstick asks; two threads
+     * that race find the same edges, and the record's final fields publish them whole).
+     */
+    private Edges edges;
+
+    /** The distinct edges, volts, and each window's low and high edge in them. */
+    private record Edges(double[] volts, int[] low, int[] high) {
+    }
 
     /** The windows of {@code table} through {@code calibration}. */
     public WindowVolts(WindowTable table, HvCalibration calibration) {
@@ -35,21 +40,28 @@ public final class WindowVolts {
             lowVolts[w] = calibration.volts(dacLow.applyAsInt(w));
             highVolts[w] = calibration.volts(dacHigh.applyAsInt(w));
         }
-        lowEdge = new int[count];
-        highEdge = new int[count];
-        double[] edges = new double[2 * count];
-        int n = 0;
-        for (int w = 0; w < count; w++) {
-            if (w > 0 && lowVolts[w] == highVolts[w - 1]) {
-                lowEdge[w] = highEdge[w - 1];
-            } else {
-                lowEdge[w] = n;
-                edges[n++] = lowVolts[w];
+    }
+
+    private Edges edges() {
+        if (edges == null) {
+            int count = count();
+            int[] low = new int[count];
+            int[] high = new int[count];
+            double[] volts = new double[2 * count];
+            int n = 0;
+            for (int w = 0; w < count; w++) {
+                if (w > 0 && lowVolts[w] == highVolts[w - 1]) {
+                    low[w] = high[w - 1];
+                } else {
+                    low[w] = n;
+                    volts[n++] = lowVolts[w];
+                }
+                high[w] = n;
+                volts[n++] = highVolts[w];
             }
-            highEdge[w] = n;
-            edges[n++] = highVolts[w];
+            edges = new Edges(Arrays.copyOf(volts, n), low, high);
         }
-        edgeVolts = Arrays.copyOf(edges, n);
+        return edges;
     }
 
     /** Number of windows. */
@@ -100,17 +112,17 @@ public final class WindowVolts {
      * windows share (the high edge of one equal to the low edge of the next) listed once; a new array.
      */
     public double[] edgeVolts() {
-        return edgeVolts.clone();
+        return edges().volts().clone();
     }
 
     /** Index of window {@code w}'s low edge in {@link #edgeVolts()}. */
     public int lowEdge(int w) {
-        return lowEdge[w];
+        return edges().low()[w];
     }
 
     /** Index of window {@code w}'s high edge in {@link #edgeVolts()}. */
     public int highEdge(int w) {
-        return highEdge[w];
+        return edges().high()[w];
     }
 
     /** Geometric centre of window {@code w}, volts. */

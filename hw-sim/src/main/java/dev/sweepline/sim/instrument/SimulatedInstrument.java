@@ -97,7 +97,7 @@ public final class SimulatedInstrument {
         int monitor = hv.monitorCode(integrationStart, rng);
         boolean unsettled = cmd.hvEnabled && Math.abs(monitor - cmd.dacHigh) > model.hvUnsettledToleranceCodes();
 
-        cup.quadrantCurrents(plasma, low, high, truth.quadrantAmps);
+        cup.quadrantCurrents(plasma, low, high, truth.firstPopulation, truth.quadrantAmps);
         double integrationSeconds = Math.max(1, cmd.integrationPeriods) * modulationPeriodMicros * 1e-6;
         preamp.sample(truth.quadrantAmps, range, integrationSeconds, rng, reply.quadrant);
         boolean saturated = false;

@@ -42,6 +42,20 @@ public final class ConvectedMaxwellian {
         return current(q, nPerM3, areaM2, uNormal, w, v1, v2, erfDiff, expDiff);
     }
 
+    /**
+     * {@link #windowCurrent(double, double, double, double, double, double, double)}, its error-function
+     * difference and e1 - e2 kept in {@code evaluation} for the window's sensitivities.
+     */
+    public static double windowCurrent(double q, double nPerM3, double areaM2, double uNormal, double w,
+                                       double v1, double v2, MaxwellianWindow evaluation) {
+        double x1 = (v1 - uNormal) / w;
+        double x2 = (v2 - uNormal) / w;
+        double erfDiff = ErrorFunction.difference(x1, x2);
+        double expDiff = expDifference(x1, x2, (v2 - v1) / w, (v1 + v2 - 2 * uNormal) / w);
+        evaluation.set(uNormal, w, v1, v2, erfDiff, expDiff);
+        return current(q, nPerM3, areaM2, uNormal, w, v1, v2, erfDiff, expDiff);
+    }
+
     /** The window current from its error-function difference and its e1 - e2 (see the class comment). */
     static double current(double q, double nPerM3, double areaM2, double uNormal, double w, double v1, double v2,
                           double erfDiff, double expDiff) {
@@ -98,6 +112,25 @@ public final class ConvectedMaxwellian {
     }
 
     /**
+     * {@link #relativeSensitivities(double, double, double, double, double, double, double, double[])}, with
+     * the error-function difference and e1 - e2 taken from {@code known} when it holds the evaluation of
+     * the window current at exactly these speeds (the same doubles), computed otherwise.
+     */
+    public static void relativeSensitivities(double q, double nPerM3, double areaM2, double uNormal, double w,
+                                             double v1, double v2, MaxwellianWindow known, double[] out3) {
+        if (!known.isAt(uNormal, w, v1, v2)) {
+            relativeSensitivities(q, nPerM3, areaM2, uNormal, w, v1, v2, out3);
+            return;
+        }
+        double x1 = (v1 - uNormal) / w;
+        double x2 = (v2 - uNormal) / w;
+        double e1 = Math.exp(-x1 * x1);
+        double e2 = Math.exp(-x2 * x2);
+        sensitivities(q, nPerM3, areaM2, uNormal, w, v1, v2, x1, x2, known.erfDifference, e1, e2,
+                known.expDifference, out3);
+    }
+
+    /**
      * {@link #relativeSensitivities(double, double, double, double, double, double, double, double[])} from
      * x1, x2, the error-function difference and e1 = exp(-x1^2), e2 = exp(-x2^2).
      */
@@ -106,6 +139,13 @@ public final class ConvectedMaxwellian {
                                       double e2, double[] out3) {
         // the same e1 - e2 as windowCurrent's, its exp(-x^2) factor taken from e1 or e2 (the same call)
         double expDiff = expDifference(x1, x2, (v2 - v1) / w, (v1 + v2 - 2 * uNormal) / w, e1, e2);
+        sensitivities(q, nPerM3, areaM2, uNormal, w, v1, v2, x1, x2, erfDiff, e1, e2, expDiff, out3);
+    }
+
+    /** The three sensitivities from x1, x2, the error-function difference, e1, e2 and e1 - e2. */
+    private static void sensitivities(double q, double nPerM3, double areaM2, double uNormal, double w,
+                                      double v1, double v2, double x1, double x2, double erfDiff, double e1,
+                                      double e2, double expDiff, double[] out3) {
         // as windowCurrent: rounding in the lower tail clamped at zero
         double perDensity = current(q, 1.0, areaM2, uNormal, w, v1, v2, erfDiff, expDiff);
         double qnA = q * nPerM3 * areaM2;
