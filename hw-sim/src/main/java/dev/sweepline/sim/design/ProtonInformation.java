@@ -76,8 +76,25 @@ public final class ProtonInformation {
         return shot + InstrumentDescription.QUADRANTS * (johnson + lsb * lsb / 12);
     }
 
-    /** Adds {@code weight} g gᵀ / variance to the 3x3 matrix {@code f}. */
+    /**
+     * Adds {@code weight} g gᵀ / variance to the 3x3 matrix {@code f}, element (a, b) as
+     * {@code weight * g[a] * g[b] / variance}. With weight 1 that is g_a g_b / variance = g_b g_a / variance
+     * exactly (1 x is x, and a product does not depend on the order of its two factors), so each pair
+     * a ≤ b is computed once and added to both elements.
+     */
     public static void accumulate(double[][] f, double[] g, double variance, double weight) {
+        if (weight == 1.0) {
+            for (int a = 0; a < PARAMETERS; a++) {
+                for (int b = a; b < PARAMETERS; b++) {
+                    double term = g[a] * g[b] / variance;
+                    f[a][b] += term;
+                    if (b != a) {
+                        f[b][a] += term;
+                    }
+                }
+            }
+            return;
+        }
         for (int a = 0; a < PARAMETERS; a++) {
             for (int b = 0; b < PARAMETERS; b++) {
                 f[a][b] += weight * g[a] * g[b] / variance;
