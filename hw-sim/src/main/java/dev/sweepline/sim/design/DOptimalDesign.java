@@ -84,6 +84,7 @@ public final class DOptimalDesign {
         double[][][] m = new double[n][3][3];
         double[] g = new double[3];
         double[] quadrants = new double[4];
+        ProtonInformation.Noise noise = information.noiseAt(stepSeconds);
         int sampled = 0;
         for (PlasmaState plasma : plasmas) {
             IonPopulation p = ProtonInformation.protons(plasma);
@@ -109,7 +110,7 @@ public final class DOptimalDesign {
                 int range = rangeFor(preamp, Math.max(Math.max(quadrants[0], quadrants[1]),
                         Math.max(quadrants[2], quadrants[3])));
                 // information per second of window j, at the run's step length
-                ProtonInformation.accumulate(m[j], g, information.variance(total, range, stepSeconds) * stepSeconds, 1.0);
+                ProtonInformation.accumulate(m[j], g, noise.variance(total, range) * stepSeconds, 1.0);
             }
         }
         if (sampled == 0) {

@@ -9,6 +9,7 @@ import dev.sweepline.sim.plasma.IonSpecies;
 import dev.sweepline.sim.plasma.MaxwellianWindow;
 import dev.sweepline.sim.plasma.PlasmaState;
 import dev.sweepline.sim.preamp.Preamplifier;
+import java.util.List;
 
 /**
  * Fisher information about the protons' (n, U, w) carried by window measurements (physics.md,
@@ -31,7 +32,10 @@ public final class ProtonInformation {
 
     /** The protons of {@code plasma}, or null. */
     public static IonPopulation protons(PlasmaState plasma) {
-        for (IonPopulation p : plasma.populations()) {
+        List<IonPopulation> populations = plasma.populations();
+        // by index: no iterator per call (once per step)
+        for (int i = 0, n = populations.size(); i < n; i++) {
+            IonPopulation p = populations.get(i);
             if (p.species() == IonSpecies.PROTON || p.species().equals(IonSpecies.PROTON)) {
                 return p;
             }
@@ -69,11 +73,47 @@ public final class ProtonInformation {
     /** Variance of the summed window current, A², for a total current, gain range and integration time. */
     public double variance(double totalAmps, int range, double integrationSeconds) {
         double b = preamp.integrationBandwidthHz(integrationSeconds);
-        double shot = 2 * PhysicalConstants.ELEMENTARY_CHARGE_COULOMB * Math.abs(totalAmps) * b;
+        return shotVariance(totalAmps, b) + channelsVariance(range, b);
+    }
+
+    /**
+     * {@link #variance} at one integration time for many currents (the yardstick's windows): the
+     * bandwidth and each range's channel noise evaluated once, the same doubles.
+     */
+    public Noise noiseAt(double integrationSeconds) {
+        return new Noise(this, preamp.integrationBandwidthHz(integrationSeconds));
+    }
+
+    /** The variance of the summed window current at one integration time ({@link #noiseAt}). */
+    public static final class Noise {
+        private final double bandwidthHz;
+        private final double[] channelsByRange;
+
+        private Noise(ProtonInformation information, double bandwidthHz) {
+            this.bandwidthHz = bandwidthHz;
+            this.channelsByRange = new double[information.preamp.ranges()];
+            for (int r = 0; r < channelsByRange.length; r++) {
+                channelsByRange[r] = information.channelsVariance(r, bandwidthHz);
+            }
+        }
+
+        /** {@link ProtonInformation#variance} of {@code totalAmps} read in {@code range}, A². */
+        public double variance(double totalAmps, int range) {
+            return shotVariance(totalAmps, bandwidthHz) + channelsByRange[range];
+        }
+    }
+
+    /** Shot noise of the whole window current in bandwidth {@code b}, A². */
+    private static double shotVariance(double totalAmps, double b) {
+        return 2 * PhysicalConstants.ELEMENTARY_CHARGE_COULOMB * Math.abs(totalAmps) * b;
+    }
+
+    /** The four channels' feedback-resistor noise and LSB²/12 in {@code range} and bandwidth {@code b}, A². */
+    private double channelsVariance(int range, double b) {
         double johnson = 4 * PhysicalConstants.BOLTZMANN_JOULE_PER_KELVIN * preamp.temperatureK() * b
                 / preamp.feedbackOhms(range);
         double lsb = preamp.lsbAmps(range);
-        return shot + InstrumentDescription.QUADRANTS * (johnson + lsb * lsb / 12);
+        return InstrumentDescription.QUADRANTS * (johnson + lsb * lsb / 12);
     }
 
     /**
