@@ -28,6 +28,8 @@ public final class FaradayCup {
     private final double effectiveAreaM2;
     private final double[] fractions = new double[4];
     private final double[] scratch = new double[4];
+    /** Where the evaluations nobody asked to keep go. */
+    private final MaxwellianWindow evaluation = new MaxwellianWindow();
 
     /** A cup of the given geometry. */
     public FaradayCup(CupGeometry geometry) {
@@ -75,12 +77,10 @@ public final class FaradayCup {
             IonSpecies species = p.species();
             double v1 = ConvectedMaxwellian.speedForVoltage(lowVolts, species.massKg(), species.chargeCoulomb());
             double v2 = ConvectedMaxwellian.speedForVoltage(highVolts, species.massKg(), species.chargeCoulomb());
-            double w = plasma.normalThermalSpeed(p);
-            double current = i == 0 && first != null
-                    ? ConvectedMaxwellian.windowCurrent(species.chargeCoulomb(), p.densityPerM3(), effectiveAreaM2, vz, w,
-                            v1, v2, first)
-                    : ConvectedMaxwellian.windowCurrent(species.chargeCoulomb(), p.densityPerM3(), effectiveAreaM2, vz, w,
-                            v1, v2);
+            // one call site of the closed form (the compiler inlines it once), every evaluation kept somewhere
+            MaxwellianWindow kept = i == 0 && first != null ? first : evaluation;
+            double current = ConvectedMaxwellian.windowCurrent(species.chargeCoulomb(), p.densityPerM3(),
+                    effectiveAreaM2, vz, plasma.normalThermalSpeed(p), v1, v2, kept);
             addSplit(p, current, outAmps4);
         }
     }
