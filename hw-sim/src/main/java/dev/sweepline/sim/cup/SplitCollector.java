@@ -22,6 +22,13 @@ import dev.sweepline.sim.plasma.InverseTrigonometry;
  * acos, one asin) are evaluated there; the fractions agree with the general path's within 1e-15. The breaks'
  * acos and asin are {@link InverseTrigonometry}'s (StrictMath's to the bit, without the native call).
  *
+ * <p>An image shifted by less than half its radius has the origin well inside it: its four axis crossings
+ * lie on the four half-axes (the upper y crossing on +y, as cy + r sin(phi) ≥ r (√3/2 - 1/2) > 0, and so
+ * on), and going round the circle goes round the origin, so the arc that starts on the +x, +y, -x, -y
+ * half-axis lies in Q1, Q2, Q3, Q4. Its midpoint is then at least 0.3 r from both split lines, where the
+ * midpoint test above (to within about 1e-15 r) says the same; so the arc's quadrant is taken from its
+ * start without forming the midpoint, and the fractions are the same doubles.
+ *
  * <p>Threading: not thread-safe; it caches the fractions of the last two shifts, because a plasma's
  * populations share one flow direction or, with drifting alphas, two, and the same plasma is read
  * through many windows (the yardstick's 128 per sampled plasma). Allocation-free after construction.
@@ -75,8 +82,22 @@ public final class SplitCollector {
     private final double[] slotFractions = new double[8];
     /** The slot the next new shift replaces (the one not used last). */
     private int next;
-    /** Every break's sine and cosine evaluated, also for an image well inside (for {@code SplitCollectorTest}). */
-    private final boolean trigonometryOnly;
+    /** The shortcuts taken (all but for {@code SplitCollectorTest}'s references). */
+    private final Path path;
+    /** For each break, the quadrant of the arc that starts there, when the image lies around the origin. */
+    private final int[] startQuadrant = new int[7];
+    /** The arcs being added take their quadrants from {@link #startQuadrant}. */
+    private boolean aroundOrigin;
+
+    /** How much of the shortcuts for an image well inside the collector is taken. */
+    enum Path {
+        /** Every shortcut: known trigonometry, quadrants from the arcs' starts around the origin. */
+        FAST,
+        /** Known trigonometry, every quadrant from the midpoint formed from the arc's ends. */
+        MIDPOINTS,
+        /** The general way: every sine and cosine evaluated, every midpoint from its angle. */
+        TRIGONOMETRY
+    }
 
     /**
      * A collector of radius {@code collectorRadiusM} under an aperture image of radius {@code imageRadiusM}.
@@ -85,15 +106,12 @@ public final class SplitCollector {
      * @param collectorRadiusM collector radius, metres
      */
     public SplitCollector(double imageRadiusM, double collectorRadiusM) {
-        this(imageRadiusM, collectorRadiusM, false);
+        this(imageRadiusM, collectorRadiusM, Path.FAST);
     }
 
-    /**
-     * As {@link #SplitCollector(double, double)}; {@code trigonometryOnly}: an image well inside the collector
-     * too goes the general way (every sine and cosine evaluated, every midpoint from its angle).
-     */
-    SplitCollector(double imageRadiusM, double collectorRadiusM, boolean trigonometryOnly) {
-        this.trigonometryOnly = trigonometryOnly;
+    /** As {@link #SplitCollector(double, double)}, taking the shortcuts of {@code path} only. */
+    SplitCollector(double imageRadiusM, double collectorRadiusM, Path path) {
+        this.path = path;
         if (!(imageRadiusM > 0) || !(collectorRadiusM > 0)) {
             throw new IllegalArgumentException("radii must be positive");
         }
@@ -248,7 +266,9 @@ public final class SplitCollector {
     private void addArcs(double cx, double cy, double r, double ox, double oy, double ro, double dist,
                          boolean inclusive, boolean allInside) {
         // every arc inside: no crossing with the other circle, so the axis crossings' sines and cosines are known
-        boolean known = allInside && !trigonometryOnly;
+        boolean known = allInside && path != Path.TRIGONOMETRY;
+        // shifted by less than r / 2 (then |cx|, |cy| < r: four axis crossings, one per half-axis)
+        aroundOrigin = known && path == Path.FAST && cx * cx + cy * cy < 0.25 * r * r;
         int n = 0;
         if (Math.abs(cx) < r) {
             double cos = -cx / r;
@@ -258,7 +278,10 @@ public final class SplitCollector {
                 setTrig(n, sin, cos);
                 setTrig(n + 1, -sin, cos);
             }
+            // the crossings on +y and -y: the arcs from there lie in Q2 and Q4 when around the origin
+            startQuadrant[n] = 1;
             breaks[n++] = phi;
+            startQuadrant[n] = 3;
             breaks[n++] = TWO_PI - phi;
         }
         if (Math.abs(cy) < r) {
@@ -269,7 +292,10 @@ public final class SplitCollector {
                 setTrig(n, sin, cos);
                 setTrig(n + 1, sin, -cos);
             }
+            // the crossings on +x and -x: Q1 and Q3
+            startQuadrant[n] = 0;
             breaks[n++] = normalise(phi);
+            startQuadrant[n] = 2;
             breaks[n++] = Math.PI - phi;
         }
         double dx = ox - cx;
@@ -312,7 +338,11 @@ public final class SplitCollector {
     private void addArc(double cx, double cy, double r, int ia, int ib, double b,
                         double ox, double oy, double ro, boolean inclusive, boolean allInside) {
         double a = breaks[ia];
-        if (allInside && !trigonometryOnly) {
+        if (aroundOrigin) {
+            cached[startQuadrant[ia]] += arcArea(cx, cy, r, ia, ib, a, b);
+            return;
+        }
+        if (allInside && path != Path.TRIGONOMETRY) {
             cached[quadrantOfMidpoint(cx, cy, r, ia, ib, a, b)] += arcArea(cx, cy, r, ia, ib, a, b);
             return;
         }
@@ -409,22 +439,25 @@ public final class SplitCollector {
         return y >= 0 ? 1 : 2;
     }
 
-    /** Sorts breaks[0..n-1] ascending, carrying their sines and cosines (where known) along. */
+    /** Sorts breaks[0..n-1] ascending, carrying their sines and cosines (where known) and start quadrants along. */
     private void sort(int n) {
         for (int i = 1; i < n; i++) {
             double v = breaks[i];
             double sin = sinBreak[i];
             double cos = cosBreak[i];
+            int quadrant = startQuadrant[i];
             int j = i - 1;
             while (j >= 0 && breaks[j] > v) {
                 breaks[j + 1] = breaks[j];
                 sinBreak[j + 1] = sinBreak[j];
                 cosBreak[j + 1] = cosBreak[j];
+                startQuadrant[j + 1] = startQuadrant[j];
                 j--;
             }
             breaks[j + 1] = v;
             sinBreak[j + 1] = sin;
             cosBreak[j + 1] = cos;
+            startQuadrant[j + 1] = quadrant;
         }
     }
 

@@ -132,7 +132,7 @@ class SplitCollectorTest {
         double[] general = new double[4];
         for (double[] rr : radii) {
             SplitCollector fast = new SplitCollector(rr[0], rr[1]);
-            SplitCollector reference = new SplitCollector(rr[0], rr[1], true);
+            SplitCollector reference = new SplitCollector(rr[0], rr[1], SplitCollector.Path.TRIGONOMETRY);
             double room = (rr[1] - rr[0]) * (1 - 1e-5);
             for (int i = 0; i < 30_000; i++) {
                 double sx;
@@ -159,6 +159,36 @@ class SplitCollectorTest {
                         assertEquals(general[q], got[q], 1e-14, "Q" + (q + 1) + " at shift " + sx + ", " + sy
                                 + " (radii " + rr[0] + ", " + rr[1] + ")");
                     }
+                }
+            }
+        }
+    }
+
+    @Test
+    void shouldTakeTheQuadrantsOfTheArcsAroundTheOriginAsTheirMidpointsGiveThem() {
+        // an image shifted by less than half its radius takes each arc's quadrant from the half-axis it
+        // starts on: the same fractions, to the bit, as the midpoints formed from the arcs' ends (the
+        // collector's MIDPOINTS path, itself checked against the general path above); shifts up to and
+        // beyond R/2 (where the midpoints decide again) and near it, in every direction, for the demo cup
+        // and two other radius ratios
+        double[][] radii = {{R, RC}, {1.0, 1.000002}, {1.0, 7.0}};
+        SplittableRandom rng = new SplittableRandom(SEED + 4);
+        double[] got = new double[4];
+        double[] reference = new double[4];
+        for (double[] rr : radii) {
+            SplitCollector fast = new SplitCollector(rr[0], rr[1]);
+            SplitCollector midpoints = new SplitCollector(rr[0], rr[1], SplitCollector.Path.MIDPOINTS);
+            double room = Math.min(rr[0], (rr[1] - rr[0]) * (1 - 1e-5));
+            for (int i = 0; i < 50_000; i++) {
+                double length = i % 2 == 0 ? room * Math.sqrt(rng.nextDouble()) : rr[0] * rng.nextDouble(0.499, 0.501);
+                double angle = rng.nextDouble(2 * Math.PI);
+                double sx = Math.min(length, room) * Math.cos(angle);
+                double sy = Math.min(length, room) * Math.sin(angle);
+                fast.fractions(sx, sy, got);
+                midpoints.fractions(sx, sy, reference);
+                for (int q = 0; q < 4; q++) {
+                    assertEquals(Double.doubleToRawLongBits(reference[q]), Double.doubleToRawLongBits(got[q]),
+                            "Q" + (q + 1) + " at shift " + sx + ", " + sy + " (radii " + rr[0] + ", " + rr[1] + ")");
                 }
             }
         }
