@@ -113,7 +113,8 @@ public final class BenchRecorder implements SweepListener, InProcessLink.StepObs
             return;
         }
         double seconds = (truth.endMicros - truth.integrationStartMicros) / 1e6;
-        information.gradient(plasma, p, truth.lowVolts, truth.highVolts, gradient);
+        // the instrument evaluated the same window at the same plasma: its terms serve the sensitivities
+        information.gradient(plasma, p, truth.lowVolts, truth.highVolts, truth.firstPopulation, gradient);
         ProtonInformation.accumulate(measuredInformation, gradient,
                 information.variance(truth.totalAmps, reply.gainRange, seconds), 1.0);
         informationSeconds += seconds;

@@ -16,8 +16,8 @@ import java.util.List;
 public final class DecisionSeries {
     /** Points kept at most: more than a 60-minute run's sweeps (about 5800); 33 B each. */
     static final int CAPACITY = 16_384;
-    /** Points room is made for at first. */
-    private static final int INITIAL = 1024;
+    /** Points room is made for at first: a minute's sweeps (about 95 on the default scenario). */
+    private static final int INITIAL = 128;
     private final int capacity;
     private double[] seconds;
     private boolean[] focus;

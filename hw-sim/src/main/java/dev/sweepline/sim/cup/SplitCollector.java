@@ -22,6 +22,13 @@ import dev.sweepline.sim.plasma.InverseTrigonometry;
  * acos, one asin) are evaluated there; the fractions agree with the general path's within 1e-15. The breaks'
  * acos and asin are {@link InverseTrigonometry}'s (StrictMath's to the bit, without the native call).
  *
+ * <p>An image shifted by less than half its radius has the origin well inside it: its four axis crossings
+ * lie on the four half-axes (the upper y crossing on +y, as cy + r sin(phi) ≥ r (√3/2 - 1/2) > 0, and so
+ * on), and going round the circle goes round the origin, so the arc that starts on the +x, +y, -x, -y
+ * half-axis lies in Q1, Q2, Q3, Q4. Its midpoint is then at least 0.3 r from both split lines, where the
+ * midpoint test above (to within about 1e-15 r) says the same; so the arc's quadrant is taken from its
+ * start without forming the midpoint, and the fractions are the same doubles.
+ *
  * <p>Threading: not thread-safe; it caches the fractions of the last two shifts, because a plasma's
  * populations share one flow direction or, with drifting alphas, two, and the same plasma is read
  * through many windows (the yardstick's 128 per sampled plasma). Allocation-free after construction.
@@ -41,6 +48,8 @@ public final class SplitCollector {
      * rounding of the arc midpoints, so that within it every test would say so.
      */
     private static final double WELL_INSIDE = 1e-6;
+    /** Fraction of the squared well-inside limit below which no hypot is evaluated (about 0.999²: far beyond rounding). */
+    private static final double CLEARLY_INSIDE_SQUARED = 0.998;
     /**
      * Distance from a split line, relative to the radius, beyond which the midpoint formed from an arc's
      * ends decides its quadrant: that point is within about 1e-12 r of the true one (1e-15 over a half-angle
@@ -53,6 +62,13 @@ public final class SplitCollector {
     private final double imageRadiusM;
     private final double collectorRadiusM;
     private final double imageAreaM2;
+    /**
+     * Squared shift below which the image is well inside ({@code hypot + R < Rc (1 - WELL_INSIDE)}) without
+     * evaluating hypot: {@link #CLEARLY_INSIDE_SQUARED} times the square of that limit L, so hypot stays below
+     * 0.9991 L whatever the ulps of the squared shift and of hypot, and the sum with R below the limit by
+     * 0.0009 L, which its rounding cannot bridge while L exceeds 1e-9 Rc; -1 (never) otherwise.
+     */
+    private final double clearlyInsideSquaredM2;
     private final double[] breaks = new double[7];
     /** sin and cos of breaks[0..n-1] and (at n) of breaks[0] + 2 pi, each evaluated at most once per circle. */
     private final double[] sinBreak = new double[7];
@@ -66,8 +82,22 @@ public final class SplitCollector {
     private final double[] slotFractions = new double[8];
     /** The slot the next new shift replaces (the one not used last). */
     private int next;
-    /** Every break's sine and cosine evaluated, also for an image well inside (for {@code SplitCollectorTest}). */
-    private final boolean trigonometryOnly;
+    /** The shortcuts taken (all but for {@code SplitCollectorTest}'s references). */
+    private final Path path;
+    /** For each break, the quadrant of the arc that starts there, when the image lies around the origin. */
+    private final int[] startQuadrant = new int[7];
+    /** The arcs being added take their quadrants from {@link #startQuadrant}. */
+    private boolean aroundOrigin;
+
+    /** How much of the shortcuts for an image well inside the collector is taken. */
+    enum Path {
+        /** Every shortcut: known trigonometry, quadrants from the arcs' starts around the origin. */
+        FAST,
+        /** Known trigonometry, every quadrant from the midpoint formed from the arc's ends. */
+        MIDPOINTS,
+        /** The general way: every sine and cosine evaluated, every midpoint from its angle. */
+        TRIGONOMETRY
+    }
 
     /**
      * A collector of radius {@code collectorRadiusM} under an aperture image of radius {@code imageRadiusM}.
@@ -76,21 +106,21 @@ public final class SplitCollector {
      * @param collectorRadiusM collector radius, metres
      */
     public SplitCollector(double imageRadiusM, double collectorRadiusM) {
-        this(imageRadiusM, collectorRadiusM, false);
+        this(imageRadiusM, collectorRadiusM, Path.FAST);
     }
 
-    /**
-     * As {@link #SplitCollector(double, double)}; {@code trigonometryOnly}: an image well inside the collector
-     * too goes the general way (every sine and cosine evaluated, every midpoint from its angle).
-     */
-    SplitCollector(double imageRadiusM, double collectorRadiusM, boolean trigonometryOnly) {
-        this.trigonometryOnly = trigonometryOnly;
+    /** As {@link #SplitCollector(double, double)}, taking the shortcuts of {@code path} only. */
+    SplitCollector(double imageRadiusM, double collectorRadiusM, Path path) {
+        this.path = path;
         if (!(imageRadiusM > 0) || !(collectorRadiusM > 0)) {
             throw new IllegalArgumentException("radii must be positive");
         }
         this.imageRadiusM = imageRadiusM;
         this.collectorRadiusM = collectorRadiusM;
         this.imageAreaM2 = Math.PI * imageRadiusM * imageRadiusM;
+        double insideLimit = collectorRadiusM * (1 - WELL_INSIDE) - imageRadiusM;
+        this.clearlyInsideSquaredM2 = insideLimit > 1e-9 * collectorRadiusM
+                ? CLEARLY_INSIDE_SQUARED * insideLimit * insideLimit : -1;
     }
 
     /** A split collector for the aperture and collector of {@code geometry}. */
@@ -118,11 +148,17 @@ public final class SplitCollector {
         cached[1] = 0;
         cached[2] = 0;
         cached[3] = 0;
-        // the centres lie this far apart seen from either circle (hypot ignores the signs)
-        double centres = Math.hypot(sxM, syM);
         // an image well inside the collector: every arc of the image lies inside the collector disc and
-        // none of the collector's inside the image, which the inside tests would find arc by arc
-        boolean imageInside = centres + imageRadiusM < collectorRadiusM * (1 - WELL_INSIDE);
+        // none of the collector's inside the image, which the inside tests would find arc by arc; the
+        // centres' distance (hypot ignores the signs) is needed only when it is not
+        boolean imageInside;
+        double centres = Double.NaN;
+        if (clearlyInside(sxM, syM)) {
+            imageInside = true;
+        } else {
+            centres = Math.hypot(sxM, syM);
+            imageInside = wellInside(centres);
+        }
         addArcs(sxM, syM, imageRadiusM, 0, 0, collectorRadiusM, centres, true, imageInside);
         if (!imageInside) {
             addArcs(0, 0, collectorRadiusM, sxM, syM, imageRadiusM, centres, false, false);
@@ -135,6 +171,16 @@ public final class SplitCollector {
         slotSy[next] = syM;
         next = 1 - next;
         System.arraycopy(cached, 0, out4, 0, 4);
+    }
+
+    /** The image well inside the collector, its centre {@code centres} from the collector's (the definition). */
+    boolean wellInside(double centres) {
+        return centres + imageRadiusM < collectorRadiusM * (1 - WELL_INSIDE);
+    }
+
+    /** The shift below {@link #clearlyInsideSquaredM2}: {@link #wellInside} without evaluating hypot. */
+    boolean clearlyInside(double sxM, double syM) {
+        return sxM * sxM + syM * syM < clearlyInsideSquaredM2;
     }
 
     /**
@@ -214,13 +260,15 @@ public final class SplitCollector {
 
     /**
      * Adds the contributions of the arcs of circle (cx, cy, r) that lie inside the other disc
-     * (ox, oy, ro) to their quadrants; {@code dist} is the distance of the two centres; {@code allInside}:
-     * every arc is known to lie inside.
+     * (ox, oy, ro) to their quadrants; {@code dist} is the distance of the two centres (not read when
+     * {@code allInside}: every arc is known to lie inside, so the circles do not cross).
      */
     private void addArcs(double cx, double cy, double r, double ox, double oy, double ro, double dist,
                          boolean inclusive, boolean allInside) {
         // every arc inside: no crossing with the other circle, so the axis crossings' sines and cosines are known
-        boolean known = allInside && !trigonometryOnly;
+        boolean known = allInside && path != Path.TRIGONOMETRY;
+        // shifted by less than r / 2 (then |cx|, |cy| < r: four axis crossings, one per half-axis)
+        aroundOrigin = known && path == Path.FAST && cx * cx + cy * cy < 0.25 * r * r;
         int n = 0;
         if (Math.abs(cx) < r) {
             double cos = -cx / r;
@@ -230,7 +278,10 @@ public final class SplitCollector {
                 setTrig(n, sin, cos);
                 setTrig(n + 1, -sin, cos);
             }
+            // the crossings on +y and -y: the arcs from there lie in Q2 and Q4 when around the origin
+            startQuadrant[n] = 1;
             breaks[n++] = phi;
+            startQuadrant[n] = 3;
             breaks[n++] = TWO_PI - phi;
         }
         if (Math.abs(cy) < r) {
@@ -241,12 +292,16 @@ public final class SplitCollector {
                 setTrig(n, sin, cos);
                 setTrig(n + 1, sin, -cos);
             }
+            // the crossings on +x and -x: Q1 and Q3
+            startQuadrant[n] = 0;
             breaks[n++] = normalise(phi);
+            startQuadrant[n] = 2;
             breaks[n++] = Math.PI - phi;
         }
         double dx = ox - cx;
         double dy = oy - cy;
-        if (dist > Math.abs(r - ro) && dist < r + ro) {
+        // well inside, dist + r < ro (1 - WELL_INSIDE) gives dist < |r - ro|: no crossing to look for
+        if (!allInside && dist > Math.abs(r - ro) && dist < r + ro) {
             double alpha = Math.atan2(dy, dx);
             double beta = InverseTrigonometry.acos(clamp((dist * dist + r * r - ro * ro) / (2 * dist * r)));
             breaks[n++] = normalise(alpha + beta);
@@ -283,7 +338,11 @@ public final class SplitCollector {
     private void addArc(double cx, double cy, double r, int ia, int ib, double b,
                         double ox, double oy, double ro, boolean inclusive, boolean allInside) {
         double a = breaks[ia];
-        if (allInside && !trigonometryOnly) {
+        if (aroundOrigin) {
+            cached[startQuadrant[ia]] += arcArea(cx, cy, r, ia, ib, a, b);
+            return;
+        }
+        if (allInside && path != Path.TRIGONOMETRY) {
             cached[quadrantOfMidpoint(cx, cy, r, ia, ib, a, b)] += arcArea(cx, cy, r, ia, ib, a, b);
             return;
         }
@@ -380,22 +439,25 @@ public final class SplitCollector {
         return y >= 0 ? 1 : 2;
     }
 
-    /** Sorts breaks[0..n-1] ascending, carrying their sines and cosines (where known) along. */
+    /** Sorts breaks[0..n-1] ascending, carrying their sines and cosines (where known) and start quadrants along. */
     private void sort(int n) {
         for (int i = 1; i < n; i++) {
             double v = breaks[i];
             double sin = sinBreak[i];
             double cos = cosBreak[i];
+            int quadrant = startQuadrant[i];
             int j = i - 1;
             while (j >= 0 && breaks[j] > v) {
                 breaks[j + 1] = breaks[j];
                 sinBreak[j + 1] = sinBreak[j];
                 cosBreak[j + 1] = cosBreak[j];
+                startQuadrant[j + 1] = startQuadrant[j];
                 j--;
             }
             breaks[j + 1] = v;
             sinBreak[j + 1] = sin;
             cosBreak[j + 1] = cos;
+            startQuadrant[j + 1] = quadrant;
         }
     }
 

@@ -6,8 +6,10 @@ import dev.sweepline.sim.physics.PhysicalConstants;
 import dev.sweepline.sim.plasma.ConvectedMaxwellian;
 import dev.sweepline.sim.plasma.IonPopulation;
 import dev.sweepline.sim.plasma.IonSpecies;
+import dev.sweepline.sim.plasma.MaxwellianWindow;
 import dev.sweepline.sim.plasma.PlasmaState;
 import dev.sweepline.sim.preamp.Preamplifier;
+import java.util.List;
 
 /**
  * Fisher information about the protons' (n, U, w) carried by window measurements (physics.md,
@@ -30,7 +32,10 @@ public final class ProtonInformation {
 
     /** The protons of {@code plasma}, or null. */
     public static IonPopulation protons(PlasmaState plasma) {
-        for (IonPopulation p : plasma.populations()) {
+        List<IonPopulation> populations = plasma.populations();
+        // by index: no iterator per call (once per step)
+        for (int i = 0, n = populations.size(); i < n; i++) {
+            IonPopulation p = populations.get(i);
             if (p.species() == IonSpecies.PROTON || p.species().equals(IonSpecies.PROTON)) {
                 return p;
             }
@@ -50,18 +55,86 @@ public final class ProtonInformation {
         ConvectedMaxwellian.relativeSensitivities(q, n, areaM2, u, w, v1, v2, out);
     }
 
+    /**
+     * {@link #gradient(PlasmaState, IonPopulation, double, double, double[])}, with the terms it shares with
+     * the window current taken from {@code known} when that is the evaluation at the same speeds (the same
+     * doubles either way).
+     */
+    public void gradient(PlasmaState plasma, IonPopulation p, double lowVolts, double highVolts,
+            MaxwellianWindow known, double[] out) {
+        double q = p.species().chargeCoulomb();
+        double m = p.species().massKg();
+        double v1 = ConvectedMaxwellian.speedForVoltage(lowVolts, m, q);
+        double v2 = ConvectedMaxwellian.speedForVoltage(highVolts, m, q);
+        ConvectedMaxwellian.relativeSensitivities(q, p.densityPerM3(), areaM2, p.vzMetresPerSecond(),
+                plasma.normalThermalSpeed(p), v1, v2, known, out);
+    }
+
     /** Variance of the summed window current, A², for a total current, gain range and integration time. */
     public double variance(double totalAmps, int range, double integrationSeconds) {
         double b = preamp.integrationBandwidthHz(integrationSeconds);
-        double shot = 2 * PhysicalConstants.ELEMENTARY_CHARGE_COULOMB * Math.abs(totalAmps) * b;
+        return shotVariance(totalAmps, b) + channelsVariance(range, b);
+    }
+
+    /**
+     * {@link #variance} at one integration time for many currents (the yardstick's windows): the
+     * bandwidth and each range's channel noise evaluated once, the same doubles.
+     */
+    public Noise noiseAt(double integrationSeconds) {
+        return new Noise(this, preamp.integrationBandwidthHz(integrationSeconds));
+    }
+
+    /** The variance of the summed window current at one integration time ({@link #noiseAt}). */
+    public static final class Noise {
+        private final double bandwidthHz;
+        private final double[] channelsByRange;
+
+        private Noise(ProtonInformation information, double bandwidthHz) {
+            this.bandwidthHz = bandwidthHz;
+            this.channelsByRange = new double[information.preamp.ranges()];
+            for (int r = 0; r < channelsByRange.length; r++) {
+                channelsByRange[r] = information.channelsVariance(r, bandwidthHz);
+            }
+        }
+
+        /** {@link ProtonInformation#variance} of {@code totalAmps} read in {@code range}, A². */
+        public double variance(double totalAmps, int range) {
+            return shotVariance(totalAmps, bandwidthHz) + channelsByRange[range];
+        }
+    }
+
+    /** Shot noise of the whole window current in bandwidth {@code b}, A². */
+    private static double shotVariance(double totalAmps, double b) {
+        return 2 * PhysicalConstants.ELEMENTARY_CHARGE_COULOMB * Math.abs(totalAmps) * b;
+    }
+
+    /** The four channels' feedback-resistor noise and LSB²/12 in {@code range} and bandwidth {@code b}, A². */
+    private double channelsVariance(int range, double b) {
         double johnson = 4 * PhysicalConstants.BOLTZMANN_JOULE_PER_KELVIN * preamp.temperatureK() * b
                 / preamp.feedbackOhms(range);
         double lsb = preamp.lsbAmps(range);
-        return shot + InstrumentDescription.QUADRANTS * (johnson + lsb * lsb / 12);
+        return InstrumentDescription.QUADRANTS * (johnson + lsb * lsb / 12);
     }
 
-    /** Adds {@code weight} g gᵀ / variance to the 3x3 matrix {@code f}. */
+    /**
+     * Adds {@code weight} g gᵀ / variance to the 3x3 matrix {@code f}, element (a, b) as
+     * {@code weight * g[a] * g[b] / variance}. With weight 1 that is g_a g_b / variance = g_b g_a / variance
+     * exactly (1 x is x, and a product does not depend on the order of its two factors), so each pair
+     * a ≤ b is computed once and added to both elements.
+     */
     public static void accumulate(double[][] f, double[] g, double variance, double weight) {
+        if (weight == 1.0) {
+            for (int a = 0; a < PARAMETERS; a++) {
+                for (int b = a; b < PARAMETERS; b++) {
+                    double term = g[a] * g[b] / variance;
+                    f[a][b] += term;
+                    if (b != a) {
+                        f[b][a] += term;
+                    }
+                }
+            }
+            return;
+        }
         for (int a = 0; a < PARAMETERS; a++) {
             for (int b = 0; b < PARAMETERS; b++) {
                 f[a][b] += weight * g[a] * g[b] / variance;

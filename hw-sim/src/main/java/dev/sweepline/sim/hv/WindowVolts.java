@@ -2,6 +2,7 @@ package dev.sweepline.sim.hv;
 
 import dev.sweepline.fsw.sweep.SweepScheduler;
 import dev.sweepline.fsw.table.WindowTable;
+import java.util.Arrays;
 import java.util.function.IntUnaryOperator;
 
 /**
@@ -12,6 +13,15 @@ import java.util.function.IntUnaryOperator;
 public final class WindowVolts {
     private final double[] lowVolts;
     private final double[] highVolts;
+    /**
+     * The distinct edges (see {@link #edgeVolts()}), found on first use (only the yardstick asks; two threads
+     * that race find the same edges, and the record's final fields publish them whole).
+     */
+    private Edges edges;
+
+    /** The distinct edges, volts, and each window's low and high edge in them. */
+    private record Edges(double[] volts, int[] low, int[] high) {
+    }
 
     /** The windows of {@code table} through {@code calibration}. */
     public WindowVolts(WindowTable table, HvCalibration calibration) {
@@ -30,6 +40,28 @@ public final class WindowVolts {
             lowVolts[w] = calibration.volts(dacLow.applyAsInt(w));
             highVolts[w] = calibration.volts(dacHigh.applyAsInt(w));
         }
+    }
+
+    private Edges edges() {
+        if (edges == null) {
+            int count = count();
+            int[] low = new int[count];
+            int[] high = new int[count];
+            double[] volts = new double[2 * count];
+            int n = 0;
+            for (int w = 0; w < count; w++) {
+                if (w > 0 && lowVolts[w] == highVolts[w - 1]) {
+                    low[w] = high[w - 1];
+                } else {
+                    low[w] = n;
+                    volts[n++] = lowVolts[w];
+                }
+                high[w] = n;
+                volts[n++] = highVolts[w];
+            }
+            edges = new Edges(Arrays.copyOf(volts, n), low, high);
+        }
+        return edges;
     }
 
     /** Number of windows. */
@@ -73,6 +105,24 @@ public final class WindowVolts {
     /** High edge of window {@code w}, volts. */
     public double highVolts(int w) {
         return highVolts[w];
+    }
+
+    /**
+     * The windows' edges, volts, each window's low then high edge in window order, an edge that adjacent
+     * windows share (the high edge of one equal to the low edge of the next) listed once; a new array.
+     */
+    public double[] edgeVolts() {
+        return edges().volts().clone();
+    }
+
+    /** Index of window {@code w}'s low edge in {@link #edgeVolts()}. */
+    public int lowEdge(int w) {
+        return edges().low()[w];
+    }
+
+    /** Index of window {@code w}'s high edge in {@link #edgeVolts()}. */
+    public int highEdge(int w) {
+        return edges().high()[w];
     }
 
     /** Geometric centre of window {@code w}, volts. */

@@ -97,16 +97,14 @@ public final class SimulatedInstrument {
         int monitor = hv.monitorCode(integrationStart, rng);
         boolean unsettled = cmd.hvEnabled && Math.abs(monitor - cmd.dacHigh) > model.hvUnsettledToleranceCodes();
 
-        cup.quadrantCurrents(plasma, low, high, truth.quadrantAmps);
+        cup.quadrantCurrents(plasma, low, high, truth.firstPopulation, truth.quadrantAmps);
         double integrationSeconds = Math.max(1, cmd.integrationPeriods) * modulationPeriodMicros * 1e-6;
+        preamp.sample(truth.quadrantAmps, range, integrationSeconds, rng, reply.quadrant);
         boolean saturated = false;
         double total = 0;
         for (int q = 0; q < InstrumentDescription.QUADRANTS; q++) {
-            double amps = truth.quadrantAmps[q];
-            int counts = preamp.sample(amps, range, integrationSeconds, rng);
-            reply.quadrant[q] = counts;
-            saturated |= preamp.isSaturated(counts);
-            total += amps;
+            saturated |= preamp.isSaturated(reply.quadrant[q]);
+            total += truth.quadrantAmps[q];
         }
 
         reply.sequence = cmd.sequence;

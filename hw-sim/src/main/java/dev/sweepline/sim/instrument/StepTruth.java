@@ -1,5 +1,7 @@
 package dev.sweepline.sim.instrument;
 
+import dev.sweepline.sim.plasma.MaxwellianWindow;
+
 /**
  * What really happened in one simulated step, for the bench to compare with what the flight
  * software and the ground made of it. Mutable, allocated once and refilled by
@@ -12,6 +14,12 @@ public final class StepTruth {
     public double highVolts;
     /** Noiseless window current of quadrants Q1..Q4, amperes. */
     public final double[] quadrantAmps = new double[4];
+    /**
+     * The closed-form evaluation of the plasma's first population's window current (the protons, in the
+     * scenarios' plasmas), cleared when the cup did not evaluate it: the bench takes the protons'
+     * sensitivities of the same window from it.
+     */
+    public final MaxwellianWindow firstPopulation = new MaxwellianWindow();
     /** Sum of {@link #quadrantAmps}, amperes. */
     public double totalAmps;
     /** Time integration started, microseconds. */

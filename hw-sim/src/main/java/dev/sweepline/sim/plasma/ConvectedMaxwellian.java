@@ -39,6 +39,26 @@ public final class ConvectedMaxwellian {
         double x2 = (v2 - uNormal) / w;
         double erfDiff = ErrorFunction.difference(x1, x2);
         double expDiff = expDifference(x1, x2, (v2 - v1) / w, (v1 + v2 - 2 * uNormal) / w);
+        return current(q, nPerM3, areaM2, uNormal, w, v1, v2, erfDiff, expDiff);
+    }
+
+    /**
+     * {@link #windowCurrent(double, double, double, double, double, double, double)}, its error-function
+     * difference and e1 - e2 kept in {@code evaluation} for the window's sensitivities.
+     */
+    public static double windowCurrent(double q, double nPerM3, double areaM2, double uNormal, double w,
+                                       double v1, double v2, MaxwellianWindow evaluation) {
+        double x1 = (v1 - uNormal) / w;
+        double x2 = (v2 - uNormal) / w;
+        double erfDiff = ErrorFunction.difference(x1, x2);
+        double expDiff = expDifference(x1, x2, (v2 - v1) / w, (v1 + v2 - 2 * uNormal) / w);
+        evaluation.set(uNormal, w, v1, v2, erfDiff, expDiff);
+        return current(q, nPerM3, areaM2, uNormal, w, v1, v2, erfDiff, expDiff);
+    }
+
+    /** The window current from its error-function difference and its e1 - e2 (see the class comment). */
+    static double current(double q, double nPerM3, double areaM2, double uNormal, double w, double v1, double v2,
+                          double erfDiff, double expDiff) {
         double current = q * nPerM3 * areaM2 * (0.5 * uNormal * erfDiff + w / (2 * SQRT_PI) * expDiff);
         if (v2 >= v1 && v1 >= 0 && current < 0) {
             // the integrand q n A v f(v) is non-negative here: a negative value is rounding in the lower tail
@@ -88,12 +108,46 @@ public final class ConvectedMaxwellian {
         double erfDiff = ErrorFunction.difference(x1, x2);
         double e1 = Math.exp(-x1 * x1);
         double e2 = Math.exp(-x2 * x2);
+        relativeSensitivities(q, nPerM3, areaM2, uNormal, w, v1, v2, x1, x2, erfDiff, e1, e2, out3);
+    }
+
+    /**
+     * {@link #relativeSensitivities(double, double, double, double, double, double, double, double[])}, with
+     * the error-function difference and e1 - e2 taken from {@code known} when it holds the evaluation of
+     * the window current at exactly these speeds (the same doubles), computed otherwise.
+     */
+    public static void relativeSensitivities(double q, double nPerM3, double areaM2, double uNormal, double w,
+                                             double v1, double v2, MaxwellianWindow known, double[] out3) {
+        if (!known.isAt(uNormal, w, v1, v2)) {
+            relativeSensitivities(q, nPerM3, areaM2, uNormal, w, v1, v2, out3);
+            return;
+        }
+        double x1 = (v1 - uNormal) / w;
+        double x2 = (v2 - uNormal) / w;
+        double e1 = Math.exp(-x1 * x1);
+        double e2 = Math.exp(-x2 * x2);
+        sensitivities(q, nPerM3, areaM2, uNormal, w, v1, v2, x1, x2, known.erfDifference, e1, e2,
+                known.expDifference, out3);
+    }
+
+    /**
+     * {@link #relativeSensitivities(double, double, double, double, double, double, double, double[])} from
+     * x1, x2, the error-function difference and e1 = exp(-x1^2), e2 = exp(-x2^2).
+     */
+    static void relativeSensitivities(double q, double nPerM3, double areaM2, double uNormal, double w,
+                                      double v1, double v2, double x1, double x2, double erfDiff, double e1,
+                                      double e2, double[] out3) {
         // the same e1 - e2 as windowCurrent's, its exp(-x^2) factor taken from e1 or e2 (the same call)
         double expDiff = expDifference(x1, x2, (v2 - v1) / w, (v1 + v2 - 2 * uNormal) / w, e1, e2);
-        double perDensity = q * 1.0 * areaM2 * (0.5 * uNormal * erfDiff + w / (2 * SQRT_PI) * expDiff);
-        if (v2 >= v1 && v1 >= 0 && perDensity < 0) {
-            perDensity = 0; // as windowCurrent: rounding in the lower tail
-        }
+        sensitivities(q, nPerM3, areaM2, uNormal, w, v1, v2, x1, x2, erfDiff, e1, e2, expDiff, out3);
+    }
+
+    /** The three sensitivities from x1, x2, the error-function difference, e1, e2 and e1 - e2. */
+    private static void sensitivities(double q, double nPerM3, double areaM2, double uNormal, double w,
+                                      double v1, double v2, double x1, double x2, double erfDiff, double e1,
+                                      double e2, double expDiff, double[] out3) {
+        // as windowCurrent: rounding in the lower tail clamped at zero
+        double perDensity = current(q, 1.0, areaM2, uNormal, w, v1, v2, erfDiff, expDiff);
         double qnA = q * nPerM3 * areaM2;
         out3[0] = nPerM3 * perDensity;
         out3[1] = uNormal * (qnA * (0.5 * erfDiff + (times(v1, e1) - times(v2, e2)) / (w * SQRT_PI)));
@@ -125,7 +179,7 @@ public final class ConvectedMaxwellian {
     }
 
     /** {@link #expDifference(double, double, double, double)} with e1 = exp(-x1^2) and e2 = exp(-x2^2) known. */
-    private static double expDifference(double x1, double x2, double dx, double sum, double e1, double e2) {
+    static double expDifference(double x1, double x2, double dx, double sum, double e1, double e2) {
         if (Double.isInfinite(x1) || Double.isInfinite(x2)) {
             return e1 - e2;
         }

@@ -24,6 +24,8 @@ public final class ErrorFunction {
     static final double ERF_HALF_POINT = 0.47693627620446987;
     /** Above this erfc is below half the smallest subnormal double (e^−745.3 / 48). */
     private static final double ERFC_ZERO_ABOVE = 27.3;
+    /** Upper end of the first interval, where erf(x) = x R1(x²). */
+    private static final double SMALL = 0.46875;
     private static final double ONE_OVER_SQRT_PI = 0.56418958354775628695;
     private static final double[] EXP_MINUS_SQUARE_SIXTEENTHS = new double[(int) (ERFC_ZERO_ABOVE * 16) + 1];
 
@@ -39,22 +41,12 @@ public final class ErrorFunction {
 
     /** erf(x). */
     public static double erf(double x) {
-        double y = Math.abs(x);
-        if (y <= 0.46875) {
-            return x * smallRatio(x * x);
-        }
-        double complement = 0.5 - upperTail(y) + 0.5;
-        return x < 0 ? -complement : complement;
+        return erfOf(x, kernel(x));
     }
 
     /** erfc(x) = 1 − erf(x), with full relative precision for large positive x. */
     public static double erfc(double x) {
-        double y = Math.abs(x);
-        if (y <= 0.46875) {
-            return 0.5 - x * smallRatio(x * x) + 0.5;
-        }
-        double tail = upperTail(y);
-        return x < 0 ? 0.5 - tail + 1.5 : tail;
+        return erfcOf(x, kernel(x));
     }
 
     /**
@@ -62,16 +54,56 @@ public final class ErrorFunction {
      * the point where erf = ±1/2, so a window far out in a tail keeps its relative precision.
      */
     public static double difference(double x1, double x2) {
+        return difference(x1, x2, kernel(x1), kernel(x2));
+    }
+
+    /**
+     * The part of erf and erfc evaluated at x, from which both follow by at most two additions: x R1(x²)
+     * in the first interval, erfc(|x|) beyond. A caller that needs the error function at one argument
+     * for several differences (a window edge shared by two windows) evaluates it once.
+     */
+    public static double kernel(double x) {
+        double y = Math.abs(x);
+        return y <= SMALL ? x * smallRatio(x * x) : upperTail(y);
+    }
+
+    /**
+     * {@link #difference(double, double)} with the arguments' {@link #kernel}s {@code k1} and {@code k2}
+     * given: the same double.
+     */
+    public static double difference(double x1, double x2, double k1, double k2) {
         if (x1 > x2) {
-            return -difference(x2, x1);
+            return -difference(x2, x1, k2, k1);
         }
         if (x1 >= 0 && x2 > ERF_HALF_POINT) {
-            return erfc(x1) - erfc(x2);
+            return erfcOf(x1, k1) - erfcOf(x2, k2);
         }
         if (x2 <= 0 && x1 < -ERF_HALF_POINT) {
-            return erfc(-x2) - erfc(-x1);
+            return erfcOf(-x2, kernelOfNegated(x2, k2)) - erfcOf(-x1, kernelOfNegated(x1, k1));
         }
-        return erf(x2) - erf(x1);
+        return erfOf(x2, k2) - erfOf(x1, k1);
+    }
+
+    /** erf(x) from its kernel. */
+    private static double erfOf(double x, double kernel) {
+        if (Math.abs(x) <= SMALL) {
+            return kernel;
+        }
+        double complement = 0.5 - kernel + 0.5;
+        return x < 0 ? -complement : complement;
+    }
+
+    /** erfc(x) from its kernel. */
+    private static double erfcOf(double x, double kernel) {
+        if (Math.abs(x) <= SMALL) {
+            return 0.5 - kernel + 0.5;
+        }
+        return x < 0 ? 0.5 - kernel + 1.5 : kernel;
+    }
+
+    /** The kernel of −x from that of x: (−x) R1(x²) = −(x R1(x²)) exactly in the first interval, erfc(|x|) beyond. */
+    private static double kernelOfNegated(double x, double kernel) {
+        return Math.abs(x) <= SMALL ? -kernel : kernel;
     }
 
     /** R1(t) = P(t)/Q(t) of the first interval, t = x². */

@@ -29,6 +29,11 @@
  *   <li>PLA-9: {@link dev.sweepline.sim.plasma.InverseTrigonometry} gives asin and acos equal to the bit
  *       to {@code StrictMath}'s (fdlibm's e_asin.c and e_acos.c followed operation for operation, in
  *       Java so that they are inlined), for the split collector's arc breaks.</li>
+ *   <li>PLA-10: what the closed form evaluates once may serve again without changing a bit:
+ *       {@link dev.sweepline.sim.plasma.MaxwellianEdges} evaluates the error function and exp(-x²) once
+ *       per window edge (adjacent windows share theirs) and gives the same current and sensitivities as
+ *       the closed form window by window; a {@link dev.sweepline.sim.plasma.MaxwellianWindow} kept by a
+ *       current's evaluation serves the sensitivities of exactly that window (the same four speeds).</li>
  * </ol>
  *
  * <h2>How verified</h2>
@@ -40,7 +45,8 @@
  * allocation counter; PLA-8 by {@code ExpMinusOneTest} (a million seeded arguments over the whole
  * double range and the special values, compared bit for bit); PLA-9 by {@code InverseTrigonometryTest}
  * (two million seeded arguments over the domain, near ±1, near 0 and over every exponent, and the special
- * values, bit for bit).
+ * values, bit for bit); PLA-10 by {@code MaxwellianEdgesTest} and {@code RelativeSensitivitiesTest}
+ * (seeded tables, plasmas and windows, bit for bit against the closed form).
  *
  * <h2>Limits</h2>
  * In the far lower tail (v much below U) about log10(U/v) digits are lost to cancellation between the

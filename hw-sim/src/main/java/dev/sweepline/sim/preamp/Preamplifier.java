@@ -127,7 +127,12 @@ public final class Preamplifier {
 
     /** Noise-free ADC code of a current: pedestal + round(I / LSB), clipped to 0..top. */
     public int countsFor(double amps, int range) {
-        double c = pedestalCounts + Math.rint(amps / lsbAmps(range));
+        return counts(amps, lsbAmps(range));
+    }
+
+    /** {@link #countsFor} with the range's LSB given, amperes. */
+    private int counts(double amps, double lsbAmps) {
+        double c = pedestalCounts + Math.rint(amps / lsbAmps);
         if (!(c > 0)) {
             return 0;
         }
@@ -145,6 +150,24 @@ public final class Preamplifier {
      */
     public int sample(double amps, int range, double integrationSeconds, SplittableRandom rng) {
         return countsFor(amps + noiseAmpsRms(amps, range, integrationSeconds) * rng.nextGaussian(), range);
+    }
+
+    /**
+     * One sample of each quadrant, in order, in one range and integration: {@link #sample} of each
+     * current into {@code countsOut}, the same draws and the same codes, with the bandwidth, the Johnson
+     * noise and the LSB of the range evaluated once.
+     */
+    public void sample(double[] quadrantAmps, int range, double integrationSeconds, SplittableRandom rng,
+            int[] countsOut) {
+        double b = integrationBandwidthHz(integrationSeconds);
+        double johnson = johnsonNoiseAmpsRms(range, b);
+        double lsb = lsbAmps(range);
+        for (int q = 0; q < quadrantAmps.length; q++) {
+            double amps = quadrantAmps[q];
+            double shot = shotNoiseAmpsRms(amps, b);
+            double noise = Math.sqrt(shot * shot + johnson * johnson);
+            countsOut[q] = counts(amps + noise * rng.nextGaussian(), lsb);
+        }
     }
 
     /** Current of an ADC code in {@code range} (the inverse of the quantiser, for truth and tests), amperes. */

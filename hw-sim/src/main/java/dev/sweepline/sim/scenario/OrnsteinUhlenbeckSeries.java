@@ -13,8 +13,9 @@ import java.util.Arrays;
  * [memory]). The Gaussian g[k] is a pure function of (key, k) (SplitMix64 mixing of a counter,
  * Steele, Lea and Flood 2014 [memory], then Box-Muller), so any grid point can be recomputed from the
  * nearest checkpoint: the series keeps one checkpoint per block of {@value #BLOCK} points and one cached
- * block. Calls in time order cost one interpolation each (a block is filled once); calls in any other
- * order give the same values, at the cost of refilling a block.
+ * block, computed from its checkpoint as far as it has been read (a short run pays for the points it
+ * reads). Calls in time order cost one interpolation each (each point is computed once); calls in any
+ * other order give the same values, at the cost of recomputing a block.
  *
  * <p>Linear interpolation lowers the variance between grid points by at most (1 - a) / 2, 0.8 % at
  * step = tau/64; averaged over a step the rms is 0.9974 of the configured value.
@@ -24,14 +25,18 @@ final class OrnsteinUhlenbeckSeries {
     static final int STEPS_PER_TAU = 64;
     /** Grid points per block. */
     static final int BLOCK = 1024;
+    /** Room for the cached block's points at first (doubled as needed). */
+    private static final int INITIAL_ROOM = 64;
     private final long key;
     private final double stepSeconds;
     private final double a;
     private final double b;
     private double[] checkpoints = new double[16];
     private int checkpointCount;
-    private final double[] block = new double[BLOCK + 1];
+    /** The cached block's points 0..filled-1 (room grown as they are computed, up to BLOCK + 1). */
+    private double[] block = new double[INITIAL_ROOM];
     private long cachedBlock = -1;
+    private int filled;
 
     /** The process of correlation time {@code tauSeconds} for {@code key} ({@link SeedTree#fluctuation}). */
     OrnsteinUhlenbeckSeries(long key, double tauSeconds) {
@@ -55,38 +60,56 @@ final class OrnsteinUhlenbeckSeries {
         double frac = pos - k;
         long blockIndex = k / BLOCK;
         int i = (int) (k - blockIndex * BLOCK);
-        load(blockIndex);
+        load(blockIndex, i + 1);
         return block[i] + frac * (block[i + 1] - block[i]);
     }
 
     /** x at grid point {@code k}. */
     double atGridPoint(long k) {
         long blockIndex = k / BLOCK;
-        load(blockIndex);
-        return block[(int) (k - blockIndex * BLOCK)];
+        int i = (int) (k - blockIndex * BLOCK);
+        load(blockIndex, i);
+        return block[i];
     }
 
-    private void load(long blockIndex) {
-        if (blockIndex == cachedBlock) {
-            return;
+    /** Makes points 0..{@code last} of block {@code blockIndex} the cached ones. */
+    private void load(long blockIndex, int last) {
+        if (blockIndex != cachedBlock) {
+            // the checkpoints up to the block's own: each earlier block computed to its end
+            while (checkpointCount <= blockIndex) {
+                start(checkpointCount - 1);
+                extend(BLOCK);
+            }
+            start(blockIndex);
         }
-        while (checkpointCount <= blockIndex) {
-            fill(checkpointCount - 1);
+        if (last >= filled) {
+            extend(last);
         }
-        fill(blockIndex);
     }
 
-    /** Computes block {@code blockIndex} from its checkpoint, appending the next checkpoint if new. */
-    private void fill(long blockIndex) {
-        long k0 = blockIndex * BLOCK;
-        double x = checkpoints[(int) blockIndex];
-        block[0] = x;
-        for (int i = 1; i <= BLOCK; i++) {
+    /** Block {@code blockIndex} becomes the cached one, its point 0 (its checkpoint) computed. */
+    private void start(long blockIndex) {
+        block[0] = checkpoints[(int) blockIndex];
+        filled = 1;
+        cachedBlock = blockIndex;
+    }
+
+    /**
+     * Computes the cached block's points up to {@code last} from the last computed one, appending the next
+     * block's checkpoint when the block's end is reached for the first time.
+     */
+    private void extend(int last) {
+        if (last >= block.length) {
+            block = Arrays.copyOf(block, Math.min(BLOCK + 1, Math.max(2 * block.length, last + 1)));
+        }
+        long k0 = cachedBlock * BLOCK;
+        double x = block[filled - 1];
+        for (int i = filled; i <= last; i++) {
             x = a * x + b * gaussian(k0 + i);
             block[i] = x;
         }
-        cachedBlock = blockIndex;
-        if (checkpointCount == blockIndex + 1) {
+        filled = last + 1;
+        if (filled == BLOCK + 1 && checkpointCount == cachedBlock + 1) {
             if (checkpointCount == checkpoints.length) {
                 checkpoints = Arrays.copyOf(checkpoints, checkpoints.length * 2);
             }

@@ -35,7 +35,7 @@ class DecisionSeriesTest {
     @Test
     void shouldGrowItsArraysUpToTheCapacityKeepingEverySweep() {
         DecisionSeries series = new DecisionSeries(3000);
-        for (int i = 0; i < 2500; i++) { // beyond the first 1024 points made room for
+        for (int i = 0; i < 2500; i++) { // beyond the first 128 points made room for, several doublings
             series.add(sweep(i));
         }
         assertEquals(2500, series.points().size());

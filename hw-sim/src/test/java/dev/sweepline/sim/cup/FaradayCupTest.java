@@ -26,27 +26,34 @@ class FaradayCupTest {
     }
 
     @Test
-    void shouldGiveTheSameQuadrantsWithTheProtonsCurrentGiven() {
-        // the yardstick's path: the protons' current handed in (here the closed form itself, so the
-        // quadrants must be identical to the bit), the alphas' computed by the cup as always
+    void shouldSplitGivenPopulationCurrentsAsItsOwn() {
+        // the yardstick's path: every population's current handed in (here the closed form itself, so the
+        // quadrants must be identical to the bit), the split the cup's own; a population that does not flow
+        // into the cup (vz < 0) adds nothing, whatever current is handed in for it
         IonPopulation protons = IonPopulation.isotropic(IonSpecies.PROTON, 5e6, 20e3, -10e3, U, W_P);
         IonPopulation alphas = IonPopulation.isotropic(IonSpecies.ALPHA, 2e5, 30e3, -10e3, U, W_A);
-        PlasmaState plasma = PlasmaState.alongNormal(List.of(protons, alphas));
+        IonPopulation away = IonPopulation.isotropic(IonSpecies.PROTON, 1e6, 0, 0, -U, W_P);
+        PlasmaState plasma = PlasmaState.alongNormal(List.of(protons, alphas, away));
         double area = TestInstruments.DEMO_CUP.cup().effectiveAreaM2();
-        double q = IonSpecies.PROTON.chargeCoulomb();
-        double m = IonSpecies.PROTON.massKg();
         for (double low = 300; low < 3000; low *= 1.1) {
             double high = low * 1.05;
-            double protonAmps = ConvectedMaxwellian.windowCurrent(q, 5e6, area, U, plasma.normalThermalSpeed(protons),
-                    ConvectedMaxwellian.speedForVoltage(low, m, q), ConvectedMaxwellian.speedForVoltage(high, m, q));
+            double[] amps = {windowCurrent(plasma, protons, area, low, high), windowCurrent(plasma, alphas, area, low, high), 1.0};
             double[] plain = new double[4];
             double[] given = new double[4];
             cup.quadrantCurrents(plasma, low, high, plain);
-            cup.quadrantCurrents(plasma, low, high, protons, protonAmps, given);
+            cup.splitCurrents(plasma, amps, given);
             for (int k = 0; k < 4; k++) {
                 assertEquals(plain[k], given[k], 0, "window " + low + " V, quadrant " + k);
             }
         }
+    }
+
+    private static double windowCurrent(PlasmaState plasma, IonPopulation p, double area, double low, double high) {
+        double q = p.species().chargeCoulomb();
+        double m = p.species().massKg();
+        return ConvectedMaxwellian.windowCurrent(q, p.densityPerM3(), area, p.vzMetresPerSecond(),
+                plasma.normalThermalSpeed(p), ConvectedMaxwellian.speedForVoltage(low, m, q),
+                ConvectedMaxwellian.speedForVoltage(high, m, q));
     }
 
     @Test

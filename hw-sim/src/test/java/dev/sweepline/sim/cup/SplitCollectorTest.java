@@ -132,7 +132,7 @@ class SplitCollectorTest {
         double[] general = new double[4];
         for (double[] rr : radii) {
             SplitCollector fast = new SplitCollector(rr[0], rr[1]);
-            SplitCollector reference = new SplitCollector(rr[0], rr[1], true);
+            SplitCollector reference = new SplitCollector(rr[0], rr[1], SplitCollector.Path.TRIGONOMETRY);
             double room = (rr[1] - rr[0]) * (1 - 1e-5);
             for (int i = 0; i < 30_000; i++) {
                 double sx;
@@ -162,6 +162,63 @@ class SplitCollectorTest {
                 }
             }
         }
+    }
+
+    @Test
+    void shouldTakeTheQuadrantsOfTheArcsAroundTheOriginAsTheirMidpointsGiveThem() {
+        // an image shifted by less than half its radius takes each arc's quadrant from the half-axis it
+        // starts on: the same fractions, to the bit, as the midpoints formed from the arcs' ends (the
+        // collector's MIDPOINTS path, itself checked against the general path above); shifts up to and
+        // beyond R/2 (where the midpoints decide again) and near it, in every direction, for the demo cup
+        // and two other radius ratios
+        double[][] radii = {{R, RC}, {1.0, 1.000002}, {1.0, 7.0}};
+        SplittableRandom rng = new SplittableRandom(SEED + 4);
+        double[] got = new double[4];
+        double[] reference = new double[4];
+        for (double[] rr : radii) {
+            SplitCollector fast = new SplitCollector(rr[0], rr[1]);
+            SplitCollector midpoints = new SplitCollector(rr[0], rr[1], SplitCollector.Path.MIDPOINTS);
+            double room = Math.min(rr[0], (rr[1] - rr[0]) * (1 - 1e-5));
+            for (int i = 0; i < 50_000; i++) {
+                double length = i % 2 == 0 ? room * Math.sqrt(rng.nextDouble()) : rr[0] * rng.nextDouble(0.499, 0.501);
+                double angle = rng.nextDouble(2 * Math.PI);
+                double sx = Math.min(length, room) * Math.cos(angle);
+                double sy = Math.min(length, room) * Math.sin(angle);
+                fast.fractions(sx, sy, got);
+                midpoints.fractions(sx, sy, reference);
+                for (int q = 0; q < 4; q++) {
+                    assertEquals(Double.doubleToRawLongBits(reference[q]), Double.doubleToRawLongBits(got[q]),
+                            "Q" + (q + 1) + " at shift " + sx + ", " + sy + " (radii " + rr[0] + ", " + rr[1] + ")");
+                }
+            }
+        }
+    }
+
+    @Test
+    void shouldFindAnImageWellInsideByItsSquaredShiftOnlyWhereHypotDoes() {
+        // the squared-shift test skips hypot only where the definition (hypot + R < Rc (1 - 1e-6)) holds:
+        // shifts whose length lies within 0.2 % of the test's limit, where rounding could matter most, and
+        // the radius ratios of shouldGiveTheGeneralPathsFractionsForAnImageWellInside; and it takes the
+        // usual image (a shift of half the room) without hypot, as the fast path of the closed loop needs
+        double[][] radii = {{R, RC}, {1.0, 1.000002}, {1.0, 7.0}};
+        SplittableRandom rng = new SplittableRandom(SEED + 3);
+        int clearly = 0;
+        for (double[] rr : radii) {
+            SplitCollector collector = new SplitCollector(rr[0], rr[1]);
+            double limit = rr[1] * (1 - 1e-6) - rr[0];
+            assertTrue(collector.clearlyInside(0.5 * limit, 0), "half the room, radii " + rr[0] + ", " + rr[1]);
+            for (int i = 0; i < 100_000; i++) {
+                double length = limit * rng.nextDouble(0.998, 1.0);
+                double angle = rng.nextDouble(2 * Math.PI);
+                double sx = length * Math.cos(angle);
+                double sy = length * Math.sin(angle);
+                if (collector.clearlyInside(sx, sy)) {
+                    clearly++;
+                    assertTrue(collector.wellInside(Math.hypot(sx, sy)), "shift " + sx + ", " + sy);
+                }
+            }
+        }
+        assertTrue(clearly > 10_000, "shifts tested below the squared limit: " + clearly);
     }
 
     @Test

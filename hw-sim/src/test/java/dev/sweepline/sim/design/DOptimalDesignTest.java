@@ -11,6 +11,7 @@ import dev.sweepline.sim.cup.CupGeometry;
 import dev.sweepline.sim.cup.FaradayCup;
 import dev.sweepline.sim.hv.HvCalibration;
 import dev.sweepline.sim.hv.WindowVolts;
+import dev.sweepline.sim.plasma.ConvectedMaxwellian;
 import dev.sweepline.sim.plasma.IonPopulation;
 import dev.sweepline.sim.plasma.IonSpecies;
 import dev.sweepline.sim.plasma.PlasmaState;
@@ -85,6 +86,57 @@ class DOptimalDesignTest {
                     s += f[i][k] * inv[k][j];
                 }
                 assertEquals(i == j ? 1 : 0, s, 1e-12); // F F^-1 = I
+            }
+        }
+    }
+
+    @Test
+    void shouldGiveEachWindowTheInformationOfItsOwnClosedFormToTheBit() {
+        // the windows' information from the edges they share is, to the bit, that of each window evaluated
+        // on its own (the definition: the protons' sensitivities from ProtonInformation.gradient, their
+        // current n dI/dn and the alphas' closed-form current split by the cup, the range and the noise of
+        // the sum), averaged over the plasmas: protons with alphas drifting off the normal, a hot and a
+        // cold plasma, protons alone
+        IonSpecies a = IonSpecies.ALPHA;
+        List<PlasmaState> plasmas = List.of(
+                new PlasmaState(List.of(new IonPopulation(IonSpecies.PROTON, 5e6, 20e3, -10e3, 400e3, 40e3, 30e3),
+                        new IonPopulation(a, 2e5, 35e3, -5e3, 420e3, 30e3, 25e3)), 0.3, 0.1, 1),
+                new PlasmaState(List.of(new IonPopulation(IonSpecies.PROTON, 80e6, -5e3, 0, 300e3, 90e3, 90e3),
+                        new IonPopulation(a, 3e6, -5e3, 0, 310e3, 60e3, 60e3)), 0, 0, 1),
+                REFERENCE);
+        double[][][] got = new DOptimalDesign(cup, TestInstruments.DEMO_CUP.preamp(), windows)
+                .windowInformation(plasmas, STEP_SECONDS);
+        double[][][] expected = new double[windows.count()][3][3];
+        double[] g = new double[3];
+        double[] quadrants = new double[4];
+        double area = TestInstruments.DEMO_CUP.cup().effectiveAreaM2();
+        for (PlasmaState plasma : plasmas) {
+            IonPopulation p = ProtonInformation.protons(plasma);
+            double[] amps = new double[plasma.populations().size()];
+            for (int w = 0; w < windows.count(); w++) {
+                info.gradient(plasma, p, windows.lowVolts(w), windows.highVolts(w), g);
+                for (int i = 0; i < amps.length; i++) {
+                    IonPopulation pi = plasma.populations().get(i);
+                    double q = pi.species().chargeCoulomb();
+                    double m = pi.species().massKg();
+                    amps[i] = pi == p ? g[0] : ConvectedMaxwellian.windowCurrent(q, pi.densityPerM3(), area,
+                            pi.vzMetresPerSecond(), plasma.normalThermalSpeed(pi),
+                            ConvectedMaxwellian.speedForVoltage(windows.lowVolts(w), m, q),
+                            ConvectedMaxwellian.speedForVoltage(windows.highVolts(w), m, q));
+                }
+                cup.splitCurrents(plasma, amps, quadrants);
+                double total = quadrants[0] + quadrants[1] + quadrants[2] + quadrants[3];
+                double maxQ = Math.max(Math.max(quadrants[0], quadrants[1]), Math.max(quadrants[2], quadrants[3]));
+                int range = DOptimalDesign.rangeFor(TestInstruments.DEMO_CUP.preamp(), maxQ);
+                ProtonInformation.accumulate(expected[w], g, info.variance(total, range, STEP_SECONDS) * STEP_SECONDS, 1.0);
+            }
+        }
+        for (int w = 0; w < windows.count(); w++) {
+            for (int r = 0; r < 3; r++) {
+                for (int c = 0; c < 3; c++) {
+                    assertEquals(Double.doubleToRawLongBits(expected[w][r][c] / plasmas.size()),
+                            Double.doubleToRawLongBits(got[w][r][c]), "window " + w + ", element " + r + c);
+                }
             }
         }
     }

@@ -105,6 +105,25 @@ class PreamplifierTest {
     }
 
     @Test
+    void shouldSampleTheFourQuadrantsAsFourSingleSamples() {
+        // the reading of all quadrants at once is the single sample of each, in order, from the same stream
+        // (the method's contract: the same draws and the same codes), in every range, for currents from
+        // the noise floor to beyond full scale
+        double[] amps = {3e-13, 2e-11, 1.1e-9, 5e-8};
+        int[] got = new int[4];
+        for (int range = 0; range < DEMO.gainRanges(); range++) {
+            SplittableRandom a = new SplittableRandom(SEED + range);
+            SplittableRandom b = new SplittableRandom(SEED + range);
+            for (int i = 0; i < 100; i++) {
+                preamp.sample(amps, range, T_INT, a, got);
+                for (int q = 0; q < 4; q++) {
+                    assertEquals(preamp.sample(amps[q], range, T_INT, b), got[q], "range " + range + ", Q" + (q + 1));
+                }
+            }
+        }
+    }
+
+    @Test
     void shouldRepeatTheSameSamplesFromTheSameSeed() {
         // determinism: the model draws only from the caller's stream
         SplittableRandom a = new SplittableRandom(SEED);
