@@ -70,9 +70,29 @@ final class TuneCommand implements Callable<Integer> {
             + "side by side in the report (default: the recommended set and the set it is best compared with).")
     String compare;
 
+    @Option(names = "--jit", paramLabel = "c1|tiered", converter = JitModeConverter.class,
+            description = "The JVM's compilers: c1, the quick compiler alone (about half the CPU of a 100-run "
+            + "campaign, the same outputs), or tiered, the JVM's default (default: c1 from the command line).")
+    JitPolicy.Mode jit;
+
+    /** {@code --jit c1|tiered}, in lower case as the help prints them. */
+    static final class JitModeConverter implements CommandLine.ITypeConverter<JitPolicy.Mode> {
+        @Override
+        public JitPolicy.Mode convert(String value) {
+            return switch (value) {
+                case "c1" -> JitPolicy.Mode.C1;
+                case "tiered" -> JitPolicy.Mode.TIERED;
+                default -> throw new CommandLine.TypeConversionException("expected c1 or tiered, got '" + value + "'");
+            };
+        }
+    }
+
     @Override
     public Integer call() throws Exception {
         instrument.resolve();
+        if (!JitPolicy.apply(JitPolicy.effective(jit)) && jit != null) {
+            System.err.println("tune: --jit c1: this JVM takes no compiler directive; it compiles as it does by default");
+        }
         if (shards != null && !"auto".equals(shard)) {
             throw new CliException(ExitStatus.USAGE, "--shards " + shards + ": only with --shard auto");
         }

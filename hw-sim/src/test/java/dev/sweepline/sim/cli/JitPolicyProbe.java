@@ -1,0 +1,33 @@
+package dev.sweepline.sim.cli;
+
+/**
+ * A JVM for {@link JitPolicyTest}: applies the mode of its argument ({@code c1} or {@code tiered}), prints
+ * whether it is in force, then calls {@link #work} often enough for any compiler tier to take it.
+ */
+final class JitPolicyProbe {
+    /** Calls of {@link #work}: far above HotSpot's C2 threshold (Tier4InvocationThreshold 5000, [memory]). */
+    static final int CALLS = 300_000;
+
+    private JitPolicyProbe() {
+    }
+
+    /** A small hot method with a loop. */
+    static double work(double x) {
+        double s = 0;
+        for (int i = 0; i < 50; i++) {
+            s += Math.sqrt(x + i);
+        }
+        return s;
+    }
+
+    public static void main(String[] args) throws InterruptedException {
+        JitPolicy.Mode mode = "c1".equals(args[0]) ? JitPolicy.Mode.C1 : JitPolicy.Mode.TIERED;
+        System.out.println("applied " + JitPolicy.apply(mode));
+        double sum = 0;
+        for (int i = 0; i < CALLS; i++) {
+            sum += work(i);
+        }
+        System.out.println("sum " + sum);
+        Thread.sleep(300); // lets a queued compilation finish and print before the JVM exits
+    }
+}
