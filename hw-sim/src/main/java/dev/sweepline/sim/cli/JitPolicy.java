@@ -13,8 +13,10 @@ import javax.management.ObjectName;
  * each a closed loop through the flight software, the simulator and the ground's fitter: on HotSpot the
  * optimising compiler (C2) then spends about as much CPU recompiling that code (a size-3 and a size-6 fit
  * take turns through the same loops, and each turn deoptimises the last compilation) as the runs spend
- * running, so the quick compiler (C1) alone finishes a 100-run campaign in about half the CPU and a
- * 400-run one in about three quarters (figures: hw-sim/src/main/resources/campaigns/FORMAT.md, "Speed").
+ * running, so the quick compiler (C1) alone finishes a 100-run campaign in about two thirds of the CPU,
+ * and lets a second worker thread have the second core. Over many more runs C2's faster code pays back its
+ * compilations: from about {@link #C1_MAX_RUNS} runs on, the default stays tiered (figures:
+ * hw-sim/src/main/resources/campaigns/FORMAT.md, "Speed").
  * The outputs do not depend on it: Java's arithmetic is the same in every compiler tier (JLS §15.4, strict
  * floating point since Java 17).
  *
@@ -35,6 +37,13 @@ final class JitPolicy {
     /** The directive: every method, excluded from C2 (HotSpot's compiler-directives format, JEP 165). */
     static final String C1_ONLY_DIRECTIVE = "[ { match: \"*.*\", c2: { Exclude: true } } ]";
 
+    /**
+     * Runs up to which a process's campaign is run with C1 alone by default: the CPU of the two measured
+     * equal between 432 runs (C1 about 10 % less) and 1296 runs (C1 about 15 % more), near 600 (FORMAT.md,
+     * "Speed"; measured on a loaded 2-core machine, so a round figure).
+     */
+    static final long C1_MAX_RUNS = 600;
+
     /** The platform MBean of HotSpot's diagnostic commands. */
     private static final String DIAGNOSTIC_COMMANDS = "com.sun.management:type=DiagnosticCommand";
 
@@ -49,9 +58,15 @@ final class JitPolicy {
         ownsProcess = true;
     }
 
-    /** The mode a command applies: {@code given}, else C1 in the command line's own process, else the default. */
-    static Mode effective(Mode given) {
-        return given != null ? given : ownsProcess ? Mode.C1 : Mode.TIERED;
+    /**
+     * The mode a command of {@code runs} runs applies: {@code given}, else C1 in the command line's own process
+     * for at most {@link #C1_MAX_RUNS} runs, else the JVM's default.
+     */
+    static Mode effective(Mode given, long runs) {
+        if (given != null) {
+            return given;
+        }
+        return ownsProcess && runs <= C1_MAX_RUNS ? Mode.C1 : Mode.TIERED;
     }
 
     /**

@@ -71,8 +71,9 @@ final class TuneCommand implements Callable<Integer> {
     String compare;
 
     @Option(names = "--jit", paramLabel = "c1|tiered", converter = JitModeConverter.class,
-            description = "The JVM's compilers: c1, the quick compiler alone (about half the CPU of a 100-run "
-            + "campaign, the same outputs), or tiered, the JVM's default (default: c1 from the command line).")
+            description = "The JVM's compilers: c1, the quick compiler alone (about two thirds of the CPU of a "
+            + "100-run campaign, the same outputs), or tiered, the JVM's default (default: c1 up to "
+            + JitPolicy.C1_MAX_RUNS + " runs, then tiered).")
     JitPolicy.Mode jit;
 
     /** {@code --jit c1|tiered}, in lower case as the help prints them. */
@@ -90,9 +91,6 @@ final class TuneCommand implements Callable<Integer> {
     @Override
     public Integer call() throws Exception {
         instrument.resolve();
-        if (!JitPolicy.apply(JitPolicy.effective(jit)) && jit != null) {
-            System.err.println("tune: --jit c1: this JVM takes no compiler directive; it compiles as it does by default");
-        }
         if (shards != null && !"auto".equals(shard)) {
             throw new CliException(ExitStatus.USAGE, "--shards " + shards + ": only with --shard auto");
         }
@@ -105,6 +103,9 @@ final class TuneCommand implements Callable<Integer> {
         }
         int[] pair = comparePair(compare, spec);
         CampaignIdentity identity = CampaignIdentity.of(spec, campaignOctets(campaign, instrument.given()), codeVersion(), slice);
+        if (!JitPolicy.apply(JitPolicy.effective(jit, identity.runs())) && jit != null) {
+            System.err.println("tune: --jit c1: this JVM takes no compiler directive; it compiles as it does by default");
+        }
         OutputFolder.create(out);
         claim(out, identity);
         System.out.printf(Locale.ROOT, "campaign %s: %d sets x %d runs of %.0f s, shard %s, %d threads%n",

@@ -2,7 +2,8 @@ package dev.sweepline.sim.cli;
 
 /**
  * A JVM for {@link JitPolicyTest}: applies the mode of its argument ({@code c1} or {@code tiered}), prints
- * whether it is in force, then calls {@link #work} often enough for any compiler tier to take it.
+ * whether it is in force, then calls {@link #work} often enough for any compiler tier to take it; with
+ * {@code default}, prints the mode the command line's own process chooses for a campaign's size.
  */
 final class JitPolicyProbe {
     /** Calls of {@link #work}: far above HotSpot's C2 threshold (Tier4InvocationThreshold 5000, [memory]). */
@@ -21,6 +22,13 @@ final class JitPolicyProbe {
     }
 
     public static void main(String[] args) throws InterruptedException {
+        if ("default".equals(args[0])) {
+            JitPolicy.ownProcess(); // as BenchMain.main does
+            for (long runs : new long[] {JitPolicy.C1_MAX_RUNS, JitPolicy.C1_MAX_RUNS + 1}) {
+                System.out.println("default " + runs + " " + JitPolicy.effective(null, runs));
+            }
+            return;
+        }
         JitPolicy.Mode mode = "c1".equals(args[0]) ? JitPolicy.Mode.C1 : JitPolicy.Mode.TIERED;
         System.out.println("applied " + JitPolicy.apply(mode));
         double sum = 0;

@@ -39,11 +39,20 @@ class JitPolicyTest {
     }
 
     @Test
+    void shouldChooseC1ForASmallCampaignOfTheCommandLinesOwnProcess() throws IOException, InterruptedException {
+        // the probe's "default" argument: BenchMain.main's ownership, then the default mode for 600 and 601 runs
+        String out = probe("default");
+        assertTrue(out.contains("default " + JitPolicy.C1_MAX_RUNS + " C1"), out);
+        assertTrue(out.contains("default " + (JitPolicy.C1_MAX_RUNS + 1) + " TIERED"), out);
+    }
+
+    @Test
     void shouldChooseC1OnlyForTheCommandLinesOwnProcess() {
         // this test JVM is not the command line's (BenchMain.main never ran here): the JVM's default
-        assertEquals(JitPolicy.Mode.TIERED, JitPolicy.effective(null));
-        assertEquals(JitPolicy.Mode.C1, JitPolicy.effective(JitPolicy.Mode.C1));
-        assertEquals(JitPolicy.Mode.TIERED, JitPolicy.effective(JitPolicy.Mode.TIERED));
+        assertEquals(JitPolicy.Mode.TIERED, JitPolicy.effective(null, 108));
+        // a mode given is the mode applied, whatever the campaign's size
+        assertEquals(JitPolicy.Mode.C1, JitPolicy.effective(JitPolicy.Mode.C1, 1_000_000));
+        assertEquals(JitPolicy.Mode.TIERED, JitPolicy.effective(JitPolicy.Mode.TIERED, 108));
     }
 
     private static String probe(String mode) throws IOException, InterruptedException {
