@@ -15,7 +15,8 @@ import javax.management.ObjectName;
  * take turns through the same loops, and each turn deoptimises the last compilation) as the runs spend
  * running, so the quick compiler (C1) alone finishes a 100-run campaign in about two thirds of the CPU,
  * and lets a second worker thread have the second core. Over many more runs C2's faster code pays back its
- * compilations: from about {@link #C1_MAX_RUNS} runs on, the default stays tiered (figures:
+ * compilations: from about {@link #C1_MAX_RUNS} runs on the default stays tiered, and so it does with fewer
+ * workers than cores, where C2 compiles on a core no worker wanted (figures:
  * hw-sim/src/main/resources/campaigns/FORMAT.md, "Speed").
  * The outputs do not depend on it: Java's arithmetic is the same in every compiler tier (JLS §15.4, strict
  * floating point since Java 17).
@@ -59,14 +60,16 @@ final class JitPolicy {
     }
 
     /**
-     * The mode a command of {@code runs} runs applies: {@code given}, else C1 in the command line's own process
-     * for at most {@link #C1_MAX_RUNS} runs, else the JVM's default.
+     * The mode a command of {@code runs} runs on {@code threads} workers applies: {@code given}, else C1 in the
+     * command line's own process when the workers take every one of the {@code cores} (so C2 would take a
+     * worker's core, not an idle one) and the campaign has at most {@link #C1_MAX_RUNS} runs, else the JVM's
+     * default.
      */
-    static Mode effective(Mode given, long runs) {
+    static Mode effective(Mode given, long runs, int threads, int cores) {
         if (given != null) {
             return given;
         }
-        return ownsProcess && runs <= C1_MAX_RUNS ? Mode.C1 : Mode.TIERED;
+        return ownsProcess && threads >= cores && runs <= C1_MAX_RUNS ? Mode.C1 : Mode.TIERED;
     }
 
     /**

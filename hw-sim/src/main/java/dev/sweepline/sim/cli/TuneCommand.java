@@ -72,8 +72,8 @@ final class TuneCommand implements Callable<Integer> {
 
     @Option(names = "--jit", paramLabel = "c1|tiered", converter = JitModeConverter.class,
             description = "The JVM's compilers: c1, the quick compiler alone (about two thirds of the CPU of a "
-            + "100-run campaign, the same outputs), or tiered, the JVM's default (default: c1 up to "
-            + JitPolicy.C1_MAX_RUNS + " runs, then tiered).")
+            + "100-run campaign, the same outputs), or tiered, the JVM's default (default: c1 when the threads take every "
+            + "core and the campaign has at most " + JitPolicy.C1_MAX_RUNS + " runs, else tiered).")
     JitPolicy.Mode jit;
 
     /** {@code --jit c1|tiered}, in lower case as the help prints them. */
@@ -103,7 +103,8 @@ final class TuneCommand implements Callable<Integer> {
         }
         int[] pair = comparePair(compare, spec);
         CampaignIdentity identity = CampaignIdentity.of(spec, campaignOctets(campaign, instrument.given()), codeVersion(), slice);
-        if (!JitPolicy.apply(JitPolicy.effective(jit, identity.runs())) && jit != null) {
+        if (!JitPolicy.apply(JitPolicy.effective(jit, identity.runs(), threads,
+                Runtime.getRuntime().availableProcessors())) && jit != null) {
             System.err.println("tune: --jit c1: this JVM takes no compiler directive; it compiles as it does by default");
         }
         OutputFolder.create(out);

@@ -24,8 +24,10 @@ final class JitPolicyProbe {
     public static void main(String[] args) throws InterruptedException {
         if ("default".equals(args[0])) {
             JitPolicy.ownProcess(); // as BenchMain.main does
-            for (long runs : new long[] {JitPolicy.C1_MAX_RUNS, JitPolicy.C1_MAX_RUNS + 1}) {
-                System.out.println("default " + runs + " " + JitPolicy.effective(null, runs));
+            long[][] cases = {{JitPolicy.C1_MAX_RUNS, 2}, {JitPolicy.C1_MAX_RUNS + 1, 2}, {JitPolicy.C1_MAX_RUNS, 1}};
+            for (long[] c : cases) {
+                System.out.println("default " + c[0] + " runs " + c[1] + " of 2 cores "
+                        + JitPolicy.effective(null, c[0], (int) c[1], 2));
             }
             return;
         }

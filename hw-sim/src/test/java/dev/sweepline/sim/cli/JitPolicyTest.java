@@ -41,18 +41,20 @@ class JitPolicyTest {
     @Test
     void shouldChooseC1ForASmallCampaignOfTheCommandLinesOwnProcess() throws IOException, InterruptedException {
         // the probe's "default" argument: BenchMain.main's ownership, then the default mode for 600 and 601 runs
+        // on 2 workers of 2 cores, and for 600 runs on 1 worker of 2 cores (C2 would have the idle core)
         String out = probe("default");
-        assertTrue(out.contains("default " + JitPolicy.C1_MAX_RUNS + " C1"), out);
-        assertTrue(out.contains("default " + (JitPolicy.C1_MAX_RUNS + 1) + " TIERED"), out);
+        assertTrue(out.contains("default " + JitPolicy.C1_MAX_RUNS + " runs 2 of 2 cores C1"), out);
+        assertTrue(out.contains("default " + (JitPolicy.C1_MAX_RUNS + 1) + " runs 2 of 2 cores TIERED"), out);
+        assertTrue(out.contains("default " + JitPolicy.C1_MAX_RUNS + " runs 1 of 2 cores TIERED"), out);
     }
 
     @Test
     void shouldChooseC1OnlyForTheCommandLinesOwnProcess() {
         // this test JVM is not the command line's (BenchMain.main never ran here): the JVM's default
-        assertEquals(JitPolicy.Mode.TIERED, JitPolicy.effective(null, 108));
-        // a mode given is the mode applied, whatever the campaign's size
-        assertEquals(JitPolicy.Mode.C1, JitPolicy.effective(JitPolicy.Mode.C1, 1_000_000));
-        assertEquals(JitPolicy.Mode.TIERED, JitPolicy.effective(JitPolicy.Mode.TIERED, 108));
+        assertEquals(JitPolicy.Mode.TIERED, JitPolicy.effective(null, 108, 2, 2));
+        // a mode given is the mode applied, whatever the campaign's size and threads
+        assertEquals(JitPolicy.Mode.C1, JitPolicy.effective(JitPolicy.Mode.C1, 1_000_000, 1, 2));
+        assertEquals(JitPolicy.Mode.TIERED, JitPolicy.effective(JitPolicy.Mode.TIERED, 108, 2, 2));
     }
 
     private static String probe(String mode) throws IOException, InterruptedException {
