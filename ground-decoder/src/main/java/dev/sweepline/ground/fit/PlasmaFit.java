@@ -48,7 +48,12 @@ public record PlasmaFit(SpeciesMoments protons, SpeciesMoments alphas, FlowAngle
 
     /** True unless a failure flag is set. */
     public boolean ok() {
-        return flags.stream().noneMatch(FitFlag::failure);
+        for (FitFlag f : flags) {
+            if (f.failure()) {
+                return false;
+            }
+        }
+        return true;
     }
 
     /** True when the joint proton + alpha model was fitted. */

@@ -16,6 +16,7 @@ public final class BenchMain implements Runnable {
 
     /** Runs the command line and exits with its status. */
     public static void main(String[] args) {
+        JitPolicy.ownProcess();
         System.exit(commandLine().execute(args));
     }
 

@@ -70,6 +70,24 @@ final class TuneCommand implements Callable<Integer> {
             + "side by side in the report (default: the recommended set and the set it is best compared with).")
     String compare;
 
+    @Option(names = "--jit", paramLabel = "c1|tiered", converter = JitModeConverter.class,
+            description = "The JVM's compilers: c1, the quick compiler alone (about two thirds of the CPU of a "
+            + "100-run campaign, the same outputs), or tiered, the JVM's default (default: c1 when the threads take every "
+            + "core and the campaign has at most " + JitPolicy.C1_MAX_RUNS + " runs, else tiered).")
+    JitPolicy.Mode jit;
+
+    /** {@code --jit c1|tiered}, in lower case as the help prints them. */
+    static final class JitModeConverter implements CommandLine.ITypeConverter<JitPolicy.Mode> {
+        @Override
+        public JitPolicy.Mode convert(String value) {
+            return switch (value) {
+                case "c1" -> JitPolicy.Mode.C1;
+                case "tiered" -> JitPolicy.Mode.TIERED;
+                default -> throw new CommandLine.TypeConversionException("expected c1 or tiered, got '" + value + "'");
+            };
+        }
+    }
+
     @Override
     public Integer call() throws Exception {
         instrument.resolve();
@@ -85,6 +103,10 @@ final class TuneCommand implements Callable<Integer> {
         }
         int[] pair = comparePair(compare, spec);
         CampaignIdentity identity = CampaignIdentity.of(spec, campaignOctets(campaign, instrument.given()), codeVersion(), slice);
+        if (!JitPolicy.apply(JitPolicy.effective(jit, identity.runs(), threads,
+                Runtime.getRuntime().availableProcessors())) && jit != null) {
+            System.err.println("tune: --jit c1: this JVM takes no compiler directive; it compiles as it does by default");
+        }
         OutputFolder.create(out);
         claim(out, identity);
         System.out.printf(Locale.ROOT, "campaign %s: %d sets x %d runs of %.0f s, shard %s, %d threads%n",

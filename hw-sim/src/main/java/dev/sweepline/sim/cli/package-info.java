@@ -8,5 +8,7 @@
  * a budget that does not fit). Every error is one line on stderr. Verified: BenchCommandLineTest,
  * BenchCommandLineErrorTest, ExitStatusAgreementTest, ConsoleProgressTest (plain progress lines when
  * standard output is not a terminal), ServeOverTcpTest (a TCP server serves one client after another).
+ * {@code tune} runs with the JIT's quick compiler alone unless {@code --jit tiered} ({@link
+ * dev.sweepline.sim.cli.JitPolicy}; verified in a JVM of its own by JitPolicyTest).
  */
 package dev.sweepline.sim.cli;

@@ -42,4 +42,21 @@ class RobustCrlbRatioTest {
         assertFalse(NonStationarity.flagged(Double.NaN, 10)); // failed fit: not judged
         assertFalse(NonStationarity.flagged(100, 0)); // no degrees of freedom: not judged
     }
+
+    @Test
+    void shouldJudgeEachFitAsTheUncachedRuleDoes() {
+        // the ground check keeps each dof's threshold: the same decision as NonStationarity.flagged just
+        // below, at and just above the threshold (Math.nextDown/nextUp), twice (computed, then kept)
+        for (int pass = 0; pass < 2; pass++) {
+            for (int dof : new int[] {1, 2, 7, 40, 133, GroundCheck.CACHED_DOF, GroundCheck.CACHED_DOF + 1}) {
+                double t = NonStationarity.threshold(dof);
+                for (double chi2 : new double[] {Math.nextDown(t), t, Math.nextUp(t), Double.NaN}) {
+                    assertEquals(NonStationarity.flagged(chi2, dof), GroundCheck.nonStationary(chi2, dof),
+                            "dof " + dof + ", chi2/nu " + chi2);
+                }
+            }
+        }
+        assertTrue(GroundCheck.nonStationary(3.0, 10)); // 3.0 > 2.9588, as above
+        assertFalse(GroundCheck.nonStationary(100, 0)); // no degrees of freedom: not judged
+    }
 }

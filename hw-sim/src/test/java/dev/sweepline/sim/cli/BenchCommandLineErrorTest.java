@@ -143,6 +143,7 @@ class BenchCommandLineErrorTest {
         "run|--minutes|-1|must be above 0, got -1",
         "run|--minutes|NaN|'NaN' is not a finite number",
         "tune|--threads|0|must be 1 to 2147483647, got 0",
+        "tune|--jit|c2|expected c1 or tiered, got 'c2'",
         "budget|--threads|0|must be 1 to 2147483647, got 0",
         "serve|--baud|0|must be 1 to 2147483647, got 0",
         "serve|--speed|-1|must be 0 or more, got -1",

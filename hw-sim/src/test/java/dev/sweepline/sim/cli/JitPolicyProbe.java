@@ -1,0 +1,43 @@
+package dev.sweepline.sim.cli;
+
+/**
+ * A JVM for {@link JitPolicyTest}: applies the mode of its argument ({@code c1} or {@code tiered}), prints
+ * whether it is in force, then calls {@link #work} often enough for any compiler tier to take it; with
+ * {@code default}, prints the mode the command line's own process chooses for a campaign's size.
+ */
+final class JitPolicyProbe {
+    /** Calls of {@link #work}: far above HotSpot's C2 threshold (Tier4InvocationThreshold 5000, [memory]). */
+    static final int CALLS = 300_000;
+
+    private JitPolicyProbe() {
+    }
+
+    /** A small hot method with a loop. */
+    static double work(double x) {
+        double s = 0;
+        for (int i = 0; i < 50; i++) {
+            s += Math.sqrt(x + i);
+        }
+        return s;
+    }
+
+    public static void main(String[] args) throws InterruptedException {
+        if ("default".equals(args[0])) {
+            JitPolicy.ownProcess(); // as BenchMain.main does
+            long[][] cases = {{JitPolicy.C1_MAX_RUNS, 2}, {JitPolicy.C1_MAX_RUNS + 1, 2}, {JitPolicy.C1_MAX_RUNS, 1}};
+            for (long[] c : cases) {
+                System.out.println("default " + c[0] + " runs " + c[1] + " of 2 cores "
+                        + JitPolicy.effective(null, c[0], (int) c[1], 2));
+            }
+            return;
+        }
+        JitPolicy.Mode mode = "c1".equals(args[0]) ? JitPolicy.Mode.C1 : JitPolicy.Mode.TIERED;
+        System.out.println("applied " + JitPolicy.apply(mode));
+        double sum = 0;
+        for (int i = 0; i < CALLS; i++) {
+            sum += work(i);
+        }
+        System.out.println("sum " + sum);
+        Thread.sleep(300); // lets a queued compilation finish and print before the JVM exits
+    }
+}
