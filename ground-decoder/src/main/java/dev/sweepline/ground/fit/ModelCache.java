@@ -15,6 +15,9 @@ public final class ModelCache {
     /** Most recently used first. */
     private final PlasmaModel[] protons = new PlasmaModel[SIZE];
     private final PlasmaModel[] joint = new PlasmaModel[SIZE];
+    /** The drift models (interleaved spectra), kept apart so that they never push out the others. */
+    private final PlasmaModel[] driftProtons = new PlasmaModel[SIZE];
+    private final PlasmaModel[] driftJoint = new PlasmaModel[SIZE];
 
     /** The model of windows {@code low}–{@code high} on area {@code areaM2}, with alphas or without. */
     public PlasmaModel model(double[] low, double[] high, double areaM2, boolean withAlphas) {
@@ -31,6 +34,34 @@ public final class ModelCache {
         }
         if (m == null) {
             m = new PlasmaModel(low, high, areaM2, withAlphas);
+        }
+        System.arraycopy(kept, 0, kept, 1, found);
+        kept[0] = m;
+        return m;
+    }
+
+    /**
+     * The model of windows {@code low}–{@code high} read at the sweep fractions {@code stepFraction}, with ΔU
+     * ({@link PlasmaModel#PlasmaModel(double[], double[], double, boolean, double[])}); {@code stepFraction}
+     * null gives {@link #model(double[], double[], double, boolean)}.
+     */
+    public PlasmaModel model(double[] low, double[] high, double areaM2, boolean withAlphas, double[] stepFraction) {
+        if (stepFraction == null) {
+            return model(low, high, areaM2, withAlphas);
+        }
+        PlasmaModel[] kept = withAlphas ? driftJoint : driftProtons;
+        int found = SIZE - 1;
+        PlasmaModel m = null;
+        for (int i = 0; i < SIZE && kept[i] != null; i++) {
+            if (kept[i].sameWindows(low, high, stepFraction)) {
+                found = i;
+                m = kept[i];
+                m.setArea(areaM2);
+                break;
+            }
+        }
+        if (m == null) {
+            m = new PlasmaModel(low, high, areaM2, withAlphas, stepFraction);
         }
         System.arraycopy(kept, 0, kept, 1, found);
         kept[0] = m;
