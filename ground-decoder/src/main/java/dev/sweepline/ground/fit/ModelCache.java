@@ -21,23 +21,7 @@ public final class ModelCache {
 
     /** The model of windows {@code low}–{@code high} on area {@code areaM2}, with alphas or without. */
     public PlasmaModel model(double[] low, double[] high, double areaM2, boolean withAlphas) {
-        PlasmaModel[] kept = withAlphas ? joint : protons;
-        int found = SIZE - 1;
-        PlasmaModel m = null;
-        for (int i = 0; i < SIZE && kept[i] != null; i++) {
-            if (kept[i].sameWindows(low, high)) {
-                found = i;
-                m = kept[i];
-                m.setArea(areaM2);
-                break;
-            }
-        }
-        if (m == null) {
-            m = new PlasmaModel(low, high, areaM2, withAlphas);
-        }
-        System.arraycopy(kept, 0, kept, 1, found);
-        kept[0] = m;
-        return m;
+        return kept(withAlphas ? joint : protons, low, high, areaM2, withAlphas, null);
     }
 
     /**
@@ -49,7 +33,12 @@ public final class ModelCache {
         if (stepFraction == null) {
             return model(low, high, areaM2, withAlphas);
         }
-        PlasmaModel[] kept = withAlphas ? driftJoint : driftProtons;
+        return kept(withAlphas ? driftJoint : driftProtons, low, high, areaM2, withAlphas, stepFraction);
+    }
+
+    /** The model of {@code kept} for these windows (moved to the area), or a new one; made most recently used. */
+    private static PlasmaModel kept(PlasmaModel[] kept, double[] low, double[] high, double areaM2, boolean withAlphas,
+            double[] stepFraction) {
         int found = SIZE - 1;
         PlasmaModel m = null;
         for (int i = 0; i < SIZE && kept[i] != null; i++) {
