@@ -123,7 +123,7 @@
  *       (the bound of the 4-parameter model) and the mean reduced χ² is 1 within 4 standard errors, where the fit
  *       without ΔU gives 53; the ICD's step rule matches a walk of the even offsets out and the odd ones back
  *       ({@code SpeedDriftFitTest}); on the narrow near-Sun bands of F13 read in the interleaved order with a
- *       ramp of 0–2 km/s the drift runs (62 of 183) agree with Hipparchus' optimiser to the bit, by F13's checks
+ *       ramp of 0–2 km/s the drift runs (60 of 183) agree with Hipparchus' optimiser to the bit, by F13's checks
  *       ({@code LevenbergMarquardtAgreementTest}). In closed loop (hw-sim {@code InterleavedDriftTest}) a linear ramp's ΔU is
  *       recovered and fast-wind held still gives ΔU consistent with 0.</li>
  * </ol>

@@ -143,10 +143,10 @@ class LevenbergMarquardtAgreementTest {
             PlasmaFit o = own.fit(spectra.get(k));
             assertEquals(r.flags(), o.flags(), "spectrum " + k);
         }
-        System.out.printf("%s: %d runs (%d joint), %d within %.0e relative outright, worst relative %.2e; %d without"
+        System.out.printf("%s: %d runs (%d joint, %d with the drift), %d within %.0e relative outright, worst relative %.2e; %d without"
                 + " a covariance, %d where both fail; joint runs without alphas %d, minima with the alphas faster %d,"
                 + " slower %d; Hipparchus' point from the tight run's at most %.2e σ, %.2f of the ftol bound%n", label,
-                counts[0], counts[2], counts[1], RELATIVE, worst[0], counts[3], counts[4], counts[5], counts[6], counts[7],
+                counts[0], counts[2], counts[8], counts[1], RELATIVE, worst[0], counts[3], counts[4], counts[5], counts[6], counts[7],
                 worst[1], worst[2]);
         assertEquals(counts[0], counts[1], "runs within 1e-9 outright");
         return counts;
