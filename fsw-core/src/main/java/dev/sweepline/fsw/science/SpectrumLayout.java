@@ -13,7 +13,7 @@ import dev.sweepline.fsw.octets.BigEndian;
  * +--------+----------+------+------+-------+--------+---------+-------+-------+-------+---------+
  * | 0x82   | instr id | w    | mode | flags | sweep  | table id| first | count | peak  | periods |
  * +--------+----------+------+------+-------+--------+---------+-------+-------+-------+---------+
- * flags: bit 7 stepped downward, bit 6 table changed, bits 5..0 zero
+ * flags: bit 7 stepped downward, bit 6 table changed, bit 5 interleaved order, bits 4..0 zero
  * then: gain tags ⌈c/4⌉ (2 bits a window, MSB first) | saturation ⌈c/8⌉ | compression (1) |
  *       4 × [ Lq (2) | Lq octets of quadrant q's c samples of w bits ]
  * </pre>
@@ -61,6 +61,11 @@ public final class SpectrumLayout {
     public static final int FLAG_DESCENDING = 0x80;
     /** Flag bit 6: the first sweep flown with a newly applied table. */
     public static final int FLAG_TABLE_CHANGED = 0x40;
+    /**
+     * Flag bit 5: the sweep stepped in the interleaved focus order (sweep design note R22): the even offsets
+     * from its starting end outward, then the odd ones back.
+     */
+    public static final int FLAG_INTERLEAVED = 0x20;
     /** Peak field value when the sweep held no valid peak. */
     public static final int NO_PEAK = 0xFFFF;
     /** Compression octet: CCSDS 121.0-B (telemetry ICD §4). */

@@ -68,7 +68,7 @@ public final class SpectrumPacker {
 
     /**
      * Writes the user data of {@code s} at {@code offset}; {@code flags} may carry
-     * {@link SpectrumLayout#FLAG_TABLE_CHANGED} (the descending flag comes from the spectrum).
+     * {@link SpectrumLayout#FLAG_TABLE_CHANGED} (the descending and interleaved flags come from the spectrum).
      *
      * @return octets written
      */
@@ -78,7 +78,9 @@ public final class SpectrumPacker {
         layout.wrap(out, offset)
                 .instrument(instrumentId, sampleBits)
                 .modeAndFlags(s.mode().icdCode(),
-                        (s.ascending() ? 0 : SpectrumLayout.FLAG_DESCENDING) | (flags & SpectrumLayout.FLAG_TABLE_CHANGED))
+                        (s.ascending() ? 0 : SpectrumLayout.FLAG_DESCENDING)
+                                | (s.interleaved() ? SpectrumLayout.FLAG_INTERLEAVED : 0)
+                                | (flags & SpectrumLayout.FLAG_TABLE_CHANGED))
                 .sweep((int) s.sweepNumber(), tableId)
                 .windows(s.firstWindow(), c, peak, integrationPeriods);
         if (s.supportCount() > 0) {

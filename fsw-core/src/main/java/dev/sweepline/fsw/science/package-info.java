@@ -18,6 +18,10 @@
  *     on no other. Verified: {@code TableChangedFlagTest}.</li>
  * <li>S4 Nothing is allocated per spectrum: buffers are sized at construction for 256 windows. Verified:
  *     {@code FlightSoftwareAllocationTest}, JMH {@code SpectrumPackingBenchmark -prof gc}.</li>
+ * <li>S5 The interleaved flag (bit 5) is set on a spectrum stepped in the interleaved focus order (sweep
+ *     design note R22) and on no other, from the spectrum alone; it changes no other octet. Verified:
+ *     {@code InterleavedFlagTest}; the ICD's step rule against the scheduler's steps, {@code InterleavedOrderTest};
+ *     read by the ground in closed loop, hw-sim {@code InterleavedDriftTest}.</li>
  * </ol>
  */
 package dev.sweepline.fsw.science;

@@ -43,6 +43,7 @@ public final class Spectrum {
     private int count;
     private int firstWindow;
     private boolean ascending;
+    private boolean interleaved;
 
     private boolean peakValid;
     private int peakIndex = -1;
@@ -95,6 +96,14 @@ public final class Spectrum {
     /** True when the sweep stepped upward in window index. */
     public boolean ascending() {
         return ascending;
+    }
+
+    /**
+     * True when the sweep stepped in the interleaved focus order (sweep design note R22, {@code
+     * SweepScheduler.interleavedOffset}): the even offsets from its starting end outward, then the odd ones back.
+     */
+    public boolean interleaved() {
+        return interleaved;
     }
 
     /** Window index of entry {@code i}. */
@@ -217,6 +226,11 @@ public final class Spectrum {
         supportCount = k + 1;
     }
 
+    /** Marks the sweep as stepped in the interleaved order (by the scheduler, after {@link #begin}). */
+    void interleaved(boolean on) {
+        interleaved = on;
+    }
+
     /** Sets the sweep's dwell (by the scheduler, after {@link #begin}). */
     void integrationPeriods(int periods) {
         integrationPeriods = periods;
@@ -229,6 +243,7 @@ public final class Spectrum {
         this.firstWindow = firstWindow;
         this.count = count;
         this.ascending = ascending;
+        this.interleaved = false;
         this.startMicros = startMicros;
         this.endMicros = startMicros;
         this.supportCount = 0;

@@ -202,6 +202,7 @@ public final class SweepScheduler {
         awaitingWindow = NO_WINDOW;
         building.begin(sweepNumber + 1, mode, first, sweepSteps, sweepAscending, nowMicros);
         building.integrationPeriods(sweepPeriods);
+        building.interleaved(sweepInterleaved);
         for (int k = 0; k < supportCount; k++) {
             building.support(k, supportWindow[k] - first, supportPeriods);
         }

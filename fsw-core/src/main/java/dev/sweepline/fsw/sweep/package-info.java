@@ -140,8 +140,9 @@
  *     ones back ({@code SweepScheduler.interleavedOffset}): neighbouring windows 2i and 2i + 1 are read at
  *     steps i and n − 1 − i, so a wind drifting during the sweep reads, to first order, as the wind at
  *     mid-sweep, and no rail change exceeds two windows (each step's settle is its own, R4). Surveys stay
- *     monotonic. The spectrum packet is in window order either way. <i>InterleavedOrderTest; hw-sim
- *     DesignStyleRunTest (the ground's errors).</i></li>
+ *     monotonic. The spectrum packet is in window order either way, flagged interleaved (telemetry ICD §4
+ *     flags bit 5) so that the ground can fit the speed's change over the sweep. <i>InterleavedOrderTest; hw-sim
+ *     DesignStyleRunTest (the ground's errors), InterleavedDriftTest (the ground's drift fit).</i></li>
  * <li><b>R23 Support dwell (opt-in).</b> With {@code focusStyle} bit 2 set (4..7, with either band and
  *     either order) every window of a focus sweep dwells {@code focusFloorPeriods}, and three support
  *     windows (the low flank, the refined peak and the high flank of the peak the band was chosen from,

@@ -7,6 +7,7 @@ import dev.sweepline.fsw.DemoCup;
 import dev.sweepline.fsw.link.StepCommand;
 import dev.sweepline.fsw.table.SweepParameters;
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.List;
 import org.junit.jupiter.api.Test;
 
@@ -38,6 +39,52 @@ class InterleavedOrderTest {
                 assertEquals(i, stepOf[2 * i]);
                 assertEquals(n - 1 - i, stepOf[2 * i + 1]);
                 assertEquals(n - 1, stepOf[2 * i] + stepOf[2 * i + 1]); // mean (n - 1) / 2
+            }
+        }
+    }
+
+    /**
+     * The step of window entry {@code i} (window f + i) of a sweep of {@code n} windows by the telemetry ICD §4
+     * rule for a spectrum flagged interleaved: offset o from the starting end (i stepping upward, n − 1 − i
+     * downward) is read at step o/2 for even o, at ⌈n/2⌉ + (o_last − o)/2 for odd o.
+     */
+    private static int icdStep(int i, int n, boolean ascending) {
+        int o = ascending ? i : n - 1 - i;
+        int lastOdd = n % 2 == 0 ? n - 1 : n - 2;
+        return o % 2 == 0 ? o / 2 : (n + 1) / 2 + (lastOdd - o) / 2;
+    }
+
+    @Test
+    void shouldMarkInterleavedFocusSpectraAndStepThemAsTheIcdSays() {
+        for (int style : new int[] {SweepParameters.FOCUS_STYLE_BAND, SweepParameters.FOCUS_STYLE_INTERLEAVED}) {
+            SweepParameters p = DemoCup.parameters();
+            p.focusStyle = style;
+            List<Integer> windows = new ArrayList<>();
+            int[] checked = new int[2];
+            SweepListener l = new SweepListener() {
+                @Override
+                public void onStep(StepCommand step, long nowMicros) {
+                    windows.add(step.window);
+                }
+
+                @Override
+                public void onSweepComplete(Spectrum s, long nowMicros) {
+                    boolean expected = s.mode() == SweepMode.FOCUS && style == SweepParameters.FOCUS_STYLE_INTERLEAVED;
+                    assertEquals(expected, s.interleaved(), s.mode() + " style " + style);
+                    int n = s.count();
+                    if (s.interleaved() && windows.size() == n) {
+                        for (int k = 0; k < n; k++) {
+                            assertEquals(k, icdStep(windows.get(k) - s.firstWindow(), n, s.ascending()), "step " + k + " of " + n);
+                        }
+                        checked[s.ascending() ? 0 : 1]++;
+                    }
+                    windows.clear();
+                }
+            };
+            ClosedLoop loop = new ClosedLoop(new SweepScheduler(DemoCup.INSTRUMENT, Fixtures.TABLE, p, l), Fixtures.nearSun(31));
+            loop.runSweeps(12);
+            if (style == SweepParameters.FOCUS_STYLE_INTERLEAVED) {
+                assertTrue(checked[0] + checked[1] > 5, "interleaved focus sweeps checked: " + Arrays.toString(checked));
             }
         }
     }

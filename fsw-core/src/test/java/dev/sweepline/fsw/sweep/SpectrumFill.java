@@ -43,6 +43,11 @@ public final class SpectrumFill {
         s.support(k, entry, periods);
     }
 
+    /** Marks the sweep as stepped in the interleaved focus order (sweep design note R22). */
+    public static void interleaved(Spectrum s, boolean on) {
+        s.interleaved(on);
+    }
+
     /** Ends the sweep at {@code endMicros}. */
     public static void end(Spectrum s, long endMicros) {
         s.end(endMicros);
@@ -53,6 +58,7 @@ public final class SpectrumFill {
         to.begin(from.sweepNumber(), from.mode(), from.firstWindow(), from.count(), from.ascending(),
                 from.startMicros());
         to.integrationPeriods(from.integrationPeriods());
+        to.interleaved(from.interleaved());
         for (int k = 0; k < from.supportCount(); k++) {
             to.support(k, from.supportEntry(k), from.supportPeriods(k));
         }

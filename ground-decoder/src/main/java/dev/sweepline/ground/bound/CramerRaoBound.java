@@ -4,7 +4,8 @@ import dev.sweepline.ground.fit.FlowAngles;
 
 /**
  * The Cramér–Rao bound of a window set: the square roots of the diagonal of F⁻¹ (physics.md,
- * "Cramér–Rao bound"). Parameter order follows the model: n, U, w per species (SI units).
+ * "Cramér–Rao bound"). Parameter order follows the model: n, U, w per species (SI units), then a drift
+ * model's ΔU (physics.md, "Speed drift within an interleaved sweep"): the bounds of the others are then with ΔU unknown.
  *
  * @param sigma           1σ lower bounds per parameter; NaN when singular
  * @param singular        true when F cannot be inverted (the window set cannot pin the parameters down)

@@ -92,8 +92,8 @@ public final class FisherMatrix {
         model.evaluate(parameters, cur, jac);
         double[][] f = information(jac, sigma);
         double[][] fp = prior.information(parameters);
-        for (int a = 0; a < f.length; a++) {
-            for (int b = 0; b < f.length; b++) {
+        for (int a = 0; a < fp.length; a++) { // the alpha rows only: a drift model's ΔU (last) has no prior information
+            for (int b = 0; b < fp.length; b++) {
                 f[a][b] += fp[a][b];
             }
         }

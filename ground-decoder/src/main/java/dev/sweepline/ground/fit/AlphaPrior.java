@@ -182,9 +182,10 @@ public final class AlphaPrior {
     double leverage(double[] p, double[][] cov, double[] r, double[][] g) {
         rows(p, r, g);
         double sum = 0;
+        int np = Math.min(cov.length, g[0].length); // a drift fit's ΔU (last) has no prior row: its column is 0
         for (double[] row : g) {
-            for (int a = 0; a < row.length; a++) {
-                for (int b = 0; b < row.length; b++) {
+            for (int a = 0; a < np; a++) {
+                for (int b = 0; b < np; b++) {
                     sum += row[a] * cov[a][b] * row[b];
                 }
             }

@@ -101,11 +101,19 @@ final class LeastSquaresRun {
         void scaledFrom(Outcome from, double factor) {
             copyFrom(from);
             for (int a = 0; a < parameters.length; a++) {
-                parameters[a] *= a % 3 == 0 ? factor : 1;
+                parameters[a] *= density(a) ? factor : 1;
                 for (int b = 0; b < parameters.length; b++) {
-                    covariance[a][b] *= (a % 3 == 0 ? factor : 1) * (b % 3 == 0 ? factor : 1);
+                    covariance[a][b] *= (density(a) ? factor : 1) * (density(b) ? factor : 1);
                 }
             }
+        }
+
+        /**
+         * True when parameter {@code a} is a density: the first of each species' (n, U, w); a drift fit's ΔU,
+         * last of 4 or 7, is not.
+         */
+        private boolean density(int a) {
+            return a % 3 == 0 && !(parameters.length % 3 == 1 && a == parameters.length - 1);
         }
 
         /** This slot a copy of {@code from}, a fit of as many parameters. */

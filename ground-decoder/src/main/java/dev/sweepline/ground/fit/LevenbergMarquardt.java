@@ -37,15 +37,16 @@ import java.util.Arrays;
  * <p>As {@code LeastSquaresRun} always did, the parameters inside are (ln n, U, ln w) per species, the speed
  * clamped to [{@link LeastSquaresRun#MIN_SPEED}, {@link LeastSquaresRun#MAX_SPEED}] and the logarithms to
  * [−50, 80] at every evaluation; a joint fit may carry {@link AlphaPrior} rows, appended to the window rows as
- * whitened pseudo-observations (target 0, weight 1). The covariance is (JᵀJ)⁻¹ at the minimum, from the
+ * whitened pseudo-observations (target 0, weight 1). A drift model's last parameter, ΔU, is taken as it is
+ * (not a logarithm) and clamped to ±{@link PlasmaModel#MAX_SPEED_CHANGE}. The covariance is (JᵀJ)⁻¹ at the minimum, from the
  * same analytic Jacobian ({@link WindowCurrent}), by Cholesky of the diagonally equilibrated matrix, mapped
  * back to physical parameters; none when the QR of the raw JᵀJ has a diagonal element at most
  * {@link #COVARIANCE_THRESHOLD} (the singularity test of Hipparchus' getCovariances as the fit called it) or
  * a Cholesky pivot falls below {@link #SINGULAR_PIVOT} of its diagonal.
  */
 final class LevenbergMarquardt {
-    /** Largest number of parameters: the joint model. */
-    static final int MAX_PARAMETERS = PlasmaModel.JOINT_PARAMETERS;
+    /** Largest number of parameters: the joint model with the speed drift ({@link PlasmaModel#withDrift}). */
+    static final int MAX_PARAMETERS = PlasmaModel.JOINT_PARAMETERS + 1;
     /** Relative drop of χ² (actual and predicted) that ends the fit: MINPACK's ftol, Hipparchus' default 1e-10. */
     static final double COST_TOLERANCE = 1e-10;
     /** Region radius relative to ‖Dx‖ that ends the fit: MINPACK's xtol, Hipparchus' default 1e-10. */
@@ -117,6 +118,8 @@ final class LevenbergMarquardt {
     private double chiSquare;
     private int iterations;
     private int parameterCount;
+    /** Index of the current model's ΔU ({@link PlasmaModel#driftIndex}), −1 without drift. */
+    private int driftIndex = -1;
 
     /** Physical parameters of the last successful fit, first {@link #parameterCount()} entries. */
     double[] parameters() {
@@ -159,6 +162,7 @@ final class LevenbergMarquardt {
         rows = m + (prior == null ? 0 : AlphaPrior.ROWS);
         ensure(m, rows);
         parameterCount = np;
+        driftIndex = model.driftIndex();
         hasCovariance = false;
         for (int j = 0; j < m; j++) {
             double s = Math.max(sigma[j], LeastSquaresRun.MIN_SIGMA_AMPS);
@@ -641,18 +645,20 @@ final class LevenbergMarquardt {
         return priorResidual;
     }
 
-    /** Scratch gradients, {@link AlphaPrior#ROWS} × 6, as {@link #priorResidual}. */
+    /** Scratch gradients, {@link AlphaPrior#ROWS} × {@link #MAX_PARAMETERS} (ΔU's column 0), as {@link #priorResidual}. */
     double[][] priorGradient() {
         return priorGradient;
     }
 
-    private static boolean isLog(int a) {
-        return a % 3 != 1;
+    /** True when the optimiser works in the logarithm of parameter {@code a}: n and w; U and ΔU as they are. */
+    private boolean isLog(int a) {
+        return a != driftIndex && a % 3 != 1;
     }
 
-    private static void clamp(double[] p, int np) {
+    private void clamp(double[] p, int np) {
         for (int a = 0; a < np; a++) {
-            p[a] = isLog(a) ? Math.max(LOG_LOW, Math.min(LOG_HIGH, p[a]))
+            p[a] = a == driftIndex ? Math.max(-PlasmaModel.MAX_SPEED_CHANGE, Math.min(PlasmaModel.MAX_SPEED_CHANGE, p[a]))
+                    : isLog(a) ? Math.max(LOG_LOW, Math.min(LOG_HIGH, p[a]))
                     : Math.max(LeastSquaresRun.MIN_SPEED, Math.min(LeastSquaresRun.MAX_SPEED, p[a]));
         }
     }

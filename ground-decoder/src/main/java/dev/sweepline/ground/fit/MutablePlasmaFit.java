@@ -26,7 +26,7 @@ public final class MutablePlasmaFit {
     double reducedChiSquare = Double.NaN;
     int windowsUsed;
     int iterations;
-    final double[] normalParameters = new double[PlasmaModel.JOINT_PARAMETERS];
+    final double[] normalParameters = new double[PlasmaModel.JOINT_PARAMETERS + 1];
     int parameterCount;
     double areaM2 = Double.NaN;
     /** The constrained alpha fit's prior, in use when {@link #hasPrior} (this holder's own instance). */
@@ -106,7 +106,12 @@ public final class MutablePlasmaFit {
 
     /** True when the joint proton + alpha model was fitted. */
     public boolean alphasFitted() {
-        return parameterCount == PlasmaModel.JOINT_PARAMETERS;
+        return PlasmaFit.alphasIn(parameterCount);
+    }
+
+    /** True when the speed's change over the sweep, ΔU, was fitted (an interleaved spectrum). */
+    public boolean driftFitted() {
+        return PlasmaFit.driftIn(parameterCount);
     }
 
     /** Proton density n_p, m⁻³ (NaN on failure). */

@@ -15,7 +15,9 @@ import java.util.Set;
  * @param iterations       optimiser iterations
  * @param flags            flags (unmodifiable)
  * @param normalParameters physical parameters of the model along the normal (n_p, U_p cos θ, w_p[, n_α,
- *                         U_α cos θ, w_α]), for the bound and the plots; empty on failure
+ *                         U_α cos θ, w_α][, ΔU cos θ]), for the bound and the plots; empty on failure. ΔU, last, is
+ *                         the normal speed's change over an interleaved sweep (a 4th or 7th parameter;
+ *                         {@link PlasmaModel#withDrift}); the speeds are then the mid-sweep ones
  * @param areaM2           effective area times acceptance used by the model, m²
  * @param alphaPrior       the prior rows of a constrained alpha component ({@link FitFlag#ALPHAS_CONSTRAINED}),
  *                         null otherwise; the bound of the fit adds their information
@@ -58,7 +60,27 @@ public record PlasmaFit(SpeciesMoments protons, SpeciesMoments alphas, FlowAngle
 
     /** True when the joint proton + alpha model was fitted. */
     public boolean alphasFitted() {
-        return normalParameters.length == PlasmaModel.JOINT_PARAMETERS;
+        return alphasIn(normalParameters.length);
+    }
+
+    /** True when the speed's change over the sweep ΔU was fitted (an interleaved spectrum): the last parameter. */
+    public boolean driftFitted() {
+        return driftIn(normalParameters.length);
+    }
+
+    /** The normal speed's change over the sweep, ΔU cos θ, m/s; NaN unless {@link #driftFitted}. */
+    public double normalSpeedChangeMPerS() {
+        return driftFitted() ? normalParameters[normalParameters.length - 1] : Double.NaN;
+    }
+
+    /** True when a fit of {@code parameters} normal parameters holds the alphas: 6, or 7 with ΔU. */
+    static boolean alphasIn(int parameters) {
+        return parameters == PlasmaModel.JOINT_PARAMETERS || parameters == PlasmaModel.JOINT_PARAMETERS + 1;
+    }
+
+    /** True when a fit of {@code parameters} normal parameters holds ΔU: 4 or 7. */
+    static boolean driftIn(int parameters) {
+        return parameters == PlasmaModel.PROTON_PARAMETERS + 1 || parameters == PlasmaModel.JOINT_PARAMETERS + 1;
     }
 
     /** Flags as a '|'-separated list of names, empty when none. */

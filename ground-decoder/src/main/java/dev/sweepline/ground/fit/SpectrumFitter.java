@@ -61,6 +61,11 @@ public final class SpectrumFitter {
         final LeastSquaresRun.Outcome constrained = new LeastSquaresRun.Outcome(PlasmaModel.JOINT_PARAMETERS);
         final LeastSquaresRun.Outcome scaledProtons = new LeastSquaresRun.Outcome(PlasmaModel.PROTON_PARAMETERS);
         final LeastSquaresRun.Outcome scaledJoint = new LeastSquaresRun.Outcome(PlasmaModel.JOINT_PARAMETERS);
+        final double[] driftStart = new double[PlasmaModel.JOINT_PARAMETERS + 1];
+        final LeastSquaresRun.Outcome driftProtons = new LeastSquaresRun.Outcome(PlasmaModel.PROTON_PARAMETERS + 1);
+        final LeastSquaresRun.Outcome driftJoint = new LeastSquaresRun.Outcome(PlasmaModel.JOINT_PARAMETERS + 1);
+        final LeastSquaresRun.Outcome scaledDriftProtons = new LeastSquaresRun.Outcome(PlasmaModel.PROTON_PARAMETERS + 1);
+        final LeastSquaresRun.Outcome scaledDriftJoint = new LeastSquaresRun.Outcome(PlasmaModel.JOINT_PARAMETERS + 1);
         final MutablePlasmaFit result = new MutablePlasmaFit();
         /** The prior of the constrained alpha fit, set per spectrum ({@link AlphaPrior#setForProtonSpeed}). */
         final AlphaPrior prior = new AlphaPrior(0, 1, false);
@@ -251,8 +256,16 @@ public final class SpectrumFitter {
             prior = null;
             flags.add(FitFlag.ALPHAS_NOT_FITTED);
         }
-        FlowAngles angles = speciesAngles(in, preliminary, joint != null ? jointModel : protonModel,
-                best.parameters());
+        PlasmaModel fitted = joint != null ? jointModel : protonModel;
+        if (in.interleaved()) {
+            PlasmaModel driftModel = models.model(in.lowVolts(), in.highVolts(), area, joint != null, in.stepFraction());
+            LeastSquaresRun.Outcome drift = driftFit(in, driftModel, best, prior, ws);
+            if (drift != null) {
+                best = drift;
+                fitted = driftModel;
+            }
+        }
+        FlowAngles angles = speciesAngles(in, preliminary, fitted, best.parameters());
         if (densityPrior != null && FlowAngleEstimator.beyondReach(angles, cup)) {
             double n = best.parameters()[0];
             double[][] c = best.covariance();
@@ -261,8 +274,12 @@ public final class SpectrumFitter {
         double acceptance = cup.transmission(angles.tanX(), angles.tanY());
         if (acceptance > 0 && acceptance != area / cup.effectiveAreaM2()) {
             // beyond full acceptance the refined angle changes A(θ)/A(0), and n with it (I ∝ n A)
-            LeastSquaresRun.Outcome scaled = best.parameters().length == PlasmaModel.JOINT_PARAMETERS
-                    ? ws.scaledJoint : ws.scaledProtons;
+            LeastSquaresRun.Outcome scaled = switch (best.parameters().length) {
+                case PlasmaModel.JOINT_PARAMETERS -> ws.scaledJoint;
+                case PlasmaModel.PROTON_PARAMETERS -> ws.scaledProtons;
+                case PlasmaModel.JOINT_PARAMETERS + 1 -> ws.scaledDriftJoint;
+                default -> ws.scaledDriftProtons;
+            };
             scaled.scaledFrom(best, area / (cup.effectiveAreaM2() * acceptance));
             best = scaled;
             area = cup.effectiveAreaM2() * acceptance;
@@ -339,10 +356,11 @@ public final class SpectrumFitter {
         int m = in.windows();
         double[] protons = new double[m];
         double[] alphas = model.withAlphas() ? new double[m] : null;
+        double du = model.withDrift() ? p[model.driftIndex()] : 0;
         for (int j = 0; j < m; j++) {
-            protons[j] = model.speciesCurrent(Species.PROTON, j, p[0], p[1], p[2]);
+            protons[j] = model.speciesCurrent(Species.PROTON, j, p[0], p[1], p[2], du);
             if (alphas != null) {
-                alphas[j] = model.speciesCurrent(Species.ALPHA, j, p[3], p[4], p[5]);
+                alphas[j] = model.speciesCurrent(Species.ALPHA, j, p[3], p[4], p[5], du);
             }
         }
         return SpeciesFlowAngles.refine(in, cup, preliminary, protons, alphas);
@@ -451,6 +469,26 @@ public final class SpectrumFitter {
         return sane;
     }
 
+    /**
+     * The fit of an interleaved spectrum with the speed's change over the sweep, ΔU, as one more parameter
+     * ({@link PlasmaModel#withDrift}): the chosen model (protons, or protons and alphas with the chosen fit's
+     * prior rows) started from its solution and ΔU = 0, so the drift fit holds the chosen one and its χ² can
+     * only fall. Null when it does not converge to physical values with finite errors (the chosen fit stays).
+     */
+    private LeastSquaresRun.Outcome driftFit(SpectrumInput in, PlasmaModel driftModel, LeastSquaresRun.Outcome chosen,
+            AlphaPrior prior, Workspace ws) {
+        double[] p = chosen.parameters();
+        int np = p.length;
+        System.arraycopy(p, 0, ws.driftStart, 0, np);
+        ws.driftStart[np] = 0;
+        LeastSquaresRun.Outcome o = np == PlasmaModel.JOINT_PARAMETERS ? ws.driftJoint : ws.driftProtons;
+        if (!solver.fitInto(driftModel, in.totalAmps(), in.sigmaAmps(), ws.driftStart, prior, o)
+                || !physical(o.parameters(), in) || !finiteErrors(o.covariance())) {
+            return null;
+        }
+        return o;
+    }
+
     /** The joint start (n_p, U_p, w_p, ratio·n_p, U_p, w_α) from the proton fit {@code p}, into {@code s}. */
     private static double[] startVector(double[] s, double[] p, double ratio, double wAlpha) {
         s[0] = p[0];
@@ -506,7 +544,7 @@ public final class SpectrumFitter {
             out.flags.add(FitFlag.PEAK_OUTSIDE_WINDOWS);
         }
         moments(Species.PROTON, p, o.covariance(), 0, angles, sigmaLogArea, out.protons);
-        if (np == PlasmaModel.JOINT_PARAMETERS) {
+        if (PlasmaFit.alphasIn(np)) {
             moments(Species.ALPHA, p, o.covariance(), 3, angles, sigmaLogArea, out.alphas);
         }
         out.angles = angles;

@@ -18,9 +18,32 @@ import java.util.Arrays;
  * @param quadrantSigmaAmps   [q][window] 1σ of each quadrant sample, A; null when unknown
  * @param saturatedDropped    windows left out because a quadrant hit the ADC top
  * @param uncalibratedDropped windows left out because their edges are not known
+ * @param stepFraction        per window kept, its place in the sweep's time order, τ = step / (c − 1) ∈ [0, 1]
+ *                            (ICD §4, {@link SpectrumValues#stepOrder}), for a spectrum flagged interleaved; null
+ *                            otherwise. Equal step spacing is taken: every interleaved step has the same rail
+ *                            change of two windows (docs/physics.md, "Speed drift within an interleaved sweep")
  */
 public record SpectrumInput(double[] lowVolts, double[] highVolts, double[] totalAmps, double[] sigmaAmps,
-        double[][] quadrantAmps, double[][] quadrantSigmaAmps, int saturatedDropped, int uncalibratedDropped) {
+        double[][] quadrantAmps, double[][] quadrantSigmaAmps, int saturatedDropped, int uncalibratedDropped,
+        double[] stepFraction) {
+
+    /** A spectrum whose time order is not used (not interleaved): {@code stepFraction} null. */
+    public SpectrumInput(double[] lowVolts, double[] highVolts, double[] totalAmps, double[] sigmaAmps,
+            double[][] quadrantAmps, double[][] quadrantSigmaAmps, int saturatedDropped, int uncalibratedDropped) {
+        this(lowVolts, highVolts, totalAmps, sigmaAmps, quadrantAmps, quadrantSigmaAmps, saturatedDropped,
+                uncalibratedDropped, null);
+    }
+
+    /** True when the windows' time order is known and interleaved: the fit adds the speed drift ΔU. */
+    public boolean interleaved() {
+        return stepFraction != null;
+    }
+
+    /** The same windows read at the sweep fractions {@code tau} (one per window kept; null: not interleaved). */
+    public SpectrumInput withStepFraction(double[] tau) {
+        return new SpectrumInput(lowVolts, highVolts, totalAmps, sigmaAmps, quadrantAmps, quadrantSigmaAmps,
+                saturatedDropped, uncalibratedDropped, tau);
+    }
 
     /** Windows kept. */
     public int windows() {
@@ -64,6 +87,7 @@ public record SpectrumInput(double[] lowVolts, double[] highVolts, double[] tota
         double[] sig = new double[keep];
         double[][] qa = new double[DecodedSpectrum.QUADRANTS][keep];
         double[][] qs = new double[DecodedSpectrum.QUADRANTS][keep];
+        double[] tau = s.interleaved() && c > 1 ? new double[keep] : null;
         int k = 0;
         for (int i = 0; i < c; i++) {
             if (s.saturated(i) || !Double.isFinite(s.lowVolts(i)) || !Double.isFinite(s.highVolts(i))) {
@@ -81,8 +105,11 @@ public record SpectrumInput(double[] lowVolts, double[] highVolts, double[] tota
                 var += v;
             }
             sig[k] = Math.sqrt(var);
+            if (tau != null) {
+                tau[k] = s.stepOrder(i) / (double) (c - 1);
+            }
             k++;
         }
-        return new SpectrumInput(lo, hi, tot, sig, qa, qs, saturated, uncalibrated);
+        return new SpectrumInput(lo, hi, tot, sig, qa, qs, saturated, uncalibrated, tau);
     }
 }

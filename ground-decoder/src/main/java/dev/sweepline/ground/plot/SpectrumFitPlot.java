@@ -29,10 +29,12 @@ public final class SpectrumFitPlot {
     public static byte[] render(SpectrumInput in, PlasmaFit fit, String title, double floorAmps, int width,
             int height) {
         int m = in.windows();
-        PlasmaModel model = new PlasmaModel(in.lowVolts(), in.highVolts(), fit.areaM2(), fit.alphasFitted());
+        PlasmaModel model = new PlasmaModel(in.lowVolts(), in.highVolts(), fit.areaM2(), fit.alphasFitted(),
+                fit.driftFitted() ? in.stepFraction() : null);
         double[] total = new double[m];
         double[] p = fit.normalParameters();
         boolean fitted = p.length == model.parameters();
+        double du = fitted && model.withDrift() ? p[model.driftIndex()] : 0;
         if (fitted) {
             model.evaluate(p, total, null);
         }
@@ -57,9 +59,9 @@ public final class SpectrumFitPlot {
             if (fitted) {
                 xm.add(v);
                 ym.add(clip(total[j], floorAmps, clipped, 1));
-                yp.add(clip(model.speciesCurrent(Species.PROTON, j, p[0], p[1], p[2]), floorAmps, clipped, 2));
+                yp.add(clip(model.speciesCurrent(Species.PROTON, j, p[0], p[1], p[2], du), floorAmps, clipped, 2));
                 if (fit.alphasFitted()) {
-                    ya.add(clip(model.speciesCurrent(Species.ALPHA, j, p[3], p[4], p[5]), floorAmps, clipped, 3));
+                    ya.add(clip(model.speciesCurrent(Species.ALPHA, j, p[3], p[4], p[5], du), floorAmps, clipped, 3));
                 }
                 res.add((in.totalAmps()[j] - total[j]) / in.sigmaAmps()[j]);
             }

@@ -70,7 +70,9 @@ public final class FitCollector implements DecodeListener {
                 .fit(in, carried(instrument.id(), tai));
         CramerRaoBound bound = null;
         if (fit.ok()) {
-            PlasmaModel m = boundModels.model(in.lowVolts(), in.highVolts(), fit.areaM2(), fit.alphasFitted());
+            // an interleaved spectrum's drift fit: the bound of the speeds with ΔU unknown (its model's last parameter)
+            PlasmaModel m = boundModels.model(in.lowVolts(), in.highVolts(), fit.areaM2(), fit.alphasFitted(),
+                    fit.driftFitted() ? in.stepFraction() : null);
             bound = FisherMatrix.bound(m, fit.normalParameters(), in.sigmaAmps(), fit.alphaPrior());
             if (bound.singular()) {
                 fit = fit.withFlag(FitFlag.SINGULAR_BOUND);

@@ -34,12 +34,14 @@ import dev.sweepline.ground.packet.CucTime;
  *                           whose description gave the currents and edges
  * @param windowPeriods      modulation periods integrated per window: {@code integrationPeriods}, or a
  *                           support window's own (layout 3)
+ * @param interleaved        flags bit 5: the sweep stepped in the interleaved focus order (ICD §4; its step of
+ *                           each window: {@link SpectrumValues#stepOrder})
  */
 public record DecodedSpectrum(CucTime time, int apid, int sequenceCount, int mode, boolean steppedDown,
         boolean tableChanged, int sweep, int tableId, int firstWindow, int windowCount, int peakQ8,
         int integrationPeriods, int compression, int[] gainRange, boolean[] saturated, int[][] adcCounts,
         double[][] currentAmps, double[] totalAmps, double[] lowVolts, double[] highVolts, int layoutVersion,
-        GroundInstrument instrument, int[] windowPeriods) implements SpectrumValues {
+        GroundInstrument instrument, int[] windowPeriods, boolean interleaved) implements SpectrumValues {
     /** Peak value meaning "no peak" (ICD §4). */
     public static final int NO_PEAK = 0xFFFF;
     /** Mode code of survey (ICD §4). */

@@ -16,7 +16,8 @@ import dev.sweepline.ground.frame.BigEndian;
  *  1          -          2       instrument id
  *  3          -          1       sample width w, bits
  *  4          0          1       mode (1 survey, 2 focus)
- *  5          1          1       flags: bit 7 stepped downward, bit 6 table changed at this sweep
+ *  5          1          1       flags: bit 7 stepped downward, bit 6 table changed at this sweep,
+ *                                 bit 5 interleaved order
  *  6          2          2       sweep number
  *  8          4          2       table id
  * 10          6          2       first window f
@@ -53,6 +54,8 @@ final class SpectrumHeader {
     static final int STEPPED_DOWN = 0x80;
     /** Flags bit 6: the first sweep flown with a newly applied table (ICD §4). */
     static final int TABLE_CHANGED = 0x40;
+    /** Flags bit 5: the sweep stepped in the interleaved focus order (ICD §4). */
+    static final int INTERLEAVED = 0x20;
 
     /**
      * The fixed octets the layout announced by first octet {@code first} has at least (layout 3: up to its
@@ -165,5 +168,9 @@ final class SpectrumHeader {
 
     boolean tableChanged() {
         return (flags() & TABLE_CHANGED) != 0;
+    }
+
+    boolean interleaved() {
+        return (flags() & INTERLEAVED) != 0;
     }
 }

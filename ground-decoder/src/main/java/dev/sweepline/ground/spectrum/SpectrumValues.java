@@ -22,6 +22,32 @@ public interface SpectrumValues {
     /** "survey" or "focus" ({@link DecodedSpectrum#modeName(int)}). */
     String modeName();
 
+    /** Flags bit 7: the sweep stepped downward (ICD §4). */
+    boolean steppedDown();
+
+    /** Flags bit 5: the sweep stepped in the interleaved focus order (ICD §4). */
+    boolean interleaved();
+
+    /**
+     * The step at which window {@code i} (0..c−1) was read, 0..c−1, by ICD §4: in window order from the
+     * starting end (f stepping upward, f + c − 1 downward), or, for an interleaved sweep, offset o from the
+     * starting end at step o/2 for even o and at ⌈c/2⌉ + (o_last − o)/2 for odd o, o_last the largest odd
+     * offset below c (the even offsets outward, then the odd ones back).
+     */
+    default int stepOrder(int i) {
+        return stepOf(i, windowCount(), steppedDown(), interleaved());
+    }
+
+    /** {@link #stepOrder} of window {@code i} of {@code c} for the given flags. */
+    static int stepOf(int i, int c, boolean steppedDown, boolean interleaved) {
+        int o = steppedDown ? c - 1 - i : i;
+        if (!interleaved) {
+            return o;
+        }
+        int lastOdd = c % 2 == 0 ? c - 1 : c - 2;
+        return o % 2 == 0 ? o / 2 : (c + 1) / 2 + (lastOdd - o) / 2;
+    }
+
     /** Sweep number (16 bits, wraps). */
     int sweep();
 

@@ -70,6 +70,18 @@ public final class SpectrumView implements SpectrumValues {
         return DecodedSpectrum.modeName(mode);
     }
 
+    /** Flags bit 7: the sweep stepped downward (ICD §4). */
+    @Override
+    public boolean steppedDown() {
+        return (flags & SpectrumHeader.STEPPED_DOWN) != 0;
+    }
+
+    /** Flags bit 5: the sweep stepped in the interleaved order (ICD §4). */
+    @Override
+    public boolean interleaved() {
+        return (flags & SpectrumHeader.INTERLEAVED) != 0;
+    }
+
     /** Sweep number (16 bits, wraps). */
     public int sweep() {
         return sweep;
@@ -154,6 +166,7 @@ public final class SpectrumView implements SpectrumValues {
                 (flags & SpectrumHeader.STEPPED_DOWN) != 0, (flags & SpectrumHeader.TABLE_CHANGED) != 0, sweep, tableId,
                 firstWindow, c, peakQ8, integrationPeriods, compression, Arrays.copyOf(gainRange, c),
                 Arrays.copyOf(saturated, c), adc, amps, Arrays.copyOf(totalAmps, c), Arrays.copyOf(lowVolts, c),
-                Arrays.copyOf(highVolts, c), layoutVersion, instrument, Arrays.copyOf(windowPeriods, c));
+                Arrays.copyOf(highVolts, c), layoutVersion, instrument, Arrays.copyOf(windowPeriods, c),
+                (flags & SpectrumHeader.INTERLEAVED) != 0);
     }
 }

@@ -23,8 +23,9 @@ final class HipparchusLeastSquares {
     private HipparchusLeastSquares() {
     }
 
-    private static boolean isLog(int a) {
-        return a % 3 != 1;
+    /** n and w as logarithms; U and a drift model's ΔU (its last parameter, {@code drift}) as they are. */
+    private static boolean isLog(int a, int drift) {
+        return a != drift && a % 3 != 1;
     }
 
     /** Fits with {@code prior} rows (joint model only; null for none). */
@@ -49,10 +50,11 @@ final class HipparchusLeastSquares {
             double[] sigma, double[] startPhysical, AlphaPrior prior) {
         int np = model.parameters();
         int m = model.windows();
+        int d = model.driftIndex();
         int rows = m + (prior == null ? 0 : AlphaPrior.ROWS);
         double[] start = new double[np];
         for (int a = 0; a < np; a++) {
-            start[a] = isLog(a) ? Math.log(startPhysical[a]) : startPhysical[a];
+            start[a] = isLog(a, d) ? Math.log(startPhysical[a]) : startPhysical[a];
         }
         double[] weights = new double[rows];
         double[] target = new double[rows];
@@ -75,7 +77,7 @@ final class HipparchusLeastSquares {
                 .weight(new DiagonalMatrix(weights))
                 .model((RealVector p) -> {
                     for (int a = 0; a < np; a++) {
-                        phys[a] = isLog(a) ? Math.exp(p.getEntry(a)) : p.getEntry(a);
+                        phys[a] = isLog(a, d) ? Math.exp(p.getEntry(a)) : p.getEntry(a);
                     }
                     model.evaluate(phys, cur, jac);
                     if (prior != null) {
@@ -88,7 +90,7 @@ final class HipparchusLeastSquares {
                     double[][] ji = new double[rows][np];
                     for (int j = 0; j < rows; j++) {
                         for (int a = 0; a < np; a++) {
-                            ji[j][a] = isLog(a) ? jac[j][a] * phys[a] : jac[j][a];
+                            ji[j][a] = isLog(a, d) ? jac[j][a] * phys[a] : jac[j][a];
                         }
                     }
                     return new Pair<>(new ArrayRealVector(cur, true), new Array2DRowRealMatrix(ji, false));
@@ -98,9 +100,12 @@ final class HipparchusLeastSquares {
                         p.setEntry(a, Math.max(LeastSquaresRun.MIN_SPEED, Math.min(LeastSquaresRun.MAX_SPEED, p.getEntry(a))));
                     }
                     for (int a = 0; a < np; a++) {
-                        if (isLog(a)) {
+                        if (isLog(a, d)) {
                             p.setEntry(a, Math.max(-50, Math.min(80, p.getEntry(a))));
                         }
+                    }
+                    if (d >= 0) {
+                        p.setEntry(d, Math.max(-PlasmaModel.MAX_SPEED_CHANGE, Math.min(PlasmaModel.MAX_SPEED_CHANGE, p.getEntry(d))));
                     }
                     return p;
                 })
@@ -117,7 +122,7 @@ final class HipparchusLeastSquares {
         double[] p = opt.getPoint().toArray();
         double[] out = new double[np];
         for (int a = 0; a < np; a++) {
-            out[a] = isLog(a) ? Math.exp(p[a]) : p[a];
+            out[a] = isLog(a, d) ? Math.exp(p[a]) : p[a];
             if (!Double.isFinite(out[a])) {
                 return null;
             }
@@ -128,8 +133,8 @@ final class HipparchusLeastSquares {
             cov = new double[np][np];
             for (int a = 0; a < np; a++) {
                 for (int b = 0; b < np; b++) {
-                    double sa = isLog(a) ? out[a] : 1;
-                    double sb = isLog(b) ? out[b] : 1;
+                    double sa = isLog(a, d) ? out[a] : 1;
+                    double sb = isLog(b, d) ? out[b] : 1;
                     cov[a][b] = c.getEntry(a, b) * sa * sb;
                 }
             }

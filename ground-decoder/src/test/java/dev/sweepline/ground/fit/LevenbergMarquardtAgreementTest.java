@@ -108,7 +108,7 @@ class LevenbergMarquardtAgreementTest {
      */
     private static int[] agreeOn(List<SpectrumInput> spectra, String label) {
         LevenbergMarquardt lm = new LevenbergMarquardt();
-        int[] counts = new int[8];
+        int[] counts = new int[9];
         // worst relative difference of a parameter; worst distance of Hipparchus' point from the tight run's in
         // σ, and the same as a fraction of the ftol bound 2 √(1e-10 χ²)
         double[] worst = new double[3];
@@ -127,6 +127,7 @@ class LevenbergMarquardtAgreementTest {
             counts[0]++;
             counts[1] += compare(model, amps, sigma, prior, ref, own, where, worst) ? 1 : 0;
             counts[2] += model.withAlphas() ? 1 : 0;
+            counts[8] += model.withDrift() ? 1 : 0;
             counts[3] += ref.covariance() == null ? 1 : 0;
             if (model.withAlphas()) {
                 // the minimum reached: no alphas (5), alphas faster (6) or slower (7) than the protons
@@ -142,13 +143,47 @@ class LevenbergMarquardtAgreementTest {
             PlasmaFit o = own.fit(spectra.get(k));
             assertEquals(r.flags(), o.flags(), "spectrum " + k);
         }
-        System.out.printf("%s: %d runs (%d joint), %d within %.0e relative outright, worst relative %.2e; %d without"
+        System.out.printf("%s: %d runs (%d joint, %d with the drift), %d within %.0e relative outright, worst relative %.2e; %d without"
                 + " a covariance, %d where both fail; joint runs without alphas %d, minima with the alphas faster %d,"
                 + " slower %d; Hipparchus' point from the tight run's at most %.2e σ, %.2f of the ftol bound%n", label,
-                counts[0], counts[2], counts[1], RELATIVE, worst[0], counts[3], counts[4], counts[5], counts[6], counts[7],
+                counts[0], counts[2], counts[8], counts[1], RELATIVE, worst[0], counts[3], counts[4], counts[5], counts[6], counts[7],
                 worst[1], worst[2]);
         assertEquals(counts[0], counts[1], "runs within 1e-9 outright");
         return counts;
+    }
+
+    /**
+     * The same narrow bands read in the interleaved order (ICD §4 flags bit 5), with the speed changing by 0 to
+     * 2 km/s over the sweep: every fit ends with the drift run ({@link PlasmaModel#withDrift}), which both
+     * optimisers must take alike, by the checks of the class note.
+     */
+    @Test
+    void shouldAgreeOnTheDriftFitsOfInterleavedBands() {
+        Random rng = new Random(SEED + 2);
+        List<SpectrumInput> spectra = new ArrayList<>();
+        for (SpectrumInput in : narrowBands()) {
+            int c = in.windows();
+            double[] tau = new double[c];
+            for (int j = 0; j < c; j++) {
+                tau[j] = dev.sweepline.ground.spectrum.SpectrumValues.stepOf(j, c, rng.nextBoolean(), true) / (double) (c - 1);
+            }
+            // the currents of a ramp: each window's current moved by ΔU (τ − ½) ∂I/∂U of the protons' start model
+            PlasmaModel plain = new PlasmaModel(in.lowVolts(), in.highVolts(), DemoCup.CUP.effectiveAreaM2(), false);
+            double[] g = new double[PlasmaModel.PROTON_PARAMETERS];
+            double[] amps = in.totalAmps().clone();
+            if (InitialGuess.protons(plain, amps, DemoCup.CUP.effectiveAreaM2(), g)) {
+                double du = 2e3 * rng.nextDouble();
+                double[] cur = new double[c];
+                double[][] jac = new double[c][PlasmaModel.PROTON_PARAMETERS];
+                plain.evaluate(g, cur, jac);
+                for (int j = 0; j < c; j++) {
+                    amps[j] += du * (tau[j] - 0.5) * jac[j][1];
+                }
+            }
+            spectra.add(new SpectrumInput(in.lowVolts(), in.highVolts(), amps, in.sigmaAmps(), null, null, 0, 0, tau));
+        }
+        int[] counts = agreeOn(spectra, "LM agreement, interleaved narrow near-Sun bands with the drift fit");
+        assertTrue(counts[8] >= NARROW_TRIALS / 2, "drift runs " + counts[8]);
     }
 
     /** Narrow-band spectra drawn per {@link #shouldReachTheSameMinimumOnNarrowNearSunFocusBands}. */
@@ -198,16 +233,18 @@ class LevenbergMarquardtAgreementTest {
         int np = model.parameters();
         double[] xr = internal(ref.parameters());
         double[] xo = internal(own.parameters());
+        int d = model.driftIndex();
         assertEquals(ref.iterations(), own.iterations(), where + " iterations");
         boolean outright = true;
         for (int a = 0; a < np; a++) {
             double diff = Math.abs(xo[a] - xr[a]);
-            double scale = a % 3 == 1 ? Math.abs(xr[a]) : 1; // ln n, ln w: a difference is already relative
+            // ln n, ln w: a difference is already relative; ΔU, near 0, relative to U
+            double scale = a == d ? Math.abs(xr[1]) : a % 3 == 1 ? Math.abs(xr[a]) : 1;
             worst[0] = Math.max(worst[0], diff / scale);
             outright &= diff <= RELATIVE * scale;
             assertTrue(diff <= RELATIVE * scale, where + " parameter " + a + ": Hipparchus " + xr[a] + ", own " + xo[a]);
         }
-        boolean alphaFree = np == PlasmaModel.JOINT_PARAMETERS && ref.parameters()[3] < NO_ALPHAS * ref.parameters()[0];
+        boolean alphaFree = model.withAlphas() && ref.parameters()[3] < NO_ALPHAS * ref.parameters()[0];
         if (ref.covariance() != null && !alphaFree) {
             // Hipparchus' own stopping gap: its point against a run to tolerances 1e-14 from that point
             LeastSquaresRun.Outcome tight = HipparchusLeastSquares.fitTight(model, amps, sigma, ref.parameters(), prior);
@@ -254,7 +291,7 @@ class LevenbergMarquardtAgreementTest {
                     10 * rows * Math.ulp(1.0) * new SingularValueDecomposition(eq).getConditionNumber());
             for (int a = 0; a < np; a++) {
                 for (int b = 0; b < np; b++) {
-                    double expected = co.getEntry(a, b) * (a % 3 == 1 ? 1 : p[a]) * (b % 3 == 1 ? 1 : p[b]);
+                    double expected = co.getEntry(a, b) * (linear(a, np) ? 1 : p[a]) * (linear(b, np) ? 1 : p[b]);
                     double s = Math.sqrt(own.covariance()[a][a] * own.covariance()[b][b]);
                     assertEquals(expected, own.covariance()[a][b], inversion * s, where + " covariance " + a + "," + b);
                 }
@@ -263,13 +300,18 @@ class LevenbergMarquardtAgreementTest {
         return outright;
     }
 
-    /** (ln n, U, ln w) per species of physical parameters. */
+    /** (ln n, U, ln w) per species of physical parameters, then a drift fit's ΔU as it is. */
     private static double[] internal(double[] p) {
         double[] x = new double[p.length];
         for (int a = 0; a < p.length; a++) {
-            x[a] = a % 3 == 1 ? p[a] : Math.log(p[a]);
+            x[a] = linear(a, p.length) ? p[a] : Math.log(p[a]);
         }
         return x;
+    }
+
+    /** True when parameter {@code a} of {@code np} is taken as it is: U, or ΔU, the last of 4 or 7 (a drift fit). */
+    private static boolean linear(int a, int np) {
+        return a % 3 == 1 || (np % 3 == 1 && a == np - 1);
     }
 
     /**
@@ -282,7 +324,7 @@ class LevenbergMarquardtAgreementTest {
         int m = model.windows();
         double[] p = new double[np];
         for (int a = 0; a < np; a++) {
-            p[a] = a % 3 == 1 ? x[a] : Math.exp(x[a]);
+            p[a] = linear(a, np) ? x[a] : Math.exp(x[a]);
         }
         double[] cur = new double[m];
         double[][] jac = new double[m][np];
@@ -294,7 +336,7 @@ class LevenbergMarquardtAgreementTest {
             double w = 1 / Math.max(sigma[i], LeastSquaresRun.MIN_SIGMA_AMPS);
             r[i] = (amps[i] - cur[i]) * w;
             for (int a = 0; a < np; a++) {
-                j[i][a] = jac[i][a] * (a % 3 == 1 ? 1 : p[a]) * w;
+                j[i][a] = jac[i][a] * (linear(a, np) ? 1 : p[a]) * w;
             }
         }
         if (prior != null) {
@@ -304,7 +346,7 @@ class LevenbergMarquardtAgreementTest {
             for (int i = 0; i < AlphaPrior.ROWS; i++) {
                 r[m + i] = -pr[i];
                 for (int a = 0; a < np; a++) {
-                    j[m + i][a] = pg[i][a] * (a % 3 == 1 ? 1 : p[a]);
+                    j[m + i][a] = pg[i][a] * (linear(a, np) ? 1 : p[a]);
                 }
             }
         }

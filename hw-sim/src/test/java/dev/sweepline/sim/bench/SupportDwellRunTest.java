@@ -39,10 +39,13 @@ class SupportDwellRunTest {
             String report = String.format(Locale.ROOT, "%s ground p95 n/U/T %.2e %.2e %.2e -> %.2e %.2e %.2e, D-eff %.3f -> %.3f",
                     scenario, unpaired[0], unpaired[1], unpaired[2], paired[0], paired[1], paired[2], unpaired[3], paired[3]);
             System.out.println(report);
-            // docs/focus-design.md, "Paired support", 3 seeds x 120 s: p95 n 0.25 of the unpaired table's on
-            // both, U 0.33 and 0.47, T 0.66 and 0.22 (quiet-perihelion, fast-wind); seed 1, 60 s here
-            // (measured n 0.25 and 0.22, U 0.38 and 0.43, T 0.66 and 0.23)
-            assertTrue(paired[0] <= 0.5 * unpaired[0], report);
+            // docs/focus-design.md, "Paired support", 3 seeds x 120 s with the ground's fit before its drift term:
+            // p95 n 0.25 of the unpaired table's on both, U 0.33 and 0.47, T 0.66 and 0.22 (quiet-perihelion,
+            // fast-wind). The drift fit of interleaved spectra ("A drift-aware fit of interleaved spectra") takes
+            // most of the unpaired table's fast-wind error (p95 n 7.2e-3 -> 2.3e-3, T 1.5e-2 -> 4.8e-3 on seed 1),
+            // so the pairing's cut is smaller there; seed 1, 60 s here, measured with the drift fit: n 0.47 and
+            // 0.70, U 0.46 and 0.52, T 0.51 and 0.71
+            assertTrue(paired[0] <= 0.75 * unpaired[0], report);
             assertTrue(paired[1] <= 0.7 * unpaired[1], report);
             assertTrue(paired[2] <= 0.75 * unpaired[2], report);
             // with a D-efficiency above the equal-dwell tables' (0.69 and 0.67, the test above; measured 0.81, 0.83)
