@@ -24,8 +24,8 @@ import java.util.Set;
  * @param sigmaLogArea     1σ of ln A(θ) from the angles' 1σ ({@link CupGeometry#sigmaLogTransmission}): the
  *                         density's relative 1σ from the angle, in its 1σ and its bound; 0 inside full
  *                         acceptance and on failure
- * @param speedChangeMPerS      the bulk speed's change over the sweep ΔU = ΔU cos θ / cos θ, m/s, as |U_p| is
- *                              from U_p cos θ; NaN unless {@link #driftFitted}
+ * @param speedChangeMPerS      the bulk speed's change over the sweep ΔU, m/s: the normal change over cos θ,
+ *                              as |U_p| is from U_p cos θ; NaN unless {@link #driftFitted}
  * @param sigmaSpeedChangeMPerS 1σ of ΔU from the fit covariance with the angles' 1σ propagated, as U_p's
  *                              ({@link FlowAngles#sigmaBulkSpeed}); NaN unless {@link #driftFitted}
  */
