@@ -33,6 +33,9 @@ public final class MutablePlasmaFit {
     final AlphaPrior alphaPrior = new AlphaPrior(0, 1, false);
     boolean hasPrior;
     double sigmaLogArea;
+    /** ΔU along the flow and its 1σ, m/s (see {@link PlasmaFit#speedChangeMPerS}); NaN unless drift-fitted. */
+    double speedChangeMPerS = Double.NaN;
+    double sigmaSpeedChangeMPerS = Double.NaN;
 
     private boolean warmStart;
     /** The last good proton solution (n_p, U_p cos θ, w_p of the proton-only fit), when {@link #hasLast}. */
@@ -73,6 +76,8 @@ public final class MutablePlasmaFit {
         areaM2 = Double.NaN;
         hasPrior = false;
         sigmaLogArea = 0.0;
+        speedChangeMPerS = Double.NaN;
+        sigmaSpeedChangeMPerS = Double.NaN;
         warmStarted = false;
     }
 
@@ -87,6 +92,8 @@ public final class MutablePlasmaFit {
         areaM2 = area;
         hasPrior = false;
         sigmaLogArea = 0.0;
+        speedChangeMPerS = Double.NaN;
+        sigmaSpeedChangeMPerS = Double.NaN;
     }
 
     /** True unless a failure flag is set. */
@@ -163,7 +170,7 @@ public final class MutablePlasmaFit {
         SpeciesMoments a = alphasFitted() ? moments(alphas) : SpeciesMoments.NONE;
         return new PlasmaFit(p, a, angles, reducedChiSquare, windowsUsed, iterations,
                 Collections.unmodifiableSet(EnumSet.copyOf(flags)), Arrays.copyOf(normalParameters, parameterCount),
-                areaM2, hasPrior ? alphaPrior.copy() : null, sigmaLogArea);
+                areaM2, hasPrior ? alphaPrior.copy() : null, sigmaLogArea, speedChangeMPerS, sigmaSpeedChangeMPerS);
     }
 
     private static SpeciesMoments moments(double[] m) {

@@ -24,15 +24,19 @@ import java.util.Set;
  * @param sigmaLogArea     1σ of ln A(θ) from the angles' 1σ ({@link CupGeometry#sigmaLogTransmission}): the
  *                         density's relative 1σ from the angle, in its 1σ and its bound; 0 inside full
  *                         acceptance and on failure
+ * @param speedChangeMPerS      the bulk speed's change over the sweep ΔU, m/s: the normal change over cos θ,
+ *                              as |U_p| is from U_p cos θ; NaN unless {@link #driftFitted}
+ * @param sigmaSpeedChangeMPerS 1σ of ΔU from the fit covariance with the angles' 1σ propagated, as U_p's
+ *                              ({@link FlowAngles#sigmaBulkSpeed}); NaN unless {@link #driftFitted}
  */
 public record PlasmaFit(SpeciesMoments protons, SpeciesMoments alphas, FlowAngles angles, double reducedChiSquare,
         int windowsUsed, int iterations, Set<FitFlag> flags, double[] normalParameters, double areaM2,
-        AlphaPrior alphaPrior, double sigmaLogArea) {
+        AlphaPrior alphaPrior, double sigmaLogArea, double speedChangeMPerS, double sigmaSpeedChangeMPerS) {
 
     /** A failed fit with these flags on a cup of effective area {@code areaM2}. */
     public static PlasmaFit failed(EnumSet<FitFlag> flags, int windows, FlowAngles angles, double areaM2) {
         return new PlasmaFit(SpeciesMoments.NONE, SpeciesMoments.NONE, angles, Double.NaN, windows, 0,
-                Collections.unmodifiableSet(flags), new double[0], areaM2, null, 0.0);
+                Collections.unmodifiableSet(flags), new double[0], areaM2, null, 0.0, Double.NaN, Double.NaN);
     }
 
     /** A failed fit with these flags and no cup (area NaN): nothing was fitted, so no model is drawn. */
@@ -45,7 +49,8 @@ public record PlasmaFit(SpeciesMoments protons, SpeciesMoments alphas, FlowAngle
         EnumSet<FitFlag> f = flags.isEmpty() ? EnumSet.noneOf(FitFlag.class) : EnumSet.copyOf(flags);
         f.add(flag);
         return new PlasmaFit(protons, alphas, angles, reducedChiSquare, windowsUsed, iterations,
-                Collections.unmodifiableSet(f), normalParameters, areaM2, alphaPrior, sigmaLogArea);
+                Collections.unmodifiableSet(f), normalParameters, areaM2, alphaPrior, sigmaLogArea, speedChangeMPerS,
+                sigmaSpeedChangeMPerS);
     }
 
     /** True unless a failure flag is set. */

@@ -558,6 +558,13 @@ public final class SpectrumFitter {
             out.alphaPrior.set(prior.driftMeanMPerS(), prior.driftSigmaMPerS(), prior.abundance());
         }
         out.sigmaLogArea = sigmaLogArea;
+        if (PlasmaFit.driftIn(np)) {
+            // ΔU along the flow as U_p is (moments): the normal value over cos θ, its 1σ with the angles' 1σ
+            double du = p[np - 1];
+            out.speedChangeMPerS = du / CupGeometry.cosOfFlow(angles.tanX(), angles.tanY());
+            out.sigmaSpeedChangeMPerS = o.covariance() == null ? Double.NaN
+                    : angles.sigmaBulkSpeed(du, Math.sqrt(o.covariance()[np - 1][np - 1]));
+        }
     }
 
     /**

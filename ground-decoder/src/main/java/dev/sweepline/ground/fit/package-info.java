@@ -125,7 +125,9 @@
  *       ({@code SpeedDriftFitTest}); on the narrow near-Sun bands of F13 read in the interleaved order with a
  *       ramp of 0–2 km/s the drift runs (60 of 183) agree with Hipparchus' optimiser to the bit, by F13's checks
  *       ({@code LevenbergMarquardtAgreementTest}). In closed loop (hw-sim {@code InterleavedDriftTest}) a linear ramp's ΔU is
- *       recovered and fast-wind held still gives ΔU consistent with 0.</li>
+ *       recovered and fast-wind held still gives ΔU consistent with 0. The fit reports ΔU along the flow with
+ *       its 1σ from the covariance ({@link dev.sweepline.ground.fit.PlasmaFit#speedChangeMPerS}), which the
+ *       products write (product P8).</li>
  * </ol>
  */
 package dev.sweepline.ground.fit;

@@ -52,6 +52,19 @@ public record MomentRecord(double taiSeconds, String isoTai, int apid, String mo
         return Math.toDegrees(fit.angles().thetaYRad());
     }
 
+    /**
+     * ΔU, km/s: the bulk speed's change over an interleaved sweep (telemetry ICD §4 flags bit 5; docs/physics.md,
+     * "Speed drift within an interleaved sweep"), NaN when the spectrum was not fitted with the drift term.
+     */
+    public double speedChangeKmPerS() {
+        return fit.speedChangeMPerS() * KM;
+    }
+
+    /** 1σ of ΔU, km/s, from the fit covariance with the angles' 1σ propagated (as U's); NaN as ΔU is. */
+    public double sigmaSpeedChangeKmPerS() {
+        return fit.sigmaSpeedChangeMPerS() * KM;
+    }
+
     /** Bound of n_p, cm⁻³, with the angle's part beyond full acceptance (NaN when singular or failed). */
     public double crlbDensityPerCc() {
         return bound == null ? Double.NaN

@@ -10,7 +10,10 @@ import java.util.List;
 /**
  * Builds moments.json: {@code fits} (spectra, fitted, fitFraction, alphasFitted, byFlag, fitSeconds,
  * spectraPerSecond) and {@code moments} (one object per spectrum in product units; a value that is not
- * available is JSON null, never NaN).
+ * available is JSON null, never NaN). The keys name moments.csv's quantities in camel case, in its order
+ * ({@link MomentsCsv}): {@code duKmPerS} and {@code sigmaDuKmPerS} are its {@code du_kms} and
+ * {@code sigma_du_kms}, the speed's change over an interleaved sweep (ICD §4 flags bit 5) and its 1σ, null
+ * unless the spectrum was fitted with the drift term.
  */
 public final class MomentsJson {
     private MomentsJson() {
@@ -54,6 +57,7 @@ public final class MomentsJson {
             num(o, "alphaNPerCc", al.densityPerM3() * 1e-6);
             num(o, "alphaUKmPerS", al.speedMPerS() * 1e-3);
             num(o, "alphaTK", al.temperatureK());
+            num(o, "duKmPerS", r.speedChangeKmPerS());
             num(o, "sigmaNPerCc", p.sigmaDensityPerM3() * 1e-6);
             num(o, "sigmaUKmPerS", p.sigmaSpeedMPerS() * 1e-3);
             num(o, "sigmaTK", p.sigmaTemperatureK());
@@ -62,6 +66,7 @@ public final class MomentsJson {
             num(o, "sigmaAlphaNPerCc", al.sigmaDensityPerM3() * 1e-6);
             num(o, "sigmaAlphaUKmPerS", al.sigmaSpeedMPerS() * 1e-3);
             num(o, "sigmaAlphaTK", al.sigmaTemperatureK());
+            num(o, "sigmaDuKmPerS", r.sigmaSpeedChangeKmPerS());
             num(o, "crlbNPerCc", r.crlbDensityPerCc());
             num(o, "crlbUKmPerS", r.crlbSpeedKmPerS());
             num(o, "crlbTK", r.crlbTemperatureK());

@@ -160,6 +160,7 @@ final class QuickLook {
         fr.add(row("spectra", Integer.toString(fits.spectra())));
         fr.add(row("fitted", fits.fitted() + " (" + num(100 * fits.fitFraction(), "%.1f") + " %)"));
         fr.add(row("joint proton + alpha fits", Integer.toString(fits.alphasFitted())));
+        fr.add(row("speed-drift fits (interleaved spectra)", driftFits(collector.records())));
         for (FitFlag f : FitFlag.values()) {
             fr.add(row("flag " + f.name(), Integer.toString(fits.byFlag().get(f))));
         }
@@ -210,6 +211,19 @@ final class QuickLook {
             out.add(num(median(v[k]), fmt[k]));
         }
         return out;
+    }
+
+    /** How many fits carry ΔU, and the median |ΔU| over them in km/s (moments.csv {@code du_kms}). */
+    static String driftFits(List<MomentRecord> r) {
+        double[] du = new double[r.size()];
+        int n = 0;
+        for (MomentRecord m : r) {
+            double v = m.speedChangeKmPerS();
+            if (m.ok() && Double.isFinite(v)) {
+                du[n++] = Math.abs(v);
+            }
+        }
+        return n == 0 ? "0" : n + " (median |dU| " + num(median(Arrays.copyOf(du, n)), "%.3f") + " km/s)";
     }
 
     static double median(double[] a) {

@@ -34,6 +34,12 @@
  *   <li>P6 empty maps read "none", the allocation sentence follows the bit rates, moments.json carries the
  *       sigma and alpha fields of moments.csv ({@code ReportContentTest}); plot labels fall on 1-2-5 values
  *       and an empty series draws no point ({@code PlotLabelsTest}).</li>
+ *   <li>P8 a spectrum flagged interleaved (telemetry ICD §4 flags bit 5) and fitted with the speed drift has
+ *       moments.csv's {@code du_kms} (ΔU, the bulk speed's change over the sweep; docs/physics.md, "Speed drift
+ *       within an interleaved sweep") and {@code sigma_du_kms} (its 1σ from the fit covariance, the Cramér–Rao
+ *       bound's at the truth) and moments.json's {@code duKmPerS} and {@code sigmaDuKmPerS}; a monotonic one has
+ *       them empty and null; the quick-look's Fits table counts the drift fits with their median |ΔU|
+ *       ({@code SpeedChangeColumnsTest}).</li>
  *   <li>P7 spectra.csv from the view is the file commons-csv's {@code printRecord} of the boxed values gives:
  *       survey and focus, currents either side of zero, unknown edges ({@code SpectraCsvWriterTest}).</li>
  * </ol>

@@ -49,10 +49,10 @@ class ReportContentTest {
         for (Iterator<String> it = first.fieldNames(); it.hasNext();) {
             keys.add(it.next());
         }
-        // the sigma and alpha columns of MomentsCsv.HEADER, in the JSON's names
+        // the sigma, alpha and speed-change columns of MomentsCsv.HEADER, in the JSON's names
         for (String k : new String[] {"alphaUKmPerS", "alphaTK", "sigmaNPerCc", "sigmaUKmPerS", "sigmaTK",
             "sigmaThetaXDeg", "sigmaThetaYDeg", "sigmaAlphaNPerCc", "sigmaAlphaUKmPerS", "sigmaAlphaTK",
-            "crlbAlphaNPerCc"}) {
+            "crlbAlphaNPerCc", "duKmPerS", "sigmaDuKmPerS"}) {
             assertTrue(keys.contains(k), k);
         }
         MomentRecord r = products.moments().get(0);

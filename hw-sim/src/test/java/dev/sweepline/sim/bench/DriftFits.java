@@ -68,7 +68,7 @@ final class DriftFits {
             double[] p = m.fit().normalParameters();
             double sec = m.speedKmPerS() * 1e3 / p[1];
             boolean drift = m.fit().driftFitted();
-            double change = drift ? m.fit().normalSpeedChangeMPerS() * sec / 1e3 : Double.NaN;
+            double change = m.speedChangeKmPerS(); // moments.csv du_kms: NaN unless drift-fitted
             double sigmaChange = drift && m.bound() != null ? m.bound().sigma()[p.length - 1] * sec / 1e3 : Double.NaN;
             out.add(new Fit(drift, change, sigmaChange, u1 - u0, m.speedKmPerS() - mid, m.crlbSpeedKmPerS(),
                     (u0 + u1) / 2 - mid, m.fit().reducedChiSquare()));
