@@ -1,7 +1,7 @@
 package dev.sweepline.sim.cli;
 
 /**
- * A JVM for {@link JitPolicyTest}: applies the mode of its argument ({@code c1} or {@code tiered}), prints
+ * A JVM for {@link JitPolicyTest}: applies the mode of its argument ({@code c1} or {@code tiered}), prints on stderr (apart from HotSpot's compilation lines on stdout)
  * whether it is in force, then calls {@link #work} often enough for any compiler tier to take it; with
  * {@code default}, prints the mode the command line's own process chooses for a campaign's size.
  */
@@ -26,18 +26,18 @@ final class JitPolicyProbe {
             JitPolicy.ownProcess(); // as BenchMain.main does
             long[][] cases = {{JitPolicy.C1_MAX_RUNS, 2}, {JitPolicy.C1_MAX_RUNS + 1, 2}, {JitPolicy.C1_MAX_RUNS, 1}};
             for (long[] c : cases) {
-                System.out.println("default " + c[0] + " runs " + c[1] + " of 2 cores "
+                System.err.println("default " + c[0] + " runs " + c[1] + " of 2 cores "
                         + JitPolicy.effective(null, c[0], (int) c[1], 2));
             }
             return;
         }
         JitPolicy.Mode mode = "c1".equals(args[0]) ? JitPolicy.Mode.C1 : JitPolicy.Mode.TIERED;
-        System.out.println("applied " + JitPolicy.apply(mode));
+        System.err.println("applied " + JitPolicy.apply(mode));
         double sum = 0;
         for (int i = 0; i < CALLS; i++) {
             sum += work(i);
         }
-        System.out.println("sum " + sum);
+        System.err.println("sum " + sum);
         Thread.sleep(300); // lets a queued compilation finish and print before the JVM exits
     }
 }

@@ -5,6 +5,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.io.IOException;
 import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.Set;
@@ -59,13 +60,21 @@ class JitPolicyTest {
 
     private static String probe(String mode) throws IOException, InterruptedException {
         Path java = Path.of(System.getProperty("java.home"), "bin", "java");
-        Process p = new ProcessBuilder(List.of(java.toString(), "-XX:+PrintCompilation", "-cp",
-                System.getProperty("java.class.path"), JitPolicyProbe.class.getName(), mode))
-                .redirectErrorStream(true).start();
-        String out = new String(p.getInputStream().readAllBytes(), StandardCharsets.UTF_8);
-        assertTrue(p.waitFor(60, TimeUnit.SECONDS), "probe " + mode + " did not end");
-        assertEquals(0, p.exitValue(), out);
-        return out;
+        // the probe reports on stderr, into a file of its own: HotSpot's compiler threads print their
+        // PrintCompilation lines on stdout whenever they finish, which can split a line of the probe's
+        Path report = Files.createTempFile("jit-probe-", ".txt");
+        try {
+            Process p = new ProcessBuilder(List.of(java.toString(), "-XX:+PrintCompilation", "-cp",
+                    System.getProperty("java.class.path"), JitPolicyProbe.class.getName(), mode))
+                    .redirectError(report.toFile()).start();
+            String out = new String(p.getInputStream().readAllBytes(), StandardCharsets.UTF_8);
+            assertTrue(p.waitFor(60, TimeUnit.SECONDS), "probe " + mode + " did not end");
+            String all = out + "\n" + Files.readString(report, StandardCharsets.UTF_8);
+            assertEquals(0, p.exitValue(), all);
+            return all;
+        } finally {
+            Files.deleteIfExists(report);
+        }
     }
 
     private static Set<String> levels(String out) {
