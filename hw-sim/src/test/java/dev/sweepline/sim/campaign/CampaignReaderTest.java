@@ -50,7 +50,7 @@ class CampaignReaderTest {
         CampaignSpec demo = CampaignReader.load(Path.of("src/main/resources/campaigns/focus-style.yaml"));
         assertEquals(3, demo.setCount());
         assertArrayEquals(new double[] {0, 0, 0, 0, 16}, demo.setValues(0));
-        assertArrayEquals(new double[] {19, 320_000, 1, 2, 128}, demo.setValues(2));
+        assertArrayEquals(new double[] {19, 350_000, 3, 2, 128}, demo.setValues(2));
     }
 
     /** Each broken line names its file, line and field (the bad-input rule of the project). */
