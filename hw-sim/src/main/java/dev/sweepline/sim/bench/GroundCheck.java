@@ -19,7 +19,6 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
 import java.util.TreeMap;
-import java.util.concurrent.atomic.AtomicLongArray;
 import java.util.function.LongFunction;
 
 /**
@@ -32,15 +31,6 @@ import java.util.function.LongFunction;
  * non-stationary ({@link NonStationarity}) are counted, and the errors are given with and without them.
  */
 public final class GroundCheck {
-    /** Degrees of freedom up to which {@link #nonStationary} keeps the threshold it computed (a spectrum's windows). */
-    static final int CACHED_DOF = 1024;
-    /**
-     * {@link NonStationarity#threshold} by degrees of freedom, as raw bits, 0 until computed (a threshold is
-     * positive, never +0.0): every fit of a run has one of a few dof, and each threshold is an inverse
-     * chi-square search. Racing workers store the same bits.
-     */
-    private static final AtomicLongArray THRESHOLD_BITS = new AtomicLongArray(CACHED_DOF + 1);
-
     private final FitCollector fits = new FitCollector();
     private final TelemetryDecoder decoder;
     private final long coarseAtTickZero;
@@ -126,7 +116,7 @@ public final class GroundCheck {
             }
             int dof = m.fit().windowsUsed() - m.fit().normalParameters().length;
             double chi2 = m.fit().reducedChiSquare();
-            out.add(new ComparedFit(r, zz, nonStationary(chi2, dof), chi2, dof, m.fit().alphasFitted(),
+            out.add(new ComparedFit(r, zz, NonStationarity.flagged(chi2, dof), chi2, dof, m.fit().alphasFitted(),
                     hasAlphas(plasma), sweep.mode()));
         }
         return out;
@@ -153,23 +143,6 @@ public final class GroundCheck {
         MomentErrors stationary = MomentErrors.of(relStationary, zStationary);
         return new GroundFigures(spectra, compared.size(), all.medianRelative(), all.p95Relative(), all.crlbRatio(),
                 all.compared(), all.robustCrlbRatio(), rel.size() - relStationary.size(), stationary);
-    }
-
-    /**
-     * {@link NonStationarity#flagged}, with the threshold of each dof computed once: the same rule on the same
-     * threshold bits.
-     */
-    static boolean nonStationary(double reducedChiSquare, int dof) {
-        if (dof < 1 || dof > CACHED_DOF) {
-            return NonStationarity.flagged(reducedChiSquare, dof);
-        }
-        long bits = THRESHOLD_BITS.get(dof);
-        if (bits == 0) {
-            bits = Double.doubleToRawLongBits(NonStationarity.threshold(dof));
-            THRESHOLD_BITS.set(dof, bits);
-        }
-        double t = Double.longBitsToDouble(bits);
-        return Double.isFinite(reducedChiSquare) && Double.isFinite(t) && reducedChiSquare > t;
     }
 
     private static boolean hasAlphas(PlasmaState plasma) {

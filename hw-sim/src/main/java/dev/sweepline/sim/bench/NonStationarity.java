@@ -1,5 +1,6 @@
 package dev.sweepline.sim.bench;
 
+import java.util.concurrent.atomic.AtomicLongArray;
 import org.hipparchus.distribution.continuous.ChiSquaredDistribution;
 
 /**
@@ -14,6 +15,15 @@ public final class NonStationarity {
     /** Quantile of chi-square(nu) / nu above which a sweep is flagged: a one-in-a-thousand false alarm. */
     public static final double QUANTILE = 0.999;
 
+    /** Degrees of freedom up to which {@link #threshold} keeps what it computed (a spectrum's windows). */
+    static final int CACHED_DOF = 1024;
+    /**
+     * {@link #threshold} by degrees of freedom, as raw bits, 0 until computed (a threshold is positive, never
+     * +0.0): every fit of a run has one of a few dof, and each threshold is an inverse chi-square search.
+     * Racing threads store the same bits.
+     */
+    private static final AtomicLongArray THRESHOLD_BITS = new AtomicLongArray(CACHED_DOF + 1);
+
     private NonStationarity() {
     }
 
@@ -22,6 +32,19 @@ public final class NonStationarity {
         if (dof < 1) {
             return Double.NaN;
         }
+        if (dof > CACHED_DOF) {
+            return quantile(dof);
+        }
+        long bits = THRESHOLD_BITS.get(dof);
+        if (bits == 0) {
+            bits = Double.doubleToRawLongBits(quantile(dof));
+            THRESHOLD_BITS.set(dof, bits);
+        }
+        return Double.longBitsToDouble(bits);
+    }
+
+    /** The {@link #QUANTILE} quantile of chi-square(dof) / dof, computed afresh. */
+    static double quantile(int dof) {
         return new ChiSquaredDistribution(dof).inverseCumulativeProbability(QUANTILE) / dof;
     }
 
