@@ -48,7 +48,7 @@ public final class ErrorFunction {
     public static double erf(double x) {
         double a = Math.abs(x);
         if (a <= SMALL) {
-            return x * horner(P1, x * x) / horner(Q1, x * x);
+            return x * p1(x * x) / q1(x * x);
         }
         double oneMinus = 1.0 - erfcOfPositive(a);
         return x < 0 ? -oneMinus : oneMinus;
@@ -58,7 +58,7 @@ public final class ErrorFunction {
     public static double erfc(double x) {
         double a = Math.abs(x);
         if (a <= SMALL) {
-            return 1.0 - x * horner(P1, x * x) / horner(Q1, x * x);
+            return 1.0 - x * p1(x * x) / q1(x * x);
         }
         double e = erfcOfPositive(a);
         return x < 0 ? 2.0 - e : e;
@@ -85,17 +85,81 @@ public final class ErrorFunction {
         }
         double scaled;
         if (a <= MIDDLE) {
-            scaled = horner(P2, a) / horner(Q2, a);
+            scaled = p2(a) / q2(a);
         } else {
             double z = 1.0 / (a * a);
-            scaled = (INV_SQRT_PI - z * horner(P3, z) / horner(Q3, z)) / a;
+            scaled = (INV_SQRT_PI - z * p3(z) / q3(z)) / a;
         }
-        double s = Math.floor(a * 16.0) / 16.0;
-        return Math.exp(-s * s) * Math.exp(-(a - s) * (a + s)) * scaled;
+        // (int) truncates toward zero: for 0 < a·16 < 2³¹ that is Math.floor, so s is floor(16a)/16 as before
+        int sixteenths = (int) (a * 16.0);
+        double s = sixteenths / 16.0;
+        return EXP_MINUS_SQUARE[sixteenths] * Math.exp(-(a - s) * (a + s)) * scaled;
     }
 
-    /** c[0] t^n + ... + c[n] by Horner's rule. */
-    private static double horner(double[] c, double t) {
+    /**
+     * e^(−s²) for s = k/16, k = 0 … 16·{@link #UNDERFLOW}: the factor of {@link #erfcOfPositive} whose argument
+     * is one of these multiples, filled with the very expression it replaces ({@code Math.exp(-s * s)}) so that it holds the same
+     * bits (HotSpot calls one exp routine from the interpreter and from compiled code; ErrorFunctionTest
+     * compares every entry with the expression evaluated in the test).
+     */
+    private static final double[] EXP_MINUS_SQUARE = expMinusSquare();
+
+    private static double[] expMinusSquare() {
+        double[] t = new double[(int) (UNDERFLOW * 16.0) + 1];
+        for (int k = 0; k < t.length; k++) {
+            double s = k / 16.0;
+            t[k] = Math.exp(-s * s);
+        }
+        return t;
+    }
+
+    /** The table's entry for {@code k} sixteenths, for the test that compares it with the expression. */
+    static double expMinusSquareOfSixteenths(int k) {
+        return EXP_MINUS_SQUARE[k];
+    }
+
+    // Horner's rule unrolled per polynomial: the operations of horner(c, t), in its order (the quick compiler
+    // keeps a loop's bounds checks and counter; ErrorFunctionTest checks each against horner bit for bit)
+
+    static double p1(double t) {
+        final double[] c = P1;
+        return (((c[0] * t + c[1]) * t + c[2]) * t + c[3]) * t + c[4];
+    }
+
+    static double q1(double t) {
+        final double[] c = Q1;
+        return (((c[0] * t + c[1]) * t + c[2]) * t + c[3]) * t + c[4];
+    }
+
+    static double p2(double t) {
+        final double[] c = P2;
+        return (((((((c[0] * t + c[1]) * t + c[2]) * t + c[3]) * t + c[4]) * t + c[5]) * t + c[6]) * t + c[7]) * t
+                + c[8];
+    }
+
+    static double q2(double t) {
+        final double[] c = Q2;
+        return (((((((c[0] * t + c[1]) * t + c[2]) * t + c[3]) * t + c[4]) * t + c[5]) * t + c[6]) * t + c[7]) * t
+                + c[8];
+    }
+
+    static double p3(double t) {
+        final double[] c = P3;
+        return ((((c[0] * t + c[1]) * t + c[2]) * t + c[3]) * t + c[4]) * t + c[5];
+    }
+
+    static double q3(double t) {
+        final double[] c = Q3;
+        return ((((c[0] * t + c[1]) * t + c[2]) * t + c[3]) * t + c[4]) * t + c[5];
+    }
+
+    /** The coefficient arrays, for the test that compares the unrolled forms with {@link #horner}. */
+    static double[][] coefficients() {
+        return new double[][] {P1.clone(), Q1.clone(), P2.clone(), Q2.clone(), P3.clone(), Q3.clone()};
+    }
+
+    /** c[0] t^n + ... + c[n] by Horner's rule: the loop the unrolled forms above spell out. */
+    static double horner(double[] c, double t) {
         double r = c[0];
         for (int i = 1; i < c.length; i++) {
             r = r * t + c[i];
