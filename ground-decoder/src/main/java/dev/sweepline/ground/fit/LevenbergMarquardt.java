@@ -92,8 +92,12 @@ final class LevenbergMarquardt {
     private final double[] phys = new double[MAX_PARAMETERS];
     private final double[] diag = new double[MAX_PARAMETERS];
     private final int[] permutation = new int[MAX_PARAMETERS];
+    /** Per parameter of the current fit, {@link #isLog}: kept so that the per-row loops need not compute it. */
+    private final boolean[] logarithm = new boolean[MAX_PARAMETERS];
     private final double[] diagR = new double[MAX_PARAMETERS];
     private final double[] columnNorm = new double[MAX_PARAMETERS];
+    /** Per column, its squared norm over the rows the next QR step works on ({@link #factorise}). */
+    private final double[] pendingNorm = new double[MAX_PARAMETERS];
     private final double[] beta = new double[MAX_PARAMETERS];
     private final double[] direction = new double[MAX_PARAMETERS];
     private final double[] work1 = new double[MAX_PARAMETERS];
@@ -163,6 +167,9 @@ final class LevenbergMarquardt {
         ensure(m, rows);
         parameterCount = np;
         driftIndex = model.driftIndex();
+        for (int a = 0; a < np; a++) {
+            logarithm[a] = isLog(a);
+        }
         hasCovariance = false;
         for (int j = 0; j < m; j++) {
             double s = Math.max(sigma[j], LeastSquaresRun.MIN_SIGMA_AMPS);
@@ -206,6 +213,14 @@ final class LevenbergMarquardt {
      * false when the fit fails.
      */
     private boolean minimise(PlasmaModel model, double[] amps, AlphaPrior prior, int np, int m, double norm) {
+        // the fields the loops read, as locals of the same names (the quick compiler reloads a field per iteration)
+        final int rows = this.rows;
+        final double[] qr = this.qr;
+        final double[] qtr = this.qtr;
+        final int[] permutation = this.permutation;
+        final double[] direction = this.direction;
+        final double[] diag = this.diag;
+        final double[] work1 = this.work1;
         int solved = Math.min(rows, np);
         int evaluations = 1;
         double cost = norm;
@@ -219,9 +234,6 @@ final class LevenbergMarquardt {
                 return false;
             }
             iterations++;
-            for (int i = 0; i < np * rows; i++) {
-                qr[i] = -jacobian[i];
-            }
             if (!factorise(np)) {
                 return false;
             }
@@ -356,35 +368,43 @@ final class LevenbergMarquardt {
     }
 
     /**
-     * Householder QR with column pivoting of {@link #qr} (−J; MINPACK qrfac): the reflections' vectors in and
-     * below the diagonal, R above it, R's diagonal in {@link #diagR}, the reflections' factors in {@link #beta},
-     * the columns' norms before it in {@link #columnNorm}, the order in {@link #permutation} and the rank in
-     * {@link #rank}; false when a column norm is not finite.
+     * Householder QR with column pivoting of {@link #qr}, filled here with −J ({@link #jacobian}; MINPACK qrfac):
+     * the reflections' vectors in and below the diagonal, R above it, R's diagonal in {@link #diagR}, the
+     * reflections' factors in {@link #beta}, the columns' norms before it in {@link #columnNorm}, the order in
+     * {@link #permutation} and the rank in {@link #rank}; false when a column norm is not finite.
+     *
+     * <p>Step k picks the remaining column with the largest squared norm over rows k and below. That sum is
+     * accumulated, in the same row order and so with the same bits, while step k − 1 updates the column (and
+     * for step 0 while −J is copied in), in {@link #pendingNorm}, rather than in a pass of its own over the
+     * columns; array fields and strides are read into locals, since the quick compiler (C1, which the bench's
+     * campaigns run) reloads a field on every iteration.
      */
     private boolean factorise(int np) {
+        final double[] q = qr;
+        final double[] j0 = jacobian;
+        final int[] perm = permutation;
+        final double[] pending = pendingNorm;
+        final int m = rows;
         Arrays.fill(diagR, 0, np, 0.0);
         Arrays.fill(beta, 0, np, 0.0);
         for (int k = 0; k < np; k++) {
-            permutation[k] = k;
+            perm[k] = k;
             double norm2 = 0;
-            for (int i = 0; i < rows; i++) {
-                double v = qr[k * rows + i];
+            for (int i = k * m, end = i + m; i < end; i++) {
+                double v = -j0[i];
+                q[i] = v;
                 norm2 += v * v;
             }
+            pending[k] = norm2;
             columnNorm[k] = Math.sqrt(norm2);
         }
-        rank = Math.min(rows, np);
+        rank = Math.min(m, np);
         for (int k = 0; k < np; k++) {
             // the column of the largest norm below row k next
             int next = -1;
             double ak2 = Double.NEGATIVE_INFINITY;
             for (int i = k; i < np; i++) {
-                int base = permutation[i] * rows;
-                double norm2 = 0;
-                for (int j = k; j < rows; j++) {
-                    double v = qr[base + j];
-                    norm2 += v * v;
-                }
+                double norm2 = pending[perm[i]];
                 if (Double.isInfinite(norm2) || Double.isNaN(norm2)) {
                     return false;
                 }
@@ -397,26 +417,35 @@ final class LevenbergMarquardt {
                 rank = k;
                 return true;
             }
-            int pk = permutation[next];
-            permutation[next] = permutation[k];
-            permutation[k] = pk;
-            int kBase = pk * rows;
-            double akk = qr[kBase + k];
+            int pk = perm[next];
+            perm[next] = perm[k];
+            perm[k] = pk;
+            int kBase = pk * m;
+            double akk = q[kBase + k];
             double alpha = akk > 0 ? -Math.sqrt(ak2) : Math.sqrt(ak2);
             double betak = 1.0 / (ak2 - akk * alpha);
             beta[pk] = betak;
             diagR[pk] = alpha;
-            qr[kBase + k] -= alpha;
+            q[kBase + k] -= alpha;
+            int length = m - k;
+            int kStart = kBase + k;
             for (int dk = np - 1 - k; dk > 0; dk--) {
-                int cBase = permutation[k + dk] * rows;
+                int pc = perm[k + dk];
+                int cStart = pc * m + k;
                 double gamma = 0;
-                for (int j = k; j < rows; j++) {
-                    gamma += qr[kBase + j] * qr[cBase + j];
+                for (int j = 0; j < length; j++) {
+                    gamma += q[kStart + j] * q[cStart + j];
                 }
                 gamma *= betak;
-                for (int j = k; j < rows; j++) {
-                    qr[cBase + j] -= gamma * qr[kBase + j];
+                // row k leaves the next step's sum; rows below it enter it as they are updated
+                q[cStart] -= gamma * q[kStart];
+                double norm2 = 0;
+                for (int j = 1; j < length; j++) {
+                    double v = q[cStart + j] - gamma * q[kStart + j];
+                    q[cStart + j] = v;
+                    norm2 += v * v;
                 }
+                pending[pc] = norm2;
             }
         }
         return true;
@@ -424,16 +453,19 @@ final class LevenbergMarquardt {
 
     /** {@link #qtr} ← Qᵀ {@link #qtr}, Q of {@link #factorise}. */
     private void applyQTransposed(int np) {
+        final double[] q = qr;
+        final double[] t = qtr;
+        final int m = rows;
         for (int k = 0; k < np; k++) {
             int pk = permutation[k];
-            int base = pk * rows;
+            int base = pk * m;
             double gamma = 0;
-            for (int i = k; i < rows; i++) {
-                gamma += qr[base + i] * qtr[i];
+            for (int i = k; i < m; i++) {
+                gamma += q[base + i] * t[i];
             }
             gamma *= beta[pk];
-            for (int i = k; i < rows; i++) {
-                qtr[i] -= gamma * qr[base + i];
+            for (int i = k; i < m; i++) {
+                t[i] -= gamma * q[base + i];
             }
         }
     }
@@ -445,6 +477,18 @@ final class LevenbergMarquardt {
      * rank-deficient) and whose upper end is ‖D⁻¹Jᵀr‖/Δ, from the previous λ held to it.
      */
     private double dampingForRadius(int np, double radius, double previous) {
+        // the fields the loops read, as locals of the same names (the quick compiler reloads a field per iteration)
+        final int rows = this.rows;
+        final int rank = this.rank;
+        final double[] qr = this.qr;
+        final double[] qtr = this.qtr;
+        final int[] permutation = this.permutation;
+        final double[] direction = this.direction;
+        final double[] diag = this.diag;
+        final double[] diagR = this.diagR;
+        final double[] work1 = this.work1;
+        final double[] work2 = this.work2;
+        final double[] work3 = this.work3;
         int solved = Math.min(rows, np);
         // the Gauss–Newton direction; a least-squares one when J is rank-deficient
         for (int j = 0; j < rank; j++) {
@@ -570,6 +614,12 @@ final class LevenbergMarquardt {
      * R's diagonal in {@link #qr} and its diagonal in {@link #work2}, {@link #work3} scratch.
      */
     private void dampedDirection(int np, int solved) {
+        // the fields the loops read, as locals of the same names (the quick compiler reloads a field per iteration)
+        final int rows = this.rows;
+        final double[] qr = this.qr;
+        final int[] permutation = this.permutation;
+        final double[] direction = this.direction;
+        final double[] work1 = this.work1;
         double[] sDiagonal = work2;
         double[] z = work3;
         for (int j = 0; j < solved; j++) {
@@ -678,9 +728,15 @@ final class LevenbergMarquardt {
      */
     private void evaluate(PlasmaModel model, double[] amps, AlphaPrior prior, double[] at, int np, int m,
             double[] r, double[] jj) {
+        final double[] phys = this.phys;
+        final boolean[] logarithm = this.logarithm;
+        final int rows = this.rows;
         for (int a = 0; a < np; a++) {
-            phys[a] = isLog(a) ? Math.exp(at[a]) : at[a];
+            phys[a] = logarithm[a] ? Math.exp(at[a]) : at[a];
         }
+        final double[] current = this.current;
+        final double[] weight = this.weight;
+        final double[][] physicalJacobian = this.physicalJacobian;
         model.evaluate(phys, current, physicalJacobian);
         double cost = 0;
         for (int j = 0; j < m; j++) {
@@ -689,8 +745,8 @@ final class LevenbergMarquardt {
             r[j] = rj;
             cost += rj * rj;
             double[] pj = physicalJacobian[j];
-            for (int a = 0; a < np; a++) {
-                jj[a * rows + j] = w * (isLog(a) ? pj[a] * phys[a] : pj[a]);
+            for (int a = 0, i = j; a < np; a++, i += rows) {
+                jj[i] = w * (logarithm[a] ? pj[a] * phys[a] : pj[a]);
             }
         }
         if (prior != null) {
