@@ -35,15 +35,22 @@ public final class FisherMatrix {
         return f;
     }
 
-    /** The bound of a Fisher matrix; singular when a diagonal is 0 or the scaled condition is too large. */
+    /**
+     * The bound of a Fisher matrix; singular when a diagonal is 0 or the scaled condition is too large.
+     *
+     * <p>S, F scaled to a unit diagonal, is decomposed by Hipparchus' SingularValueDecomposition, S = U Σ Vᵀ;
+     * cond = σ_max/σ_min. Its solver's inverse is V Σ⁻¹ Uᵀ, each σ_k above its cut-off (np σ_max 2⁻⁵², at least
+     * 2⁻⁵¹¹) giving 1/σ_k: below {@link #SINGULAR_CONDITION} every σ_k is above it (σ_min &gt; 10⁻¹² σ_max and
+     * σ_max ≥ tr S/np = 1), so (S⁻¹)_aa = Σ_k V_ak (U_ak · (1/σ_k)), summed over k upwards from 0 as the solver's
+     * matrix product sums, is taken here without the solver's transpose, copies and full product: the same bits
+     * ({@code FisherMatrixBitsTest}, against the solver).
+     */
     public static CramerRaoBound bound(double[][] f) {
         int np = f.length;
-        double[] nan = new double[np];
-        Arrays.fill(nan, Double.NaN);
         double[] scale = new double[np];
         for (int a = 0; a < np; a++) {
             if (!(f[a][a] > 0) || !Double.isFinite(f[a][a])) {
-                return new CramerRaoBound(nan, true, Double.POSITIVE_INFINITY);
+                return new CramerRaoBound(nan(np), true, Double.POSITIVE_INFINITY);
             }
             scale[a] = 1 / Math.sqrt(f[a][a]);
         }
@@ -52,21 +59,33 @@ public final class FisherMatrix {
             for (int b = 0; b < np; b++) {
                 s[a][b] = f[a][b] * scale[a] * scale[b];
                 if (!Double.isFinite(s[a][b])) {
-                    return new CramerRaoBound(nan, true, Double.POSITIVE_INFINITY);
+                    return new CramerRaoBound(nan(np), true, Double.POSITIVE_INFINITY);
                 }
             }
         }
         SingularValueDecomposition svd = new SingularValueDecomposition(new Array2DRowRealMatrix(s, false));
         double cond = svd.getConditionNumber();
         if (!(cond < SINGULAR_CONDITION)) {
-            return new CramerRaoBound(nan, true, cond);
+            return new CramerRaoBound(nan(np), true, cond);
         }
-        RealMatrix inv = svd.getSolver().getInverse();
+        RealMatrix u = svd.getU();
+        RealMatrix v = svd.getV();
+        double[] singularValues = svd.getSingularValues();
         double[] sigma = new double[np];
         for (int a = 0; a < np; a++) {
-            sigma[a] = Math.sqrt(inv.getEntry(a, a)) * scale[a];
+            double inverseDiagonal = 0;
+            for (int k = 0; k < np; k++) {
+                inverseDiagonal += v.getEntry(a, k) * (u.getEntry(a, k) * (1 / singularValues[k]));
+            }
+            sigma[a] = Math.sqrt(inverseDiagonal) * scale[a];
         }
         return new CramerRaoBound(sigma, false, cond);
+    }
+
+    private static double[] nan(int np) {
+        double[] nan = new double[np];
+        Arrays.fill(nan, Double.NaN);
+        return nan;
     }
 
     /** The bound of a model at {@code parameters} (physical) with per-window 1σ. */
