@@ -29,11 +29,33 @@ public final class NoiseModel {
 
     /** Variance of one quadrant sample, A², for current {@code amps} on {@code range} over {@code periods}. */
     public double quadrantVariance(double amps, int range, int periods) {
-        double bandwidthHz = 1 / (2 * Math.max(1, periods) * instrument.modulator().modulationPeriodSeconds());
+        double bandwidthHz = bandwidthHz(periods);
+        return quadrantVariance(amps, bandwidthHz, thermalVariance(range, bandwidthHz), quantisationVariance(range));
+    }
+
+    /**
+     * The same variance from its parts that do not depend on the current, computed once per window (a window's
+     * four quadrants share range and integration): shot noise 2e|I|B, plus {@code thermal}, plus
+     * {@code quantisation}, summed in that order (the same bits as {@link #quadrantVariance(double, int, int)}).
+     */
+    public double quadrantVariance(double amps, double bandwidthHz, double thermal, double quantisation) {
+        return 2 * PlasmaConstants.ELEMENTARY_CHARGE_C * Math.abs(amps) * bandwidthHz + thermal + quantisation;
+    }
+
+    /** B = 1/(2 T_int) of {@code periods} integration periods, Hz. */
+    public double bandwidthHz(int periods) {
+        return 1 / (2 * Math.max(1, periods) * instrument.modulator().modulationPeriodSeconds());
+    }
+
+    /** Johnson noise of the feedback resistor of {@code range} over {@code bandwidthHz}, 4kTB/R_f, A². */
+    public double thermalVariance(int range, double bandwidthHz) {
         double feedbackOhms = instrument.gains().feedbackOhms(range);
+        return 4 * PlasmaConstants.BOLTZMANN_J_PER_K * instrument.gains().temperatureK() * bandwidthHz / feedbackOhms;
+    }
+
+    /** Quantisation noise of {@code range}, LSB²/12, A². */
+    public double quantisationVariance(int range) {
         double lsb = lsbAmps(range);
-        return 2 * PlasmaConstants.ELEMENTARY_CHARGE_C * Math.abs(amps) * bandwidthHz
-                + 4 * PlasmaConstants.BOLTZMANN_J_PER_K * instrument.gains().temperatureK() * bandwidthHz / feedbackOhms
-                + lsb * lsb / 12;
+        return lsb * lsb / 12;
     }
 }

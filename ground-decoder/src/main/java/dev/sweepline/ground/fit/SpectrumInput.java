@@ -96,9 +96,13 @@ public record SpectrumInput(double[] lowVolts, double[] highVolts, double[] tota
             lo[k] = s.lowVolts(i);
             hi[k] = s.highVolts(i);
             double var = 0;
+            int range = s.gainRange(i);
+            double bandwidthHz = noise.bandwidthHz(s.integrationPeriods(i));
+            double thermal = noise.thermalVariance(range, bandwidthHz);
+            double quantisation = noise.quantisationVariance(range);
             for (int q = 0; q < DecodedSpectrum.QUADRANTS; q++) {
                 double a = s.currentAmps(q, i);
-                double v = noise.quadrantVariance(a, s.gainRange(i), s.integrationPeriods(i));
+                double v = noise.quadrantVariance(a, bandwidthHz, thermal, quantisation);
                 qa[q][k] = a;
                 qs[q][k] = Math.sqrt(v);
                 tot[k] += a;

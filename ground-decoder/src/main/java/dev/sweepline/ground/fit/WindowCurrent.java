@@ -60,13 +60,24 @@ public final class WindowCurrent {
      */
     static void combine(double chargeAreaC, double densityPerM3, double speedMPerS, double w, double v1,
             double v2, double x1, double x2, double e1, double e2, double derf, double[] out) {
+        out[VALUE] = combineInto(chargeAreaC, densityPerM3, speedMPerS, w, v1, v2, x1, x2, e1, e2, derf, out, D_DENSITY);
+    }
+
+    /**
+     * {@link #combine}'s I, returned, with ∂I/∂n, ∂I/∂U, ∂I/∂w into {@code row[offset..offset + 2]} (none when
+     * {@code row} is null): a model writes them straight into its Jacobian row.
+     */
+    static double combineInto(double chargeAreaC, double densityPerM3, double speedMPerS, double w, double v1,
+            double v2, double x1, double x2, double e1, double e2, double derf, double[] row, int offset) {
         double qnA = chargeAreaC * densityPerM3;
         double bracket = 0.5 * speedMPerS * derf + w / (2 * PlasmaConstants.SQRT_PI) * (e1 - e2);
-        out[VALUE] = qnA * bracket;
-        out[D_DENSITY] = chargeAreaC * bracket;
-        out[D_SPEED] = qnA * (0.5 * derf + (v1 * e1 - v2 * e2) / (w * PlasmaConstants.SQRT_PI));
-        out[D_THERMAL] = qnA * ((x1 * v1 * e1 - x2 * v2 * e2) / (w * PlasmaConstants.SQRT_PI)
-                + (e1 - e2) / (2 * PlasmaConstants.SQRT_PI));
+        if (row != null) {
+            row[offset] = chargeAreaC * bracket;
+            row[offset + 1] = qnA * (0.5 * derf + (v1 * e1 - v2 * e2) / (w * PlasmaConstants.SQRT_PI));
+            row[offset + 2] = qnA * ((x1 * v1 * e1 - x2 * v2 * e2) / (w * PlasmaConstants.SQRT_PI)
+                    + (e1 - e2) / (2 * PlasmaConstants.SQRT_PI));
+        }
+        return qnA * bracket;
     }
 
     /** erfc|x| at an edge: one rational evaluation serves both {@link #erfOfEdge} and the tail differences. */
