@@ -20,16 +20,28 @@ public final class FisherMatrix {
     private FisherMatrix() {
     }
 
-    /** F from a Jacobian [window][parameter] and per-window 1σ. */
+    /**
+     * F from a Jacobian [window][parameter] and per-window 1σ. Each term J_ja J_jb w_j is the same product
+     * either way round (multiplication commutes in IEEE 754 arithmetic), so F is symmetric to the bit: the
+     * lower triangle is summed and mirrored.
+     */
     public static double[][] information(double[][] jacobian, double[] sigma) {
         int np = jacobian.length == 0 ? 0 : jacobian[0].length;
         double[][] f = new double[np][np];
         for (int j = 0; j < jacobian.length; j++) {
             double w = 1 / (sigma[j] * sigma[j]);
+            double[] row = jacobian[j];
             for (int a = 0; a < np; a++) {
-                for (int b = 0; b < np; b++) {
-                    f[a][b] += jacobian[j][a] * jacobian[j][b] * w;
+                double[] fa = f[a];
+                double ra = row[a];
+                for (int b = 0; b <= a; b++) {
+                    fa[b] += ra * row[b] * w;
                 }
+            }
+        }
+        for (int a = 0; a < np; a++) {
+            for (int b = a + 1; b < np; b++) {
+                f[a][b] = f[b][a];
             }
         }
         return f;

@@ -15,7 +15,8 @@ import org.junit.jupiter.api.Test;
  * (svd.getSolver().getInverse(), as the bound took it before), with the same condition number and singular
  * decision. The matrices: random symmetric positive-definite F of sizes 3 to 7 with eigenvalues spread to
  * condition numbers from 1 to past {@link FisherMatrix#SINGULAR_CONDITION}, and diagonals spread over 40
- * decades as the parameters' units spread them (m⁻³ against m/s).
+ * decades as the parameters' units spread them (m⁻³ against m/s). {@link FisherMatrix#information} against
+ * the sum over every element that it mirrors.
  */
 class FisherMatrixBitsTest {
     /** Recorded seed (common practice: a failure repeats). */
@@ -47,6 +48,39 @@ class FisherMatrixBitsTest {
         }
         // both sides of the threshold were met (a check on the generator, not on the bound)
         assertEquals(true, singular > 300 && regular > 3000, singular + " singular, " + regular + " regular");
+    }
+
+    @Test
+    void informationShouldBeTheFullSum() {
+        // the reference: Σ_j J_ja J_jb / σ_j² over every (a, b), as information() summed it before it mirrored
+        Random r = new Random(SEED + 1);
+        for (int t = 0; t < 500; t++) {
+            int n = 3 + t % 5;
+            int windows = 5 + r.nextInt(120);
+            double[][] jac = new double[windows][n];
+            double[] sigma = new double[windows];
+            for (int j = 0; j < windows; j++) {
+                sigma[j] = Math.pow(10, -14 + 4 * r.nextDouble());
+                for (int a = 0; a < n; a++) {
+                    jac[j][a] = r.nextGaussian() * Math.pow(10, -30 + 20 * r.nextDouble());
+                }
+            }
+            double[][] full = new double[n][n];
+            for (int j = 0; j < windows; j++) {
+                double w = 1 / (sigma[j] * sigma[j]);
+                for (int a = 0; a < n; a++) {
+                    for (int b = 0; b < n; b++) {
+                        full[a][b] += jac[j][a] * jac[j][b] * w;
+                    }
+                }
+            }
+            double[][] f = FisherMatrix.information(jac, sigma);
+            for (int a = 0; a < n; a++) {
+                for (int b = 0; b < n; b++) {
+                    assertEquals(Double.doubleToLongBits(full[a][b]), Double.doubleToLongBits(f[a][b]), "F " + a + b);
+                }
+            }
+        }
     }
 
     /** The bound as it was computed before: Hipparchus' SVD and its solver's inverse. */
