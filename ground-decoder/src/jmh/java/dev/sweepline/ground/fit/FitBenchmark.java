@@ -48,7 +48,13 @@ import org.openjdk.jmh.annotations.Warmup;
  * of the fitting thread (2 s after 1.5 s of warm-up, two alternating runs each) 14 windows 76e3–79e3 (the
  * previous own optimiser 67e3–70e3), 32 windows 38e3–39e3 (24e3–30e3), 64 windows joint 8.9e3–9.3e3 (8.2e3),
  * 128 windows joint 5.1e3–5.3e3 (4.7e3–5.0e3); {@code -f 1 -wi 2 -i 3 -prof gc} 38.8e3, 33.0e3, 8.7e3, 4.1e3
- * ops/s (errors of the order of the scores: contended) and 0.09, 0.09, 0.34, 0.75 B/op.
+ * ops/s (errors of the order of the scores: contended) and 0.09, 0.09, 0.34, 0.75 B/op. With the erfc table,
+ * the fused QR pivot norms and the loops' fields in locals (the same bits), {@code -f 1 -wi 3 -w 1 -i 5 -r 1
+ * -prof gc}, before and after alternating, two runs each, at a load average of 2.2–3.6: with C1 alone
+ * ({@code -jvmArgsAppend -XX:TieredStopAtLevel=1}, as a campaign's {@code tune} runs) 14 windows 57e3–59e3 →
+ * 75e3–81e3 ops/s, 32 windows 24e3–25e3 → 35e3, 64 windows joint 5.5e3–5.9e3 → 8.1e3–8.4e3, 128 windows joint
+ * 3.3e3 → 4.7e3–4.8e3; tiered 83e3–87e3 → 101e3–104e3, 42e3–46e3 → 52e3, 9.8e3–10.7e3 → 11.9e3–12.5e3, 5.1e3–5.3e3
+ * → 5.7e3–6.3e3; still under 2 B/op (the harness's).
  */
 @State(Scope.Thread)
 @BenchmarkMode(Mode.Throughput)

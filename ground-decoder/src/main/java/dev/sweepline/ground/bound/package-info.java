@@ -35,6 +35,15 @@
  *   <li>B6 a constrained alpha component's bound adds the prior's information to the windows' ({@link
  *       dev.sweepline.ground.bound.FisherMatrix#bound(dev.sweepline.ground.fit.PlasmaModel, double[], double[],
  *       dev.sweepline.ground.fit.AlphaPrior)}; {@code PartialAlphaTest}).</li>
+ *   <li>B7 the bound's bits are those of Hipparchus' SVD solver's inverse, though only its diagonal is formed, and
+ *       F's those of the full sum, though only its lower triangle is summed ({@code FisherMatrixBitsTest}).</li>
  * </ol>
+ *
+ * <p>Why the SVD stays. A cyclic Jacobi eigen-decomposition of S (Golub &amp; Van Loan, Matrix Computations,
+ * §8.5), allocation-free and cheaper, was measured against this path on 2000 random F per condition (sizes 3
+ * to 7): the bounds differ by about cond·ε relative (5e-13 at cond 1e4, 1e-10 at 1e6, 6e-7 at 1e10, 3e-5 near
+ * 1e12; the singular decisions agreed), as any two backward-stable inverses do (each is within about cond·ε
+ * of the exact one). The ground's results would then no longer stay the same to the bit, so the bound keeps
+ * Hipparchus' decomposition.
  */
 package dev.sweepline.ground.bound;
