@@ -65,7 +65,7 @@ final class QuickCompilerProcess {
         while (true) {
             try {
                 int status = child.waitFor();
-                Runtime.getRuntime().removeShutdownHook(stop);
+                removeHook(stop);
                 if (interrupted) {
                     Thread.currentThread().interrupt();
                 }
@@ -73,6 +73,15 @@ final class QuickCompilerProcess {
             } catch (InterruptedException e) {
                 interrupted = true; // the child still runs: its status is this process's
             }
+        }
+    }
+
+    /** Removes {@code hook}, unless this process is already shutting down (then the hook has run or is running). */
+    private static void removeHook(Thread hook) {
+        try {
+            Runtime.getRuntime().removeShutdownHook(hook);
+        } catch (IllegalStateException e) {
+            // shutdown in progress: the hook is destroying the child, which has ended
         }
     }
 
