@@ -29,7 +29,7 @@ import javax.management.ObjectName;
  * HotSpot compiler directive instead, as {@code jcmd PID Compiler.directives_add} does, through the
  * platform's DiagnosticCommand MBean: no method is compiled by C2, so a method hot enough for it is compiled
  * by C1 without profiling, after its profiled C1 compilation (tier 3) has run up to C2's thresholds; on
- * perihelion-tuning.yaml's 108 runs that costs about 0.8 s more CPU than the second JVM (FORMAT.md, "Speed").
+ * perihelion-tuning.yaml's 108 runs that costs about 0.9 s more CPU than the second JVM (FORMAT.md, "Speed").
  * A JVM without that MBean keeps its default; the policy is the whole process's, so only the command line's
  * own process sets it ({@link BenchMain#main}).
  */
