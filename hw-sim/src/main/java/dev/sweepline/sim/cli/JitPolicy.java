@@ -98,13 +98,14 @@ final class JitPolicy {
     }
 
     /**
-     * Applies {@code mode} to this JVM; true when it is in force (TIERED always is), false when the JVM
-     * offers no way to add the directive.
+     * Applies {@code mode} to this JVM; true when it is in force (TIERED always is; C1 in a JVM that stops at
+     * tier 1 already, {@link QuickCompilerProcess}'s child, without a directive and the platform MBean server
+     * it would start), false when the JVM offers no way to add the directive.
      */
     static boolean apply(Mode mode) {
         return switch (mode) {
             case TIERED -> true;
-            case C1 -> addDirective(C1_ONLY_DIRECTIVE);
+            case C1 -> QuickCompilerProcess.stopsAtTierOne() || addDirective(C1_ONLY_DIRECTIVE);
         };
     }
 

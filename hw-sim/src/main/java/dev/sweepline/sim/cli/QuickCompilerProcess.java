@@ -116,12 +116,21 @@ final class QuickCompilerProcess {
 
     /** This HotSpot JVM compiles tiered up to C2 (its default, level 4); false when it cannot tell. */
     static boolean compilesAboveTierOne() {
+        return "true".equals(vmOption("TieredCompilation")) && "4".equals(vmOption("TieredStopAtLevel"));
+    }
+
+    /** This HotSpot JVM compiles tiered and stops at tier 1, C1 without profiling; false when it cannot tell. */
+    static boolean stopsAtTierOne() {
+        return "true".equals(vmOption("TieredCompilation")) && "1".equals(vmOption("TieredStopAtLevel"));
+    }
+
+    /** The value of HotSpot's VM option {@code name}, or null when this JVM does not tell. */
+    private static String vmOption(String name) {
         try {
             HotSpotDiagnosticMXBean hotSpot = ManagementFactory.getPlatformMXBean(HotSpotDiagnosticMXBean.class);
-            return hotSpot != null && "true".equals(hotSpot.getVMOption("TieredCompilation").getValue())
-                    && "4".equals(hotSpot.getVMOption("TieredStopAtLevel").getValue());
+            return hotSpot == null ? null : hotSpot.getVMOption(name).getValue();
         } catch (LinkageError | RuntimeException e) {
-            return false;
+            return null;
         }
     }
 }

@@ -46,7 +46,8 @@ final class JitPolicyProbe {
         if ("child".equals(args[0])) {
             HotSpotDiagnosticMXBean hotSpot = ManagementFactory.getPlatformMXBean(HotSpotDiagnosticMXBean.class);
             System.err.println("child TieredStopAtLevel " + hotSpot.getVMOption("TieredStopAtLevel").getValue()
-                    + " args " + List.of(args) + " again " + QuickCompilerProcess.run(JitPolicyProbe.class, List.of("child")));
+                    + " args " + List.of(args) + " again " + QuickCompilerProcess.run(JitPolicyProbe.class, List.of("child"))
+                    + " c1 in force " + JitPolicy.apply(JitPolicy.Mode.C1) + " " + QuickCompilerProcess.stopsAtTierOne());
             System.exit(Integer.parseInt(args[1]));
         }
         JitPolicy.Mode mode = "c1".equals(args[0]) ? JitPolicy.Mode.C1 : JitPolicy.Mode.TIERED;

@@ -44,9 +44,11 @@ class JitPolicyTest {
     @Test
     void shouldRunTheCommandLineAgainAtTierOneAndExitWithItsStatus() throws IOException, InterruptedException {
         // the probe relaunched through QuickCompilerProcess: the child at C1 alone (HotSpot's TieredStopAtLevel 1),
-        // the arguments unchanged (a space kept inside one), no relaunch of the child itself, its exit status returned
+        // the arguments unchanged (a space kept inside one), no relaunch of the child itself, C1 in force there as
+        // the JVM's own (no directive needed), its exit status returned
         String out = probe("relaunch", "child", "7", "a b");
-        assertTrue(out.contains("child TieredStopAtLevel 1 args [child, 7, a b] again OptionalInt.empty"), out);
+        assertTrue(out.contains("child TieredStopAtLevel 1 args [child, 7, a b] again OptionalInt.empty c1 in force true true"),
+                out);
         assertTrue(out.contains("relaunched status OptionalInt[7]"), out);
     }
 
