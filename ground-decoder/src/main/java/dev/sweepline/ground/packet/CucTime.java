@@ -2,6 +2,7 @@ package dev.sweepline.ground.packet;
 
 import dev.sweepline.ground.frame.BigEndian;
 import java.time.Instant;
+import java.time.LocalDate;
 import java.time.ZoneOffset;
 import java.time.format.DateTimeFormatter;
 
@@ -24,6 +25,13 @@ public record CucTime(long coarseSeconds, int fine) {
     public static final long EPOCH_1958_TO_UNIX_SECONDS = 378_691_200L;
     /** TAI − UTC since 2017-01-01, seconds (standards.md). */
     public static final long TAI_MINUS_UTC_SECONDS = 37L;
+
+    /** The largest coarse time (4 unsigned octets) and fine fraction (2 unsigned octets). */
+    private static final long MAX_COARSE = 0xFFFF_FFFFL;
+    private static final int MAX_FINE = 0xFFFF;
+    private static final long SECONDS_PER_DAY = 86_400;
+    /** Characters of {@code yyyy-MM-ddTHH:mm:ss.SSSSSS}. */
+    private static final int ISO_MICROS_LENGTH = 26;
 
     private static final DateTimeFormatter ISO_MICROS =
             DateTimeFormatter.ofPattern("yyyy-MM-dd'T'HH:mm:ss.SSSSSS").withZone(ZoneOffset.UTC);
@@ -55,9 +63,43 @@ public record CucTime(long coarseSeconds, int fine) {
         return taiLabel().minusSeconds(TAI_MINUS_UTC_SECONDS);
     }
 
-    /** ISO-8601 TAI label with microseconds, no zone, e.g. {@code 2000-01-01T00:00:00.500000}. */
+    /**
+     * ISO-8601 TAI label with microseconds, no zone, e.g. {@code 2000-01-01T00:00:00.500000}: the characters
+     * {@code DateTimeFormatter.ofPattern("yyyy-MM-dd'T'HH:mm:ss.SSSSSS")} gives for {@link #taiLabel()}, written
+     * directly for the fields a CUC T-field can hold (years 1958 to 2094, always four digits), through the
+     * formatter otherwise (the ground formats every fitted spectrum's time).
+     */
     public String isoTai() {
-        return ISO_MICROS.format(taiLabel());
+        if (coarseSeconds < 0 || coarseSeconds > MAX_COARSE || fine < 0 || fine > MAX_FINE) {
+            return ISO_MICROS.format(taiLabel());
+        }
+        long unixSeconds = coarseSeconds - EPOCH_1958_TO_UNIX_SECONDS;
+        LocalDate date = LocalDate.ofEpochDay(Math.floorDiv(unixSeconds, SECONDS_PER_DAY));
+        int second = (int) Math.floorMod(unixSeconds, SECONDS_PER_DAY);
+        char[] c = new char[ISO_MICROS_LENGTH];
+        digits(c, 0, date.getYear(), 4);
+        c[4] = '-';
+        digits(c, 5, date.getMonthValue(), 2);
+        c[7] = '-';
+        digits(c, 8, date.getDayOfMonth(), 2);
+        c[10] = 'T';
+        digits(c, 11, second / 3600, 2);
+        c[13] = ':';
+        digits(c, 14, second / 60 % 60, 2);
+        c[16] = ':';
+        digits(c, 17, second % 60, 2);
+        c[19] = '.';
+        // SSSSSS: the fraction's first six digits, truncated, as the formatter prints the nanoseconds
+        digits(c, 20, (int) (fineNanos() / 1000), 6);
+        return new String(c);
+    }
+
+    /** {@code value} (non-negative, below 10^count) as {@code count} decimal digits at {@code at}. */
+    private static void digits(char[] c, int at, int value, int count) {
+        for (int i = at + count - 1; i >= at; i--) {
+            c[i] = (char) ('0' + value % 10);
+            value /= 10;
+        }
     }
 
     /** ISO-8601 UTC with microseconds and a Z, e.g. {@code 1999-12-31T23:59:23.500000Z}. */

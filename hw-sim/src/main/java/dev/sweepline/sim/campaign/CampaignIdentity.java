@@ -33,7 +33,7 @@ public record CampaignIdentity(String campaign, String campaignSha256, String co
     }
 
     /** The runs {@code shard} owns of {@code spec}'s sets x members. */
-    static long runs(CampaignSpec spec, Shard shard) {
+    public static long runs(CampaignSpec spec, Shard shard) {
         long jobs = (long) spec.setCount() * spec.runsPerSet();
         return jobs / shard.count() + (jobs % shard.count() >= shard.index() ? 1 : 0);
     }

@@ -16,7 +16,7 @@ public final class BenchMain implements Runnable {
 
     /** Runs the command line and exits with its status. */
     public static void main(String[] args) {
-        JitPolicy.ownProcess();
+        JitPolicy.ownProcess(args);
         System.exit(commandLine().execute(args));
     }
 

@@ -5,6 +5,8 @@ import java.lang.management.ManagementFactory;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.List;
+import java.util.OptionalInt;
 import javax.management.JMException;
 import javax.management.ObjectName;
 
@@ -21,10 +23,15 @@ import javax.management.ObjectName;
  * The outputs do not depend on it: Java's arithmetic is the same in every compiler tier (JLS §15.4, strict
  * floating point since Java 17).
  *
- * <p>{@link Mode#C1} adds a HotSpot compiler directive, as {@code jcmd PID Compiler.directives_add} does,
- * through the platform's DiagnosticCommand MBean: no method is compiled by C2, so a method hot enough for it
- * is compiled by C1 without profiling instead. A JVM without that MBean keeps its default; the policy is
- * the whole process's, so only the command line's own process sets it ({@link BenchMain#main}).
+ * <p>{@link Mode#C1} runs the command line again in a JVM started with {@code -XX:TieredStopAtLevel=1}
+ * ({@link #relaunch}, {@link QuickCompilerProcess}): every method is compiled once, by C1 without profiling.
+ * Where that JVM cannot be started (or must not be: an agent, a debugger, a flight recording) it adds a
+ * HotSpot compiler directive instead, as {@code jcmd PID Compiler.directives_add} does, through the
+ * platform's DiagnosticCommand MBean: no method is compiled by C2, so a method hot enough for it is compiled
+ * by C1 without profiling, after its profiled C1 compilation (tier 3) has run up to C2's thresholds; on
+ * perihelion-tuning.yaml's 108 runs that costs about 0.9 s more CPU than the second JVM (FORMAT.md, "Speed").
+ * A JVM without that MBean keeps its default; the policy is the whole process's, so only the command line's
+ * own process sets it ({@link BenchMain#main}).
  */
 final class JitPolicy {
     /** The JVM's compilers for a campaign. */
@@ -54,9 +61,27 @@ final class JitPolicy {
     private JitPolicy() {
     }
 
-    /** Called by the command line's {@code main}: the policy may be applied to this process. */
-    static void ownProcess() {
+    /** The command line's arguments, for {@link #relaunch}; null before {@link #ownProcess}. */
+    private static volatile List<String> commandLine;
+
+    /**
+     * Called by the command line's {@code main} with its arguments: the policy may be applied to this process,
+     * and {@link Mode#C1} may run them again in a JVM of its own ({@link #relaunch}).
+     */
+    static void ownProcess(String... args) {
+        commandLine = List.of(args);
         ownsProcess = true;
+    }
+
+    /**
+     * For {@link Mode#C1} in the command line's own process: its command line run again in a JVM at C1 alone
+     * from the start ({@link QuickCompilerProcess}), whose exit status is returned; empty for {@link Mode#TIERED},
+     * in any other process, or when no such JVM can be started (then {@link #apply} adds the directive).
+     */
+    static OptionalInt relaunch(Mode mode) {
+        List<String> args = commandLine;
+        return mode == Mode.C1 && ownsProcess && args != null
+                ? QuickCompilerProcess.run(BenchMain.class, args) : OptionalInt.empty();
     }
 
     /**
@@ -73,13 +98,14 @@ final class JitPolicy {
     }
 
     /**
-     * Applies {@code mode} to this JVM; true when it is in force (TIERED always is), false when the JVM
-     * offers no way to add the directive.
+     * Applies {@code mode} to this JVM; true when it is in force (TIERED always is; C1 in a JVM that stops at
+     * tier 1 already, {@link QuickCompilerProcess}'s child, without a directive and the platform MBean server
+     * it would start), false when the JVM offers no way to add the directive.
      */
     static boolean apply(Mode mode) {
         return switch (mode) {
             case TIERED -> true;
-            case C1 -> addDirective(C1_ONLY_DIRECTIVE);
+            case C1 -> QuickCompilerProcess.stopsAtTierOne() || addDirective(C1_ONLY_DIRECTIVE);
         };
     }
 

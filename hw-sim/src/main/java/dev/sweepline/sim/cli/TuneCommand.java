@@ -28,6 +28,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
+import java.util.OptionalInt;
 import java.util.concurrent.Callable;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
@@ -102,9 +103,15 @@ final class TuneCommand implements Callable<Integer> {
             throw CliException.input("campaign error: " + e.getMessage());
         }
         int[] pair = comparePair(compare, spec);
+        JitPolicy.Mode mode = JitPolicy.effective(jit, CampaignIdentity.runs(spec, slice), threads,
+                Runtime.getRuntime().availableProcessors());
+        // before the code is versioned (hashed), which the child does again
+        OptionalInt relaunched = JitPolicy.relaunch(mode);
+        if (relaunched.isPresent()) {
+            return relaunched.getAsInt();
+        }
         CampaignIdentity identity = CampaignIdentity.of(spec, campaignOctets(campaign, instrument.given()), codeVersion(), slice);
-        if (!JitPolicy.apply(JitPolicy.effective(jit, identity.runs(), threads,
-                Runtime.getRuntime().availableProcessors())) && jit != null) {
+        if (!JitPolicy.apply(mode) && jit != null) {
             System.err.println("tune: --jit c1: this JVM takes no compiler directive; it compiles as it does by default");
         }
         OutputFolder.create(out);

@@ -9,6 +9,7 @@
  * BenchCommandLineErrorTest, ExitStatusAgreementTest, ConsoleProgressTest (plain progress lines when
  * standard output is not a terminal), ServeOverTcpTest (a TCP server serves one client after another).
  * {@code tune} runs with the JIT's quick compiler alone unless {@code --jit tiered} ({@link
- * dev.sweepline.sim.cli.JitPolicy}; verified in a JVM of its own by JitPolicyTest).
+ * dev.sweepline.sim.cli.JitPolicy}: in a second JVM at tier 1, {@link dev.sweepline.sim.cli.QuickCompilerProcess};
+ * verified in JVMs of their own by JitPolicyTest).
  */
 package dev.sweepline.sim.cli;

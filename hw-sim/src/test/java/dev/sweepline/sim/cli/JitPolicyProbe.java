@@ -1,9 +1,15 @@
 package dev.sweepline.sim.cli;
 
+import com.sun.management.HotSpotDiagnosticMXBean;
+import java.lang.management.ManagementFactory;
+import java.util.List;
+
 /**
  * A JVM for {@link JitPolicyTest}: applies the mode of its argument ({@code c1} or {@code tiered}), prints on stderr (apart from HotSpot's compilation lines on stdout)
  * whether it is in force, then calls {@link #work} often enough for any compiler tier to take it; with
- * {@code default}, prints the mode the command line's own process chooses for a campaign's size.
+ * {@code default}, prints the mode the command line's own process chooses for a campaign's size; with
+ * {@code relaunch child STATUS ...}, runs itself again through {@link QuickCompilerProcess} as {@code child},
+ * which prints its compiler tier limit and arguments and exits with STATUS.
  */
 final class JitPolicyProbe {
     /** Calls of {@link #work}: far above HotSpot's C2 threshold (Tier4InvocationThreshold 5000, [memory]). */
@@ -30,6 +36,19 @@ final class JitPolicyProbe {
                         + JitPolicy.effective(null, c[0], (int) c[1], 2));
             }
             return;
+        }
+        if ("relaunch".equals(args[0])) {
+            // QuickCompilerProcess's child: this class again, with the arguments after "relaunch"
+            List<String> rest = List.of(args).subList(1, args.length);
+            System.err.println("relaunched status " + QuickCompilerProcess.run(JitPolicyProbe.class, rest));
+            return;
+        }
+        if ("child".equals(args[0])) {
+            HotSpotDiagnosticMXBean hotSpot = ManagementFactory.getPlatformMXBean(HotSpotDiagnosticMXBean.class);
+            System.err.println("child TieredStopAtLevel " + hotSpot.getVMOption("TieredStopAtLevel").getValue()
+                    + " args " + List.of(args) + " again " + QuickCompilerProcess.run(JitPolicyProbe.class, List.of("child"))
+                    + " c1 in force " + JitPolicy.apply(JitPolicy.Mode.C1) + " " + QuickCompilerProcess.stopsAtTierOne());
+            System.exit(Integer.parseInt(args[1]));
         }
         JitPolicy.Mode mode = "c1".equals(args[0]) ? JitPolicy.Mode.C1 : JitPolicy.Mode.TIERED;
         System.err.println("applied " + JitPolicy.apply(mode));

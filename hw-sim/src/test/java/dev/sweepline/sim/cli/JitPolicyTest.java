@@ -1,12 +1,14 @@
 package dev.sweepline.sim.cli;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.io.IOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.ArrayList;
 import java.util.List;
 import java.util.Set;
 import java.util.TreeSet;
@@ -40,6 +42,30 @@ class JitPolicyTest {
     }
 
     @Test
+    void shouldRunTheCommandLineAgainAtTierOneAndExitWithItsStatus() throws IOException, InterruptedException {
+        // the probe relaunched through QuickCompilerProcess: the child at C1 alone (HotSpot's TieredStopAtLevel 1),
+        // the arguments unchanged (a space kept inside one), no relaunch of the child itself, C1 in force there as
+        // the JVM's own (no directive needed), its exit status returned
+        String out = probe("relaunch", "child", "7", "a b");
+        assertTrue(out.contains("child TieredStopAtLevel 1 args [child, 7, a b] again OptionalInt.empty c1 in force true true"),
+                out);
+        assertTrue(out.contains("relaunched status OptionalInt[7]"), out);
+    }
+
+    @Test
+    void shouldRelaunchOnlyWithoutAgentsDebuggersOrFlightRecordings() {
+        // two processes cannot share an agent's port or a recording's file: such a JVM keeps the directive
+        assertTrue(QuickCompilerProcess.relaunchable(List.of("-Xmx2g", "-Dx=1", "-XX:+UseSerialGC")));
+        assertFalse(QuickCompilerProcess.relaunchable(List.of("-agentlib:jdwp=transport=dt_socket,server=y")));
+        assertFalse(QuickCompilerProcess.relaunchable(List.of("-XX:StartFlightRecording=filename=x.jfr")));
+        assertFalse(QuickCompilerProcess.relaunchable(List.of("-javaagent:a.jar")));
+        // the child's command: the JVM's options, then the flag (a later -XX option wins) and the marker property
+        assertEquals(List.of("java", "-Xmx2g", QuickCompilerProcess.FLAG, "-D" + QuickCompilerProcess.CHILD_PROPERTY
+                + "=true", "-cp", "b.jar", "M", "tune", "c.yaml"),
+                QuickCompilerProcess.command("java", List.of("-Xmx2g"), "b.jar", "M", List.of("tune", "c.yaml")));
+    }
+
+    @Test
     void shouldChooseC1ForASmallCampaignOfTheCommandLinesOwnProcess() throws IOException, InterruptedException {
         // the probe's "default" argument: BenchMain.main's ownership, then the default mode for 600 and 601 runs
         // on 2 workers of 2 cores, and for 600 runs on 1 worker of 2 cores (C2 would have the idle core)
@@ -58,17 +84,19 @@ class JitPolicyTest {
         assertEquals(JitPolicy.Mode.TIERED, JitPolicy.effective(JitPolicy.Mode.TIERED, 108, 2, 2));
     }
 
-    private static String probe(String mode) throws IOException, InterruptedException {
+    private static String probe(String... mode) throws IOException, InterruptedException {
         Path java = Path.of(System.getProperty("java.home"), "bin", "java");
         // the probe reports on stderr, into a file of its own: HotSpot's compiler threads print their
         // PrintCompilation lines on stdout whenever they finish, which can split a line of the probe's
         Path report = Files.createTempFile("jit-probe-", ".txt");
         try {
-            Process p = new ProcessBuilder(List.of(java.toString(), "-XX:+PrintCompilation", "-cp",
-                    System.getProperty("java.class.path"), JitPolicyProbe.class.getName(), mode))
+            List<String> command = new ArrayList<>(List.of(java.toString(), "-XX:+PrintCompilation", "-cp",
+                    System.getProperty("java.class.path"), JitPolicyProbe.class.getName()));
+            command.addAll(List.of(mode));
+            Process p = new ProcessBuilder(command)
                     .redirectError(report.toFile()).start();
             String out = new String(p.getInputStream().readAllBytes(), StandardCharsets.UTF_8);
-            assertTrue(p.waitFor(60, TimeUnit.SECONDS), "probe " + mode + " did not end");
+            assertTrue(p.waitFor(60, TimeUnit.SECONDS), "probe " + List.of(mode) + " did not end");
             String all = out + "\n" + Files.readString(report, StandardCharsets.UTF_8);
             assertEquals(0, p.exitValue(), all);
             return all;
