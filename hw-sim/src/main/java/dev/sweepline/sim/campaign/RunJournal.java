@@ -4,11 +4,13 @@ import java.io.Closeable;
 import java.io.IOException;
 import java.nio.ByteBuffer;
 import java.nio.channels.FileChannel;
+import java.nio.channels.FileLock;
+import java.nio.channels.OverlappingFileLockException;
 import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.StandardOpenOption;
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.HashSet;
 import java.util.List;
 import java.util.Locale;
@@ -26,6 +28,11 @@ import java.util.zip.CRC32;
  * had not written); a failing line followed by good ones, or a row the shard does not own or has twice,
  * is a damaged journal and refused. Lines are in the order the runs finished, which depends on the
  * threads; {@code runs.csv} is written from them in job order once every run is in.
+ *
+ * <p>One writer: the journal is held under an exclusive lock ({@link FileChannel#tryLock}) from its opening
+ * to its closing, so a second {@code tune} on the same folder (an operator's slip, a job array's index used
+ * twice, a process left running after its parent was killed) is refused at the start instead of writing the
+ * same runs twice between the first one's lines.
  *
  * <p>Threading: {@link #append} may be called from many workers; it is synchronized.
  */
@@ -49,11 +56,53 @@ public final class RunJournal implements Closeable {
     /**
      * Opens (or starts) the journal of {@code shard} of {@code spec} in {@code dir}, dropping a torn tail.
      *
-     * @throws IOException naming the file and line: damaged, a run of another shard, a run twice
+     * @throws IOException naming the file and line: damaged, a run of another shard, a run twice; or naming the
+     *                     file when another process (or this one) holds it open
      */
     public static RunJournal open(Path dir, CampaignSpec spec, Shard shard) throws IOException {
         Path file = dir.resolve(FILE);
-        byte[] octets = Files.exists(file) ? Files.readAllBytes(file) : new byte[0];
+        FileChannel channel = FileChannel.open(file, StandardOpenOption.CREATE, StandardOpenOption.READ,
+                StandardOpenOption.WRITE);
+        try {
+            lock(file, channel);
+            RunJournal journal = read(file, channel, spec, shard);
+            channel = null; // the journal's now
+            return journal;
+        } finally {
+            if (channel != null) {
+                channel.close();
+            }
+        }
+    }
+
+    /** Takes the journal's exclusive lock, held until the channel closes. */
+    private static void lock(Path file, FileChannel channel) throws IOException {
+        FileLock lock;
+        try {
+            lock = channel.tryLock();
+        } catch (OverlappingFileLockException e) {
+            lock = null; // held by this very process
+        }
+        if (lock == null) {
+            throw new IOException(file + ": another tune is writing this journal (a second process on the same "
+                    + "--out); let it finish or use another folder");
+        }
+    }
+
+    /**
+     * The journal's runs, read under its lock through the locked channel itself (closing any other descriptor
+     * of the file would release this process's lock: POSIX record locks, fcntl(2)), its torn tail dropped.
+     */
+    private static RunJournal read(Path file, FileChannel channel, CampaignSpec spec, Shard shard) throws IOException {
+        long size = channel.size();
+        if (size > Integer.MAX_VALUE - 8) {
+            throw new IOException(file + ": " + size + " octets, more than a journal can hold");
+        }
+        ByteBuffer all = ByteBuffer.allocate((int) size);
+        while (all.hasRemaining() && channel.read(all, all.position()) >= 0) {
+            // positional reads until the buffer is full
+        }
+        byte[] octets = Arrays.copyOf(all.array(), all.position());
         List<RunRow> rows = new ArrayList<>();
         Set<Long> jobs = new HashSet<>();
         long good = 0;
@@ -85,15 +134,9 @@ public final class RunJournal implements Closeable {
             rows.add(row);
             good = end + 1L;
         }
-        FileChannel channel = FileChannel.open(file, StandardOpenOption.CREATE, StandardOpenOption.WRITE);
-        try {
-            channel.truncate(good);
-            channel.position(good);
-            channel.force(true);
-        } catch (IOException e) {
-            channel.close();
-            throw e;
-        }
+        channel.truncate(good);
+        channel.position(good);
+        channel.force(true);
         return new RunJournal(file, channel, rows, octets.length - good);
     }
 

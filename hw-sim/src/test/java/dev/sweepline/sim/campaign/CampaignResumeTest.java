@@ -121,6 +121,51 @@ class CampaignResumeTest {
         assertTrue(e.getMessage().contains(":3: run 0 of set 0 appears twice"), e.getMessage());
     }
 
+    @Test
+    void shouldRefuseASecondWriterOfTheSameJournal() throws Exception {
+        Path out = dir.resolve("held");
+        Files.createDirectories(out);
+        try (RunJournal first = RunJournal.open(out, spec, Shard.ALL)) {
+            IOException same = assertThrows(IOException.class, () -> RunJournal.open(out, spec, Shard.ALL));
+            assertTrue(same.getMessage().contains(RunJournal.FILE + ": another tune is writing this journal"),
+                    same.getMessage());
+        }
+        // another process: a JVM of its own opens the journal and holds it until its standard input closes
+        Process holder = new ProcessBuilder(Path.of(System.getProperty("java.home"), "bin", "java").toString(), "-cp",
+                System.getProperty("java.class.path"), JournalHolder.class.getName(), out.toString())
+                .redirectErrorStream(true).start();
+        try {
+            String ready = new String(holder.getInputStream().readNBytes(JournalHolder.READY.length()),
+                    StandardCharsets.UTF_8);
+            assertEquals(JournalHolder.READY, ready);
+            IOException other = assertThrows(IOException.class, () -> RunJournal.open(out, spec, Shard.ALL));
+            assertTrue(other.getMessage().contains("another tune is writing this journal"), other.getMessage());
+        } finally {
+            holder.getOutputStream().close();
+            assertEquals(0, holder.waitFor());
+        }
+        // the lock goes with its holder: the journal opens again, its runs intact
+        try (RunJournal again = RunJournal.open(out, spec, Shard.ALL)) {
+            assertEquals(0, again.droppedOctets());
+        }
+    }
+
+    /** A second process for the test above: opens the journal in the folder given, says so, waits for its stdin to close. */
+    public static final class JournalHolder {
+        static final String READY = "holding\n";
+
+        public static void main(String[] args) throws IOException {
+            CampaignSpec spec = CampaignReader.parse(CampaignDeterminismTest.CAMPAIGN, "small.yaml", null);
+            try (RunJournal journal = RunJournal.open(Path.of(args[0]), spec, Shard.ALL)) {
+                System.out.print(READY);
+                System.out.flush();
+                while (System.in.read() >= 0) {
+                    // held until the test closes the pipe
+                }
+            }
+        }
+    }
+
     /** The files of a finished folder, but the journal (its lines are in the order the runs finished). */
     private static List<String> written(Path out) throws IOException {
         try (Stream<Path> files = Files.list(out)) {
