@@ -99,7 +99,7 @@ public final class ErrorFunction {
     /**
      * e^(−s²) for s = k/16, k = 0 … 16·{@link #UNDERFLOW}: the factor of {@link #erfcOfPositive} whose argument
      * is one of these multiples, filled with the very expression it replaces ({@code Math.exp(-s * s)}) so that it holds the same
-     * bits (HotSpot calls one exp routine from the interpreter and from compiled code; ErrorFunctionTest
+     * bits (HotSpot calls one exp routine from the interpreter and from compiled code; ErrorFunctionBitsTest
      * compares every entry with the expression evaluated in the test).
      */
     private static final double[] EXP_MINUS_SQUARE = expMinusSquare();
@@ -118,8 +118,8 @@ public final class ErrorFunction {
         return EXP_MINUS_SQUARE[k];
     }
 
-    // Horner's rule unrolled per polynomial: the operations of horner(c, t), in its order (the quick compiler
-    // keeps a loop's bounds checks and counter; ErrorFunctionTest checks each against horner bit for bit)
+    // Horner's rule unrolled per polynomial: the operations of the loop r = r·t + c[i], in its order (the quick
+    // compiler keeps a loop's bounds checks and counter; ErrorFunctionBitsTest checks each against the loop bit for bit)
 
     static double p1(double t) {
         final double[] c = P1;
@@ -153,17 +153,8 @@ public final class ErrorFunction {
         return ((((c[0] * t + c[1]) * t + c[2]) * t + c[3]) * t + c[4]) * t + c[5];
     }
 
-    /** The coefficient arrays, for the test that compares the unrolled forms with {@link #horner}. */
+    /** The coefficient arrays, for the test that compares the unrolled forms with Horner's loop. */
     static double[][] coefficients() {
         return new double[][] {P1.clone(), Q1.clone(), P2.clone(), Q2.clone(), P3.clone(), Q3.clone()};
-    }
-
-    /** c[0] t^n + ... + c[n] by Horner's rule: the loop the unrolled forms above spell out. */
-    static double horner(double[] c, double t) {
-        double r = c[0];
-        for (int i = 1; i < c.length; i++) {
-            r = r * t + c[i];
-        }
-        return r;
     }
 }

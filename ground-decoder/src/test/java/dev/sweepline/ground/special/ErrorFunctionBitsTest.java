@@ -43,12 +43,12 @@ class ErrorFunctionBitsTest {
         Random r = new Random(SEED);
         for (int i = 0; i < 100_000; i++) {
             double t = i % 2 == 0 ? r.nextDouble() * 0.22 : r.nextDouble() * 30; // x² of interval 1; |x| or x⁻² beyond
-            assertBits(ErrorFunction.horner(c[0], t), ErrorFunction.p1(t), "P1 " + t);
-            assertBits(ErrorFunction.horner(c[1], t), ErrorFunction.q1(t), "Q1 " + t);
-            assertBits(ErrorFunction.horner(c[2], t), ErrorFunction.p2(t), "P2 " + t);
-            assertBits(ErrorFunction.horner(c[3], t), ErrorFunction.q2(t), "Q2 " + t);
-            assertBits(ErrorFunction.horner(c[4], t), ErrorFunction.p3(t), "P3 " + t);
-            assertBits(ErrorFunction.horner(c[5], t), ErrorFunction.q3(t), "Q3 " + t);
+            assertBits(horner(c[0], t), ErrorFunction.p1(t), "P1 " + t);
+            assertBits(horner(c[1], t), ErrorFunction.q1(t), "Q1 " + t);
+            assertBits(horner(c[2], t), ErrorFunction.p2(t), "P2 " + t);
+            assertBits(horner(c[3], t), ErrorFunction.q2(t), "Q2 " + t);
+            assertBits(horner(c[4], t), ErrorFunction.p3(t), "P3 " + t);
+            assertBits(horner(c[5], t), ErrorFunction.q3(t), "Q3 " + t);
         }
     }
 
@@ -78,10 +78,10 @@ class ErrorFunctionBitsTest {
         double[][] c = ErrorFunction.coefficients();
         double scaled;
         if (a <= 4.0) {
-            scaled = ErrorFunction.horner(c[2], a) / ErrorFunction.horner(c[3], a);
+            scaled = horner(c[2], a) / horner(c[3], a);
         } else {
             double z = 1.0 / (a * a);
-            scaled = (5.6418958354775628695e-1 - z * ErrorFunction.horner(c[4], z) / ErrorFunction.horner(c[5], z)) / a;
+            scaled = (5.6418958354775628695e-1 - z * horner(c[4], z) / horner(c[5], z)) / a;
         }
         double s = Math.floor(a * 16.0) / 16.0;
         return Math.exp(-s * s) * Math.exp(-(a - s) * (a + s)) * scaled;
@@ -90,5 +90,14 @@ class ErrorFunctionBitsTest {
     private static void assertBits(double expected, double actual, String what) {
         assertEquals(Double.doubleToRawLongBits(expected), Double.doubleToRawLongBits(actual),
                 what + ": " + expected + " vs " + actual);
+    }
+
+    /** c[0] t^n + ... + c[n] by Horner's rule: the loop the class evaluated before it spelled each polynomial out. */
+    private static double horner(double[] c, double t) {
+        double r = c[0];
+        for (int i = 1; i < c.length; i++) {
+            r = r * t + c[i];
+        }
+        return r;
     }
 }
