@@ -192,9 +192,12 @@ public final class FaultProtection {
         }
     }
 
-    /** Halves both gain-switch thresholds; SAFE when the result would not validate (the floor). */
+    /**
+     * Halves both gain-switch thresholds of the parameters that fly from the next sweep boundary (a committed
+     * table's, when one waits for it); SAFE when the result would not validate (the floor).
+     */
     private int lowerGain(long nowMicros) {
-        scheduler.activeParameters(work);
+        scheduler.nextParameters(work);
         work.gainUpFractionQ16 >>= 1;
         work.gainDownFractionQ16 >>= 1;
         if (scheduler.loadParameters(work) != TableStatus.OK) {

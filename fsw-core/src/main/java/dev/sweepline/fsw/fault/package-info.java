@@ -21,8 +21,9 @@
  *     value at its limit L does not offend and L + 1 does; saturation is the description's ADC top code.
  *     <i>StepMonitorsTest (HV readback, saturation, stuck channel), FaultProtectionThresholdTest (peak
  *     lost, cycle overrun, link time-out).</i></li>
+ * <li><b>F6</b> A GAIN response halves the thresholds of the parameters that fly from the next sweep
+ *     boundary: those of a table committed in the same sweep when one waits, which keeps every other
+ *     value of that table. <i>GainResponseKeepsPendingTableTest.</i></li>
  * </ol>
- * Known limit: a GAIN response loads parameters into the scheduler's pending slot, so it replaces the
- * parameters of a table committed in the same sweep.
  */
 package dev.sweepline.fsw.fault;

@@ -104,6 +104,11 @@ final class ActiveConfiguration {
         return TableStatus.OK;
     }
 
+    /** Copies into {@code into} the parameters in force from the next sweep boundary: those waiting, else the active ones. */
+    void nextParameters(SweepParameters into) {
+        into.copyFrom(paramsPending ? pendingParams : params);
+    }
+
     /**
      * Puts whatever waits into effect (called at a sweep boundary).
      *

@@ -484,6 +484,15 @@ public final class SweepScheduler {
         into.copyFrom(params);
     }
 
+    /**
+     * The parameters in force from the next sweep boundary (a copy into {@code into}, allocation-free): a
+     * loaded set waiting for it (a committed table's), else the active one. A change to the parameters
+     * starts from these, so that it does not undo a load that has not taken effect yet.
+     */
+    public void nextParameters(SweepParameters into) {
+        config.nextParameters(into);
+    }
+
     /** True when the last step of a sweep was issued: its reply completes the sweep (benchmarks, tests). */
     boolean lastStepOfSweepIssued() {
         return sweepActive && stepsIssued == sweepSteps;
