@@ -326,14 +326,13 @@ public final class SweepScheduler {
 
     /**
      * Changes mode now, abandoning the sweep in progress. FOCUS without a valid band (or with a new
-     * table waiting) gives SURVEY with {@link ModeChangeReason#NO_BAND}. SAFE turns the HV off.
+     * table waiting) gives SURVEY with {@link ModeChangeReason#NO_BAND}; while surveying that is no
+     * change, and the survey in progress goes on. SAFE turns the HV off.
      */
     public void requestMode(SweepMode requested, int reason, long nowMicros) {
         if (requested == mode) {
             return;
         }
-        sweepActive = false;
-        awaitingWindow = NO_WINDOW;
         SweepMode to = switch (requested) {
             case SAFE -> SweepMode.SAFE;
             case SURVEY -> SweepMode.SURVEY;
@@ -341,8 +340,10 @@ public final class SweepScheduler {
         };
         int why = to == requested ? reason : ModeChangeReason.NO_BAND;
         if (to == mode) {
-            return; // FOCUS without a band while surveying: nothing changes
+            return; // FOCUS without a band while surveying: nothing changes, the survey in progress goes on
         }
+        sweepActive = false;
+        awaitingWindow = NO_WINDOW;
         if (to == SweepMode.SAFE) {
             hvLowCode = 0;
             hvHighCode = 0;

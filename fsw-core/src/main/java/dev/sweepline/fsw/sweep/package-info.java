@@ -102,7 +102,8 @@
  *     (nobody compares window edges to guess). <i>CommandTest, WindowTableTest, SweepParametersTest,
  *     exec TableChangedFlagTest; hw-sim CommandedRunTest.</i></li>
  * <li><b>R15 SAFE.</b> nextStep returns false; replies are ignored; only requestMode leaves SAFE (FOCUS
- *     without a band gives SURVEY, NO_BAND). <i>CommandTest.</i></li>
+ *     without a band gives SURVEY, NO_BAND; while surveying that changes nothing, the survey in progress
+ *     goes on). <i>CommandTest, FocusWithoutBandTest.</i></li>
  * <li><b>R16 Determinism.</b> No clock: time is the argument. decisionHash is FNV-1a 64 over every step's
  *     fields (window, codes, range, settle, periods, HV flag), every band and every mode change;
  *     same inputs give the same hash. <i>CommandTest.shouldGiveSameHashForSameInputs.</i></li>
