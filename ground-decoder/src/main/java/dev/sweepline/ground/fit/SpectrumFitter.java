@@ -473,17 +473,23 @@ public final class SpectrumFitter {
      * The fit of an interleaved spectrum with the speed's change over the sweep, ΔU, as one more parameter
      * ({@link PlasmaModel#withDrift}): the chosen model (protons, or protons and alphas with the chosen fit's
      * prior rows) started from its solution and ΔU = 0, so the drift fit holds the chosen one and its χ² can
-     * only fall. Null when it does not converge to physical values with finite errors (the chosen fit stays).
+     * only fall. Null when the windows leave the drift model no degree of freedom (as {@link #MIN_WINDOWS} keeps
+     * one for the protons), or when it does not converge to physical values with finite errors and ΔU inside its
+     * guard ±{@link PlasmaModel#MAX_SPEED_CHANGE} (a run held at the guard found no minimum): the chosen fit stays.
      */
     private LeastSquaresRun.Outcome driftFit(SpectrumInput in, PlasmaModel driftModel, LeastSquaresRun.Outcome chosen,
             AlphaPrior prior, Workspace ws) {
         double[] p = chosen.parameters();
         int np = p.length;
+        if (in.windows() <= driftModel.parameters()) {
+            return null;
+        }
         System.arraycopy(p, 0, ws.driftStart, 0, np);
         ws.driftStart[np] = 0;
         LeastSquaresRun.Outcome o = np == PlasmaModel.JOINT_PARAMETERS ? ws.driftJoint : ws.driftProtons;
         if (!solver.fitInto(driftModel, in.totalAmps(), in.sigmaAmps(), ws.driftStart, prior, o)
-                || !physical(o.parameters(), in) || !finiteErrors(o.covariance())) {
+                || !physical(o.parameters(), in) || !finiteErrors(o.covariance())
+                || !(Math.abs(o.parameters()[np]) < PlasmaModel.MAX_SPEED_CHANGE)) {
             return null;
         }
         return o;

@@ -42,8 +42,9 @@
  * protons and alphas with the chosen fit's prior rows) and one parameter more, last: the normal speed's change
  * over the sweep ΔU, window j at U + ΔU (τ_j − ½) and U_α + ΔU (τ_j − ½), τ_j = step / (c − 1) from the ICD's
  * order rule ({@link dev.sweepline.ground.spectrum.SpectrumValues#stepOrder}); started from the chosen fit and
- * ΔU = 0, so it holds that fit, and kept when physical with finite errors (physics.md "Speed drift within an
- * interleaved sweep"). U and U_α are then the mid-sweep speeds. Spectra without the flag are fitted as before,
+ * ΔU = 0, so it holds that fit, tried only when the windows leave it a degree of freedom (more windows than
+ * its parameters, as for the protons) and kept when physical with finite errors and ΔU short of its iteration
+ * guard (physics.md "Speed drift within an interleaved sweep"). U and U_α are then the mid-sweep speeds. Spectra without the flag are fitted as before,
  * bit for bit.
  *
  * <p>Limits: the thermal spread of the arrival angles is not modelled (each window's image is shifted by

@@ -12,8 +12,9 @@ public enum SpectrumError {
      */
     UNKNOWN_LAYOUT,
     /**
-     * Layout 3 with a support window count b outside 1..3, a support window offset that is not inside
-     * 0..c−1 or not above the previous one, or a support window of 0 integration periods (ICD §4).
+     * Layout 3 with a support window count b outside 1..6, a support window offset that is not inside
+     * 0..c−1 or not above the previous one, a support window of integration periods outside 1..{@value
+     * SpectrumHeader#MAX_DWELL_PERIODS}, or a floor (offset 16) of 0 periods (ICD §4, §10).
      */
     BAD_SUPPORT_WINDOWS,
     /**
@@ -31,6 +32,17 @@ public enum SpectrumError {
     BAD_MODE,
     /** Window count outside 1..256. */
     BAD_WINDOW_COUNT,
+    /**
+     * Flags that contradict the packet: the interleaved order (bit 5) on a survey spectrum, which the ICD
+     * gives to focus sweeps only (ICD §4 flags; commands.md §4.1 focusStyle bit 1).
+     */
+    BAD_FLAGS,
+    /**
+     * The integration periods of the packet's windows (ICD §4 offset 16, layout 1 offset 12) outside 1..{@value
+     * SpectrumHeader#MAX_DWELL_PERIODS}: no sweep integrates over no period or above the dwell limit
+     * (commands.md §4.1); layout 3's floor of 0 is {@link #BAD_SUPPORT_WINDOWS}.
+     */
+    BAD_DWELL,
     /** A gain-range tag the instrument has no range for (ICD §4 allows 0 .. ranges − 1 of its description). */
     BAD_GAIN_RANGE,
     /** Compression octet neither 0x00 nor 0x01. */

@@ -44,6 +44,11 @@ final class SpectrumHeader {
     static final int SUPPORT_ENTRY_OCTETS = 3;
     /** Layout 3: most support windows (ICD §4). */
     static final int MAX_SUPPORT_WINDOWS = 6;
+    /**
+     * Most integration periods of a window (ICD §4: a support window's 1..1000; commands.md §4.1: no sweep
+     * dwells above the limit of 1000, the table's integrationPeriods included).
+     */
+    static final int MAX_DWELL_PERIODS = 1000;
     /** Bit 7 of the first octet: set in every versioned layout (ICD §4). */
     static final int VERSIONED_BIT = 0x80;
     /** Fixed octets of layout 1, before the gain tags (ICD §4). */

@@ -146,6 +146,14 @@ public final class SpectrumPacketDecoder {
         if (h.integrationPeriods() < 1 && h.layout() == 3) {
             return fail(SpectrumError.BAD_SUPPORT_WINDOWS, "floor dwell of 0 periods");
         }
+        if (h.integrationPeriods() < 1 || h.integrationPeriods() > SpectrumHeader.MAX_DWELL_PERIODS) {
+            return fail(SpectrumError.BAD_DWELL, "integration periods " + h.integrationPeriods() + ", not 1.."
+                    + SpectrumHeader.MAX_DWELL_PERIODS);
+        }
+        if (h.interleaved() && h.mode() == DecodedSpectrum.MODE_SURVEY) {
+            return fail(SpectrumError.BAD_FLAGS, String.format("flags 0x%02X: interleaved order (bit 5) on a survey"
+                    + " spectrum (focus sweeps only)", h.flags()));
+        }
         Arrays.fill(v.windowPeriods, 0, h.windowCount(), h.integrationPeriods());
         for (int k = 0, previous = -1; k < h.supportCount(); k++) {
             int at = h.supportOffset(k);
@@ -153,8 +161,9 @@ public final class SpectrumPacketDecoder {
                 return fail(SpectrumError.BAD_SUPPORT_WINDOWS, "support window " + (k + 1) + " at offset " + at
                         + (at >= h.windowCount() ? " beyond c = " + h.windowCount() : " not above " + previous));
             }
-            if (h.supportPeriods(k) < 1) {
-                return fail(SpectrumError.BAD_SUPPORT_WINDOWS, "support window " + (k + 1) + " of 0 periods");
+            if (h.supportPeriods(k) < 1 || h.supportPeriods(k) > SpectrumHeader.MAX_DWELL_PERIODS) {
+                return fail(SpectrumError.BAD_SUPPORT_WINDOWS, "support window " + (k + 1) + " of "
+                        + h.supportPeriods(k) + " periods, not 1.." + SpectrumHeader.MAX_DWELL_PERIODS);
             }
             v.windowPeriods[at] = h.supportPeriods(k);
             previous = at;

@@ -34,8 +34,9 @@
  *   <li>S4 every malformed packet gives a {@link dev.sweepline.ground.spectrum.SpectrumError}, never an
  *       exception ({@code SpectrumPacketDecoderTest}, {@code SpectrumLayoutTwoTest}, {@code SpectrumLayoutThreeTest};
  *       {@code SpectrumMutationTest}: 25,000 damaged copies of the golden packets of the three layouts,
- *       recorded seed, 11,160 decode and the rest are refused under eleven different reasons; the
- *       frame-level fuzz test).</li>
+ *       recorded seed, 10,813 decode and the rest are refused under thirteen different reasons; the
+ *       frame-level fuzz test; {@code InterleavedSpectrumFuzzTest}: 600 damaged interleaved focus spectra from
+ *       decode to the products, each followed by a good one that decodes and fits to the same bits).</li>
  *   <li>S5 a quadrant stream must use its stated length Lq (ICD §10): the coded data sets of its c samples
  *       (padding blocks included) end in its last octet, since fill reaches only the next octet boundary
  *       (ICD §4); a stream that leaves one or more whole octets unused, or a raw one with Lq &gt; c⌈w/8⌉,
@@ -49,6 +50,11 @@
  *       {@code UNKNOWN_INSTRUMENT}, one whose w is not its description's ADC width as
  *       {@code SAMPLE_WIDTH_MISMATCH}, a first octet with bit 7 set other than 0x82 as {@code UNKNOWN_LAYOUT},
  *       each with a detail naming the id or the instrument ({@code SpectrumLayoutTwoTest}).</li>
+ *   <li>S6b a spectrum whose flags contradict it, the interleaved order (flags bit 5) on a survey (ICD §4 gives
+ *       it to focus sweeps), is refused as {@code BAD_FLAGS}; one whose windows' integration periods (offset 16,
+ *       a support window's) lie outside 1..1000 (commands.md §4.1: no dwell above the limit of 1000) as
+ *       {@code BAD_DWELL} (a support window's as {@code BAD_SUPPORT_WINDOWS}), each with a detail naming the
+ *       field and value, counted, the next packet decoding ({@code SpectrumFlagsAndDwellTest}).</li>
  *   <li>S7 the telemetry decoder's hot path fills one reused {@link dev.sweepline.ground.spectrum.SpectrumView}
  *       (buffers for 256 windows, the decompressor writing into them; the fixed fields read in place by a
  *       reused {@code SpectrumHeader}) and allocates nothing per sample, window or spectrum; a listener gets an
