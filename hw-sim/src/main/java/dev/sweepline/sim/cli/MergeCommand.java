@@ -50,7 +50,7 @@ final class MergeCommand implements Callable<Integer> {
             TuneCommand.comparePair(compare, spec);
             ShardSet.check(shards, CampaignIdentity.of(spec, TuneCommand.campaignOctets(campaign, instrument.given()),
                     TuneCommand.codeVersion(), Shard.ALL));
-            rows = CampaignOutput.readRuns(spec, shards);
+            rows = CampaignOutput.readShards(spec, shards);
         } catch (FileFormatException e) {
             throw CliException.input("merge error: " + e.getMessage());
         } catch (IOException e) {
