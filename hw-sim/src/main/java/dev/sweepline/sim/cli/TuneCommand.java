@@ -21,6 +21,7 @@ import dev.sweepline.fsw.host.yaml.FileFormatException;
 import dev.sweepline.ground.decode.TelemetryDecoder;
 import java.io.ByteArrayOutputStream;
 import java.io.IOException;
+import java.io.UncheckedIOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -128,7 +129,7 @@ final class TuneCommand implements Callable<Integer> {
                         journal.file(), journal.droppedOctets() > 0 ? " (dropped a torn last line of "
                         + journal.droppedOctets() + " octets)" : "");
             }
-            rows = CampaignRunner.run(spec, threads, slice, journal, bar::step);
+            rows = runs(spec, slice, journal, bar);
         }
         double wall = (System.nanoTime() - start) / 1e9;
         CampaignOutput.writeRuns(out, rows);
@@ -141,6 +142,22 @@ final class TuneCommand implements Callable<Integer> {
         }
         report(CampaignOutput.writeResults(out, spec, rows, pair), out, CampaignOutput.inertAxes(spec, rows));
         return 0;
+    }
+
+    /**
+     * The shard's rows, its journal appended as each run finishes; a journal that cannot be appended (a full
+     * disk, a quota) is an output that cannot be written (exit 5), naming the file.
+     */
+    private List<RunRow> runs(CampaignSpec spec, Shard slice, RunJournal journal, ConsoleProgress bar) {
+        try {
+            return CampaignRunner.run(spec, threads, slice, journal, bar::step);
+        } catch (IllegalStateException e) {
+            if (e.getCause() instanceof UncheckedIOException io) {
+                throw CliException.io(io.getMessage() + "; the runs journalled before it are kept: make room and "
+                        + "run the same command again, it resumes");
+            }
+            throw e;
+        }
     }
 
     /** The shard of {@code --shard}: the whole campaign without it, from the environment with {@code auto}. */
