@@ -82,6 +82,12 @@ class TuneShardCommandLineTest {
         Run other = BenchCommandLineErrorTest.run("merge", edited.toString(), dir.resolve("s1").toString(),
                 dir.resolve("s2").toString(), "--out", dir.resolve("m4").toString());
         assertOneLine(other, ExitStatus.INPUT, "merge error: " + dir.resolve("s1") + ": a shard of another campaign file");
+        // --out naming a shard's own folder: its runs.csv would be replaced by the merged one
+        byte[] shardRuns = Files.readAllBytes(dir.resolve("s1").resolve("runs.csv"));
+        Run intoShard = BenchCommandLineErrorTest.run("merge", c.toString(), dir.resolve("s1").toString(),
+                dir.resolve("s2").toString(), "--out", dir.resolve("s1").toString());
+        assertOneLine(intoShard, ExitStatus.IO, "--out " + dir.resolve("s1") + ": a shard folder of tune");
+        assertArrayEquals(shardRuns, Files.readAllBytes(dir.resolve("s1").resolve("runs.csv")));
     }
 
     @Test
