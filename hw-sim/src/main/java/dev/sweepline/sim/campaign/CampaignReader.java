@@ -100,6 +100,17 @@ public final class CampaignReader {
         return files;
     }
 
+    /** True when the campaign at {@code path} names its instrument itself ({@code instrument:}). */
+    public static boolean namesInstrument(Path path) {
+        String text;
+        try {
+            text = Files.readString(path);
+        } catch (IOException e) {
+            throw new FileFormatException(path.toString(), 0, "", "cannot read: " + e, e);
+        }
+        return Section.of(path.toString(), YamlTreeReader.read(text, path.toString()), TOP).has(InstrumentKey.KEY);
+    }
+
     /** The file {@code name} stands for: beside the campaign, then as given; none for a built-in. */
     private static Optional<Path> fileNamed(String name, boolean builtIn, boolean builtInFirst, Path folder) {
         if (builtIn && builtInFirst) {

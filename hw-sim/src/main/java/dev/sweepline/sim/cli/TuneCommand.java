@@ -17,6 +17,7 @@ import dev.sweepline.fsw.host.CommandLines;
 import dev.sweepline.fsw.host.ExitStatus;
 import dev.sweepline.fsw.host.Ranges;
 import dev.sweepline.fsw.host.instrument.InstrumentSpec;
+import dev.sweepline.fsw.host.instrument.Instruments;
 import dev.sweepline.fsw.host.yaml.FileFormatException;
 import dev.sweepline.ground.decode.TelemetryDecoder;
 import java.io.ByteArrayOutputStream;
@@ -175,7 +176,9 @@ final class TuneCommand implements Callable<Integer> {
     /**
      * The octets a campaign's identity hashes: the campaign file, then each scenario or instrument file it
      * or {@code --instrument} names (a name line, then the file), so that editing any of them between shards
-     * makes a different campaign. A campaign of built-ins alone hashes its own file's octets.
+     * makes a different campaign; then, for a campaign without {@code instrument:}, a line naming the built-in
+     * {@code --instrument} chooses when it is not the default. A campaign of built-ins alone, on the default
+     * instrument, hashes its own file's octets.
      */
     static byte[] campaignOctets(Path campaign, InstrumentSpec option) {
         try {
@@ -188,6 +191,11 @@ final class TuneCommand implements Callable<Integer> {
             for (Path file : named) {
                 octets.write(("\n# file " + file.getFileName() + "\n").getBytes(StandardCharsets.UTF_8));
                 octets.write(Files.readAllBytes(file));
+            }
+            if (option != null && !Files.isRegularFile(Path.of(option.file()))
+                    && !option.name().equals(Instruments.defaultName()) && !CampaignReader.namesInstrument(campaign)) {
+                // a built-in the campaign does not name, chosen by --instrument: another instrument flown
+                octets.write(("\n# instrument " + option.name() + "\n").getBytes(StandardCharsets.UTF_8));
             }
             return octets.toByteArray();
         } catch (IOException e) {

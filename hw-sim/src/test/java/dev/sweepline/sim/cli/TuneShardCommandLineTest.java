@@ -176,4 +176,31 @@ class TuneShardCommandLineTest {
                 dir.resolve("s2").toString(), "--out", dir.resolve("m").toString());
         assertOneLine(foreign, ExitStatus.INPUT, "merge error: " + runs1 + ":3: run 1 of set 0 is not a run of shard 1/2");
     }
+
+    @Test
+    void shouldTakeAShardFlownOnAnotherBuiltInInstrumentForAnotherCampaign() throws IOException {
+        // the campaign names no instrument: --instrument chooses (FORMAT.md), so a shard run with
+        // --instrument fine-cup flew another instrument than one run without it (the demo cup)
+        Path c = campaign();
+        Run demo = tune(Map.of(), "tune", c.toString(), "--shard", "1/2", "--threads", "1", "--out",
+                dir.resolve("s1").toString());
+        assertEquals(0, demo.status(), demo.err() + demo.out());
+        Run fine = tune(Map.of(), "tune", c.toString(), "--shard", "2/2", "--threads", "1", "--instrument", "fine-cup",
+                "--out", dir.resolve("s2").toString());
+        assertEquals(0, fine.status(), fine.err() + fine.out());
+        Run merged = BenchCommandLineErrorTest.run("merge", c.toString(), dir.resolve("s1").toString(),
+                dir.resolve("s2").toString(), "--out", dir.resolve("m").toString());
+        assertOneLine(merged, ExitStatus.INPUT, "merge error: " + dir.resolve("s2") + ": a shard of another campaign file");
+        Run mergedFine = BenchCommandLineErrorTest.run("merge", c.toString(), dir.resolve("s1").toString(),
+                dir.resolve("s2").toString(), "--instrument", "fine-cup", "--out", dir.resolve("m").toString());
+        assertOneLine(mergedFine, ExitStatus.INPUT, "merge error: " + dir.resolve("s1") + ": a shard of another campaign file");
+        // nor does the demo cup's folder resume on the other instrument
+        Run resumed = tune(Map.of(), "tune", c.toString(), "--shard", "1/2", "--threads", "1", "--instrument", "fine-cup",
+                "--out", dir.resolve("s1").toString());
+        assertOneLine(resumed, ExitStatus.IO, "--out " + dir.resolve("s1") + ": holds shard 1/2 of campaign tiny");
+        // naming the default is the same campaign as naming none
+        Run named = tune(Map.of(), "tune", c.toString(), "--shard", "1/2", "--threads", "1", "--instrument", "demo-cup",
+                "--out", dir.resolve("s1").toString());
+        assertEquals(0, named.status(), named.err() + named.out());
+    }
 }
