@@ -1,5 +1,6 @@
 package dev.sweepline.sim.cli;
 
+import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -19,7 +20,7 @@ import org.junit.jupiter.api.io.TempDir;
 /**
  * {@code tune} when its journal cannot be written in the middle of a campaign (a full disk, a quota): the
  * bench in a process of its own whose file size is limited ({@code ulimit -f}, RLIMIT_FSIZE, setrlimit(2):
- * a write past it fails with EFBIG, "File too large", HotSpot ignoring SIGXFSZ [memory]).
+ * a write past it fails with EFBIG, "File too large", HotSpot ignoring SIGXFSZ [memory]), then resumed.
  */
 class TuneJournalFailureTest {
     @TempDir
@@ -53,5 +54,16 @@ class TuneJournalFailureTest {
                 + ": cannot append a finished run: File too large"), stderr);
         assertTrue(lines.get(0).contains("the runs journalled before it are kept"), stderr);
         assertFalse(stderr.contains("Exception"), stderr);
+        // room again: the same command resumes (the torn last line dropped) and ends as an uninterrupted run
+        BenchCommandLineErrorTest.Run resumed = BenchCommandLineErrorTest.run("tune", campaign.toString(), "--out",
+                out.toString(), "--threads", "1");
+        assertEquals(0, resumed.status(), resumed.err() + resumed.out());
+        assertTrue(resumed.out().contains("resuming: 2 of 3 runs already in"), resumed.out());
+        Path whole = dir.resolve("w");
+        assertEquals(0, BenchCommandLineErrorTest.run("tune", campaign.toString(), "--out", whole.toString(),
+                "--threads", "1").status());
+        for (String f : List.of("runs.csv", "sets.csv", "summary.json")) {
+            assertArrayEquals(Files.readAllBytes(whole.resolve(f)), Files.readAllBytes(out.resolve(f)), f);
+        }
     }
 }
