@@ -5,10 +5,15 @@ import com.fasterxml.jackson.databind.SerializationFeature;
 import dev.sweepline.fsw.command.ParameterTable;
 import dev.sweepline.fsw.command.TableImage;
 import dev.sweepline.fsw.table.SweepParameters;
+import java.io.BufferedWriter;
+import java.io.FileOutputStream;
 import java.io.IOException;
+import java.io.OutputStreamWriter;
 import java.io.Writer;
+import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.nio.file.StandardCopyOption;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
@@ -33,35 +38,87 @@ public final class CampaignOutput {
     private CampaignOutput() {
     }
 
-    /** Writes the run rows. */
+    /**
+     * Writes the run rows: into a file beside it, forced to the disk and then renamed over {@value #RUNS}
+     * (an atomic rename, rename(2)), so that a {@value #RUNS} is only ever whole: {@code merge} takes its
+     * presence for a finished shard, and a kill or a power loss while it was written leaves the old one or none.
+     */
     public static void writeRuns(Path dir, List<RunRow> rows) throws IOException {
         Files.createDirectories(dir);
-        try (Writer w = Files.newBufferedWriter(dir.resolve(RUNS))) {
+        Path partial = dir.resolve(RUNS + ".partial");
+        try (FileOutputStream file = new FileOutputStream(partial.toFile());
+                Writer w = new BufferedWriter(new OutputStreamWriter(file, StandardCharsets.UTF_8))) {
             w.write(RunRow.HEADER + "\n");
             for (RunRow r : rows) {
                 w.write(r.toCsv() + "\n");
             }
+            w.flush();
+            file.getFD().sync();
         }
+        Files.move(partial, dir.resolve(RUNS), StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
     }
 
-    /** Reads the run rows of one or more shard folders, in job order. */
+    /** Reads the run rows of one or more folders, in job order (every run of the campaign once). */
     public static List<RunRow> readRuns(CampaignSpec spec, List<Path> dirs) throws IOException {
         List<RunRow> rows = new ArrayList<>();
         for (Path dir : dirs) {
-            List<String> lines = Files.readAllLines(dir.resolve(RUNS));
-            if (lines.isEmpty() || !lines.get(0).equals(RunRow.HEADER)) {
-                throw new IOException(dir.resolve(RUNS) + ": not a campaign run file of this bench (header differs: "
-                        + (lines.isEmpty() ? "empty file" : lines.get(0).split(",", -1).length + " columns, expected "
-                        + RunRow.HEADER.split(",").length) + "); a shard written by another version must be run again");
-            }
-            for (int i = 1; i < lines.size(); i++) {
-                try {
-                    rows.add(RunRow.parse(lines.get(i)));
-                } catch (IllegalArgumentException e) {
-                    throw new IOException(dir.resolve(RUNS) + ":" + (i + 1) + ": " + e.getMessage(), e);
-                }
-            }
+            rows.addAll(readRunFile(spec, dir, null));
         }
+        return inJobOrder(spec, rows);
+    }
+
+    /**
+     * As {@link #readRuns}, for shard folders: each {@value #RUNS} must hold exactly the runs its folder's
+     * {@link CampaignIdentity} says its shard owns, each once.
+     *
+     * @throws IOException naming the file (and line): a run of another shard, fewer or more runs than the shard's
+     */
+    public static List<RunRow> readShards(CampaignSpec spec, List<Path> dirs) throws IOException {
+        List<RunRow> rows = new ArrayList<>();
+        for (Path dir : dirs) {
+            rows.addAll(readRunFile(spec, dir, CampaignIdentity.read(dir)));
+        }
+        return inJobOrder(spec, rows);
+    }
+
+    /** The rows of {@code dir}'s {@value #RUNS}, checked against {@code shard}'s identity when it is not null. */
+    private static List<RunRow> readRunFile(CampaignSpec spec, Path dir, CampaignIdentity shard) throws IOException {
+        Path file = dir.resolve(RUNS);
+        byte[] octets = Files.readAllBytes(file);
+        List<String> lines = new String(octets, StandardCharsets.UTF_8).lines().toList();
+        if (lines.isEmpty() || !lines.get(0).equals(RunRow.HEADER)) {
+            throw new IOException(file + ": not a campaign run file of this bench (header differs: "
+                    + (lines.isEmpty() ? "empty file" : lines.get(0).split(",", -1).length + " columns, expected "
+                    + RunRow.HEADER.split(",").length) + "); a shard written by another version must be run again");
+        }
+        if (octets[octets.length - 1] != '\n') {
+            throw new IOException(file + ":" + lines.size() + ": the last row is cut short (no newline: the file was "
+                    + "not written to its end); run the shard again, it resumes");
+        }
+        List<RunRow> rows = new ArrayList<>();
+        for (int i = 1; i < lines.size(); i++) {
+            RunRow row;
+            try {
+                row = RunRow.parse(lines.get(i));
+            } catch (IllegalArgumentException e) {
+                throw new IOException(file + ":" + (i + 1) + ": " + e.getMessage(), e);
+            }
+            if (shard != null && (row.set() < 0 || row.set() >= spec.setCount() || row.run() < 0
+                    || row.run() >= spec.runsPerSet() || !shard.shard().owns(CampaignRunner.job(spec, row)))) {
+                throw new IOException(file + ":" + (i + 1) + ": run " + row.run() + " of set " + row.set()
+                        + " is not a run of shard " + shard.shard() + " of this campaign");
+            }
+            rows.add(row);
+        }
+        if (shard != null && rows.size() != shard.runs()) {
+            throw new IOException(file + ": " + rows.size() + " of the " + shard.runs() + " runs of shard "
+                    + shard.shard() + "; run the shard again, it resumes");
+        }
+        return rows;
+    }
+
+    /** {@code rows} in job order, every run of the campaign exactly once. */
+    private static List<RunRow> inJobOrder(CampaignSpec spec, List<RunRow> rows) throws IOException {
         rows.sort((a, b) -> Long.compare((long) a.set() * spec.runsPerSet() + a.run(),
                 (long) b.set() * spec.runsPerSet() + b.run()));
         for (int i = 1; i < rows.size(); i++) {

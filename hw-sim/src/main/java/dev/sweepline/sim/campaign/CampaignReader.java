@@ -38,6 +38,14 @@ public final class CampaignReader {
     private static final List<String> KINDS = List.of("fixed", "uniform", "logUniform", "normal");
     /** Largest campaign this reader accepts, runs: a guard against a typo exploding the grid. */
     static final int MAX_RUNS = 1_000_000;
+    /**
+     * Largest seed, exclusive: 2^53. The reader reads every number as a double (IEEE 754 binary64, a 53-bit
+     * significand), which holds each whole number below it exactly; above it two seeds written differently
+     * could be read as one.
+     */
+    static final double SEED_LIMIT = 0x1p53;
+    /** Longest run, s: the scenario format's own limit of a run's duration (scenarios/FORMAT.md). */
+    static final double MAX_DURATION_SECONDS = 1e6;
 
     private CampaignReader() {
     }
@@ -92,6 +100,17 @@ public final class CampaignReader {
         return files;
     }
 
+    /** True when the campaign at {@code path} names its instrument itself ({@code instrument:}). */
+    public static boolean namesInstrument(Path path) {
+        String text;
+        try {
+            text = Files.readString(path);
+        } catch (IOException e) {
+            throw new FileFormatException(path.toString(), 0, "", "cannot read: " + e, e);
+        }
+        return Section.of(path.toString(), YamlTreeReader.read(text, path.toString()), TOP).has(InstrumentKey.KEY);
+    }
+
     /** The file {@code name} stands for: beside the campaign, then as given; none for a built-in. */
     private static Optional<Path> fileNamed(String name, boolean builtIn, boolean builtInFirst, Path folder) {
         if (builtIn && builtInFirst) {
@@ -117,9 +136,12 @@ public final class CampaignReader {
             throw new FileFormatException(file, top.required("format").line(), "format", "expected " + FORMAT);
         }
         InstrumentModel model = InstrumentModel.of(InstrumentKey.choose(top, folder, option));
-        long seed = (long) positive(top, "seed", true);
-        int runs = (int) positive(top, "runsPerSet", false);
-        double duration = positive(top, "durationS", false);
+        long seed = (long) whole(top, "seed", 0, SEED_LIMIT - 1);
+        int runs = (int) whole(top, "runsPerSet", 1, MAX_RUNS);
+        double duration = top.number("durationS");
+        if (!(duration > 0 && duration <= MAX_DURATION_SECONDS)) {
+            throw top.invalid(top.required("durationS"), "must be positive and at most 1e6 s", duration);
+        }
         Scenario base = scenario(top, file, folder);
         double allocation = top.has("allocationBitsPerS") ? positive(top, "allocationBitsPerS", false) : Double.NaN;
         Map<PlasmaParameter, Distribution> draws = top.has("draws") ? draws(file, top.required("draws"))
@@ -129,12 +151,14 @@ public final class CampaignReader {
             grid = linked(top, grid);
         }
         Distribution shift = top.has("eventShiftS") ? distribution(file, top.required("eventShiftS")) : null;
+        long sets = CampaignSpec.sets(grid);
+        if (sets > MAX_RUNS / runs) {
+            throw new FileFormatException(file, top.required("grid").line(), "grid", (sets == Long.MAX_VALUE
+                    ? "more than " + Long.MAX_VALUE : Long.toString(sets)) + " sets x " + runs + " runs is more than "
+                    + MAX_RUNS + " runs");
+        }
         CampaignSpec spec = new CampaignSpec(top.text("name"), top.text("description", ""), seed, runs, duration,
                 base, draws, grid, allocation, shift, model);
-        if ((long) spec.setCount() * runs > MAX_RUNS) {
-            throw new FileFormatException(file, top.required("grid").line(), "grid",
-                    spec.setCount() + " sets x " + runs + " runs is more than " + MAX_RUNS + " runs");
-        }
         // every set must be a parameter table the flight software accepts, within the instrument's limits
         InstrumentDescription instrument = model.flight();
         InstrumentLimits limits = instrument.limits();
@@ -162,6 +186,16 @@ public final class CampaignReader {
                     + limits.maxModulatorMillivolts / 1000 + " V)";
             default -> "";
         };
+    }
+
+    /** The whole number under {@code key}, {@code least} to {@code most}. */
+    private static double whole(Section s, String key, double least, double most) {
+        double v = s.number(key);
+        if (!(v >= least && v <= most && v == Math.rint(v))) {
+            throw s.invalid(s.required(key), (least == 1 ? "must be positive and a whole number, at most "
+                    : "must be a whole number from " + (long) least + " to ") + (long) most, v);
+        }
+        return v;
     }
 
     private static double positive(Section s, String key, boolean zeroAllowed) {
@@ -333,7 +367,12 @@ public final class CampaignReader {
             }
             List<Double> values = new ArrayList<>();
             for (YamlNode item : seq.items()) {
-                values.add(s.number(item));
+                double v = s.number(item);
+                if (!t.fits(v)) {
+                    throw s.invalid(item, "is beyond the flight software's 32-bit field (" + t.key() + " x "
+                            + t.scale() + " within +-2^31)", v);
+                }
+                values.add(v);
             }
             axes.add(new CampaignSpec.GridAxis(t, List.copyOf(values)));
         }

@@ -47,13 +47,23 @@ public record CampaignSpec(String name, String description, long seed, int runsP
         }
     }
 
-    /** Number of grid points: the product of the axis lengths, the linked axes counting once. */
+    /**
+     * Number of grid points: the product of the axis lengths, the linked axes counting once.
+     *
+     * @throws ArithmeticException when it exceeds an int (the reader refuses such a grid, {@link #sets})
+     */
     public int setCount() {
-        int n = 1;
+        return Math.toIntExact(sets(grid));
+    }
+
+    /** The grid points of {@code grid}, as {@link #setCount}, in a long held at Long.MAX_VALUE once it would overflow. */
+    static long sets(List<GridAxis> grid) {
+        long n = 1;
         boolean linkedSeen = false;
         for (GridAxis a : grid) {
             if (!a.linked() || !linkedSeen) {
-                n *= a.values().size();
+                int size = a.values().size();
+                n = n > Long.MAX_VALUE / size ? Long.MAX_VALUE : n * size;
             }
             linkedSeen |= a.linked();
         }

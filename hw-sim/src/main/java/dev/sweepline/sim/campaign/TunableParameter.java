@@ -70,6 +70,17 @@ public enum TunableParameter {
         return key;
     }
 
+    /** The flight software's fixed-point scale of this parameter (1, or 256 for Q8). */
+    int scale() {
+        return scale;
+    }
+
+    /** True when {@code value} (plain units) rounds to a value of the flight software's int field, as {@link #apply} sets it. */
+    boolean fits(double value) {
+        long scaled = Math.round(value * scale); // NaN gives 0, an infinity Long.MIN_VALUE or MAX_VALUE
+        return !Double.isNaN(value) && scaled >= Integer.MIN_VALUE && scaled <= Integer.MAX_VALUE;
+    }
+
     /** Sets this parameter of {@code p} to {@code value} (plain units, rounded to the flight software's scale). */
     void apply(SweepParameters p, double value) {
         setter.accept(p, (int) Math.round(value * scale));

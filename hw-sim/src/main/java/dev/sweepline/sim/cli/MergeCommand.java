@@ -11,6 +11,7 @@ import dev.sweepline.fsw.host.CliException;
 import dev.sweepline.fsw.host.CommandLines;
 import dev.sweepline.fsw.host.yaml.FileFormatException;
 import java.io.IOException;
+import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.concurrent.Callable;
@@ -43,6 +44,11 @@ final class MergeCommand implements Callable<Integer> {
     @Override
     public Integer call() throws IOException {
         instrument.resolve();
+        if (Files.exists(out.resolve(CampaignIdentity.FILE))) {
+            // a shard's folder (this campaign's or another's): the merged runs.csv would replace the shard's own
+            throw CliException.io("--out " + out + ": a shard folder of tune (it holds " + CampaignIdentity.FILE
+                    + "), whose runs.csv the merged one would replace; use another folder");
+        }
         CampaignSpec spec;
         List<RunRow> rows;
         try {
@@ -50,7 +56,7 @@ final class MergeCommand implements Callable<Integer> {
             TuneCommand.comparePair(compare, spec);
             ShardSet.check(shards, CampaignIdentity.of(spec, TuneCommand.campaignOctets(campaign, instrument.given()),
                     TuneCommand.codeVersion(), Shard.ALL));
-            rows = CampaignOutput.readRuns(spec, shards);
+            rows = CampaignOutput.readShards(spec, shards);
         } catch (FileFormatException e) {
             throw CliException.input("merge error: " + e.getMessage());
         } catch (IOException e) {

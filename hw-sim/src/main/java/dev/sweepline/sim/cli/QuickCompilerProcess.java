@@ -1,6 +1,7 @@
 package dev.sweepline.sim.cli;
 
 import com.sun.management.HotSpotDiagnosticMXBean;
+import dev.sweepline.fsw.host.ExitStatus;
 import java.io.IOException;
 import java.lang.management.ManagementFactory;
 import java.nio.file.Files;
@@ -17,7 +18,8 @@ import java.util.OptionalInt;
  * C2 would have taken it (tier 1); a JVM started at tier 1 compiles each method once, without profiling
  * code, at the same thresholds. The flag exists only on the command line, hence the second JVM: the same
  * java, the same JVM options, class path, arguments, working directory and environment, its standard
- * streams this process's. This process waits for it and exits with its status; a signal that ends this
+ * streams this process's. This process waits for it and exits with its status (a child ended by a signal
+ * from elsewhere: one line, {@link ExitStatus#FAILED}); a signal that ends this
  * process (SIGTERM, SIGINT) ends the child first ({@link Process#destroy}), so a campaign's journal is left as
  * a killed run leaves it.
  *
@@ -29,6 +31,11 @@ import java.util.OptionalInt;
 final class QuickCompilerProcess {
     /** The flag of the child JVM: tiered compilation stopped at C1 without profiling. */
     static final String FLAG = "-XX:TieredStopAtLevel=1";
+    /**
+     * A child's status above this is 128 + the signal that ended it (the JDK's Process on Unix reports a
+     * signalled process as a shell does [memory]); the bench's own statuses are 0..6 ({@link ExitStatus}).
+     */
+    private static final int SIGNALLED = 128;
     /** Set in the child, so that it never relaunches itself. */
     static final String CHILD_PROPERTY = "sweepline.jit.quickCompilerProcess";
     /** JVM options that a second process must not repeat: agents, debuggers, flight recordings. */
@@ -65,24 +72,41 @@ final class QuickCompilerProcess {
         while (true) {
             try {
                 int status = child.waitFor();
-                removeHook(stop);
+                boolean stopping = !removeHook(stop);
                 if (interrupted) {
                     Thread.currentThread().interrupt();
                 }
-                return OptionalInt.of(status);
+                return OptionalInt.of(status > SIGNALLED && !stopping ? signalled(child.pid(), status - SIGNALLED)
+                        : status);
             } catch (InterruptedException e) {
                 interrupted = true; // the child still runs: its status is this process's
             }
         }
     }
 
-    /** Removes {@code hook}, unless this process is already shutting down (then the hook has run or is running). */
-    private static void removeHook(Thread hook) {
+    /**
+     * Removes {@code hook}; false when this process is already shutting down (then the hook has run or is running,
+     * and the signal that ended the child came from it).
+     */
+    private static boolean removeHook(Thread hook) {
         try {
             Runtime.getRuntime().removeShutdownHook(hook);
+            return true;
         } catch (IllegalStateException e) {
-            // shutdown in progress: the hook is destroying the child, which has ended
+            return false; // shutdown in progress: the hook is destroying the child, which has ended
         }
+    }
+
+    /**
+     * The status of a child ended by {@code signal} from outside: {@link ExitStatus#FAILED}, after one line on
+     * the standard error saying so (the child had no chance to say anything).
+     */
+    private static int signalled(long pid, int signal) {
+        System.err.println("sweepline-bench: the command's second JVM (C1 alone, pid " + pid + ") was ended by signal "
+                + signal + (signal == 9 ? " (SIGKILL: kill -9, or the kernel out of memory)" : "")
+                + "; what it journalled is kept: the same command resumes it");
+        System.err.flush();
+        return ExitStatus.FAILED;
     }
 
     /**

@@ -17,10 +17,12 @@ import dev.sweepline.fsw.host.CommandLines;
 import dev.sweepline.fsw.host.ExitStatus;
 import dev.sweepline.fsw.host.Ranges;
 import dev.sweepline.fsw.host.instrument.InstrumentSpec;
+import dev.sweepline.fsw.host.instrument.Instruments;
 import dev.sweepline.fsw.host.yaml.FileFormatException;
 import dev.sweepline.ground.decode.TelemetryDecoder;
 import java.io.ByteArrayOutputStream;
 import java.io.IOException;
+import java.io.UncheckedIOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -128,7 +130,7 @@ final class TuneCommand implements Callable<Integer> {
                         journal.file(), journal.droppedOctets() > 0 ? " (dropped a torn last line of "
                         + journal.droppedOctets() + " octets)" : "");
             }
-            rows = CampaignRunner.run(spec, threads, slice, journal, bar::step);
+            rows = runs(spec, slice, journal, bar);
         }
         double wall = (System.nanoTime() - start) / 1e9;
         CampaignOutput.writeRuns(out, rows);
@@ -141,6 +143,22 @@ final class TuneCommand implements Callable<Integer> {
         }
         report(CampaignOutput.writeResults(out, spec, rows, pair), out, CampaignOutput.inertAxes(spec, rows));
         return 0;
+    }
+
+    /**
+     * The shard's rows, its journal appended as each run finishes; a journal that cannot be appended (a full
+     * disk, a quota) is an output that cannot be written (exit 5), naming the file.
+     */
+    private List<RunRow> runs(CampaignSpec spec, Shard slice, RunJournal journal, ConsoleProgress bar) {
+        try {
+            return CampaignRunner.run(spec, threads, slice, journal, bar::step);
+        } catch (IllegalStateException e) {
+            if (e.getCause() instanceof UncheckedIOException io) {
+                throw CliException.io(io.getMessage() + "; the runs journalled before it are kept: make room and "
+                        + "run the same command again, it resumes");
+            }
+            throw e;
+        }
     }
 
     /** The shard of {@code --shard}: the whole campaign without it, from the environment with {@code auto}. */
@@ -158,7 +176,9 @@ final class TuneCommand implements Callable<Integer> {
     /**
      * The octets a campaign's identity hashes: the campaign file, then each scenario or instrument file it
      * or {@code --instrument} names (a name line, then the file), so that editing any of them between shards
-     * makes a different campaign. A campaign of built-ins alone hashes its own file's octets.
+     * makes a different campaign; then, for a campaign without {@code instrument:}, a line naming the built-in
+     * {@code --instrument} chooses when it is not the default. A campaign of built-ins alone, on the default
+     * instrument, hashes its own file's octets.
      */
     static byte[] campaignOctets(Path campaign, InstrumentSpec option) {
         try {
@@ -171,6 +191,11 @@ final class TuneCommand implements Callable<Integer> {
             for (Path file : named) {
                 octets.write(("\n# file " + file.getFileName() + "\n").getBytes(StandardCharsets.UTF_8));
                 octets.write(Files.readAllBytes(file));
+            }
+            if (option != null && !Files.isRegularFile(Path.of(option.file()))
+                    && !option.name().equals(Instruments.defaultName()) && !CampaignReader.namesInstrument(campaign)) {
+                // a built-in the campaign does not name, chosen by --instrument: another instrument flown
+                octets.write(("\n# instrument " + option.name() + "\n").getBytes(StandardCharsets.UTF_8));
             }
             return octets.toByteArray();
         } catch (IOException e) {

@@ -74,6 +74,12 @@ class CampaignReaderTest {
         "linked: [jumpWindows, jumpWindows]|5|linked|jumpWindows is named twice",
         "linked: [jumpWindows]|5|linked|a list of two or more grid keys",
         "linked: [jumpWindows, maxBandWindows]|5|linked|as many values each",
+        // SweepParameters' fields are Java ints (JLS §4.2.1): 2^32 + 750 would run as 750
+        "grid: {fixedSettleMicros: [4294968046]}|5|grid.fixedSettleMicros|beyond the flight software's 32-bit field",
+        "grid: {fixedSettleMicros: [1e999]}|5|grid.fixedSettleMicros|beyond the flight software's 32-bit field",
+        // FORMAT.md: runsPerSet counts ensemble members, a whole number
+        "runsPerSet: 2.5|5|runsPerSet|must be positive and a whole number",
+        "runsPerSet: 1e999|5|runsPerSet|must be positive and a whole number, at most 1000000",
     })
     void shouldNameFileLineAndField(String line, int lineNo, String field, String problem) {
         String head = """
@@ -93,5 +99,55 @@ class CampaignReaderTest {
         assertEquals(lineNo, e.line(), e.getMessage());
         assertTrue(e.field().startsWith(field), e.getMessage());
         assertTrue(e.getMessage().contains(problem), e.getMessage());
+    }
+
+    /** A whole-number or bounded key of the head lines: the file, line and field named. */
+    @ParameterizedTest
+    @CsvSource(delimiter = '|', value = {
+        // the seed is read as a double: 2^53 + 1 would be read as 2^53 (IEEE 754 binary64, 53-bit significand)
+        "seed: 1.5|3|seed|must be a whole number",
+        "seed: 9007199254740993|3|seed|must be a whole number from 0 to 9007199254740991",
+        "seed: 1e999|3|seed|must be a whole number from 0 to 9007199254740991",
+        // 1e999 overflows to infinity (Double.parseDouble): a run that never ends; the scenario format's own
+        // limit of a run's duration, 1e6 s (scenarios/FORMAT.md)
+        "durationS: 1e999|4|durationS|must be positive and at most 1e6 s",
+        "durationS: 2e6|4|durationS|must be positive and at most 1e6 s",
+    })
+    void shouldNameAHeadKeyOutOfItsRange(String line, int lineNo, String field, String problem) {
+        String text = """
+                format: sweepline-campaign/1
+                name: broken
+                seed: 1
+                durationS: 10
+                runsPerSet: 2
+                scenario: quiet-perihelion
+                grid: {integrationPeriods: [8]}
+                """.replaceFirst("(?m)^" + field + ": .*$", line);
+        FileFormatException e = assertThrows(FileFormatException.class,
+                () -> CampaignReader.parse(text, "broken.yaml", null));
+        assertEquals(lineNo, e.line(), e.getMessage());
+        assertEquals(field, e.field(), e.getMessage());
+        assertTrue(e.getMessage().contains(problem), e.getMessage());
+    }
+
+    @Test
+    void shouldCountTheSetsOfAHugeGridWithoutOverflow() {
+        // 16 axes of 4 values: 4^16 = 2^32 sets, which an int product wraps to 0 (JLS §15.17.1)
+        StringBuilder grid = new StringBuilder("grid:\n");
+        for (TunableParameter t : TunableParameter.values()) {
+            grid.append("  ").append(t.key()).append(": [1, 2, 3, 4]\n");
+        }
+        assertEquals(16, TunableParameter.values().length);
+        String text = """
+                format: sweepline-campaign/1
+                name: huge
+                seed: 1
+                runsPerSet: 1
+                durationS: 10
+                scenario: quiet-perihelion
+                """ + grid;
+        FileFormatException e = assertThrows(FileFormatException.class, () -> CampaignReader.parse(text, "huge.yaml", null));
+        assertEquals(7, e.line(), e.getMessage());
+        assertTrue(e.getMessage().contains("4294967296 sets x 1 runs is more than 1000000 runs"), e.getMessage());
     }
 }

@@ -9,7 +9,8 @@ import java.util.List;
  * whether it is in force, then calls {@link #work} often enough for any compiler tier to take it; with
  * {@code default}, prints the mode the command line's own process chooses for a campaign's size; with
  * {@code relaunch child STATUS ...}, runs itself again through {@link QuickCompilerProcess} as {@code child},
- * which prints its compiler tier limit and arguments and exits with STATUS.
+ * which prints its compiler tier limit and arguments and exits with STATUS; with {@code relaunch killed}, a
+ * child that ends itself with SIGKILL.
  */
 final class JitPolicyProbe {
     /** Calls of {@link #work}: far above HotSpot's C2 threshold (Tier4InvocationThreshold 5000, [memory]). */
@@ -41,6 +42,16 @@ final class JitPolicyProbe {
             // QuickCompilerProcess's child: this class again, with the arguments after "relaunch"
             List<String> rest = List.of(args).subList(1, args.length);
             System.err.println("relaunched status " + QuickCompilerProcess.run(JitPolicyProbe.class, rest));
+            return;
+        }
+        if ("killed".equals(args[0])) {
+            // QuickCompilerProcess's child ended by SIGKILL (as kill -9 or the kernel's out-of-memory killer end it)
+            try {
+                new ProcessBuilder("kill", "-KILL", Long.toString(ProcessHandle.current().pid())).start().waitFor();
+            } catch (java.io.IOException e) {
+                throw new IllegalStateException(e);
+            }
+            Thread.sleep(60_000); // the signal ends the JVM before this does
             return;
         }
         if ("child".equals(args[0])) {

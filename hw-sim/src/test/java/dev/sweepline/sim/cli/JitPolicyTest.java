@@ -53,6 +53,17 @@ class JitPolicyTest {
     }
 
     @Test
+    void shouldFailInOneLineWhenTheChildIsKilled() throws IOException, InterruptedException {
+        // a child ended by a signal: Process.exitValue is 128 + the signal (9, SIGKILL: 137) on Linux [memory],
+        // no status of the bench's list; the parent says so and ends with 1, "failed" (ExitStatus.FAILED)
+        String out = probe("relaunch", "killed");
+        assertTrue(out.contains("relaunched status OptionalInt[1]"), out);
+        assertTrue(out.contains("sweepline-bench: the command's second JVM (C1 alone, pid "), out);
+        assertTrue(out.contains(") was ended by signal 9 (SIGKILL: kill -9, or the kernel out of memory); what it "
+                + "journalled is kept: the same command resumes it"), out);
+    }
+
+    @Test
     void shouldRelaunchOnlyWithoutAgentsDebuggersOrFlightRecordings() {
         // two processes cannot share an agent's port or a recording's file: such a JVM keeps the directive
         assertTrue(QuickCompilerProcess.relaunchable(List.of("-Xmx2g", "-Dx=1", "-XX:+UseSerialGC")));

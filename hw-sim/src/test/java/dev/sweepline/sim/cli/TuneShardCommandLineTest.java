@@ -82,6 +82,12 @@ class TuneShardCommandLineTest {
         Run other = BenchCommandLineErrorTest.run("merge", edited.toString(), dir.resolve("s1").toString(),
                 dir.resolve("s2").toString(), "--out", dir.resolve("m4").toString());
         assertOneLine(other, ExitStatus.INPUT, "merge error: " + dir.resolve("s1") + ": a shard of another campaign file");
+        // --out naming a shard's own folder: its runs.csv would be replaced by the merged one
+        byte[] shardRuns = Files.readAllBytes(dir.resolve("s1").resolve("runs.csv"));
+        Run intoShard = BenchCommandLineErrorTest.run("merge", c.toString(), dir.resolve("s1").toString(),
+                dir.resolve("s2").toString(), "--out", dir.resolve("s1").toString());
+        assertOneLine(intoShard, ExitStatus.IO, "--out " + dir.resolve("s1") + ": a shard folder of tune");
+        assertArrayEquals(shardRuns, Files.readAllBytes(dir.resolve("s1").resolve("runs.csv")));
     }
 
     @Test
@@ -133,5 +139,68 @@ class TuneShardCommandLineTest {
         Run merged = BenchCommandLineErrorTest.run("merge", c.toString(), dir.resolve("s1").toString(),
                 dir.resolve("s2").toString(), "--out", dir.resolve("m").toString());
         assertOneLine(merged, ExitStatus.INPUT, "merge error: " + dir.resolve("s1") + ": a shard of another campaign file");
+    }
+
+    @Test
+    void shouldRefuseAShardWhoseRunFileIsCutShortOrShortOfRuns() throws IOException {
+        // a kill -9 or a power loss while tune wrote runs.csv (a buffered writer's blocks, not its lines), or a
+        // shard being run again while merge reads it: the file ends inside a row, or a row short
+        Path c = campaign();
+        for (int shard = 1; shard <= 2; shard++) {
+            Run run = tune(Map.of(), "tune", c.toString(), "--shard", shard + "/2", "--threads", "1", "--out",
+                    dir.resolve("s" + shard).toString());
+            assertEquals(0, run.status(), run.err() + run.out());
+        }
+        Path runs2 = dir.resolve("s2").resolve("runs.csv");
+        byte[] whole2 = Files.readAllBytes(runs2);
+        String last = new String(whole2, java.nio.charset.StandardCharsets.US_ASCII).strip();
+        String lastField = last.substring(last.lastIndexOf(',') + 1);
+        assertTrue(lastField.length() > 3 && Double.isFinite(Double.parseDouble(lastField)), last);
+        // the newline and the last two digits lost: the row still parses, to another number
+        Files.write(runs2, java.util.Arrays.copyOf(whole2, whole2.length - 3));
+        Run cut = BenchCommandLineErrorTest.run("merge", c.toString(), dir.resolve("s1").toString(),
+                dir.resolve("s2").toString(), "--out", dir.resolve("m").toString());
+        assertOneLine(cut, ExitStatus.INPUT, "merge error: " + runs2 + ":3: the last row is cut short");
+        assertTrue(Files.notExists(dir.resolve("m").resolve("runs.csv")));
+        // shard 1's file a row short (its second row gone): the shard, not "a shard", is named
+        Files.write(runs2, whole2);
+        Path runs1 = dir.resolve("s1").resolve("runs.csv");
+        List<String> lines1 = Files.readAllLines(runs1);
+        Files.write(runs1, lines1.subList(0, 2));
+        Run shortOfRuns = BenchCommandLineErrorTest.run("merge", c.toString(), dir.resolve("s1").toString(),
+                dir.resolve("s2").toString(), "--out", dir.resolve("m").toString());
+        assertOneLine(shortOfRuns, ExitStatus.INPUT, "merge error: " + runs1 + ": 1 of the 2 runs of shard 1/2");
+        // a row of shard 2 in shard 1's file in place of its own
+        Files.write(runs1, List.of(lines1.get(0), lines1.get(1), Files.readAllLines(runs2).get(1)));
+        Run foreign = BenchCommandLineErrorTest.run("merge", c.toString(), dir.resolve("s1").toString(),
+                dir.resolve("s2").toString(), "--out", dir.resolve("m").toString());
+        assertOneLine(foreign, ExitStatus.INPUT, "merge error: " + runs1 + ":3: run 1 of set 0 is not a run of shard 1/2");
+    }
+
+    @Test
+    void shouldTakeAShardFlownOnAnotherBuiltInInstrumentForAnotherCampaign() throws IOException {
+        // the campaign names no instrument: --instrument chooses (FORMAT.md), so a shard run with
+        // --instrument fine-cup flew another instrument than one run without it (the demo cup)
+        Path c = campaign();
+        Run demo = tune(Map.of(), "tune", c.toString(), "--shard", "1/2", "--threads", "1", "--out",
+                dir.resolve("s1").toString());
+        assertEquals(0, demo.status(), demo.err() + demo.out());
+        Run fine = tune(Map.of(), "tune", c.toString(), "--shard", "2/2", "--threads", "1", "--instrument", "fine-cup",
+                "--out", dir.resolve("s2").toString());
+        assertEquals(0, fine.status(), fine.err() + fine.out());
+        Run merged = BenchCommandLineErrorTest.run("merge", c.toString(), dir.resolve("s1").toString(),
+                dir.resolve("s2").toString(), "--out", dir.resolve("m").toString());
+        assertOneLine(merged, ExitStatus.INPUT, "merge error: " + dir.resolve("s2") + ": a shard of another campaign file");
+        Run mergedFine = BenchCommandLineErrorTest.run("merge", c.toString(), dir.resolve("s1").toString(),
+                dir.resolve("s2").toString(), "--instrument", "fine-cup", "--out", dir.resolve("m").toString());
+        assertOneLine(mergedFine, ExitStatus.INPUT, "merge error: " + dir.resolve("s1") + ": a shard of another campaign file");
+        // nor does the demo cup's folder resume on the other instrument
+        Run resumed = tune(Map.of(), "tune", c.toString(), "--shard", "1/2", "--threads", "1", "--instrument", "fine-cup",
+                "--out", dir.resolve("s1").toString());
+        assertOneLine(resumed, ExitStatus.IO, "--out " + dir.resolve("s1") + ": holds shard 1/2 of campaign tiny");
+        // naming the default is the same campaign as naming none
+        Run named = tune(Map.of(), "tune", c.toString(), "--shard", "1/2", "--threads", "1", "--instrument", "demo-cup",
+                "--out", dir.resolve("s1").toString());
+        assertEquals(0, named.status(), named.err() + named.out());
     }
 }
