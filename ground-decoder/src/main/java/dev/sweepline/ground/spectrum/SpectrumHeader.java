@@ -27,7 +27,7 @@ import dev.sweepline.ground.frame.BigEndian;
  * 18         14          ...     gain-range tags, saturation flags, compression, quadrant streams
  *
  * layout 3: as layout 2 to offset 17, then
- * 18                     1       support windows b (1..3)
+ * 18                     1       support windows b (1..6)
  * 19                     3 b     b × [window offset from f (1), integration periods (2)]
  * 19 + 3 b               ...     gain-range tags, ...
  * </pre>
