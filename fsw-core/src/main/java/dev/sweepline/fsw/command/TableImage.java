@@ -14,7 +14,7 @@ import dev.sweepline.fsw.table.WindowTable;
  * <pre>
  *   0   2  marker 0x5354 ("ST")
  *   2   1  format version v: 1, 2, 3 or 4
- *   3   1  reserved, 0
+ *   3   1  reserved, 0 (an image with another value is not intact: a later format may give it a meaning)
  *   4   2  image length L = 138 + 4 n (v 1), 154 + 4 n (v 2), 158 + 4 n (v 3) or 162 + 4 n (v 4), octets, CRC included
  *   6   2  window count n (1..256)
  *   8  76  sweep parameters, 19 signed 32-bit values (order in commands.md §4.1)
@@ -59,9 +59,10 @@ public final class TableImage {
     public static final int MIN_OCTETS = FIXED_OCTETS + 4;
     /** Longest image ({@link WindowTable#CAPACITY} windows, version 4). */
     public static final int MAX_OCTETS = FIXED_OCTETS + STYLE_OCTETS + FLUSH_OCTETS + FLOOR_OCTETS + 4 * WindowTable.CAPACITY;
-    /** {@link #decode} result: the image is not intact (marker, version, length or CRC). */
+    /** {@link #decode} result: the image is not intact (marker, version, reserved octet, length or CRC). */
     public static final int CORRUPT = -1;
 
+    private static final int RESERVED_AT = 3;
     private static final int PARAMETERS_AT = 8;
     private static final int HOUSEKEEPING_AT = 84;
     private static final int DECIMATION_AT = 86;
@@ -88,8 +89,8 @@ public final class TableImage {
     }
 
     /**
-     * Checks the integrity of an image of {@code length} octets: marker, version, length field,
-     * window count and CRC.
+     * Checks the integrity of an image of {@code length} octets: marker, version, reserved octet (0),
+     * length field, window count and CRC.
      *
      * @return true when intact
      */
@@ -100,7 +101,7 @@ public final class TableImage {
         int n = Telecommand.u16(b, 6);
         int version = b[2] & 0xFF;
         return Telecommand.u16(b, 0) == MARKER && version >= VERSION && version <= VERSION_FLOOR
-            && Telecommand.u16(b, 4) == length
+            && b[RESERVED_AT] == 0 && Telecommand.u16(b, 4) == length
             && n >= 1 && n <= WindowTable.CAPACITY && length(n, version) == length
             && Crc16.of(b, 0, length - 2) == Telecommand.u16(b, length - 2);
     }
@@ -174,7 +175,7 @@ public final class TableImage {
         int length = length(t.windowCount, version);
         put16(b, 0, MARKER);
         b[2] = (byte) version;
-        b[3] = 0;
+        b[RESERVED_AT] = 0;
         put16(b, 4, length);
         put16(b, 6, t.windowCount);
         writeParameters(t.sweep, b);

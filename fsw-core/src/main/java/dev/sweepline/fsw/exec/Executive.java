@@ -42,6 +42,8 @@ public final class Executive {
 
     private boolean outstanding;
     private boolean linkAccepted;
+    /** True once the link accepted any transmission of the step in flight. */
+    private boolean everAccepted;
     private int nextSequence;
     private int firstSequence;
     private int transmissions;
@@ -98,6 +100,9 @@ public final class Executive {
                 outstanding = false;
                 abandonedSteps++;
                 work++;
+                if (!everAccepted) {
+                    scheduler.stepNotSent(); // the electronics never saw its levels
+                }
             }
         }
         if (outstanding) {
@@ -115,6 +120,7 @@ public final class Executive {
                 outstanding = true;
                 retriesThisStep = 0;
                 transmissions = 0;
+                everAccepted = false;
                 firstSequence = nextSequence;
                 work += transmit(nowMicros);
             } else {
@@ -137,6 +143,7 @@ public final class Executive {
     private int trySend(long nowMicros) {
         if (link.send(step, nowMicros)) {
             linkAccepted = true;
+            everAccepted = true;
             stepsSent++;
             return 1;
         }
@@ -184,6 +191,9 @@ public final class Executive {
         outstanding = false;
         safeEntries++;
         scheduler.requestMode(SweepMode.SAFE, ModeChangeReason.LINK_TIMEOUT, nowMicros);
+        if (!everAccepted) {
+            scheduler.stepNotSent(); // every transmission was refused: the electronics never saw its levels
+        }
         return 1;
     }
 

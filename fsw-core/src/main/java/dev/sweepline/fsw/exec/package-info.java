@@ -31,8 +31,11 @@
  *     <i>ExecutiveTest.shouldRetrySendRefusedByLink.</i></li>
  * <li><b>E7</b> A step the scheduler abandoned (a mode change while it was in flight, e.g. commanded
  *     SAFE) is never re-sent: unsent, it is dropped at once; sent, its reply may still come until the
- *     deadline (the scheduler ignores it), then it is dropped (abandonedSteps).
- *     <i>ExecutiveTest.shouldNotResendStepAbandonedBySafeCommand.</i></li>
+ *     deadline (the scheduler ignores it), then it is dropped (abandonedSteps). A dropped step that no
+ *     transmission of reached the link, and one whose every transmission was refused up to a link time-out,
+ *     is reported to the scheduler ({@code stepNotSent}): the rails never saw its levels (sweep note R13).
+ *     <i>ExecutiveTest.shouldNotResendStepAbandonedBySafeCommand,
+ *     shouldSettleFromTheLastSentLevelsWhenAnUnsentStepIsAbandoned.</i></li>
  * <li><b>E8</b> The cycle allocates nothing; nextWakeMicros tells the host when to call again (the
  *     expected reply time, then the first instant past the deadline, Long.MAX_VALUE when idle in SAFE).
  *     <i>ExecutiveTest.shouldAllocateNothingPerCycle, shouldRunClosedLoopWithoutErrors.</i></li>

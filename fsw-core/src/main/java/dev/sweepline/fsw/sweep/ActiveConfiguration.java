@@ -34,17 +34,27 @@ final class ActiveConfiguration {
     private final SweepParameters pendingParams = new SweepParameters();
     private boolean paramsPending;
     private final int dacTopCode;
+    /** Highest code any window may command: the instrument's voltage limit (InstrumentLimits#maxLevelCode). */
+    private final int maxLevelCode;
     private final int rangeRatioShift;
 
     /**
      * Starts with {@code table} and {@code initial} (already validated by the caller) in effect; loads
-     * are checked against {@code instrument}'s DAC and range ratio.
+     * are checked against {@code instrument}'s DAC, voltage limit and range ratio; this is the one place every
+     * table passes through before it can fly.
+     *
+     * @throws IllegalArgumentException when {@code table} is refused (programmer misuse: the description's
+     *         own table passed these checks when it was built)
      */
     ActiveConfiguration(WindowTable table, SweepParameters initial, InstrumentDescription instrument) {
         dacTopCode = instrument.dacTopCode();
+        maxLevelCode = instrument.limits().maxLevelCode;
         rangeRatioShift = instrument.rangeRatioShift();
         params.copyFrom(initial);
-        loadTable(table);
+        int status = loadTable(table);
+        if (status != TableStatus.OK) {
+            throw new IllegalArgumentException("window table refused: " + TableStatus.name(status));
+        }
         applyPending();
     }
 
@@ -58,14 +68,18 @@ final class ActiveConfiguration {
         return tablePending;
     }
 
-    /** Queues a built (so well-formed) table whose codes lie within the DAC. */
+    /** Queues a built (so well-formed) table whose codes lie within the DAC and the voltage limit. */
     int loadTable(WindowTable table) {
         if (table == null) {
             return TableStatus.MISSING_DATA;
         }
         for (int w = 0; w < table.count(); w++) {
+            // highs increase and each low is below its high, so the highs bound every code
             if (table.dacHigh(w) > dacTopCode) {
-                return TableStatus.OUT_OF_DAC_RANGE; // highs increase, so the lows are below this one
+                return TableStatus.OUT_OF_DAC_RANGE;
+            }
+            if (table.dacHigh(w) > maxLevelCode) {
+                return TableStatus.ABOVE_VOLTAGE_LIMIT;
             }
         }
         for (int w = 0; w < table.count(); w++) {
@@ -77,11 +91,16 @@ final class ActiveConfiguration {
         return TableStatus.OK;
     }
 
-    /** Validates and queues a table given as arrays. */
+    /** Validates (shape within the DAC, then the voltage limit) and queues a table given as arrays. */
     int loadTable(int[] lows, int[] highs, int count) {
         int status = WindowTable.validate(lows, highs, count, dacTopCode);
         if (status != TableStatus.OK) {
             return status;
+        }
+        for (int w = 0; w < count; w++) {
+            if (lows[w] > maxLevelCode || highs[w] > maxLevelCode) {
+                return TableStatus.ABOVE_VOLTAGE_LIMIT;
+            }
         }
         System.arraycopy(lows, 0, pendingLow, 0, count);
         System.arraycopy(highs, 0, pendingHigh, 0, count);

@@ -56,8 +56,27 @@ public final class SweepScheduler {
     private int awaitingRange;
     private long sweepNumber;
     private int focusSweepsSinceSurvey;
+    /** The levels the next sweep's direction is chosen from (R12): the last step's, 0 after SAFE. */
     private int hvLowCode;
     private int hvHighCode;
+    /**
+     * Where the rails may stand when the next step starts (R13), per rail the lowest and highest DAC code: a
+     * rail moves continuously towards its last target and is switched to 0 V with the HV, so it lies between
+     * the levels it may have been sent to since it was last known and 0 once the HV may have gone off.
+     */
+    private int railLowMin;
+    private int railLowMax;
+    private int railHighMin;
+    private int railHighMax;
+    /** The same before the last step: where the rails stay if that step never reached the electronics. */
+    private int priorLowMin;
+    private int priorLowMax;
+    private int priorHighMin;
+    private int priorHighMax;
+    private int priorHvLowCode;
+    private int priorHvHighCode;
+    /** True when a mode change abandoned the last step before its reply (it may or may not have flown). */
+    private boolean abandonedInFlight;
     private long ignoredReplies;
     private boolean hvPermitted = true;
     /** Configurations applied since start (the start-up one is 0). */
@@ -67,7 +86,8 @@ public final class SweepScheduler {
      * Builds a scheduler for {@code instrument} that starts in SURVEY (reported as a START mode change
      * at the first step); every buffer is sized from the description and the table capacity here.
      *
-     * @throws IllegalArgumentException if {@code params} does not validate (programmer misuse)
+     * @throws IllegalArgumentException if {@code params} does not validate, or {@code table} lies outside the
+     *         instrument's DAC or voltage limit (programmer misuse)
      */
     public SweepScheduler(InstrumentDescription instrument, WindowTable table, SweepParameters params,
                           SweepListener listener) {
@@ -127,7 +147,7 @@ public final class SweepScheduler {
         int range = gain.choose(window);
         int low = dacLow[window];
         int high = dacHigh[window];
-        long settle = SettleTime.micros(params, hvLowCode, hvHighCode, low, high);
+        long settle = settleMicros(low, high);
         out.window = window;
         out.dacLow = low;
         out.dacHigh = high;
@@ -136,6 +156,16 @@ public final class SweepScheduler {
         out.integrationPeriods = periodsOf(window);
         out.hvEnabled = hvPermitted; // the host's HV permission (arm-then-fire on a real bench)
         lastStep.copyFrom(out);
+        priorLowMin = railLowMin;
+        priorLowMax = railLowMax;
+        priorHighMin = railHighMin;
+        priorHighMax = railHighMax;
+        priorHvLowCode = hvLowCode;
+        priorHvHighCode = hvHighCode;
+        abandonedInFlight = false;
+        // a step with the HV off leaves both rails at 0 V (hardware ICD §3.1 flags bit 0)
+        railLowMin = railLowMax = hvPermitted ? low : 0;
+        railHighMin = railHighMax = hvPermitted ? high : 0;
         hvLowCode = low;
         hvHighCode = high;
         stepsIssued++;
@@ -191,12 +221,12 @@ public final class SweepScheduler {
         sweepSteps = last - first + 1;
         sweepPeriods = survey ? FocusDesign.surveyPeriods(params)
                 : params.designBand() ? design.focusPeriods(params, dacLow, dacHigh,
-                        first, last, SettleTime.micros(params, hvLowCode, hvHighCode, dacLow[start], dacHigh[start]))
+                        first, last, settleMicros(dacLow[start], dacHigh[start]))
                 : params.integrationPeriods;
         sweepInterleaved = !survey && params.interleavedFocus();
         supportCount = 0;
         if (!survey && params.supportDwell() && !band.searching()) {
-            chooseSupport(first, last, SettleTime.micros(params, hvLowCode, hvHighCode, dacLow[start], dacHigh[start]));
+            chooseSupport(first, last, settleMicros(dacLow[start], dacHigh[start]));
         }
         stepsIssued = 0;
         awaitingWindow = NO_WINDOW;
@@ -207,6 +237,16 @@ public final class SweepScheduler {
             building.support(k, supportWindow[k] - first, supportPeriods);
         }
         sweepActive = true;
+    }
+
+    /**
+     * Settle before integrating at {@code (low, high)} (R13): {@link SettleTime} for the largest rail change
+     * from anywhere the rails may stand. The distance to a point of an interval is largest at one of its
+     * ends, so the two corners (both rails at their lowest, both at their highest) cover every case.
+     */
+    private long settleMicros(int low, int high) {
+        return Math.max(SettleTime.micros(params, railLowMin, railHighMin, low, high),
+                SettleTime.micros(params, railLowMax, railHighMax, low, high));
     }
 
     /**
@@ -343,10 +383,27 @@ public final class SweepScheduler {
             return; // FOCUS without a band while surveying: nothing changes, the survey in progress goes on
         }
         sweepActive = false;
-        awaitingWindow = NO_WINDOW;
+        if (awaitingWindow != NO_WINDOW) {
+            // the step in flight may have reached the electronics or not: the rails stand at its levels or
+            // where they were before it
+            awaitingWindow = NO_WINDOW;
+            abandonedInFlight = true;
+            railLowMin = Math.min(railLowMin, priorLowMin);
+            railLowMax = Math.max(railLowMax, priorLowMax);
+            railHighMin = Math.min(railHighMin, priorHighMin);
+            railHighMax = Math.max(railHighMax, priorHighMax);
+        }
         if (to == SweepMode.SAFE) {
+            // SAFE sends nothing: the rails hold their levels until the electronics' link watchdog (hardware
+            // ICD §4.1, 2 s) switches the HV off, or longer on a bench without one; so anywhere down to 0
             hvLowCode = 0;
             hvHighCode = 0;
+            railLowMin = 0;
+            railHighMin = 0;
+            priorLowMin = 0;
+            priorHighMin = 0;
+            priorHvLowCode = 0;
+            priorHvHighCode = 0;
         } else if (to == SweepMode.FOCUS) {
             focusSweepsSinceSurvey = 0;
         }
@@ -354,17 +411,37 @@ public final class SweepScheduler {
     }
 
     /**
+     * The executive's word that the last step was never handed to the link (every send refused) before a
+     * mode change abandoned it: the rails stand where they stood before it, not at its levels. Nothing
+     * happens unless a mode change abandoned that step in flight.
+     */
+    public void stepNotSent() {
+        if (!abandonedInFlight) {
+            return;
+        }
+        abandonedInFlight = false;
+        railLowMin = priorLowMin;
+        railLowMax = priorLowMax;
+        railHighMin = priorHighMin;
+        railHighMax = priorHighMax;
+        hvLowCode = priorHvLowCode;
+        hvHighCode = priorHvHighCode;
+    }
+
+    /**
      * Loads a window table, applied at the next sweep boundary (a focus band then becomes invalid and
-     * the scheduler surveys).
+     * the scheduler surveys); its codes are checked against the DAC and the instrument's voltage limit.
      *
-     * @return a {@link TableStatus} code; on refusal the old table stays
+     * @return a {@link TableStatus} code ({@link TableStatus#ABOVE_VOLTAGE_LIMIT} for a level above the
+     *         limit); on refusal the old table stays
      */
     public int loadTable(WindowTable table) {
         return config.loadTable(table);
     }
 
     /**
-     * Loads a window table from raw arrays (a telecommand), allocation-free: validated, then copied
+     * Loads a window table from raw arrays (a telecommand), allocation-free: validated (shape, DAC, voltage
+     * limit), then copied
      * and applied at the next sweep boundary.
      *
      * @return a {@link TableStatus} code; on refusal the old table (and any table already waiting) stays

@@ -89,11 +89,23 @@
  *     neighbours; so consecutive surveys alternate direction (up from HV off, then down, ...), and a
  *     focus sweep starts at the band end nearer the HV. <i>StepOrderingTest.</i></li>
  * <li><b>R13 Settle.</b> settleMicros = fixedSettleMicros + (max rail change in codes *
- *     settleMicrosPerCodeQ8 &gt;&gt; 8), rail change from the last commanded levels (0 after SAFE); the
- *     formula's one home is {@code table.SettleTime}, which hw-sim's link budget calls too.
- *     <i>StepOrderingTest.shouldAccountSettleForRailChange, CommandTest.shouldLeaveSafeOnlyByCommandAndSettleFromHvOff,
- *     SchedulerModelTest.</i></li>
- * <li><b>R14 Loads.</b> A table or parameter set is validated; a refusal returns the reason code and the
+ *     settleMicrosPerCodeQ8 &gt;&gt; 8), the rail change being the largest from anywhere the rails may stand:
+ *     a rail moves continuously towards its target and the HV off puts it at 0 V (hw-sim HvRail, HvSupply), so
+ *     it lies between the levels it may have been sent since it was last known and 0 if the HV may have gone
+ *     off, and the largest change is from one end. After a step: its levels (0 when it asked for the HV off).
+ *     After SAFE: the larger of the change from the last commanded levels and from 0, because SAFE sends no
+ *     step and the rails hold their levels until the electronics' link watchdog switches the HV off (hardware
+ *     ICD §4.1, 2 s; the in-process bench has none), so a short SAFE, e.g. a link time-out whose RETRY
+ *     response resumes SURVEY at once, finds them near the last levels. A step a mode change abandons in flight
+ *     may have flown or not: the levels before it count too, unless the executive reports that the link never
+ *     took it ({@code stepNotSent}), when only those before it count. The formula's one home is
+ *     {@code table.SettleTime}, which hw-sim's link budget calls too.
+ *     <i>StepOrderingTest.shouldAccountSettleForRailChange,
+ *     CommandTest.shouldLeaveSafeOnlyByCommandAndSettleFromTheFartherOfHvOffAndLastLevels,
+ *     shouldSettleAfterShortSafeForTheRailsStillAtTheLastLevels, shouldSettleFromHvOffAfterStepsWithoutHv;
+ *     exec ExecutiveTest.shouldSettleFromTheLastSentLevelsWhenAnUnsentStepIsAbandoned; SchedulerModelTest.</i></li>
+ * <li><b>R14 Loads.</b> A table or parameter set is validated (a table by every path, the start-up one too,
+ *     against the DAC and the instrument's voltage limit, ABOVE_VOLTAGE_LIMIT); a refusal returns the reason code and the
  *     old one stays; an accepted one is copied (no allocation) and applied at the next sweep boundary; a
  *     new table invalidates the band (FOCUS gives SURVEY, TABLE_LOADED) and the gain memory. What takes
  *     effect there is announced once, before the first step that flies it:

@@ -156,6 +156,42 @@ class ExecutiveTest {
     }
 
     @Test
+    void shouldSettleFromTheLastSentLevelsWhenAnUnsentStepIsAbandoned() {
+        listener.scheduler = scheduler; // steps record the mode they were chosen in
+        long now = 0;
+        for (int guard = 0; guard < 100_000 && !(scheduler.mode() == SweepMode.FOCUS && listener.steps.size() > 3
+                && listener.steps.get(listener.steps.size() - 1).mode() == SweepMode.FOCUS); guard++) {
+            exec.doWork(now);
+            now = Math.max(now + 1, exec.nextWakeMicros());
+        }
+        assertEquals(SweepMode.FOCUS, scheduler.mode());
+        assertTrue(exec.outstanding()); // a focus step the link accepted is in flight
+        link.refuseNext = 1_000; // from now on the link refuses every send
+        int sendsBefore = link.sends;
+        int stepsBefore = listener.steps.size();
+        for (int guard = 0; guard < 100 && listener.steps.size() == stepsBefore; guard++) {
+            now = Math.max(now + 1, exec.nextWakeMicros());
+            exec.doWork(now); // the reply comes; the next step is chosen and refused
+        }
+        assertEquals(stepsBefore + 1, listener.steps.size());
+        assertEquals(sendsBefore, link.sends);
+        RecordingListener.Step sent = listener.steps.get(listener.steps.size() - 2);
+        RecordingListener.Step refused = listener.steps.get(listener.steps.size() - 1);
+        assertEquals(SweepMode.FOCUS, refused.mode());
+        scheduler.requestMode(SweepMode.SURVEY, now); // ground command: abandons the unsent step
+        exec.doWork(now + 1);
+        assertEquals(1, exec.abandonedSteps());
+        RecordingListener.Step next = listener.steps.get(listener.steps.size() - 1);
+        assertEquals(SweepMode.SURVEY, next.mode());
+        // the electronics never saw the refused step: the rails stand at the last sent one's levels (R13;
+        // demo cup: 1000 us fixed + 1 us per code, demo-cup.yaml cadence)
+        int fromSent = Math.max(Math.abs(next.dacLow() - sent.dacLow()), Math.abs(next.dacHigh() - sent.dacHigh()));
+        int fromRefused = Math.max(Math.abs(next.dacLow() - refused.dacLow()), Math.abs(next.dacHigh() - refused.dacHigh()));
+        assertTrue(fromSent != fromRefused);
+        assertEquals(1000 + fromSent, next.settleMicros());
+    }
+
+    @Test
     void shouldRetrySendRefusedByLink() {
         link.refuseNext = 2;
         exec.doWork(0);

@@ -37,6 +37,29 @@ class CommandTest {
     }
 
     @Test
+    void shouldRefuseTableAboveTheVoltageLimitByEveryPath() {
+        RecordingListener l = new RecordingListener();
+        ClosedLoop loop = Fixtures.loop(Fixtures.oneAu(61), DemoCup.parameters(), l);
+        SweepScheduler s = loop.scheduler;
+        // demo cup: maxVolts 6000 at 100 mV per code = code 60 000, within the 16-bit DAC (demo-cup.yaml;
+        // commands.md §4.4)
+        int limit = DemoCup.INSTRUMENT.limits().maxLevelCode;
+        assertEquals(60_000, limit);
+        assertTrue(limit < DemoCup.INSTRUMENT.dacTopCode());
+        int[] lows = {100, 59_000};
+        int[] highs = {200, limit + 1};
+        assertEquals(TableStatus.ABOVE_VOLTAGE_LIMIT, s.loadTable(lows, highs, 2));
+        assertEquals(TableStatus.ABOVE_VOLTAGE_LIMIT, s.loadTable(WindowTable.of(lows, highs, 2)));
+        highs[1] = limit;
+        assertEquals(TableStatus.OK, s.loadTable(WindowTable.of(lows, highs, 2))); // at the limit: accepted
+        assertThrows(IllegalArgumentException.class, () -> new SweepScheduler(DemoCup.INSTRUMENT,
+                WindowTable.of(new int[] {100, 59_000}, new int[] {200, limit + 1}, 2), DemoCup.parameters(), null));
+        loop.runSweeps(1);
+        assertEquals(2, s.windowCount()); // the accepted table, not a refused one
+        assertEquals(limit, s.dacHigh(1));
+    }
+
+    @Test
     void shouldApplyNewTableAtSweepBoundary() {
         RecordingListener l = new RecordingListener();
         ClosedLoop loop = Fixtures.loop(Fixtures.oneAu(62), DemoCup.parameters(), l);
@@ -103,16 +126,59 @@ class CommandTest {
     }
 
     @Test
-    void shouldLeaveSafeOnlyByCommandAndSettleFromHvOff() {
+    void shouldLeaveSafeOnlyByCommandAndSettleFromTheFartherOfHvOffAndLastLevels() {
         RecordingListener l = new RecordingListener();
         ClosedLoop loop = Fixtures.loop(Fixtures.oneAu(66), DemoCup.parameters(), l);
         loop.runSweeps(3);
+        RecordingListener.Step before = l.steps.get(l.steps.size() - 1);
         loop.scheduler.requestMode(SweepMode.SAFE, loop.nowMicros);
         loop.scheduler.requestMode(SweepMode.FOCUS, loop.nowMicros); // band still valid: FOCUS
         assertEquals(SweepMode.FOCUS, loop.scheduler.mode());
         loop.step();
         RecordingListener.Step s = l.steps.get(l.steps.size() - 1);
-        // HV was off: the rail change is the full high level (issue 2 settle formula)
+        // SAFE sends no step: the rails hold the last step's levels until the link watchdog switches the HV
+        // off (hardware ICD §4.1), so they stand anywhere from there down to 0 and the settle is for the
+        // larger change (R13; demo cup: 1000 us fixed + 1 us per code, demo-cup.yaml cadence)
+        int fromOff = s.dacHigh();
+        int fromLast = Math.max(Math.abs(s.dacLow() - before.dacLow()), Math.abs(s.dacHigh() - before.dacHigh()));
+        assertEquals(1000 + Math.max(fromOff, fromLast), s.settleMicros());
+    }
+
+    @Test
+    void shouldSettleAfterShortSafeForTheRailsStillAtTheLastLevels() {
+        RecordingListener l = new RecordingListener();
+        ClosedLoop loop = Fixtures.loop(Fixtures.oneAu(66), DemoCup.parameters(), l);
+        for (int k = 0; k < 100; k++) {
+            loop.step(); // the first survey, up from HV off (R12), to window 99
+        }
+        RecordingListener.Step before = l.steps.get(l.steps.size() - 1);
+        assertEquals(99, before.window());
+        loop.scheduler.requestMode(SweepMode.SAFE, ModeChangeReason.LINK_TIMEOUT, loop.nowMicros);
+        loop.scheduler.requestMode(SweepMode.SURVEY, loop.nowMicros); // a RETRY response resumes at once
+        loop.step();
+        RecordingListener.Step s = l.steps.get(l.steps.size() - 1);
+        assertEquals(0, s.window()); // the survey starts at the end nearer HV off (R12)
+        // the rails may still stand at window 99's levels: the fall to window 0 is far more than the rise
+        // from 0 (R13; demo cup: 1000 us fixed + 1 us per code, demo-cup.yaml cadence)
+        int fromLast = Math.max(Math.abs(s.dacLow() - before.dacLow()), Math.abs(s.dacHigh() - before.dacHigh()));
+        assertTrue(fromLast > s.dacHigh());
+        assertEquals(1000 + fromLast, s.settleMicros());
+    }
+
+    @Test
+    void shouldSettleFromHvOffAfterStepsWithoutHv() {
+        RecordingListener l = new RecordingListener();
+        ClosedLoop loop = Fixtures.loop(Fixtures.oneAu(66), DemoCup.parameters(), l);
+        loop.scheduler.permitHv(false); // steps ask for the HV off: the rails stand at 0 V (hardware ICD §3.1)
+        for (int k = 0; k < 50; k++) {
+            loop.step();
+        }
+        loop.scheduler.permitHv(true);
+        loop.step();
+        RecordingListener.Step s = l.steps.get(l.steps.size() - 1);
+        assertEquals(50, s.window());
+        // the first step with the HV on rises from 0 V, not from window 49's levels (R13; demo cup: 1000 us
+        // fixed + 1 us per code, demo-cup.yaml cadence)
         assertEquals(1000 + s.dacHigh(), s.settleMicros());
     }
 

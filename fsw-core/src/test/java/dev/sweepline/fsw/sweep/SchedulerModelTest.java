@@ -5,6 +5,8 @@ import dev.sweepline.fsw.link.StepCommand;
 import dev.sweepline.fsw.table.SweepParameters;
 import dev.sweepline.fsw.table.TableStatus;
 import dev.sweepline.fsw.table.WindowTable;
+import java.util.ArrayList;
+import java.util.List;
 import java.util.Random;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.ValueSource;
@@ -20,8 +22,9 @@ import static org.junit.jupiter.api.Assertions.fail;
  * seeds). Actions: plasma drift and shocks, lost replies, mode commands, table and parameter loads,
  * valid and invalid. After every action the model's rules must hold: every step lies in the active
  * table with its codes; focus steps lie in the band; no window repeats within a sweep and
- * consecutive steps are neighbours; a completed survey covers the table; the settle time follows the
- * model's HV level; mode changes form a chain of legal transitions; SAFE steps nothing.
+ * consecutive steps are neighbours; a completed survey covers the table; the settle time is for the
+ * largest change from every level the model's rails may stand at (after SAFE also 0, after a step
+ * abandoned in flight also the levels before it); mode changes form a chain of legal transitions; SAFE steps nothing.
  */
 class SchedulerModelTest {
     private static final int STEPS = 20_000;
@@ -42,7 +45,12 @@ class SchedulerModelTest {
             int action = random.nextInt(2000);
             if (action == 0) {
                 SweepMode m = SweepMode.values()[random.nextInt(3)];
+                boolean inFlight = scheduler.awaitingReply(); // a lost reply: the step may or may not have flown
+                SweepMode before = scheduler.mode();
                 scheduler.requestMode(m, loop.nowMicros);
+                if (inFlight && scheduler.mode() != before) {
+                    model.abandoned();
+                }
             } else if (action == 1) {
                 loadRandomTable(scheduler, random);
             } else if (action == 2) {
@@ -118,16 +126,35 @@ class SchedulerModelTest {
         final SweepParameters active = new SweepParameters();
         int stepsInSweep;
         int lastWindow = -1;
-        int hvLow;
-        int hvHigh;
+        /** Every (low, high) the rails may stand at when the next step starts. */
+        final List<int[]> rails = new ArrayList<>(List.of(new int[] {0, 0}));
+        /** The same before the last step. */
+        List<int[]> priorRails = new ArrayList<>();
         SweepMode modelMode = SweepMode.SAFE; // before START
         long sweepsCompleted;
         long focusSteps;
         long lossOfLock;
 
+        /** SAFE: the HV may go off (the link watchdog) or stay at the levels it holds. */
         void hvOff() {
-            hvLow = 0;
-            hvHigh = 0;
+            addIfAbsent(rails, 0, 0);
+            addIfAbsent(priorRails, 0, 0);
+        }
+
+        /** A mode change abandoned the last step before its reply: the rails are at its levels or before them. */
+        void abandoned() {
+            for (int[] r : priorRails) {
+                addIfAbsent(rails, r[0], r[1]);
+            }
+        }
+
+        private static void addIfAbsent(List<int[]> list, int low, int high) {
+            for (int[] r : list) {
+                if (r[0] == low && r[1] == high) {
+                    return;
+                }
+            }
+            list.add(new int[] {low, high});
         }
 
         void newSweep() {
@@ -155,12 +182,16 @@ class SchedulerModelTest {
             stepsInSweep++;
             assertTrue(s.gainRange >= 0 && s.gainRange <= 2);
             scheduler.activeParameters(active);
-            int change = Math.max(Math.abs(s.dacLow - hvLow), Math.abs(s.dacHigh - hvHigh));
+            int change = 0; // R13: the largest rail change from anywhere the rails may stand
+            for (int[] r : rails) {
+                change = Math.max(change, Math.max(Math.abs(s.dacLow - r[0]), Math.abs(s.dacHigh - r[1])));
+            }
             assertEquals(active.fixedSettleMicros + ((change * active.settleMicrosPerCodeQ8) >> 8), s.settleMicros);
             assertEquals(active.integrationPeriods, s.integrationPeriods);
             assertTrue(s.hvEnabled);
-            hvLow = s.dacLow;
-            hvHigh = s.dacHigh;
+            priorRails = new ArrayList<>(rails);
+            rails.clear();
+            rails.add(new int[] {s.dacLow, s.dacHigh});
         }
 
         @Override
