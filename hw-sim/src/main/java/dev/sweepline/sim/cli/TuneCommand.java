@@ -161,7 +161,7 @@ final class TuneCommand implements Callable<Integer> {
     }
 
     /** The resume note's words on the journal's dropped tail: how many lines and octets, or nothing. */
-    static String dropped(RunJournal journal) {
+    private static String dropped(RunJournal journal) {
         if (journal.droppedOctets() == 0) {
             return "";
         }
