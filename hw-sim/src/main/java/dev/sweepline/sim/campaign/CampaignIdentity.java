@@ -1,9 +1,13 @@
 package dev.sweepline.sim.campaign;
 
+import java.io.FileOutputStream;
 import java.io.IOException;
+import java.nio.channels.FileChannel;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.nio.file.StandardCopyOption;
+import java.nio.file.StandardOpenOption;
 import java.util.HashMap;
 import java.util.HexFormat;
 import java.util.List;
@@ -48,18 +52,54 @@ public record CampaignIdentity(String campaign, String campaignSha256, String co
         return campaignSha256.equals(other.campaignSha256) && code.equals(other.code);
     }
 
-    /** Writes {@value #FILE} in {@code dir}. */
+    /**
+     * Writes {@value #FILE} in {@code dir}: into a file beside it, forced to the disk, renamed into place (an
+     * atomic rename, rename(2)) and the folder forced too, so that it is whole or absent after a kill or a power
+     * loss, and on the disk before the journal's first line.
+     */
     public void write(Path dir) throws IOException {
         String text = "# a campaign output folder of sweepline-bench tune (campaigns/FORMAT.md)\n"
                 + "campaign=" + campaign + "\ncampaignSha256=" + campaignSha256 + "\ncode=" + code
                 + "\nshard=" + shard + "\nruns=" + runs + "\n";
-        Files.writeString(dir.resolve(FILE), text, StandardCharsets.UTF_8);
+        Path partial = dir.resolve(FILE + ".partial");
+        try (FileOutputStream file = new FileOutputStream(partial.toFile())) {
+            file.write(text.getBytes(StandardCharsets.UTF_8));
+            file.getFD().sync();
+        }
+        Files.move(partial, dir.resolve(FILE), StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
+        forceFolder(dir);
+    }
+
+    /** Forces the folder's entries (the rename) to the disk, where the platform opens a folder (Linux does). */
+    private static void forceFolder(Path dir) throws IOException {
+        FileChannel folder;
+        try {
+            folder = FileChannel.open(dir, StandardOpenOption.READ);
+        } catch (IOException e) {
+            return; // a platform that opens no folder as a file (Windows): the rename alone
+        }
+        try (folder) {
+            folder.force(true);
+        }
+    }
+
+    /**
+     * A {@value #FILE} that is there but not whole: empty, without its last newline, or without a key (what a
+     * power loss leaves of a file written in place, as benches before the atomic write did).
+     */
+    public static final class TornException extends IOException {
+        private static final long serialVersionUID = 1L;
+
+        TornException(String message) {
+            super(message);
+        }
     }
 
     /**
      * Reads {@value #FILE} of {@code dir}.
      *
-     * @throws IOException naming the file: missing, or a key missing or malformed
+     * @throws TornException naming the file: empty, cut short or a key missing
+     * @throws IOException   naming the file: missing, or a key malformed
      */
     public static CampaignIdentity read(Path dir) throws IOException {
         Path file = dir.resolve(FILE);
@@ -67,8 +107,16 @@ public record CampaignIdentity(String campaign, String campaignSha256, String co
             throw new IOException(file + ": missing (not a campaign output folder, or written by a bench before "
                     + "shards carried their campaign and code version: run the shard again)");
         }
+        byte[] octets = Files.readAllBytes(file);
+        if (octets.length == 0) {
+            throw new TornException(file + ": empty (0 octets: its write never reached the disk, a power loss?)");
+        }
+        if (octets[octets.length - 1] != '\n') {
+            throw new TornException(file + ": cut short (" + octets.length + " octets, no newline at the end: a "
+                    + "power loss while it was written?)");
+        }
         Map<String, String> values = new HashMap<>();
-        List<String> lines = Files.readAllLines(file, StandardCharsets.UTF_8);
+        List<String> lines = new String(octets, StandardCharsets.UTF_8).lines().toList();
         for (String line : lines) {
             int eq = line.indexOf('=');
             if (!line.startsWith("#") && eq > 0) {
@@ -77,7 +125,7 @@ public record CampaignIdentity(String campaign, String campaignSha256, String co
         }
         for (String key : KEYS) {
             if (!values.containsKey(key)) {
-                throw new IOException(file + ": no '" + key + "='");
+                throw new TornException(file + ": no '" + key + "=' (cut short or damaged)");
             }
         }
         try {

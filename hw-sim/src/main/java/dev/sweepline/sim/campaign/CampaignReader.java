@@ -323,11 +323,18 @@ public final class CampaignReader {
             throw top.typeError(node, "a list of two or more grid keys");
         }
         List<String> keys = new ArrayList<>();
+        int place = 0;
         for (YamlNode item : seq.items()) {
+            place++;
             if (!(item instanceof YamlNode.Scalar scalar)) {
                 throw top.typeError(node, "a list of two or more grid keys");
             }
             String key = scalar.text();
+            if (scalar.type() == YamlNode.ScalarType.NULL || key.isBlank()) {
+                throw new FileFormatException(top.file(), item.line(), "linked", "entry " + place + " of "
+                        + seq.items().size() + " is " + (scalar.type() == YamlNode.ScalarType.NULL ? "null (~, null or "
+                        + "nothing)" : "empty") + ", not a grid key");
+            }
             if (keys.contains(key)) {
                 throw new FileFormatException(top.file(), item.line(), "linked", key + " is named twice");
             }

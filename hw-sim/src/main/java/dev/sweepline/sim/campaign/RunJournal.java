@@ -29,6 +29,10 @@ import java.util.zip.CRC32;
  * is a damaged journal and refused. Lines are in the order the runs finished, which depends on the
  * threads; {@code runs.csv} is written from them in job order once every run is in.
  *
+ * <p>An append that fails (a full disk, a write error) truncates the journal back to the start of its line and
+ * refuses every later one with the same failure, so the journal stays a run of whole lines however many workers
+ * were still finishing runs: a re-run resumes every run forced before the failure.
+ *
  * <p>One writer: the journal is held under an exclusive lock ({@link FileChannel#tryLock}) from its opening
  * to its closing, so a second {@code tune} on the same folder (an operator's slip, a job array's index used
  * twice, a process left running after its parent was killed) is refused at the start instead of writing the
@@ -43,14 +47,59 @@ public final class RunJournal implements Closeable {
 
     private final Path file;
     private final FileChannel channel;
+    private final FileCalls calls;
     private final List<RunRow> finished;
     private final long droppedOctets;
+    private final int droppedLines;
+    /** Octets of whole lines in the file: where the next line starts. */
+    private long end;
+    /** The failure of an earlier append, after which none is made; null while every append went through. */
+    private IOException failure;
 
-    private RunJournal(Path file, FileChannel channel, List<RunRow> finished, long droppedOctets) {
+    private RunJournal(Path file, FileChannel channel, FileCalls calls, List<RunRow> finished, long droppedOctets,
+            int droppedLines) throws IOException {
         this.file = file;
         this.channel = channel;
+        this.calls = calls;
         this.finished = finished;
         this.droppedOctets = droppedOctets;
+        this.droppedLines = droppedLines;
+        this.end = channel.position();
+    }
+
+    /**
+     * The journal's calls on its file that a real disk can fail: the lock and the write of a line. Tests put
+     * failing ones (a filesystem without locks, a write cut short).
+     */
+    interface FileCalls {
+        /** The calls of {@link FileChannel} themselves. */
+        FileCalls REAL = new FileCalls() { };
+
+        /** {@link FileChannel#tryLock()}. */
+        default FileLock tryLock(FileChannel channel) throws IOException {
+            return channel.tryLock();
+        }
+
+        /** Writes all of {@code line} at the channel's position. */
+        default void write(FileChannel channel, ByteBuffer line) throws IOException {
+            while (line.hasRemaining()) {
+                channel.write(line);
+            }
+        }
+    }
+
+    /**
+     * The journal's file system takes no locks ({@link FileChannel#tryLock} failed with an error, such as
+     * ENOLCK, "No locks available", fcntl(2), on some network file systems): an output that cannot be written
+     * as a journal needs, not a damaged input.
+     */
+    public static final class LocksUnsupportedException extends IOException {
+        private static final long serialVersionUID = 1L;
+
+        public LocksUnsupportedException(Path file, IOException cause) {
+            super(file + ": cannot lock the journal (" + cause.getMessage() + "): the folder's file system does not "
+                    + "support locks (a network file system?); write --out to a local folder", cause);
+        }
     }
 
     /**
@@ -60,12 +109,17 @@ public final class RunJournal implements Closeable {
      *                     file when another process (or this one) holds it open
      */
     public static RunJournal open(Path dir, CampaignSpec spec, Shard shard) throws IOException {
+        return open(dir, spec, shard, FileCalls.REAL);
+    }
+
+    /** As {@link #open(Path, CampaignSpec, Shard)}, through {@code calls}. */
+    static RunJournal open(Path dir, CampaignSpec spec, Shard shard, FileCalls calls) throws IOException {
         Path file = dir.resolve(FILE);
         FileChannel channel = FileChannel.open(file, StandardOpenOption.CREATE, StandardOpenOption.READ,
                 StandardOpenOption.WRITE);
         try {
-            lock(file, channel);
-            RunJournal journal = read(file, channel, spec, shard);
+            lock(file, channel, calls);
+            RunJournal journal = read(file, channel, calls, spec, shard);
             channel = null; // the journal's now
             return journal;
         } finally {
@@ -75,13 +129,19 @@ public final class RunJournal implements Closeable {
         }
     }
 
-    /** Takes the journal's exclusive lock, held until the channel closes. */
-    private static void lock(Path file, FileChannel channel) throws IOException {
+    /**
+     * Takes the journal's exclusive lock, held until the channel closes.
+     *
+     * @throws LocksUnsupportedException when the file system refuses the lock with an error
+     */
+    private static void lock(Path file, FileChannel channel, FileCalls calls) throws IOException {
         FileLock lock;
         try {
-            lock = channel.tryLock();
+            lock = calls.tryLock(channel);
         } catch (OverlappingFileLockException e) {
             lock = null; // held by this very process
+        } catch (IOException e) {
+            throw new LocksUnsupportedException(file, e);
         }
         if (lock == null) {
             throw new IOException(file + ": another tune is writing this journal (a second process on the same "
@@ -93,7 +153,8 @@ public final class RunJournal implements Closeable {
      * The journal's runs, read under its lock through the locked channel itself (closing any other descriptor
      * of the file would release this process's lock: POSIX record locks, fcntl(2)), its torn tail dropped.
      */
-    private static RunJournal read(Path file, FileChannel channel, CampaignSpec spec, Shard shard) throws IOException {
+    private static RunJournal read(Path file, FileChannel channel, FileCalls calls, CampaignSpec spec, Shard shard)
+            throws IOException {
         long size = channel.size();
         if (size > Integer.MAX_VALUE - 8) {
             throw new IOException(file + ": " + size + " octets, more than a journal can hold");
@@ -107,6 +168,7 @@ public final class RunJournal implements Closeable {
         Set<Long> jobs = new HashSet<>();
         long good = 0;
         int badLine = 0;
+        int badLines = 0;
         int lineNumber = 0;
         int start = 0;
         for (int end = indexOf(octets, start); end >= 0; start = end + 1, end = indexOf(octets, start)) {
@@ -115,6 +177,7 @@ public final class RunJournal implements Closeable {
             RunRow row = checked(line);
             if (row == null) {
                 badLine = badLine == 0 ? lineNumber : badLine;
+                badLines++;
                 continue;
             }
             if (badLine != 0) {
@@ -137,7 +200,8 @@ public final class RunJournal implements Closeable {
         channel.truncate(good);
         channel.position(good);
         channel.force(true);
-        return new RunJournal(file, channel, rows, octets.length - good);
+        int tornLine = start < octets.length ? 1 : 0; // a last line without its newline
+        return new RunJournal(file, channel, calls, rows, octets.length - good, badLines + tornLine);
     }
 
     /** The row of a line, or null when its check fails or it does not parse. */
@@ -181,14 +245,45 @@ public final class RunJournal implements Closeable {
         return droppedOctets;
     }
 
-    /** Appends {@code row} and forces it to the disk before returning. */
+    /** Lines of that tail: the trailing lines that failed their check and a last line without its newline. */
+    public int droppedLines() {
+        return droppedLines;
+    }
+
+    /**
+     * Appends {@code row} and forces it to the disk before returning.
+     *
+     * @throws IOException when the line cannot be written or forced: the journal is truncated back to the
+     *                     start of the line (as far as the file lets it) and every later append throws the
+     *                     same failure, so the journal keeps the whole lines before it and nothing after
+     */
     public synchronized void append(RunRow row) throws IOException {
+        if (failure != null) {
+            throw new IOException(failure.getMessage(), failure);
+        }
         String text = row.toCsv();
         ByteBuffer line = ByteBuffer.wrap((crc(text) + " " + text + "\n").getBytes(StandardCharsets.UTF_8));
-        while (line.hasRemaining()) {
-            channel.write(line);
+        try {
+            calls.write(channel, line);
+            channel.force(false);
+            end = channel.position();
+        } catch (IOException e) {
+            failure = e;
+            cutBack(e);
+            throw e;
         }
-        channel.force(false);
+    }
+
+    /** Truncates the journal to its whole lines after a failed append; a failure of that is kept with {@code e}. */
+    private void cutBack(IOException e) {
+        try {
+            channel.truncate(end);
+            channel.position(end);
+            channel.force(false);
+        } catch (IOException again) {
+            // the part line stays as the journal's last (no line follows it), dropped as torn on opening
+            e.addSuppressed(again);
+        }
     }
 
     /** The journal's file. */

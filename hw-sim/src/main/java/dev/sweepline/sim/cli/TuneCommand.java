@@ -127,8 +127,7 @@ final class TuneCommand implements Callable<Integer> {
             resumed = journal.finished().size();
             if (resumed > 0 || journal.droppedOctets() > 0) {
                 System.out.printf(Locale.ROOT, "resuming: %d of %d runs already in %s%s%n", resumed, identity.runs(),
-                        journal.file(), journal.droppedOctets() > 0 ? " (dropped a torn last line of "
-                        + journal.droppedOctets() + " octets)" : "");
+                        journal.file(), dropped(journal));
             }
             rows = runs(spec, slice, journal, bar);
         }
@@ -159,6 +158,16 @@ final class TuneCommand implements Callable<Integer> {
             }
             throw e;
         }
+    }
+
+    /** The resume note's words on the journal's dropped tail: how many lines and octets, or nothing. */
+    private static String dropped(RunJournal journal) {
+        if (journal.droppedOctets() == 0) {
+            return "";
+        }
+        int lines = journal.droppedLines();
+        return String.format(Locale.ROOT, " (dropped %s, %d octets: cut short or failing their check)",
+                lines == 1 ? "its last line" : "its last " + lines + " lines", journal.droppedOctets());
     }
 
     /** The shard of {@code --shard}: the whole campaign without it, from the environment with {@code auto}. */
@@ -222,7 +231,7 @@ final class TuneCommand implements Callable<Integer> {
     private static void claim(Path out, CampaignIdentity identity) {
         try {
             if (Files.exists(out.resolve(CampaignIdentity.FILE))) {
-                CampaignIdentity there = CampaignIdentity.read(out);
+                CampaignIdentity there = readClaim(out, identity);
                 if (!there.sameCampaign(identity) || !there.shard().equals(identity.shard())) {
                     throw CliException.io("--out " + out + ": holds shard " + there.shard() + " of campaign "
                             + there.campaign() + " (sha256 " + there.shortHash() + "…, code "
@@ -238,12 +247,43 @@ final class TuneCommand implements Callable<Integer> {
         }
     }
 
+    /**
+     * The identity in {@code out}; one that is not whole (a power loss while a bench that wrote it in place was
+     * at it) says what the folder holds and what to do, since only its owner knows whether the journal's runs
+     * are of this campaign.
+     */
+    private static CampaignIdentity readClaim(Path out, CampaignIdentity identity) throws IOException {
+        try {
+            return CampaignIdentity.read(out);
+        } catch (CampaignIdentity.TornException e) {
+            Path journal = out.resolve(RunJournal.FILE);
+            long octets = Files.isRegularFile(journal) ? Files.size(journal) : 0;
+            throw new IOException(e.getMessage() + "; " + (octets > 0 ? "the journal " + journal + " holds "
+                    + octets + " octets of finished runs, which cannot be told to be of this campaign without it: "
+                    + "if the folder holds shard " + identity.shard() + " of " + identity.campaign() + " (this "
+                    + "campaign file and jar), delete " + CampaignIdentity.FILE + " and run the same command again, "
+                    + "it resumes those runs; if not, use another folder" : "no run is journalled: delete "
+                    + CampaignIdentity.FILE + " and run the same command again"), e);
+        }
+    }
+
+    /**
+     * Opens the shard's journal: a damaged or held journal is an input refused (exit 4); a file system
+     * without locks, an output that cannot be written (exit 5).
+     */
     private static RunJournal openJournal(Path out, CampaignSpec spec, Shard slice) {
         try {
             return RunJournal.open(out, spec, slice);
         } catch (IOException e) {
-            throw CliException.input("--out " + out + ": " + CommandLines.located(e));
+            throw journalError(out, e);
         }
+    }
+
+    /** The exit of {@link #openJournal}'s failure {@code e}. */
+    static CliException journalError(Path out, IOException e) {
+        String message = "--out " + out + ": " + CommandLines.located(e);
+        return e instanceof RunJournal.LocksUnsupportedException ? CliException.io(message)
+                : CliException.input(message);
     }
 
     /**

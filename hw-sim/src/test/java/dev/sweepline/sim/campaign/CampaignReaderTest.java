@@ -72,6 +72,10 @@ class CampaignReaderTest {
         // FORMAT.md, linked: grid keys, each once, with as many values each
         "linked: [jumpWindows, bogus]|5|linked|bogus is not a grid key",
         "linked: [jumpWindows, jumpWindows]|5|linked|jumpWindows is named twice",
+        // YAML 1.2 §10.3.2 (core schema): ~ and null are the null value, not a key's name; '' the empty text
+        "linked: [jumpWindows, ~]|5|linked|entry 2 of 2 is null",
+        "linked: [null, jumpWindows]|5|linked|entry 1 of 2 is null",
+        "linked: [jumpWindows, '']|5|linked|entry 2 of 2 is empty, not a grid key",
         "linked: [jumpWindows]|5|linked|a list of two or more grid keys",
         "linked: [jumpWindows, maxBandWindows]|5|linked|as many values each",
         // SweepParameters' fields are Java ints (JLS §4.2.1): 2^32 + 750 would run as 750
